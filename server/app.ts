@@ -1,0 +1,129 @@
+import express, { type Express } from 'express';
+import { randomUUID } from 'node:crypto';
+import path from 'node:path';
+import { existsSync } from 'node:fs';
+import helmet from 'helmet';
+import session from 'express-session';
+import connectSessionSequelize from 'connect-session-sequelize';
+import passport from 'passport';
+import { Strategy as LocalStrategy } from 'passport-local';
+import { pinoHttp } from 'pino-http';
+import { env, isProduction } from './config/env';
+import { sequelize, databaseAnswers } from './config/database';
+import './models';
+import { sessionUser, verifyCredentials, toSessionUser } from './services/auth';
+import { sameOrigin } from './middlewares/same-origin';
+import { errorHandler, notFoundHandler } from './middlewares/error-handler';
+import { authRouter } from './routes/auth';
+import { teamRouter, breweryRouter } from './routes/team';
+import { devMailRouter } from './dev/mail-page';
+
+/** Idle timeout: a session unused this long ends. */
+export const SESSION_IDLE_MS = 8 * 60 * 60 * 1000;
+/** Absolute timeout: a session ends this long after sign-in, however busy. */
+export const SESSION_ABSOLUTE_MS = 24 * 60 * 60 * 1000;
+export const SESSION_COOKIE = isProduction ? '__Host-kettlewright' : 'kettlewright.sid';
+
+const SequelizeStore = connectSessionSequelize(session.Store);
+
+passport.use(
+  new LocalStrategy({ usernameField: 'email', passwordField: 'password' }, (email, password, done) => {
+    verifyCredentials(email, password).then(
+      (user) => done(null, user ? toSessionUser(user) : false),
+      (err) => done(err),
+    );
+  }),
+);
+passport.serializeUser((user, done) => done(null, user.id));
+passport.deserializeUser((id: number, done) => {
+  sessionUser(id).then((user) => done(null, user), done);
+});
+
+export function createApp(options: { serveClient?: boolean } = {}): Express {
+  const app = express();
+  app.disable('x-powered-by');
+  if (isProduction) app.set('trust proxy', 1);
+
+  app.use(
+    pinoHttp({
+      level: env.LOG_LEVEL,
+      genReqId: (_req, res) => {
+        const id = randomUUID();
+        res.setHeader('x-request-id', id);
+        return id;
+      },
+      autoLogging: env.NODE_ENV !== 'test',
+    }),
+  );
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          defaultSrc: ["'self'"],
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          styleSrc: ["'self'", "'unsafe-inline'"],
+          fontSrc: ["'self'", 'data:'],
+          connectSrc: ["'self'"],
+          upgradeInsecureRequests: isProduction ? [] : null,
+        },
+      },
+      strictTransportSecurity: isProduction,
+    }),
+  );
+
+  app.get('/api/health', async (_req, res) => {
+    const database = await databaseAnswers();
+    res.status(database ? 200 : 503).json({ status: database ? 'ok' : 'degraded', database });
+  });
+
+  app.use(express.json({ limit: '1mb' }));
+  app.use(
+    session({
+      name: SESSION_COOKIE,
+      secret: env.SESSION_SECRET,
+      store: new SequelizeStore({
+        db: sequelize,
+        table: 'Session',
+        expiration: SESSION_IDLE_MS,
+        checkExpirationInterval: env.NODE_ENV === 'test' ? 0 : 15 * 60 * 1000,
+        extendDefaultFields: (defaults: object, data: { passport?: { user?: number } }) => ({
+          ...defaults,
+          userId: data.passport?.user ?? null,
+        }),
+      }),
+      resave: false,
+      saveUninitialized: false,
+      rolling: true,
+      proxy: isProduction,
+      cookie: { httpOnly: true, sameSite: 'lax', secure: isProduction, maxAge: SESSION_IDLE_MS, path: '/' },
+    }),
+  );
+  app.use(passport.initialize());
+  app.use(passport.session());
+  app.use((req, _res, next) => {
+    // Absolute timeout: however active, a session ends a day after sign-in.
+    const started = req.session?.signedInAt;
+    if (req.user && started && Date.now() - started > SESSION_ABSOLUTE_MS) {
+      req.logout(() => req.session.destroy(() => next()));
+      return;
+    }
+    next();
+  });
+
+  app.use('/api', sameOrigin);
+  app.use('/api/auth', authRouter);
+  app.use('/api/team', teamRouter);
+  app.use('/api/brewery', breweryRouter);
+  if (env.NODE_ENV === 'development') app.use('/api/dev/mail', devMailRouter);
+  app.use('/api', notFoundHandler);
+
+  if (options.serveClient) {
+    const dist = path.resolve('dist');
+    if (!existsSync(path.join(dist, 'index.html'))) throw new Error('The client is not built: run `npm run build`');
+    app.use(express.static(dist, { index: false, maxAge: '1h' }));
+    app.get('/{*splat}', (_req, res) => res.sendFile(path.join(dist, 'index.html')));
+  }
+
+  app.use(errorHandler);
+  return app;
+}

@@ -1,0 +1,71 @@
+// A local stand-in for a hosted SMTP service, used in development and tests: nodemailer really talks SMTP to it.
+import { SMTPServer } from 'smtp-server';
+import { simpleParser } from 'mailparser';
+import { mkdirSync, writeFileSync, readdirSync, readFileSync, existsSync } from 'node:fs';
+import path from 'node:path';
+
+export interface CaughtMail {
+  id: string;
+  to: string;
+  subject: string;
+  text: string;
+  receivedAt: string;
+}
+
+export interface MailCatcher {
+  port: number;
+  url: string;
+  messages(): CaughtMail[];
+  close(): Promise<void>;
+}
+
+/** Starts the catcher on loopback; messages are kept in memory and, when `dir` is given, as JSON files. */
+export function startMailCatcher(port: number, dir?: string): Promise<MailCatcher> {
+  const received: CaughtMail[] = [];
+  if (dir) mkdirSync(dir, { recursive: true });
+  const server = new SMTPServer({
+    authOptional: true,
+    disabledCommands: ['STARTTLS'],
+    logger: false,
+    onData(stream, _session, callback) {
+      simpleParser(stream).then(
+        (parsed) => {
+          const toField = Array.isArray(parsed.to) ? parsed.to[0] : parsed.to;
+          const mail: CaughtMail = {
+            id: `${Date.now()}-${received.length}`,
+            to: toField?.text ?? '',
+            subject: parsed.subject ?? '',
+            text: parsed.text ?? '',
+            receivedAt: new Date().toISOString(),
+          };
+          received.push(mail);
+          if (dir) writeFileSync(path.join(dir, `${mail.id}.json`), JSON.stringify(mail, null, 2));
+          callback();
+        },
+        (err: Error) => callback(err),
+      );
+    },
+  });
+  return new Promise((resolve, reject) => {
+    server.once('error', reject);
+    server.listen(port, '127.0.0.1', () => {
+      const address = server.server.address();
+      const actualPort = typeof address === 'object' && address ? address.port : port;
+      resolve({
+        port: actualPort,
+        url: `smtp://127.0.0.1:${actualPort}`,
+        messages: () => [...received],
+        close: () => new Promise((r) => server.close(() => r())),
+      });
+    });
+  });
+}
+
+/** Messages a catcher wrote to a folder, newest first (for the development mail page). */
+export function readCaughtMail(dir: string): CaughtMail[] {
+  if (!existsSync(dir)) return [];
+  return readdirSync(dir)
+    .filter((f) => f.endsWith('.json'))
+    .map((f) => JSON.parse(readFileSync(path.join(dir, f), 'utf8')) as CaughtMail)
+    .sort((a, b) => b.receivedAt.localeCompare(a.receivedAt));
+}

@@ -1,0 +1,22 @@
+/** An error the client caused or may see: mapped to a status code and a plain message. */
+export class HttpError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: string,
+    message: string,
+    readonly fields?: Record<string, string>,
+  ) {
+    super(message);
+    this.name = 'HttpError';
+  }
+}
+
+export const badRequest = (message: string, fields?: Record<string, string>) =>
+  new HttpError(400, 'invalid', message, fields);
+export const unauthenticated = (message = 'Sign in to continue') => new HttpError(401, 'unauthenticated', message);
+export const forbidden = (message = 'Your role does not allow this') => new HttpError(403, 'forbidden', message);
+export const notFound = (what = 'This item') => new HttpError(404, 'not_found', `${what} was not found`);
+export const methodNotAllowed = (message: string) => new HttpError(405, 'method_not_allowed', message);
+export const conflict = (message: string) => new HttpError(409, 'conflict', message);
+export const unprocessable = (message: string) => new HttpError(422, 'unprocessable', message);
+export const tooLarge = (message: string) => new HttpError(413, 'too_large', message);

@@ -1,0 +1,26 @@
+import { env } from './config/env';
+import { sequelize } from './config/database';
+import { durabilityProblems } from './config/durability';
+import { createApp } from './app';
+
+/** Starts the API (and the built client) after checking the database keeps committed work through a crash. */
+export async function startServer(): Promise<import('node:http').Server> {
+  const problems = await durabilityProblems(sequelize);
+  if (problems.length) {
+    throw new Error(`Kettlewright refuses to run on a database that could lose signed records:\n  ${problems.join('\n  ')}`);
+  }
+  const app = createApp({ serveClient: true });
+  return new Promise((resolve) => {
+    const server = app.listen(env.PORT, env.HOST, () => resolve(server));
+  });
+}
+
+if (import.meta.url === `file://${process.argv[1]}`) {
+  startServer().then(
+    () => console.log(`Kettlewright is serving http://${env.HOST}:${env.PORT}`),
+    (err) => {
+      console.error(err instanceof Error ? err.message : err);
+      process.exit(1);
+    },
+  );
+}

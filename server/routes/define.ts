@@ -1,0 +1,55 @@
+import { Router, type Request, type Response } from 'express';
+import type { z } from 'zod';
+import { authorise, type Access } from '../middlewares/authorise';
+import { validate } from '../middlewares/validate';
+import type { RequestHandler } from 'express';
+
+type Method = 'get' | 'post' | 'put' | 'patch' | 'delete';
+
+export interface RouteDef {
+  method: Method;
+  /** Path relative to the router's base, Express syntax (e.g. '/:id'). */
+  path: string;
+  access: Access;
+  params?: z.ZodType;
+  query?: z.ZodType;
+  body?: z.ZodType;
+  /** Extra middleware between authorisation and validation (e.g. a rate limiter or an upload parser). */
+  before?: RequestHandler[];
+  handler: (req: Request, res: Response) => unknown;
+}
+
+export interface RouteEntry {
+  method: Method;
+  path: string;
+  access: Access;
+  hasBody: boolean;
+}
+
+/** Every route the API serves: the role matrix and cross-brewery tests are generated from it. */
+export const routeTable: RouteEntry[] = [];
+
+/** Builds a router in the one shape every route takes: authorise → validate → thin handler. */
+export function defineRouter(base: string, defs: RouteDef[]): Router {
+  const router = Router();
+  for (const def of defs) {
+    const chain: RequestHandler[] = [authorise(def.access), ...(def.before ?? [])];
+    if (def.params) chain.push(validate('params', def.params));
+    if (def.query) chain.push(validate('query', def.query));
+    if (def.body) chain.push(validate('body', def.body));
+    router[def.method](def.path, ...chain, async (req: Request, res: Response) => {
+      await def.handler(req, res);
+    });
+    const path = `${base}${def.path === '/' ? '' : def.path}`;
+    if (!routeTable.some((r) => r.method === def.method && r.path === path)) {
+      routeTable.push({ method: def.method, path, access: def.access, hasBody: Boolean(def.body) });
+    }
+  }
+  return router;
+}
+
+/** The signed-in person (routes with access other than 'public' only). */
+export function actor(req: Request): Express.User {
+  if (!req.user) throw new Error('actor() called on a public route');
+  return req.user;
+}

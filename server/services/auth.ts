@@ -1,0 +1,247 @@
+import { Op } from 'sequelize';
+import { sequelize } from '../config/database';
+import { Brewery, Invite, Session, User } from '../models';
+import { badRequest, conflict, notFound, unauthenticated } from '../errors';
+import { assertStrongPassword, checkPassword, hashPassword, standInHash } from './passwords';
+import { hashToken, newToken } from './tokens';
+import { publicLink, sendMail } from './mail';
+import type {
+  AcceptInviteInput,
+  ChangePasswordInput,
+  Me,
+  SignUpInput,
+  BrewerySettingsInput,
+  InviteInput,
+  UpdateMemberInput,
+} from '../../shared/schemas/auth';
+import { ROLE_LABELS } from '../../shared/schemas/roles';
+
+const INVITE_HOURS = 72;
+const RESET_HOURS = 2;
+
+export function toSessionUser(user: User): Express.User {
+  return { id: user.id, breweryId: user.breweryId, role: user.role, email: user.email, displayName: user.displayName };
+}
+
+/** Loads the person behind a session; a disabled or vanished account has no session. */
+export async function sessionUser(id: number): Promise<Express.User | false> {
+  const user = await User.findByPk(id);
+  if (!user || user.disabledAt) return false;
+  return toSessionUser(user);
+}
+
+/** Checks e-mail and password; answers the same way whether the e-mail is unknown or the password wrong. */
+export async function verifyCredentials(email: string, password: string): Promise<User | null> {
+  const user = await User.findOne({ where: { email: email.trim().toLowerCase() } });
+  // Compare against a stand-in hash when the account is unknown so timing does not reveal it.
+  const ok = await checkPassword(password, user?.passwordHash ?? (await standInHash()));
+  if (!user || !ok || user.disabledAt) return null;
+  return user;
+}
+
+export async function me(userId: number): Promise<Me> {
+  const user = await User.findByPk(userId);
+  if (!user) throw unauthenticated();
+  const brewery = await Brewery.findByPk(user.breweryId);
+  if (!brewery) throw unauthenticated();
+  return {
+    id: user.id,
+    email: user.email,
+    displayName: user.displayName,
+    role: user.role,
+    brewery: { id: brewery.id, name: brewery.name, unitSystem: brewery.unitSystem, timeZone: brewery.timeZone },
+  };
+}
+
+/** Sign-up creates a brewery and its head brewer. */
+export async function signUp(input: SignUpInput): Promise<User> {
+  assertStrongPassword(input.password, [input.email, input.displayName, input.breweryName]);
+  if (await User.findOne({ where: { email: input.email } })) {
+    throw badRequest('This e-mail already has an account', { email: 'This e-mail already has an account: sign in instead' });
+  }
+  const passwordHash = await hashPassword(input.password);
+  return sequelize.transaction(async (transaction) => {
+    const brewery = await Brewery.create(
+      { name: input.breweryName, unitSystem: input.unitSystem, timeZone: input.timeZone },
+      { transaction },
+    );
+    return User.create(
+      { breweryId: brewery.id, email: input.email, displayName: input.displayName, role: 'head_brewer', passwordHash, disabledAt: null },
+      { transaction },
+    );
+  });
+}
+
+/** Ends every session of a person except, optionally, the one making the request. */
+export async function endSessions(userId: number, exceptSid?: string): Promise<void> {
+  await Session.destroy({ where: { userId, ...(exceptSid ? { sid: { [Op.ne]: exceptSid } } : {}) } });
+}
+
+export async function changePassword(userId: number, input: ChangePasswordInput, currentSid: string): Promise<void> {
+  const user = await User.findByPk(userId);
+  if (!user) throw unauthenticated();
+  if (!(await checkPassword(input.currentPassword, user.passwordHash))) {
+    throw badRequest('Your current password is not right', { currentPassword: 'This is not your current password' });
+  }
+  assertStrongPassword(input.newPassword, [user.email, user.displayName], 'newPassword');
+  user.passwordHash = await hashPassword(input.newPassword);
+  await user.save();
+  await endSessions(user.id, currentSid);
+}
+
+async function issueLink(
+  purpose: 'invite' | 'reset',
+  fields: { breweryId: number; email: string; role: Invite['role']; createdById: number | null },
+): Promise<string> {
+  const { token, hash } = newToken();
+  const hours = purpose === 'invite' ? INVITE_HOURS : RESET_HOURS;
+  await Invite.create({
+    ...fields,
+    purpose,
+    tokenHash: hash,
+    expiresAt: new Date(Date.now() + hours * 3_600_000),
+    usedAt: null,
+  });
+  return token;
+}
+
+/** The head brewer invites a teammate by e-mail with a role. */
+export async function inviteTeammate(inviter: Express.User, input: InviteInput): Promise<{ id: number; email: string }> {
+  if (await User.findOne({ where: { email: input.email } })) {
+    throw conflict('This e-mail already has a Kettlewright account');
+  }
+  const brewery = await Brewery.findByPk(inviter.breweryId);
+  if (!brewery) throw notFound('Brewery');
+  const token = await issueLink('invite', {
+    breweryId: inviter.breweryId,
+    email: input.email,
+    role: input.role,
+    createdById: inviter.id,
+  });
+  const link = publicLink(`/join/${token}`);
+  await sendMail({
+    to: input.email,
+    subject: `${inviter.displayName} invited you to ${brewery.name} on Kettlewright`,
+    text: [
+      `${inviter.displayName} has invited you to join ${brewery.name} on Kettlewright as ${ROLE_LABELS[input.role].toLowerCase()}.`,
+      '',
+      `Set your password here (the link works for ${INVITE_HOURS} hours, once):`,
+      link,
+      '',
+      'If you did not expect this, ignore this message.',
+    ].join('\n'),
+  });
+  const invite = await Invite.findOne({ where: { tokenHash: hashToken(token) } });
+  return { id: invite!.id, email: input.email };
+}
+
+async function openLink(token: string, purpose: 'invite' | 'reset'): Promise<Invite> {
+  const invite = await Invite.findOne({ where: { tokenHash: hashToken(token), purpose } });
+  if (!invite || invite.usedAt || invite.expiresAt.getTime() < Date.now()) {
+    throw notFound(purpose === 'invite' ? 'This invitation' : 'This reset link');
+  }
+  return invite;
+}
+
+export async function describeInvite(token: string): Promise<{ email: string; breweryName: string; role: string }> {
+  const invite = await openLink(token, 'invite');
+  const brewery = await Brewery.findByPk(invite.breweryId);
+  return { email: invite.email, breweryName: brewery?.name ?? '', role: invite.role ?? '' };
+}
+
+export async function acceptInvite(token: string, input: AcceptInviteInput): Promise<User> {
+  const invite = await openLink(token, 'invite');
+  assertStrongPassword(input.password, [invite.email, input.displayName]);
+  if (await User.findOne({ where: { email: invite.email } })) throw conflict('This e-mail already has an account');
+  const passwordHash = await hashPassword(input.password);
+  return sequelize.transaction(async (transaction) => {
+    const [used] = await Invite.update(
+      { usedAt: new Date() },
+      { where: { id: invite.id, usedAt: null }, transaction },
+    );
+    if (used !== 1) throw notFound('This invitation');
+    return User.create(
+      {
+        breweryId: invite.breweryId,
+        email: invite.email,
+        displayName: input.displayName,
+        role: invite.role ?? 'assistant_brewer',
+        passwordHash,
+        disabledAt: null,
+      },
+      { transaction },
+    );
+  });
+}
+
+/** Sends a reset link if the account exists; the caller answers the same either way. */
+export async function requestPasswordReset(email: string): Promise<User | null> {
+  const user = await User.findOne({ where: { email } });
+  if (!user || user.disabledAt) return null;
+  const token = await issueLink('reset', { breweryId: user.breweryId, email, role: null, createdById: null });
+  await sendMail({
+    to: email,
+    subject: 'Reset your Kettlewright password',
+    text: [
+      'Someone asked to reset the password of your Kettlewright account.',
+      '',
+      `Choose a new password here (the link works for ${RESET_HOURS} hours, once):`,
+      publicLink(`/reset/${token}`),
+      '',
+      'If it was not you, ignore this message: your password stays as it is.',
+    ].join('\n'),
+  });
+  return user;
+}
+
+export async function resetPassword(token: string, password: string): Promise<User> {
+  const link = await openLink(token, 'reset');
+  const user = await User.findOne({ where: { email: link.email } });
+  if (!user) throw notFound('This reset link');
+  assertStrongPassword(password, [user.email, user.displayName]);
+  user.passwordHash = await hashPassword(password);
+  await sequelize.transaction(async (transaction) => {
+    const [used] = await Invite.update({ usedAt: new Date() }, { where: { id: link.id, usedAt: null }, transaction });
+    if (used !== 1) throw notFound('This reset link');
+    await user.save({ transaction });
+  });
+  await endSessions(user.id);
+  return user;
+}
+
+export async function teamMembers(breweryId: number) {
+  const [users, invites] = await Promise.all([
+    User.findAll({ where: { breweryId }, order: [['displayName', 'ASC']] }),
+    Invite.findAll({
+      where: { breweryId, purpose: 'invite', usedAt: null, expiresAt: { [Op.gt]: new Date() } },
+      order: [['createdAt', 'DESC']],
+    }),
+  ]);
+  return {
+    members: users.map((u) => ({
+      id: u.id,
+      email: u.email,
+      displayName: u.displayName,
+      role: u.role,
+      disabled: Boolean(u.disabledAt),
+    })),
+    pendingInvites: invites.map((i) => ({ id: i.id, email: i.email, role: i.role, expiresAt: i.expiresAt })),
+  };
+}
+
+export async function updateMember(head: Express.User, userId: number, input: UpdateMemberInput): Promise<User> {
+  const user = await User.findOne({ where: { id: userId, breweryId: head.breweryId } });
+  if (!user) throw notFound('Teammate');
+  if (user.id === head.id) throw conflict('You cannot change your own role or access; ask another head brewer');
+  if (input.role) user.role = input.role;
+  if (input.disabled !== undefined) user.disabledAt = input.disabled ? new Date() : null;
+  await user.save();
+  if (input.disabled || input.role) await endSessions(user.id);
+  return user;
+}
+
+export async function updateBrewery(breweryId: number, input: BrewerySettingsInput): Promise<Brewery> {
+  const brewery = await Brewery.findByPk(breweryId);
+  if (!brewery) throw notFound('Brewery');
+  return brewery.update(input);
+}

@@ -1,0 +1,33 @@
+import bcrypt from 'bcryptjs';
+import { ZxcvbnFactory } from '@zxcvbn-ts/core';
+import * as common from '@zxcvbn-ts/language-common';
+import * as english from '@zxcvbn-ts/language-en';
+import { badRequest } from '../errors';
+
+const BCRYPT_COST = 12;
+
+const estimator = new ZxcvbnFactory({
+  dictionary: { ...common.dictionary, ...english.dictionary },
+  graphs: common.adjacencyGraphs,
+  translations: english.translations,
+});
+
+/**
+ * Refuses common and easily guessed passwords (score below 3 of 4), with the estimator's reason.
+ * Length limits come from the shared schema; there are no composition rules.
+ */
+export function assertStrongPassword(password: string, context: string[] = [], field = 'password'): void {
+  const result = estimator.check(password, context);
+  if (result.score < 3) {
+    const reason = result.feedback.warning || 'This password is easy to guess';
+    const hint = result.feedback.suggestions[0] ?? 'Try a longer phrase of unrelated words.';
+    throw badRequest('Choose a stronger password', { [field]: `${reason}. ${hint}` });
+  }
+}
+
+export const hashPassword = (password: string) => bcrypt.hash(password, BCRYPT_COST);
+export const checkPassword = (password: string, hash: string) => bcrypt.compare(password, hash);
+
+let standIn: Promise<string> | undefined;
+/** A hash of nothing in particular, compared against when an account is unknown. */
+export const standInHash = () => (standIn ??= hashPassword('kettlewright stand-in'));
