@@ -1,0 +1,148 @@
+/**
+ * Adjuncts and spices: dose rules per volume, amounts for a batch, scaling,
+ * practical unit equivalents, and rounding to what a brewer can weigh or
+ * measure. Per-volume doses refer to the batch volume into the fermenter.
+ */
+import { BrewingInputError, requireNonNegative, requirePositive } from './errors';
+import type { AdjunctAddition, Amount, AmountUnit, DoseBasis, DoseRule, MeasuredAmount, MeasuringSystem } from './types';
+import { G_PER_OZ, KG_PER_LB, L_PER_HL, L_PER_US_GAL, ML_PER_US_TSP, mlToTsp } from './units';
+
+interface BasisInfo {
+  unit: AmountUnit;
+  /** Absolute amount per unit of dose per litre of beer. */
+  perLitre: number;
+  label: string;
+}
+
+/** Each per-volume basis as (amount unit, amount per dose unit per litre). */
+const BASES: Readonly<Record<Exclude<DoseBasis, 'fixedPerBatch'>, BasisInfo>> = {
+  lbPerUsGal: { unit: 'kg', perLitre: KG_PER_LB / L_PER_US_GAL, label: 'lb per US gal' },
+  ozPerUsGal: { unit: 'kg', perLitre: G_PER_OZ / 1000 / L_PER_US_GAL, label: 'oz per US gal' },
+  kgPerHl: { unit: 'kg', perLitre: 1 / L_PER_HL, label: 'kg per hL' },
+  gPerHl: { unit: 'kg', perLitre: 1 / 1000 / L_PER_HL, label: 'g per hL' },
+  gPerL: { unit: 'kg', perLitre: 1 / 1000, label: 'g per L' },
+  tspPer5UsGal: { unit: 'mL', perLitre: ML_PER_US_TSP / (5 * L_PER_US_GAL), label: 'tsp per 5 US gal' },
+  mlPerHl: { unit: 'mL', perLitre: 1 / L_PER_HL, label: 'mL per hL' },
+};
+
+/** Human label of a dose basis, for forms. */
+export function doseBasisLabel(basis: DoseBasis): string {
+  return basis === 'fixedPerBatch' ? 'per batch' : BASES[basis].label;
+}
+
+/** Throws unless the rule is usable: known basis, 0 ≤ low ≤ high. */
+export function validateDoseRule(rule: DoseRule, field = 'rule'): void {
+  if (rule.basis !== 'fixedPerBatch' && !(rule.basis in BASES)) {
+    throw new BrewingInputError(`${field}.basis`, `Unknown dose basis "${String(rule.basis)}".`);
+  }
+  requireNonNegative(rule.low, `${field}.low`, 'Low dose');
+  requireNonNegative(rule.high, `${field}.high`, 'High dose');
+  if (rule.high < rule.low) throw new BrewingInputError(`${field}.high`, 'The high dose must not be below the low dose.');
+}
+
+/**
+ * Absolute amount for a dose level in a batch: level × (amount per litre) ×
+ * litres; `fixedPerBatch` is the level itself whatever the volume.
+ * @param level dose in the rule's basis
+ * @param volumeL batch volume into the fermenter, L
+ */
+export function doseAmount(rule: DoseRule, level: number, volumeL: number, field = 'level'): Amount {
+  validateDoseRule(rule);
+  requireNonNegative(level, field, 'Dose');
+  requirePositive(volumeL, 'volumeL', 'Batch volume');
+  if (rule.basis === 'fixedPerBatch') return { value: level, unit: rule.fixedUnit ?? 'each' };
+  const basis = BASES[rule.basis];
+  return { value: level * basis.perLitre * volumeL, unit: basis.unit };
+}
+
+/** The rule's low and high doses as absolute amounts for a batch volume. */
+export function doseRange(rule: DoseRule, volumeL: number): { low: Amount; high: Amount } {
+  return { low: doseAmount(rule, rule.low, volumeL, 'rule.low'), high: doseAmount(rule, rule.high, volumeL, 'rule.high') };
+}
+
+/** Inverse of {@link doseAmount}: the dose level that an absolute amount represents in a batch volume. */
+export function doseLevelFromAmount(rule: DoseRule, amount: Amount, volumeL: number): number {
+  validateDoseRule(rule);
+  requireNonNegative(amount.value, 'amount.value', 'Amount');
+  requirePositive(volumeL, 'volumeL', 'Batch volume');
+  const unit = rule.basis === 'fixedPerBatch' ? (rule.fixedUnit ?? 'each') : BASES[rule.basis].unit;
+  if (amount.unit !== unit) throw new BrewingInputError('amount.unit', `This dose is measured in ${unit}, not ${amount.unit}.`);
+  return rule.basis === 'fixedPerBatch' ? amount.value : amount.value / (BASES[rule.basis].perLitre * volumeL);
+}
+
+/** Amount of an adjunct for one volume and for another: proportional to volume, except `fixedPerBatch`. */
+export function scaleDose(rule: DoseRule, level: number, fromVolumeL: number, toVolumeL: number): { from: Amount; to: Amount } {
+  return { from: doseAmount(rule, level, fromVolumeL), to: doseAmount(rule, level, toVolumeL) };
+}
+
+/** True when the chosen level lies within the rule's low–high range. */
+export function isWithinRange(adjunct: AdjunctAddition): boolean {
+  return adjunct.level >= adjunct.rule.low && adjunct.level <= adjunct.rule.high;
+}
+
+/** A practical equivalence between two household or trade measures. */
+export interface PracticalEquivalent {
+  from: string;
+  to: string;
+  /** Amount of `to` per one `from`. */
+  factor: number;
+  source: string;
+}
+
+/** Practical equivalents. The spice gram weights are approximate and vary with grind and packing. */
+export const PRACTICAL_EQUIVALENTS: readonly PracticalEquivalent[] = [
+  { from: 'tbsp', to: 'tsp', factor: 3, source: 'NIST Handbook 44 Appendix C (1 tbsp = 3 tsp)' },
+  { from: 'cinnamon stick', to: 'tsp ground cinnamon', factor: 0.5, source: 'common practice, no source (a 3 in / 7.5 cm stick)' },
+  { from: 'vanilla bean', to: 'tsp vanilla extract', factor: 3, source: 'common practice, no source' },
+  { from: 'whole nutmeg', to: 'tsp ground nutmeg', factor: 2, source: 'common practice, no source' },
+  { from: 'tsp ground cinnamon', to: 'g', factor: 2.6, source: 'household food-composition measures, from memory' },
+  { from: 'tsp ground nutmeg', to: 'g', factor: 2.2, source: 'household food-composition measures, from memory' },
+  { from: 'tsp ground ginger', to: 'g', factor: 1.8, source: 'household food-composition measures, from memory' },
+  { from: 'tsp ground cloves', to: 'g', factor: 2.1, source: 'household food-composition measures, from memory' },
+  { from: 'tsp ground coriander', to: 'g', factor: 1.8, source: 'household food-composition measures, from memory' },
+];
+
+/** Converts between two measures listed in {@link PRACTICAL_EQUIVALENTS} (either direction). */
+export function convertPractical(value: number, from: string, to: string): number {
+  requireNonNegative(value, 'value', 'Amount');
+  for (const eq of PRACTICAL_EQUIVALENTS) {
+    if (eq.from === from && eq.to === to) return value * eq.factor;
+    if (eq.from === to && eq.to === from) return value / eq.factor;
+  }
+  throw new BrewingInputError('to', `No practical equivalent between "${from}" and "${to}".`);
+}
+
+/**
+ * Rounds to `step`, never to zero for a non-zero amount (a brewer who wants a
+ * pinch should see one step, not nothing).
+ */
+function roundTo(value: number, step: number): number {
+  if (value === 0) return 0;
+  return Math.max(step, Math.round(value / step) * step);
+}
+
+/**
+ * Rounds an amount to something a brewer can weigh or measure, in display
+ * units. Steps (our choice, matching common kitchen and floor scales):
+ * metric mass: < 50 g → 1 g, < 1 kg → 5 g, < 25 kg → 0.05 kg, else 0.5 kg;
+ * US mass: < 1 lb → 0.25 oz, else 0.25 lb;
+ * volume: US → 0.25 tsp; metric → 1.25 mL (a quarter 5 mL spoon) below 20 mL, else 5 mL;
+ * counts (sticks, beans): 0.5.
+ */
+export function roundForMeasuring(amount: Amount, system: MeasuringSystem): MeasuredAmount {
+  const value = requireNonNegative(amount.value, 'amount.value', 'Amount');
+  if (amount.unit === 'each') return { value: roundTo(value, 0.5), unit: 'each' };
+  if (amount.unit === 'mL') {
+    if (system === 'us') return { value: roundTo(mlToTsp(value), 0.25), unit: 'tsp' };
+    return { value: roundTo(value, value < 20 ? 1.25 : 5), unit: 'mL' };
+  }
+  if (system === 'us') {
+    const lb = value / KG_PER_LB;
+    if (lb < 1) return { value: roundTo((value * 1000) / G_PER_OZ, 0.25), unit: 'oz' };
+    return { value: roundTo(lb, 0.25), unit: 'lb' };
+  }
+  const g = value * 1000;
+  if (g < 50) return { value: roundTo(g, 1), unit: 'g' };
+  if (g < 1000) return { value: roundTo(g, 5), unit: 'g' };
+  return { value: Number(roundTo(value, value < 25 ? 0.05 : 0.5).toFixed(3)), unit: 'kg' };
+}
