@@ -1,0 +1,70 @@
+import { describe, expect, it } from 'vitest';
+import { convertPractical, doseAmount, doseLevelFromAmount, doseRange, roundForMeasuring, scaleDose } from './adjuncts';
+import { expectInputError } from './test-helpers';
+import { kgToLb, mlToTsp, usBblToL, usGalToL } from './units';
+
+describe('dose rules', () => {
+  it('3–5 lb of fruit per US gal scaled to a 3.5 bbl batch → 325.5–542.5 lb (common practice, no source)', () => {
+    const { low, high } = doseRange({ basis: 'lbPerUsGal', low: 3, high: 5 }, usBblToL(3.5));
+    expect(low.unit).toBe('kg');
+    expect(kgToLb(low.value)).toBeCloseTo(325.5, 6);
+    expect(kgToLb(high.value)).toBeCloseTo(542.5, 6);
+  });
+
+  it('3–5 tsp cinnamon per 5 gal scales linearly: 10 gal → 6–10 tsp (common practice, no source)', () => {
+    const { low, high } = doseRange({ basis: 'tspPer5UsGal', low: 3, high: 5 }, usGalToL(10));
+    expect(low.unit).toBe('mL');
+    expect(mlToTsp(low.value)).toBeCloseTo(6, 10);
+    expect(mlToTsp(high.value)).toBeCloseTo(10, 10);
+  });
+
+  it('kg per hL and g per L', () => {
+    expect(doseAmount({ basis: 'kgPerHl', low: 0, high: 2 }, 1, 1000).value).toBeCloseTo(10, 10);
+    expect(doseAmount({ basis: 'gPerL', low: 0, high: 5 }, 2, 50).value).toBeCloseTo(0.1, 10);
+    expect(doseAmount({ basis: 'gPerHl', low: 0, high: 50 }, 30, 200).value).toBeCloseTo(0.06, 10);
+  });
+
+  it('fixed per batch does not scale', () => {
+    const rule = { basis: 'fixedPerBatch' as const, low: 1, high: 3, fixedUnit: 'each' as const };
+    const { from, to } = scaleDose(rule, 2, 20, 2000);
+    expect(from).toEqual({ value: 2, unit: 'each' });
+    expect(to).toEqual({ value: 2, unit: 'each' });
+  });
+
+  it('scales per-volume doses in proportion and inverts', () => {
+    const rule = { basis: 'ozPerUsGal' as const, low: 1, high: 4 };
+    const { from, to } = scaleDose(rule, 2, 20, 80);
+    expect(to.value / from.value).toBeCloseTo(4, 12);
+    expect(doseLevelFromAmount(rule, to, 80)).toBeCloseTo(2, 12);
+  });
+
+  it('rejects an upside-down range and negative doses', () => {
+    expectInputError(() => doseAmount({ basis: 'gPerL', low: 5, high: 1 }, 2, 10), 'rule.high');
+    expectInputError(() => doseAmount({ basis: 'gPerL', low: 0, high: 1 }, -2, 10), 'level');
+    expectInputError(() => doseAmount({ basis: 'gPerL', low: 0, high: 1 }, 1, 0), 'volumeL');
+  });
+});
+
+describe('practical conversions and rounding', () => {
+  it('2 cinnamon sticks ≈ 1 tsp ground (common practice, no source), both ways', () => {
+    expect(convertPractical(2, 'cinnamon stick', 'tsp ground cinnamon')).toBeCloseTo(1, 12);
+    expect(convertPractical(1, 'tsp ground cinnamon', 'cinnamon stick')).toBeCloseTo(2, 12);
+    expect(convertPractical(2, 'tbsp', 'tsp')).toBe(6);
+    expectInputError(() => convertPractical(1, 'tbsp', 'cinnamon stick'), 'to');
+  });
+
+  it('rounds to what a brewer can weigh or measure (steps documented in roundForMeasuring)', () => {
+    expect(roundForMeasuring({ value: 0.123, unit: 'kg' }, 'metric')).toEqual({ value: 125, unit: 'g' });
+    expect(roundForMeasuring({ value: 0.0123, unit: 'kg' }, 'metric')).toEqual({ value: 12, unit: 'g' });
+    expect(roundForMeasuring({ value: 147.64, unit: 'kg' }, 'metric')).toEqual({ value: 147.5, unit: 'kg' });
+    expect(roundForMeasuring({ value: 1.2, unit: 'kg' }, 'us')).toEqual({ value: 2.75, unit: 'lb' });
+    expect(roundForMeasuring({ value: 0.05, unit: 'kg' }, 'us')).toEqual({ value: 1.75, unit: 'oz' });
+    expect(roundForMeasuring({ value: 10.5, unit: 'mL' }, 'us')).toEqual({ value: 2.25, unit: 'tsp' });
+    expect(roundForMeasuring({ value: 1.3, unit: 'each' }, 'us')).toEqual({ value: 1.5, unit: 'each' });
+  });
+
+  it('never rounds a non-zero amount to nothing', () => {
+    expect(roundForMeasuring({ value: 0.1, unit: 'mL' }, 'us')).toEqual({ value: 0.25, unit: 'tsp' });
+    expect(roundForMeasuring({ value: 0, unit: 'kg' }, 'metric')).toEqual({ value: 0, unit: 'g' });
+  });
+});

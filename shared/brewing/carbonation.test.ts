@@ -1,0 +1,62 @@
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { co2VolumesAtPressure, CO2_YIELD_G_PER_G, headPressureKpa, headPressurePsi, primingSugar, residualCo2Volumes } from './carbonation';
+import { expectInputError } from './test-helpers';
+import { cToF, fToC, gToOz, kpaToPsi, usGalToL } from './units';
+
+describe('head pressure', () => {
+  it('matches the brewing carbonation table (table values from memory, ±1 psi)', () => {
+    // Carbonation table, from memory: 38 °F & 2.5 vol ≈ 11 psi; 40 °F & 2.5 vol ≈ 12 psi; 34 °F & 2.4 vol ≈ 8 psi.
+    expect(Math.abs(headPressurePsi(38, 2.5) - 11)).toBeLessThan(1);
+    expect(Math.abs(headPressurePsi(40, 2.5) - 12)).toBeLessThan(1);
+    expect(Math.abs(headPressurePsi(34, 2.4) - 8)).toBeLessThan(1);
+  });
+
+  it("agrees within 10 % with Henry's law for CO2 (Sander's compilation: kH = 0.034 mol/(L·atm) at 298.15 K, d ln kH / d(1/T) = 2400 K)", () => {
+    const tempC = 3;
+    const volumes = 2.5;
+    const kH = 0.034 * Math.exp(2400 * (1 / (tempC + 273.15) - 1 / 298.15));
+    const absoluteAtm = volumes / (kH * 22.414);
+    const henryPsiGauge = kpaToPsi((absoluteAtm - 1) * 101.325);
+    expect(Math.abs(headPressurePsi(cToF(tempC), volumes) - henryPsiGauge) / henryPsiGauge).toBeLessThan(0.1);
+  });
+
+  it('inverts: pressure → volumes → pressure', () => {
+    fc.assert(
+      fc.property(fc.double({ min: 0, max: 10, noNaN: true }), fc.double({ min: 2.0, max: 3.2, noNaN: true }), (tempC, volumes) => {
+        expect(co2VolumesAtPressure(tempC, headPressureKpa(tempC, volumes))).toBeCloseTo(volumes, 8);
+      }),
+    );
+  });
+
+  it('refuses a level the beer holds with no head pressure, and out-of-range input', () => {
+    expectInputError(() => headPressurePsi(38, 1.0), 'volumes');
+    expectInputError(() => headPressureKpa(60, 2.5), 'tempC');
+    expectInputError(() => headPressureKpa(4, -1), 'volumes');
+  });
+});
+
+describe('priming', () => {
+  it('residual CO2 after fermentation (fit, from memory: 68 °F → ≈ 0.86 vol)', () => {
+    expect(residualCo2Volumes(fToC(68))).toBeCloseTo(0.86, 2);
+  });
+
+  it('CO2 yields follow fermentation stoichiometry (glucose → 2 CO2: 88.02/180.16 g/g)', () => {
+    expect(CO2_YIELD_G_PER_G.dextrose).toBeCloseTo(0.4886, 4);
+    expect(CO2_YIELD_G_PER_G.sucrose).toBeCloseTo(0.5143, 4);
+  });
+
+  it('5 gal to 2.5 vol after 68 °F needs about 4–5 oz corn sugar (common practice, no source)', () => {
+    const r = primingSugar(usGalToL(5), 2.5, fToC(68), 'dextroseMonohydrate');
+    expect(gToOz(r.grams)).toBeGreaterThan(4);
+    expect(gToOz(r.grams)).toBeLessThan(5);
+    expect(primingSugar(usGalToL(5), 2.5, fToC(68), 'sucrose').grams).toBeLessThan(r.grams);
+  });
+
+  it('needs no sugar when the beer already holds the target', () => {
+    const r = primingSugar(20, 1.2, 2, 'sucrose');
+    expect(r.grams).toBe(0);
+    expect(r.co2ToAddVolumes).toBeLessThan(0);
+    expectInputError(() => primingSugar(0, 2.5, 20, 'sucrose'), 'beerVolumeL');
+  });
+});
