@@ -63,7 +63,14 @@ function hopLabel(hop: { name: string; use: string; minutes: number }): string {
   return hop.use === 'dryHop' ? `hop: ${hop.name} dry hop` : `hop: ${hop.name} ${hop.use} ${hop.minutes} min`;
 }
 
-function listChanges(before: ComputedRecipe, after: ComputedRecipe, ratio: number, source: EquipmentProfile, target: EquipmentProfile): ScaleChange[] {
+function listChanges(
+  recipe: RecipeInput,
+  before: ComputedRecipe,
+  after: ComputedRecipe,
+  ratio: number,
+  source: EquipmentProfile,
+  target: EquipmentProfile,
+): ScaleChange[] {
   const changes: ScaleChange[] = [];
   const effNote = `re-solved for OG ${after.og.toFixed(3)} at ${(target.brewhouseEfficiency * 100).toFixed(0)} % efficiency (was ${(source.brewhouseEfficiency * 100).toFixed(0)} %)`;
   before.fermentables.forEach((f, i) => {
@@ -93,7 +100,7 @@ function listChanges(before: ComputedRecipe, after: ComputedRecipe, ratio: numbe
   }
   before.adjuncts.forEach((a, i) => {
     const b = after.adjuncts[i]!;
-    const fixed = a.amount.unit === 'each' || b.amount.value === a.amount.value;
+    const fixed = recipe.adjuncts[i]!.rule.basis === 'fixedPerBatch';
     changes.push(change(`adjunct: ${a.name}`, a.amount.unit, a.amount.value, b.amount.value, a.amount.value * ratio, fixed ? 'fixed per batch' : 'dose per volume of beer'));
   });
   changes.push(change('strike temperature', '°C', before.strikeTempC, after.strikeTempC, before.strikeTempC, `mash thickness ${after.thicknessLPerKg.toFixed(2)} L/kg (was ${before.thicknessLPerKg.toFixed(2)})`));
@@ -131,7 +138,7 @@ export function scaleRecipe(recipe: RecipeInput, source: EquipmentProfile, targe
   const water = scaleWater(recipe.water, before, wort.mashWaterL, wort.volumes.spargeL);
   const scaled: RecipeInput = { ...recipe, grainBill, hops, ...(water ? { water } : {}) };
   const after = computeRecipe(scaled, target);
-  const changes = listChanges(before, after, volumeRatio, source, target);
+  const changes = listChanges(recipe, before, after, volumeRatio, source, target);
   return {
     recipe: scaled,
     volumeRatio,
