@@ -62,7 +62,8 @@ export function co2VolumesAtPressure(tempC: number, pressureKpaGauge: number): n
 }
 
 /**
- * CO2 left in beer after fermentation at its warmest temperature, volumes:
+ * CO2 left in beer after fermentation, volumes, from the warmest temperature
+ * it reached (°C; converted to °F for the fit):
  * V = 3.0378 − 0.050062·T + 0.00026555·T², T in °F (regression of CO2
  * solubility at 1 atm widely used for priming calculations; from memory).
  */
