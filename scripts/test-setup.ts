@@ -6,7 +6,8 @@ import { sessionSecret } from './lib/session-secret';
 import { migrate } from '../server/migrations/umzug';
 
 async function main() {
-  const instance = await ensureInstance({ ...TEST_DATA, fresh: true });
+  // KW_KEEP_TEST_DB=1 applies new migrations without dropping the test database (for working on one area).
+  const instance = await ensureInstance({ ...TEST_DATA, fresh: process.env.KW_KEEP_TEST_DB !== '1' });
   await migrate(instance.ownerUrl, instance.credentials.appUser);
   const vars: Record<string, string> = {
     NODE_ENV: 'test',

@@ -13,9 +13,9 @@ import { sequelize, databaseAnswers } from './config/database';
 import './models';
 import { sessionUser, verifyCredentials, toSessionUser } from './services/auth';
 import { sameOrigin } from './middlewares/same-origin';
+import { useSignInLimiter } from './middlewares/rate-limit';
 import { errorHandler, notFoundHandler } from './middlewares/error-handler';
-import { authRouter } from './routes/auth';
-import { teamRouter, breweryRouter } from './routes/team';
+import { apiRouters } from './routes';
 import { devMailRouter } from './dev/mail-page';
 
 /** Idle timeout: a session unused this long ends. */
@@ -43,6 +43,7 @@ export function createApp(options: { serveClient?: boolean } = {}): Express {
   const app = express();
   app.disable('x-powered-by');
   if (isProduction) app.set('trust proxy', 1);
+  useSignInLimiter(app);
 
   app.use(
     pinoHttp({
@@ -111,9 +112,7 @@ export function createApp(options: { serveClient?: boolean } = {}): Express {
   });
 
   app.use('/api', sameOrigin);
-  app.use('/api/auth', authRouter);
-  app.use('/api/team', teamRouter);
-  app.use('/api/brewery', breweryRouter);
+  for (const [base, router] of apiRouters) app.use(base, router);
   if (env.NODE_ENV === 'development') app.use('/api/dev/mail', devMailRouter);
   app.use('/api', notFoundHandler);
 

@@ -1,6 +1,7 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { UniqueConstraintError, ValidationError, ForeignKeyConstraintError, DatabaseError, ConnectionError } from 'sequelize';
 import { HttpError, notFound } from '../errors';
+import { BrewingInputError } from '../../shared/brewing';
 
 interface BodyParserError {
   type?: string;
@@ -17,6 +18,12 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
 
   if (err instanceof HttpError) {
     ({ status, code, message, fields } = err);
+  } else if (err instanceof BrewingInputError) {
+    // Well-formed input that brewing cannot produce (e.g. percentages that do not add up).
+    status = 422;
+    code = 'impossible';
+    message = err.message;
+    fields = { [err.field]: err.message };
   } else if (parserError.type === 'entity.parse.failed') {
     status = 400;
     code = 'invalid_json';

@@ -1,0 +1,18 @@
+import type { Role } from '../../shared/schemas/roles';
+
+export interface NavItem {
+  to: string;
+  label: string;
+  roles: readonly Role[];
+}
+
+const ALL: readonly Role[] = ['head_brewer', 'assistant_brewer', 'taproom_manager'];
+
+/** The menu, by role: a person sees only what their role may open. */
+export const NAV_ITEMS: NavItem[] = [
+  { to: '/', label: 'Home', roles: ALL },
+  { to: '/team', label: 'Team', roles: ['head_brewer'] },
+  { to: '/settings', label: 'Settings', roles: ALL },
+];
+
+export const navFor = (role: Role) => NAV_ITEMS.filter((item) => item.roles.includes(role));

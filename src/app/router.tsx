@@ -1,0 +1,22 @@
+import { createBrowserRouter } from 'react-router-dom';
+import { AppLayout } from './routes/app-layout';
+import { NotFoundPage } from './routes/not-found';
+
+// Every page loads on demand, so the sign-in and taproom screens never download the recipe editor.
+export const router = createBrowserRouter([
+  { path: '/sign-in', lazy: () => import('../features/auth/components/sign-in-page').then((m) => ({ Component: m.SignInPage })) },
+  { path: '/sign-up', lazy: () => import('../features/auth/components/sign-up-page').then((m) => ({ Component: m.SignUpPage })) },
+  { path: '/join/:token', lazy: () => import('../features/auth/components/accept-invite-page').then((m) => ({ Component: m.AcceptInvitePage })) },
+  { path: '/forgot-password', lazy: () => import('../features/auth/components/reset-pages').then((m) => ({ Component: m.ForgotPasswordPage })) },
+  { path: '/reset/:token', lazy: () => import('../features/auth/components/reset-pages').then((m) => ({ Component: m.ResetPasswordPage })) },
+  {
+    path: '/',
+    Component: AppLayout,
+    children: [
+      { index: true, lazy: () => import('../features/home/components/home-page').then((m) => ({ Component: m.HomePage })) },
+      { path: 'team', lazy: () => import('../features/team/components/team-page').then((m) => ({ Component: m.TeamPage })) },
+      { path: 'settings', lazy: () => import('../features/settings/components/settings-page').then((m) => ({ Component: m.SettingsPage })) },
+    ],
+  },
+  { path: '*', Component: NotFoundPage },
+]);

@@ -1,0 +1,70 @@
+import { Navigate, NavLink, Outlet, useLocation, useNavigate } from 'react-router-dom';
+import { useMe } from '../../features/auth/api/me';
+import { useSignOut } from '../../features/auth/api/session';
+import { ROLE_LABELS } from '../../../shared/schemas/roles';
+import { Button, ErrorState, Loading, cx } from '../../components/ui';
+import { CurrentUserContext } from '../current-user';
+import { navFor } from '../navigation';
+
+/** The signed-in shell: the brewery's name, the menu for the person's role, and the page. */
+export function AppLayout() {
+  const me = useMe();
+  const location = useLocation();
+  const navigate = useNavigate();
+  const signOut = useSignOut();
+
+  if (me.isPending) return <Loading label="Opening Kettlewright" />;
+  if (me.isError) return <div className="p-6"><ErrorState error={me.error} onRetry={() => me.refetch()} /></div>;
+  if (!me.data) return <Navigate to="/sign-in" replace state={{ from: location.pathname }} />;
+  const user = me.data;
+
+  return (
+    <CurrentUserContext.Provider value={user}>
+      <div className="min-h-screen">
+        <header className="no-print sticky top-0 z-40 bg-cellar-800 text-white shadow">
+          <div className="mx-auto flex max-w-7xl flex-wrap items-center gap-x-4 gap-y-2 px-4 py-2">
+            <NavLink to="/" className="flex min-h-touch items-center gap-2 font-bold">
+              <img src="/kettle.svg" alt="" className="h-8 w-8" />
+              <span className="text-lg">{user.brewery.name}</span>
+            </NavLink>
+            <nav aria-label="Main" className="flex flex-1 flex-wrap gap-1">
+              {navFor(user.role).map((item) => (
+                <NavLink
+                  key={item.to}
+                  to={item.to}
+                  end={item.to === '/'}
+                  className={({ isActive }) =>
+                    cx(
+                      'flex min-h-touch items-center rounded-lg px-3 font-semibold',
+                      isActive ? 'bg-brass-400 text-cellar-900' : 'text-cellar-100 hover:bg-cellar-700',
+                    )
+                  }
+                >
+                  {item.label}
+                </NavLink>
+              ))}
+            </nav>
+            <div className="flex items-center gap-3">
+              <span className="text-sm text-cellar-100">
+                {user.displayName} · {ROLE_LABELS[user.role]}
+              </span>
+              <Button
+                variant="onDark"
+                busy={signOut.isPending}
+                onClick={async () => {
+                  await signOut.mutateAsync();
+                  navigate('/sign-in', { replace: true });
+                }}
+              >
+                Sign out
+              </Button>
+            </div>
+          </div>
+        </header>
+        <main className="mx-auto max-w-7xl px-4 py-6">
+          <Outlet />
+        </main>
+      </div>
+    </CurrentUserContext.Provider>
+  );
+}

@@ -1,0 +1,8 @@
+export { Button } from './button';
+export { TextField, SelectField, TextAreaField } from './field';
+export { Card, PageHeader, Stat } from './card';
+export { Loading, ErrorState, EmptyState, Caution } from './states';
+export { Table, Th, Td } from './table';
+export { Dialog } from './dialog';
+export { ToastProvider, useToast } from './toast';
+export { cx } from './cx';

@@ -1,0 +1,20 @@
+import { queryOptions, useMutation, useQuery } from '@tanstack/react-query';
+import { api } from '../../../lib/api-client';
+import type { ResetRequestInput, ResetPasswordInput, ChangePasswordInput } from '../../../../shared/schemas/auth';
+import { authKeys } from './me';
+
+export const inviteQuery = (token: string) =>
+  queryOptions({
+    queryKey: [...authKeys.all, 'invite', token] as const,
+    queryFn: () => api.get<{ email: string; breweryName: string; role: string }>(`/api/auth/invites/${token}`),
+  });
+export const useInvite = (token: string) => useQuery(inviteQuery(token));
+
+export const useRequestReset = () =>
+  useMutation({ mutationFn: (input: ResetRequestInput) => api.post<{ message: string }>('/api/auth/reset-request', input) });
+
+export const useResetPassword = (token: string) =>
+  useMutation({ mutationFn: (input: ResetPasswordInput) => api.post<void>(`/api/auth/reset/${token}`, input) });
+
+export const useChangePassword = () =>
+  useMutation({ mutationFn: (input: ChangePasswordInput) => api.post<void>('/api/auth/password', input) });

@@ -1,0 +1,93 @@
+import { useState } from 'react';
+import { useForm } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { Link, useParams } from 'react-router-dom';
+import {
+  resetPasswordSchema,
+  resetRequestSchema,
+  type ResetPasswordInput,
+  type ResetRequestInput,
+} from '../../../../shared/schemas/auth';
+import { Button, TextField } from '../../../components/ui';
+import { applyServerErrors } from '../../../lib/forms';
+import { useRequestReset, useResetPassword } from '../api/links';
+import { AuthFrame, FormBanner } from './auth-frame';
+import { PasswordHint } from './password-hint';
+
+export function ForgotPasswordPage() {
+  const request = useRequestReset();
+  const [banner, setBanner] = useState<string>();
+  const { register, handleSubmit, setError, formState } = useForm<ResetRequestInput>({
+    resolver: zodResolver(resetRequestSchema),
+  });
+  const onSubmit = handleSubmit(async (values) => {
+    try {
+      await request.mutateAsync(values);
+    } catch (error) {
+      setBanner(applyServerErrors(error, setError));
+    }
+  });
+  return (
+    <AuthFrame title="Reset your password">
+      {request.isSuccess ? (
+        <p role="status" className="text-lg">
+          {request.data.message} Check your inbox.
+        </p>
+      ) : (
+        <form onSubmit={onSubmit} className="space-y-4" noValidate>
+          <FormBanner message={banner} />
+          <TextField label="E-mail" type="email" autoComplete="username" {...register('email')} error={formState.errors.email?.message} />
+          <Button type="submit" size="lg" className="w-full" busy={request.isPending}>
+            Send a reset link
+          </Button>
+        </form>
+      )}
+      <Link className="mt-6 inline-block text-cellar-700 underline" to="/sign-in">
+        Back to sign-in
+      </Link>
+    </AuthFrame>
+  );
+}
+
+export function ResetPasswordPage() {
+  const { token = '' } = useParams();
+  const reset = useResetPassword(token);
+  const [banner, setBanner] = useState<string>();
+  const { register, handleSubmit, setError, formState } = useForm<ResetPasswordInput>({
+    resolver: zodResolver(resetPasswordSchema),
+  });
+  const onSubmit = handleSubmit(async (values) => {
+    try {
+      await reset.mutateAsync(values);
+    } catch (error) {
+      setBanner(applyServerErrors(error, setError));
+    }
+  });
+  return (
+    <AuthFrame title="Choose a new password">
+      {reset.isSuccess ? (
+        <p role="status" className="text-lg">
+          Your password is changed and your other sessions are signed out.{' '}
+          <Link className="underline" to="/sign-in">
+            Sign in
+          </Link>
+        </p>
+      ) : (
+        <form onSubmit={onSubmit} className="space-y-4" noValidate>
+          <FormBanner message={banner} />
+          <TextField
+            label="New password"
+            type="password"
+            autoComplete="new-password"
+            hint={<PasswordHint />}
+            {...register('password')}
+            error={formState.errors.password?.message}
+          />
+          <Button type="submit" size="lg" className="w-full" busy={reset.isPending}>
+            Save the new password
+          </Button>
+        </form>
+      )}
+    </AuthFrame>
+  );
+}

@@ -1,0 +1,30 @@
+import { Link } from 'react-router-dom';
+import { Card, PageHeader } from '../../../components/ui';
+import { useCurrentUser } from '../../../app/current-user';
+import { navFor } from '../../../app/navigation';
+
+function greeting(hour: number): string {
+  if (hour < 12) return 'Good morning';
+  if (hour < 18) return 'Good afternoon';
+  return 'Good evening';
+}
+
+export function HomePage() {
+  const me = useCurrentUser();
+  const hour = Number(new Intl.DateTimeFormat('en-US', { hour: 'numeric', hourCycle: 'h23', timeZone: me.brewery.timeZone }).format(new Date()));
+  const places = navFor(me.role).filter((item) => item.to !== '/');
+  return (
+    <>
+      <PageHeader title={`${greeting(hour)}, ${me.displayName.split(' ')[0]}`} subtitle={me.brewery.name} />
+      <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3">
+        {places.map((item) => (
+          <Link key={item.to} to={item.to} className="block">
+            <Card className="flex min-h-[96px] items-center text-xl font-semibold text-cellar-800 hover:border-cellar-600">
+              {item.label} →
+            </Card>
+          </Link>
+        ))}
+      </div>
+    </>
+  );
+}

@@ -1,0 +1,13 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api } from '../../../lib/api-client';
+import type { BrewerySettingsInput } from '../../../../shared/schemas/auth';
+import { authKeys } from '../../auth/api/me';
+
+export function useUpdateBrewery() {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: (input: BrewerySettingsInput) => api.patch('/api/brewery', input),
+    // The brewery's name, units and time zone travel with the signed-in person.
+    onSuccess: () => client.invalidateQueries({ queryKey: authKeys.me() }),
+  });
+}
