@@ -12,5 +12,6 @@ export const APP_DATA = {
 export const TEST_DATA = {
   dataDir: path.join(ROOT, '.data-test'),
   port: Number(process.env.KW_TEST_DB_PORT ?? 3308),
-  database: 'kettlewright_test',
+  // KW_TEST_DB_NAME gives parallel work its own database on the test instance.
+  database: process.env.KW_TEST_DB_NAME ?? 'kettlewright_test',
 };
