@@ -42,8 +42,11 @@ async function grantApplicationAccount(sequelize: Sequelize, appUser: string): P
   );
   for (const host of ['127.0.0.1', 'localhost']) {
     const account = `'${appUser}'@'${host}'`;
-    await sequelize.query(`REVOKE ALL PRIVILEGES, GRANT OPTION FROM ${account}`, { type: QueryTypes.RAW }).catch(() => undefined);
     for (const { name } of tables) {
+      // Only this database's tables: other databases on the instance keep their grants.
+      await sequelize
+        .query(`REVOKE ALL PRIVILEGES ON \`${database}\`.\`${name}\` FROM ${account}`, { type: QueryTypes.RAW })
+        .catch(() => undefined); // no grant yet on a new table
       if (name === 'schema_migrations') continue;
       const privileges = APPEND_ONLY_TABLES.includes(name) ? 'SELECT, INSERT' : 'SELECT, INSERT, UPDATE, DELETE';
       await sequelize.query(`GRANT ${privileges} ON \`${database}\`.\`${name}\` TO ${account}`, { type: QueryTypes.RAW });
