@@ -1,3 +1,4 @@
+import type { Application, RequestHandler } from 'express';
 import { rateLimit } from 'express-rate-limit';
 
 /**
@@ -5,15 +6,32 @@ import { rateLimit } from 'express-rate-limit';
  * Shared by sign-in, reset requests and signatures that re-enter a password.
  * Kept in memory per app server: behind a load balancer, use a shared store (see README).
  */
-export const signInLimiter = rateLimit({
-  windowMs: 15 * 60 * 1000,
-  limit: 5,
-  skipSuccessfulRequests: true,
-  standardHeaders: 'draft-8',
-  legacyHeaders: false,
-  handler: (_req, res) => {
-    res.status(429).json({
-      error: { code: 'too_many_attempts', message: 'Too many failed attempts. Wait 15 minutes and try again.' },
-    });
-  },
-});
+function createSignInLimiter(): RequestHandler {
+  return rateLimit({
+    windowMs: 15 * 60 * 1000,
+    limit: 5,
+    skipSuccessfulRequests: true,
+    standardHeaders: 'draft-8',
+    legacyHeaders: false,
+    handler: (_req, res) => {
+      res.status(429).json({
+        error: { code: 'too_many_attempts', message: 'Too many failed attempts. Wait 15 minutes and try again.' },
+      });
+    },
+  });
+}
+
+// The routers are built once per process, so the count is looked up per app rather than held by the router:
+// every createApp() starts with its own memory, as a restarted server does.
+const limiters = new WeakMap<Application, RequestHandler>();
+
+/** Gives an app its own sign-in limiter; createApp() calls this. */
+export function useSignInLimiter(app: Application): void {
+  limiters.set(app, createSignInLimiter());
+}
+
+export const signInLimiter: RequestHandler = (req, res, next) => {
+  const limiter = limiters.get(req.app);
+  if (!limiter) return next(new Error('This app has no sign-in limiter: call useSignInLimiter(app) in createApp()'));
+  return limiter(req, res, next);
+};
