@@ -4,12 +4,12 @@ import { durabilityProblems } from './config/durability';
 import { createApp } from './app';
 
 /** Starts the API (and the built client) after checking the database keeps committed work through a crash. */
-export async function startServer(): Promise<import('node:http').Server> {
+export async function startServer(options: { serveClient?: boolean } = { serveClient: true }): Promise<import('node:http').Server> {
   const problems = await durabilityProblems(sequelize);
   if (problems.length) {
     throw new Error(`Kettlewright refuses to run on a database that could lose signed records:\n  ${problems.join('\n  ')}`);
   }
-  const app = createApp({ serveClient: true });
+  const app = createApp(options);
   return new Promise((resolve) => {
     const server = app.listen(env.PORT, env.HOST, () => resolve(server));
   });
