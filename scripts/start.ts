@@ -5,9 +5,11 @@ import { ensureInstance } from './lib/mariadb-instance';
 import { APP_DATA, ROOT } from './lib/paths';
 import { sessionSecret } from './lib/session-secret';
 import { startMailCatcher } from '../server/dev/mail-catcher';
+import { startFakeS3 } from '../server/dev/fake-s3';
 
 const APP_PORT = Number(process.env.PORT ?? 3000);
 const SMTP_PORT = Number(process.env.KW_SMTP_PORT ?? 2525);
+const S3_PORT = Number(process.env.KW_S3_PORT ?? 4569);
 
 async function main() {
   console.log(`Starting Kettlewright's MariaDB on 127.0.0.1:${APP_DATA.port} (data in .data/) ...`);
@@ -18,6 +20,8 @@ async function main() {
 
   const mailDir = path.join(APP_DATA.dataDir, 'mail');
   const catcher = await startMailCatcher(SMTP_PORT, mailDir);
+  // Uploaded photos and lab sheets: a local fake object store unless a real one is configured.
+  const objectStore = process.env.S3_ENDPOINT ? null : await startFakeS3(S3_PORT, path.join(APP_DATA.dataDir, 's3'));
   Object.assign(process.env, {
     NODE_ENV: process.env.NODE_ENV ?? 'development',
     DATABASE_URL: instance.appUrl,
@@ -26,6 +30,7 @@ async function main() {
     PUBLIC_URL: process.env.PUBLIC_URL ?? `http://127.0.0.1:${APP_PORT}`,
     PORT: String(APP_PORT),
     MAIL_DIR: mailDir,
+    ...objectStore?.env,
   });
 
   const { seedDemo, DEMO_PEOPLE, DEMO_PASSWORD } = await import('../server/seed/demo');

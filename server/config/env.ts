@@ -13,6 +13,23 @@ const schema = z.object({
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   /** Folder where the development mail catcher keeps received messages. */
   MAIL_DIR: z.string().optional(),
+  // File storage (photos, lab sheets) through the S3 API. Development and tests point these at the
+  // local fake server (server/dev/fake-s3.ts); production names a real object store.
+  /** Omit to use the provider's own endpoint for S3_REGION. */
+  S3_ENDPOINT: z.url('S3_ENDPOINT must be a URL such as http://127.0.0.1:4569').optional(),
+  S3_BUCKET: z
+    .string()
+    .regex(/^[a-z0-9][a-z0-9.-]{1,61}[a-z0-9]$/, 'S3_BUCKET must be a bucket name (3–63 lower-case letters, digits, dots, hyphens)')
+    .default('kettlewright-files'),
+  S3_REGION: z.string().regex(/^[a-z0-9-]+$/, 'S3_REGION must be a region name such as us-east-1').default('us-east-1'),
+  /** Both keys or neither (neither: the SDK's own credential chain, e.g. an instance role). */
+  S3_ACCESS_KEY_ID: z.string().min(1).optional(),
+  S3_SECRET_ACCESS_KEY: z.string().min(1).optional(),
+  /** Path-style addresses (http://host/bucket/key), which most self-hosted stores need. */
+  S3_FORCE_PATH_STYLE: z.enum(['true', 'false']).default('false').transform((v) => v === 'true'),
+}).refine((e) => Boolean(e.S3_ACCESS_KEY_ID) === Boolean(e.S3_SECRET_ACCESS_KEY), {
+  path: ['S3_SECRET_ACCESS_KEY'],
+  message: 'Set both S3_ACCESS_KEY_ID and S3_SECRET_ACCESS_KEY, or neither',
 });
 
 export type Env = z.infer<typeof schema>;
