@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { co2VolumesAtPressure, CO2_YIELD_G_PER_G, headPressureKpa, headPressurePsi, primingSugar, residualCo2Volumes } from './carbonation';
+import { carbonationSetting, co2VolumesAtPressure, CO2_YIELD_G_PER_G, headPressureKpa, headPressurePsi, primingSugar, residualCo2Volumes } from './carbonation';
 import { expectInputError } from './test-helpers';
 import { cToF, fToC, gToOz, kpaToPsi, usGalToL } from './units';
 
@@ -58,5 +58,14 @@ describe('priming', () => {
     expect(r.grams).toBe(0);
     expect(r.co2ToAddVolumes).toBeLessThan(0);
     expectInputError(() => primingSugar(0, 2.5, 20, 'sucrose'), 'beerVolumeL');
+  });
+});
+
+describe('carbonation setting on a vessel', () => {
+  it('gives the head pressure when the vessel is rated for it, and refuses above the rating', () => {
+    const needed = headPressureKpa(2, 2.6);
+    expect(carbonationSetting(2, 2.6, 200).pressureKpa).toBeCloseTo(needed, 10);
+    expectInputError(() => carbonationSetting(2, 2.6, needed - 1), 'volumes');
+    expectInputError(() => carbonationSetting(2, 2.6, 0), 'ratedKpa');
   });
 });

@@ -115,3 +115,28 @@ export function primingSugar(beerVolumeL: number, targetVolumes: number, warmest
   const grams = co2ToAddVolumes > 0 ? (co2ToAddVolumes * CO2_G_PER_L_PER_VOLUME * beerVolumeL) / yieldGPerG : 0;
   return { grams, residualVolumes, co2ToAddVolumes };
 }
+
+/** A head pressure to set, checked against the vessel it is set on. */
+export interface CarbonationSetting {
+  /** Gauge head pressure to set, kPa. */
+  pressureKpa: number;
+  /** The vessel's rated working pressure, kPa gauge. */
+  ratedKpa: number;
+}
+
+/**
+ * The head pressure for `volumes` of CO2 at `tempC` (see {@link headPressureKpa}),
+ * refused when it is above the vessel's rated working pressure: the app never
+ * recommends a pressure the vessel is not rated for.
+ */
+export function carbonationSetting(tempC: number, volumes: number, ratedKpa: number): CarbonationSetting {
+  requirePositive(ratedKpa, 'ratedKpa', "Vessel's rated working pressure (kPa)");
+  const pressureKpa = headPressureKpa(tempC, volumes);
+  if (pressureKpa > ratedKpa) {
+    throw new BrewingInputError(
+      'volumes',
+      `${volumes} volumes at ${Number(tempC.toFixed(1))} °C needs ${pressureKpa.toFixed(0)} kPa, above this vessel's rated working pressure of ${ratedKpa.toFixed(0)} kPa. Chill the beer further or choose a lower target.`,
+    );
+  }
+  return { pressureKpa, ratedKpa };
+}

@@ -84,6 +84,8 @@ export {
   co2VolumesAtPressure,
   residualCo2Volumes,
   primingSugar,
+  carbonationSetting,
+  type CarbonationSetting,
   MOLAR_VOLUME_L,
   CO2_G_PER_L_PER_VOLUME,
   CO2_YIELD_G_PER_G,
@@ -105,3 +107,18 @@ export {
 } from './adjuncts';
 export { computeRecipe, planWort, resolveGrainBill, type WortPlan } from './recipe';
 export { scaleRecipe } from './scaling';
+export {
+  predictFermentation,
+  SETTLED_POINTS,
+  dRestTriggerSg,
+  DEFAULT_WORT_CORRECTION,
+  refractometerWortSg,
+  refractometerBeerSg,
+  crossesDRestTrigger,
+  STALL_TOLERANCE_SG,
+  gravityStalled,
+  readingOverdue,
+  type GravityPoint,
+  type FermentationPrediction,
+} from './fermentation';
+export { KEG_SIZES, KEG_SIZE_IDS, lineVolumeL, packagingTotals, type KegSize, type PackageLine, type PackagingTotals } from './packaging';
