@@ -87,6 +87,9 @@ export function createApp(options: { serveClient?: boolean } = {}): Express {
         table: 'Session',
         expiration: SESSION_IDLE_MS,
         checkExpirationInterval: env.NODE_ENV === 'test' ? 0 : 15 * 60 * 1000,
+        // The session is re-saved once a minute (lastSeenAt below) instead of touched on every request.
+        // (A store option its type definitions omit.)
+        ...({ disableTouch: true } as object),
         extendDefaultFields: (defaults: object, data: { passport?: { user?: number } }) => ({
           ...defaults,
           userId: data.passport?.user ?? null,
@@ -102,12 +105,18 @@ export function createApp(options: { serveClient?: boolean } = {}): Express {
   app.use(passport.initialize());
   app.use(passport.session());
   app.use((req, _res, next) => {
-    // Absolute timeout: however active, a session ends a day after sign-in.
-    const started = req.session?.signedInAt;
-    if (req.user && started && Date.now() - started > SESSION_ABSOLUTE_MS) {
+    if (!req.user) return next();
+    // Idle and absolute timeouts, checked on the server (a copied cookie does not outlive them).
+    const now = Date.now();
+    const { signedInAt, lastSeenAt } = req.session;
+    const idle = lastSeenAt !== undefined && now - lastSeenAt > SESSION_IDLE_MS;
+    const expired = signedInAt !== undefined && now - signedInAt > SESSION_ABSOLUTE_MS;
+    if (idle || expired) {
       req.logout(() => req.session.destroy(() => next()));
       return;
     }
+    // Saved at most once a minute: keeps the row's expiry fresh without a write per request.
+    if (lastSeenAt === undefined || now - lastSeenAt > 60_000) req.session.lastSeenAt = now;
     next();
   });
 

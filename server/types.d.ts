@@ -17,6 +17,8 @@ declare module 'express-session' {
   interface SessionData {
     /** When the person signed in (ms since epoch): the absolute timeout counts from here. */
     signedInAt?: number;
+    /** Last request (ms since epoch, to the minute): the idle timeout counts from here. */
+    lastSeenAt?: number;
   }
 }
 

@@ -1,3 +1,4 @@
+import { createHash } from 'node:crypto';
 import bcrypt from 'bcryptjs';
 import { ZxcvbnFactory } from '@zxcvbn-ts/core';
 import * as common from '@zxcvbn-ts/language-common';
@@ -25,8 +26,10 @@ export function assertStrongPassword(password: string, context: string[] = [], f
   }
 }
 
-export const hashPassword = (password: string) => bcrypt.hash(password, BCRYPT_COST);
-export const checkPassword = (password: string, hash: string) => bcrypt.compare(password, hash);
+// bcrypt reads only the first 72 bytes; a SHA-256 digest first lets every character of a long passphrase count.
+const digest = (password: string) => createHash('sha256').update(password, 'utf8').digest('base64');
+export const hashPassword = (password: string) => bcrypt.hash(digest(password), BCRYPT_COST);
+export const checkPassword = (password: string, hash: string) => bcrypt.compare(digest(password), hash);
 
 let standIn: Promise<string> | undefined;
 /** A hash of nothing in particular, compared against when an account is unknown. */

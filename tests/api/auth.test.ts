@@ -168,6 +168,25 @@ describe('sessions are stored in MariaDB', () => {
     expect((await request(testApp()).get('/api/auth/me').set('Cookie', cookieOf(setCookie))).status).toBe(401);
     expect(await Session.findByPk(sid)).toBeNull();
   });
+
+  it('a session unused for more than 8 hours ends on the server, even if the cookie is replayed (idle timeout)', async () => {
+    const user = await newUser(t);
+    const setCookie = sessionSetCookie(await signIn(testApp(), user.email, GOOD_PASSWORD))!;
+    const sid = sidOf(setCookie);
+    // One request records when the session was last seen.
+    expect((await request(testApp()).get('/api/auth/me').set('Cookie', cookieOf(setCookie))).status).toBe(200);
+    const lastSeenHoursAgo = async (hours: number) => {
+      const row = (await Session.findByPk(sid))!;
+      const data = JSON.parse(row.data!);
+      expect(data.lastSeenAt).toBeGreaterThan(Date.now() - 60_000);
+      await Session.update({ data: JSON.stringify({ ...data, lastSeenAt: Date.now() - hours * 3_600_000 }) }, { where: { sid } });
+    };
+    await lastSeenHoursAgo(7);
+    expect((await request(testApp()).get('/api/auth/me').set('Cookie', cookieOf(setCookie))).status).toBe(200);
+    await lastSeenHoursAgo(9);
+    expect((await request(testApp()).get('/api/auth/me').set('Cookie', cookieOf(setCookie))).status).toBe(401);
+    expect(await Session.findByPk(sid)).toBeNull();
+  });
 });
 
 describe('sign-in is audited', () => {
