@@ -1,0 +1,95 @@
+// npm run db:restore FILE [--into NAME] [--replace]: loads a dump made by `npm run db:backup` into a fresh database
+// on Kettlewright's own instance (.data/), then applies any newer migrations and the application account's grants.
+import path from 'node:path';
+import { existsSync } from 'node:fs';
+import { pathToFileURL } from 'node:url';
+import * as mariadb from 'mariadb';
+import { ensureInstance } from './lib/mariadb-instance';
+import { APP_DATA } from './lib/paths';
+import { connectionParts, runClient } from './backup';
+import { migrate } from '../server/migrations/umzug';
+
+const SAFE_NAME = /^[A-Za-z0-9_]{1,64}$/;
+
+/** The same server and account as `url`, another database. */
+export function urlForDatabase(url: string, database: string): string {
+  const u = new URL(url);
+  u.pathname = `/${database}`;
+  return u.toString();
+}
+
+/**
+ * Restores `file` into `database` (created fresh; refused when it already holds tables unless `replace`).
+ * `ownerUrl` is the migration account on the target instance; `appUser` gets its usual grants afterwards.
+ */
+export async function restoreDatabase(options: {
+  ownerUrl: string;
+  appUser: string;
+  database: string;
+  file: string;
+  replace?: boolean;
+}): Promise<{ database: string; migrationsApplied: string[] }> {
+  const { database, file } = options;
+  if (!SAFE_NAME.test(database)) throw new Error(`'${database}' is not a database name Kettlewright uses (letters, digits, _).`);
+  if (!existsSync(file)) throw new Error(`No backup file at ${file}`);
+  const c = connectionParts(options.ownerUrl);
+  const conn = await mariadb.createConnection({ host: c.host, port: Number(c.port), user: c.user, password: c.password });
+  try {
+    const [row] = await conn.query<{ tables: bigint }[]>(
+      'SELECT COUNT(*) AS tables FROM information_schema.TABLES WHERE TABLE_SCHEMA = ?',
+      [database],
+    );
+    if (Number(row!.tables) > 0 && !options.replace) {
+      throw new Error(
+        `Database '${database}' already holds ${row!.tables} tables. Restore into a fresh one (--into NAME), ` +
+          'or stop the app and pass --replace to drop it first.',
+      );
+    }
+    await conn.query(`DROP DATABASE IF EXISTS \`${database}\``);
+    await conn.query(`CREATE DATABASE \`${database}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`);
+  } finally {
+    await conn.end();
+  }
+  const targetUrl = urlForDatabase(options.ownerUrl, database);
+  await runClient('mariadb', targetUrl, ['--default-character-set=utf8mb4', database], { stdinFile: file });
+  const migrationsApplied = await migrate(targetUrl, options.appUser);
+  return { database, migrationsApplied };
+}
+
+function parseArgs(argv: string[]): { file: string; into: string; replace: boolean } {
+  const args = [...argv];
+  let into = APP_DATA.database;
+  let replace = false;
+  let file: string | undefined;
+  while (args.length) {
+    const a = args.shift()!;
+    if (a === '--into') into = args.shift() ?? '';
+    else if (a === '--replace') replace = true;
+    else if (!file) file = a;
+    else throw new Error(`Unexpected argument '${a}'`);
+  }
+  if (!file) throw new Error('Usage: npm run db:restore FILE [-- --into NAME] [-- --replace]');
+  return { file: path.resolve(file), into, replace };
+}
+
+async function main() {
+  const { file, into, replace } = parseArgs(process.argv.slice(2));
+  const instance = await ensureInstance(APP_DATA);
+  const { migrationsApplied } = await restoreDatabase({
+    ownerUrl: instance.ownerUrl,
+    appUser: instance.credentials.appUser,
+    database: into,
+    file,
+    replace,
+  });
+  console.log(`Restored ${file} into database '${into}' on 127.0.0.1:${APP_DATA.port}.`);
+  if (migrationsApplied.length) console.log(`Applied newer migrations: ${migrationsApplied.join(', ')}`);
+  if (into !== APP_DATA.database) console.log(`The app uses '${APP_DATA.database}'; the restored copy sits beside it.`);
+}
+
+if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) {
+  main().catch((err) => {
+    console.error(err instanceof Error ? err.message : err);
+    process.exit(1);
+  });
+}
