@@ -24,6 +24,8 @@ export interface RouteEntry {
   path: string;
   access: Access;
   hasBody: boolean;
+  /** The route's validators, so the bad-input test can tell a refused request from an accepted one. */
+  schemas: { params?: z.ZodType; query?: z.ZodType; body?: z.ZodType };
 }
 
 /** Every route the API serves: the role matrix and cross-brewery tests are generated from it. */
@@ -42,7 +44,13 @@ export function defineRouter(base: string, defs: RouteDef[]): Router {
     });
     const path = `${base}${def.path === '/' ? '' : def.path}`;
     if (!routeTable.some((r) => r.method === def.method && r.path === path)) {
-      routeTable.push({ method: def.method, path, access: def.access, hasBody: Boolean(def.body) });
+      routeTable.push({
+        method: def.method,
+        path,
+        access: def.access,
+        hasBody: Boolean(def.body),
+        schemas: { params: def.params, query: def.query, body: def.body },
+      });
     }
   }
   return router;
