@@ -1,0 +1,278 @@
+import { z } from 'zod';
+import { KEG_SIZE_IDS } from '../brewing/packaging';
+import { timeZone } from './auth';
+
+/**
+ * The cellar: vessels, gravity readings, logged cellar actions, packaging, the cellar plan and
+ * probe imports. Forms send values in the unit the person chose beside them; the server stores SI.
+ */
+
+const num = (label: string, min: number, max: number) =>
+  z.number({ error: `${label}: enter a number` }).min(min, `${label} must be at least ${min}`).max(max, `${label} must be at most ${max}`);
+const note = z.string().trim().max(1000, 'Use at most 1000 characters').optional();
+
+export const TEMP_UNITS = ['c', 'f'] as const;
+export type TempUnit = (typeof TEMP_UNITS)[number];
+const tempUnit = z.enum(TEMP_UNITS, { error: 'Choose °C or °F' });
+/** Temperatures a cellar sees, in either unit (−10 °C … 45 °C ≈ 14 °F … 113 °F). */
+const temp = num('Temperature', -10, 113);
+
+// ------------------------------------------------------------------- vessels
+
+export const VESSEL_TYPES = ['fermenter', 'bright_tank'] as const;
+export const VESSEL_STATUSES = ['clean', 'in_use', 'needs_cleaning'] as const;
+export type VesselType = (typeof VESSEL_TYPES)[number];
+export type VesselStatus = (typeof VESSEL_STATUSES)[number];
+export const VESSEL_TYPE_LABELS: Record<VesselType, string> = { fermenter: 'Fermenter', bright_tank: 'Bright tank' };
+export const VESSEL_STATUS_LABELS: Record<VesselStatus, string> = { clean: 'Clean', in_use: 'In use', needs_cleaning: 'Needs cleaning' };
+
+export const vesselInputSchema = z.strictObject({
+  name: z.string().trim().min(1, 'Name the vessel').max(60, 'Use at most 60 characters'),
+  type: z.enum(VESSEL_TYPES, { error: 'Choose fermenter or bright tank' }),
+  capacity: num('Capacity', 0.1, 100_000),
+  capacityUnit: z.enum(['l', 'bbl'], { error: 'Choose L or bbl' }),
+  ratedPressure: num('Rated working pressure', 0.1, 1000),
+  pressureUnit: z.enum(['kpa', 'psi'], { error: 'Choose kPa or psi' }),
+  status: z.enum(['clean', 'needs_cleaning'], { error: 'Choose clean or needs cleaning' }),
+});
+export type VesselInput = z.infer<typeof vesselInputSchema>;
+
+export const fillVesselSchema = z.strictObject({ batchId: z.number().int().positive() });
+export type FillVesselInput = z.infer<typeof fillVesselSchema>;
+
+/** A vessel as the API returns it (SI). */
+export interface VesselView {
+  id: number;
+  name: string;
+  type: VesselType;
+  capacityL: number;
+  ratedPressureKpa: number;
+  status: VesselStatus;
+  currentBatchId: number | null;
+}
+
+// ------------------------------------------------------------------ readings
+
+export const READING_METHODS = ['hydrometer', 'refractometer', 'probe'] as const;
+export type ReadingMethod = (typeof READING_METHODS)[number];
+export const READING_METHOD_LABELS: Record<ReadingMethod, string> = {
+  hydrometer: 'Hydrometer',
+  refractometer: 'Refractometer',
+  probe: 'Logging probe',
+};
+export const GRAVITY_UNITS = ['sg', 'plato', 'brix'] as const;
+export type GravityUnit = (typeof GRAVITY_UNITS)[number];
+
+/**
+ * One gravity reading. A hydrometer or probe reads SG or °Plato; a refractometer reads °Brix,
+ * corrected for wort (and, once fermenting, for alcohol using the original reading).
+ */
+export const readingEntrySchema = z
+  .strictObject({
+    kind: z.literal('reading'),
+    method: z.enum(READING_METHODS, { error: 'Choose how it was measured' }),
+    gravity: num('Gravity', 0, 40),
+    gravityUnit: z.enum(GRAVITY_UNITS, { error: 'Choose SG, °P or °Bx' }),
+    /** Refractometer only: the reading at knockout, °Brix, for the alcohol correction. */
+    originalBrix: num('Original reading', 0, 40).optional(),
+    wortCorrection: num('Wort correction factor', 0.9, 1.2).optional(),
+    temp: temp.optional(),
+    tempUnit,
+    ph: num('pH', 2, 10).optional(),
+    note,
+  })
+  .superRefine((r, ctx) => {
+    if ((r.method === 'refractometer') !== (r.gravityUnit === 'brix')) {
+      ctx.addIssue({ code: 'custom', path: ['gravityUnit'], message: 'A refractometer reads °Brix; a hydrometer or probe reads SG or °P' });
+    }
+    if (r.gravityUnit === 'sg' && (r.gravity < 0.98 || r.gravity > 1.2)) {
+      ctx.addIssue({ code: 'custom', path: ['gravity'], message: 'A specific gravity is between 0.980 and 1.200' });
+    }
+    if (r.gravityUnit === 'plato' && r.gravity > 35) {
+      ctx.addIssue({ code: 'custom', path: ['gravity'], message: 'Gravity must be at most 35 °P' });
+    }
+  });
+export type ReadingEntryInput = z.infer<typeof readingEntrySchema>;
+
+/** A reading as the API returns it: gravity stored as SG, shown in either unit. */
+export interface ReadingView {
+  id: number;
+  logEntryId: number;
+  takenAt: string;
+  sg: number;
+  plato: number;
+  enteredValue: number;
+  enteredUnit: GravityUnit;
+  tempC: number | null;
+  ph: number | null;
+  method: ReadingMethod;
+  authorName: string;
+}
+
+// ------------------------------------------------------------------- actions
+
+export const CELLAR_ACTIONS = ['d_rest', 'cold_crash', 'dry_hop', 'fining', 'transfer', 'carbonation'] as const;
+export type CellarAction = (typeof CELLAR_ACTIONS)[number];
+export const CELLAR_ACTION_LABELS: Record<CellarAction, string> = {
+  d_rest: 'D-rest started',
+  cold_crash: 'Cold crash',
+  dry_hop: 'Dry hop',
+  fining: 'Fining',
+  transfer: 'Transfer to bright tank',
+  carbonation: 'Carbonation set',
+};
+
+export const actionEntrySchema = z
+  .strictObject({
+    kind: z.literal('action'),
+    action: z.enum(CELLAR_ACTIONS, { error: 'Choose what was done' }),
+    /** Set-point for D-rest, cold crash and carbonation. */
+    temp: temp.optional(),
+    tempUnit,
+    /** What went in: hop variety and weight, fining agent and dose. */
+    detail: z.string().trim().max(200, 'Use at most 200 characters').optional(),
+    /** Transfer: the volume moved, in `volumeUnit`, and the bright tank it went to. */
+    volume: num('Volume', 0.1, 100_000).optional(),
+    volumeUnit: z.enum(['l', 'bbl']).default('l'),
+    toVesselId: z.number().int().positive().optional(),
+    /** Carbonation: target CO2 volumes and the head pressure set, kPa gauge. */
+    co2Volumes: num('CO2 volumes', 0.5, 5).optional(),
+    pressureKpa: num('Head pressure', 0, 1000).optional(),
+    note,
+  })
+  .superRefine((a, ctx) => {
+    const need = (field: keyof typeof a, message: string) => {
+      if (a[field] === undefined) ctx.addIssue({ code: 'custom', path: [field], message });
+    };
+    if (a.action === 'transfer') {
+      need('volume', 'Enter the volume moved');
+      need('toVesselId', 'Choose the bright tank');
+    }
+    if (a.action === 'dry_hop' || a.action === 'fining') need('detail', 'Say what went in and how much');
+    if (a.action === 'carbonation') {
+      need('co2Volumes', 'Enter the target CO2 volumes');
+      need('temp', 'Enter the beer temperature');
+    }
+    if (a.action === 'd_rest' || a.action === 'cold_crash') need('temp', 'Enter the set temperature');
+  });
+export type ActionEntryInput = z.infer<typeof actionEntrySchema>;
+
+// ----------------------------------------------------------------- packaging
+
+export const PACKAGE_KINDS = ['keg', 'can', 'bottle'] as const;
+export const KEG_SIZE_LABELS: Record<(typeof KEG_SIZE_IDS)[number], string> = {
+  half_bbl: '½ bbl',
+  quarter_bbl: '¼ bbl',
+  sixth_bbl: '⅙ bbl',
+  keg_20l: '20 L',
+  keg_30l: '30 L',
+  keg_50l: '50 L',
+};
+
+const count = z.number({ error: 'Count: enter a whole number' }).int('Count must be a whole number').min(1, 'Count must be at least 1').max(100_000);
+export const packageLineSchema = z.discriminatedUnion('kind', [
+  z.strictObject({ kind: z.literal('keg'), size: z.enum(KEG_SIZE_IDS as [string, ...string[]], { error: 'Choose a keg size' }), count }),
+  z.strictObject({ kind: z.enum(['can', 'bottle']), sizeMl: num('Container size (mL)', 50, 5000), count }),
+]);
+export type PackageLineInput = z.infer<typeof packageLineSchema>;
+
+export const packagingEntrySchema = z.strictObject({
+  kind: z.literal('packaging'),
+  lines: z.array(packageLineSchema).min(1, 'Add at least one line').max(20),
+  /** Last run of the batch: the batch moves to packaged. */
+  final: z.boolean().default(false),
+  note,
+});
+export type PackagingEntryInput = z.infer<typeof packagingEntrySchema>;
+
+// ---------------------------------------------------------------------- plan
+
+/** The batch's cellar plan, from the recipe's fermentation plan, adjusted by the head brewer. */
+export const cellarPlanSchema = z.strictObject({
+  plannedFg: num('Planned FG', 0.98, 1.2),
+  tempUnit,
+  primaryTemp: temp,
+  /** D-rest starts when gravity is within this many points of planned FG. */
+  dRestPoints: num('D-rest trigger (points)', 0, 20),
+  dRestTemp: temp,
+  crashTemp: temp,
+  co2Volumes: num('CO2 volumes', 0.5, 5),
+  /** A reading is overdue after this many hours without one. */
+  readingIntervalHours: num('Reading interval (hours)', 1, 24 * 14),
+});
+export type CellarPlanInput = z.infer<typeof cellarPlanSchema>;
+
+export interface CellarPlanView {
+  plannedFg: number;
+  primaryTempC: number;
+  dRestPoints: number;
+  dRestTempC: number;
+  crashTempC: number;
+  co2Volumes: number;
+  readingIntervalHours: number;
+}
+
+// -------------------------------------------------------------- carbonation
+
+export const carbonationQuerySchema = z.strictObject({
+  vesselId: z.coerce.number().int().positive(),
+  co2Volumes: z.coerce.number().min(0.5, 'CO2 volumes must be at least 0.5').max(5, 'CO2 volumes must be at most 5'),
+  temp: z.coerce.number().min(-10).max(113),
+  tempUnit,
+});
+export type CarbonationQuery = z.infer<typeof carbonationQuerySchema>;
+
+// ------------------------------------------------------------- probe import
+
+export const PROBE_DELIMITERS = [',', ';', '\t'] as const;
+export const probeImportOptionsSchema = z.strictObject({
+  delimiter: z.enum(PROBE_DELIMITERS, { error: 'Choose comma, semicolon or tab' }),
+  gravityUnit: z.enum(['sg', 'plato'], { error: 'Choose SG or °P' }),
+  tempUnit,
+  timeZone,
+});
+export type ProbeImportOptions = z.infer<typeof probeImportOptionsSchema>;
+
+export const probeImportSchema = probeImportOptionsSchema.extend({
+  csv: z.string().min(1, 'Choose a file').max(800_000, 'The file is too large (at most 800 kB)'),
+});
+export type ProbeImportInput = z.infer<typeof probeImportSchema>;
+
+/** One checked row of a probe file. */
+export interface ProbeRow {
+  /** Line in the file, from 1. */
+  line: number;
+  time: string;
+  gravity: string;
+  temp: string;
+  status: 'ok' | 'error' | 'duplicate';
+  error?: string;
+  takenAt?: string;
+  sg?: number;
+  tempC?: number;
+}
+
+export interface ProbeImportResult {
+  rows: ProbeRow[];
+  toImport: number;
+  duplicates: number;
+  errors: number;
+  /** True once written (the confirm step); the preview writes nothing. */
+  imported: boolean;
+}
+
+// -------------------------------------------------------------------- alerts
+
+export const ALERT_KINDS = ['d_rest', 'stalled', 'overdue'] as const;
+export type AlertKind = (typeof ALERT_KINDS)[number];
+
+export interface AlertView {
+  id: number;
+  batchId: number;
+  batchNumber: string;
+  beerName: string;
+  kind: AlertKind;
+  message: string;
+  createdAt: string;
+  readAt: string | null;
+}
