@@ -1,10 +1,18 @@
 import type { Router } from 'express';
 import { authRouter } from './auth';
 import { teamRouter, breweryRouter } from './team';
+import { recipesRouter } from './recipes';
+import { equipmentRouter } from './equipment';
+import { ingredientsRouter } from './ingredients';
+import { batchesRouter } from './batches';
 
 /** Every API router and where it is mounted. Each area adds its line here. */
 export const apiRouters: [string, Router][] = [
   ['/api/auth', authRouter],
   ['/api/team', teamRouter],
   ['/api/brewery', breweryRouter],
+  ['/api/recipes', recipesRouter],
+  ['/api/equipment', equipmentRouter],
+  ['/api/ingredients', ingredientsRouter],
+  ['/api/batches', batchesRouter],
 ];

@@ -4,6 +4,7 @@ import { Brewery, User } from '../models';
 import { hashPassword } from '../services/passwords';
 import type { Role } from '../../shared/schemas/roles';
 import type { Transaction } from 'sequelize';
+import { seedRecipes } from './recipes';
 
 export const DEMO_PASSWORD = 'harbour-copper-kettle-72';
 
@@ -20,7 +21,7 @@ export interface DemoContext {
 }
 
 /** Steps later areas add to fill the demo brewery (recipes, batches, cellar...). They run once, in order. */
-export const demoSteps: ((ctx: DemoContext) => Promise<void>)[] = [];
+export const demoSteps: ((ctx: DemoContext) => Promise<void>)[] = [seedRecipes];
 
 /** Seeds the demo brewery once; returns false when it is already there. */
 export async function seedDemo(): Promise<boolean> {

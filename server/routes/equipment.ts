@@ -1,0 +1,37 @@
+import { z } from 'zod';
+import { equipmentSchema, idParam } from '../../shared/schemas/recipes';
+import { BREWING_ROLES } from '../../shared/schemas/roles';
+import { defineRouter, actor } from './define';
+import * as equipment from '../services/equipment';
+
+const params = z.strictObject({ equipmentId: idParam });
+
+export const equipmentRouter = defineRouter('/api/equipment', [
+  {
+    method: 'get',
+    path: '/',
+    access: BREWING_ROLES,
+    handler: async (req, res) => {
+      res.json(await equipment.listEquipment(actor(req).breweryId));
+    },
+  },
+  {
+    method: 'post',
+    path: '/',
+    access: ['head_brewer'],
+    body: equipmentSchema,
+    handler: async (req, res) => {
+      res.status(201).json(await equipment.createEquipment(actor(req).breweryId, req.body));
+    },
+  },
+  {
+    method: 'put',
+    path: '/:equipmentId',
+    access: ['head_brewer'],
+    params,
+    body: equipmentSchema,
+    handler: async (req, res) => {
+      res.json(await equipment.updateEquipment(actor(req).breweryId, Number(req.params.equipmentId), req.body));
+    },
+  },
+]);

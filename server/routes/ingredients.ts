@@ -1,0 +1,39 @@
+import { z } from 'zod';
+import { idParam, ingredientQuerySchema, ingredientSchema } from '../../shared/schemas/recipes';
+import { BREWING_ROLES } from '../../shared/schemas/roles';
+import { defineRouter, actor } from './define';
+import * as ingredients from '../services/ingredients';
+
+const params = z.strictObject({ ingredientId: idParam });
+
+export const ingredientsRouter = defineRouter('/api/ingredients', [
+  {
+    method: 'get',
+    path: '/',
+    access: BREWING_ROLES,
+    query: ingredientQuerySchema,
+    handler: async (req, res) => {
+      const { kind } = req.query as z.infer<typeof ingredientQuerySchema>;
+      res.json(await ingredients.listIngredients(actor(req).breweryId, kind));
+    },
+  },
+  {
+    method: 'post',
+    path: '/',
+    access: ['head_brewer'],
+    body: ingredientSchema,
+    handler: async (req, res) => {
+      res.status(201).json(await ingredients.createIngredient(actor(req).breweryId, req.body));
+    },
+  },
+  {
+    method: 'put',
+    path: '/:ingredientId',
+    access: ['head_brewer'],
+    params,
+    body: ingredientSchema,
+    handler: async (req, res) => {
+      res.json(await ingredients.updateIngredient(actor(req).breweryId, Number(req.params.ingredientId), req.body));
+    },
+  },
+]);

@@ -1,0 +1,250 @@
+/** Recipes and their versions: save (computing the list figures with shared/brewing), version, freeze rules, compare. */
+import { QueryTypes, type Transaction } from 'sequelize';
+import { computeRecipe, type ComputedRecipe } from '../../shared/brewing';
+import {
+  equipmentAtVolume,
+  toRecipeInput,
+  type CreateRecipeInput,
+  type RecipeVersionContent,
+  type SaveScaledInput,
+  type SaveVersionInput,
+  type UpdateRecipeInput,
+} from '../../shared/schemas/recipes';
+import { sequelize } from '../config/database';
+import { conflict, notFound } from '../errors';
+import { Recipe, RecipeVersion, User } from '../models';
+import { equipmentFromRow, findEquipment, findVersion, scaleVersion } from './recipe-plans';
+
+interface Actor {
+  id: number;
+  breweryId: number;
+}
+
+export interface RecipeListRow {
+  id: number;
+  name: string;
+  style: string;
+  status: string;
+  latestVersionId: number;
+  latestVersion: number;
+  og: number;
+  fg: number;
+  ibu: number;
+  srm: number;
+  abvPct: number;
+  lastBrewedAt: string | null;
+  updatedAt: string;
+}
+
+export async function listRecipes(breweryId: number): Promise<RecipeListRow[]> {
+  const rows = await sequelize.query<RecipeListRow & { lastBrewedAt: Date | null; updatedAt: Date }>(
+    `SELECT r.id, r.name, r.style, r.status, v.id AS latestVersionId, v.number AS latestVersion,
+            v.og, v.fg, v.ibu, v.srm, v.abv_pct AS abvPct, r.updated_at AS updatedAt,
+            (SELECT MAX(u.last_used_at) FROM recipe_versions u WHERE u.recipe_id = r.id) AS lastBrewedAt
+       FROM recipes r
+       JOIN recipe_versions v ON v.recipe_id = r.id
+        AND v.number = (SELECT MAX(m.number) FROM recipe_versions m WHERE m.recipe_id = r.id)
+      WHERE r.brewery_id = ?
+      ORDER BY r.name`,
+    { replacements: [breweryId], type: QueryTypes.SELECT },
+  );
+  return rows.map((r) => ({
+    ...r,
+    lastBrewedAt: r.lastBrewedAt ? new Date(r.lastBrewedAt).toISOString() : null,
+    updatedAt: new Date(r.updatedAt).toISOString(),
+  }));
+}
+
+export interface VersionSummary {
+  id: number;
+  number: number;
+  changeNote: string;
+  authorName: string;
+  createdAt: string;
+  frozenAt: string | null;
+  equipmentProfileId: number;
+  batchVolumeL: number;
+  og: number;
+  fg: number;
+  ibu: number;
+  srm: number;
+  abvPct: number;
+}
+
+async function findRecipe(breweryId: number, id: number, transaction?: Transaction): Promise<Recipe> {
+  const recipe = await Recipe.findOne({ where: { id, breweryId }, transaction });
+  if (!recipe) throw notFound('This recipe');
+  return recipe;
+}
+
+async function summaries(versions: RecipeVersion[]): Promise<VersionSummary[]> {
+  const authors = await User.findAll({ where: { id: [...new Set(versions.map((v) => v.authorId))] }, attributes: ['id', 'displayName'] });
+  const byId = new Map(authors.map((a) => [a.id, a.displayName]));
+  return versions.map((v) => ({
+    id: v.id,
+    number: v.number,
+    changeNote: v.changeNote,
+    authorName: byId.get(v.authorId) ?? 'Former teammate',
+    createdAt: v.createdAt.toISOString(),
+    frozenAt: v.frozenAt ? v.frozenAt.toISOString() : null,
+    equipmentProfileId: v.equipmentProfileId,
+    batchVolumeL: v.batchVolumeL,
+    og: v.og,
+    fg: v.fg,
+    ibu: v.ibu,
+    srm: v.srm,
+    abvPct: v.abvPct,
+  }));
+}
+
+function recipeJson(recipe: Recipe) {
+  return { id: recipe.id, name: recipe.name, style: recipe.style, description: recipe.description, status: recipe.status };
+}
+
+export async function getRecipe(breweryId: number, id: number) {
+  const recipe = await findRecipe(breweryId, id);
+  const versions = await RecipeVersion.findAll({ where: { recipeId: id, breweryId }, order: [['number', 'DESC']] });
+  return { ...recipeJson(recipe), versions: await summaries(versions) };
+}
+
+/** Every number for a version's content on its brewhouse at its batch volume. */
+async function compute(breweryId: number, recipeName: string, equipmentProfileId: number, content: RecipeVersionContent, transaction?: Transaction): Promise<ComputedRecipe> {
+  const row = await findEquipment(breweryId, equipmentProfileId, transaction);
+  return computeRecipe(toRecipeInput(recipeName, content), equipmentAtVolume(equipmentFromRow(row), content.targets.batchVolumeL));
+}
+
+function figures(computed: ComputedRecipe, content: RecipeVersionContent) {
+  return { og: computed.og, fg: computed.fg, ibu: computed.ibu, srm: computed.srm, abvPct: computed.abvPct, batchVolumeL: content.targets.batchVolumeL };
+}
+
+async function writeVersion(actor: Actor, recipe: Recipe, input: SaveVersionInput, transaction: Transaction): Promise<RecipeVersion> {
+  const computed = await compute(actor.breweryId, recipe.name, input.equipmentProfileId, input.content, transaction);
+  const last = (await RecipeVersion.max<number, RecipeVersion>('number', { where: { recipeId: recipe.id }, transaction })) ?? 0;
+  const version = await RecipeVersion.create(
+    {
+      breweryId: actor.breweryId,
+      recipeId: recipe.id,
+      number: last + 1,
+      changeNote: input.changeNote,
+      authorId: actor.id,
+      equipmentProfileId: input.equipmentProfileId,
+      content: input.content,
+      ...figures(computed, input.content),
+      frozenAt: null,
+      lastUsedAt: null,
+    },
+    { transaction },
+  );
+  recipe.changed('updatedAt', true);
+  await recipe.save({ transaction });
+  return version;
+}
+
+export async function createRecipe(actor: Actor, input: CreateRecipeInput) {
+  return sequelize.transaction(async (transaction) => {
+    const { name, style, description, status, ...first } = input;
+    const recipe = await Recipe.create({ breweryId: actor.breweryId, name, style, description, status }, { transaction });
+    const version = await writeVersion(actor, recipe, first, transaction);
+    return { ...recipeJson(recipe), versionId: version.id, versionNumber: version.number };
+  });
+}
+
+export async function updateRecipe(breweryId: number, id: number, input: UpdateRecipeInput) {
+  const recipe = await findRecipe(breweryId, id);
+  await recipe.update(input);
+  return recipeJson(recipe);
+}
+
+async function versionOf(breweryId: number, recipeId: number, versionId: number, transaction?: Transaction, lock = false) {
+  const found = await findVersion(breweryId, versionId, transaction, lock);
+  if (found.recipe.id !== recipeId) throw notFound('This recipe version');
+  return found;
+}
+
+export async function getVersion(breweryId: number, recipeId: number, versionId: number) {
+  const { version, recipe } = await versionOf(breweryId, recipeId, versionId);
+  const computed = await compute(breweryId, recipe.name, version.equipmentProfileId, version.content);
+  const [summary] = await summaries([version]);
+  return { recipe: recipeJson(recipe), version: { ...summary!, content: version.content }, computed };
+}
+
+/** Saves the next version of a recipe (from the editor's content, whatever version it started from). */
+export async function addVersion(actor: Actor, recipeId: number, input: SaveVersionInput) {
+  return sequelize.transaction(async (transaction) => {
+    const recipe = await findRecipe(actor.breweryId, recipeId, transaction);
+    const version = await writeVersion(actor, recipe, input, transaction);
+    return { id: version.id, number: version.number };
+  });
+}
+
+/** Edits a version in place; a version a batch has used is frozen (409: save it as the next version). */
+export async function updateVersion(actor: Actor, recipeId: number, versionId: number, input: SaveVersionInput) {
+  return sequelize.transaction(async (transaction) => {
+    const { version, recipe } = await versionOf(actor.breweryId, recipeId, versionId, transaction, true);
+    if (version.frozenAt) throw conflict(`Version ${version.number} has been used by a batch and cannot change. Save your edits as the next version.`);
+    const computed = await compute(actor.breweryId, recipe.name, input.equipmentProfileId, input.content, transaction);
+    await version.update(
+      { changeNote: input.changeNote, equipmentProfileId: input.equipmentProfileId, content: input.content, authorId: actor.id, ...figures(computed, input.content) },
+      { transaction },
+    );
+    return { id: version.id, number: version.number };
+  });
+}
+
+/** Saves a version scaled to another brewhouse or volume as the recipe's next version. */
+export async function saveScaledVersion(actor: Actor, recipeId: number, versionId: number, input: SaveScaledInput) {
+  return sequelize.transaction(async (transaction) => {
+    await versionOf(actor.breweryId, recipeId, versionId, transaction);
+    const s = await scaleVersion(actor.breweryId, versionId, input, transaction);
+    const { grainBill, hops, water } = s.scaled.recipe;
+    const old = s.version.content;
+    const content: RecipeVersionContent = {
+      ...old,
+      grainBill,
+      // The scaled hops keep their order; the form (pellet, whole) is the brewer's, not the maths'.
+      hops: hops.map((h, i) => ({ ...h, form: old.hops[i]!.form })),
+      ...(water ? { water } : {}),
+      targets: { ...old.targets, batchVolumeL: s.target.batchVolumeL },
+    };
+    const version = await writeVersion(actor, s.recipe, { changeNote: input.changeNote, equipmentProfileId: s.targetEquipmentId, content }, transaction);
+    return { id: version.id, number: version.number };
+  });
+}
+
+export interface Difference {
+  path: string;
+  a: string | number | boolean | null;
+  b: string | number | boolean | null;
+}
+
+type Leaf = string | number | boolean | null;
+
+function flatten(value: unknown, prefix: string, out: Map<string, Leaf>): void {
+  if (value !== null && typeof value === 'object') {
+    for (const [k, v] of Object.entries(value)) flatten(v, prefix ? `${prefix}.${k}` : k, out);
+  } else if (value !== undefined) {
+    out.set(prefix, value as Leaf);
+  }
+}
+
+/** Every leaf of two documents that differs, by dotted path (a missing side is null). */
+export function differences(a: unknown, b: unknown): Difference[] {
+  const fa = new Map<string, Leaf>();
+  const fb = new Map<string, Leaf>();
+  flatten(a, '', fa);
+  flatten(b, '', fb);
+  const paths = [...new Set([...fa.keys(), ...fb.keys()])];
+  return paths.filter((p) => fa.get(p) !== fb.get(p)).map((p) => ({ path: p, a: fa.get(p) ?? null, b: fb.get(p) ?? null }));
+}
+
+/** Two versions side by side: both contents and computed figures, and what changed. */
+export async function compareVersions(breweryId: number, recipeId: number, a: number, b: number) {
+  const [left, right] = await Promise.all([getVersion(breweryId, recipeId, a), getVersion(breweryId, recipeId, b)]);
+  const pick = (v: typeof left) => ({
+    equipmentProfileId: v.version.equipmentProfileId,
+    changeNote: v.version.changeNote,
+    content: v.version.content,
+    computed: { og: v.computed.og, fg: v.computed.fg, abvPct: v.computed.abvPct, ibu: v.computed.ibu, srm: v.computed.srm, buGu: v.computed.buGu, strikeTempC: v.computed.strikeTempC },
+  });
+  return { recipe: left.recipe, a: left, b: right, differences: differences(pick(left), pick(right)) };
+}

@@ -1,0 +1,337 @@
+/**
+ * Recipes, their versions, equipment profiles and the ingredient library.
+ * One schema per resource: the editor's resolver, the API's validator and the type.
+ * A version's content mirrors `RecipeInput` from shared/brewing (so computeRecipe and
+ * scaleRecipe do every calculation) plus what the brew day needs beyond the maths.
+ */
+import { z } from 'zod';
+import type { AdjunctAddition, EquipmentProfile, RecipeInput } from '../brewing';
+
+const num = (label: string, min: number, max: number) =>
+  z
+    .number({ error: `${label}: enter a number` })
+    .refine(Number.isFinite, `${label}: enter a number`)
+    .min(min, `${label} must be at least ${min}`)
+    .max(max, `${label} must be at most ${max}`);
+
+const name = (label: string, max = 80) => z.string().trim().min(1, `Enter ${label}`).max(max, `Use at most ${max} characters`);
+
+export const idParam = z.coerce.number({ error: 'Must be a number' }).int('Must be a whole number').positive('Must be positive').max(2147483647);
+
+// ---------------------------------------------------------------- fermentables
+
+export const FERMENTABLE_STAGES = ['mash', 'kettle', 'fermenter'] as const;
+
+const potentialSchema = z.union([
+  z.strictObject({ ppg: num('Potential (ppg)', 1, 46.2) }),
+  z.strictObject({ extractPct: num('Extract (%)', 1, 100) }),
+]);
+
+const fermentableBase = {
+  name: name('a fermentable'),
+  potential: potentialSchema,
+  colourLovibond: num('Colour (°L)', 0, 600),
+  stage: z.enum(FERMENTABLE_STAGES),
+};
+
+export const grainBillSchema = z.discriminatedUnion('mode', [
+  z.strictObject({
+    mode: z.literal('weight'),
+    items: z.array(z.strictObject({ ...fermentableBase, weightKg: num('Weight (kg)', 0.001, 20000) })).min(1, 'Add at least one fermentable').max(40),
+  }),
+  z.strictObject({
+    mode: z.literal('percent'),
+    targetOg: num('Target OG', 1.001, 1.2),
+    items: z.array(z.strictObject({ ...fermentableBase, percent: num('Share (%)', 0.01, 100) })).min(1, 'Add at least one fermentable').max(40),
+  }),
+]);
+
+// ------------------------------------------------------------------------ hops
+
+export const HOP_USES = ['boil', 'whirlpool', 'dryHop'] as const;
+export const HOP_FORMS = ['pellet', 'whole', 'extract'] as const;
+
+export const hopSchema = z
+  .strictObject({
+    name: name('a hop variety'),
+    alphaAcidPct: num('Alpha acid (%)', 0.1, 30),
+    form: z.enum(HOP_FORMS),
+    use: z.enum(HOP_USES),
+    minutes: num('Minutes', 0, 240),
+    whirlpoolTempC: num('Whirlpool temperature (°C)', 40, 100).optional(),
+    weightG: num('Weight (g)', 0.1, 500000),
+  })
+  .refine((h) => h.use !== 'whirlpool' || h.whirlpoolTempC !== undefined, {
+    path: ['whirlpoolTempC'],
+    message: 'A whirlpool addition needs its stand temperature',
+  });
+
+// ----------------------------------------------------------------------- water
+
+export const SALT_IDS = ['gypsum', 'calciumChlorideDihydrate', 'calciumChlorideAnhydrous', 'epsomSalt', 'tableSalt', 'bakingSoda', 'chalk'] as const;
+
+export const SALT_LABELS: Record<(typeof SALT_IDS)[number], string> = {
+  gypsum: 'Gypsum (CaSO₄·2H₂O)',
+  calciumChlorideDihydrate: 'Calcium chloride (CaCl₂·2H₂O)',
+  calciumChlorideAnhydrous: 'Calcium chloride, anhydrous',
+  epsomSalt: 'Epsom salt (MgSO₄·7H₂O)',
+  tableSalt: 'Table salt (NaCl)',
+  bakingSoda: 'Baking soda (NaHCO₃)',
+  chalk: 'Chalk (CaCO₃)',
+};
+
+const ppm = (label: string) => num(`${label} (ppm)`, 0, 2000);
+export const waterProfileSchema = z.strictObject({
+  calciumPpm: ppm('Calcium'),
+  magnesiumPpm: ppm('Magnesium'),
+  sodiumPpm: ppm('Sodium'),
+  sulfatePpm: ppm('Sulfate'),
+  chloridePpm: ppm('Chloride'),
+  bicarbonatePpm: ppm('Bicarbonate'),
+});
+
+const saltAdditionSchema = z.strictObject({ salt: z.enum(SALT_IDS), grams: num('Salt (g)', 0, 100000) });
+
+export const waterPlanSchema = z.discriminatedUnion('mode', [
+  z.strictObject({
+    mode: z.literal('additions'),
+    source: waterProfileSchema,
+    mashSalts: z.array(saltAdditionSchema).max(7),
+    spargeSalts: z.array(saltAdditionSchema).max(7),
+  }),
+  z.strictObject({
+    mode: z.literal('target'),
+    source: waterProfileSchema,
+    target: waterProfileSchema,
+    allowedSalts: z.array(z.enum(SALT_IDS)).min(1, 'Allow at least one salt').max(7),
+  }),
+]);
+
+// ------------------------------------------------------------------------ mash
+
+export const MASH_METHODS = ['infusion', 'directHeat', 'recirculate'] as const;
+
+export const mashSchema = z.strictObject({
+  thicknessLPerKg: num('Mash thickness (L/kg)', 1.5, 6).optional(),
+  grainTempC: num('Grain temperature (°C)', -10, 45),
+  steps: z
+    .array(
+      z.strictObject({
+        name: name('a rest name', 60),
+        tempC: num('Rest temperature (°C)', 30, 80),
+        minutes: num('Rest time (min)', 0, 240),
+        method: z.enum(MASH_METHODS),
+        infusionWaterTempC: num('Infusion water (°C)', 60, 100).optional(),
+      }),
+    )
+    .min(1, 'Add the mash-in rest')
+    .max(8),
+});
+
+// ----------------------------------------------------------- adjuncts & spices
+
+export const DOSE_BASES = ['lbPerUsGal', 'ozPerUsGal', 'kgPerHl', 'gPerHl', 'gPerL', 'tspPer5UsGal', 'mlPerHl', 'fixedPerBatch'] as const;
+export const ADJUNCT_CATEGORIES = ['fruit', 'vegetable', 'spice', 'herb', 'sugar', 'honey', 'lactose', 'other'] as const;
+export const ADJUNCT_STAGES = ['mash', 'boil', 'whirlpool', 'fermenter', 'packaging'] as const;
+
+const doseRuleSchema = z
+  .strictObject({
+    basis: z.enum(DOSE_BASES),
+    low: num('Low dose', 0, 100000),
+    high: num('High dose', 0, 100000),
+    fixedUnit: z.enum(['kg', 'mL', 'each']).optional(),
+  })
+  .refine((r) => r.high >= r.low, { path: ['high'], message: 'The high dose must not be below the low dose' });
+
+const additionBase = {
+  name: name('the addition'),
+  category: z.enum(ADJUNCT_CATEGORIES),
+  stage: z.enum(ADJUNCT_STAGES),
+  boilMinutes: num('Boil minute', 0, 240).optional(),
+  rule: doseRuleSchema,
+  level: num('Dose', 0, 100000),
+  /** How it goes in, e.g. "in mesh bags, lifted out at knockout". */
+  howAdded: z.string().trim().max(200, 'Use at most 200 characters'),
+};
+
+const boilMinuteRequired = (a: { stage: string; boilMinutes?: number | undefined }) => a.stage !== 'boil' || a.boilMinutes !== undefined;
+
+/** A prepared adjunct: the dose rule plus what is done to it before it goes in. */
+export const adjunctSchema = z.strictObject({
+  ...additionBase,
+  preparation: z
+    .array(z.strictObject({ text: z.string().trim().min(1, 'Describe the step').max(300, 'Use at most 300 characters') }))
+    .max(12),
+}).refine(boilMinuteRequired, { path: ['boilMinutes'], message: 'A boil addition needs its minute' });
+
+export const spiceSchema = z.strictObject(additionBase).refine(boilMinuteRequired, { path: ['boilMinutes'], message: 'A boil addition needs its minute' });
+
+// ------------------------------------------------------------- yeast/ferment
+
+export const YEAST_TYPES = ['ale', 'lager', 'wheat', 'saison', 'wild', 'other'] as const;
+
+export const yeastSchema = z
+  .strictObject({
+    name: name('the yeast'),
+    strainType: z.enum(YEAST_TYPES),
+    attenuationPct: num('Expected attenuation (%)', 40, 100),
+    attenuationLowPct: num('Attenuation low (%)', 40, 100),
+    attenuationHighPct: num('Attenuation high (%)', 40, 100),
+    pitchTempC: num('Pitch temperature (°C)', 2, 35),
+    pitchRateMillionCellsPerMlPerPlato: num('Pitch rate', 0.1, 3).optional(),
+  })
+  .refine((y) => y.attenuationHighPct >= y.attenuationLowPct, { path: ['attenuationHighPct'], message: 'High must not be below low' });
+
+export const fermentationSchema = z.strictObject({
+  primaryTempC: num('Primary temperature (°C)', 2, 35),
+  /** Raise for the diacetyl rest when gravity is this many points above the expected FG. */
+  dRestPointsAboveFg: num('D-rest trigger (points above FG)', 0, 20).optional(),
+  dRestTempC: num('D-rest temperature (°C)', 2, 30).optional(),
+  crashTempC: num('Crash temperature (°C)', -2, 15),
+  co2Volumes: num('Target CO₂ (volumes)', 1, 4.5),
+});
+
+export const targetsSchema = z.strictObject({
+  og: num('Target OG', 1.001, 1.2),
+  fg: num('Target FG', 0.99, 1.1),
+  ibu: num('Target IBU', 0, 150),
+  srm: num('Target SRM', 0, 80),
+  batchVolumeL: num('Batch volume (L)', 1, 20000),
+});
+
+// ------------------------------------------------------------ version content
+
+export const recipeContentSchema = z.strictObject({
+  grainBill: grainBillSchema,
+  hops: z.array(hopSchema).max(30),
+  yeast: yeastSchema,
+  mash: mashSchema,
+  water: waterPlanSchema.optional(),
+  adjuncts: z.array(adjunctSchema).max(10),
+  spices: z.array(spiceSchema).max(10),
+  fermentation: fermentationSchema,
+  targets: targetsSchema,
+  notes: z.string().trim().max(2000, 'Use at most 2000 characters'),
+});
+export type RecipeVersionContent = z.infer<typeof recipeContentSchema>;
+export type AdjunctPrep = z.infer<typeof adjunctSchema>;
+export type SpiceAddition = z.infer<typeof spiceSchema>;
+
+export const RECIPE_STATUSES = ['draft', 'active', 'retired'] as const;
+export type RecipeStatus = (typeof RECIPE_STATUSES)[number];
+
+const recipeMeta = {
+  name: name('the recipe name', 120),
+  style: z.string().trim().max(80, 'Use at most 80 characters'),
+  description: z.string().trim().max(2000, 'Use at most 2000 characters'),
+  status: z.enum(RECIPE_STATUSES),
+};
+
+const versionBody = {
+  changeNote: z.string().trim().min(1, 'Say what changed').max(300, 'Use at most 300 characters'),
+  equipmentProfileId: idParam,
+  content: recipeContentSchema,
+};
+
+export const createRecipeSchema = z.strictObject({ ...recipeMeta, ...versionBody });
+export type CreateRecipeInput = z.infer<typeof createRecipeSchema>;
+
+export const updateRecipeSchema = z.strictObject(recipeMeta).partial();
+export type UpdateRecipeInput = z.infer<typeof updateRecipeSchema>;
+
+/** Saving a version: edit in place (PATCH, unfrozen only) or as the next version (POST). */
+export const saveVersionSchema = z.strictObject(versionBody);
+export type SaveVersionInput = z.infer<typeof saveVersionSchema>;
+
+/** The target of a scale: another equipment profile, a typed batch volume, or both. */
+export const scaleQuerySchema = z
+  .strictObject({
+    equipmentProfileId: idParam.optional(),
+    batchVolumeL: z.coerce.number({ error: 'Batch volume: enter a number' }).min(1, 'Batch volume must be at least 1 L').max(20000, 'Batch volume must be at most 20000 L').optional(),
+  })
+  .refine((q) => q.equipmentProfileId !== undefined || q.batchVolumeL !== undefined, {
+    path: ['equipmentProfileId'],
+    message: 'Choose an equipment profile or type a batch volume',
+  });
+export type ScaleTarget = z.infer<typeof scaleQuerySchema>;
+
+export const saveScaledSchema = z.strictObject({
+  changeNote: versionBody.changeNote,
+  equipmentProfileId: idParam.optional(),
+  batchVolumeL: z.number().min(1, 'Batch volume must be at least 1 L').max(20000, 'Batch volume must be at most 20000 L').optional(),
+});
+export type SaveScaledInput = z.infer<typeof saveScaledSchema>;
+
+export const compareQuerySchema = z.strictObject({ a: idParam, b: idParam });
+
+// ------------------------------------------------------------------ equipment
+
+export const equipmentSchema = z.strictObject({
+  name: name('a name', 80),
+  batchVolumeL: num('Batch volume into the fermenter (L)', 1, 20000),
+  brewhouseEfficiency: num('Brewhouse efficiency', 0.3, 1),
+  boilOffLPerHour: num('Boil-off (L/h)', 0, 2000),
+  boilMinutes: num('Boil time (min)', 0, 240),
+  mashTunDeadSpaceL: num('Mash tun dead space (L)', 0, 2000),
+  kettleDeadSpaceL: num('Kettle dead space (L)', 0, 2000),
+  trubChillerLossL: num('Trub and chiller loss (L)', 0, 2000),
+  fermenterLossL: num('Fermenter loss (L)', 0, 2000),
+  grainAbsorptionLPerKg: num('Grain absorption (L/kg)', 0.3, 2),
+  maxMashTunVolumeL: num('Mash tun capacity (L)', 1, 40000),
+  maxKettleVolumeL: num('Kettle capacity (L)', 1, 40000),
+  mashThicknessLPerKg: num('Mash thickness (L/kg)', 1.5, 6),
+});
+export type EquipmentInput = z.infer<typeof equipmentSchema>;
+
+// ------------------------------------------------------------------ ingredients
+
+export const INGREDIENT_KINDS = ['fermentable', 'hop', 'yeast', 'adjunct', 'salt'] as const;
+export type IngredientKind = (typeof INGREDIENT_KINDS)[number];
+
+const optionalNum = (label: string, min: number, max: number) => num(label, min, max).optional();
+
+export const ingredientSchema = z.strictObject({
+  kind: z.enum(INGREDIENT_KINDS),
+  name: name('a name', 80),
+  /** Typical values: a starting point, not a lot's analysis. */
+  ppg: optionalNum('Potential (ppg)', 1, 46.2),
+  colourLovibond: optionalNum('Colour (°L)', 0, 600),
+  alphaAcidPct: optionalNum('Alpha acid (%)', 0.1, 30),
+  attenuationPct: optionalNum('Attenuation (%)', 40, 100),
+  notes: z.string().trim().max(300, 'Use at most 300 characters'),
+});
+export type IngredientInput = z.infer<typeof ingredientSchema>;
+export const ingredientQuerySchema = z.strictObject({ kind: z.enum(INGREDIENT_KINDS).optional() });
+
+// ------------------------------------------------------------- to the maths
+
+/** The calculation view of a version: what computeRecipe and scaleRecipe take. */
+export function toRecipeInput(recipeName: string, content: RecipeVersionContent): RecipeInput {
+  const addition = ({ name, category, stage, boilMinutes, rule, level }: SpiceAddition | AdjunctPrep): AdjunctAddition => ({
+    name,
+    category,
+    stage,
+    ...(boilMinutes === undefined ? {} : { boilMinutes }),
+    rule,
+    level,
+  });
+  return {
+    name: recipeName,
+    grainBill: content.grainBill,
+    hops: content.hops.map(({ form: _form, ...hop }) => hop),
+    yeast: {
+      name: content.yeast.name,
+      attenuationPct: content.yeast.attenuationPct,
+      ...(content.yeast.pitchRateMillionCellsPerMlPerPlato === undefined ? {} : { pitchRateMillionCellsPerMlPerPlato: content.yeast.pitchRateMillionCellsPerMlPerPlato }),
+    },
+    mash: content.mash,
+    ...(content.water ? { water: content.water } : {}),
+    // Prepared adjuncts first, then spices: computed.adjuncts[i] lines up with this order.
+    adjuncts: [...content.adjuncts.map(addition), ...content.spices.map(addition)],
+  };
+}
+
+/** The brewhouse a version is computed on: its equipment profile at the version's batch volume. */
+export function equipmentAtVolume(profile: EquipmentInput, batchVolumeL: number): EquipmentProfile {
+  return { ...profile, batchVolumeL };
+}
