@@ -38,7 +38,11 @@ async function main() {
 
   if (process.env.KW_SKIP_BUILD !== '1') {
     console.log('Building the client ...');
-    execFileSync('npx', ['vite', 'build', '--logLevel', 'warn'], { cwd: ROOT, stdio: 'inherit' });
+    execFileSync('npx', ['vite', 'build', '--logLevel', 'warn'], {
+      cwd: ROOT,
+      stdio: 'inherit',
+      env: { ...process.env, NODE_ENV: 'production' },
+    });
   }
   const { startServer } = await import('../server/index');
   await startServer();

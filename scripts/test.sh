@@ -17,7 +17,8 @@ echo "== Type check (tsc --noEmit)"
 npx tsc --noEmit || status=1
 
 echo "== Client build (for the browser tests)"
-npx vite build --logLevel warn || status=1
+# NODE_ENV=test is exported for the tests; the client is always built for production.
+NODE_ENV=production npx vite build --logLevel warn || status=1
 
 echo "== Vitest: unit, API, component and browser tests"
 npx vitest run "$@" || status=1
