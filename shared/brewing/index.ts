@@ -122,3 +122,4 @@ export {
   type FermentationPrediction,
 } from './fermentation';
 export { KEG_SIZES, KEG_SIZE_IDS, lineVolumeL, packagingTotals, type KegSize, type PackageLine, type PackagingTotals } from './packaging';
+export { achievedEfficiency } from './efficiency';

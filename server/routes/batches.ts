@@ -1,0 +1,122 @@
+import { z } from 'zod';
+import { defineRouter, actor } from './define';
+import { BREWING_ROLES } from '../../shared/schemas/roles';
+import { batchIdParams, batchListQuery, changeStatusSchema, createBatchSchema } from '../../shared/schemas/batches';
+import { logEntryInputSchema, signOffSchema } from '../../shared/schemas/batch-log';
+import * as batches from '../services/batches';
+import { appendLogEntry, logEntries, toLogEntry, verifyChain, writeMetaFromHeaders } from '../services/batch-log';
+import { signOffBrewDay } from '../services/signatures';
+import type { Request } from 'express';
+import { BatchLogEntry } from '../models';
+import { methodNotAllowed, notFound } from '../errors';
+import { signInLimiter } from '../middlewares/rate-limit';
+
+const id = batchIdParams.shape.id;
+const entryParams = z.strictObject({ id, entryId: id });
+/** Entries are append-only: a change or delete answers 405 (after the usual 404 for another brewery's batch). */
+const refuseChange = async (req: Request) => {
+  const entry = await BatchLogEntry.findOne({ where: { id: Number(req.params.entryId), batchId: Number(req.params.id), breweryId: actor(req).breweryId } });
+  if (!entry) throw notFound('This log entry');
+  throw methodNotAllowed('Log entries are never changed or deleted. Add a correction that points at the entry instead.');
+};
+
+/** Batches and their logs: the brewing side only (the taproom manager reads released beers elsewhere). */
+export const batchesRouter = defineRouter('/api/batches', [
+  {
+    method: 'get',
+    path: '/',
+    access: BREWING_ROLES,
+    query: batchListQuery,
+    handler: async (req, res) => {
+      res.json(await batches.listBatches(actor(req).breweryId, req.query as unknown as z.infer<typeof batchListQuery>));
+    },
+  },
+  {
+    method: 'post',
+    path: '/',
+    access: ['head_brewer'],
+    body: createBatchSchema,
+    handler: async (req, res) => {
+      const batch = await batches.planBatch(actor(req), req.body);
+      res.status(201).json(await batches.batchDetail(batch.breweryId, batch.id));
+    },
+  },
+  {
+    method: 'get',
+    path: '/:id',
+    access: BREWING_ROLES,
+    params: batchIdParams,
+    handler: async (req, res) => {
+      res.json(await batches.batchDetail(actor(req).breweryId, Number(req.params.id)));
+    },
+  },
+  {
+    method: 'post',
+    path: '/:id/status',
+    access: BREWING_ROLES,
+    params: batchIdParams,
+    body: changeStatusSchema,
+    handler: async (req, res) => {
+      await batches.changeBatchStatus(actor(req), Number(req.params.id), req.body);
+      res.json(await batches.batchDetail(actor(req).breweryId, Number(req.params.id)));
+    },
+  },
+  {
+    method: 'put',
+    path: '/:id/vessel',
+    access: BREWING_ROLES,
+    params: batchIdParams,
+    body: z.strictObject({ vesselId: id }),
+    handler: async (req, res) => {
+      const vessel = await batches.moveToVessel(actor(req), Number(req.params.id), req.body.vesselId);
+      res.json({ id: vessel.id, name: vessel.name, currentBatchId: vessel.currentBatchId });
+    },
+  },
+  {
+    method: 'get',
+    path: '/:id/log',
+    access: BREWING_ROLES,
+    params: batchIdParams,
+    handler: async (req, res) => {
+      await batches.findBatch(actor(req).breweryId, Number(req.params.id));
+      res.json((await logEntries(Number(req.params.id))).entries);
+    },
+  },
+  {
+    method: 'post',
+    path: '/:id/log',
+    access: BREWING_ROLES,
+    params: batchIdParams,
+    body: logEntryInputSchema,
+    handler: async (req, res) => {
+      const meta = writeMetaFromHeaders((name) => req.get(name));
+      const entry = await appendLogEntry(actor(req), Number(req.params.id), req.body, meta);
+      res.status(201).json(toLogEntry(entry));
+    },
+  },
+  { method: 'patch', path: '/:id/log/:entryId', access: BREWING_ROLES, params: entryParams, handler: refuseChange },
+  { method: 'put', path: '/:id/log/:entryId', access: BREWING_ROLES, params: entryParams, handler: refuseChange },
+  { method: 'delete', path: '/:id/log/:entryId', access: BREWING_ROLES, params: entryParams, handler: refuseChange },
+  {
+    method: 'get',
+    path: '/:id/log/verify',
+    access: BREWING_ROLES,
+    params: batchIdParams,
+    handler: async (req, res) => {
+      await batches.findBatch(actor(req).breweryId, Number(req.params.id));
+      res.json(await verifyChain(Number(req.params.id)));
+    },
+  },
+  {
+    method: 'post',
+    path: '/:id/sign-off',
+    access: ['head_brewer'],
+    before: [signInLimiter],
+    params: batchIdParams,
+    body: signOffSchema,
+    handler: async (req, res) => {
+      const meta = writeMetaFromHeaders((name) => req.get(name));
+      res.status(201).json(await signOffBrewDay(actor(req), Number(req.params.id), req.body.password, meta));
+    },
+  },
+]);

@@ -1,0 +1,140 @@
+/**
+ * The brew day as steps, built from a batch's frozen plan, and planned-versus-actual figures built from
+ * its log. Pure: the tablet screen and the API use the same functions.
+ */
+import { achievedEfficiency, type ComputedRecipe } from '../brewing';
+import type { Measurements } from '../schemas/batch-log';
+import type { BatchActuals, FrozenPlan } from '../schemas/batches';
+
+export type MeasureKey = keyof Measurements;
+
+export interface Addition {
+  what: string;
+  /** Weight in grams, or an amount with its unit for adjuncts. */
+  amount: { value: number; unit: 'g' | 'kg' | 'mL' | 'each' };
+}
+
+export interface BrewDayStep {
+  key: string;
+  label: string;
+  /** What to measure when marking the step done, with the expected value beside each. */
+  asks: MeasureKey[];
+  expected: Partial<Record<MeasureKey, number>>;
+  additions: Addition[];
+  /** Boil additions: minutes remaining in the boil when it goes in. */
+  boilMinute?: number;
+  /** Hot liquid or other hazard the screen shows a caution for. */
+  hot?: boolean;
+}
+
+const grams = (g: number): Addition['amount'] => ({ value: g, unit: 'g' });
+
+/** Additions timed in the boil (hops, kettle sugars, adjuncts and spices), by minutes remaining, latest first. */
+export function boilAdditions(plan: FrozenPlan): { minute: number; additions: Addition[] }[] {
+  const { computed, equipment, recipe } = plan;
+  const byMinute = new Map<number, Addition[]>();
+  const add = (minute: number, a: Addition) => byMinute.set(minute, [...(byMinute.get(minute) ?? []), a]);
+  for (const hop of computed.hops) if (hop.use === 'boil') add(hop.minutes, { what: `${hop.name} hops`, amount: grams(hop.weightG) });
+  // Kettle sugars go in at the start of the boil so they dissolve fully (common practice, no source).
+  for (const f of computed.fermentables) if (f.stage === 'kettle') add(equipment.boilMinutes, { what: f.name, amount: { value: f.weightKg, unit: 'kg' } });
+  computed.adjuncts.forEach((a, i) => {
+    if (a.stage !== 'boil') return;
+    add(recipe.adjuncts[i]?.boilMinutes ?? 0, { what: a.name, amount: { value: a.amount.value, unit: a.amount.unit } });
+  });
+  return [...byMinute.entries()].sort((a, b) => b[0] - a[0]).map(([minute, additions]) => ({ minute, additions }));
+}
+
+/** The brew day in order: water, mash, lauter, boil with every addition at its minute, whirlpool, knockout, pitch. */
+export function brewDaySteps(plan: FrozenPlan): BrewDayStep[] {
+  const c: ComputedRecipe = plan.computed;
+  const v = c.volumes;
+  const steps: BrewDayStep[] = [];
+  const step = (s: Omit<BrewDayStep, 'asks' | 'expected' | 'additions'> & Partial<BrewDayStep>) =>
+    steps.push({ asks: [], expected: {}, additions: [], ...s });
+
+  step({ key: 'strike-water', label: 'Heat strike water', asks: ['tempC', 'volumeL'], expected: { tempC: c.strikeTempC, volumeL: v.strikeL }, hot: true });
+  const [first, ...rest] = c.mashSteps;
+  step({
+    key: 'mash-in',
+    label: `Mash in${first ? `: ${first.name}` : ''}`,
+    asks: ['tempC', 'ph'],
+    expected: { tempC: first?.tempC },
+    additions: c.fermentables.filter((f) => f.stage === 'mash').map((f) => ({ what: f.name, amount: { value: f.weightKg, unit: 'kg' } })),
+    hot: true,
+  });
+  rest.forEach((m, i) =>
+    step({ key: `mash-rest-${i + 2}`, label: `Mash rest: ${m.name}`, asks: ['tempC'], expected: { tempC: m.tempC }, hot: true }),
+  );
+  step({ key: 'recirculate', label: 'Recirculate until the wort runs clear' });
+  step({ key: 'sparge-start', label: 'Start sparge', asks: ['tempC'], expected: { volumeL: v.spargeL }, hot: true });
+  step({ key: 'sparge-end', label: 'End sparge', asks: ['volumeL', 'gravitySg'], expected: { volumeL: v.preBoilL, gravitySg: c.preBoilGravity } });
+  step({ key: 'boil-start', label: 'Start the boil', asks: ['volumeL', 'gravitySg'], expected: { volumeL: v.preBoilL, gravitySg: c.preBoilGravity }, hot: true });
+  for (const { minute, additions } of boilAdditions(plan)) {
+    step({ key: `boil-${minute}`, label: `Boil addition at ${minute} min`, additions, boilMinute: minute, hot: true });
+  }
+  step({ key: 'flame-out', label: 'Flame out', asks: ['volumeL'], expected: { volumeL: v.postBoilL }, hot: true });
+  const whirlpool = c.hops.filter((h) => h.use === 'whirlpool').map((h) => ({ what: `${h.name} hops`, amount: grams(h.weightG) }));
+  const whirlpoolAdjuncts = c.adjuncts.filter((a) => a.stage === 'whirlpool').map((a) => ({ what: a.name, amount: { value: a.amount.value, unit: a.amount.unit } }));
+  step({ key: 'whirlpool-start', label: 'Start whirlpool', asks: ['tempC'], additions: [...whirlpool, ...whirlpoolAdjuncts], hot: true });
+  step({ key: 'whirlpool-end', label: 'End whirlpool and rest', hot: true });
+  step({ key: 'knockout-start', label: 'Start knockout', asks: ['tempC'], hot: true });
+  step({ key: 'knockout-end', label: 'End knockout', asks: ['volumeL', 'gravitySg', 'tempC'], expected: { volumeL: v.knockoutL, gravitySg: c.og } });
+  step({ key: 'oxygenate', label: 'Oxygenate the wort' });
+  step({ key: 'pitch-yeast', label: `Pitch yeast: ${plan.recipe.yeast.name}`, asks: ['tempC'] });
+  return steps;
+}
+
+/** A log entry as these functions read it (server rows and API answers both fit). */
+export interface EntryLike {
+  id: number;
+  kind: string;
+  stepKey: string | null;
+  data: Record<string, unknown>;
+  correctsEntryId: number | null;
+}
+
+/** Each entry's measurements after corrections: a correction's measurements replace those of the entry it corrects. */
+export function effectiveMeasurements(entries: readonly EntryLike[]): Map<number, { stepKey: string | null; measurements: Measurements }> {
+  const out = new Map<number, { stepKey: string | null; measurements: Measurements }>();
+  for (const e of entries) {
+    const m = e.data.measurements as Measurements | undefined;
+    if (e.kind === 'correction' && e.correctsEntryId !== null) {
+      const target = out.get(e.correctsEntryId);
+      if (target && m) out.set(e.correctsEntryId, { ...target, measurements: { ...target.measurements, ...m } });
+    } else if (m) {
+      out.set(e.id, { stepKey: e.stepKey, measurements: m });
+    }
+  }
+  return out;
+}
+
+/** Planned beside actual: mash temperature, pre-boil gravity and volume, OG, knockout volume, efficiency achieved. */
+export function batchActuals(plan: FrozenPlan, entries: readonly EntryLike[]): BatchActuals {
+  const latest = new Map<string, Measurements>();
+  for (const { stepKey, measurements } of effectiveMeasurements(entries).values()) {
+    if (stepKey) latest.set(stepKey, { ...latest.get(stepKey), ...measurements });
+  }
+  const c = plan.computed;
+  const og = latest.get('knockout-end')?.gravitySg ?? null;
+  const knockoutL = latest.get('knockout-end')?.volumeL ?? null;
+  return {
+    mashTempC: { planned: c.mashSteps[0]?.tempC ?? 0, actual: latest.get('mash-in')?.tempC ?? null },
+    preBoilGravity: { planned: c.preBoilGravity, actual: latest.get('boil-start')?.gravitySg ?? latest.get('sparge-end')?.gravitySg ?? null },
+    preBoilVolumeL: { planned: c.volumes.preBoilL, actual: latest.get('boil-start')?.volumeL ?? latest.get('sparge-end')?.volumeL ?? null },
+    og: { planned: c.og, actual: og },
+    knockoutVolumeL: { planned: c.volumes.knockoutL, actual: knockoutL },
+    brewhouseEfficiency: {
+      planned: plan.equipment.brewhouseEfficiency,
+      actual:
+        og !== null && knockoutL !== null
+          ? achievedEfficiency({
+              plannedEfficiency: plan.equipment.brewhouseEfficiency,
+              plannedOg: c.og,
+              plannedVolumeL: c.volumes.knockoutL,
+              actualOg: og,
+              actualVolumeL: knockoutL,
+            })
+          : null,
+    },
+  };
+}
