@@ -8,6 +8,9 @@ ensure_npm_packages
 ensure_debian mariadbd mariadb-server mariadb-client
 ensure_debian chromium chromium
 mkdir -p .data-test
+# Stop the test database at the end only if this run started it.
+started_db=1
+if [ -f .data-test/mariadb.pid ] && kill -0 "$(cat .data-test/mariadb.pid)" 2>/dev/null; then started_db=0; fi
 npx tsx scripts/test-setup.ts > .data-test/env.sh
 source .data-test/env.sh
 set +e
@@ -23,4 +26,5 @@ NODE_ENV=production npx vite build --logLevel warn || status=1
 echo "== Vitest: unit, API, component and browser tests"
 npx vitest run "$@" || status=1
 
+if [ "$started_db" = 1 ]; then npx tsx scripts/db-stop.ts test >/dev/null; fi
 exit $status
