@@ -5,6 +5,9 @@ import { recipesRouter } from './recipes';
 import { equipmentRouter } from './equipment';
 import { ingredientsRouter } from './ingredients';
 import { batchesRouter } from './batches';
+import { tastingRouter } from './tasting';
+import { batchAttachmentsRouter, attachmentsRouter } from './attachments';
+import { taproomRouter, releaseRouter } from './taproom';
 
 /** Every API router and where it is mounted. Each area adds its line here. */
 export const apiRouters: [string, Router][] = [
@@ -15,4 +18,9 @@ export const apiRouters: [string, Router][] = [
   ['/api/equipment', equipmentRouter],
   ['/api/ingredients', ingredientsRouter],
   ['/api/batches', batchesRouter],
+  ['/api/batches', tastingRouter],
+  ['/api/batches', batchAttachmentsRouter],
+  ['/api/batches', releaseRouter],
+  ['/api/attachments', attachmentsRouter],
+  ['/api/taproom', taproomRouter],
 ];

@@ -4,6 +4,9 @@ import { GetObjectCommand, PutObjectCommand, S3Client, S3ServiceException } from
 import { env } from '../config/env';
 import { HttpError, notFound } from '../errors';
 
+// The SDK version is pinned and the project runs on Node 20 (see package.json engines): skip its upgrade notice.
+process.env.AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED ??= 'true';
+
 const client = new S3Client({
   region: env.S3_REGION,
   endpoint: env.S3_ENDPOINT,

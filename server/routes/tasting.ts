@@ -1,0 +1,38 @@
+import { z } from 'zod';
+import { defineRouter, actor } from './define';
+import { methodNotAllowed } from '../errors';
+import { BREWING_ROLES } from '../../shared/schemas/roles';
+import { idParam } from '../../shared/schemas/taproom';
+import { tastingNoteInputSchema } from '../../shared/schemas/tasting';
+import * as tasting from '../services/tasting';
+
+const batchParams = z.strictObject({ batchId: idParam });
+const noteParams = z.strictObject({ batchId: idParam, noteId: idParam });
+const appendOnly = () => {
+  throw methodNotAllowed('Signed tasting notes cannot be changed or deleted. Add a correction that points at the note instead.');
+};
+
+export const tastingRouter = defineRouter('/api/batches', [
+  {
+    method: 'get',
+    path: '/:batchId/tasting-notes',
+    access: BREWING_ROLES,
+    params: batchParams,
+    handler: async (req, res) => {
+      res.json(await tasting.listTastingNotes(actor(req), Number(req.params.batchId)));
+    },
+  },
+  {
+    method: 'post',
+    path: '/:batchId/tasting-notes',
+    access: BREWING_ROLES,
+    params: batchParams,
+    body: tastingNoteInputSchema,
+    handler: async (req, res) => {
+      const { note, created } = await tasting.addTastingNote(actor(req), Number(req.params.batchId), req.body);
+      res.status(created ? 201 : 200).json(note);
+    },
+  },
+  { method: 'patch', path: '/:batchId/tasting-notes/:noteId', access: BREWING_ROLES, params: noteParams, handler: appendOnly },
+  { method: 'delete', path: '/:batchId/tasting-notes/:noteId', access: BREWING_ROLES, params: noteParams, handler: appendOnly },
+]);

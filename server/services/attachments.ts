@@ -1,0 +1,170 @@
+// Photos and lab sheets on batches: the type comes from the bytes, the key from us, the bytes go to object storage.
+import { randomUUID } from 'node:crypto';
+import { fileTypeFromBuffer } from 'file-type';
+import sharp from 'sharp';
+import multer from 'multer';
+import type { RequestHandler } from 'express';
+import { Op } from 'sequelize';
+import { Attachment, Batch, Release, TastingNote, User } from '../models';
+import type { AttachmentKind } from '../models/attachment';
+import { badRequest, HttpError, notFound, tooLarge } from '../errors';
+import { getObject, putObject } from './storage';
+import { findBatch } from './batches';
+
+/** The largest file a person may attach. */
+export const MAX_UPLOAD_BYTES = 15 * 1024 * 1024;
+const THUMBNAIL_PX = 480;
+
+/** Types accepted, as detected from the file's bytes (never from its name or the browser's claim). */
+const ACCEPTED: Record<string, { kind: AttachmentKind; extension: string }> = {
+  'application/pdf': { kind: 'document', extension: 'pdf' },
+  'image/jpeg': { kind: 'photo', extension: 'jpg' },
+  'image/png': { kind: 'photo', extension: 'png' },
+  'image/webp': { kind: 'photo', extension: 'webp' },
+};
+
+const unsupported = () =>
+  new HttpError(415, 'unsupported_type', 'Attach a photo (JPEG, PNG or WebP) or a PDF. This file is none of those.');
+
+const parser = multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_UPLOAD_BYTES, files: 1, fields: 5 } }).single('file');
+
+/** Reads one multipart file into memory, refusing anything over the cap with 413 before it is all buffered. */
+export const receiveFile: RequestHandler = (req, res, next) => {
+  parser(req, res, (err: unknown) => {
+    if (!err) return next();
+    if (err instanceof multer.MulterError) {
+      if (err.code === 'LIMIT_FILE_SIZE') return next(tooLarge(`Files can be at most ${MAX_UPLOAD_BYTES / 1024 / 1024} MB.`));
+      return next(badRequest('Send one file in the field named "file".'));
+    }
+    next(badRequest('The upload could not be read. Try again.'));
+  });
+};
+
+export interface AttachmentView {
+  id: number;
+  kind: AttachmentKind;
+  contentType: string;
+  byteSize: number;
+  displayName: string;
+  tastingNoteId: number | null;
+  uploadedBy: string;
+  createdAt: string;
+  url: string;
+  thumbnailUrl: string | null;
+}
+
+export function attachmentView(a: Attachment, uploadedBy: string): AttachmentView {
+  return {
+    id: a.id,
+    kind: a.kind,
+    contentType: a.contentType,
+    byteSize: a.byteSize,
+    displayName: a.displayName,
+    tastingNoteId: a.tastingNoteId === null ? null : Number(a.tastingNoteId),
+    uploadedBy,
+    createdAt: a.createdAt.toISOString(),
+    url: `/api/attachments/${a.id}/file`,
+    thumbnailUrl: a.thumbnailKey ? `/api/attachments/${a.id}/thumbnail` : null,
+  };
+}
+
+/** A file name fit for a list: no path, no control characters. */
+function cleanName(name: string): string {
+  const base = name.split(/[\\/]/).pop() ?? '';
+  const clean = base.replace(/[\u0000-\u001f\u007f]/g, '').trim().slice(0, 200);
+  return clean || 'Untitled';
+}
+
+export async function uploadAttachment(
+  actor: Express.User,
+  batchId: number,
+  file: Express.Multer.File | undefined,
+  tastingNoteId: number | undefined,
+): Promise<AttachmentView> {
+  const batch = await findBatch(actor.breweryId, batchId);
+  if (!file) throw badRequest('Choose a file to attach.', { file: 'Choose a file to attach' });
+  if (file.size === 0) throw badRequest('This file is empty.', { file: 'This file is empty' });
+  if (tastingNoteId !== undefined) {
+    const note = await TastingNote.findOne({ where: { id: tastingNoteId, batchId: batch.id, breweryId: actor.breweryId } });
+    if (!note) throw notFound('This tasting note');
+  }
+  const detected = await fileTypeFromBuffer(file.buffer);
+  const accepted = detected && ACCEPTED[detected.mime];
+  if (!detected || !accepted) throw unsupported();
+
+  const key = `breweries/${actor.breweryId}/batches/${batch.id}/${randomUUID()}.${accepted.extension}`;
+  let thumbnailKey: string | null = null;
+  let thumbnail: Buffer | null = null;
+  if (accepted.kind === 'photo') {
+    try {
+      thumbnail = await sharp(file.buffer)
+        .rotate()
+        .resize(THUMBNAIL_PX, THUMBNAIL_PX, { fit: 'inside', withoutEnlargement: true })
+        .webp({ quality: 80 })
+        .toBuffer();
+    } catch {
+      throw badRequest('This picture could not be read. It may be damaged; try exporting it again.', { file: 'Damaged picture' });
+    }
+    thumbnailKey = key.replace(/\.\w+$/, '.thumb.webp');
+  }
+  await putObject(key, file.buffer, detected.mime);
+  if (thumbnail && thumbnailKey) await putObject(thumbnailKey, thumbnail, 'image/webp');
+
+  const attachment = await Attachment.create({
+    breweryId: actor.breweryId,
+    batchId: batch.id,
+    tastingNoteId: tastingNoteId ?? null,
+    kind: accepted.kind,
+    contentType: detected.mime,
+    byteSize: file.size,
+    storageKey: key,
+    thumbnailKey,
+    displayName: cleanName(file.originalname),
+    uploadedById: actor.id,
+  });
+  return attachmentView(attachment, actor.displayName);
+}
+
+export async function listAttachments(actor: Express.User, batchId: number): Promise<AttachmentView[]> {
+  const batch = await findBatch(actor.breweryId, batchId);
+  const rows = await Attachment.findAll({ where: { breweryId: actor.breweryId, batchId: batch.id }, order: [['id', 'ASC']] });
+  const people = await User.findAll({ where: { id: { [Op.in]: [...new Set(rows.map((r) => r.uploadedById))] } } });
+  const names = new Map(people.map((p) => [p.id, p.displayName]));
+  return rows.map((r) => attachmentView(r, names.get(r.uploadedById) ?? 'Unknown'));
+}
+
+/**
+ * Finds an attachment the person may fetch: their brewery's only (another brewery's answers 404).
+ * The taproom sees a photo only once the head brewer has put it on an announced or released beer.
+ */
+async function readableAttachment(actor: Express.User, id: number): Promise<Attachment> {
+  const attachment = await Attachment.findOne({ where: { id, breweryId: actor.breweryId } });
+  if (!attachment) throw notFound('This file');
+  if (actor.role === 'taproom_manager') {
+    const shown = await Release.count({
+      where: { breweryId: actor.breweryId, photoAttachmentId: attachment.id, state: { [Op.ne]: 'draft' } },
+    });
+    if (!shown) throw notFound('This file');
+  }
+  return attachment;
+}
+
+export interface FileDownload {
+  body: Buffer;
+  contentType: string;
+  disposition: string;
+}
+
+export async function downloadAttachment(actor: Express.User, id: number, variant: 'file' | 'thumbnail'): Promise<FileDownload> {
+  const attachment = await readableAttachment(actor, id);
+  if (variant === 'thumbnail') {
+    if (!attachment.thumbnailKey) throw notFound('A thumbnail of this file');
+    return { body: await getObject(attachment.thumbnailKey), contentType: 'image/webp', disposition: 'inline' };
+  }
+  const batch = await Batch.findByPk(attachment.batchId, { attributes: ['number'] });
+  const extension = ACCEPTED[attachment.contentType]?.extension ?? 'bin';
+  // Our own name for the download: the client's name never goes into a header.
+  const filename = `batch-${batch?.number ?? attachment.batchId}-file-${attachment.id}.${extension}`.replace(/[^A-Za-z0-9._-]/g, '-');
+  const disposition = attachment.kind === 'photo' ? `inline; filename="${filename}"` : `attachment; filename="${filename}"`;
+  return { body: await getObject(attachment.storageKey), contentType: attachment.contentType, disposition };
+}

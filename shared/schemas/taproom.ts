@@ -1,0 +1,143 @@
+import { z } from 'zod';
+import type { AbvMethod } from '../brewing';
+import type { TastingSummary } from './tasting';
+
+/** Glassware the release sheet offers. */
+export const GLASSES = {
+  shaker_pint: 'Shaker pint',
+  nonic_pint: 'Nonic pint',
+  tulip: 'Tulip',
+  snifter: 'Snifter',
+  stange: 'Stange',
+  weizen: 'Weizen vase',
+  goblet: 'Goblet',
+  mug: 'Mug',
+  teku: 'Stemmed taster',
+} as const;
+export type Glass = keyof typeof GLASSES;
+const GLASS_IDS = Object.keys(GLASSES) as [Glass, ...Glass[]];
+
+/** Allergens guests ask about (the brewery checks its own labelling law; this list is a reminder, not advice). */
+export const ALLERGENS = {
+  gluten: 'Gluten (barley)',
+  wheat: 'Wheat',
+  oats: 'Oats',
+  rye: 'Rye',
+  lactose: 'Lactose (milk)',
+  tree_nuts: 'Tree nuts',
+  peanuts: 'Peanuts',
+  soy: 'Soy',
+  sulphites: 'Sulphites',
+  fish: 'Fish (isinglass finings)',
+  shellfish: 'Shellfish',
+  eggs: 'Eggs',
+} as const;
+export type Allergen = keyof typeof ALLERGENS;
+const ALLERGEN_IDS = Object.keys(ALLERGENS) as [Allergen, ...Allergen[]];
+
+/** Strength bands for the taproom filter, ABV % (common practice, no source). */
+export const STRENGTHS = {
+  session: { label: 'Session (under 4.5 %)', min: 0, max: 4.5 },
+  standard: { label: 'Standard (4.5–6.5 %)', min: 4.5, max: 6.5 },
+  strong: { label: 'Strong (6.5 % and up)', min: 6.5, max: 100 },
+} as const;
+export type Strength = keyof typeof STRENGTHS;
+
+/** The release sheet the head brewer writes: what guests read, and how the beer is served. */
+export const releaseSheetSchema = z.strictObject({
+  beerName: z.string().trim().min(1, 'Name the beer').max(120, 'Use at most 120 characters'),
+  style: z.string().trim().min(1, 'Name the style').max(80, 'Use at most 80 characters'),
+  description: z
+    .string()
+    .trim()
+    .min(20, 'Write at least a sentence or two for guests (20 characters)')
+    .max(2000, 'Use at most 2000 characters'),
+  glass: z.enum(GLASS_IDS, { error: 'Choose a glass' }),
+  servingTempC: z
+    .number({ error: 'Serving temperature: enter a number' })
+    .min(0, 'Serving temperature must be at least 0 °C (32 °F)')
+    .max(20, 'Serving temperature must be at most 20 °C (68 °F)'),
+  servingNotes: z.string().trim().max(500, 'Use at most 500 characters').default(''),
+  allergens: z
+    .array(z.enum(ALLERGEN_IDS, { error: 'Choose allergens from the list' }))
+    .refine((list) => new Set(list).size === list.length, 'Each allergen once')
+    .default([]),
+  /** A photo attached to the batch, shown to the taproom once the beer is announced. */
+  photoAttachmentId: z.number().int().positive().nullable().default(null),
+  /** Show the beer to the taproom as coming soon before it is released. */
+  comingSoon: z.boolean().default(false),
+});
+export type ReleaseSheetInput = z.input<typeof releaseSheetSchema>;
+export type ReleaseSheet = z.infer<typeof releaseSheetSchema>;
+
+const gravity = (label: string) =>
+  z.number({ error: `${label}: enter a number` }).min(0.99, `${label} must be at least 0.990`).max(1.2, `${label} must be at most 1.200`);
+
+/** Releasing confirms the measured numbers the head brewer saw: if the log has changed since, the server refuses. */
+export const publishReleaseSchema = z.strictObject({
+  confirmedOg: gravity('OG'),
+  confirmedFg: gravity('FG'),
+});
+export type PublishReleaseInput = z.infer<typeof publishReleaseSchema>;
+
+export const taproomListQuery = z.strictObject({
+  q: z.string().trim().max(80, 'Use at most 80 characters').optional(),
+  style: z.string().trim().max(80).optional(),
+  strength: z.enum(Object.keys(STRENGTHS) as [Strength, ...Strength[]], { error: 'Choose a strength' }).optional(),
+});
+export type TaproomListQuery = z.infer<typeof taproomListQuery>;
+
+export const idParam = z.coerce.number({ error: 'Must be a number' }).int().positive().max(2147483647);
+
+export type ReleaseState = 'draft' | 'coming_soon' | 'on_tap';
+
+/** Final numbers: measured where the log has them, planned otherwise (and said so). */
+export interface FinalNumbers {
+  og: number | null;
+  fg: number | null;
+  /** From measured OG and FG only. */
+  abvPct: number | null;
+  abvMethod: AbvMethod;
+  plannedAbvPct: number;
+  ibu: number;
+  srm: number;
+}
+
+export interface PackageSize {
+  label: string;
+  count: number;
+}
+
+/** One beer as the taproom sees it: public-facing facts only, nothing from the brewing records. */
+export interface TaproomBeer {
+  id: number;
+  state: Exclude<ReleaseState, 'draft'>;
+  batchNumber: string;
+  beerName: string;
+  style: string;
+  description: string;
+  /** Measured ABV once released; the planned figure while coming soon. */
+  abvPct: number;
+  abvIsPlanned: boolean;
+  ibu: number;
+  srm: number;
+  glass: Glass;
+  servingTempC: number;
+  servingNotes: string;
+  allergens: Allergen[];
+  packageSizes: PackageSize[];
+  tasting: TastingSummary;
+  photo: { id: number; thumbnailUrl: string; url: string } | null;
+  releasedAt: string | null;
+}
+
+/** The head brewer's view of one batch's release. */
+export interface ReleaseDetail {
+  batch: { id: number; number: string; beerName: string; status: string; style: string };
+  state: ReleaseState | null;
+  sheet: ReleaseSheet | null;
+  numbers: FinalNumbers;
+  packageSizes: PackageSize[];
+  releasedAt: string | null;
+  releasedBy: string | null;
+}
