@@ -11,7 +11,7 @@ const here = path.dirname(fileURLToPath(import.meta.url));
  * Tables whose rows are signed records: the application account may only INSERT and SELECT them,
  * so not even a bug in the app can change or delete what was recorded. Later areas add theirs here.
  */
-export const APPEND_ONLY_TABLES = ['audit_events', 'batch_log_entries', 'idempotency_keys', 'tasting_notes'];
+export const APPEND_ONLY_TABLES = ['audit_events', 'batch_log_entries', 'idempotency_keys', 'tasting_notes', 'gravity_readings', 'packaging_runs'];
 
 /**
  * Runs pending migrations with the owner account, then grants the application account

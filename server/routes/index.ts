@@ -5,6 +5,7 @@ import { recipesRouter } from './recipes';
 import { equipmentRouter } from './equipment';
 import { ingredientsRouter } from './ingredients';
 import { batchesRouter } from './batches';
+import { vesselsRouter, cellarRouter } from './cellar';
 import { tastingRouter } from './tasting';
 import { batchAttachmentsRouter, attachmentsRouter } from './attachments';
 import { taproomRouter, releaseRouter } from './taproom';
@@ -18,6 +19,8 @@ export const apiRouters: [string, Router][] = [
   ['/api/equipment', equipmentRouter],
   ['/api/ingredients', ingredientsRouter],
   ['/api/batches', batchesRouter],
+  ['/api/vessels', vesselsRouter],
+  ['/api/cellar', cellarRouter],
   ['/api/batches', tastingRouter],
   ['/api/batches', batchAttachmentsRouter],
   ['/api/batches', releaseRouter],

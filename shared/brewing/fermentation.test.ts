@@ -26,6 +26,8 @@ describe('predicting FG from the curve', () => {
     // within 0.5 point of FG when 0.045·e^(−k·t) = 0.0005 → t = ln(90)/k days
     expect((p.predictedAtMs - start) / DAY).toBeCloseTo(Math.log(90) / k, 2);
     expect(p.at(start + 2 * DAY)).toBeCloseTo(points[2]!.sg, 5);
+    expect((p.reaches(fg + 0.045 * Math.exp(-k * 3))! - start) / DAY).toBeCloseTo(3, 2);
+    expect(p.reaches(fg - 0.001)).toBeNull();
   });
 
   it('tolerates reading noise of ±0.5 point and still lands within a point of FG', () => {

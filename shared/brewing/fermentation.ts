@@ -23,6 +23,8 @@ export interface FermentationPrediction {
   ratePerDay: number;
   /** Gravity on the fitted curve at a time, SG. */
   at: (atMs: number) => number;
+  /** When the fitted curve falls to `sg`, ms since the epoch; null if it never does (at or below the predicted FG). */
+  reaches: (sg: number) => number | null;
 }
 
 const MS_PER_DAY = 86_400_000;
@@ -101,6 +103,7 @@ export function predictFermentation(points: readonly GravityPoint[]): Fermentati
     predictedAtMs: t0 + settledDays * MS_PER_DAY,
     ratePerDay: k,
     at: (atMs: number) => fg + amplitude * Math.exp((-k * (atMs - t0)) / MS_PER_DAY),
+    reaches: (sg: number) => (sg <= fg ? null : t0 + (Math.max(0, Math.log(amplitude / (sg - fg))) / k) * MS_PER_DAY),
   };
 }
 

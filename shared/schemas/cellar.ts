@@ -33,12 +33,8 @@ export const vesselInputSchema = z.strictObject({
   capacityUnit: z.enum(['l', 'bbl'], { error: 'Choose L or bbl' }),
   ratedPressure: num('Rated working pressure', 0.1, 1000),
   pressureUnit: z.enum(['kpa', 'psi'], { error: 'Choose kPa or psi' }),
-  status: z.enum(['clean', 'needs_cleaning'], { error: 'Choose clean or needs cleaning' }),
 });
 export type VesselInput = z.infer<typeof vesselInputSchema>;
-
-export const fillVesselSchema = z.strictObject({ batchId: z.number().int().positive() });
-export type FillVesselInput = z.infer<typeof fillVesselSchema>;
 
 /** A vessel as the API returns it (SI). */
 export interface VesselView {
@@ -49,6 +45,24 @@ export interface VesselView {
   ratedPressureKpa: number;
   status: VesselStatus;
   currentBatchId: number | null;
+}
+
+/** One vessel on the board: what it holds and what comes next. */
+export interface BoardVessel extends VesselView {
+  batch: {
+    id: number;
+    number: string;
+    beerName: string;
+    status: string;
+    /** When the batch went into this vessel. */
+    inSince: string;
+    latestSg: number | null;
+    latestTempC: number | null;
+    latestAt: string | null;
+    nextAction: { label: string; dueAt: string | null } | null;
+    nextReadingDueAt: string | null;
+    readingOverdue: boolean;
+  } | null;
 }
 
 // ------------------------------------------------------------------ readings
@@ -203,6 +217,8 @@ export const cellarPlanSchema = z.strictObject({
 export type CellarPlanInput = z.infer<typeof cellarPlanSchema>;
 
 export interface CellarPlanView {
+  /** False until the head brewer saves it: then it comes from the batch's frozen recipe plan. */
+  saved: boolean;
   plannedFg: number;
   primaryTempC: number;
   dRestPoints: number;
@@ -259,6 +275,40 @@ export interface ProbeImportResult {
   errors: number;
   /** True once written (the confirm step); the preview writes nothing. */
   imported: boolean;
+}
+
+/** A logged cellar action as the API returns it (SI). */
+export interface ActionView {
+  logEntryId: number;
+  action: CellarAction;
+  at: string;
+  tempC: number | null;
+  volumeL: number | null;
+  detail: string | null;
+  co2Volumes: number | null;
+  pressureKpa: number | null;
+  toVesselId: number | null;
+  note: string | null;
+  authorName: string;
+}
+
+export interface PackagingRunView {
+  logEntryId: number;
+  packagedAt: string;
+  lines: PackageLineInput[];
+  packagedL: number;
+  authorName: string;
+}
+
+/** Everything the batch's cellar page shows. */
+export interface BatchCellarView {
+  batch: { id: number; number: string; beerName: string; status: string; brewDate: string };
+  vessel: VesselView | null;
+  plan: CellarPlanView;
+  og: { sg: number; measured: boolean };
+  readings: ReadingView[];
+  actions: ActionView[];
+  packaging: { runs: PackagingRunView[]; knockoutL: number; packagedL: number; lossL: number; lossFraction: number };
 }
 
 // -------------------------------------------------------------------- alerts

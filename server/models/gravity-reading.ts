@@ -1,0 +1,43 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes } from 'sequelize';
+import { sequelize } from '../config/database';
+import type { GravityUnit, ReadingMethod } from '../../shared/schemas/cellar';
+
+/**
+ * A gravity reading, projected from its signed batch log entry in the same transaction so charts and
+ * the vessel board read an indexed table. Append-only like the log. Gravity is stored as SG.
+ */
+export class GravityReading extends Model<InferAttributes<GravityReading>, InferCreationAttributes<GravityReading>> {
+  declare id: CreationOptional<number>;
+  declare breweryId: number;
+  declare batchId: number;
+  declare logEntryId: number;
+  declare takenAt: Date;
+  declare sg: number;
+  /** What the person entered, in `enteredUnit` (°Brix for a refractometer). */
+  declare enteredValue: number;
+  declare enteredUnit: GravityUnit;
+  declare tempC: number | null;
+  declare ph: number | null;
+  declare method: ReadingMethod;
+  declare authorName: string;
+  declare createdAt: CreationOptional<Date>;
+}
+
+GravityReading.init(
+  {
+    id: { type: DataTypes.BIGINT, autoIncrement: true, primaryKey: true },
+    breweryId: { type: DataTypes.INTEGER, allowNull: false },
+    batchId: { type: DataTypes.INTEGER, allowNull: false },
+    logEntryId: { type: DataTypes.BIGINT, allowNull: false, unique: true },
+    takenAt: { type: DataTypes.DATE(3), allowNull: false },
+    sg: { type: DataTypes.DOUBLE, allowNull: false },
+    enteredValue: { type: DataTypes.DOUBLE, allowNull: false },
+    enteredUnit: { type: DataTypes.ENUM('sg', 'plato', 'brix'), allowNull: false },
+    tempC: { type: DataTypes.DOUBLE, allowNull: true },
+    ph: { type: DataTypes.DOUBLE, allowNull: true },
+    method: { type: DataTypes.ENUM('hydrometer', 'refractometer', 'probe'), allowNull: false },
+    authorName: { type: DataTypes.STRING(80), allowNull: false },
+    createdAt: DataTypes.DATE,
+  },
+  { sequelize, tableName: 'gravity_readings', updatedAt: false },
+);

@@ -1,0 +1,96 @@
+/**
+ * Cellar alerts for the head brewer: the D-rest trigger crossed, gravity not moving across three
+ * readings, no reading for the plan's interval. Each is raised once per batch and kind (a unique
+ * index), shown in the app and e-mailed to every head brewer of the brewery.
+ */
+import { Op, UniqueConstraintError } from 'sequelize';
+import { Alert, Batch, BatchLogEntry, GravityReading, User } from '../models';
+import { notFound } from '../errors';
+import { sendMail, publicLink } from './mail';
+import { cellarPlanFor } from './cellar';
+import { crossesDRestTrigger, dRestTriggerSg, gravityStalled, readingOverdue } from '../../shared/brewing';
+import type { AlertKind, AlertView } from '../../shared/schemas/cellar';
+
+const sg3 = (sg: number) => sg.toFixed(3);
+
+/** Raises an alert unless this batch already has one of this kind; e-mails it when new. */
+async function raise(batch: Batch, kind: AlertKind, message: string): Promise<void> {
+  let alert: Alert;
+  try {
+    alert = await Alert.create({ breweryId: batch.breweryId, batchId: batch.id, kind, message, emailedAt: null, readAt: null });
+  } catch (error) {
+    if (error instanceof UniqueConstraintError) return; // already raised: sent once only
+    throw error;
+  }
+  await emailAlert(alert, batch);
+}
+
+async function emailAlert(alert: Alert, batch: Batch): Promise<void> {
+  const headBrewers = await User.findAll({ where: { breweryId: batch.breweryId, role: 'head_brewer', disabledAt: null } });
+  for (const person of headBrewers) {
+    await sendMail({
+      to: person.email,
+      subject: `Batch ${batch.number} ${batch.beerName}: ${alert.message}`,
+      text: `${alert.message}\n\nBatch ${batch.number} (${batch.beerName}).\nOpen its cellar page: ${publicLink(`/cellar/batches/${batch.id}`)}\n\n— Kettlewright`,
+    });
+  }
+  await alert.update({ emailedAt: new Date() });
+}
+
+/** Checks a batch's readings against its plan after new readings arrive. */
+export async function evaluateReadingAlerts(breweryId: number, batchId: number): Promise<void> {
+  const batch = await Batch.findOne({ where: { id: batchId, breweryId } });
+  if (!batch || batch.status !== 'fermenting') return;
+  const plan = await cellarPlanFor(batch);
+  const trigger = dRestTriggerSg(plan.plannedFg, plan.dRestPoints);
+  const readings = await GravityReading.findAll({ where: { batchId }, order: [['takenAt', 'ASC'], ['id', 'ASC']], attributes: ['sg', 'takenAt'] });
+  const dRestLogged = await BatchLogEntry.count({ where: { batchId, kind: 'action', stepKey: 'd_rest' } });
+
+  const crossing = readings.findIndex((r, i) => crossesDRestTrigger(i === 0 ? null : readings[i - 1]!.sg, r.sg, trigger));
+  if (crossing >= 0 && !dRestLogged) {
+    await raise(batch, 'd_rest', `Gravity ${sg3(readings[crossing]!.sg)} reached the D-rest trigger (${sg3(trigger)}): start the D-rest`);
+  }
+  if (gravityStalled(readings.slice(-3).map((r) => r.sg), trigger)) {
+    await raise(batch, 'stalled', `Gravity has not moved across three readings (${sg3(readings[readings.length - 1]!.sg)}), above the D-rest trigger`);
+  }
+}
+
+/** Raises "no reading" alerts for fermenting batches whose last reading is older than their plan allows. */
+export async function sweepOverdueReadings(now = new Date()): Promise<number> {
+  const batches = await Batch.findAll({ where: { status: 'fermenting' } });
+  let raised = 0;
+  for (const batch of batches) {
+    const plan = await cellarPlanFor(batch);
+    const last = await GravityReading.findOne({ where: { batchId: batch.id }, order: [['takenAt', 'DESC']] });
+    const since = last ? new Date(last.takenAt) : batch.updatedAt;
+    if (readingOverdue(since.getTime(), now.getTime(), plan.readingIntervalHours)) {
+      const before = await Alert.count({ where: { batchId: batch.id, kind: 'overdue' } });
+      await raise(batch, 'overdue', `No gravity reading for over ${plan.readingIntervalHours} hours`);
+      raised += before === 0 ? 1 : 0;
+    }
+  }
+  return raised;
+}
+
+/** The brewery's alerts, newest first (unread first). */
+export async function listAlerts(breweryId: number): Promise<AlertView[]> {
+  const alerts = await Alert.findAll({ where: { breweryId }, order: [['readAt', 'ASC'], ['createdAt', 'DESC']], limit: 100 });
+  const batches = await Batch.findAll({ where: { id: { [Op.in]: [...new Set(alerts.map((a) => a.batchId))] } }, attributes: ['id', 'number', 'beerName'] });
+  const byId = new Map(batches.map((b) => [b.id, b]));
+  return alerts.map((a) => ({
+    id: a.id,
+    batchId: a.batchId,
+    batchNumber: byId.get(a.batchId)?.number ?? '',
+    beerName: byId.get(a.batchId)?.beerName ?? '',
+    kind: a.kind,
+    message: a.message,
+    createdAt: a.createdAt.toISOString(),
+    readAt: a.readAt ? a.readAt.toISOString() : null,
+  }));
+}
+
+export async function markAlertRead(breweryId: number, id: number): Promise<void> {
+  const alert = await Alert.findOne({ where: { id, breweryId } });
+  if (!alert) throw notFound('This alert');
+  if (!alert.readAt) await alert.update({ readAt: new Date() });
+}

@@ -1,0 +1,68 @@
+/**
+ * Packaging runs: each is a signed batch log entry with its `packaging_runs` row in the same
+ * transaction. Volumes and losses come from shared/brewing against the batch's knockout volume;
+ * the final run empties the vessel and moves the batch to packaged.
+ */
+import type { Transaction } from 'sequelize';
+import { Batch, BatchLogEntry, PackagingRun } from '../models';
+import { conflict } from '../errors';
+import { appendLogEntry, type LogActor } from './batch-log';
+import { changeBatchStatus, findBatch, releaseVessel } from './batches';
+import { batchActuals } from '../../shared/batches/brew-day';
+import { lineVolumeL, packagingTotals, type PackageLine } from '../../shared/brewing';
+import type { WriteMeta } from '../../shared/schemas/batch-log';
+import type { BatchCellarView, PackagingEntryInput, PackagingRunView } from '../../shared/schemas/cellar';
+
+/** Litres into the fermenter at knockout: measured on the brew day, else planned. */
+async function knockoutLitres(batch: Batch, transaction?: Transaction): Promise<number> {
+  const entries = await BatchLogEntry.findAll({ where: { batchId: batch.id }, attributes: ['id', 'kind', 'stepKey', 'data', 'correctsEntryId'], transaction });
+  const actuals = batchActuals(
+    batch.plan,
+    entries.map((e) => ({ id: Number(e.id), kind: e.kind, stepKey: e.stepKey, data: e.data, correctsEntryId: e.correctsEntryId === null ? null : Number(e.correctsEntryId) })),
+  );
+  return actuals.knockoutVolumeL.actual ?? actuals.knockoutVolumeL.planned;
+}
+
+function toRunView(run: PackagingRun, authorName: string): PackagingRunView {
+  return {
+    logEntryId: Number(run.logEntryId),
+    packagedAt: new Date(run.packagedAt).toISOString(),
+    lines: run.lines,
+    packagedL: run.packagedL,
+    authorName,
+  };
+}
+
+export async function packagingSummary(batch: Batch, transaction?: Transaction): Promise<BatchCellarView['packaging']> {
+  const runs = await PackagingRun.findAll({ where: { batchId: batch.id }, order: [['packagedAt', 'ASC']], transaction });
+  const authors = await BatchLogEntry.findAll({ where: { id: runs.map((r) => r.logEntryId) }, attributes: ['id', 'authorName'], transaction });
+  const knockoutL = await knockoutLitres(batch, transaction);
+  const totals = packagingTotals(runs.flatMap((r) => r.lines), knockoutL);
+  return {
+    runs: runs.map((r) => toRunView(r, authors.find((a) => Number(a.id) === Number(r.logEntryId))?.authorName ?? '')),
+    knockoutL,
+    ...totals,
+  };
+}
+
+/** Records a packaging run; refuses (422) more beer in packages than was knocked out. */
+export async function recordPackaging(actor: LogActor, batchId: number, input: PackagingEntryInput, meta: WriteMeta): Promise<BatchCellarView['packaging']> {
+  const lines = input.lines as PackageLine[];
+  await appendLogEntry(actor, batchId, { ...input }, meta, {
+    onInsert: async (entry, t) => {
+      const batch = await findBatch(actor.breweryId, batchId, t);
+      if (!['fermenting', 'conditioning'].includes(batch.status)) throw conflict(`Batch ${batch.number} is ${batch.status}: it cannot be packaged now.`);
+      const earlier = await PackagingRun.findAll({ where: { batchId }, transaction: t });
+      // Refuses more in packages, all runs together, than went into the fermenter.
+      packagingTotals([...earlier.flatMap((r) => r.lines), ...lines], await knockoutLitres(batch, t));
+      const packagedL = lines.reduce((sum, line, i) => sum + lineVolumeL(line, `lines.${i}`), 0);
+      await PackagingRun.create({ breweryId: actor.breweryId, batchId, logEntryId: Number(entry.id), packagedAt: meta.capturedAt, lines, packagedL }, { transaction: t });
+      if (input.final) {
+        await releaseVessel(actor.breweryId, batchId, t);
+        if (batch.status === 'fermenting') await changeBatchStatus(actor, batchId, { status: 'conditioning' }, t);
+        await changeBatchStatus(actor, batchId, { status: 'packaged' }, t);
+      }
+    },
+  });
+  return packagingSummary(await findBatch(actor.breweryId, batchId));
+}

@@ -1,0 +1,160 @@
+/**
+ * Gravity readings: each is a signed batch log entry, with its `gravity_readings` row written in the
+ * same transaction. Probe imports write every row in one transaction or none.
+ */
+import { createHash } from 'node:crypto';
+import { Op, Transaction } from 'sequelize';
+import { sequelize } from '../config/database';
+import { Batch, GravityReading } from '../models';
+import { badRequest, conflict } from '../errors';
+import { appendLogEntry, type LogActor } from './batch-log';
+import { changeBatchStatus, findBatch } from './batches';
+import { parseProbeCsv, MAX_IMPORT_ROWS } from './probe-csv';
+import { evaluateReadingAlerts } from './alerts';
+import { fToC, platoToSg, refractometerBeerSg, refractometerWortSg, sgToPlato } from '../../shared/brewing';
+import type { WriteMeta } from '../../shared/schemas/batch-log';
+import type { ProbeImportInput, ProbeImportResult, ReadingEntryInput, ReadingView } from '../../shared/schemas/cellar';
+
+/** Batches that take cellar readings: knocked out and not yet packaged. */
+const READING_STATUSES = ['brewing', 'fermenting', 'conditioning'];
+
+export function toReadingView(r: GravityReading): ReadingView {
+  return {
+    id: Number(r.id),
+    logEntryId: Number(r.logEntryId),
+    takenAt: new Date(r.takenAt).toISOString(),
+    sg: r.sg,
+    plato: sgToPlato(r.sg),
+    enteredValue: r.enteredValue,
+    enteredUnit: r.enteredUnit,
+    tempC: r.tempC,
+    ph: r.ph,
+    method: r.method,
+    authorName: r.authorName,
+  };
+}
+
+/** SG and °C from what was entered (refractometer readings corrected for wort and, once fermenting, alcohol). */
+export function readingInSi(input: ReadingEntryInput): { sg: number; tempC: number | null } {
+  let sg: number;
+  if (input.gravityUnit === 'brix') {
+    sg =
+      input.originalBrix === undefined
+        ? refractometerWortSg(input.gravity, input.wortCorrection)
+        : refractometerBeerSg(input.originalBrix, input.gravity, input.wortCorrection);
+  } else {
+    sg = input.gravityUnit === 'plato' ? platoToSg(input.gravity, 'gravity') : input.gravity;
+  }
+  const tempC = input.temp === undefined ? null : input.tempUnit === 'f' ? fToC(input.temp) : input.temp;
+  return { sg, tempC };
+}
+
+/** The first reading of a knocked-out batch starts its fermentation. */
+async function readyForReadings(actor: LogActor, batchId: number, transaction: Transaction): Promise<void> {
+  const batch = await Batch.findOne({ where: { id: batchId, breweryId: actor.breweryId }, transaction });
+  if (!batch || !READING_STATUSES.includes(batch.status)) {
+    throw conflict(`Batch ${batch?.number ?? ''} is ${batch?.status ?? 'not found'}: readings are taken from knockout until packaging.`);
+  }
+  if (batch.status === 'brewing') await changeBatchStatus(actor, batchId, { status: 'fermenting' }, transaction);
+}
+
+async function writeReading(
+  actor: LogActor,
+  batchId: number,
+  input: ReadingEntryInput,
+  meta: WriteMeta,
+  transaction?: Transaction,
+): Promise<GravityReading> {
+  const { sg, tempC } = readingInSi(input);
+  let reading: GravityReading | null = null;
+  const entry = await appendLogEntry(actor, batchId, { ...input, sg, tempC }, meta, {
+    transaction,
+    onInsert: async (e, t) => {
+      await readyForReadings(actor, batchId, t);
+      reading = await GravityReading.create(
+        {
+          breweryId: actor.breweryId,
+          batchId,
+          logEntryId: Number(e.id),
+          takenAt: meta.capturedAt,
+          sg,
+          enteredValue: input.gravity,
+          enteredUnit: input.gravityUnit,
+          tempC,
+          ph: input.ph ?? null,
+          method: input.method,
+          authorName: actor.displayName,
+        },
+        { transaction: t },
+      );
+    },
+  });
+  // A replayed key returns the first entry, whose reading was written with it.
+  return reading ?? (await GravityReading.findOne({ where: { logEntryId: entry.id }, transaction, rejectOnEmpty: true }));
+}
+
+/** Records one reading (idempotent by the write's key) and raises any alert it triggers. */
+export async function recordReading(actor: LogActor, batchId: number, input: ReadingEntryInput, meta: WriteMeta): Promise<ReadingView> {
+  const reading = await writeReading(actor, batchId, input, meta);
+  await evaluateReadingAlerts(actor.breweryId, batchId);
+  return toReadingView(reading);
+}
+
+export async function batchReadings(batchId: number): Promise<ReadingView[]> {
+  const rows = await GravityReading.findAll({ where: { batchId }, order: [['takenAt', 'ASC'], ['id', 'ASC']] });
+  return rows.map(toReadingView);
+}
+
+/** A per-row key from the import's key: the same file sent twice replays row by row. */
+const rowKey = (key: string, line: number) => `imp-${createHash('sha256').update(`${key}:${line}`).digest('base64url').slice(0, 40)}`;
+
+/**
+ * Checks a probe export and, given the write's device details, writes its rows in one transaction:
+ * any row with an error refuses the whole file (400, nothing written); rows at a time already stored,
+ * or repeated in the file, are skipped and counted. Without them (`null`) it only answers the preview.
+ */
+export async function importProbeCsv(actor: LogActor, batchId: number, input: ProbeImportInput, meta: WriteMeta | null): Promise<ProbeImportResult> {
+  await findBatch(actor.breweryId, batchId);
+  const { rows } = parseProbeCsv(input.csv, input);
+  if (rows.length > MAX_IMPORT_ROWS) throw badRequest(`The file has ${rows.length} rows; import at most ${MAX_IMPORT_ROWS} at a time.`);
+  const now = Date.now();
+  for (const row of rows) {
+    if (row.takenAt && Date.parse(row.takenAt) > now + 5 * 60_000) {
+      row.status = 'error';
+      row.error = `${row.time} is in the future. Check the time zone.`;
+    }
+  }
+  const times = rows.filter((r) => r.status === 'ok').map((r) => new Date(r.takenAt!));
+  const stored = times.length
+    ? await GravityReading.findAll({ where: { batchId, breweryId: actor.breweryId, takenAt: { [Op.in]: times } }, attributes: ['takenAt'] })
+    : [];
+  const storedSeconds = new Set(stored.map((r) => Math.floor(new Date(r.takenAt).getTime() / 1000)));
+  for (const row of rows) {
+    if (row.status === 'ok' && storedSeconds.has(Math.floor(Date.parse(row.takenAt!) / 1000))) row.status = 'duplicate';
+  }
+  const count = (status: string) => rows.filter((r) => r.status === status).length;
+  const result: ProbeImportResult = { rows, toImport: count('ok'), duplicates: count('duplicate'), errors: count('error'), imported: false };
+  if (!meta) return result;
+
+  if (result.errors > 0) {
+    const fields = Object.fromEntries(rows.filter((r) => r.status === 'error').map((r) => [`line.${r.line}`, r.error!]));
+    throw badRequest(`${result.errors} row${result.errors > 1 ? 's have' : ' has'} errors; nothing was imported. Fix the file and try again.`, fields);
+  }
+  if (result.toImport === 0) return { ...result, imported: true };
+  await sequelize.transaction({ isolationLevel: Transaction.ISOLATION_LEVELS.READ_COMMITTED }, async (transaction) => {
+    for (const row of rows) {
+      if (row.status !== 'ok') continue;
+      const reading: ReadingEntryInput = {
+        kind: 'reading',
+        method: 'probe',
+        gravity: input.gravityUnit === 'plato' ? Number(row.gravity.replace(',', '.')) : row.sg!,
+        gravityUnit: input.gravityUnit,
+        temp: Number(row.temp.replace(',', '.')),
+        tempUnit: input.tempUnit,
+      };
+      await writeReading(actor, batchId, reading, { ...meta, idempotencyKey: rowKey(meta.idempotencyKey, row.line), capturedAt: new Date(row.takenAt!) }, transaction);
+    }
+  });
+  await evaluateReadingAlerts(actor.breweryId, batchId);
+  return { ...result, imported: true };
+}

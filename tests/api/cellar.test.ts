@@ -1,0 +1,236 @@
+import { beforeAll, describe, expect, it } from 'vitest';
+import { createTestBrewery, mailCatcher, type TestBrewery } from './helpers';
+import { plannedBatch, writeHeaders } from './batch-fixtures';
+import { changeBatchStatus } from '../../server/services/batches';
+import { BatchLogEntry, GravityReading } from '../../server/models';
+import { headPressureKpa, platoToSg, sgToPlato } from '../../shared/brewing';
+import type { BatchCellarView, ProbeImportResult, ReadingView, VesselView } from '../../shared/schemas/cellar';
+
+let t: TestBrewery;
+
+/** A batch knocked out and ready for cellar readings. */
+async function knockedOutBatch() {
+  const actor = { id: t.users.head_brewer.id, breweryId: t.brewery.id };
+  const batch = await plannedBatch(actor);
+  await changeBatchStatus(actor, batch.id, { status: 'brewing' });
+  return batch;
+}
+
+const reading = (gravity: number, gravityUnit: 'sg' | 'plato' = 'sg') => ({
+  kind: 'reading',
+  method: 'hydrometer',
+  gravity,
+  gravityUnit,
+  temp: 19,
+  tempUnit: 'c',
+});
+
+function postReading(batchId: number, body: object, capturedAt?: Date) {
+  return t.as.assistant_brewer.post(`/api/cellar/batches/${batchId}/readings`).set(writeHeaders({ capturedAt })).send(body);
+}
+
+async function cellarView(batchId: number): Promise<BatchCellarView> {
+  const res = await t.as.assistant_brewer.get(`/api/cellar/batches/${batchId}`);
+  expect(res.status).toBe(200);
+  return res.body;
+}
+
+async function vessel(body: Partial<{ name: string; type: string; capacity: number; ratedPressure: number }>): Promise<VesselView> {
+  const res = await t.as.head_brewer.post('/api/vessels').send({
+    name: `Tank ${Math.random().toString(36).slice(2, 7)}`,
+    type: 'bright_tank',
+    capacity: 1200,
+    capacityUnit: 'l',
+    ratedPressure: 200,
+    pressureUnit: 'kpa',
+    ...body,
+  });
+  expect(res.status).toBe(201);
+  return res.body;
+}
+
+beforeAll(async () => {
+  t = await createTestBrewery();
+});
+
+describe('gravity readings', () => {
+  it('stores readings entered in SG and in °P as SG and returns both consistently, each as a signed log entry', async () => {
+    const batch = await knockedOutBatch();
+    const sg = await postReading(batch.id, reading(1.05), new Date(Date.now() - 60_000));
+    expect(sg.status).toBe(201);
+    const plato = await postReading(batch.id, reading(10, 'plato'));
+    expect(plato.status).toBe(201);
+
+    const view = await cellarView(batch.id);
+    expect(view.batch.status).toBe('fermenting'); // the first reading starts fermentation
+    const [a, b] = view.readings as [ReadingView, ReadingView];
+    // SG ↔ °P by the ASBC polynomial (shared/brewing gravity.ts, tested there against the ASBC table).
+    expect(a).toMatchObject({ sg: 1.05, enteredValue: 1.05, enteredUnit: 'sg', method: 'hydrometer', tempC: 19 });
+    expect(a.plato).toBeCloseTo(sgToPlato(1.05), 10);
+    expect(b).toMatchObject({ enteredValue: 10, enteredUnit: 'plato' });
+    expect(b.sg).toBeCloseTo(platoToSg(10), 12);
+    expect(b.plato).toBeCloseTo(10, 9);
+
+    const entries = await BatchLogEntry.findAll({ where: { batchId: batch.id, kind: 'reading' }, order: [['sequence', 'ASC']] });
+    expect(entries.map((e) => Number(e.id))).toEqual([a.logEntryId, b.logEntryId]);
+    expect(entries[1]!.data).toMatchObject({ gravity: 10, gravityUnit: 'plato', method: 'hydrometer' });
+  });
+
+  it('answers a repeated send with the first reading, and refuses a reading on a planned batch', async () => {
+    const batch = await knockedOutBatch();
+    const headers = writeHeaders();
+    const first = await t.as.assistant_brewer.post(`/api/cellar/batches/${batch.id}/readings`).set(headers).send(reading(1.048));
+    const again = await t.as.assistant_brewer.post(`/api/cellar/batches/${batch.id}/readings`).set(headers).send(reading(1.048));
+    expect(again.status).toBe(201);
+    expect(again.body.id).toBe(first.body.id);
+    expect(await GravityReading.count({ where: { batchId: batch.id } })).toBe(1);
+
+    const planned = await plannedBatch({ id: t.users.head_brewer.id, breweryId: t.brewery.id });
+    const refused = await postReading(planned.id, reading(1.05));
+    expect(refused.status).toBe(409);
+    expect(await BatchLogEntry.count({ where: { batchId: planned.id } })).toBe(0);
+  });
+
+  it('refuses a refractometer reading in SG with a field message, and the taproom manager', async () => {
+    const batch = await knockedOutBatch();
+    const bad = await postReading(batch.id, { ...reading(1.05), method: 'refractometer' });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.fields.gravityUnit).toMatch(/°Brix/);
+    const taproom = await t.as.taproom_manager.post(`/api/cellar/batches/${batch.id}/readings`).set(writeHeaders()).send(reading(1.05));
+    expect(taproom.status).toBe(403);
+  });
+});
+
+describe('importing a logging probe file', () => {
+  const options = { delimiter: ',', gravityUnit: 'sg', tempUnit: 'f', timeZone: 'America/Halifax' };
+  const rows = ['time,gravity,temp', '2026-11-20 08:00,1.052,66.0', '2026-11-20 14:00,1.049,66.2', '2026-11-20 20:00,1.045,66.4', '2026-11-21 02:00,1.041,66.5', '2026-11-21 08:00,1.037,66.3'];
+
+  it('writes nothing when one row in the middle is malformed, and names the row', async () => {
+    const batch = await knockedOutBatch();
+    const broken = [...rows.slice(0, 3), '2026-11-20 20:00,1.O45,66.4', ...rows.slice(4)].join('\n');
+    const preview = await t.as.assistant_brewer.post(`/api/cellar/batches/${batch.id}/readings/preview`).send({ ...options, csv: broken });
+    expect(preview.status).toBe(200);
+    expect((preview.body as ProbeImportResult).rows.map((r) => r.status)).toEqual(['ok', 'ok', 'error', 'ok', 'ok']);
+
+    const res = await t.as.assistant_brewer.post(`/api/cellar/batches/${batch.id}/readings/import`).set(writeHeaders()).send({ ...options, csv: broken });
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields).toEqual({ 'line.4': 'Gravity "1.O45" is not a number.' });
+    expect(await GravityReading.count({ where: { batchId: batch.id } })).toBe(0);
+    expect(await BatchLogEntry.count({ where: { batchId: batch.id, kind: 'reading' } })).toBe(0);
+
+    const fixed = await t.as.assistant_brewer.post(`/api/cellar/batches/${batch.id}/readings/import`).set(writeHeaders()).send({ ...options, csv: rows.join('\n') });
+    expect(fixed.status).toBe(201);
+    expect(fixed.body).toMatchObject({ imported: true, toImport: 5, duplicates: 0, errors: 0 });
+    const view = await cellarView(batch.id);
+    expect(view.readings).toHaveLength(5);
+    // 08:00 in Halifax in November is 12:00 UTC (UTC−4, IANA tz database); 66.0 °F = 18.888… °C.
+    expect(view.readings[0]).toMatchObject({ takenAt: '2026-11-20T12:00:00.000Z', sg: 1.052, method: 'probe' });
+    expect(view.readings[0]!.tempC).toBeCloseTo((66 - 32) / 1.8, 10);
+  });
+
+  it('skips rows at a time already stored or repeated in the file, and counts them', async () => {
+    const batch = await knockedOutBatch();
+    const first = await t.as.assistant_brewer.post(`/api/cellar/batches/${batch.id}/readings/import`).set(writeHeaders()).send({ ...options, csv: rows.slice(0, 4).join('\n') });
+    expect(first.body).toMatchObject({ toImport: 3, duplicates: 0 });
+    const overlapping = [rows[0], rows[2], rows[3], rows[4], rows[4], rows[5]].join('\n');
+    const second = await t.as.assistant_brewer.post(`/api/cellar/batches/${batch.id}/readings/import`).set(writeHeaders()).send({ ...options, csv: overlapping });
+    expect(second.status).toBe(201);
+    expect(second.body).toMatchObject({ imported: true, toImport: 2, duplicates: 3, errors: 0 });
+    expect(await GravityReading.count({ where: { batchId: batch.id } })).toBe(5);
+  });
+});
+
+describe('vessels', () => {
+  it('a vessel cannot hold two batches (409), by transfer or by assignment', async () => {
+    const tank = await vessel({ type: 'bright_tank' });
+    const a = await knockedOutBatch();
+    const b = await knockedOutBatch();
+    await postReading(a.id, reading(1.012));
+    await postReading(b.id, reading(1.011));
+    const transfer = (batchId: number) =>
+      t.as.assistant_brewer
+        .post(`/api/cellar/batches/${batchId}/actions`)
+        .set(writeHeaders())
+        .send({ kind: 'action', action: 'transfer', volume: 700, volumeUnit: 'l', toVesselId: tank.id, tempUnit: 'c' });
+    expect((await transfer(a.id)).status).toBe(201);
+    const second = await transfer(b.id);
+    expect(second.status).toBe(409);
+    expect(second.body.error.message).toMatch(/already holds batch/);
+    expect(await BatchLogEntry.count({ where: { batchId: b.id, kind: 'action' } })).toBe(0);
+    const assign = await t.as.head_brewer.put(`/api/batches/${b.id}/vessel`).send({ vesselId: tank.id });
+    expect(assign.status).toBe(409);
+
+    const view = await cellarView(a.id);
+    expect(view.batch.status).toBe('conditioning');
+    expect(view.vessel?.id).toBe(tank.id);
+    expect(view.actions[0]).toMatchObject({ action: 'transfer', volumeL: 700, toVesselId: tank.id });
+  });
+
+  it('stores capacity and rated pressure in SI from bbl and psi, and refuses a duplicate name', async () => {
+    const v = await vessel({ name: 'FV-psi', type: 'fermenter', capacity: 10, ratedPressure: 15 } as never);
+    const res = await t.as.head_brewer.post('/api/vessels').send({ name: 'FV-bbl', type: 'fermenter', capacity: 10, capacityUnit: 'bbl', ratedPressure: 15, pressureUnit: 'psi' });
+    expect(res.status).toBe(201);
+    // 1 US beer barrel = 31 US gal (27 CFR 25.11) = 117.347765 L; 1 psi = 6.894757 kPa (NIST SP 811).
+    expect(res.body.capacityL).toBeCloseTo(1173.47765, 4);
+    expect(res.body.ratedPressureKpa).toBeCloseTo(103.4214, 3);
+    const dup = await t.as.head_brewer.post('/api/vessels').send({ name: v.name, type: 'fermenter', capacity: 1, capacityUnit: 'l', ratedPressure: 1, pressureUnit: 'kpa' });
+    expect(dup.status).toBe(409);
+  });
+});
+
+describe('carbonation', () => {
+  it('recommends the head pressure only up to the vessel rating', async () => {
+    const needed = headPressureKpa(2, 2.6);
+    const strong = await vessel({ ratedPressure: 200 });
+    const weak = await vessel({ ratedPressure: Math.floor(needed) - 5 });
+    const ok = await t.as.assistant_brewer.get('/api/cellar/carbonation').query({ vesselId: strong.id, co2Volumes: 2.6, temp: 2, tempUnit: 'c' });
+    expect(ok.status).toBe(200);
+    expect(ok.body.pressureKpa).toBeCloseTo(needed, 10);
+    const capped = await t.as.assistant_brewer.get('/api/cellar/carbonation').query({ vesselId: weak.id, co2Volumes: 2.6, temp: 2, tempUnit: 'c' });
+    expect(capped.status).toBe(422);
+    expect(capped.body.error.message).toMatch(/above this vessel's rated working pressure/);
+
+    // Logging a carbonation on a batch in the weak tank is refused the same way; nothing is written.
+    const batch = await knockedOutBatch();
+    await postReading(batch.id, reading(1.012));
+    await t.as.head_brewer.put(`/api/batches/${batch.id}/vessel`).send({ vesselId: weak.id });
+    const logged = await t.as.assistant_brewer
+      .post(`/api/cellar/batches/${batch.id}/actions`)
+      .set(writeHeaders())
+      .send({ kind: 'action', action: 'carbonation', co2Volumes: 2.6, temp: 2, tempUnit: 'c' });
+    expect(logged.status).toBe(422);
+    expect(await BatchLogEntry.count({ where: { batchId: batch.id, kind: 'action' } })).toBe(0);
+  });
+});
+
+describe('alerts', () => {
+  it('e-mails the head brewer once when a reading crosses the D-rest trigger', async () => {
+    const batch = await knockedOutBatch();
+    const plan = await t.as.head_brewer.put(`/api/cellar/batches/${batch.id}/plan`).send({
+      plannedFg: 1.012,
+      tempUnit: 'c',
+      primaryTemp: 19,
+      dRestPoints: 3,
+      dRestTemp: 21,
+      crashTemp: 1,
+      co2Volumes: 2.5,
+      readingIntervalHours: 24,
+    });
+    expect(plan.status).toBe(200);
+    const mailFor = () => mailCatcher().messages().filter((m) => m.to.includes(t.users.head_brewer.email) && m.subject.includes(batch.number));
+    const hour = 3_600_000;
+    await postReading(batch.id, reading(1.05), new Date(Date.now() - 3 * hour));
+    await postReading(batch.id, reading(1.03), new Date(Date.now() - 2 * hour));
+    expect(mailFor()).toHaveLength(0);
+    await postReading(batch.id, reading(1.0145), new Date(Date.now() - hour)); // trigger = 1.012 + 0.003
+    await expect.poll(() => mailFor().length).toBe(1);
+    expect(mailFor()[0]!.subject).toMatch(/D-rest trigger \(1\.015\)/);
+    expect(mailFor()[0]!.text).toContain(`/cellar/batches/${batch.id}`);
+
+    await postReading(batch.id, reading(1.013));
+    const alerts = await t.as.head_brewer.get('/api/cellar/alerts');
+    expect(alerts.body.filter((a: { batchId: number }) => a.batchId === batch.id)).toMatchObject([{ kind: 'd_rest', readAt: null }]);
+    expect(mailFor()).toHaveLength(1);
+    expect((await t.as.assistant_brewer.get('/api/cellar/alerts')).status).toBe(403);
+  });
+});
