@@ -32,6 +32,11 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
     status = 413;
     code = 'too_large';
     message = 'The request is too large';
+  } else if (err instanceof URIError && parserError.status === 400) {
+    // The router could not decode a path segment (e.g. a stray '%').
+    status = 400;
+    code = 'invalid';
+    message = 'The address is not valid';
   } else if (parserError.type && parserError.status && parserError.status < 500) {
     status = parserError.status;
     code = 'invalid';
