@@ -123,3 +123,4 @@ export {
 } from './fermentation';
 export { KEG_SIZES, KEG_SIZE_IDS, lineVolumeL, packagingTotals, type KegSize, type PackageLine, type PackagingTotals } from './packaging';
 export { achievedEfficiency } from './efficiency';
+export { targetWarnings, waterDoseWarnings, TARGET_TOLERANCE, ION_CEILINGS_PPM, type RecipeTargets } from './checks';

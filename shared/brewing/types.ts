@@ -261,7 +261,9 @@ export type WarningCode =
   | 'strikeExceedsTotalWater'
   | 'adjunctOutsideRange'
   | 'waterTargetNotReached'
-  | 'hopMinutesExceedBoil';
+  | 'hopMinutesExceedBoil'
+  | 'offTarget'
+  | 'ionAboveCeiling';
 
 export interface BrewingWarning {
   code: WarningCode;

@@ -2,7 +2,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { computeRecipe, scaleRecipe, usBblToL, usGalToL } from '../../shared/brewing';
 import { equipmentAtVolume, toRecipeInput, type RecipeVersionContent } from '../../shared/schemas/recipes';
-import { DEMO_EQUIPMENT, SEASONAL_CONTENT } from '../../server/seed/recipes';
+import { DEMO_EQUIPMENT, SEASONAL_CONTENT } from '../../server/seed/recipe-data';
 import { freezeRecipeVersion, planForBatch } from '../../server/services/recipe-plans';
 import { createTestBrewery, type TestBrewery } from './helpers';
 

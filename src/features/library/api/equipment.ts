@@ -1,0 +1,20 @@
+import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { api } from '../../../lib/api-client';
+import type { EquipmentProfile } from '../../../../shared/brewing';
+import type { EquipmentInput } from '../../../../shared/schemas/recipes';
+
+export type EquipmentRow = EquipmentProfile & { id: number };
+
+export const equipmentKeys = { all: ['equipment'] as const };
+
+export const equipmentQuery = () => queryOptions({ queryKey: equipmentKeys.all, queryFn: () => api.get<EquipmentRow[]>('/api/equipment') });
+export const useEquipment = () => useQuery(equipmentQuery());
+
+export function useSaveEquipment() {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: ({ id, input }: { id?: number; input: EquipmentInput }) =>
+      id === undefined ? api.post<EquipmentRow>('/api/equipment', input) : api.put<EquipmentRow>(`/api/equipment/${id}`, input),
+    onSuccess: () => client.invalidateQueries({ queryKey: equipmentKeys.all }),
+  });
+}

@@ -1,0 +1,29 @@
+import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { api } from '../../../lib/api-client';
+import type { IngredientInput, IngredientKind } from '../../../../shared/schemas/recipes';
+
+export interface IngredientRow {
+  id: number;
+  kind: IngredientKind;
+  name: string;
+  ppg: number | null;
+  colourLovibond: number | null;
+  alphaAcidPct: number | null;
+  attenuationPct: number | null;
+  notes: string;
+  typical: boolean;
+}
+
+export const ingredientKeys = { all: ['ingredients'] as const };
+
+export const ingredientsQuery = () => queryOptions({ queryKey: ingredientKeys.all, queryFn: () => api.get<IngredientRow[]>('/api/ingredients') });
+export const useIngredients = () => useQuery(ingredientsQuery());
+
+export function useSaveIngredient() {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: ({ id, input }: { id?: number; input: IngredientInput }) =>
+      id === undefined ? api.post<IngredientRow>('/api/ingredients', input) : api.put<IngredientRow>(`/api/ingredients/${id}`, input),
+    onSuccess: () => client.invalidateQueries({ queryKey: ingredientKeys.all }),
+  });
+}

@@ -1,0 +1,34 @@
+import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
+import { api } from '../../../lib/api-client';
+import type { EquipmentProfile, ScaledRecipe } from '../../../../shared/brewing';
+import type { RecipeVersionContent } from '../../../../shared/schemas/recipes';
+import { recipeKeys } from './keys';
+
+export interface ScaleTarget {
+  equipmentProfileId?: number;
+  batchVolumeL?: number;
+}
+
+export interface ScaleResult {
+  recipe: { id: number; name: string; style: string };
+  version: { id: number; number: number; frozen: boolean; content: RecipeVersionContent };
+  source: { equipmentProfileId: number; equipment: EquipmentProfile };
+  target: { equipmentProfileId: number; equipment: EquipmentProfile };
+  scaled: ScaledRecipe;
+}
+
+export function scaleSearch(target: ScaleTarget): string {
+  const params = new URLSearchParams();
+  if (target.equipmentProfileId !== undefined) params.set('equipmentProfileId', String(target.equipmentProfileId));
+  if (target.batchVolumeL !== undefined) params.set('batchVolumeL', String(Number(target.batchVolumeL.toFixed(3))));
+  return params.toString();
+}
+
+export const scaleQuery = (recipeId: number, versionId: number, target: ScaleTarget) =>
+  queryOptions({
+    queryKey: recipeKeys.scale(recipeId, versionId, target),
+    queryFn: () => api.get<ScaleResult>(`/api/recipes/${recipeId}/versions/${versionId}/scale?${scaleSearch(target)}`),
+    placeholderData: keepPreviousData,
+  });
+export const useScale = (recipeId: number, versionId: number, target: ScaleTarget, enabled = true) =>
+  useQuery({ ...scaleQuery(recipeId, versionId, target), enabled });

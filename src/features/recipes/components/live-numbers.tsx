@@ -1,0 +1,114 @@
+import { useMemo } from 'react';
+import {
+  BrewingInputError,
+  computeRecipe,
+  targetWarnings,
+  waterDoseWarnings,
+  type BrewingWarning,
+  type ComputedRecipe,
+  type EquipmentProfile,
+} from '../../../../shared/brewing';
+import { equipmentAtVolume, recipeContentSchema, toRecipeInput, type RecipeVersionContent } from '../../../../shared/schemas/recipes';
+import type { UnitSystem } from '../../../../shared/schemas/auth';
+import { show, showVolume } from '../../../lib/units';
+import { cx } from '../../../components/ui';
+
+export interface LiveNumbers {
+  computed?: ComputedRecipe;
+  problem?: string;
+  warnings: BrewingWarning[];
+}
+
+/** Every number for the editor's current values, from shared/brewing; nothing is computed here. */
+export function useLiveNumbers(name: string, content: unknown, equipment: EquipmentProfile | undefined): LiveNumbers {
+  const json = JSON.stringify(content);
+  return useMemo(() => {
+    if (!equipment) return { problem: 'Choose the equipment this recipe is written for.', warnings: [] };
+    const parsed = recipeContentSchema.safeParse(JSON.parse(json));
+    if (!parsed.success) return { problem: 'Some fields need attention; the numbers update once they are filled in.', warnings: [] };
+    const c: RecipeVersionContent = parsed.data;
+    try {
+      const computed = computeRecipe(toRecipeInput(name || 'Recipe', c), equipmentAtVolume(equipment, c.targets.batchVolumeL));
+      const warnings = [...computed.warnings, ...targetWarnings(computed, c.targets), ...(computed.water ? waterDoseWarnings(computed.water) : [])];
+      return { computed, warnings };
+    } catch (error) {
+      if (error instanceof BrewingInputError) return { problem: error.message, warnings: [] };
+      throw error;
+    }
+  }, [name, json, equipment]);
+}
+
+function Figure({ label, children, className }: { label: string; children: React.ReactNode; className?: string }) {
+  return (
+    <div role="group" aria-label={label} className={cx('rounded-lg bg-mist-100 px-3 py-2', className)}>
+      <div className="text-xs font-semibold uppercase tracking-wide text-ink-500">{label}</div>
+      <div className="text-2xl font-semibold tabular-nums text-ink-900">{children}</div>
+    </div>
+  );
+}
+
+/** The live panel beside the editor: the big figures, then water and volumes, then warnings. */
+export function LiveNumbersPanel({ live, system }: { live: LiveNumbers; system: UnitSystem }) {
+  const c = live.computed;
+  return (
+    <section aria-label="Live numbers" className="space-y-3">
+      {live.problem && <p className="rounded-lg bg-sky-100 p-3 text-sm text-sky-700">{live.problem}</p>}
+      <div className="grid grid-cols-2 gap-2">
+        <Figure label="OG">{c ? c.og.toFixed(3) : '—'}</Figure>
+        <Figure label="FG">{c ? c.fg.toFixed(3) : '—'}</Figure>
+        <Figure label="ABV">{c ? `${c.abvPct.toFixed(1)} %` : '—'}</Figure>
+        <Figure label="IBU">{c ? c.ibu.toFixed(1) : '—'}</Figure>
+        <Figure label="SRM">
+          <span className="flex items-center gap-2">
+            {c && <span aria-hidden className="inline-block h-6 w-6 rounded-full border border-ink-300" style={{ backgroundColor: c.colourHex }} />}
+            {c ? c.srm.toFixed(1) : '—'}
+          </span>
+        </Figure>
+        <Figure label="BU:GU">{c ? c.buGu.toFixed(2) : '—'}</Figure>
+      </div>
+      {c && (
+        <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-1 rounded-lg border border-mist-200 bg-white p-3 text-sm">
+          <dt className="text-ink-500">Strike water</dt>
+          <dd className="text-right font-semibold tabular-nums">
+            {show(system, 'volumeL', c.volumes.strikeL)} at {show(system, 'tempC', c.strikeTempC)}
+          </dd>
+          <dt className="text-ink-500">Sparge water</dt>
+          <dd className="text-right tabular-nums">{show(system, 'volumeL', c.volumes.spargeL)}</dd>
+          <dt className="text-ink-500">Pre-boil</dt>
+          <dd className="text-right tabular-nums">
+            {show(system, 'volumeL', c.volumes.preBoilL)} at {c.preBoilGravity.toFixed(3)}
+          </dd>
+          <dt className="text-ink-500">Mash volume</dt>
+          <dd className="text-right tabular-nums">{show(system, 'volumeL', c.volumes.mashVolumeL)}</dd>
+          <dt className="text-ink-500">Into fermenter</dt>
+          <dd className="text-right tabular-nums">{showVolume(system, c.volumes.intoFermenterL)}</dd>
+          {c.water && (
+            <>
+              <dt className="text-ink-500">Cl : SO₄</dt>
+              <dd className="text-right tabular-nums">{c.water.chlorideSulfateRatio === null ? '—' : c.water.chlorideSulfateRatio.toFixed(2)}</dd>
+              <dt className="text-ink-500">Mash Ca / Mg / Na</dt>
+              <dd className="text-right tabular-nums">
+                {c.water.mash.calciumPpm.toFixed(0)} / {c.water.mash.magnesiumPpm.toFixed(0)} / {c.water.mash.sodiumPpm.toFixed(0)} ppm
+              </dd>
+              <dt className="text-ink-500">Mash SO₄ / Cl / HCO₃</dt>
+              <dd className="text-right tabular-nums">
+                {c.water.mash.sulfatePpm.toFixed(0)} / {c.water.mash.chloridePpm.toFixed(0)} / {c.water.mash.bicarbonatePpm.toFixed(0)} ppm
+              </dd>
+              <dt className="text-ink-500">Residual alkalinity</dt>
+              <dd className="text-right tabular-nums">{c.water.residualAlkalinity.asCaCO3Ppm.toFixed(0)} ppm as CaCO₃</dd>
+            </>
+          )}
+        </dl>
+      )}
+      {live.warnings.length > 0 && (
+        <ul aria-label="Warnings" className="space-y-1">
+          {live.warnings.map((w, i) => (
+            <li key={i} className="rounded-lg border-l-4 border-brass-500 bg-brass-100 px-3 py-2 text-sm text-ink-900">
+              {w.message}
+            </li>
+          ))}
+        </ul>
+      )}
+    </section>
+  );
+}

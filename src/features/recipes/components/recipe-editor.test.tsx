@@ -1,0 +1,49 @@
+// The editor recomputes from shared/brewing as the brewer types: a hop's weight moves the IBU on screen.
+import { describe, expect, it } from 'vitest';
+import { fireEvent, render, screen, within } from '@testing-library/react';
+import { computeRecipe, ozToG } from '../../../../shared/brewing';
+import { equipmentAtVolume, toRecipeInput } from '../../../../shared/schemas/recipes';
+import { DEMO_EQUIPMENT, SEASONAL_CONTENT, SEASONAL_NAME } from '../../../../server/seed/recipe-data';
+import { RecipeEditor } from './recipe-editor';
+
+const pilot = { id: 1, ...DEMO_EQUIPMENT.pilot };
+
+function renderEditor() {
+  render(
+    <RecipeEditor
+      initial={{ name: SEASONAL_NAME, style: 'Amber', description: '', status: 'draft', changeNote: 'Pilot', equipmentProfileId: 1, content: SEASONAL_CONTENT }}
+      equipment={[pilot]}
+      system="us"
+      canEdit
+      saveLabel="Save"
+      onSave={async () => undefined}
+    />,
+  );
+}
+
+const ibuOnScreen = () => within(screen.getByRole('group', { name: 'IBU' })).getByText(/^\d+\.\d$/).textContent;
+
+describe('recipe editor', () => {
+  it("updates the IBU when a hop's weight changes", () => {
+    renderEditor();
+    const before = computeRecipe(toRecipeInput(SEASONAL_NAME, SEASONAL_CONTENT), equipmentAtVolume(pilot, SEASONAL_CONTENT.targets.batchVolumeL));
+    expect(ibuOnScreen()).toBe(before.ibu.toFixed(1));
+
+    // The brewery works in US units: the bittering hop's weight is typed in ounces.
+    const weight = within(screen.getByRole('group', { name: 'Hop 1' })).getByLabelText('Weight (oz)');
+    fireEvent.change(weight, { target: { value: '4' } });
+
+    const hops = SEASONAL_CONTENT.hops.map((h, i) => (i === 0 ? { ...h, weightG: ozToG(4) } : h));
+    const after = computeRecipe(toRecipeInput(SEASONAL_NAME, { ...SEASONAL_CONTENT, hops }), equipmentAtVolume(pilot, SEASONAL_CONTENT.targets.batchVolumeL));
+    expect(after.ibu).toBeGreaterThan(before.ibu + 5);
+    expect(ibuOnScreen()).toBe(after.ibu.toFixed(1));
+    expect(within(screen.getByRole('group', { name: 'Hop 1' })).getByLabelText('Hop 1 IBU').textContent).toBe(`${after.hops[0]!.ibu.toFixed(1)} IBU`);
+  });
+
+  it('shows a message instead of stale numbers while a field is empty', () => {
+    renderEditor();
+    fireEvent.change(within(screen.getByRole('group', { name: 'Hop 1' })).getByLabelText('Weight (oz)'), { target: { value: '' } });
+    expect(within(screen.getByRole('group', { name: 'IBU' })).getByText('—')).toBeTruthy();
+    expect(screen.getByText(/Some fields need attention/)).toBeTruthy();
+  });
+});
