@@ -34,5 +34,6 @@ export const tastingRouter = defineRouter('/api/batches', [
     },
   },
   { method: 'patch', path: '/:batchId/tasting-notes/:noteId', access: BREWING_ROLES, params: noteParams, handler: appendOnly },
+  { method: 'put', path: '/:batchId/tasting-notes/:noteId', access: BREWING_ROLES, params: noteParams, handler: appendOnly },
   { method: 'delete', path: '/:batchId/tasting-notes/:noteId', access: BREWING_ROLES, params: noteParams, handler: appendOnly },
 ]);

@@ -25,7 +25,7 @@ export async function brewedBatch(t: TestBrewery, options: BrewedOptions): Promi
     await as
       .post(`/api/batches/${batch.id}/log`)
       .set(writeHeaders())
-      .send({ kind: 'step', stepKey: 'knockout-end', label: 'Knockout end', measurements: { gravitySg: options.og, volumeL: 20 } }),
+      .send({ kind: 'step', stepKey: 'knockout-end', label: 'Knockout end', measurements: { gravitySg: options.og, volumeL: 45 } }),
     201,
   );
   await ok(await as.post(`/api/batches/${batch.id}/status`).send({ status: 'fermenting' }), 200);
