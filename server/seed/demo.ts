@@ -5,6 +5,7 @@ import { hashPassword } from '../services/passwords';
 import type { Role } from '../../shared/schemas/roles';
 import type { Transaction } from 'sequelize';
 import { seedRecipes } from './recipes';
+import { seedBatches } from './batches';
 
 export const DEMO_PASSWORD = 'harbour-copper-kettle-72';
 
@@ -21,7 +22,7 @@ export interface DemoContext {
 }
 
 /** Steps later areas add to fill the demo brewery (recipes, batches, cellar...). They run once, in order. */
-export const demoSteps: ((ctx: DemoContext) => Promise<void>)[] = [seedRecipes];
+export const demoSteps: ((ctx: DemoContext) => Promise<void>)[] = [seedRecipes, seedBatches];
 
 /** Seeds the demo brewery once; returns false when it is already there. */
 export async function seedDemo(): Promise<boolean> {

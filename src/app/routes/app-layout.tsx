@@ -1,8 +1,8 @@
 import { Navigate, NavLink, Outlet, useLocation, useNavigate } from 'react-router-dom';
 import { useMe } from '../../features/auth/api/me';
-import { useSignOut } from '../../features/auth/api/session';
+import { OutboxBanner, SignOutButton } from '../../features/batches/components/outbox-status';
 import { ROLE_LABELS } from '../../../shared/schemas/roles';
-import { Button, ErrorState, Loading, cx } from '../../components/ui';
+import { ErrorState, Loading, cx } from '../../components/ui';
 import { CurrentUserContext } from '../current-user';
 import { navFor } from '../navigation';
 
@@ -11,7 +11,6 @@ export function AppLayout() {
   const me = useMe();
   const location = useLocation();
   const navigate = useNavigate();
-  const signOut = useSignOut();
 
   if (me.isPending) return <Loading label="Opening Kettlewright" />;
   if (me.isError) return <div className="p-6"><ErrorState error={me.error} onRetry={() => me.refetch()} /></div>;
@@ -48,19 +47,11 @@ export function AppLayout() {
               <span className="text-sm text-cellar-100">
                 {user.displayName} · {ROLE_LABELS[user.role]}
               </span>
-              <Button
-                variant="onDark"
-                busy={signOut.isPending}
-                onClick={async () => {
-                  await signOut.mutateAsync();
-                  navigate('/sign-in', { replace: true });
-                }}
-              >
-                Sign out
-              </Button>
+              <SignOutButton onSignedOut={() => navigate('/sign-in', { replace: true })} />
             </div>
           </div>
         </header>
+        <OutboxBanner />
         <main className="mx-auto max-w-7xl px-4 py-6">
           <Outlet />
         </main>

@@ -1,0 +1,218 @@
+import { useMemo, useState } from 'react';
+import { Link, useParams } from 'react-router-dom';
+import { brewDaySteps, boilAdditions, type BrewDayStep } from '../../../../shared/batches/brew-day';
+import { BATCH_STATUS_LABELS } from '../../../../shared/schemas/batches';
+import { Button, Card, Caution, ErrorState, Loading, TextAreaField, cx } from '../../../components/ui';
+import { useCurrentUser } from '../../../app/current-user';
+import { useOutbox, type OutboxItem } from '../../../lib/outbox';
+import { useBatch } from '../api/get-batch';
+import { batchGroup, logEntry, useRefreshOnSent } from '../api/log-entry';
+import { ActualsCard } from './actuals-card';
+import { BoilTimer } from './boil-timer';
+import { LogList } from './log-list';
+import { MeasurementFields, toMeasurements, type GravityUnit, type Typed } from './measurement-fields';
+import { OutboxPanel } from './outbox-panel';
+import { SignOffPanel, Signatures } from './sign-off-panel';
+import { showAddition, showMeasurements, showTime } from './format';
+import { useOnline } from './use-online';
+
+interface Done {
+  at: string;
+  waiting: boolean;
+}
+
+/** When each step was marked done: on the server, or still waiting on this device. */
+function doneSteps(entries: { kind: string; stepKey: string | null; capturedAt: string }[], waiting: OutboxItem[]): Map<string, Done> {
+  const done = new Map<string, Done>();
+  for (const e of entries) if (e.kind === 'step' && e.stepKey) done.set(e.stepKey, { at: e.capturedAt, waiting: false });
+  for (const i of waiting) {
+    const body = i.body as { kind?: string; stepKey?: string };
+    if (i.state === 'waiting' && body.kind === 'step' && body.stepKey && !done.has(body.stepKey)) done.set(body.stepKey, { at: i.capturedAt, waiting: true });
+  }
+  return done;
+}
+
+/** The tablet's brew-day screen: walk the plan step by step, measure, note, and sign off. */
+export function BrewDayPage() {
+  const id = Number(useParams().batchId);
+  const me = useCurrentUser();
+  const system = me.brewery.unitSystem;
+  const timeZone = me.brewery.timeZone;
+  const batch = useBatch(id);
+  const { items } = useOutbox(batchGroup(id));
+  const online = useOnline();
+  useRefreshOnSent(id);
+  const [selected, setSelected] = useState<string | null>(null);
+  const [typed, setTyped] = useState<Typed>({});
+  const [gravity, setGravity] = useState<GravityUnit>('sg');
+  const [error, setError] = useState<string | null>(null);
+  const [note, setNote] = useState('');
+  const [deviation, setDeviation] = useState(false);
+
+  const plan = batch.data?.plan;
+  const steps = useMemo(() => (plan ? brewDaySteps(plan) : []), [plan]);
+  const additions = useMemo(() => (plan ? boilAdditions(plan) : []), [plan]);
+  if (batch.isPending) return <Loading label="Opening the batch" />;
+  if (batch.isError) return <ErrorState error={batch.error} onRetry={() => batch.refetch()} />;
+  const b = batch.data;
+  const done = doneSteps(b.entries, items);
+  const current: BrewDayStep | undefined = steps.find((s) => s.key === selected) ?? steps.find((s) => !done.has(s.key));
+  const waitingCount = items.filter((i) => i.state === 'waiting').length;
+  const signed = b.brewDaySigned;
+
+  const markDone = async (step: BrewDayStep) => {
+    const { measurements, error: bad } = toMeasurements(typed, system, gravity);
+    if (bad) return setError(bad);
+    setError(null);
+    await logEntry(
+      id,
+      { kind: 'step', stepKey: step.key, label: step.label, meaning: 'performed', ...(measurements ? { measurements } : {}) },
+      measurements ? `${step.label} · ${showMeasurements(system, measurements)}` : step.label,
+    );
+    setTyped({});
+    setSelected(null);
+  };
+
+  return (
+    <div className="space-y-4">
+      <header className="flex flex-wrap items-center justify-between gap-3">
+        <div>
+          <h1 className="text-3xl font-bold">
+            {b.number} · {b.beerName}
+          </h1>
+          <p className="text-lg text-ink-700">
+            {BATCH_STATUS_LABELS[b.status]} · brew date {b.brewDate}
+            {b.vessel && ` · ${b.vessel.name}`}
+          </p>
+        </div>
+        <div className="flex items-center gap-2">
+          <span className={cx('rounded-full px-3 py-1 font-semibold', online ? 'bg-cellar-100 text-cellar-800' : 'bg-brass-400 text-ink-900')} role="status">
+            {online ? 'Online' : 'Offline: entries kept on this tablet'}
+          </span>
+          <Link to={`/batches/${id}/record`} className="flex min-h-touch items-center rounded-lg border-2 border-cellar-800 px-4 font-semibold text-cellar-800">
+            Record and QR labels
+          </Link>
+        </div>
+      </header>
+
+      <div className="grid gap-4 lg:grid-cols-3">
+        <div className="space-y-4 lg:col-span-2">
+          {signed ? (
+            <Card className="p-5">
+              <h2 className="text-2xl font-bold">Brew day signed off</h2>
+              <p className="mt-1 text-ink-700">Entries can only be corrected now: use “Correct” in the log.</p>
+            </Card>
+          ) : current ? (
+            <Card className="p-5" aria-label="Current step">
+              <p className="text-sm font-semibold uppercase tracking-wide text-ink-500">
+                Step {steps.indexOf(current) + 1} of {steps.length}
+              </p>
+              <h2 className="text-3xl font-bold" data-testid="current-step">
+                {current.label}
+              </h2>
+              {current.additions.length > 0 && (
+                <ul className="mt-3 space-y-1 text-xl">
+                  {current.additions.map((a, i) => (
+                    <li key={i}>
+                      <span className="font-bold tabular-nums">{showAddition(system, a)}</span> {a.what}
+                    </li>
+                  ))}
+                </ul>
+              )}
+              {current.hot && (
+                <div className="mt-3">
+                  <Caution title="Hot liquid">Near-boiling wort and water scald: wear gloves and eye protection, check hose clamps before pumping, and follow your local codes and licensed practice.</Caution>
+                </div>
+              )}
+              {current.asks.length > 0 && (
+                <div className="mt-4">
+                  <MeasurementFields asks={current.asks} expected={current.expected} typed={typed} onChange={setTyped} system={system} gravity={gravity} onGravityUnit={setGravity} />
+                </div>
+              )}
+              {error && (
+                <p role="alert" className="mt-3 text-lg font-semibold text-ember-700">
+                  {error}
+                </p>
+              )}
+              <Button size="xl" className="mt-5 w-full text-2xl" onClick={() => void markDone(current)}>
+                {done.has(current.key) ? 'Log again' : 'Done'}
+              </Button>
+            </Card>
+          ) : (
+            <Card className="p-5">
+              <h2 className="text-2xl font-bold">Every step is logged</h2>
+              <p className="text-ink-700">The head brewer can now review and sign off the brew day.</p>
+            </Card>
+          )}
+
+          <Card className="p-4">
+            <h2 className="text-lg font-bold">Steps</h2>
+            <ol className="mt-2 grid grid-cols-2 gap-2">
+              {steps.map((s, i) => {
+                const d = done.get(s.key);
+                return (
+                  <li key={s.key}>
+                    <button
+                      type="button"
+                      onClick={() => setSelected(s.key)}
+                      aria-current={current?.key === s.key ? 'step' : undefined}
+                      className={cx(
+                        'flex min-h-[56px] w-full items-center justify-between gap-2 rounded-lg border-2 px-3 text-left',
+                        current?.key === s.key ? 'border-brass-500 bg-brass-100' : d ? 'border-cellar-600 bg-cellar-100' : 'border-mist-300 bg-white',
+                      )}
+                    >
+                      <span>
+                        <span className="mr-2 tabular-nums text-ink-500">{i + 1}.</span>
+                        {s.label}
+                      </span>
+                      {d && (
+                        <span className="shrink-0 text-sm font-semibold tabular-nums">
+                          {d.waiting ? '⏳' : '✓'} {showTime(d.at, timeZone)}
+                        </span>
+                      )}
+                    </button>
+                  </li>
+                );
+              })}
+            </ol>
+          </Card>
+        </div>
+
+        <div className="space-y-4">
+          <OutboxPanel group={batchGroup(id)} timeZone={timeZone} />
+          <BoilTimer boilStartedAt={done.get('boil-start')?.at ?? null} boilMinutes={b.plan.equipment.boilMinutes} additions={additions} system={system} />
+          {!signed && (
+            <Card className="p-4">
+              <h2 className="text-lg font-bold">Note or deviation</h2>
+              <TextAreaField label="What happened" value={note} onChange={(e) => setNote(e.target.value)} placeholder="Stuck sparge, added rice hulls" />
+              <label className="mt-2 flex min-h-touch items-center gap-3 text-base">
+                <input type="checkbox" className="h-6 w-6" checked={deviation} onChange={(e) => setDeviation(e.target.checked)} />
+                This is a deviation from the plan
+              </label>
+              <Button
+                className="mt-2"
+                size="lg"
+                disabled={!note.trim()}
+                onClick={() => {
+                  void logEntry(id, { kind: 'note', text: note.trim(), deviation, meaning: 'performed' }, `${deviation ? 'Deviation' : 'Note'}: ${note.trim().slice(0, 40)}`);
+                  setNote('');
+                  setDeviation(false);
+                }}
+              >
+                Save note
+              </Button>
+            </Card>
+          )}
+          <ActualsCard actuals={b.actuals} system={system} />
+          {b.signatures.length > 0 && <Signatures signatures={b.signatures} timeZone={timeZone} />}
+          {me.role === 'head_brewer' && !signed && <SignOffPanel batchId={id} pendingCount={waitingCount} />}
+        </div>
+      </div>
+
+      <Card className="p-4">
+        <h2 className="text-lg font-bold">Log</h2>
+        {b.entries.length ? <LogList batchId={id} entries={b.entries} system={system} timeZone={timeZone} /> : <p className="text-ink-500">Nothing logged yet.</p>}
+      </Card>
+    </div>
+  );
+}

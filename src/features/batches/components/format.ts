@@ -1,0 +1,36 @@
+import { roundForMeasuring } from '../../../../shared/brewing';
+import type { UnitSystem } from '../../../../shared/schemas/auth';
+import type { Addition } from '../../../../shared/batches/brew-day';
+import { show, showMeasured, showSmallWeight } from '../../../lib/units';
+
+/** A time in the brewery's zone with the zone named, e.g. "Dec 1, 14:05 AST". */
+export function showTime(iso: string, timeZone: string, withDate = false): string {
+  return new Intl.DateTimeFormat('en-US', {
+    timeZone,
+    hour: '2-digit',
+    minute: '2-digit',
+    hourCycle: 'h23',
+    timeZoneName: 'short',
+    ...(withDate ? { year: 'numeric', month: 'short', day: 'numeric' } : {}),
+  }).format(new Date(iso));
+}
+
+export function showAddition(system: UnitSystem, a: Addition): string {
+  if (a.amount.unit === 'g') return showSmallWeight(system, a.amount.value);
+  if (a.amount.unit === 'each') return `${a.amount.value} each`;
+  return showMeasured(roundForMeasuring({ value: a.amount.value, unit: a.amount.unit }, system));
+}
+
+export const showSg = (sg: number) => sg.toFixed(3);
+
+/** Measurements as a short line, in the brewery's units. */
+export function showMeasurements(system: UnitSystem, m: { tempC?: number; volumeL?: number; gravitySg?: number; ph?: number }): string {
+  return [
+    m.tempC !== undefined && show(system, 'tempC', m.tempC),
+    m.volumeL !== undefined && show(system, 'volumeL', m.volumeL),
+    m.gravitySg !== undefined && `${showSg(m.gravitySg)} SG`,
+    m.ph !== undefined && `pH ${m.ph.toFixed(2)}`,
+  ]
+    .filter(Boolean)
+    .join(' · ');
+}

@@ -1,0 +1,87 @@
+import { useState } from 'react';
+import type { UnitSystem } from '../../../../shared/schemas/auth';
+import type { LogEntry, Measurements } from '../../../../shared/schemas/batch-log';
+import { ROLE_LABELS, type Role } from '../../../../shared/schemas/roles';
+import { Button, Dialog, TextAreaField, cx } from '../../../components/ui';
+import { logEntry } from '../api/log-entry';
+import { MeasurementFields, toMeasurements, type GravityUnit, type Typed } from './measurement-fields';
+import { showMeasurements, showTime } from './format';
+import type { MeasureKey } from '../../../../shared/batches/brew-day';
+
+function what(e: LogEntry): string {
+  const d = e.data as { label?: string; text?: string };
+  if (e.kind === 'note') return `${(e.data as { deviation?: boolean }).deviation ? 'Deviation' : 'Note'}: ${d.text}`;
+  if (e.kind === 'correction') return `Correction: ${e.reason}`;
+  if (e.kind === 'sign_off') return 'Brew day signed off';
+  return d.label ?? e.kind;
+}
+
+/** The log as recorded: a corrected entry is struck through beside its correction, with both authors and times. */
+export function LogList({ batchId, entries, system, timeZone }: { batchId: number; entries: LogEntry[]; system: UnitSystem; timeZone: string }) {
+  const [correcting, setCorrecting] = useState<LogEntry | null>(null);
+  return (
+    <>
+      <ol className="divide-y divide-mist-200" aria-label="Log">
+        {entries.map((e) => {
+          const m = e.data.measurements as Measurements | undefined;
+          const corrected = e.correctedByIds.length > 0;
+          return (
+            <li key={e.id} className={cx('flex items-start gap-3 py-2', e.kind === 'correction' && 'pl-6')} data-testid="log-entry">
+              <span className="w-24 shrink-0 tabular-nums text-ink-500">{showTime(e.capturedAt, timeZone)}</span>
+              <div className="flex-1">
+                <p className={cx('font-medium', corrected && 'text-ink-500 line-through')}>
+                  {what(e)}
+                  {m && <span className="ml-2 tabular-nums">{showMeasurements(system, m)}</span>}
+                  {e.kind === 'note' || !e.data.note ? null : <span className="ml-2 text-ink-500">“{String(e.data.note)}”</span>}
+                </p>
+                <p className="text-sm text-ink-500">
+                  {e.authorName} · {ROLE_LABELS[e.authorRole as Role] ?? e.authorRole} · received {showTime(e.receivedAt, timeZone)}
+                  {e.late && <span className="ml-2 rounded bg-brass-100 px-1 font-semibold text-ink-900">Late entry</span>}
+                  {e.correctsEntryId && <span className="ml-2">corrects #{entries.find((x) => x.id === e.correctsEntryId)?.sequence}</span>}
+                </p>
+              </div>
+              {(e.kind === 'step' || e.kind === 'measurement' || e.kind === 'note') && (
+                <Button variant="quiet" onClick={() => setCorrecting(e)} aria-label={`Correct entry ${e.sequence}`}>
+                  Correct
+                </Button>
+              )}
+            </li>
+          );
+        })}
+      </ol>
+      {correcting && <CorrectionDialog batchId={batchId} entry={correcting} system={system} onClose={() => setCorrecting(null)} />}
+    </>
+  );
+}
+
+function CorrectionDialog({ batchId, entry, system, onClose }: { batchId: number; entry: LogEntry; system: UnitSystem; onClose: () => void }) {
+  const [reason, setReason] = useState('');
+  const [typed, setTyped] = useState<Typed>({});
+  const [gravity, setGravity] = useState<GravityUnit>('sg');
+  const [error, setError] = useState<string | null>(null);
+  const asks = Object.keys((entry.data.measurements as Measurements | undefined) ?? {}) as MeasureKey[];
+  const submit = async () => {
+    const { measurements, error: bad } = toMeasurements(typed, system, gravity);
+    if (bad) return setError(bad);
+    if (reason.trim().length < 3) return setError('Say why (at least 3 characters)');
+    await logEntry(batchId, { kind: 'correction', correctsEntryId: entry.id, reason: reason.trim(), meaning: 'performed', ...(measurements ? { measurements } : {}) }, `Correction of #${entry.sequence}`);
+    onClose();
+  };
+  return (
+    <Dialog open onClose={onClose} title={`Correct entry #${entry.sequence}`}>
+      <p className="mb-3 text-ink-500">The original stays in the log, struck through, beside your correction.</p>
+      {asks.length > 0 && <MeasurementFields asks={asks} expected={{}} typed={typed} onChange={setTyped} system={system} gravity={gravity} onGravityUnit={setGravity} />}
+      <div className="mt-3">
+        <TextAreaField label="Reason" value={reason} onChange={(e) => setReason(e.target.value)} error={error ?? undefined} />
+      </div>
+      <div className="mt-4 flex justify-end gap-2">
+        <Button variant="secondary" onClick={onClose}>
+          Cancel
+        </Button>
+        <Button size="lg" onClick={() => void submit()}>
+          Save correction
+        </Button>
+      </div>
+    </Dialog>
+  );
+}

@@ -1,0 +1,73 @@
+import { describe, expect, it } from 'vitest';
+import { backoffMs, createOutbox, type OutboxItem, type OutboxStore, type SendResult } from './outbox';
+
+/** The outbox's store kept in memory, standing in for IndexedDB (which jsdom lacks). */
+function memoryStore(): OutboxStore & { items: OutboxItem[] } {
+  const s = {
+    items: [] as OutboxItem[],
+    get: async () => s.items,
+    update: async (fn: (items: OutboxItem[]) => OutboxItem[]) => {
+      s.items = fn(s.items);
+    },
+  };
+  return s;
+}
+
+/** A server that answers each send from a script and records what it received. */
+function scriptedServer(answers: SendResult['kind'][]) {
+  const received: { label: string; key: string }[] = [];
+  const send = async (item: OutboxItem): Promise<SendResult> => {
+    received.push({ label: item.label, key: item.idempotencyKey });
+    const kind = answers.shift() ?? 'sent';
+    if (kind === 'retry' || kind === 'rejected') return { kind, message: kind === 'rejected' ? 'Temperature must be at most 110' : 'No connection' };
+    return { kind } as SendResult;
+  };
+  return { received, send };
+}
+
+const write = (label: string) => ({ url: '/api/batches/1/log', body: { label }, label, group: 'batch:1' });
+
+describe('outbox', () => {
+  it('keeps order: a failed send holds back the items after it, and they go in order once it passes', async () => {
+    const store = memoryStore();
+    const server = scriptedServer(['retry']);
+    const box = createOutbox(store, server.send);
+    await box.enqueue(write('one'));
+    await box.flush();
+    await box.enqueue(write('two'));
+    await box.flush();
+    expect(server.received.map((r) => r.label)).toEqual(['one', 'one', 'two']);
+    expect(store.items).toEqual([]);
+  });
+
+  it('a 401 keeps every item and sends them with their original keys after signing in again', async () => {
+    const store = memoryStore();
+    const server = scriptedServer(['signed-out']);
+    const box = createOutbox(store, server.send);
+    const item = await box.enqueue(write('mash in'));
+    await box.flush();
+    expect(box.getSnapshot().needsSignIn).toBe(true);
+    expect(store.items.map((i) => i.idempotencyKey)).toEqual([item.idempotencyKey]);
+    box.resume();
+    await box.flush();
+    expect(server.received.map((r) => r.key)).toEqual([item.idempotencyKey, item.idempotencyKey]);
+    expect(store.items).toEqual([]);
+  });
+
+  it('a rejected item stays visible with the server’s message and does not block the next one', async () => {
+    const store = memoryStore();
+    const server = scriptedServer(['rejected', 'sent']);
+    const box = createOutbox(store, server.send);
+    await box.enqueue(write('bad'));
+    await box.enqueue(write('good'));
+    await box.flush();
+    expect(store.items).toHaveLength(1);
+    expect(store.items[0]).toMatchObject({ label: 'bad', state: 'rejected', message: 'Temperature must be at most 110' });
+    await box.dismiss(store.items[0]!.idempotencyKey);
+    expect(store.items).toEqual([]);
+  });
+
+  it('backs off exponentially up to a minute', () => {
+    expect([1, 2, 3, 7, 20].map(backoffMs)).toEqual([1000, 2000, 4000, 60_000, 60_000]);
+  });
+});
