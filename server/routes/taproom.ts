@@ -32,7 +32,7 @@ export const taproomRouter = defineRouter('/api/taproom', [
   {
     method: 'get',
     path: '/releases',
-    access: ['head_brewer'],
+    access: BREWING_ROLES,
     handler: async (req, res) => {
       res.json(await release.releaseCandidates(actor(req)));
     },

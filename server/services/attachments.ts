@@ -9,10 +9,9 @@ import { Attachment, Batch, Release, TastingNote, User } from '../models';
 import type { AttachmentKind } from '../models/attachment';
 import { badRequest, HttpError, notFound, tooLarge } from '../errors';
 import { getObject, putObject } from './storage';
+import { UPLOAD_MAX_BYTES, type AttachmentView } from '../../shared/schemas/taproom';
 import { findBatch } from './batches';
 
-/** The largest file a person may attach. */
-export const MAX_UPLOAD_BYTES = 15 * 1024 * 1024;
 const THUMBNAIL_PX = 480;
 
 /** Types accepted, as detected from the file's bytes (never from its name or the browser's claim). */
@@ -26,32 +25,20 @@ const ACCEPTED: Record<string, { kind: AttachmentKind; extension: string }> = {
 const unsupported = () =>
   new HttpError(415, 'unsupported_type', 'Attach a photo (JPEG, PNG or WebP) or a PDF. This file is none of those.');
 
-const parser = multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_UPLOAD_BYTES, files: 1, fields: 5 } }).single('file');
+const parser = multer({ storage: multer.memoryStorage(), limits: { fileSize: UPLOAD_MAX_BYTES, files: 1, fields: 5 } }).single('file');
 
 /** Reads one multipart file into memory, refusing anything over the cap with 413 before it is all buffered. */
 export const receiveFile: RequestHandler = (req, res, next) => {
   parser(req, res, (err: unknown) => {
     if (!err) return next();
     if (err instanceof multer.MulterError) {
-      if (err.code === 'LIMIT_FILE_SIZE') return next(tooLarge(`Files can be at most ${MAX_UPLOAD_BYTES / 1024 / 1024} MB.`));
+      if (err.code === 'LIMIT_FILE_SIZE') return next(tooLarge(`Files can be at most ${UPLOAD_MAX_BYTES / 1024 / 1024} MB.`));
       return next(badRequest('Send one file in the field named "file".'));
     }
     next(badRequest('The upload could not be read. Try again.'));
   });
 };
 
-export interface AttachmentView {
-  id: number;
-  kind: AttachmentKind;
-  contentType: string;
-  byteSize: number;
-  displayName: string;
-  tastingNoteId: number | null;
-  uploadedBy: string;
-  createdAt: string;
-  url: string;
-  thumbnailUrl: string | null;
-}
 
 export function attachmentView(a: Attachment, uploadedBy: string): AttachmentView {
   return {

@@ -55,9 +55,9 @@ function toView(n: TastingNote, prevHash: string, correctedBy: number[]): Tastin
 }
 
 /** A batch's notes in order, each with its signature checked against the chain. */
-export async function listTastingNotes(actor: Express.User, batchId: number): Promise<TastingNoteView[]> {
-  await findBatch(actor.breweryId, batchId);
-  const rows = await TastingNote.findAll({ where: { batchId, breweryId: actor.breweryId }, order: [['sequence', 'ASC']] });
+export async function listTastingNotes(actor: Express.User, batchId: number, transaction?: Transaction): Promise<TastingNoteView[]> {
+  await findBatch(actor.breweryId, batchId, transaction);
+  const rows = await TastingNote.findAll({ where: { batchId, breweryId: actor.breweryId }, order: [['sequence', 'ASC']], transaction });
   const correctedBy = new Map<number, number[]>();
   for (const r of rows) {
     if (r.correctsNoteId !== null) {
@@ -86,17 +86,26 @@ async function replayOf(actor: Express.User, batchId: number, input: TastingNote
 }
 
 /** Records one signed note; the same idempotency key with the same note returns the first. */
-export async function addTastingNote(actor: Express.User, batchId: number, input: TastingNoteInput): Promise<{ note: TastingNoteView; created: boolean }> {
-  const write = (transaction: Transaction) => append(actor, batchId, input, transaction);
+export async function addTastingNote(
+  actor: Express.User,
+  batchId: number,
+  input: TastingNoteInput,
+  transaction?: Transaction,
+): Promise<{ note: TastingNoteView; created: boolean }> {
   let result: { row: TastingNote; created: boolean };
-  try {
-    result = await sequelize.transaction({ isolationLevel: Transaction.ISOLATION_LEVELS.READ_COMMITTED }, write);
-  } catch (error) {
-    const replay = error instanceof UniqueConstraintError ? await replayOf(actor, batchId, input) : null;
-    if (!replay) throw error;
-    result = { row: replay, created: false };
+  if (transaction) {
+    result = await append(actor, batchId, input, transaction);
+  } else {
+    try {
+      result = await sequelize.transaction({ isolationLevel: Transaction.ISOLATION_LEVELS.READ_COMMITTED }, (t) => append(actor, batchId, input, t));
+    } catch (error) {
+      // The same key raced in from a second send: the unique index kept one; answer as a replay would.
+      const replay = error instanceof UniqueConstraintError ? await replayOf(actor, batchId, input) : null;
+      if (!replay) throw error;
+      result = { row: replay, created: false };
+    }
   }
-  const notes = await listTastingNotes(actor, batchId);
+  const notes = await listTastingNotes(actor, batchId, transaction);
   return { note: notes.find((n) => n.id === Number(result.row.id))!, created: result.created };
 }
 

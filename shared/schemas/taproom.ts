@@ -141,3 +141,22 @@ export interface ReleaseDetail {
   releasedAt: string | null;
   releasedBy: string | null;
 }
+
+/** The largest file a person may attach (photos and lab sheets). */
+export const UPLOAD_MAX_BYTES = 15 * 1024 * 1024;
+/** What may be attached, as the file picker offers it; the server checks the bytes, not this list. */
+export const UPLOAD_ACCEPT = 'application/pdf,image/jpeg,image/png,image/webp';
+
+/** A photo or lab sheet attached to a batch. */
+export interface AttachmentView {
+  id: number;
+  kind: 'photo' | 'document';
+  contentType: string;
+  byteSize: number;
+  displayName: string;
+  tastingNoteId: number | null;
+  uploadedBy: string;
+  createdAt: string;
+  url: string;
+  thumbnailUrl: string | null;
+}

@@ -13,6 +13,9 @@ export const NAV_ITEMS: NavItem[] = [
   { to: '/', label: 'Home', roles: ALL },
   { to: '/batches', label: 'Batches', roles: ['head_brewer', 'assistant_brewer'] },
   { to: '/team', label: 'Team', roles: ['head_brewer'] },
+  // The taproom manager's Home is the taproom itself.
+  { to: '/taproom', label: 'Taproom', roles: ['head_brewer', 'assistant_brewer'] },
+  { to: '/releases', label: 'Tasting & release', roles: ['head_brewer', 'assistant_brewer'] },
   { to: '/settings', label: 'Settings', roles: ALL },
 ];
 

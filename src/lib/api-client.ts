@@ -23,10 +23,11 @@ async function request<T>(method: Method, path: string, body?: unknown, headers:
         Accept: 'application/json',
         // Every write carries this header; the server refuses writes without it (cross-site request guard).
         'x-kettlewright': '1',
-        ...(body !== undefined ? { 'Content-Type': 'application/json' } : {}),
+        // A FormData body (a file upload) sets its own multipart Content-Type with the boundary.
+        ...(body !== undefined && !(body instanceof FormData) ? { 'Content-Type': 'application/json' } : {}),
         ...headers,
       },
-      body: body !== undefined ? JSON.stringify(body) : undefined,
+      body: body instanceof FormData ? body : body !== undefined ? JSON.stringify(body) : undefined,
     });
   } catch {
     throw new ApiError(0, 'offline', 'No connection to Kettlewright. Check the network and try again.');
@@ -51,4 +52,6 @@ export const api = {
   put: <T>(path: string, body?: unknown) => request<T>('PUT', path, body ?? {}),
   patch: <T>(path: string, body?: unknown) => request<T>('PATCH', path, body ?? {}),
   delete: <T>(path: string) => request<T>('DELETE', path),
+  /** Sends a multipart form (files) with the same headers and error handling as every other call. */
+  upload: <T>(path: string, form: FormData) => request<T>('POST', path, form),
 };

@@ -1,5 +1,6 @@
+import { lazy, Suspense } from 'react';
 import { Link } from 'react-router-dom';
-import { Card, PageHeader } from '../../../components/ui';
+import { Card, Loading, PageHeader } from '../../../components/ui';
 import { useCurrentUser } from '../../../app/current-user';
 import { navFor } from '../../../app/navigation';
 
@@ -9,8 +10,18 @@ function greeting(hour: number): string {
   return 'Good evening';
 }
 
+// The taproom manager's home is the tap list, loaded in its own chunk.
+const TaproomHome = lazy(() => import('../../taproom/components/taproom-home').then((m) => ({ default: m.TaproomHome })));
+
 export function HomePage() {
   const me = useCurrentUser();
+  if (me.role === 'taproom_manager') {
+    return (
+      <Suspense fallback={<Loading label="Opening the taproom" />}>
+        <TaproomHome />
+      </Suspense>
+    );
+  }
   const hour = Number(new Intl.DateTimeFormat('en-US', { hour: 'numeric', hourCycle: 'h23', timeZone: me.brewery.timeZone }).format(new Date()));
   const places = navFor(me.role).filter((item) => item.to !== '/');
   return (

@@ -1,0 +1,20 @@
+import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { api } from '../../../lib/api-client';
+import type { AttachmentView } from '../../../../shared/schemas/taproom';
+import { taproomKeys } from './keys';
+
+export const attachmentsQuery = (batchId: number) =>
+  queryOptions({ queryKey: taproomKeys.attachments(batchId), queryFn: () => api.get<AttachmentView[]>(`/api/batches/${batchId}/attachments`) });
+export const useAttachments = (batchId: number) => useQuery(attachmentsQuery(batchId));
+
+export function useUploadAttachment(batchId: number) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: (file: File) => {
+      const form = new FormData();
+      form.append('file', file);
+      return api.upload<AttachmentView>(`/api/batches/${batchId}/attachments`, form);
+    },
+    onSuccess: () => client.invalidateQueries({ queryKey: taproomKeys.attachments(batchId) }),
+  });
+}
