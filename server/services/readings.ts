@@ -58,7 +58,8 @@ async function readyForReadings(actor: LogActor, batchId: number, transaction: T
   if (batch.status === 'brewing') await changeBatchStatus(actor, batchId, { status: 'fermenting' }, transaction);
 }
 
-async function writeReading(
+/** Writes one reading's log entry and projection (inside `transaction` when given); alerts are the caller's to check. */
+export async function writeReading(
   actor: LogActor,
   batchId: number,
   input: ReadingEntryInput,

@@ -147,7 +147,7 @@ export const actionEntrySchema = z
     detail: z.string().trim().max(200, 'Use at most 200 characters').optional(),
     /** Transfer: the volume moved, in `volumeUnit`, and the bright tank it went to. */
     volume: num('Volume', 0.1, 100_000).optional(),
-    volumeUnit: z.enum(['l', 'bbl']).default('l'),
+    volumeUnit: z.enum(['l', 'bbl']).optional(),
     toVesselId: z.number().int().positive().optional(),
     /** Carbonation: target CO2 volumes and the head pressure set, kPa gauge. */
     co2Volumes: num('CO2 volumes', 0.5, 5).optional(),
@@ -194,7 +194,7 @@ export const packagingEntrySchema = z.strictObject({
   kind: z.literal('packaging'),
   lines: z.array(packageLineSchema).min(1, 'Add at least one line').max(20),
   /** Last run of the batch: the batch moves to packaged. */
-  final: z.boolean().default(false),
+  final: z.boolean().optional(),
   note,
 });
 export type PackagingEntryInput = z.infer<typeof packagingEntrySchema>;

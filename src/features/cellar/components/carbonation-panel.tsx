@@ -1,0 +1,57 @@
+import { useState } from 'react';
+import { Button, Caution, TextField } from '../../../components/ui';
+import { kpaToPsi } from '../../../../shared/brewing';
+import type { CellarPlanView, VesselView } from '../../../../shared/schemas/cellar';
+import type { UnitSystem } from '../../../../shared/schemas/auth';
+import { UNITS } from '../../../lib/units';
+import { useCarbonation } from '../api/carbonation';
+import { useLogCellarEntry } from '../api/log-cellar-entry';
+
+const pressure = (system: UnitSystem, kpa: number) => (system === 'us' ? `${kpaToPsi(kpa).toFixed(1)} psi` : `${kpa.toFixed(0)} kPa`);
+
+/** The head pressure to set for a CO2 target, never above the vessel's rated working pressure. */
+export function CarbonationPanel({ batchId, vessel, plan, unitSystem }: { batchId: number; vessel: VesselView; plan: CellarPlanView; unitSystem: UnitSystem }) {
+  const temp = UNITS[unitSystem].tempC;
+  const [volumes, setVolumes] = useState(String(plan.co2Volumes));
+  const [beerTemp, setBeerTemp] = useState(temp.toDisplay(plan.crashTempC).toFixed(1));
+  const [saved, setSaved] = useState<string>();
+  const log = useLogCellarEntry(batchId);
+  const valid = Number.isFinite(Number(volumes)) && Number.isFinite(Number(beerTemp)) && volumes !== '' && beerTemp !== '';
+  const tempUnit = unitSystem === 'us' ? 'f' : 'c';
+  const query = valid ? { vesselId: vessel.id, co2Volumes: Number(volumes), temp: Number(beerTemp), tempUnit } as const : null;
+  const answer = useCarbonation(query);
+
+  return (
+    <div className="space-y-3">
+      <div className="grid grid-cols-2 gap-3">
+        <TextField label="Target CO₂ (volumes)" inputMode="decimal" className="text-2xl" value={volumes} onChange={(e) => setVolumes(e.target.value)} />
+        <TextField label={`Beer temperature (${temp.unit})`} inputMode="decimal" className="text-2xl" value={beerTemp} onChange={(e) => setBeerTemp(e.target.value)} />
+      </div>
+      {answer.data && (
+        <p className="rounded-lg bg-cellar-100 p-4" data-testid="carbonation-answer">
+          Set the head pressure on {vessel.name} to <strong className="text-3xl tabular-nums">{pressure(unitSystem, answer.data.pressureKpa)}</strong> (gauge).
+          <span className="block text-sm text-ink-700">Rated working pressure of {vessel.name}: {pressure(unitSystem, vessel.ratedPressureKpa)}.</span>
+        </p>
+      )}
+      {answer.error && <p role="alert" className="rounded-lg bg-ember-100 p-4 font-semibold text-ember-700">{answer.error.message}</p>}
+      <Caution title="Pressurised CO₂">
+        Never exceed the vessel's rated working pressure, and keep a working pressure relief valve on it. CO₂ displaces air: ventilate closed
+        rooms. Follow your local codes and licensed practice.
+      </Caution>
+      <Button
+        size="lg"
+        className="w-full"
+        disabled={!answer.data}
+        onClick={async () => {
+          if (!query || !answer.data) return;
+          const label = `Carbonation set · ${volumes} vol at ${pressure(unitSystem, answer.data.pressureKpa)}`;
+          await log({ kind: 'action', action: 'carbonation', co2Volumes: query.co2Volumes, temp: query.temp, tempUnit, volumeUnit: 'l', pressureKpa: answer.data.pressureKpa }, label);
+          setSaved(label);
+        }}
+      >
+        Log this pressure as set
+      </Button>
+      {saved && <p role="status" className="text-sm text-ink-700">Saved on this tablet: {saved}.</p>}
+    </div>
+  );
+}

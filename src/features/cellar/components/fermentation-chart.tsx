@@ -1,0 +1,91 @@
+import { CartesianGrid, ComposedChart, Line, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
+import { dRestTriggerSg, type FermentationPrediction } from '../../../../shared/brewing';
+import { CELLAR_ACTION_LABELS, type ActionView, type CellarPlanView, type ReadingView } from '../../../../shared/schemas/cellar';
+import type { UnitSystem } from '../../../../shared/schemas/auth';
+import { UNITS } from '../../../lib/units';
+
+interface Props {
+  readings: ReadingView[];
+  actions: ActionView[];
+  plan: CellarPlanView;
+  prediction: FermentationPrediction | null;
+  unitSystem: UnitSystem;
+  timeZone: string;
+}
+
+const GRAVITY = '#12312b';
+const TEMPERATURE = '#1f5f99';
+const PREDICTION = '#b8860f';
+
+/** Gravity and temperature against time, with the planned FG, the D-rest trigger and logged actions marked. */
+export function FermentationChart({ readings, actions, plan, prediction, unitSystem, timeZone }: Props) {
+  const temp = UNITS[unitSystem].tempC;
+  const trigger = dRestTriggerSg(plan.plannedFg, plan.dRestPoints);
+  const points = readings.map((r) => ({ t: Date.parse(r.takenAt), sg: r.sg, temp: r.tempC === null ? null : Number(temp.toDisplay(r.tempC).toFixed(1)) }));
+  const first = points[0]?.t ?? Date.now();
+  const last = points[points.length - 1]?.t ?? first;
+  const end = prediction ? Math.max(last, Math.min(prediction.predictedAtMs, last + 21 * 86_400_000)) : last;
+  const predicted = prediction
+    ? Array.from({ length: 25 }, (_, i) => {
+        const t = last + ((end - last) * i) / 24;
+        return { t, predicted: Number(prediction.at(t).toFixed(4)) };
+      })
+    : [];
+  const gravities = [...points.map((p) => p.sg), plan.plannedFg, trigger];
+  const low = Math.floor((Math.min(...gravities) - 0.002) * 1000) / 1000;
+  const high = Math.ceil((Math.max(...gravities) + 0.002) * 1000) / 1000;
+  const dayFormat = new Intl.DateTimeFormat(undefined, { timeZone, month: 'short', day: 'numeric' });
+  const timeFormat = new Intl.DateTimeFormat(undefined, { timeZone, month: 'short', day: 'numeric', hour: 'numeric', minute: '2-digit' });
+
+  return (
+    <figure aria-label="Fermentation chart" className="w-full">
+      <div className="h-72 w-full">
+      <ResponsiveContainer width="100%" height="100%">
+        <ComposedChart margin={{ top: 20, right: 16, bottom: 8, left: 8 }}>
+          <CartesianGrid stroke="#d5e0d9" strokeDasharray="3 3" />
+          <XAxis
+            dataKey="t"
+            type="number"
+            scale="time"
+            domain={[first - 3_600_000, end + 3_600_000]}
+            tickFormatter={(t: number) => dayFormat.format(t)}
+            allowDuplicatedCategory={false}
+          />
+          <YAxis yAxisId="sg" domain={[low, high]} tickFormatter={(v: number) => v.toFixed(3)} width={56} />
+          <YAxis yAxisId="temp" orientation="right" tickFormatter={(v: number) => `${v}°`} width={40} />
+          <Tooltip
+            labelFormatter={(t) => timeFormat.format(Number(t))}
+            formatter={(value, name) => (name === 'Temperature' ? [`${value} ${temp.unit}`, name] : [Number(value).toFixed(3), name])}
+          />
+          <ReferenceLine yAxisId="sg" y={plan.plannedFg} stroke={GRAVITY} strokeDasharray="6 4" label={{ value: `Planned FG ${plan.plannedFg.toFixed(3)}`, position: 'insideBottomLeft', fill: GRAVITY, fontSize: 12 }} />
+          <ReferenceLine yAxisId="sg" y={trigger} stroke="#c22a2a" strokeDasharray="2 3" label={{ value: `D-rest at ${trigger.toFixed(3)}`, position: 'insideTopLeft', fill: '#9b1c1c', fontSize: 12 }} />
+          {actions.map((a) => (
+            <ReferenceLine key={a.logEntryId} yAxisId="sg" x={Date.parse(a.at)} stroke="#55655f" label={{ value: CELLAR_ACTION_LABELS[a.action], angle: -90, position: 'insideTopRight', fill: '#2d3a36', fontSize: 11 }} />
+          ))}
+          <Line yAxisId="temp" data={points} dataKey="temp" name="Temperature" stroke={TEMPERATURE} strokeWidth={2} dot={false} isAnimationActive={false} connectNulls />
+          {predicted.length > 0 && (
+            <Line yAxisId="sg" data={predicted} dataKey="predicted" name="Prediction" stroke={PREDICTION} strokeWidth={2} strokeDasharray="5 5" dot={false} isAnimationActive={false} />
+          )}
+          <Line
+            yAxisId="sg"
+            data={points}
+            dataKey="sg"
+            name="Gravity"
+            stroke={GRAVITY}
+            strokeWidth={3}
+            isAnimationActive={false}
+            dot={({ cx, cy, index }: { cx?: number; cy?: number; index?: number }) => (
+              <circle key={index} data-testid="gravity-point" cx={cx} cy={cy} r={5} fill="#fff" stroke={GRAVITY} strokeWidth={2} />
+            )}
+          />
+        </ComposedChart>
+      </ResponsiveContainer>
+      </div>
+      <figcaption className="mt-1 flex flex-wrap gap-4 text-sm text-ink-700">
+        <span><span className="mr-1 inline-block h-1 w-6 bg-cellar-800 align-middle" />Gravity</span>
+        <span><span className="mr-1 inline-block h-1 w-6 bg-sky-700 align-middle" />Temperature ({temp.unit})</span>
+        <span><span className="mr-1 inline-block h-1 w-6 border-t-2 border-dashed border-brass-600 align-middle" />Prediction from the curve so far</span>
+      </figcaption>
+    </figure>
+  );
+}

@@ -1,0 +1,79 @@
+import { useState } from 'react';
+import { useFieldArray, useForm } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { Button, SelectField, TextField } from '../../../components/ui';
+import { KEG_SIZE_IDS } from '../../../../shared/brewing';
+import { KEG_SIZE_LABELS, packagingEntrySchema, type BatchCellarView, type PackagingEntryInput } from '../../../../shared/schemas/cellar';
+import type { UnitSystem } from '../../../../shared/schemas/auth';
+import { showVolume } from '../../../lib/units';
+import { useLogCellarEntry } from '../api/log-cellar-entry';
+
+const CONTAINER_SIZES_ML = [355, 473, 500, 330, 750];
+
+/** Packaging runs and the batch's packaged volume and losses so far. */
+export function PackagingForm({ batchId, packaging, unitSystem }: { batchId: number; packaging: BatchCellarView['packaging']; unitSystem: UnitSystem }) {
+  const log = useLogCellarEntry(batchId);
+  const [saved, setSaved] = useState<string>();
+  const { register, control, handleSubmit, watch, reset, formState, getValues } = useForm<PackagingEntryInput>({
+    resolver: zodResolver(packagingEntrySchema),
+    defaultValues: { kind: 'packaging', lines: [{ kind: 'keg', size: unitSystem === 'us' ? 'half_bbl' : 'keg_50l', count: 1 }], final: false },
+  });
+  const lines = useFieldArray({ control, name: 'lines' });
+  const kinds = watch('lines');
+
+  const onSubmit = handleSubmit(async (values) => {
+    const label = `Packaging · ${values.lines.map((l) => `${l.count} × ${l.kind === 'keg' ? `${KEG_SIZE_LABELS[l.size as keyof typeof KEG_SIZE_LABELS]} keg` : `${l.sizeMl} mL ${l.kind}`}`).join(', ')}`;
+    await log(values, label);
+    setSaved(label);
+    reset();
+  });
+
+  return (
+    <div className="space-y-4">
+      <dl className="grid grid-cols-3 gap-3 text-center">
+        <div className="rounded-lg bg-mist-100 p-3"><dt className="text-xs font-semibold uppercase text-ink-500">Knockout</dt><dd className="text-xl font-semibold">{showVolume(unitSystem, packaging.knockoutL)}</dd></div>
+        <div className="rounded-lg bg-mist-100 p-3"><dt className="text-xs font-semibold uppercase text-ink-500">Packaged</dt><dd className="text-xl font-semibold">{showVolume(unitSystem, packaging.packagedL)}</dd></div>
+        <div className="rounded-lg bg-mist-100 p-3"><dt className="text-xs font-semibold uppercase text-ink-500">Losses</dt><dd className="text-xl font-semibold">{showVolume(unitSystem, packaging.lossL)} ({(packaging.lossFraction * 100).toFixed(1)} %)</dd></div>
+      </dl>
+      <form onSubmit={onSubmit} noValidate aria-label="Log a packaging run" className="space-y-3">
+        {lines.fields.map((field, i) => (
+          <div key={field.id} className="grid grid-cols-[8rem_1fr_7rem_auto] items-end gap-2">
+            <SelectField
+              label="Package"
+              {...register(`lines.${i}.kind`, {
+                // Keg lines carry a keg size, can and bottle lines a size in mL: swap the whole line.
+                onChange: (e) => {
+                  const count = getValues(`lines.${i}.count`);
+                  lines.update(i, e.target.value === 'keg' ? { kind: 'keg', size: 'half_bbl', count } : { kind: e.target.value, sizeMl: 355, count });
+                },
+              })}
+            >
+              <option value="keg">Keg</option>
+              <option value="can">Can</option>
+              <option value="bottle">Bottle</option>
+            </SelectField>
+            {kinds[i]?.kind === 'keg' ? (
+              <SelectField label="Size" {...register(`lines.${i}.size` as const)}>
+                {KEG_SIZE_IDS.map((s) => <option key={s} value={s}>{KEG_SIZE_LABELS[s]}</option>)}
+              </SelectField>
+            ) : (
+              <SelectField label="Size" {...register(`lines.${i}.sizeMl` as const, { valueAsNumber: true })}>
+                {CONTAINER_SIZES_ML.map((ml) => <option key={ml} value={ml}>{ml} mL</option>)}
+              </SelectField>
+            )}
+            <TextField label="Count" inputMode="numeric" {...register(`lines.${i}.count`, { valueAsNumber: true })} error={formState.errors.lines?.[i]?.count?.message} />
+            <Button variant="quiet" onClick={() => lines.remove(i)} disabled={lines.fields.length === 1} aria-label={`Remove line ${i + 1}`}>✕</Button>
+          </div>
+        ))}
+        {formState.errors.lines?.message && <p className="text-sm text-ember-700">{formState.errors.lines.message}</p>}
+        <Button variant="secondary" onClick={() => lines.append({ kind: 'can', sizeMl: 355, count: 24 })}>Add a line</Button>
+        <label className="flex min-h-touch items-center gap-3 text-base">
+          <input type="checkbox" className="h-6 w-6" {...register('final')} />
+          Last run: the tank is empty and the batch is packaged
+        </label>
+        <Button type="submit" size="lg" className="w-full" busy={formState.isSubmitting}>Log packaging run</Button>
+        {saved && <p role="status" className="text-sm text-ink-700">Saved on this tablet: {saved}.</p>}
+      </form>
+    </div>
+  );
+}

@@ -1,0 +1,108 @@
+import { Link } from 'react-router-dom';
+import { ErrorState, Loading, EmptyState, cx } from '../../../components/ui';
+import { VESSEL_STATUS_LABELS, VESSEL_TYPE_LABELS, type BoardVessel } from '../../../../shared/schemas/cellar';
+import { useCurrentUser } from '../../../app/current-user';
+import { show, showVolume } from '../../../lib/units';
+import { useBoard } from '../api/board';
+import { AlertsPanel } from './alerts-panel';
+
+const DAY = 86_400_000;
+
+/** "in 2 days", "in 5 h", "3 h ago". */
+function relative(iso: string, now: number): string {
+  const ms = Date.parse(iso) - now;
+  const hours = Math.round(Math.abs(ms) / 3_600_000);
+  const span = hours >= 48 ? `${Math.round(hours / 24)} days` : `${hours} h`;
+  return ms >= 0 ? `in ${span}` : `${span} ago`;
+}
+
+function VesselTile({ v, now }: { v: BoardVessel; now: number }) {
+  const me = useCurrentUser();
+  const system = me.brewery.unitSystem;
+  const b = v.batch;
+  const body = (
+    <article
+      aria-label={v.name}
+      className={cx(
+        'flex h-full flex-col rounded-2xl border-4 p-5',
+        b?.readingOverdue ? 'border-ember-600 bg-cellar-900 text-white' : b ? 'border-cellar-700 bg-cellar-900 text-white' : 'border-mist-300 bg-white text-ink-700',
+      )}
+    >
+      <header className="flex items-baseline justify-between gap-2">
+        <h2 className="text-3xl font-bold tracking-tight">{v.name}</h2>
+        <span className={cx('text-sm font-semibold uppercase', b ? 'text-mist-200' : 'text-ink-500')}>
+          {VESSEL_TYPE_LABELS[v.type]} · {showVolume(system, v.capacityL)}
+        </span>
+      </header>
+      {b ? (
+        <>
+          <p className="mt-1 text-xl font-semibold text-brass-400">
+            {b.beerName} <span className="text-mist-200">· {b.number}</span>
+          </p>
+          <p className="text-mist-200">Day {Math.max(1, Math.floor((now - Date.parse(b.inSince)) / DAY) + 1)} in tank · {b.status}</p>
+          <div className="mt-3 flex items-end gap-6">
+            <div>
+              <div className="text-xs font-semibold uppercase text-mist-200">Gravity</div>
+              <div className="text-6xl font-bold tabular-nums" data-testid="board-gravity">{b.latestSg === null ? '—' : b.latestSg.toFixed(3)}</div>
+            </div>
+            <div>
+              <div className="text-xs font-semibold uppercase text-mist-200">Temp</div>
+              <div className="text-4xl font-semibold tabular-nums">{b.latestTempC === null ? '—' : show(system, 'tempC', b.latestTempC, 0)}</div>
+            </div>
+          </div>
+          {b.latestAt && <p className="mt-1 text-sm text-mist-200">Read {relative(b.latestAt, now)}</p>}
+          <div className="mt-auto pt-3">
+            {b.nextAction && (
+              <p className="text-lg">
+                Next: <strong>{b.nextAction.label}</strong>
+                {b.nextAction.dueAt && <span className="text-mist-200"> · predicted {relative(b.nextAction.dueAt, now)}</span>}
+              </p>
+            )}
+            {b.readingOverdue ? (
+              <p className="mt-2 rounded-lg bg-ember-600 px-3 py-2 text-lg font-bold text-white">Reading overdue</p>
+            ) : (
+              b.nextReadingDueAt && <p className="text-sm text-mist-200">Next reading {relative(b.nextReadingDueAt, now)}</p>
+            )}
+          </div>
+        </>
+      ) : (
+        <p className="mt-3 text-2xl font-semibold">{VESSEL_STATUS_LABELS[v.status]}</p>
+      )}
+    </article>
+  );
+  return b ? (
+    <Link to={`/cellar/batches/${b.id}`} className="block rounded-2xl focus:outline-none focus:ring-4 focus:ring-brass-400">
+      {body}
+    </Link>
+  ) : (
+    body
+  );
+}
+
+/** Every vessel, readable across the room: what it holds, days in tank, latest reading, what comes next. */
+export function VesselBoardPage() {
+  const me = useCurrentUser();
+  const { data, error, refetch, isPending, dataUpdatedAt } = useBoard();
+  if (isPending) return <Loading label="Loading the vessel board" />;
+  if (error) return <ErrorState error={error} onRetry={() => void refetch()} />;
+  return (
+    <div className="space-y-4">
+      <div className="flex flex-wrap items-end justify-between gap-3">
+        <h1 className="text-3xl font-bold">Vessel board</h1>
+        <Link to="/cellar/vessels" className="inline-flex min-h-touch items-center rounded-lg border-2 border-cellar-800 px-4 font-semibold text-cellar-800 hover:bg-cellar-100">
+          Manage vessels
+        </Link>
+      </div>
+      {me.role === 'head_brewer' && <AlertsPanel />}
+      {data.length === 0 ? (
+        <EmptyState title="No vessels yet">Add your fermenters and bright tanks under Manage vessels.</EmptyState>
+      ) : (
+        <div className="grid gap-4 md:grid-cols-2 xl:grid-cols-3">
+          {data.map((v) => (
+            <VesselTile key={v.id} v={v} now={dataUpdatedAt} />
+          ))}
+        </div>
+      )}
+    </div>
+  );
+}

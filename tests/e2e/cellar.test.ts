@@ -1,0 +1,83 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import path from 'node:path';
+import type { BrowserContext, Page } from 'playwright-core';
+import { openBrowser, signIn, SCREENSHOT_DIR } from './browser';
+import { DEMO_PEOPLE } from '../../server/seed/demo';
+
+const write = { 'x-kettlewright': '1' };
+
+/** The head brewer plans a batch into an empty fermenter and starts its brew day, through the API. */
+async function fermentingBatch(page: Page): Promise<{ id: number; number: string; vessel: string }> {
+  const recipes = (await (await page.request.get('/api/recipes')).json()) as { latestVersionId: number }[];
+  const vessels = (await (await page.request.get('/api/vessels')).json()) as { id: number; name: string; type: string; status: string; currentBatchId: number | null }[];
+  let fermenter = vessels.find((v) => v.type === 'fermenter' && v.status === 'clean' && v.currentBatchId === null);
+  if (!fermenter) {
+    const made = await page.request.post('/api/vessels', {
+      headers: write,
+      data: { name: `FV-${Date.now() % 100000}`, type: 'fermenter', capacity: 10, capacityUnit: 'bbl', ratedPressure: 15, pressureUnit: 'psi' },
+    });
+    fermenter = await made.json();
+  }
+  const planned = await page.request.post('/api/batches', {
+    headers: write,
+    data: { recipeVersionId: recipes[0]!.latestVersionId, brewDate: new Date().toISOString().slice(0, 10), fermenterId: fermenter!.id },
+  });
+  expect(planned.status()).toBe(201);
+  const batch = (await planned.json()) as { id: number; number: string };
+  const brewing = await page.request.post(`/api/batches/${batch.id}/status`, { headers: write, data: { status: 'brewing' } });
+  expect(brewing.status()).toBe(200);
+  return { ...batch, vessel: fermenter!.name };
+}
+
+describe('cellar readings on the tablet (Chromium, 1024×768)', () => {
+  let head: BrowserContext;
+  let assistant: BrowserContext;
+  beforeAll(async () => {
+    head = await openBrowser();
+    assistant = await openBrowser();
+  });
+  afterAll(async () => {
+    await head?.close();
+    await assistant?.close();
+  });
+
+  it('the assistant logs three readings; the chart shows three points and the D-rest line; the board shows the latest gravity', async () => {
+    const headPage = await head.newPage();
+    await signIn(headPage, DEMO_PEOPLE[0]!.email);
+    const batch = await fermentingBatch(headPage);
+
+    const page = await assistant.newPage();
+    await signIn(page, DEMO_PEOPLE[1]!.email);
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Cellar' }).click();
+    await page.getByRole('article', { name: batch.vessel }).click();
+    await page.waitForURL(`**/cellar/batches/${batch.id}`);
+
+    const points = page.locator('[data-testid="gravity-point"]');
+    const form = page.getByRole('form', { name: 'Log a reading' });
+    for (const [i, [gravity, temp]] of ([
+      ['1.052', '66'],
+      ['1.031', '67'],
+      ['1.021', '67.5'],
+    ] as const).entries()) {
+      await form.getByLabel('Gravity (SG)').fill(gravity);
+      await form.getByLabel('Temperature (°F)').fill(temp);
+      await form.getByRole('button', { name: 'Save reading' }).click();
+      await expect.poll(() => points.count(), { timeout: 15_000 }).toBe(i + 1);
+    }
+
+    const chart = page.getByRole('figure', { name: 'Fermentation chart' });
+    await expect.poll(() => chart.textContent()).toMatch(/D-rest at 1\.0\d\d/);
+    await expect.poll(() => page.getByLabel('Readings and cellar work').textContent()).toContain('1.021');
+    // The form keeps the last temperature for the next reading.
+    expect(await form.getByLabel('Temperature (°F)').inputValue()).toBe('67.5');
+    await page.getByRole('heading', { name: 'Fermentation curve' }).scrollIntoViewIfNeeded();
+    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'cellar-batch-reading-1024.png') });
+    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'cellar-batch-full-1024.png'), fullPage: true });
+
+    await page.getByRole('link', { name: 'Vessel board' }).click();
+    const tile = page.getByRole('article', { name: batch.vessel });
+    await expect.poll(() => tile.getByTestId('board-gravity').textContent()).toBe('1.021');
+    expect(await tile.textContent()).toContain(batch.number);
+    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'cellar-board-1024.png'), fullPage: true });
+  });
+});
