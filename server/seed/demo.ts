@@ -6,6 +6,7 @@ import type { Role } from '../../shared/schemas/roles';
 import type { Transaction } from 'sequelize';
 import { seedRecipes } from './recipes';
 import { seedBatches } from './batches';
+import { seedCellar } from './cellar';
 import { seedTaproom } from './taproom';
 
 export const DEMO_PASSWORD = 'harbour-copper-kettle-72';
@@ -23,7 +24,7 @@ export interface DemoContext {
 }
 
 /** Steps later areas add to fill the demo brewery (recipes, batches, cellar...). They run once, in order. */
-export const demoSteps: ((ctx: DemoContext) => Promise<void>)[] = [seedRecipes, seedBatches, seedTaproom];
+export const demoSteps: ((ctx: DemoContext) => Promise<void>)[] = [seedRecipes, seedBatches, seedCellar, seedTaproom];
 
 /** Seeds the demo brewery once; returns false when it is already there. */
 export async function seedDemo(): Promise<boolean> {

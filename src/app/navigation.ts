@@ -12,6 +12,7 @@ const ALL: readonly Role[] = ['head_brewer', 'assistant_brewer', 'taproom_manage
 export const NAV_ITEMS: NavItem[] = [
   { to: '/', label: 'Home', roles: ALL },
   { to: '/batches', label: 'Batches', roles: ['head_brewer', 'assistant_brewer'] },
+  { to: '/cellar', label: 'Cellar', roles: ['head_brewer', 'assistant_brewer'] },
   { to: '/team', label: 'Team', roles: ['head_brewer'] },
   // The taproom manager's Home is the taproom itself.
   { to: '/taproom', label: 'Taproom', roles: ['head_brewer', 'assistant_brewer'] },
