@@ -243,16 +243,11 @@ export type UpdateRecipeInput = z.infer<typeof updateRecipeSchema>;
 export const saveVersionSchema = z.strictObject(versionBody);
 export type SaveVersionInput = z.infer<typeof saveVersionSchema>;
 
-/** The target of a scale: another equipment profile, a typed batch volume, or both. */
-export const scaleQuerySchema = z
-  .strictObject({
-    equipmentProfileId: idParam.optional(),
-    batchVolumeL: z.coerce.number({ error: 'Batch volume: enter a number' }).min(1, 'Batch volume must be at least 1 L').max(20000, 'Batch volume must be at most 20000 L').optional(),
-  })
-  .refine((q) => q.equipmentProfileId !== undefined || q.batchVolumeL !== undefined, {
-    path: ['equipmentProfileId'],
-    message: 'Choose an equipment profile or type a batch volume',
-  });
+/** The target of a scale: another equipment profile, a typed batch volume, both, or neither (the version as written). */
+export const scaleQuerySchema = z.strictObject({
+  equipmentProfileId: idParam.optional(),
+  batchVolumeL: z.coerce.number({ error: 'Batch volume: enter a number' }).min(1, 'Batch volume must be at least 1 L').max(20000, 'Batch volume must be at most 20000 L').optional(),
+});
 export type ScaleTarget = z.infer<typeof scaleQuerySchema>;
 
 export const saveScaledSchema = z.strictObject({

@@ -11,6 +11,8 @@ const ALL: readonly Role[] = ['head_brewer', 'assistant_brewer', 'taproom_manage
 /** The menu, by role: a person sees only what their role may open. */
 export const NAV_ITEMS: NavItem[] = [
   { to: '/', label: 'Home', roles: ALL },
+  { to: '/recipes', label: 'Recipes', roles: ['head_brewer', 'assistant_brewer'] },
+  { to: '/library', label: 'Brewhouse', roles: ['head_brewer', 'assistant_brewer'] },
   { to: '/batches', label: 'Batches', roles: ['head_brewer', 'assistant_brewer'] },
   { to: '/cellar', label: 'Cellar', roles: ['head_brewer', 'assistant_brewer'] },
   { to: '/team', label: 'Team', roles: ['head_brewer'] },

@@ -1,0 +1,115 @@
+import { useNavigate, useParams } from 'react-router-dom';
+import type { CreateRecipeInput } from '../../../../shared/schemas/recipes';
+import { ErrorState, Loading, PageHeader, Caution } from '../../../components/ui';
+import { useCurrentUser } from '../../../app/current-user';
+import { ApiError } from '../../../lib/api-client';
+import { useToast } from '../../../components/ui';
+import { useEquipment } from '../../library/api/equipment';
+import { useVersion } from '../api/get-version';
+import { useRecipe } from '../api/get-recipe';
+import { useCreateRecipe, useSaveVersion, useUpdateRecipe } from '../api/save-recipe';
+import { RecipeEditor } from './recipe-editor';
+import { NEW_RECIPE } from './new-recipe';
+import { Link } from 'react-router-dom';
+
+const failure = (error: unknown) =>
+  error instanceof ApiError ? { fieldErrors: error.fields, message: error.message } : { message: 'Something went wrong. Nothing was lost: try again.' };
+
+/** Opens a version in the editor. A version a batch has used is frozen: saving it makes the next version. */
+export function EditorPage() {
+  const recipeId = Number(useParams().recipeId);
+  const versionId = Number(useParams().versionId);
+  const me = useCurrentUser();
+  const navigate = useNavigate();
+  const toast = useToast();
+  const version = useVersion(recipeId, versionId);
+  const recipe = useRecipe(recipeId);
+  const equipment = useEquipment();
+  const save = useSaveVersion();
+  const updateRecipe = useUpdateRecipe();
+
+  if (version.isPending || equipment.isPending || recipe.isPending) return <Loading label="Opening the recipe" />;
+  if (version.isError) return <ErrorState error={version.error} onRetry={() => version.refetch()} />;
+  if (equipment.isError) return <ErrorState error={equipment.error} onRetry={() => equipment.refetch()} />;
+  if (recipe.isError) return <ErrorState error={recipe.error} onRetry={() => recipe.refetch()} />;
+  const { recipe: r, version: v } = version.data;
+  const next = recipe.data.versions[0]!.number + 1;
+  const frozen = Boolean(v.frozenAt);
+  const canEdit = me.role === 'head_brewer';
+
+  const onSave = async (values: CreateRecipeInput, asNew: boolean) => {
+    const { name, style, description, status, changeNote, equipmentProfileId, content } = values;
+    try {
+      if (name !== r.name || style !== r.style || description !== r.description || status !== r.status) {
+        await updateRecipe.mutateAsync({ recipeId, name, style, description, status });
+      }
+      const saved = await save.mutateAsync({ recipeId, versionId, asNew: asNew || frozen, input: { changeNote, equipmentProfileId, content } });
+      toast(`Saved version ${saved.number}`);
+      if (saved.id !== versionId) navigate(`/recipes/${recipeId}/versions/${saved.id}`);
+    } catch (error) {
+      return failure(error);
+    }
+  };
+
+  return (
+    <>
+      <PageHeader
+        title={`${r.name} · version ${v.number}`}
+        subtitle={`${v.changeNote} — ${v.authorName}, ${new Date(v.createdAt).toLocaleDateString()}`}
+        actions={
+          <>
+            <Link to={`/recipes/${recipeId}`} className="flex min-h-touch items-center px-3 font-semibold text-cellar-700 underline">All versions</Link>
+            <Link to={`/recipes/${recipeId}/versions/${versionId}/scale`} className="flex min-h-touch items-center px-3 font-semibold text-cellar-700 underline">Scale</Link>
+            <Link to={`/recipes/${recipeId}/versions/${versionId}/brew-sheet`} className="flex min-h-touch items-center px-3 font-semibold text-cellar-700 underline">Brew sheet</Link>
+          </>
+        }
+      />
+      <RecipeEditor
+        key={v.id}
+        initial={{ name: r.name, style: r.style, description: r.description, status: r.status, changeNote: frozen ? '' : v.changeNote, equipmentProfileId: v.equipmentProfileId, content: v.content }}
+        equipment={equipment.data}
+        system={me.brewery.unitSystem}
+        canEdit={canEdit}
+        notice={frozen ? <Caution title="This version has been brewed">A batch used it, so it stays as it was. Saving makes version {next}.</Caution> : undefined}
+        saveLabel={frozen ? `Save as version ${next}` : `Save version ${v.number}`}
+        saveAsNewLabel={frozen ? undefined : `Save as version ${next}`}
+        onSave={onSave}
+      />
+    </>
+  );
+}
+
+export function NewRecipePage() {
+  const me = useCurrentUser();
+  const navigate = useNavigate();
+  const equipment = useEquipment();
+  const create = useCreateRecipe();
+  if (equipment.isPending) return <Loading label="Loading equipment" />;
+  if (equipment.isError) return <ErrorState error={equipment.error} onRetry={() => equipment.refetch()} />;
+  const first = equipment.data[0];
+  if (!first) {
+    return (
+      <ErrorState error={new Error('Add an equipment profile first: a recipe is written for a brewhouse.')} />
+    );
+  }
+  return (
+    <>
+      <PageHeader title="New recipe" />
+      <RecipeEditor
+        initial={{ ...NEW_RECIPE, equipmentProfileId: first.id, content: { ...NEW_RECIPE.content, targets: { ...NEW_RECIPE.content.targets, batchVolumeL: first.batchVolumeL } } }}
+        equipment={equipment.data}
+        system={me.brewery.unitSystem}
+        canEdit={me.role === 'head_brewer'}
+        saveLabel="Create recipe"
+        onSave={async (values) => {
+          try {
+            const created = await create.mutateAsync(values);
+            navigate(`/recipes/${created.id}/versions/${created.versionId}`);
+          } catch (error) {
+            return failure(error);
+          }
+        }}
+      />
+    </>
+  );
+}

@@ -1,0 +1,137 @@
+import { useMemo, useState } from 'react';
+import { Link } from 'react-router-dom';
+import {
+  createColumnHelper,
+  flexRender,
+  getCoreRowModel,
+  getFilteredRowModel,
+  getSortedRowModel,
+  useReactTable,
+  type SortingState,
+} from '@tanstack/react-table';
+import { srmToHex } from '../../../../shared/brewing';
+import { Button, EmptyState, ErrorState, Loading, PageHeader, SelectField, Table, Td, TextField, Th } from '../../../components/ui';
+import { useCurrentUser } from '../../../app/current-user';
+import { useRecipeList, type RecipeListRow } from '../api/list-recipes';
+
+const col = createColumnHelper<RecipeListRow>();
+
+const STATUS_STYLE: Record<string, string> = {
+  active: 'bg-cellar-100 text-cellar-800',
+  draft: 'bg-sky-100 text-sky-700',
+  retired: 'bg-mist-200 text-ink-500',
+};
+
+const columns = [
+  col.accessor('name', {
+    header: 'Name',
+    cell: (c) => (
+      <Link to={`/recipes/${c.row.original.id}`} className="flex min-h-touch items-center font-semibold text-cellar-700 underline-offset-2 hover:underline">
+        {c.getValue()}
+      </Link>
+    ),
+  }),
+  col.accessor('style', { header: 'Style' }),
+  col.accessor('latestVersion', { header: 'Version', cell: (c) => `v${c.getValue()}` }),
+  col.accessor('og', { header: 'OG', cell: (c) => c.getValue().toFixed(3) }),
+  col.accessor('ibu', { header: 'IBU', cell: (c) => c.getValue().toFixed(0) }),
+  col.accessor('srm', {
+    header: 'SRM',
+    cell: (c) => (
+      <span className="flex items-center gap-2">
+        <span aria-hidden className="inline-block h-5 w-5 rounded-full border border-ink-300" style={{ backgroundColor: srmToHex(c.getValue()) }} />
+        {c.getValue().toFixed(0)}
+      </span>
+    ),
+  }),
+  col.accessor('abvPct', { header: 'ABV', cell: (c) => `${c.getValue().toFixed(1)} %` }),
+  col.accessor('status', {
+    header: 'Status',
+    filterFn: 'equals',
+    cell: (c) => <span className={`rounded-full px-2 py-1 text-sm font-semibold ${STATUS_STYLE[c.getValue()]}`}>{c.getValue()}</span>,
+  }),
+  col.accessor('lastBrewedAt', {
+    header: 'Last brewed',
+    sortUndefined: 'last',
+    cell: (c) => (c.getValue() ? new Date(c.getValue()!).toLocaleDateString() : 'Not yet'),
+  }),
+];
+
+export function RecipeListPage() {
+  const me = useCurrentUser();
+  const recipes = useRecipeList();
+  const [sorting, setSorting] = useState<SortingState>([{ id: 'name', desc: false }]);
+  const [search, setSearch] = useState('');
+  const [status, setStatus] = useState('');
+  const columnFilters = useMemo(() => (status ? [{ id: 'status', value: status }] : []), [status]);
+  const table = useReactTable({
+    data: recipes.data ?? [],
+    columns,
+    state: { sorting, globalFilter: search, columnFilters },
+    onSortingChange: setSorting,
+    globalFilterFn: 'includesString',
+    getCoreRowModel: getCoreRowModel(),
+    getSortedRowModel: getSortedRowModel(),
+    getFilteredRowModel: getFilteredRowModel(),
+  });
+
+  return (
+    <>
+      <PageHeader
+        title="Recipes"
+        subtitle="Every beer, its latest version and how it was last brewed."
+        actions={me.role === 'head_brewer' && <Link to="/recipes/new"><Button>New recipe</Button></Link>}
+      />
+      {recipes.isPending ? (
+        <Loading label="Loading recipes" />
+      ) : recipes.isError ? (
+        <ErrorState error={recipes.error} onRetry={() => recipes.refetch()} />
+      ) : recipes.data.length === 0 ? (
+        <EmptyState title="No recipes yet">Write the first one, then scale it to any of your brewhouses.</EmptyState>
+      ) : (
+        <>
+          <div className="mb-4 flex flex-wrap gap-3">
+            <div className="w-72"><TextField label="Find by name or style" value={search} onChange={(e) => setSearch(e.target.value)} /></div>
+            <div className="w-48">
+              <SelectField label="Status" value={status} onChange={(e) => setStatus(e.target.value)}>
+                <option value="">All</option>
+                <option value="active">Active</option>
+                <option value="draft">Draft</option>
+                <option value="retired">Retired</option>
+              </SelectField>
+            </div>
+          </div>
+          <Table>
+            <thead>
+              {table.getHeaderGroups().map((g) => (
+                <tr key={g.id}>
+                  {g.headers.map((h) => {
+                    const sorted = h.column.getIsSorted();
+                    return (
+                      <Th key={h.id} aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : 'none'}>
+                        <button type="button" className="flex min-h-touch items-center gap-1" onClick={h.column.getToggleSortingHandler()}>
+                          {flexRender(h.column.columnDef.header, h.getContext())}
+                          <span aria-hidden>{sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : ''}</span>
+                        </button>
+                      </Th>
+                    );
+                  })}
+                </tr>
+              ))}
+            </thead>
+            <tbody>
+              {table.getRowModel().rows.map((r) => (
+                <tr key={r.id}>
+                  {r.getVisibleCells().map((c) => (
+                    <Td key={c.id} className="py-1">{flexRender(c.column.columnDef.cell, c.getContext())}</Td>
+                  ))}
+                </tr>
+              ))}
+            </tbody>
+          </Table>
+          {table.getRowModel().rows.length === 0 && <p className="mt-3 text-ink-500">No recipe matches.</p>}
+        </>
+      )}
+    </>
+  );
+}

@@ -1,0 +1,89 @@
+// The head brewer scales the pilot seasonal to the 10 bbl brewhouse, saves it, and prints the brew sheet (Chromium).
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import path from 'node:path';
+import type { BrowserContext, Page } from 'playwright-core';
+import { extractText, getDocumentProxy } from 'unpdf';
+import { roundForMeasuring, scaleRecipe, usBblToL, usGalToL } from '../../shared/brewing';
+import { equipmentAtVolume, toRecipeInput } from '../../shared/schemas/recipes';
+import { DEMO_EQUIPMENT, SEASONAL_CONTENT, SEASONAL_NAME } from '../../server/seed/recipe-data';
+import { DEMO_PEOPLE } from '../../server/seed/demo';
+import { showGrain, showMeasured, showSmallWeight } from '../../src/lib/units';
+import { openBrowser, signIn, SCREENSHOT_DIR } from './browser';
+
+// What the 10 bbl version must say, from shared/brewing for the same input.
+const expected = scaleRecipe(
+  toRecipeInput(SEASONAL_NAME, SEASONAL_CONTENT),
+  equipmentAtVolume(DEMO_EQUIPMENT.pilot, usGalToL(10)),
+  equipmentAtVolume(DEMO_EQUIPMENT.big, usBblToL(10)),
+);
+
+describe('scaling the seasonal and printing its brew sheet (Chromium)', () => {
+  let context: BrowserContext;
+  let page: Page;
+  beforeAll(async () => {
+    context = await openBrowser();
+    page = await context.newPage();
+  });
+  afterAll(async () => {
+    await context?.close();
+  });
+
+  it('opens the seasonal in the editor with live numbers', async () => {
+    await signIn(page, DEMO_PEOPLE[0]!.email);
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Recipes' }).click();
+    await page.getByRole('link', { name: SEASONAL_NAME }).click();
+    await page.getByRole('link', { name: /Edit version 1/ }).click();
+    await expect.poll(() => page.getByRole('group', { name: 'IBU' }).textContent()).toContain(expected.before.ibu.toFixed(1));
+    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'recipe-editor-1024.png') });
+  });
+
+  it('scales it from the pilot to the 10 bbl profile: adjunct and spice per volume, IBU on target', async () => {
+    await page.getByRole('link', { name: 'Scale' }).first().click();
+    await page.getByLabel('Scale to').selectOption({ label: 'Main brewhouse 10 bbl (10.0 bbl)' });
+    await expect.poll(() => page.getByRole('table', { name: 'Original and scaled' }).getByRole('columnheader').nth(2).textContent()).toBe('Main brewhouse 10 bbl');
+    expect(await page.getByRole('group', { name: 'Scaled IBU' }).textContent()).toContain(expected.after.ibu.toFixed(1));
+    // Same IBU as the pilot (scaleRecipe re-solves each hop for its IBU; the seeded target is 24).
+    expect(expected.after.ibu).toBeCloseTo(expected.before.ibu, 6);
+    expect(await page.getByRole('group', { name: 'Original IBU' }).textContent()).toContain(expected.before.ibu.toFixed(1));
+
+    const table = page.getByRole('table', { name: 'Original and scaled' });
+    // 0.6 lb per US gal: 6 lb in 10 gal, 186 lb in 310 gal (10 bbl × 31 gal, DOMAIN.md).
+    const quince = table.getByRole('row', { name: /Roasted quince/ });
+    expect(await quince.textContent()).toContain('6 lb');
+    expect(await quince.textContent()).toContain('186 lb');
+    // 1 tsp per 5 US gal: 2 tsp in 10 gal, 62 tsp in 310 gal.
+    const spice = table.getByRole('row', { name: /Harbour spice blend/ });
+    expect(await spice.textContent()).toContain('2 tsp');
+    expect(await spice.textContent()).toContain('62 tsp');
+    // The hops do not scale in proportion: the page says so.
+    expect(await table.getByRole('row', { name: /Earthy English-type hop/ }).textContent()).toContain('Not in proportion');
+    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'recipe-scale-1024.png'), fullPage: false });
+  });
+
+  it('saves the scaled recipe as version 2 and prints its brew sheet with the scaled weights', async () => {
+    await page.getByRole('button', { name: 'Save as new version' }).click();
+    await page.getByLabel('What changed').fill('Scaled to the 10 bbl for the winter run');
+    await page.getByRole('button', { name: 'Save version' }).click();
+    await expect.poll(() => page.getByRole('heading', { level: 1 }).textContent()).toContain('version 2');
+
+    await page.getByRole('link', { name: 'Brew sheet' }).click();
+    await expect.poll(() => page.getByRole('heading', { level: 1 }).textContent()).toBe(SEASONAL_NAME);
+    await page.emulateMedia({ media: 'print' });
+    const pdf = await page.pdf({ format: 'Letter', printBackground: true });
+    const { text } = await extractText(await getDocumentProxy(new Uint8Array(pdf)), { mergePages: true });
+    const flat = text.replace(/\s+/g, ' ');
+
+    const after = expected.after;
+    expect(flat).toContain(`Roasted quince and golden beet: ${showMeasured(after.adjuncts[0]!.measuredUs)}`);
+    expect(flat).toContain(showMeasured(after.adjuncts[1]!.measuredUs));
+    expect(showMeasured(after.adjuncts[1]!.measuredUs)).toBe('62 tsp');
+    for (const f of after.fermentables) expect(flat).toContain(showGrain('us', f.weightKg));
+    for (const h of after.hops) expect(flat).toContain(showSmallWeight('us', h.weightG));
+    expect(flat).toContain('Pale ale malt');
+    expect(showGrain('us', after.fermentables[0]!.weightKg)).toMatch(/sack/);
+    expect(flat).toContain(showMeasured(roundForMeasuring({ value: after.mashGrainKg, unit: 'kg' }, 'us')).split(' ')[1]!);
+    expect(flat).toMatch(/Hot liquids/);
+    expect(flat).toMatch(/Sign-off/);
+    expect(flat).toMatch(/Diacetyl rest: when gravity reaches/);
+  });
+});
