@@ -34,7 +34,7 @@ describe('scaling the seasonal and printing its brew sheet (Chromium)', () => {
     await page.getByRole('link', { name: SEASONAL_NAME }).click();
     await page.getByRole('link', { name: /Edit version 1/ }).click();
     await expect.poll(() => page.getByRole('group', { name: 'IBU' }).textContent()).toContain(expected.before.ibu.toFixed(1));
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'recipe-editor-1024.png') });
+    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'recipe-editor-1024.png'), fullPage: true });
   });
 
   it('scales it from the pilot to the 10 bbl profile: adjunct and spice per volume, IBU on target', async () => {
@@ -57,7 +57,7 @@ describe('scaling the seasonal and printing its brew sheet (Chromium)', () => {
     expect(await spice.textContent()).toContain('62 tsp');
     // The hops do not scale in proportion: the page says so.
     expect(await table.getByRole('row', { name: /Earthy English-type hop/ }).textContent()).toContain('Not in proportion');
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'recipe-scale-1024.png'), fullPage: false });
+    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'recipe-scale-1024.png'), fullPage: true });
   });
 
   it('saves the scaled recipe as version 2 and prints its brew sheet with the scaled weights', async () => {
@@ -69,6 +69,7 @@ describe('scaling the seasonal and printing its brew sheet (Chromium)', () => {
     await page.getByRole('link', { name: 'Brew sheet' }).click();
     await expect.poll(() => page.getByRole('heading', { level: 1 }).textContent()).toBe(SEASONAL_NAME);
     await page.emulateMedia({ media: 'print' });
+    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'brew-sheet-print-1024.png'), fullPage: true });
     const pdf = await page.pdf({ format: 'Letter', printBackground: true });
     const { text } = await extractText(await getDocumentProxy(new Uint8Array(pdf)), { mergePages: true });
     const flat = text.replace(/\s+/g, ' ');

@@ -131,7 +131,7 @@ function Sheet({ data, system }: { data: ScaleResult; system: UnitSystem }) {
           rows={[
             ['Strike (mash)', v(c.volumes.strikeL), t(c.strikeTempC), c.water ? salts(c.water.mashSalts) : '—'],
             ...(c.volumes.infusionL > 0 ? [['Step infusions (mash)', v(c.volumes.infusionL), 'see mash', '(in the mash salts)']] : []),
-            ['Sparge', v(c.volumes.spargeL), t(76), c.water ? salts(c.water.spargeSalts) : '—'],
+            ['Sparge', v(c.volumes.spargeL), `about ${t(76)} (usual sparge)`, c.water ? salts(c.water.spargeSalts) : '—'],
             ['Total water', v(c.volumes.totalWaterL), '', ''],
           ]}
         />
@@ -204,7 +204,7 @@ function Sheet({ data, system }: { data: ScaleResult; system: UnitSystem }) {
         )}
         <p className="mt-1">
           Whirlpool, rest, then knock out {v(c.volumes.knockoutL)} through the heat exchanger to <strong>{t(content.yeast.pitchTempC)}</strong>; oxygenate and pitch {content.yeast.name}
-          {c.yeastCellsBillion !== undefined ? ` (about ${c.yeastCellsBillion.toFixed(0)} billion cells)` : ''}. {showVolume(system, c.volumes.intoFermenterL)} into the fermenter.
+          {c.yeastCellsBillion !== undefined ? ` (about ${c.yeastCellsBillion >= 1000 ? `${(c.yeastCellsBillion / 1000).toFixed(1)} trillion` : `${c.yeastCellsBillion.toFixed(0)} billion`} cells)` : ''}. {showVolume(system, c.volumes.intoFermenterL)} into the fermenter.
         </p>
       </Part>
 

@@ -264,7 +264,7 @@ function Water(props: Shared & { setWater: (w: FormIn['content']['water']) => vo
   };
   return (
     <Section title="Water">
-      {w('w-72', (
+      {w('w-96', (
         <SelectField label="Water plan" value={mode} onChange={(e) => setMode(e.target.value)} disabled={disabled}>
           <option value="none">No water plan</option>
           <option value="additions">Salts I choose for mash and sparge</option>
@@ -311,7 +311,7 @@ function PreparationSteps({ control, index, disabled }: { control: Ctl; index: n
   return (
     <TextAreaField
       label="Preparation, one step per line"
-      rows={4}
+      rows={6}
       value={text}
       disabled={disabled}
       onChange={(e) => {

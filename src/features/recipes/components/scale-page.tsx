@@ -112,7 +112,7 @@ export function ScalePage() {
         }
       />
       <Card className="mb-4 flex flex-wrap items-end gap-3">
-        <div className="w-72">
+        <div className="min-w-80 flex-1">
           <SelectField label="Scale to" value={data.target.equipmentProfileId} onChange={(e) => setTarget({ equipmentProfileId: Number(e.target.value) })}>
             {equipment.data.map((e) => (
               <option key={e.id} value={e.id}>{e.name} ({showVolume(system, e.batchVolumeL)})</option>

@@ -51,7 +51,8 @@ function Group({ title, children }: { title: string; children: ReactNode }) {
 
 const saltName = (item: string) => {
   const [where, id] = item.split(': ');
-  return `${where!.replace(' salt', '')}: ${SALT_LABELS[id as keyof typeof SALT_LABELS] ?? id}`;
+  const vessel = where!.replace(' salt', '');
+  return `${vessel[0]!.toUpperCase()}${vessel.slice(1)}: ${SALT_LABELS[id as keyof typeof SALT_LABELS] ?? id}`;
 };
 
 /** Original and scaled side by side, every quantity in practical units, non-linear changes called out. */

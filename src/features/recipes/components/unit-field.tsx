@@ -21,7 +21,7 @@ export function UnitField<T extends FieldValues>({ control, name, label, quantit
   // While the person types, keep their text (e.g. "12.") rather than re-formatting it under the cursor.
   const [text, setText] = useState<string | null>(null);
   const value = field.value as unknown;
-  const shown = text ?? (typeof value === 'number' && Number.isFinite(value) ? String(Number(u.toDisplay(value).toFixed(u.decimals + 1))) : '');
+  const shown = text ?? (typeof value === 'number' && Number.isFinite(value) ? String(Number(u.toDisplay(value).toFixed(u.decimals))) : '');
   return (
     <TextField
       label={`${label} (${u.unit})`}
