@@ -45,7 +45,7 @@ export async function seedCellar({ brewery, users, transaction }: DemoContext): 
       {
         kind: 'reading',
         method: 'hydrometer',
-        gravity: Number((fg + (og - fg) * Math.exp(-0.4 * days)).toFixed(3)),
+        gravity: Number((fg + (og - fg) * Math.exp(-0.33 * days)).toFixed(3)),
         gravityUnit: 'sg',
         temp: Number(cToF(18.6 + Math.min(1, days / 3) * 0.8).toFixed(1)),
         tempUnit: 'f',

@@ -2,8 +2,9 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { createTestBrewery, mailCatcher, type TestBrewery } from './helpers';
 import { plannedBatch, writeHeaders } from './batch-fixtures';
 import { changeBatchStatus } from '../../server/services/batches';
-import { BatchLogEntry, GravityReading } from '../../server/models';
-import { headPressureKpa, platoToSg, sgToPlato } from '../../shared/brewing';
+import { Alert, Batch, BatchLogEntry, GravityReading } from '../../server/models';
+import { sweepOverdueReadings } from '../../server/services/alerts';
+import { headPressureKpa, KEG_SIZES, platoToSg, refractometerBeerSg, sgToPlato } from '../../shared/brewing';
 import type { BatchCellarView, ProbeImportResult, ReadingView, VesselView } from '../../shared/schemas/cellar';
 
 let t: TestBrewery;
@@ -89,6 +90,14 @@ describe('gravity readings', () => {
     const refused = await postReading(planned.id, reading(1.05));
     expect(refused.status).toBe(409);
     expect(await BatchLogEntry.count({ where: { batchId: planned.id } })).toBe(0);
+  });
+
+  it('corrects a refractometer reading for wort and alcohol with the original reading (Terrill 2011 cubic, see shared/brewing)', async () => {
+    const batch = await knockedOutBatch();
+    const res = await postReading(batch.id, { ...reading(8.2), method: 'refractometer', gravityUnit: 'brix', originalBrix: 13.5 });
+    expect(res.status).toBe(201);
+    expect(res.body.sg).toBeCloseTo(refractometerBeerSg(13.5, 8.2), 12);
+    expect(res.body).toMatchObject({ enteredValue: 8.2, enteredUnit: 'brix', method: 'refractometer' });
   });
 
   it('refuses a refractometer reading in SG with a field message, and the taproom manager', async () => {
@@ -203,6 +212,54 @@ describe('carbonation', () => {
   });
 });
 
+describe('packaging', () => {
+  it('records runs, computes packaged volume and losses from knockout, and the last run packages the batch and empties the tank', async () => {
+    const batch = await knockedOutBatch();
+    await postReading(batch.id, reading(1.012));
+    const tank = await vessel({ type: 'bright_tank' });
+    await t.as.head_brewer.put(`/api/batches/${batch.id}/vessel`).send({ vesselId: tank.id });
+    const knockoutL = (await cellarView(batch.id)).packaging.knockoutL; // planned knockout: no brew-day volume logged
+    const run = (lines: object[], final = false) =>
+      t.as.assistant_brewer.post(`/api/cellar/batches/${batch.id}/packaging`).set(writeHeaders()).send({ kind: 'packaging', lines, final });
+
+    const tooMuch = await run([{ kind: 'keg', size: 'keg_50l', count: Math.ceil(knockoutL / 50) + 1 }]);
+    expect(tooMuch.status).toBe(422);
+    const first = await run([{ kind: 'keg', size: 'keg_20l', count: 1 }]);
+    expect(first.status).toBe(201);
+    const last = await run([{ kind: 'can', sizeMl: 355, count: 12 }], true);
+    expect(last.status).toBe(201);
+    const packaged = KEG_SIZES.keg_20l + 12 * 0.355;
+    expect(knockoutL).toBeGreaterThan(packaged);
+    expect(last.body.packagedL).toBeCloseTo(packaged, 9);
+    expect(last.body.lossL).toBeCloseTo(knockoutL - packaged, 9);
+    expect(last.body.runs).toHaveLength(2);
+
+    const view = await cellarView(batch.id);
+    expect(view.batch.status).toBe('packaged');
+    expect(view.vessel).toBeNull();
+    const after = (await t.as.assistant_brewer.get('/api/vessels')).body.find((v: VesselView) => v.id === tank.id);
+    expect(after).toMatchObject({ currentBatchId: null, status: 'needs_cleaning' });
+  });
+});
+
+describe('another brewery', () => {
+  it("answers 404 for this brewery's batch, vessel and alert", async () => {
+    const other = await createTestBrewery();
+    const batch = await knockedOutBatch();
+    const tank = await vessel({});
+    const o = other.as.head_brewer;
+    expect((await o.get(`/api/cellar/batches/${batch.id}`)).status).toBe(404);
+    expect((await o.post(`/api/cellar/batches/${batch.id}/readings`).set(writeHeaders()).send(reading(1.05))).status).toBe(404);
+    expect((await o.post(`/api/cellar/batches/${batch.id}/readings/preview`).send({ delimiter: ',', gravityUnit: 'sg', tempUnit: 'c', timeZone: 'UTC', csv: 'x' })).status).toBe(404);
+    expect((await o.put(`/api/vessels/${tank.id}`).send({ name: 'Mine', type: 'fermenter', capacity: 1, capacityUnit: 'l', ratedPressure: 1, pressureUnit: 'kpa' })).status).toBe(404);
+    expect((await o.get('/api/cellar/carbonation').query({ vesselId: tank.id, co2Volumes: 2.5, temp: 2, tempUnit: 'c' })).status).toBe(404);
+    expect((await o.get('/api/vessels')).body).toEqual([]);
+    const alert = await Alert.create({ breweryId: t.brewery.id, batchId: batch.id, kind: 'stalled', message: 'test', emailedAt: null, readAt: null });
+    expect((await o.post(`/api/cellar/alerts/${alert.id}/read`)).status).toBe(404);
+    expect(await GravityReading.count({ where: { batchId: batch.id } })).toBe(0);
+  });
+});
+
 describe('alerts', () => {
   it('e-mails the head brewer once when a reading crosses the D-rest trigger', async () => {
     const batch = await knockedOutBatch();
@@ -232,5 +289,18 @@ describe('alerts', () => {
     expect(alerts.body.filter((a: { batchId: number }) => a.batchId === batch.id)).toMatchObject([{ kind: 'd_rest', readAt: null }]);
     expect(mailFor()).toHaveLength(1);
     expect((await t.as.assistant_brewer.get('/api/cellar/alerts')).status).toBe(403);
+  });
+
+  it('raises a "no reading" alert once for a fermenting batch past its reading interval', async () => {
+    const batch = await knockedOutBatch();
+    await postReading(batch.id, reading(1.05), new Date(Date.now() - 2 * 3_600_000));
+    const mailFor = () => mailCatcher().messages().filter((m) => m.subject.includes(batch.number) && m.subject.includes('No gravity reading'));
+    await sweepOverdueReadings(new Date(Date.now() + 20 * 3_600_000)); // 22 h since the reading: not yet
+    expect(await Alert.count({ where: { batchId: batch.id, kind: 'overdue' } })).toBe(0);
+    await sweepOverdueReadings(new Date(Date.now() + 30 * 3_600_000));
+    await sweepOverdueReadings(new Date(Date.now() + 40 * 3_600_000));
+    expect(await Alert.count({ where: { batchId: batch.id, kind: 'overdue' } })).toBe(1);
+    await expect.poll(() => mailFor().length).toBe(1);
+    expect((await Batch.findByPk(batch.id))!.status).toBe('fermenting');
   });
 });

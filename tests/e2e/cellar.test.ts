@@ -78,6 +78,12 @@ describe('cellar readings on the tablet (Chromium, 1024×768)', () => {
     const tile = page.getByRole('article', { name: batch.vessel });
     await expect.poll(() => tile.getByTestId('board-gravity').textContent()).toBe('1.021');
     expect(await tile.textContent()).toContain(batch.number);
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'cellar-board-1024.png'), fullPage: true });
+    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'cellar-board-1024.png') });
+    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'cellar-board-full-1024.png'), fullPage: true });
+
+    // The demo batch a week into fermentation: a curve with its prediction.
+    await page.getByRole('article', { name: 'FV-1' }).click();
+    await page.getByRole('heading', { name: 'Fermentation curve' }).scrollIntoViewIfNeeded();
+    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'cellar-curve-1024.png') });
   });
 });

@@ -52,13 +52,13 @@ export function FermentationChart({ readings, actions, plan, prediction, unitSys
             allowDuplicatedCategory={false}
           />
           <YAxis yAxisId="sg" domain={[low, high]} tickFormatter={(v: number) => v.toFixed(3)} width={56} />
-          <YAxis yAxisId="temp" orientation="right" tickFormatter={(v: number) => `${v}°`} width={40} />
+          <YAxis yAxisId="temp" orientation="right" domain={[(min: number) => Math.floor(min - 3), (max: number) => Math.ceil(max + 3)]} tickFormatter={(v: number) => `${v}°`} width={40} />
           <Tooltip
             labelFormatter={(t) => timeFormat.format(Number(t))}
             formatter={(value, name) => (name === 'Temperature' ? [`${value} ${temp.unit}`, name] : [Number(value).toFixed(3), name])}
           />
-          <ReferenceLine yAxisId="sg" y={plan.plannedFg} stroke={GRAVITY} strokeDasharray="6 4" label={{ value: `Planned FG ${plan.plannedFg.toFixed(3)}`, position: 'insideBottomLeft', fill: GRAVITY, fontSize: 12 }} />
-          <ReferenceLine yAxisId="sg" y={trigger} stroke="#c22a2a" strokeDasharray="2 3" label={{ value: `D-rest at ${trigger.toFixed(3)}`, position: 'insideTopLeft', fill: '#9b1c1c', fontSize: 12 }} />
+          <ReferenceLine yAxisId="sg" y={plan.plannedFg} stroke={GRAVITY} strokeDasharray="6 4" label={{ value: `Planned FG ${plan.plannedFg.toFixed(3)}`, position: 'insideBottomLeft', fill: GRAVITY, fontSize: 12, fontWeight: 600 }} />
+          <ReferenceLine yAxisId="sg" y={trigger} stroke="#c22a2a" strokeDasharray="2 3" label={{ value: `D-rest at ${trigger.toFixed(3)}`, position: 'insideTopRight', fill: '#9b1c1c', fontSize: 12, fontWeight: 600 }} />
           {actions.map((a) => (
             <ReferenceLine key={a.logEntryId} yAxisId="sg" x={Date.parse(a.at)} stroke="#55655f" label={{ value: CELLAR_ACTION_LABELS[a.action], angle: -90, position: 'insideTopRight', fill: '#2d3a36', fontSize: 11 }} />
           ))}
@@ -84,7 +84,7 @@ export function FermentationChart({ readings, actions, plan, prediction, unitSys
       <figcaption className="mt-1 flex flex-wrap gap-4 text-sm text-ink-700">
         <span><span className="mr-1 inline-block h-1 w-6 bg-cellar-800 align-middle" />Gravity</span>
         <span><span className="mr-1 inline-block h-1 w-6 bg-sky-700 align-middle" />Temperature ({temp.unit})</span>
-        <span><span className="mr-1 inline-block h-1 w-6 border-t-2 border-dashed border-brass-600 align-middle" />Prediction from the curve so far</span>
+        {prediction && <span><span className="mr-1 inline-block h-1 w-6 border-t-2 border-dashed border-brass-600 align-middle" />Prediction from the curve so far</span>}
       </figcaption>
     </figure>
   );

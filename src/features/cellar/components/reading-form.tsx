@@ -63,7 +63,7 @@ export function ReadingForm({ batchId, readings, unitSystem }: { batchId: number
                 else setValue('originalBrix', undefined);
               }}
               className={cx(
-                'min-h-[56px] rounded-lg border-2 px-2 text-base font-semibold',
+                'min-h-[56px] rounded-lg border-2 px-1 text-sm font-semibold',
                 method === m ? 'border-cellar-800 bg-cellar-800 text-white' : 'border-mist-300 bg-white text-ink-700',
               )}
             >

@@ -55,7 +55,9 @@ function VesselTile({ v, now }: { v: BoardVessel; now: number }) {
             {b.nextAction && (
               <p className="text-lg">
                 Next: <strong>{b.nextAction.label}</strong>
-                {b.nextAction.dueAt && <span className="text-mist-200"> · predicted {relative(b.nextAction.dueAt, now)}</span>}
+                {b.nextAction.dueAt && (
+                  <span className="text-mist-200"> · {Date.parse(b.nextAction.dueAt) <= now ? 'due now' : `predicted ${relative(b.nextAction.dueAt, now)}`}</span>
+                )}
               </p>
             )}
             {b.readingOverdue ? (
