@@ -22,9 +22,13 @@ async function raise(batch: Batch, kind: AlertKind, message: string): Promise<vo
     if (error instanceof UniqueConstraintError) return; // already raised: sent once only
     throw error;
   }
-  await emailAlert(alert, batch);
+  await emailAlert(alert, batch).catch((err: unknown) => {
+    // The reading is saved and the alert shows in the app; the sweep sends the e-mail later.
+    console.error(`alert ${alert.id} e-mail failed`, err);
+  });
 }
 
+/** E-mails every head brewer of the brewery, then marks the alert sent. */
 async function emailAlert(alert: Alert, batch: Batch): Promise<void> {
   const headBrewers = await User.findAll({ where: { breweryId: batch.breweryId, role: 'head_brewer', disabledAt: null } });
   for (const person of headBrewers) {
@@ -55,8 +59,16 @@ export async function evaluateReadingAlerts(breweryId: number, batchId: number):
   }
 }
 
-/** Raises "no reading" alerts for fermenting batches whose last reading is older than their plan allows. */
+/**
+ * Raises "no reading" alerts for fermenting batches whose last reading is older than their plan allows,
+ * and sends any alert whose e-mail failed before.
+ */
 export async function sweepOverdueReadings(now = new Date()): Promise<number> {
+  // A minute's grace, so an alert whose e-mail is being sent right now is not sent twice.
+  for (const alert of await Alert.findAll({ where: { emailedAt: null, createdAt: { [Op.lt]: new Date(Date.now() - 60_000) } } })) {
+    const batch = await Batch.findByPk(alert.batchId);
+    if (batch) await emailAlert(alert, batch);
+  }
   const batches = await Batch.findAll({ where: { status: 'fermenting' } });
   let raised = 0;
   for (const batch of batches) {
