@@ -7,9 +7,25 @@ import * as mariadb from 'mariadb';
 import { ensureInstance } from './lib/mariadb-instance';
 import { APP_DATA } from './lib/paths';
 import { connectionParts, runClient } from './backup';
-import { migrate } from '../server/migrations/umzug';
+import { execFileSync } from 'node:child_process';
+import { ROOT } from './lib/paths';
 
 const SAFE_NAME = /^[A-Za-z0-9_]{1,64}$/;
+
+/**
+ * Applies pending migrations and the application account's grants, in a child process: umzug loads the
+ * migration files with Node's own import, which a test runner's module loader does not provide.
+ */
+export function migrateDatabase(ownerUrl: string, appUser: string): string[] {
+  const script = `import { migrate } from './server/migrations/umzug.ts';
+console.log(JSON.stringify(await migrate(process.env.KW_MIGRATE_URL, process.env.KW_MIGRATE_APP_USER)));`;
+  const out = execFileSync(process.execPath, ['--import', 'tsx', '--input-type=module', '-e', script], {
+    cwd: ROOT,
+    env: { ...process.env, KW_MIGRATE_URL: ownerUrl, KW_MIGRATE_APP_USER: appUser },
+    encoding: 'utf8',
+  });
+  return JSON.parse(out.trim().split('\n').pop()!) as string[];
+}
 
 /** The same server and account as `url`, another database. */
 export function urlForDatabase(url: string, database: string): string {
@@ -52,7 +68,7 @@ export async function restoreDatabase(options: {
   }
   const targetUrl = urlForDatabase(options.ownerUrl, database);
   await runClient('mariadb', targetUrl, ['--default-character-set=utf8mb4', database], { stdinFile: file });
-  const migrationsApplied = await migrate(targetUrl, options.appUser);
+  const migrationsApplied = migrateDatabase(targetUrl, options.appUser);
   return { database, migrationsApplied };
 }
 
