@@ -7,6 +7,7 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { backupDatabase, connectionParts } from '../../scripts/backup';
 import { restoreDatabase, urlForDatabase } from '../../scripts/restore';
 import { createTestBrewery } from './helpers';
+import { plannedBatch, writeHeaders } from './batch-fixtures';
 
 const ownerUrl = process.env.KW_OWNER_DATABASE_URL!;
 const appUser = connectionParts(process.env.DATABASE_URL!).user;
@@ -47,7 +48,12 @@ async function fingerprint(database: string): Promise<Fingerprint> {
       const [c] = await conn.query<{ Checksum: number }[]>(`CHECKSUM TABLE \`${table}\` EXTENDED`);
       checksums[table] = c!.Checksum;
     }
-    return { rows, checksums, chainHeads: {} };
+    // Each batch log's newest hash: it commits to every entry before it.
+    const heads = await conn.query<{ batchId: number; hash: string }[]>(
+      `SELECT e.batch_id AS batchId, e.hash FROM batch_log_entries e
+        WHERE e.sequence = (SELECT MAX(x.sequence) FROM batch_log_entries x WHERE x.batch_id = e.batch_id)`,
+    );
+    return { rows, checksums, chainHeads: Object.fromEntries(heads.map((h) => [String(h.batchId), h.hash])) };
   });
 }
 
@@ -60,6 +66,11 @@ describe('backup and restore', () => {
   it('restores a dump into a fresh database with the same rows, checksums and log chain heads', async () => {
     const t = await createTestBrewery();
     await t.as.head_brewer.patch('/api/brewery').send({ name: 'Backup Test Brewing — “quoted” ünïcode 🍺' });
+    const batch = await plannedBatch({ id: t.users.head_brewer.id, breweryId: t.brewery.id });
+    for (const text of ['Mash in at 152 °F', 'Stuck sparge — added rice hulls', 'Knockout, 10.2 bbl']) {
+      const res = await t.as.assistant_brewer.post(`/api/batches/${batch.id}/log`).set(writeHeaders()).send({ kind: 'note', text });
+      expect(res.status).toBe(201);
+    }
 
     const file = path.join(dir, 'kettlewright.sql');
     const before = await fingerprint(source);
@@ -73,6 +84,7 @@ describe('backup and restore', () => {
     expect(before.rows.breweries).toBeGreaterThan(0);
     expect(after.rows).toEqual(before.rows);
     expect(after.checksums).toEqual(before.checksums);
+    expect(before.chainHeads[String(batch.id)]).toMatch(/^[0-9a-f]{64}$/);
     expect(after.chainHeads).toEqual(before.chainHeads);
   });
 
