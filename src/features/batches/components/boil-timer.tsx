@@ -39,11 +39,12 @@ export function BoilTimer({
       </Card>
     );
   }
-  const elapsed = (now - Date.parse(boilStartedAt)) / 1000;
+  const elapsed = Math.max(0, (now - Date.parse(boilStartedAt)) / 1000);
   const left = boilMinutes * 60 - elapsed;
-  const next = additions.find((a) => (boilMinutes - a.minute) * 60 > elapsed);
+  // An addition stays on screen until its minute has passed (a 60 min hop in a 60 min boil shows at the start).
+  const next = additions.find((a) => (boilMinutes - a.minute) * 60 >= elapsed);
   return (
-    <Card className="bg-cellar-800 p-4 text-white" aria-live="polite">
+    <section className="rounded-xl bg-cellar-800 p-4 text-white shadow-sm" aria-live="polite" aria-label="Boil timer">
       <h2 className="text-lg font-bold">Boil timer</h2>
       {left > 0 ? (
         <>
@@ -71,6 +72,6 @@ export function BoilTimer({
       ) : (
         <p className="mt-2 text-2xl font-bold">Boil time is up: flame out.</p>
       )}
-    </Card>
+    </section>
   );
 }

@@ -167,7 +167,7 @@ export function BrewDayPage() {
                       </span>
                       {d && (
                         <span className="shrink-0 text-sm font-semibold tabular-nums">
-                          {d.waiting ? '⏳' : '✓'} {showTime(d.at, timeZone)}
+                          {d.waiting ? 'Waiting' : '✓'} {showTime(d.at, timeZone)}
                         </span>
                       )}
                     </button>
