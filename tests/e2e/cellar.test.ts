@@ -86,4 +86,20 @@ describe('cellar readings on the tablet (Chromium, 1024×768)', () => {
     await page.getByRole('heading', { name: 'Fermentation curve' }).scrollIntoViewIfNeeded();
     await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'cellar-curve-1024.png') });
   });
+
+  it('the head brewer adds a bright tank with its rated pressure', async () => {
+    const page = await head.newPage();
+    await page.goto('/cellar/vessels');
+    await page.getByRole('button', { name: 'Add a vessel' }).click();
+    const dialog = page.getByRole('dialog', { name: 'Add a vessel' });
+    const name = `BT-${Date.now() % 100000}`;
+    await dialog.getByLabel('Name').fill(name);
+    await dialog.getByLabel('Type').selectOption('bright_tank');
+    await dialog.getByLabel('Capacity').fill('7');
+    await dialog.getByLabel('Rated working pressure (gauge)').fill('30');
+    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'cellar-vessel-form-1024.png') });
+    await dialog.getByRole('button', { name: 'Add vessel' }).click();
+    const row = page.getByRole('row', { name: new RegExp(name) });
+    await expect.poll(() => row.textContent()).toMatch(/Bright tank.*7\.0 bbl.*30 psi.*Clean/);
+  });
 });

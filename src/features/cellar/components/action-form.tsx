@@ -8,7 +8,7 @@ import { UNITS } from '../../../lib/units';
 import { useLogCellarEntry } from '../api/log-cellar-entry';
 import { useVessels } from '../api/vessels';
 
-const optionalNumber = (v: unknown) => (v === '' || v === null || v === undefined ? undefined : Number(v));
+import { optionalNumber } from './form-values';
 const ACTIONS_HERE = CELLAR_ACTIONS.filter((a) => a !== 'carbonation'); // carbonation is set from its own panel
 
 /** Logs D-rest, cold crash, dry hop, fining or a transfer as a signed entry through the outbox. */
@@ -78,7 +78,7 @@ export function ActionForm({ batchId, plan, unitSystem }: { batchId: number; pla
       )}
       <TextField label="Note (optional)" {...register('note', { setValueAs: (v: string) => (v ? v : undefined) })} error={errors.note?.message} />
       <Button type="submit" size="lg" className="w-full" busy={formState.isSubmitting}>
-        Log {CELLAR_ACTION_LABELS[action].toLowerCase()}
+        Log: {CELLAR_ACTION_LABELS[action]}
       </Button>
       {saved && <p role="status" className="text-sm text-ink-700">Saved on this tablet: {saved}.</p>}
     </form>

@@ -2,13 +2,15 @@ import { useState } from 'react';
 import { useFieldArray, useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Button, SelectField, TextField } from '../../../components/ui';
-import { KEG_SIZE_IDS } from '../../../../shared/brewing';
+import { KEG_SIZE_IDS, lToUsBbl } from '../../../../shared/brewing';
 import { KEG_SIZE_LABELS, packagingEntrySchema, type BatchCellarView, type PackagingEntryInput } from '../../../../shared/schemas/cellar';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
-import { showVolume } from '../../../lib/units';
 import { useLogCellarEntry } from '../api/log-cellar-entry';
 
 const CONTAINER_SIZES_ML = [355, 473, 500, 330, 750];
+
+/** Packaging volumes in one unit side by side: bbl (US) or L (metric). */
+const volume = (system: UnitSystem, litres: number) => (system === 'us' ? `${lToUsBbl(litres).toFixed(2)} bbl` : `${litres.toFixed(0)} L`);
 
 /** Packaging runs and the batch's packaged volume and losses so far. */
 export function PackagingForm({ batchId, packaging, unitSystem }: { batchId: number; packaging: BatchCellarView['packaging']; unitSystem: UnitSystem }) {
@@ -31,9 +33,9 @@ export function PackagingForm({ batchId, packaging, unitSystem }: { batchId: num
   return (
     <div className="space-y-4">
       <dl className="grid grid-cols-3 gap-3 text-center">
-        <div className="rounded-lg bg-mist-100 p-3"><dt className="text-xs font-semibold uppercase text-ink-500">Knockout</dt><dd className="text-xl font-semibold">{showVolume(unitSystem, packaging.knockoutL)}</dd></div>
-        <div className="rounded-lg bg-mist-100 p-3"><dt className="text-xs font-semibold uppercase text-ink-500">Packaged</dt><dd className="text-xl font-semibold">{showVolume(unitSystem, packaging.packagedL)}</dd></div>
-        <div className="rounded-lg bg-mist-100 p-3"><dt className="text-xs font-semibold uppercase text-ink-500">Losses</dt><dd className="text-xl font-semibold">{showVolume(unitSystem, packaging.lossL)} ({(packaging.lossFraction * 100).toFixed(1)} %)</dd></div>
+        <div className="rounded-lg bg-mist-100 p-3"><dt className="text-xs font-semibold uppercase text-ink-500">Knockout</dt><dd className="text-xl font-semibold">{volume(unitSystem, packaging.knockoutL)}</dd></div>
+        <div className="rounded-lg bg-mist-100 p-3"><dt className="text-xs font-semibold uppercase text-ink-500">Packaged</dt><dd className="text-xl font-semibold">{volume(unitSystem, packaging.packagedL)}</dd></div>
+        <div className="rounded-lg bg-mist-100 p-3"><dt className="text-xs font-semibold uppercase text-ink-500">Losses</dt><dd className="text-xl font-semibold">{packaging.runs.length ? `${volume(unitSystem, packaging.lossL)} (${(packaging.lossFraction * 100).toFixed(1)} %)` : '—'}</dd></div>
       </dl>
       <form onSubmit={onSubmit} noValidate aria-label="Log a packaging run" className="space-y-3">
         {lines.fields.map((field, i) => (

@@ -7,7 +7,7 @@ import type { UnitSystem } from '../../../../shared/schemas/auth';
 import { UNITS } from '../../../lib/units';
 import { useLogCellarEntry } from '../api/log-cellar-entry';
 
-const optionalNumber = (v: unknown) => (v === '' || v === null || v === undefined ? undefined : Number(v));
+import { optionalNumber } from './form-values';
 const UNIT_LABEL = { sg: 'SG', plato: '°P', brix: '°Bx' } as const;
 
 /** The last values, so a routine reading is one number and one tap. */
