@@ -78,6 +78,7 @@ describe('cellar readings on the tablet (Chromium, 1024×768)', () => {
     const tile = page.getByRole('article', { name: batch.vessel });
     await expect.poll(() => tile.getByTestId('board-gravity').textContent()).toBe('1.021');
     expect(await tile.textContent()).toContain(batch.number);
+    await page.evaluate(() => window.scrollTo(0, 0));
     await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'cellar-board-1024.png') });
     await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'cellar-board-full-1024.png'), fullPage: true });
 
