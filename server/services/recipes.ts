@@ -12,7 +12,7 @@ import {
 } from '../../shared/schemas/recipes';
 import { sequelize } from '../config/database';
 import { conflict, notFound } from '../errors';
-import { Recipe, RecipeVersion, User } from '../models';
+import { EquipmentProfile, Recipe, RecipeVersion, User } from '../models';
 import { equipmentFromRow, findEquipment, findVersion, scaleVersion } from './recipe-plans';
 
 interface Actor {
@@ -237,14 +237,28 @@ export function differences(a: unknown, b: unknown): Difference[] {
   return paths.filter((p) => fa.get(p) !== fb.get(p)).map((p) => ({ path: p, a: fa.get(p) ?? null, b: fb.get(p) ?? null }));
 }
 
+const round = (x: number, decimals: number) => Number(x.toFixed(decimals));
+
 /** Two versions side by side: both contents and computed figures, and what changed. */
 export async function compareVersions(breweryId: number, recipeId: number, a: number, b: number) {
   const [left, right] = await Promise.all([getVersion(breweryId, recipeId, a), getVersion(breweryId, recipeId, b)]);
+  const names = new Map(
+    (await EquipmentProfile.findAll({ where: { breweryId, id: [left.version.equipmentProfileId, right.version.equipmentProfileId] }, attributes: ['id', 'name'] })).map((e) => [e.id, e.name]),
+  );
   const pick = (v: typeof left) => ({
-    equipmentProfileId: v.version.equipmentProfileId,
+    equipment: names.get(v.version.equipmentProfileId) ?? null,
     changeNote: v.version.changeNote,
     content: v.version.content,
-    computed: { og: v.computed.og, fg: v.computed.fg, abvPct: v.computed.abvPct, ibu: v.computed.ibu, srm: v.computed.srm, buGu: v.computed.buGu, strikeTempC: v.computed.strikeTempC },
+    // Rounded as the screens show them, so calculation noise is not reported as a change.
+    computed: {
+      og: round(v.computed.og, 3),
+      fg: round(v.computed.fg, 3),
+      abvPct: round(v.computed.abvPct, 1),
+      ibu: round(v.computed.ibu, 1),
+      srm: round(v.computed.srm, 1),
+      buGu: round(v.computed.buGu, 2),
+      strikeTempC: round(v.computed.strikeTempC, 1),
+    },
   });
   return { recipe: left.recipe, a: left, b: right, differences: differences(pick(left), pick(right)) };
 }

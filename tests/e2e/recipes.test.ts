@@ -87,4 +87,29 @@ describe('scaling the seasonal and printing its brew sheet (Chromium)', () => {
     expect(flat).toMatch(/Sign-off/);
     expect(flat).toMatch(/Diacetyl rest: when gravity reaches/);
   });
+
+  it('compares the pilot and 10 bbl versions side by side with the changes highlighted', async () => {
+    await page.emulateMedia({ media: 'screen' });
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Recipes' }).click();
+    await page.getByRole('link', { name: SEASONAL_NAME }).click();
+    await page.getByLabel('Compare version 1').check();
+    await page.getByLabel('Compare version 2').check();
+    await page.getByRole('button', { name: 'Compare the two ticked' }).click();
+    const changes = page.getByRole('table', { name: 'What changed' });
+    await expect.poll(() => changes.textContent()).toContain('Scaled to the 10 bbl for the winter run');
+    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'recipe-compare-1024.png'), fullPage: true });
+    const text = await changes.textContent();
+    expect(text).toContain('Pilot kit 10 gal');
+    expect(text).toContain('Main brewhouse 10 bbl');
+    expect(text).toContain('Grain bill #1 weight (Pale ale malt)17.75 lb478.5 lb (8 sacks + 38.5 lb)');
+    expect(text).not.toContain('Computed IBU');
+  });
+
+  it('gives the taproom manager no recipe menu item', async () => {
+    const taproom = await context.newPage();
+    await context.clearCookies();
+    await signIn(taproom, DEMO_PEOPLE[2]!.email);
+    await expect.poll(() => taproom.getByRole('navigation', { name: 'Main' }).textContent()).not.toContain('Recipes');
+    await taproom.close();
+  });
 });

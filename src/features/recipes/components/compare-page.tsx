@@ -1,5 +1,8 @@
 import { Link, useParams, useSearchParams } from 'react-router-dom';
 import { Card, ErrorState, Loading, PageHeader, Table, Td, Th, cx } from '../../../components/ui';
+import type { UnitSystem } from '../../../../shared/schemas/auth';
+import { useCurrentUser } from '../../../app/current-user';
+import { show, showGrain, showSmallWeight, showVolume } from '../../../lib/units';
 import { useComparison, type Difference } from '../api/compare-versions';
 import type { VersionDetail } from '../api/get-version';
 
@@ -22,15 +25,31 @@ function label(path: string, side: VersionDetail): string {
   if (parts[0] === 'computed') return `Computed ${parts[1] === 'abvPct' ? 'ABV' : parts[1] === 'buGu' ? 'BU:GU' : parts[1] === 'strikeTempC' ? 'strike temperature (°C)' : parts[1]!.toUpperCase()}`;
   if (parts[0] !== 'content') return parts[0] === 'changeNote' ? 'Change note' : 'Equipment';
   const [, section, ...rest] = parts;
-  const words = rest.map((p) => (/^\d+$/.test(p) ? `#${Number(p) + 1}` : p.replace(/([A-Z])/g, ' $1').toLowerCase()));
+  const words = rest
+    .filter((p) => p !== 'items')
+    .map((p) => (/^\d+$/.test(p) ? `#${Number(p) + 1}` : p.replace(/(Kg|Pct|[GCL])$/, '').replace(/([A-Z])/g, ' $1').toLowerCase()));
   // Name the line (e.g. the hop's variety) so "hops #1 weight g" reads as "Hop #1 (Earthy…) weight g".
-  const list = (side.version.content as unknown as Record<string, unknown>)[section!];
-  const index = /^\d+$/.test(rest[0] ?? '') ? Number(rest[0]) : -1;
+  const content = side.version.content as unknown as Record<string, unknown>;
+  const nested = section === 'grainBill' && rest[0] === 'items';
+  const list = nested ? side.version.content.grainBill.items : content[section!];
+  const at = nested ? rest[1] : rest[0];
+  const index = /^\d+$/.test(at ?? '') ? Number(at) : -1;
   const item = Array.isArray(list) && index >= 0 ? (list[index] as { name?: string } | undefined)?.name : undefined;
   return `${SECTION_NAMES[section!] ?? section} ${words.join(' ')}${item ? ` (${item})` : ''}`;
 }
 
-const fmt = (v: Difference['a']) => (v === null ? '—' : typeof v === 'number' ? String(Number(v.toFixed(4))) : String(v));
+/** A changed value in the brewery's units where the path names one (weightKg, weightG, …TempC, …VolumeL). */
+function fmt(path: string, v: Difference['a'], system: UnitSystem): string {
+  if (v === null) return '—';
+  if (typeof v !== 'number') return String(v);
+  if (path.startsWith('computed.')) return String(v);
+  if (path.endsWith('weightKg')) return showGrain(system, v);
+  if (path.endsWith('weightG')) return showSmallWeight(system, v);
+  if (path.endsWith('TempC')) return show(system, 'tempC', v);
+  if (path.endsWith('VolumeL')) return showVolume(system, v);
+  if (path.endsWith('grams')) return `${v.toFixed(1)} g`;
+  return String(Number(v.toFixed(4)));
+}
 
 /** Two versions side by side: the changed values highlighted, then both summaries. */
 export function ComparePage() {
@@ -39,6 +58,7 @@ export function ComparePage() {
   const a = Number(search.get('a'));
   const b = Number(search.get('b'));
   const comparison = useComparison(recipeId, a, b);
+  const system = useCurrentUser().brewery.unitSystem;
   if (comparison.isPending) return <Loading label="Comparing" />;
   if (comparison.isError) return <ErrorState error={comparison.error} onRetry={() => comparison.refetch()} />;
   const { recipe, a: left, b: right, differences } = comparison.data;
@@ -84,8 +104,8 @@ export function ComparePage() {
           {differences.map((d) => (
             <tr key={d.path}>
               <Td className="font-medium">{label(d.path, d.b === null ? left : right)}</Td>
-              <Td className={cx(d.a === null ? 'text-ink-300' : 'bg-ember-100 text-ember-700 line-through decoration-1')}>{fmt(d.a)}</Td>
-              <Td className={cx(d.b === null ? 'text-ink-300' : 'bg-cellar-100 font-semibold text-cellar-800')}>{fmt(d.b)}</Td>
+              <Td className={cx(d.a === null ? 'text-ink-300' : 'bg-ember-100 text-ember-700 line-through decoration-1')}>{fmt(d.path, d.a, system)}</Td>
+              <Td className={cx(d.b === null ? 'text-ink-300' : 'bg-cellar-100 font-semibold text-cellar-800')}>{fmt(d.path, d.b, system)}</Td>
             </tr>
           ))}
         </tbody>

@@ -5,6 +5,7 @@ import { useCurrentUser } from '../../../app/current-user';
 import { ApiError } from '../../../lib/api-client';
 import { useToast } from '../../../components/ui';
 import { useEquipment } from '../../library/api/equipment';
+import { useIngredients } from '../../library/api/ingredients';
 import { useVersion } from '../api/get-version';
 import { useRecipe } from '../api/get-recipe';
 import { useCreateRecipe, useSaveVersion, useUpdateRecipe } from '../api/save-recipe';
@@ -25,6 +26,7 @@ export function EditorPage() {
   const version = useVersion(recipeId, versionId);
   const recipe = useRecipe(recipeId);
   const equipment = useEquipment();
+  const library = useIngredients();
   const save = useSaveVersion();
   const updateRecipe = useUpdateRecipe();
 
@@ -68,6 +70,7 @@ export function EditorPage() {
         key={v.id}
         initial={{ name: r.name, style: r.style, description: r.description, status: r.status, changeNote: frozen ? '' : v.changeNote, equipmentProfileId: v.equipmentProfileId, content: v.content }}
         equipment={equipment.data}
+        library={library.data ?? []}
         system={me.brewery.unitSystem}
         canEdit={canEdit}
         notice={frozen ? <Caution title="This version has been brewed">A batch used it, so it stays as it was. Saving makes version {next}.</Caution> : undefined}
@@ -83,6 +86,7 @@ export function NewRecipePage() {
   const me = useCurrentUser();
   const navigate = useNavigate();
   const equipment = useEquipment();
+  const library = useIngredients();
   const create = useCreateRecipe();
   if (equipment.isPending) return <Loading label="Loading equipment" />;
   if (equipment.isError) return <ErrorState error={equipment.error} onRetry={() => equipment.refetch()} />;
@@ -98,6 +102,7 @@ export function NewRecipePage() {
       <RecipeEditor
         initial={{ ...NEW_RECIPE, equipmentProfileId: first.id, content: { ...NEW_RECIPE.content, targets: { ...NEW_RECIPE.content.targets, batchVolumeL: first.batchVolumeL } } }}
         equipment={equipment.data}
+        library={library.data ?? []}
         system={me.brewery.unitSystem}
         canEdit={me.role === 'head_brewer'}
         saveLabel="Create recipe"

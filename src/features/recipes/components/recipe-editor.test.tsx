@@ -13,6 +13,7 @@ function renderEditor() {
     <RecipeEditor
       initial={{ name: SEASONAL_NAME, style: 'Amber', description: '', status: 'draft', changeNote: 'Pilot', equipmentProfileId: 1, content: SEASONAL_CONTENT }}
       equipment={[pilot]}
+      library={[{ id: 9, kind: 'hop', name: 'Harbour wild hop', alphaAcidPct: 8, ppg: null, colourLovibond: null, attenuationPct: null, notes: '', typical: false }]}
       system="us"
       canEdit
       saveLabel="Save"
@@ -38,6 +39,13 @@ describe('recipe editor', () => {
     expect(after.ibu).toBeGreaterThan(before.ibu + 5);
     expect(ibuOnScreen()).toBe(after.ibu.toFixed(1));
     expect(within(screen.getByRole('group', { name: 'Hop 1' })).getByLabelText('Hop 1 IBU').textContent).toBe(`${after.hops[0]!.ibu.toFixed(1)} IBU`);
+  });
+
+  it("fills a hop's alpha acid from the library when its name is picked", () => {
+    renderEditor();
+    const hop = within(screen.getByRole('group', { name: 'Hop 2' }));
+    fireEvent.change(hop.getByLabelText('Variety'), { target: { value: 'Harbour wild hop' } });
+    expect((hop.getByLabelText('Alpha (%)') as HTMLInputElement).value).toBe('8');
   });
 
   it('shows a message instead of stale numbers while a field is empty', () => {

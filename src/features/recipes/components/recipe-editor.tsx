@@ -1,5 +1,5 @@
 import { useRef, useState, type ReactNode } from 'react';
-import { useController, useFieldArray, useForm, useWatch, type Control, type UseFormRegister, type FieldErrors } from 'react-hook-form';
+import { useController, useFieldArray, useForm, useWatch, type Control, type UseFormRegister, type UseFormSetValue, type FieldErrors } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
 import { doseBasisLabel, percentagesFromWeights } from '../../../../shared/brewing';
@@ -17,10 +17,12 @@ import {
   YEAST_TYPES,
   createRecipeSchema,
   type CreateRecipeInput,
+  type IngredientKind,
 } from '../../../../shared/schemas/recipes';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
 import { Button, Card, SelectField, TextAreaField, TextField, cx } from '../../../components/ui';
 import type { EquipmentRow } from '../../library/api/equipment';
+import type { IngredientRow } from '../../library/api/ingredients';
 import { LiveNumbersPanel, useLiveNumbers } from './live-numbers';
 import { UnitField, asNumber } from './unit-field';
 
@@ -79,12 +81,15 @@ const w = (cls: string, node: ReactNode) => <div className={cls}>{node}</div>;
 interface Shared {
   control: Ctl;
   register: UseFormRegister<FormIn>;
+  /** Picking a library name fills its typical values into the line. */
+  fromLibrary: (kind: IngredientKind, name: string) => IngredientRow | undefined;
+  setValue: UseFormSetValue<FormIn>;
   errors: FieldErrors<FormIn>;
   system: UnitSystem;
   disabled: boolean;
 }
 
-function GrainBill({ control, register, errors, system, disabled, ogNow, weightsNow, setBill }: Shared & { ogNow?: number; weightsNow?: number[]; setBill: (bill: FormIn['content']['grainBill']) => void }) {
+function GrainBill({ control, register, errors, system, disabled, ogNow, weightsNow, setBill, fromLibrary, setValue }: Shared & { ogNow?: number; weightsNow?: number[]; setBill: (bill: FormIn['content']['grainBill']) => void }) {
   const bill = useWatch({ control, name: 'content.grainBill' });
   const items = useFieldArray({ control, name: 'content.grainBill.items' });
   const mode = bill.mode;
@@ -118,7 +123,21 @@ function GrainBill({ control, register, errors, system, disabled, ogNow, weights
         const byPpg = potential && 'ppg' in potential;
         return (
           <Row key={f.id} legend={`Fermentable ${i + 1}`} onRemove={() => items.remove(i)} disabled={disabled}>
-            {w('min-w-48 flex-1', <TextField label="Name" {...register(`${p}.name`)} error={errorAt(errors, `${p}.name`)} disabled={disabled} />)}
+            {w('min-w-48 flex-1', (
+              <TextField
+                label="Name"
+                list="kw-library-fermentable"
+                {...register(`${p}.name`, {
+                  onChange: (e) => {
+                    const hit = fromLibrary('fermentable', e.target.value);
+                    if (hit?.ppg != null) setValue(`${p}.potential`, { ppg: hit.ppg }, { shouldValidate: true });
+                    if (hit?.colourLovibond != null) setValue(`${p}.colourLovibond`, hit.colourLovibond, { shouldValidate: true });
+                  },
+                })}
+                error={errorAt(errors, `${p}.name`)}
+                disabled={disabled}
+              />
+            ))}
             {w('w-28', byPpg
               ? <TextField label="Potential (ppg)" type="number" step="any" {...register(`${p}.potential.ppg` as never, asNumber())} error={errorAt(errors, `${p}.potential.ppg`)} disabled={disabled} />
               : <TextField label="Extract (%)" type="number" step="any" {...register(`${p}.potential.extractPct` as never, asNumber())} error={errorAt(errors, `${p}.potential.extractPct`)} disabled={disabled} />)}
@@ -147,7 +166,7 @@ function GrainBill({ control, register, errors, system, disabled, ogNow, weights
   );
 }
 
-function Hops({ control, register, errors, system, disabled, ibus }: Shared & { ibus?: number[] }) {
+function Hops({ control, register, errors, system, disabled, ibus, fromLibrary, setValue }: Shared & { ibus?: number[] }) {
   const hops = useFieldArray({ control, name: 'content.hops' });
   const values = useWatch({ control, name: 'content.hops' });
   return (
@@ -157,7 +176,20 @@ function Hops({ control, register, errors, system, disabled, ibus }: Shared & { 
         const use = values[i]?.use;
         return (
           <Row key={f.id} legend={`Hop ${i + 1}`} onRemove={() => hops.remove(i)} disabled={disabled}>
-            {w('min-w-44 flex-1', <TextField label="Variety" {...register(`${p}.name`)} error={errorAt(errors, `${p}.name`)} disabled={disabled} />)}
+            {w('min-w-44 flex-1', (
+              <TextField
+                label="Variety"
+                list="kw-library-hop"
+                {...register(`${p}.name`, {
+                  onChange: (e) => {
+                    const hit = fromLibrary('hop', e.target.value);
+                    if (hit?.alphaAcidPct != null) setValue(`${p}.alphaAcidPct`, hit.alphaAcidPct, { shouldValidate: true });
+                  },
+                })}
+                error={errorAt(errors, `${p}.name`)}
+                disabled={disabled}
+              />
+            ))}
             {w('w-24', <TextField label="Alpha (%)" type="number" step="any" {...register(`${p}.alphaAcidPct`, asNumber())} error={errorAt(errors, `${p}.alphaAcidPct`)} disabled={disabled} />)}
             {w('w-28', (
               <SelectField label="Form" {...register(`${p}.form`)} disabled={disabled}>
@@ -335,7 +367,7 @@ function Additions({ control, register, errors, disabled, kind, amounts }: Share
         const v = values[i];
         return (
           <Row key={f.id} legend={`${kind === 'adjuncts' ? 'Adjunct' : 'Spice'} ${i + 1}`} onRemove={() => list.remove(i)} disabled={disabled}>
-            {w('min-w-64 flex-1', <TextField label="Name" {...register(`${p}.name`)} error={errorAt(errors, `${p}.name`)} disabled={disabled} />)}
+            {w('min-w-64 flex-1', <TextField label="Name" list={kind === 'adjuncts' ? 'kw-library-adjunct' : undefined} {...register(`${p}.name`)} error={errorAt(errors, `${p}.name`)} disabled={disabled} />)}
             {w('w-32', (
               <SelectField label="Kind" {...register(`${p}.category`)} disabled={disabled}>
                 {ADJUNCT_CATEGORIES.map((x) => <option key={x} value={x}>{x}</option>)}
@@ -391,6 +423,8 @@ function Additions({ control, register, errors, disabled, kind, amounts }: Share
 export interface RecipeEditorProps {
   initial: FormIn;
   equipment: EquipmentRow[];
+  /** The brewery's ingredient library, offered as names while typing. */
+  library: IngredientRow[];
   system: UnitSystem;
   canEdit: boolean;
   /** Shown above the save buttons, e.g. that the version is frozen. */
@@ -403,7 +437,7 @@ export interface RecipeEditorProps {
 }
 
 /** The recipe editor: every section as a form on the shared schema, numbers recomputed as you type. */
-export function RecipeEditor({ initial, equipment, system, canEdit, notice, saveLabel, saveAsNewLabel, onSave }: RecipeEditorProps) {
+export function RecipeEditor({ initial, equipment, library, system, canEdit, notice, saveLabel, saveAsNewLabel, onSave }: RecipeEditorProps) {
   const form = useForm<FormIn, unknown, CreateRecipeInput>({ resolver: zodResolver(createRecipeSchema), defaultValues: initial, mode: 'onChange' });
   const { control, register, handleSubmit, setValue, setError, formState } = form;
   const [banner, setBanner] = useState<string>();
@@ -413,7 +447,8 @@ export function RecipeEditor({ initial, equipment, system, canEdit, notice, save
   const profile = equipment.find((e) => e.id === Number(values.equipmentProfileId));
   const live = useLiveNumbers(values.name ?? '', values.content, profile);
   const disabled = !canEdit;
-  const shared: Shared = { control, register, errors: formState.errors, system, disabled };
+  const fromLibrary = (kind: IngredientKind, name: string) => library.find((i) => i.kind === kind && i.name === name);
+  const shared: Shared = { control, register, errors: formState.errors, system, disabled, fromLibrary, setValue };
   const c = live.computed;
   const adjunctCount = values.content?.adjuncts?.length ?? 0;
   const measured = (i: number) => (c?.adjuncts[i] ? `${c.adjuncts[i]!.amount.value > 0 ? (system === 'us' ? c.adjuncts[i]!.measuredUs : c.adjuncts[i]!.measuredMetric).value + ' ' + (system === 'us' ? c.adjuncts[i]!.measuredUs : c.adjuncts[i]!.measuredMetric).unit : '0'}` : '');
@@ -428,6 +463,11 @@ export function RecipeEditor({ initial, equipment, system, canEdit, notice, save
   return (
     <form onSubmit={submit} noValidate className="flex flex-col gap-4 lg:flex-row lg:items-start">
       <div className="min-w-0 flex-1 space-y-4">
+        {(['fermentable', 'hop', 'yeast', 'adjunct'] as const).map((kind) => (
+          <datalist key={kind} id={`kw-library-${kind}`}>
+            {library.filter((i) => i.kind === kind).map((i) => <option key={i.id} value={i.name} />)}
+          </datalist>
+        ))}
         <Section title="Recipe">
           <div className="grid gap-3 sm:grid-cols-2">
             <TextField label="Name" {...register('name')} error={errorAt(formState.errors, 'name')} disabled={disabled} />
@@ -469,7 +509,12 @@ export function RecipeEditor({ initial, equipment, system, canEdit, notice, save
         <Additions {...shared} kind="spices" amounts={Array.from({ length: values.content?.spices?.length ?? 0 }, (_, i) => measured(adjunctCount + i))} />
         <Section title="Yeast">
           <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
-            <div className="col-span-2"><TextField label="Yeast" {...register('content.yeast.name')} error={errorAt(formState.errors, 'content.yeast.name')} disabled={disabled} /></div>
+            <div className="col-span-2"><TextField label="Yeast" list="kw-library-yeast" {...register('content.yeast.name', {
+              onChange: (e) => {
+                const hit = fromLibrary('yeast', e.target.value);
+                if (hit?.attenuationPct != null) setValue('content.yeast.attenuationPct', hit.attenuationPct, { shouldValidate: true });
+              },
+            })} error={errorAt(formState.errors, 'content.yeast.name')} disabled={disabled} /></div>
             <SelectField label="Strain type" {...register('content.yeast.strainType')} disabled={disabled}>
               {YEAST_TYPES.map((x) => <option key={x} value={x}>{x}</option>)}
             </SelectField>

@@ -26,12 +26,12 @@ function amount(change: ScaleChange, value: number, system: UnitSystem): string 
   }
 }
 
-function NotInProportion({ change }: { change: ScaleChange }) {
+function NotInProportion({ change, reason }: { change: ScaleChange; reason?: string }) {
   if (!change.nonLinear) return <span className="text-ink-500">in proportion</span>;
   return (
     <span>
       <span className="mr-1 rounded bg-brass-100 px-1.5 py-0.5 text-xs font-bold uppercase text-ink-900">Not in proportion</span>
-      <span className="text-sm text-ink-700">{change.reason}</span>
+      <span className="text-sm text-ink-700">{reason ?? change.reason}</span>
     </span>
   );
 }
@@ -61,12 +61,12 @@ export function ScaleTable({ data, system }: { data: ScaleResult; system: UnitSy
   const byPrefix = (prefix: string) => scaled.changes.filter((c) => c.item.startsWith(prefix));
   const content = version.content;
   const rules = [...content.adjuncts, ...content.spices];
-  const row = (key: string, what: ReactNode, c: ScaleChange, from: string, to: string) => (
+  const row = (key: string, what: ReactNode, c: ScaleChange, from: string, to: string, reason?: string) => (
     <tr key={key} className={cx(c.nonLinear && 'bg-brass-100/40')}>
       <Td className="font-medium">{what}</Td>
       <Td>{from}</Td>
       <Td className="text-lg font-semibold">{to}</Td>
-      <Td><NotInProportion change={c} /></Td>
+      <Td><NotInProportion change={c} reason={reason} /></Td>
     </tr>
   );
   return (
@@ -99,7 +99,11 @@ export function ScaleTable({ data, system }: { data: ScaleResult; system: UnitSy
         </Group>
         {(byPrefix('mash salt: ').length > 0 || byPrefix('sparge salt: ').length > 0) && (
           <Group title="Water salts">
-            {[...byPrefix('mash salt: '), ...byPrefix('sparge salt: ')].map((c, i) => row(`s${i}`, saltName(c.item), c, `${c.from.toFixed(1)} g`, `${c.to.toFixed(1)} g`))}
+            {[...byPrefix('mash salt: '), ...byPrefix('sparge salt: ')].map((c, i) => {
+              const v = scaled.after.volumes;
+              const water = c.item.startsWith('mash') ? `${show(system, 'volumeL', v.strikeL + v.infusionL)} of mash water` : `${show(system, 'volumeL', v.spargeL)} of sparge water`;
+              return row(`s${i}`, saltName(c.item), c, `${c.from.toFixed(1)} g`, `${c.to.toFixed(1)} g`, `same ppm in ${water}`);
+            })}
           </Group>
         )}
         {rules.length > 0 && (
