@@ -34,7 +34,7 @@ export function boilAdditions(plan: FrozenPlan): { minute: number; additions: Ad
   const { computed, equipment, recipe } = plan;
   const byMinute = new Map<number, Addition[]>();
   const add = (minute: number, a: Addition) => byMinute.set(minute, [...(byMinute.get(minute) ?? []), a]);
-  for (const hop of computed.hops) if (hop.use === 'boil') add(hop.minutes, { what: `${hop.name} hops`, amount: grams(hop.weightG) });
+  for (const hop of computed.hops) if (hop.use === 'boil') add(hop.minutes, { what: hop.name, amount: grams(hop.weightG) });
   // Kettle sugars go in at the start of the boil so they dissolve fully (common practice, no source).
   for (const f of computed.fermentables) if (f.stage === 'kettle') add(equipment.boilMinutes, { what: f.name, amount: { value: f.weightKg, unit: 'kg' } });
   computed.adjuncts.forEach((a, i) => {
@@ -73,7 +73,7 @@ export function brewDaySteps(plan: FrozenPlan): BrewDayStep[] {
     step({ key: `boil-${minute}`, label: `Boil addition at ${minute} min`, additions, boilMinute: minute, hot: true });
   }
   step({ key: 'flame-out', label: 'Flame out', asks: ['volumeL'], expected: { volumeL: v.postBoilL }, hot: true });
-  const whirlpool = c.hops.filter((h) => h.use === 'whirlpool').map((h) => ({ what: `${h.name} hops`, amount: grams(h.weightG) }));
+  const whirlpool = c.hops.filter((h) => h.use === 'whirlpool').map((h) => ({ what: h.name, amount: grams(h.weightG) }));
   const whirlpoolAdjuncts = c.adjuncts.filter((a) => a.stage === 'whirlpool').map((a) => ({ what: a.name, amount: { value: a.amount.value, unit: a.amount.unit } }));
   step({ key: 'whirlpool-start', label: 'Start whirlpool', asks: ['tempC'], additions: [...whirlpool, ...whirlpoolAdjuncts], hot: true });
   step({ key: 'whirlpool-end', label: 'End whirlpool and rest', hot: true });

@@ -1,0 +1,58 @@
+// Planning a batch: a recipe version on an equipment profile or at a typed volume, the plan frozen into the batch.
+import { beforeAll, describe, expect, it } from 'vitest';
+import { sequelize } from '../../server/config/database';
+import { EquipmentProfile, RecipeVersion } from '../../server/models';
+import { seedRecipes } from '../../server/seed/recipes';
+import { computeRecipe } from '../../shared/brewing';
+import { createTestBrewery, type TestBrewery } from './helpers';
+
+let t: TestBrewery;
+let other: TestBrewery;
+let version: RecipeVersion;
+let bigProfile: EquipmentProfile;
+
+beforeAll(async () => {
+  t = await createTestBrewery();
+  other = await createTestBrewery();
+  // The demo recipes and brewhouses, written into this test brewery.
+  await sequelize.transaction((transaction) => seedRecipes({ brewery: t.brewery, users: t.users, transaction }));
+  version = (await RecipeVersion.findOne({ where: { breweryId: t.brewery.id }, order: [['id', 'ASC']] }))!;
+  bigProfile = (await EquipmentProfile.findAll({ where: { breweryId: t.brewery.id }, order: [['batchVolumeL', 'DESC']] }))[0]!;
+});
+
+describe('planning a batch', () => {
+  it('freezes the scaled plan into the batch and the recipe version, numbered per brewery and year', async () => {
+    const res = await t.as.head_brewer.post('/api/batches').send({ recipeVersionId: version.id, equipmentProfileId: bigProfile.id, brewDate: '2026-12-03' });
+    expect(res.status).toBe(201);
+    expect(res.body).toMatchObject({ number: '2026-001', status: 'planned', recipeVersionId: version.id, entries: [], signatures: [] });
+    // The frozen plan's numbers are shared/brewing's for its own recipe and equipment.
+    const { plan } = res.body;
+    expect(plan.equipment.batchVolumeL).toBeCloseTo(bigProfile.batchVolumeL, 6);
+    expect(plan.computed.og).toBeCloseTo(computeRecipe(plan.recipe, plan.equipment).og, 12);
+    expect(res.body.plannedOg).toBeCloseTo(plan.computed.og, 12);
+    expect((await RecipeVersion.findByPk(version.id))!.frozenAt).not.toBeNull();
+
+    const second = await t.as.head_brewer.post('/api/batches').send({ recipeVersionId: version.id, batchVolumeL: 500, brewDate: '2026-12-09' });
+    expect(second.body.number).toBe('2026-002');
+    expect(second.body.plan.equipment.batchVolumeL).toBe(500);
+    const nextYear = await t.as.head_brewer.post('/api/batches').send({ recipeVersionId: version.id, batchVolumeL: 500, brewDate: '2027-01-04' });
+    expect(nextYear.body.number).toBe('2027-001');
+  });
+
+  it('later changes to the recipe never change a planned batch', async () => {
+    const planned = await t.as.head_brewer.post('/api/batches').send({ recipeVersionId: version.id, brewDate: '2026-12-10' });
+    const before = planned.body.plan;
+    const content = structuredClone(version.content);
+    content.targets.batchVolumeL *= 2;
+    await RecipeVersion.update({ content }, { where: { id: version.id } });
+    const after = await t.as.head_brewer.get(`/api/batches/${planned.body.id}`);
+    expect(after.body.plan).toEqual(before);
+  });
+
+  it('refuses another brewery’s recipe version (404) and bad input (400 with field messages)', async () => {
+    expect((await other.as.head_brewer.post('/api/batches').send({ recipeVersionId: version.id, brewDate: '2026-12-03' })).status).toBe(404);
+    const bad = await t.as.head_brewer.post('/api/batches').send({ recipeVersionId: version.id, batchVolumeL: -3, brewDate: 'someday' });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.fields).toMatchObject({ batchVolumeL: expect.stringMatching(/at least 1 L/), brewDate: expect.any(String) });
+  });
+});
