@@ -13,6 +13,7 @@ import { LogList } from './log-list';
 import { MeasurementFields, toMeasurements, type GravityUnit, type Typed } from './measurement-fields';
 import { OutboxPanel } from './outbox-panel';
 import { SignOffPanel, Signatures } from './sign-off-panel';
+import { StatusCard } from './status-card';
 import { showAddition, showMeasurements, showTime } from './format';
 import { useOnline } from './use-online';
 
@@ -204,6 +205,7 @@ export function BrewDayPage() {
             </Card>
           )}
           <ActualsCard actuals={b.actuals} system={system} />
+          <StatusCard batchId={id} status={b.status} />
           {b.signatures.length > 0 && <Signatures signatures={b.signatures} timeZone={timeZone} />}
           {me.role === 'head_brewer' && !signed && <SignOffPanel batchId={id} pendingCount={waitingCount} />}
         </div>
