@@ -3,6 +3,7 @@ import { QueryTypes, type Transaction } from 'sequelize';
 import { computeRecipe, type ComputedRecipe } from '../../shared/brewing';
 import {
   equipmentAtVolume,
+  resolveHopShares,
   toRecipeInput,
   type CreateRecipeInput,
   type RecipeVersionContent,
@@ -107,10 +108,12 @@ export async function getRecipe(breweryId: number, id: number) {
   return { ...recipeJson(recipe), versions: await summaries(versions) };
 }
 
-/** Every number for a version's content on its brewhouse at its batch volume. */
-async function compute(breweryId: number, recipeName: string, equipmentProfileId: number, content: RecipeVersionContent, transaction?: Transaction): Promise<ComputedRecipe> {
+/** Every number for a version's content on its brewhouse at its batch volume; hops written as IBU shares get their solved weights. */
+async function compute(breweryId: number, recipeName: string, equipmentProfileId: number, written: RecipeVersionContent, transaction?: Transaction) {
   const row = await findEquipment(breweryId, equipmentProfileId, transaction);
-  return computeRecipe(toRecipeInput(recipeName, content), equipmentAtVolume(equipmentFromRow(row), content.targets.batchVolumeL));
+  const equipment = equipmentAtVolume(equipmentFromRow(row), written.targets.batchVolumeL);
+  const content = resolveHopShares(recipeName, written, equipment);
+  return { content, computed: computeRecipe(toRecipeInput(recipeName, content), equipment) };
 }
 
 function figures(computed: ComputedRecipe, content: RecipeVersionContent) {
@@ -118,7 +121,7 @@ function figures(computed: ComputedRecipe, content: RecipeVersionContent) {
 }
 
 async function writeVersion(actor: Actor, recipe: Recipe, input: SaveVersionInput, transaction: Transaction): Promise<RecipeVersion> {
-  const computed = await compute(actor.breweryId, recipe.name, input.equipmentProfileId, input.content, transaction);
+  const { content, computed } = await compute(actor.breweryId, recipe.name, input.equipmentProfileId, input.content, transaction);
   const last = (await RecipeVersion.max<number, RecipeVersion>('number', { where: { recipeId: recipe.id }, transaction })) ?? 0;
   const version = await RecipeVersion.create(
     {
@@ -128,8 +131,8 @@ async function writeVersion(actor: Actor, recipe: Recipe, input: SaveVersionInpu
       changeNote: input.changeNote,
       authorId: actor.id,
       equipmentProfileId: input.equipmentProfileId,
-      content: input.content,
-      ...figures(computed, input.content),
+      content,
+      ...figures(computed, content),
       frozenAt: null,
       lastUsedAt: null,
     },
@@ -163,7 +166,7 @@ async function versionOf(breweryId: number, recipeId: number, versionId: number,
 
 export async function getVersion(breweryId: number, recipeId: number, versionId: number) {
   const { version, recipe } = await versionOf(breweryId, recipeId, versionId);
-  const computed = await compute(breweryId, recipe.name, version.equipmentProfileId, version.content);
+  const { computed } = await compute(breweryId, recipe.name, version.equipmentProfileId, version.content);
   const [summary] = await summaries([version]);
   return { recipe: recipeJson(recipe), version: { ...summary!, content: version.content }, computed };
 }
@@ -182,9 +185,9 @@ export async function updateVersion(actor: Actor, recipeId: number, versionId: n
   return sequelize.transaction(async (transaction) => {
     const { version, recipe } = await versionOf(actor.breweryId, recipeId, versionId, transaction, true);
     if (version.frozenAt) throw conflict(`Version ${version.number} has been used by a batch and cannot change. Save your edits as the next version.`);
-    const computed = await compute(actor.breweryId, recipe.name, input.equipmentProfileId, input.content, transaction);
+    const { content, computed } = await compute(actor.breweryId, recipe.name, input.equipmentProfileId, input.content, transaction);
     await version.update(
-      { changeNote: input.changeNote, equipmentProfileId: input.equipmentProfileId, content: input.content, authorId: actor.id, ...figures(computed, input.content) },
+      { changeNote: input.changeNote, equipmentProfileId: input.equipmentProfileId, content, authorId: actor.id, ...figures(computed, content) },
       { transaction },
     );
     return { id: version.id, number: version.number };
@@ -201,8 +204,8 @@ export async function saveScaledVersion(actor: Actor, recipeId: number, versionI
     const content: RecipeVersionContent = {
       ...old,
       grainBill,
-      // The scaled hops keep their order; the form (pellet, whole) is the brewer's, not the maths'.
-      hops: hops.map((h, i) => ({ ...h, form: old.hops[i]!.form })),
+      // The scaled hops keep their order: only the weight is the maths'; form and IBU share stay the brewer's.
+      hops: old.hops.map((h, i) => ({ ...h, weightG: hops[i]!.weightG })),
       ...(water ? { water } : {}),
       targets: { ...old.targets, batchVolumeL: s.target.batchVolumeL },
     };

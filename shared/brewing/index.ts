@@ -105,7 +105,7 @@ export {
   convertPractical,
   roundForMeasuring,
 } from './adjuncts';
-export { computeRecipe, planWort, resolveGrainBill, type WortPlan } from './recipe';
+export { computeRecipe, planWort, resolveGrainBill, hopWeightsForIbuShares, type WortPlan } from './recipe';
 export { scaleRecipe } from './scaling';
 export {
   predictFermentation,

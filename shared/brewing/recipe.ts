@@ -3,7 +3,7 @@
  * the recipe editor, the API and the brew sheet.
  */
 import { doseAmount, doseRange, isWithinRange, roundForMeasuring } from './adjuncts';
-import { buGu, ibuForAddition, hopUtilisation } from './bitterness';
+import { buGu, ibuForAddition, hopUtilisation, hopWeightForIbu } from './bitterness';
 import { srmFromFermentables, srmToEbc, srmToHex } from './colour';
 import { BrewingInputError, requireFinite, requireInRange, requireNonNegative } from './errors';
 import { percentagesFromWeights, weightsForTargetOg } from './grain-bill';
@@ -35,6 +35,7 @@ import {
   type ComputedWater,
   type EquipmentProfile,
   type GrainBill,
+  type HopAddition,
   type RecipeInput,
   type VolumePlan,
   type WeighedFermentable,
@@ -283,4 +284,21 @@ export function computeRecipe(recipe: RecipeInput, equipment: EquipmentProfile):
     ...(yeastCellsBillion === undefined ? {} : { yeastCellsBillion }),
     warnings,
   };
+}
+
+/**
+ * Hop weights for additions written as a share of the target IBU: addition i with
+ * `sharesPct[i]` gets that share of `targetIbu` at the recipe's boil gravity on this
+ * equipment (Tinseth, inverted by {@link hopWeightForIbu}); additions without a share keep
+ * their weight. Boil gravity does not depend on the hops, so one wort plan serves all.
+ */
+export function hopWeightsForIbuShares(recipe: RecipeInput, equipment: EquipmentProfile, targetIbu: number, sharesPct: readonly (number | undefined)[]): HopAddition[] {
+  if (sharesPct.every((s) => s === undefined)) return recipe.hops;
+  const wort = planWort(recipe, equipment);
+  return recipe.hops.map((hop, i) => {
+    const share = sharesPct[i];
+    if (share === undefined) return hop;
+    requireInRange(share, `hops.${i}.ibuSharePct`, 0, 100, 'Share of the target IBU (%)');
+    return { ...hop, weightG: hopWeightForIbu((targetIbu * share) / 100, hop, wort.boilGravity, equipment.batchVolumeL, `hops.${i}`) };
+  });
 }

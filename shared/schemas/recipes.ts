@@ -5,7 +5,7 @@
  * scaleRecipe do every calculation) plus what the brew day needs beyond the maths.
  */
 import { z } from 'zod';
-import type { AdjunctAddition, EquipmentProfile, RecipeInput } from '../brewing';
+import { hopWeightsForIbuShares, type AdjunctAddition, type EquipmentProfile, type RecipeInput } from '../brewing';
 
 const num = (label: string, min: number, max: number) =>
   z
@@ -59,11 +59,17 @@ export const hopSchema = z
     use: z.enum(HOP_USES),
     minutes: num('Minutes', 0, 240),
     whirlpoolTempC: num('Whirlpool temperature (°C)', 40, 100).optional(),
-    weightG: num('Weight (g)', 0.1, 500000),
+    /** When set, the weight is solved for this share of the target IBU (see resolveHopShares). */
+    ibuSharePct: num('Share of the target IBU (%)', 0.1, 100).optional(),
+    weightG: num('Weight (g)', 0, 500000),
   })
   .refine((h) => h.use !== 'whirlpool' || h.whirlpoolTempC !== undefined, {
     path: ['whirlpoolTempC'],
     message: 'A whirlpool addition needs its stand temperature',
+  })
+  .refine((h) => h.ibuSharePct === undefined || h.use !== 'dryHop', {
+    path: ['ibuSharePct'],
+    message: 'A dry hop adds no bitterness: give it a weight',
   });
 
 // ----------------------------------------------------------------------- water
@@ -313,7 +319,7 @@ export function toRecipeInput(recipeName: string, content: RecipeVersionContent)
   return {
     name: recipeName,
     grainBill: content.grainBill,
-    hops: content.hops.map(({ form: _form, ...hop }) => hop),
+    hops: content.hops.map(({ form: _form, ibuSharePct: _share, ...hop }) => hop),
     yeast: {
       name: content.yeast.name,
       attenuationPct: content.yeast.attenuationPct,
@@ -329,4 +335,15 @@ export function toRecipeInput(recipeName: string, content: RecipeVersionContent)
 /** The brewhouse a version is computed on: its equipment profile at the version's batch volume. */
 export function equipmentAtVolume(profile: EquipmentInput, batchVolumeL: number): EquipmentProfile {
   return { ...profile, batchVolumeL };
+}
+
+/**
+ * The content with every hop written as a share of the target IBU given its solved weight on
+ * this brewhouse; saved versions store the solved weights so lists, scaling and batches read them.
+ */
+export function resolveHopShares(recipeName: string, content: RecipeVersionContent, equipment: EquipmentProfile): RecipeVersionContent {
+  const shares = content.hops.map((h) => h.ibuSharePct);
+  if (shares.every((s) => s === undefined)) return content;
+  const solved = hopWeightsForIbuShares(toRecipeInput(recipeName, content), equipment, content.targets.ibu, shares);
+  return { ...content, hops: content.hops.map((h, i) => ({ ...h, weightG: solved[i]!.weightG })) };
 }

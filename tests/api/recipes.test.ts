@@ -95,6 +95,19 @@ describe('recipes API', () => {
     expect(list.body.find((r: { id: number }) => r.id === recipeId).lastBrewedAt).not.toBeNull();
   });
 
+  it('stores the solved weight of a hop written as a share of the target IBU', async () => {
+    const { recipeId, versionId } = await createSeasonal('Share test');
+    const content: RecipeVersionContent = { ...SEASONAL_CONTENT, hops: [{ ...SEASONAL_CONTENT.hops[0]!, ibuSharePct: 75, weightG: 0 }, SEASONAL_CONTENT.hops[1]!] };
+    const res = await t.as.head_brewer.patch(`/api/recipes/${recipeId}/versions/${versionId}`).send({ changeNote: 'Bittering by share', equipmentProfileId: equipmentIds.pilot, content });
+    expect(res.status).toBe(200);
+    const v = await t.as.head_brewer.get(`/api/recipes/${recipeId}/versions/${versionId}`);
+    // 75 % of the 24 IBU target (Tinseth inverted; shared/brewing/hop-shares.test.ts).
+    expect(v.body.computed.hops[0].ibu).toBeCloseTo(18, 9);
+    expect(v.body.version.content.hops[0]).toMatchObject({ ibuSharePct: 75 });
+    expect(v.body.version.content.hops[0].weightG).toBeCloseTo(v.body.computed.hops[0].weightG, 9);
+    expect(v.body.version.content.hops[0].weightG).toBeGreaterThan(0);
+  });
+
   it('compares two versions and lists exactly what changed', async () => {
     const { recipeId, versionId: v1 } = await createSeasonal('Compare test');
     const changed: RecipeVersionContent = {

@@ -22,7 +22,7 @@ const SECTION_NAMES: Record<string, string> = {
 
 function label(path: string, side: VersionDetail): string {
   const parts = path.split('.');
-  if (parts[0] === 'computed') return `Computed ${parts[1] === 'abvPct' ? 'ABV' : parts[1] === 'buGu' ? 'BU:GU' : parts[1] === 'strikeTempC' ? 'strike temperature (°C)' : parts[1]!.toUpperCase()}`;
+  if (parts[0] === 'computed') return `Computed ${parts[1] === 'abvPct' ? 'ABV' : parts[1] === 'buGu' ? 'BU:GU' : parts[1] === 'strikeTempC' ? 'strike temperature' : parts[1]!.toUpperCase()}`;
   if (parts[0] !== 'content') return parts[0] === 'changeNote' ? 'Change note' : 'Equipment';
   const [, section, ...rest] = parts;
   const words = rest
@@ -42,10 +42,10 @@ function label(path: string, side: VersionDetail): string {
 function fmt(path: string, v: Difference['a'], system: UnitSystem): string {
   if (v === null) return '—';
   if (typeof v !== 'number') return String(v);
+  if (path.endsWith('TempC')) return show(system, 'tempC', v);
   if (path.startsWith('computed.')) return String(v);
   if (path.endsWith('weightKg')) return showGrain(system, v);
   if (path.endsWith('weightG')) return showSmallWeight(system, v);
-  if (path.endsWith('TempC')) return show(system, 'tempC', v);
   if (path.endsWith('VolumeL')) return showVolume(system, v);
   if (path.endsWith('grams')) return `${v.toFixed(1)} g`;
   return String(Number(v.toFixed(4)));

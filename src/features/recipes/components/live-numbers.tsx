@@ -8,7 +8,7 @@ import {
   type ComputedRecipe,
   type EquipmentProfile,
 } from '../../../../shared/brewing';
-import { equipmentAtVolume, recipeContentSchema, toRecipeInput, type RecipeVersionContent } from '../../../../shared/schemas/recipes';
+import { equipmentAtVolume, recipeContentSchema, resolveHopShares, toRecipeInput, type RecipeVersionContent } from '../../../../shared/schemas/recipes';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
 import { show, showVolume } from '../../../lib/units';
 import { cx } from '../../../components/ui';
@@ -26,9 +26,10 @@ export function useLiveNumbers(name: string, content: unknown, equipment: Equipm
     if (!equipment) return { problem: 'Choose the equipment this recipe is written for.', warnings: [] };
     const parsed = recipeContentSchema.safeParse(JSON.parse(json));
     if (!parsed.success) return { problem: 'Some fields need attention; the numbers update once they are filled in.', warnings: [] };
-    const c: RecipeVersionContent = parsed.data;
     try {
-      const computed = computeRecipe(toRecipeInput(name || 'Recipe', c), equipmentAtVolume(equipment, c.targets.batchVolumeL));
+      const atVolume = equipmentAtVolume(equipment, parsed.data.targets.batchVolumeL);
+      const c: RecipeVersionContent = resolveHopShares(name || 'Recipe', parsed.data, atVolume);
+      const computed = computeRecipe(toRecipeInput(name || 'Recipe', c), atVolume);
       const warnings = [...computed.warnings, ...targetWarnings(computed, c.targets), ...(computed.water ? waterDoseWarnings(computed.water) : [])];
       return { computed, warnings };
     } catch (error) {

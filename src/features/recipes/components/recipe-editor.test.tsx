@@ -48,6 +48,16 @@ describe('recipe editor', () => {
     expect((hop.getByLabelText('Alpha (%)') as HTMLInputElement).value).toBe('8');
   });
 
+  it('solves a hop written as a share of the target IBU', () => {
+    renderEditor();
+    const hop = within(screen.getByRole('group', { name: 'Hop 1' }));
+    fireEvent.change(hop.getByLabelText('Amount by'), { target: { value: 'share' } });
+    fireEvent.change(hop.getByLabelText('Share of IBU (%)'), { target: { value: '50' } });
+    // Half of the 24 IBU target, from Tinseth inverted (shared/brewing/hop-shares.test.ts).
+    expect(hop.getByLabelText('Hop 1 IBU').textContent).toBe('12.0 IBU');
+    expect(hop.getByLabelText('Hop 1 solved weight').textContent).toMatch(/^= \d+\.\d\d oz$/);
+  });
+
   it('shows a message instead of stale numbers while a field is empty', () => {
     renderEditor();
     fireEvent.change(within(screen.getByRole('group', { name: 'Hop 1' })).getByLabelText('Weight (oz)'), { target: { value: '' } });

@@ -25,6 +25,7 @@ import type { EquipmentRow } from '../../library/api/equipment';
 import type { IngredientRow } from '../../library/api/ingredients';
 import { LiveNumbersPanel, useLiveNumbers } from './live-numbers';
 import { UnitField, asNumber } from './unit-field';
+import { show } from '../../../lib/units';
 
 type FormIn = z.input<typeof createRecipeSchema>;
 type Ctl = Control<FormIn, unknown, CreateRecipeInput>;
@@ -166,7 +167,7 @@ function GrainBill({ control, register, errors, system, disabled, ogNow, weights
   );
 }
 
-function Hops({ control, register, errors, system, disabled, ibus, fromLibrary, setValue }: Shared & { ibus?: number[] }) {
+function Hops({ control, register, errors, system, disabled, ibus, solvedWeights, targetIbu, fromLibrary, setValue }: Shared & { ibus?: number[]; solvedWeights?: number[]; targetIbu?: number }) {
   const hops = useFieldArray({ control, name: 'content.hops' });
   const values = useWatch({ control, name: 'content.hops' });
   return (
@@ -203,7 +204,28 @@ function Hops({ control, register, errors, system, disabled, ibus, fromLibrary, 
             ))}
             {use !== 'dryHop' && w('w-24', <TextField label={use === 'whirlpool' ? 'Stand (min)' : 'Minutes left'} type="number" step="any" {...register(`${p}.minutes`, asNumber())} error={errorAt(errors, `${p}.minutes`)} disabled={disabled} />)}
             {use === 'whirlpool' && w('w-32', <UnitField control={control} name={`${p}.whirlpoolTempC`} label="Stand temp" quantity="tempC" system={system} optional disabled={disabled} />)}
-            {w('w-32', <UnitField control={control} name={`${p}.weightG`} label="Weight" quantity="weightG" system={system} disabled={disabled} />)}
+            {w('w-40', (
+              <SelectField
+                label="Amount by"
+                value={values[i]?.ibuSharePct === undefined ? 'weight' : 'share'}
+                disabled={disabled || use === 'dryHop'}
+                onChange={(e) => {
+                  const share = e.target.value === 'share' && targetIbu && ibus?.[i] !== undefined ? Number(((ibus[i]! / targetIbu) * 100).toFixed(1)) : undefined;
+                  setValue(`${p}.ibuSharePct`, e.target.value === 'share' ? (share || 10) : undefined, { shouldValidate: true });
+                }}
+              >
+                <option value="weight">Weight</option>
+                <option value="share">Share of target IBU</option>
+              </SelectField>
+            ))}
+            {values[i]?.ibuSharePct === undefined
+              ? w('w-32', <UnitField control={control} name={`${p}.weightG`} label="Weight" quantity="weightG" system={system} disabled={disabled} />)
+              : w('w-32', <TextField label="Share of IBU (%)" type="number" step="any" {...register(`${p}.ibuSharePct`, asNumber(true))} error={errorAt(errors, `${p}.ibuSharePct`)} disabled={disabled} />)}
+            {values[i]?.ibuSharePct !== undefined && solvedWeights?.[i] !== undefined && (
+              <p className="min-h-touch pb-2 font-semibold tabular-nums" aria-label={`Hop ${i + 1} solved weight`}>
+                = {show(system, 'weightG', solvedWeights[i]!)}
+              </p>
+            )}
             <div className="min-h-touch pb-2 text-sm text-ink-500" aria-label={`Hop ${i + 1} IBU`}>
               {ibus?.[i] !== undefined ? `${ibus[i]!.toFixed(1)} IBU` : ''}
             </div>
@@ -502,7 +524,7 @@ export function RecipeEditor({ initial, equipment, library, system, canEdit, not
           </div>
         </Section>
         <GrainBill {...shared} ogNow={c?.og} weightsNow={c?.fermentables.map((f) => f.weightKg)} setBill={(bill) => setValue('content.grainBill', bill, { shouldValidate: true })} />
-        <Hops {...shared} ibus={c?.hops.map((h) => h.ibu)} />
+        <Hops {...shared} ibus={c?.hops.map((h) => h.ibu)} solvedWeights={c?.hops.map((h) => h.weightG)} targetIbu={values.content?.targets?.ibu as number | undefined} />
         <Mash {...shared} />
         <Water {...shared} setWater={(water) => setValue('content.water', water, { shouldValidate: true })} />
         <Additions {...shared} kind="adjuncts" amounts={Array.from({ length: adjunctCount }, (_, i) => measured(i))} />
