@@ -18,7 +18,6 @@ export const NAV_ITEMS: NavItem[] = [
   { to: '/team', label: 'Team', roles: ['head_brewer'] },
   // The taproom manager's Home is the taproom itself.
   { to: '/taproom', label: 'Taproom', roles: ['head_brewer', 'assistant_brewer'] },
-  { to: '/releases', label: 'Tasting & release', roles: ['head_brewer', 'assistant_brewer'] },
   { to: '/settings', label: 'Settings', roles: ALL },
 ];
 

@@ -2,8 +2,12 @@
 // parameter names, and a body each write route accepts. A new parameter name or a new write route with an id
 // fails the cross-brewery test until it is taught here, so no route can be left out.
 import type { RouteEntry } from '../../server/routes/define';
-import { User } from '../../server/models';
+import { randomUUID } from 'node:crypto';
+import { Attachment, Release, User } from '../../server/models';
 import type { TestBrewery } from './helpers';
+import { plannedBatch } from './batch-fixtures';
+import { addTastingNote } from '../../server/services/tasting';
+import { SHEET, TASTING_CONTENT } from './taproom-fixtures';
 
 /** Parameters that are not brewery-owned ids (unguessable secrets sent in links); the cross-brewery rule does not apply. */
 export const NOT_BREWERY_IDS = new Set(['token']);
@@ -24,11 +28,61 @@ export const ID_MAKERS: Record<string, Maker> = {
     });
     return user.id;
   },
+  // Taproom: a fermenting batch with a signed tasting note, a photo row and a beer on tap.
+  noteId: async (b) => {
+    const batch = await plannedBatch({ id: b.users.head_brewer.id, breweryId: b.brewery.id });
+    await batch.update({ status: 'fermenting' });
+    const u = b.users.head_brewer;
+    const { note } = await addTastingNote(
+      { id: u.id, breweryId: b.brewery.id, role: u.role, email: u.email, displayName: u.displayName },
+      batch.id,
+      { idempotencyKey: randomUUID(), content: TASTING_CONTENT },
+    );
+    return note.id;
+  },
+  attachmentId: async (b) => {
+    const batch = await plannedBatch({ id: b.users.head_brewer.id, breweryId: b.brewery.id });
+    const row = await Attachment.create({
+      breweryId: b.brewery.id,
+      batchId: batch.id,
+      tastingNoteId: null,
+      kind: 'photo',
+      contentType: 'image/jpeg',
+      byteSize: 1,
+      storageKey: `samples/${randomUUID()}.jpg`,
+      thumbnailKey: null,
+      displayName: 'sample.jpg',
+      uploadedById: b.users.head_brewer.id,
+    });
+    return row.id;
+  },
+  beerId: async (b) => {
+    const batch = await plannedBatch({ id: b.users.head_brewer.id, breweryId: b.brewery.id });
+    const { comingSoon: _, ...sheet } = SHEET;
+    const release = await Release.create({
+      ...sheet,
+      breweryId: b.brewery.id,
+      batchId: batch.id,
+      state: 'coming_soon',
+      og: null,
+      fg: null,
+      abvPct: null,
+      abvMethod: null,
+      ibu: null,
+      srm: null,
+      releasedAt: null,
+      releasedById: null,
+    });
+    return release.id;
+  },
 };
 
 /** A body each write route with a path id accepts (validated by its own schema in the tests). */
 export const VALID_BODIES: Record<string, (ids: Record<string, number>) => unknown> = {
   'PATCH /api/team/:userId': () => ({ role: 'assistant_brewer' }),
+  'POST /api/batches/:batchId/tasting-notes': () => ({ idempotencyKey: randomUUID(), content: TASTING_CONTENT }),
+  'PUT /api/batches/:batchId/release': () => SHEET,
+  'POST /api/batches/:batchId/release/publish': () => ({ confirmedOg: 1.05, confirmedFg: 1.01 }),
 };
 
 export const routeKey = (route: RouteEntry) => `${route.method.toUpperCase()} ${route.path}`;

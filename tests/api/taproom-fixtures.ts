@@ -4,6 +4,8 @@ import { expect } from 'vitest';
 import { plannedBatch, writeHeaders } from './batch-fixtures';
 import type { TestBrewery } from './helpers';
 import type { Batch } from '../../server/models';
+import type { TastingNoteContent } from '../../shared/schemas/tasting';
+import type { ReleaseSheet } from '../../shared/schemas/taproom';
 
 export interface BrewedOptions {
   og: number;
@@ -53,7 +55,7 @@ export async function brewedBatch(t: TestBrewery, options: BrewedOptions): Promi
 }
 
 /** A release sheet the schema accepts. */
-export const SHEET = {
+export const SHEET: ReleaseSheet = {
   beerName: 'Breakwater Pale',
   style: 'American pale ale',
   description: 'Bright and piney with a soft malt middle; a harbour-side pint for long evenings.',
@@ -63,4 +65,15 @@ export const SHEET = {
   allergens: ['gluten'],
   photoAttachmentId: null,
   comingSoon: false,
+};
+
+/** A tasting note's content the schema accepts. */
+export const TASTING_CONTENT: TastingNoteContent = {
+  appearance: { colour: 'deep gold', clarity: 'clear', head: 'good' },
+  aroma: 'Pine resin and grapefruit peel',
+  flavour: 'Firm bitterness, bready malt, dry finish',
+  mouthfeel: { body: 'medium', carbonation: 'medium', notes: '' },
+  overall: 'On target; ready to package',
+  offFlavours: [],
+  score: 4,
 };

@@ -6,7 +6,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { routeTable } from '../../server/routes/define';
 import { abv, abvBalling, abvSimple } from '../../shared/brewing';
 import { createTestBrewery, type TestBrewery } from './helpers';
-import { brewedBatch, SHEET } from './taproom-fixtures';
+import { brewedBatch, SHEET, TASTING_CONTENT } from './taproom-fixtures';
 import type { Batch } from '../../server/models';
 
 let t: TestBrewery;
@@ -37,7 +37,7 @@ beforeAll(async () => {
   await t.as.head_brewer.put(`/api/batches/${conditioning.id}/release`).send({ ...SHEET, beerName: 'Foghorn Lager', style: 'Helles', comingSoon: true });
   await t.as.head_brewer
     .post(`/api/batches/${conditioning.id}/tasting-notes`)
-    .send({ idempotencyKey: randomUUID(), content: { appearance: { colour: 'pale straw', clarity: 'brilliant', head: 'lasting' }, aroma: 'Bread crust', flavour: 'Clean, soft bitterness', mouthfeel: { body: 'light', carbonation: 'lively' }, overall: 'Crisp', score: 4.5 } });
+    .send({ idempotencyKey: randomUUID(), content: { ...TASTING_CONTENT, aroma: 'Bread crust', score: 4.5 } });
 });
 
 describe('releasing a batch', () => {

@@ -7,7 +7,7 @@ import { sequelize } from '../../server/config/database';
 import { TastingNote } from '../../server/models';
 import { createTestBrewery, type TestBrewery } from './helpers';
 import { plannedBatch } from './batch-fixtures';
-import { brewedBatch } from './taproom-fixtures';
+import { brewedBatch, TASTING_CONTENT } from './taproom-fixtures';
 import type { Batch } from '../../server/models';
 
 let t: TestBrewery;
@@ -15,16 +15,7 @@ let other: TestBrewery;
 let batch: Batch;
 const owner = new Sequelize(process.env.KW_OWNER_DATABASE_URL!.replace(/^mysql:/, 'mariadb:'), { dialect: 'mariadb', logging: false });
 
-const content = (overrides: Record<string, unknown> = {}) => ({
-  appearance: { colour: 'deep gold', clarity: 'clear', head: 'good' },
-  aroma: 'Pine resin and grapefruit peel',
-  flavour: 'Firm bitterness, bready malt, dry finish',
-  mouthfeel: { body: 'medium', carbonation: 'medium', notes: '' },
-  overall: 'On target; ready to package',
-  offFlavours: [],
-  score: 4,
-  ...overrides,
-});
+const content = (overrides: Record<string, unknown> = {}) => ({ ...TASTING_CONTENT, ...overrides });
 const note = (overrides: Record<string, unknown> = {}) => ({ idempotencyKey: randomUUID(), content: content(), ...overrides });
 
 beforeAll(async () => {

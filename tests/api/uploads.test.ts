@@ -1,11 +1,13 @@
 // Photos and lab sheets through the fake S3 server: upload, list, download, the size cap, types from
 // the bytes, generated keys, thumbnails, and who may fetch what.
+import { randomUUID } from 'node:crypto';
 import { beforeAll, describe, expect, it } from 'vitest';
 import sharp from 'sharp';
 import { HeadObjectCommand, S3Client } from '@aws-sdk/client-s3';
 import { Attachment } from '../../server/models';
 import { createTestBrewery, type TestBrewery } from './helpers';
 import { plannedBatch } from './batch-fixtures';
+import { TASTING_CONTENT } from './taproom-fixtures';
 import type { Batch } from '../../server/models';
 
 let t: TestBrewery;
@@ -98,6 +100,26 @@ describe('uploading to a batch', () => {
   });
 });
 
+describe('attaching to a tasting note', () => {
+  it("attaches a lab sheet to one of the batch's notes, and refuses a note of another batch", async () => {
+    const fermenting = await plannedBatch({ id: t.users.head_brewer.id, breweryId: t.brewery.id });
+    await fermenting.update({ status: 'fermenting' });
+    const note = await t.as.head_brewer.post(`/api/batches/${fermenting.id}/tasting-notes`).send({ idempotencyKey: randomUUID(), content: TASTING_CONTENT });
+    expect(note.status).toBe(201);
+    const res = await t.as.head_brewer
+      .post(`/api/batches/${fermenting.id}/attachments`)
+      .field('tastingNoteId', String(note.body.id))
+      .attach('file', PDF, { filename: 'lab.pdf', contentType: 'application/pdf' });
+    expect(res.status, JSON.stringify(res.body)).toBe(201);
+    expect(res.body.tastingNoteId).toBe(note.body.id);
+    const wrong = await t.as.head_brewer
+      .post(`/api/batches/${batch.id}/attachments`)
+      .field('tastingNoteId', String(note.body.id))
+      .attach('file', PDF, { filename: 'lab.pdf', contentType: 'application/pdf' });
+    expect(wrong.status).toBe(404);
+  });
+});
+
 describe('refusing uploads', () => {
   it('answers 413 to a file over 15 MB, and stores nothing', async () => {
     const before = await Attachment.count({ where: { batchId: batch.id } });
@@ -122,8 +144,9 @@ describe('refusing uploads', () => {
   });
 
   it('refuses a request with no file, or an empty one, with a clear message', async () => {
-    const none = await t.as.head_brewer.post(`/api/batches/${batch.id}/attachments`).field('tastingNoteId', '');
+    const none = await t.as.head_brewer.post(`/api/batches/${batch.id}/attachments`).send({});
     expect(none.status).toBe(400);
+    expect(none.body.error.message).toMatch(/Choose a file/);
     const empty = await t.as.head_brewer
       .post(`/api/batches/${batch.id}/attachments`)
       .attach('file', Buffer.alloc(0), { filename: 'empty.png', contentType: 'image/png' });

@@ -59,7 +59,7 @@ export function BriefingSheetPage() {
               Batch {b.batchNumber} · {when} · {me.brewery.name}
             </p>
           </div>
-          {b.photo && <img src={b.photo.url} alt={`${b.beerName} in the glass`} className="h-40 w-40 rounded-lg object-cover" />}
+          {b.photo && <img src={b.photo.thumbnailUrl} alt={`${b.beerName} in the glass`} className="h-40 w-40 rounded-lg object-cover" />}
         </header>
 
         <div className="grid grid-cols-3 gap-3">

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { useParams } from 'react-router-dom';
-import { useForm } from 'react-hook-form';
+import { useController, useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Button, Card, Caution, Dialog, ErrorState, Loading, PageHeader, SelectField, Stat, TextAreaField, TextField, useToast } from '../../../components/ui';
 import { useCurrentUser } from '../../../app/current-user';
@@ -49,7 +49,9 @@ function SheetForm({ batchId, detail }: { batchId: number; detail: ReleaseDetail
   const photos = useAttachments(batchId).data?.filter((a) => a.kind === 'photo') ?? [];
   const [banner, setBanner] = useState<string | null>(null);
   const form = useForm<ReleaseSheetInput, unknown, ReleaseSheet>({ resolver: zodResolver(releaseSheetSchema), defaultValues: defaults(detail) });
-  const { register, handleSubmit, formState, setError, reset } = form;
+  const { register, handleSubmit, formState, setError, reset, control } = form;
+  // Radio values are strings; the sheet holds the attachment's id (or null), so the group is controlled.
+  const photo = useController({ control, name: 'photoAttachmentId' });
   const errors = formState.errors;
 
   const onSubmit = handleSubmit(async (sheet) => {
@@ -115,14 +117,16 @@ function SheetForm({ batchId, detail }: { batchId: number; detail: ReleaseDetail
         <fieldset>
           <legend className="text-sm font-semibold text-ink-700">Photo for the taproom</legend>
           <div className="mt-1 flex flex-wrap gap-3">
-            <label className="flex min-h-touch items-center gap-2">
-              <input type="radio" value="" {...register('photoAttachmentId', { setValueAs: (v) => (v ? Number(v) : null) })} className="h-5 w-5" />
-              No photo
-            </label>
-            {photos.map((p) => (
-              <label key={p.id} className="flex min-h-touch items-center gap-2">
-                <input type="radio" value={p.id} {...register('photoAttachmentId', { setValueAs: (v) => (v ? Number(v) : null) })} className="h-5 w-5" />
-                <img src={p.thumbnailUrl ?? p.url} alt={p.displayName} className="h-12 w-12 rounded object-cover" />
+            {[null, ...photos].map((p) => (
+              <label key={p?.id ?? 'none'} className="flex min-h-touch items-center gap-2">
+                <input
+                  type="radio"
+                  name={photo.field.name}
+                  checked={photo.field.value === (p?.id ?? null)}
+                  onChange={() => photo.field.onChange(p?.id ?? null)}
+                  className="h-5 w-5"
+                />
+                {p ? <img src={p.thumbnailUrl ?? p.url} alt={p.displayName} className="h-12 w-12 rounded object-cover" /> : 'No photo'}
               </label>
             ))}
           </div>
@@ -143,6 +147,7 @@ function SheetForm({ batchId, detail }: { batchId: number; detail: ReleaseDetail
 }
 
 function ReleaseNumbers({ batchId, detail, sheetSaved }: { batchId: number; detail: ReleaseDetail; sheetSaved: boolean }) {
+  const me = useCurrentUser();
   const publish = usePublishRelease(batchId);
   const toast = useToast();
   const [confirming, setConfirming] = useState(false);
@@ -190,7 +195,10 @@ function ReleaseNumbers({ batchId, detail, sheetSaved }: { batchId: number; deta
       {onTap ? (
         <p className="rounded-lg bg-cellar-100 p-3 font-semibold text-cellar-800">
           On tap{detail.releasedBy ? `, released by ${detail.releasedBy}` : ''}
-          {detail.releasedAt ? ` on ${new Date(detail.releasedAt).toLocaleString()}` : ''}.
+          {detail.releasedAt
+            ? ` on ${new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit', timeZone: me.brewery.timeZone, timeZoneName: 'short' }).format(new Date(detail.releasedAt))}`
+            : ''}
+          .
         </p>
       ) : (
         <>

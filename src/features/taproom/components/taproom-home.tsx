@@ -14,10 +14,8 @@ function BeerCard({ beer }: { beer: TaproomBeer }) {
   const tasting = tastingLine(beer.tasting);
   return (
     <Card className="flex flex-col gap-3" aria-label={beer.beerName}>
+      {beer.photo && <img src={beer.photo.thumbnailUrl} alt={`${beer.beerName} in the glass`} className="-mx-5 -mt-5 h-40 w-[calc(100%+2.5rem)] max-w-none rounded-t-xl object-cover" />}
       <div className="flex items-start gap-4">
-        {beer.photo ? (
-          <img src={beer.photo.thumbnailUrl} alt={`${beer.beerName} in the glass`} className="h-24 w-24 flex-none rounded-lg object-cover" />
-        ) : null}
         <div className="min-w-0 flex-1">
           <h3 className="text-xl font-bold text-ink-900">{beer.beerName}</h3>
           <p className="text-ink-500">
@@ -121,9 +119,16 @@ export function TaproomHome() {
         title="Taproom"
         subtitle={`${me.brewery.name} — beers on tap and coming soon`}
         actions={
-          <Link to="/taproom/board" className={linkButton}>
-            Bar screen
-          </Link>
+          <>
+            {me.role !== 'taproom_manager' && (
+              <Link to="/releases" className={linkButton}>
+                Tasting and release
+              </Link>
+            )}
+            <Link to="/taproom/board" className={linkButton}>
+              Bar screen
+            </Link>
+          </>
         }
       />
       <form role="search" className="mb-6 grid gap-3 sm:grid-cols-3" onSubmit={(e) => e.preventDefault()}>

@@ -155,7 +155,7 @@ function NoteCard({ note, mine, onCorrect, timeZone }: { note: TastingNote; mine
   const s = note.signature;
   const corrected = note.correctedBy.length > 0;
   const c = note.content;
-  const signedAt = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short', timeZone, timeZoneName: 'short' }).format(new Date(s.signedAt));
+  const signedAt = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit', timeZone, timeZoneName: 'short' }).format(new Date(s.signedAt));
   return (
     <Card aria-label={`Tasting note ${note.id}`} className={cx(corrected && 'opacity-70')}>
       <div className="flex flex-wrap items-start justify-between gap-3">

@@ -1,0 +1,123 @@
+// The head brewer releases a packaged batch with a description and a photo; the taproom manager finds it
+// on their home screen and opens its briefing sheet. Screenshots of the taproom at tablet and desktop sizes.
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import path from 'node:path';
+import sharp from 'sharp';
+import type { BrowserContext, Page } from 'playwright-core';
+import { openBrowser, signIn, SCREENSHOT_DIR } from './browser';
+import { DEMO_PEOPLE } from '../../server/seed/demo';
+import { abv } from '../../shared/brewing';
+
+const maren = DEMO_PEOPLE.find((p) => p.role === 'head_brewer')!;
+const priya = DEMO_PEOPLE.find((p) => p.role === 'taproom_manager')!;
+const DESCRIPTION = 'Roasted quince and golden beet over a soft wheat base: orchard fruit on the nose, a dry, gently earthy finish.';
+
+let brewer: BrowserContext;
+let taproom: BrowserContext;
+let beerName: string;
+
+const shot = (page: Page, name: string) => page.screenshot({ path: path.join(SCREENSHOT_DIR, name), fullPage: true });
+
+beforeAll(async () => {
+  brewer = await openBrowser();
+  taproom = await openBrowser();
+});
+afterAll(async () => {
+  await brewer?.close();
+  await taproom?.close();
+});
+
+describe('releasing a beer to the taproom (Chromium, 1024×768)', () => {
+  it('the head brewer releases a packaged batch with a description and a photo', async () => {
+    const page = await brewer.newPage();
+    await signIn(page, maren.email);
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Taproom' }).click();
+    await page.getByRole('link', { name: 'Tasting and release' }).click();
+    // The demo brewery has one packaged batch whose release is not started.
+    const row = page.getByRole('row').filter({ hasText: 'Packaged' }).filter({ hasText: 'Not started' });
+    await expect.poll(() => row.count()).toBe(1);
+    beerName = (await row.getByRole('cell').nth(1).textContent())!.trim();
+    await row.getByRole('link', { name: /^Release / }).click();
+    await page.getByRole('heading', { level: 1, name: `Release ${beerName}` }).waitFor();
+
+    const photo = await sharp({ create: { width: 1200, height: 900, channels: 3, background: '#c47f2c' } })
+      .composite([{ input: Buffer.from('<svg width="1200" height="900"><rect x="420" y="150" width="360" height="620" rx="40" fill="#f3e3b5"/></svg>') }])
+      .jpeg()
+      .toBuffer();
+    await page.getByLabel('Add a photo or lab sheet').setInputFiles({ name: 'low-tide-pour.jpg', mimeType: 'image/jpeg', buffer: photo });
+    await page.getByRole('radio', { name: 'low-tide-pour.jpg' }).check();
+
+    await page.getByLabel('Taproom description').fill(DESCRIPTION);
+    await page.getByLabel('Serving notes').fill('Tulip glass, leave room for the aroma.');
+    await page.getByRole('button', { name: 'Save release sheet' }).click();
+    await page.getByText('Draft (not shown to the taproom)').waitFor();
+
+    // The ABV on screen is the one shared/brewing computes from the logged OG and FG shown beside it.
+    const stat = async (label: string) => (await page.getByText(label, { exact: true }).locator('..').textContent())!.slice(label.length);
+    const og = Number(await stat('OG (measured)'));
+    const fg = Number(await stat('FG (last reading)'));
+    expect(og).toBeGreaterThan(fg);
+    expect(await stat('ABV')).toBe(`${abv(og, fg).toFixed(1)}%`);
+
+    await page.getByRole('button', { name: 'Release to the taproom' }).click();
+    const dialog = page.getByRole('dialog', { name: 'Confirm the final numbers' });
+    await expect.poll(() => dialog.textContent()).toContain(`ABV ${abv(og, fg).toFixed(1)} %`);
+    await dialog.getByRole('button', { name: 'Confirm and release' }).click();
+    await page.getByText(`On tap, released by ${maren.displayName}`).waitFor();
+    await shot(page, 'taproom-release-page-1024.png');
+  });
+
+  it('the taproom manager finds it on their home screen and opens its briefing sheet', async () => {
+    const page = await taproom.newPage();
+    const scripts: string[] = [];
+    page.on('request', (r) => {
+      if (r.resourceType() === 'script') scripts.push(new URL(r.url()).pathname);
+    });
+    await signIn(page, priya.email);
+    await page.getByRole('heading', { level: 1, name: 'Taproom' }).waitFor();
+    const onTap = page.getByRole('region', { name: 'On tap' });
+    const card = onTap.getByLabel(beerName, { exact: true });
+    await card.getByRole('heading', { name: beerName }).waitFor();
+    await expect.poll(() => card.textContent()).toContain(DESCRIPTION);
+    // The photo the head brewer chose, served to the taproom as a thumbnail.
+    const img = card.getByRole('img', { name: `${beerName} in the glass` });
+    await expect.poll(() => img.evaluate((el: HTMLImageElement) => el.complete && el.naturalWidth)).toBe(480);
+    await shot(page, 'taproom-home-1024.png');
+
+    await page.getByLabel('Search beers').fill(beerName.split(' ').at(-1)!);
+    await expect.poll(() => onTap.getByRole('heading', { level: 3 }).allTextContents()).toEqual([beerName]);
+    await card.getByRole('link', { name: 'Staff briefing sheet' }).click();
+    const sheet = page.getByRole('article', { name: `Briefing: ${beerName}` });
+    await sheet.getByRole('heading', { level: 2, name: beerName }).waitFor();
+    await expect.poll(() => sheet.textContent()).toContain(DESCRIPTION);
+    await expect.poll(() => sheet.textContent()).toContain('Tulip glass, leave room for the aroma.');
+    await expect.poll(() => sheet.textContent()).toMatch(/On tap since/);
+    await expect.poll(() => sheet.getByRole('img', { name: `${beerName} in the glass` }).evaluate((el: HTMLImageElement) => el.complete && el.naturalWidth > 0)).toBe(true);
+    await shot(page, 'taproom-briefing-1024.png');
+    // As printed: the app's menu and the page's buttons stay off the paper.
+    await page.emulateMedia({ media: 'print' });
+    await expect.poll(() => page.getByRole('button', { name: 'Print' }).isVisible()).toBe(false);
+    await shot(page, 'taproom-briefing-print.png');
+    await page.emulateMedia({ media: 'screen' });
+
+    // The taproom screens are their own chunks: the recipe editor is never downloaded.
+    expect(scripts.some((s) => /taproom-home-/.test(s))).toBe(true);
+    expect(scripts.filter((s) => /editor-page-|recipe-editor/.test(s))).toEqual([]);
+  });
+
+  it('the bar screen and the taproom home read well at desktop size', async () => {
+    const desktop = await openBrowser({ width: 1440, height: 900 });
+    try {
+      const page = await desktop.newPage();
+      await signIn(page, priya.email);
+      await page.getByRole('region', { name: 'On tap' }).getByRole('heading', { name: beerName, exact: true }).waitFor();
+      await shot(page, 'taproom-home-desktop.png');
+      await page.getByRole('link', { name: 'Bar screen' }).click();
+      await page.getByRole('heading', { level: 1, name: /^On tap at / }).waitFor();
+      await page.getByText(beerName, { exact: true }).waitFor();
+      await shot(page, 'taproom-bar-screen-desktop.png');
+    } finally {
+      await desktop.close();
+    }
+  });
+});
