@@ -239,7 +239,7 @@ export function TastingPage() {
   return (
     <>
       <PageHeader title="Tasting notes" subtitle="Each taster signs their own note. The taproom sees the average score and the latest aroma and flavour." />
-      <div className="grid gap-6 lg:grid-cols-2">
+      <div className="grid gap-6 xl:grid-cols-2">
         <NoteForm key={`${formKey}-${correcting?.id ?? 'new'}`} batchId={batchId} correcting={correcting} onDone={done} />
         <section aria-label="Signed notes" className="space-y-4">
           {notes.isPending ? (
