@@ -1,6 +1,6 @@
 import { useNavigate, useParams } from 'react-router-dom';
 import type { CreateRecipeInput } from '../../../../shared/schemas/recipes';
-import { ErrorState, Loading, PageHeader, Caution } from '../../../components/ui';
+import { Button, Caution, EmptyState, ErrorState, Loading, PageHeader } from '../../../components/ui';
 import { useCurrentUser } from '../../../app/current-user';
 import { ApiError } from '../../../lib/api-client';
 import { useToast } from '../../../components/ui';
@@ -93,7 +93,9 @@ export function NewRecipePage() {
   const first = equipment.data[0];
   if (!first) {
     return (
-      <ErrorState error={new Error('Add an equipment profile first: a recipe is written for a brewhouse.')} />
+      <EmptyState title="Add your brewhouse first" action={<Link to="/library"><Button>Add equipment</Button></Link>}>
+        A recipe is written for a brewhouse: its efficiency and losses turn the recipe into weights and volumes.
+      </EmptyState>
     );
   }
   return (
