@@ -119,6 +119,14 @@ describe('brew day offline (Chromium, 1024×768)', () => {
     await page.getByRole('button', { name: 'Sign as reviewed' }).click();
     await eventually(() => page.getByTestId('signature').textContent()).toContain(`Reviewed by ${maren.displayName}`);
     expect(await page.getByTestId('signature').textContent()).toContain('Signature valid');
+    await page.evaluate(() => window.scrollTo(0, 0));
     await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'brew-day-signed-1024.png'), fullPage: true });
+
+    // The printable record carries the signature and a QR code that opens this batch on a tablet.
+    await page.getByRole('link', { name: 'Record and QR labels' }).click();
+    await eventually(() => page.getByRole('img', { name: /^QR code: Batch / }).count()).toBe(1);
+    expect(await page.getByTestId('signature').textContent()).toContain(`Reviewed by ${maren.displayName}`);
+    await page.emulateMedia({ media: 'print' });
+    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'batch-record-print.png'), fullPage: true });
   });
 });

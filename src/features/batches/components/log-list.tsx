@@ -41,7 +41,7 @@ export function LogList({ batchId, entries, system, timeZone }: { batchId: numbe
                 </p>
               </div>
               {(e.kind === 'step' || e.kind === 'measurement' || e.kind === 'note') && (
-                <Button variant="quiet" onClick={() => setCorrecting(e)} aria-label={`Correct entry ${e.sequence}`}>
+                <Button variant="quiet" className="no-print" onClick={() => setCorrecting(e)} aria-label={`Correct entry ${e.sequence}`}>
                   Correct
                 </Button>
               )}
