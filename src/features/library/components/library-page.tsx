@@ -127,11 +127,11 @@ export function LibraryPage() {
               {equipment.data.map((e) => (
                 <tr key={e.id}>
                   <Td className="font-semibold">{e.name}</Td>
-                  <Td>{showVolume(system, e.batchVolumeL)}</Td>
-                  <Td>{(e.brewhouseEfficiency * 100).toFixed(0)} %</Td>
-                  <Td>{show(system, 'volumeL', e.boilOffLPerHour)}/h</Td>
-                  <Td>{show(system, 'volumeL', e.mashTunDeadSpaceL)} / {show(system, 'volumeL', e.kettleDeadSpaceL)} / {show(system, 'volumeL', e.trubChillerLossL)}</Td>
-                  <Td>{showVolume(system, e.maxMashTunVolumeL)} / {showVolume(system, e.maxKettleVolumeL)}</Td>
+                  <Td className="whitespace-nowrap">{showVolume(system, e.batchVolumeL)}</Td>
+                  <Td className="whitespace-nowrap">{(e.brewhouseEfficiency * 100).toFixed(0)} %</Td>
+                  <Td className="whitespace-nowrap">{show(system, 'volumeL', e.boilOffLPerHour)}/h</Td>
+                  <Td>{[e.mashTunDeadSpaceL, e.kettleDeadSpaceL, e.trubChillerLossL].map((l) => <span key={l} className="mr-2 inline-block whitespace-nowrap">{show(system, 'volumeL', l)}</span>)}</Td>
+                  <Td className="whitespace-nowrap">{showVolume(system, e.maxMashTunVolumeL)} / {showVolume(system, e.maxKettleVolumeL)}</Td>
                   {canEdit && <Td><Button variant="quiet" onClick={() => setEditingEquipment(e)}>Edit</Button></Td>}
                 </tr>
               ))}

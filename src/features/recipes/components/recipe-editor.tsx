@@ -564,6 +564,7 @@ export function RecipeEditor({ initial, equipment, library, system, canEdit, not
         <Card>
           <LiveNumbersPanel live={live} system={system} />
         </Card>
+        {!canEdit && <p className="rounded-lg bg-mist-100 p-3 text-sm text-ink-700">Read only: the head brewer edits recipes. The brew sheet is one tap away above.</p>}
         {canEdit && (
           <Card className="space-y-3">
             {notice}

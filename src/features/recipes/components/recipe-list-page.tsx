@@ -26,12 +26,12 @@ const columns = [
   col.accessor('name', {
     header: 'Name',
     cell: (c) => (
-      <Link to={`/recipes/${c.row.original.id}`} className="flex min-h-touch items-center font-semibold text-cellar-700 underline-offset-2 hover:underline">
+      <Link to={`/recipes/${c.row.original.id}`} className="flex min-h-touch items-center whitespace-normal font-semibold text-cellar-700 underline-offset-2 hover:underline">
         {c.getValue()}
       </Link>
     ),
   }),
-  col.accessor('style', { header: 'Style' }),
+  col.accessor('style', { header: 'Style', cell: (c) => <span className="whitespace-normal">{c.getValue()}</span> }),
   col.accessor('latestVersion', { header: 'Version', cell: (c) => `v${c.getValue()}` }),
   col.accessor('og', { header: 'OG', cell: (c) => c.getValue().toFixed(3) }),
   col.accessor('ibu', { header: 'IBU', cell: (c) => c.getValue().toFixed(0) }),
@@ -123,7 +123,7 @@ export function RecipeListPage() {
               {table.getRowModel().rows.map((r) => (
                 <tr key={r.id}>
                   {r.getVisibleCells().map((c) => (
-                    <Td key={c.id} className="py-1">{flexRender(c.column.columnDef.cell, c.getContext())}</Td>
+                    <Td key={c.id} className="whitespace-nowrap py-1">{flexRender(c.column.columnDef.cell, c.getContext())}</Td>
                   ))}
                 </tr>
               ))}
