@@ -13,6 +13,8 @@ import { UPLOAD_MAX_BYTES, type AttachmentView } from '../../shared/schemas/tapr
 import { findBatch } from './batches';
 
 const THUMBNAIL_PX = 480;
+/** Refuse pictures larger than this (pixels) before decoding: a small file can unpack to gigabytes. */
+const MAX_INPUT_PIXELS = 100_000_000;
 
 /** Types accepted, as detected from the file's bytes (never from its name or the browser's claim). */
 const ACCEPTED: Record<string, { kind: AttachmentKind; extension: string }> = {
@@ -84,13 +86,13 @@ export async function uploadAttachment(
   let thumbnail: Buffer | null = null;
   if (accepted.kind === 'photo') {
     try {
-      thumbnail = await sharp(file.buffer)
+      thumbnail = await sharp(file.buffer, { limitInputPixels: MAX_INPUT_PIXELS })
         .rotate()
         .resize(THUMBNAIL_PX, THUMBNAIL_PX, { fit: 'inside', withoutEnlargement: true })
         .webp({ quality: 80 })
         .toBuffer();
     } catch {
-      throw badRequest('This picture could not be read. It may be damaged; try exporting it again.', { file: 'Damaged picture' });
+      throw badRequest('This picture could not be read: it may be damaged or over 100 megapixels. Try exporting it again.', { file: 'Unreadable picture' });
     }
     thumbnailKey = key.replace(/\.\w+$/, '.thumb.webp');
   }
