@@ -64,7 +64,7 @@ export function BatchCellarPage() {
               FG ≈ {prediction.predictedFg.toFixed(3)} by {date.format(prediction.predictedAtMs)}
             </div>
           ) : (
-            <div className="text-sm text-ink-700">Needs three falling readings.</div>
+            <div className="text-sm text-ink-700">Not enough of a curve yet: it needs three falling readings over some hours.</div>
           )}
         </div>
       </div>

@@ -57,8 +57,8 @@ export function FermentationChart({ readings, actions, plan, prediction, unitSys
             labelFormatter={(t) => timeFormat.format(Number(t))}
             formatter={(value, name) => (name === 'Temperature' ? [`${value} ${temp.unit}`, name] : [Number(value).toFixed(3), name])}
           />
-          <ReferenceLine yAxisId="sg" y={plan.plannedFg} stroke={GRAVITY} strokeDasharray="6 4" label={{ value: `Planned FG ${plan.plannedFg.toFixed(3)}`, position: 'insideBottomLeft', fill: GRAVITY, fontSize: 12, fontWeight: 600 }} />
-          <ReferenceLine yAxisId="sg" y={trigger} stroke="#c22a2a" strokeDasharray="2 3" label={{ value: `D-rest at ${trigger.toFixed(3)}`, position: 'insideTopRight', fill: '#9b1c1c', fontSize: 12, fontWeight: 600 }} />
+          <ReferenceLine yAxisId="sg" y={plan.plannedFg} stroke={GRAVITY} strokeDasharray="6 4" label={{ value: `Planned FG ${plan.plannedFg.toFixed(3)}`, position: 'insideTopLeft', fill: GRAVITY, fontSize: 12, fontWeight: 600 }} />
+          <ReferenceLine yAxisId="sg" y={trigger} stroke="#c22a2a" strokeDasharray="2 3" label={{ value: `D-rest at ${trigger.toFixed(3)}`, position: 'insideBottomRight', fill: '#9b1c1c', fontSize: 12, fontWeight: 600 }} />
           {actions.map((a) => (
             <ReferenceLine key={a.logEntryId} yAxisId="sg" x={Date.parse(a.at)} stroke="#55655f" label={{ value: CELLAR_ACTION_LABELS[a.action], angle: -90, position: 'insideTopRight', fill: '#2d3a36', fontSize: 11 }} />
           ))}
