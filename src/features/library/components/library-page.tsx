@@ -130,7 +130,7 @@ export function LibraryPage() {
                   <Td className="whitespace-nowrap">{showVolume(system, e.batchVolumeL)}</Td>
                   <Td className="whitespace-nowrap">{(e.brewhouseEfficiency * 100).toFixed(0)} %</Td>
                   <Td className="whitespace-nowrap">{show(system, 'volumeL', e.boilOffLPerHour)}/h</Td>
-                  <Td>{[e.mashTunDeadSpaceL, e.kettleDeadSpaceL, e.trubChillerLossL].map((l) => <span key={l} className="mr-2 inline-block whitespace-nowrap">{show(system, 'volumeL', l)}</span>)}</Td>
+                  <Td>{[e.mashTunDeadSpaceL, e.kettleDeadSpaceL, e.trubChillerLossL].map((l, i) => <span key={i} className="mr-2 inline-block whitespace-nowrap">{show(system, 'volumeL', l)}</span>)}</Td>
                   <Td className="whitespace-nowrap">{showVolume(system, e.maxMashTunVolumeL)} / {showVolume(system, e.maxKettleVolumeL)}</Td>
                   {canEdit && <Td><Button variant="quiet" onClick={() => setEditingEquipment(e)}>Edit</Button></Td>}
                 </tr>
