@@ -1,7 +1,7 @@
 // Planning a batch: a recipe version on an equipment profile or at a typed volume, the plan frozen into the batch.
 import { beforeAll, describe, expect, it } from 'vitest';
 import { sequelize } from '../../server/config/database';
-import { EquipmentProfile, RecipeVersion } from '../../server/models';
+import { EquipmentProfile, RecipeVersion, Vessel } from '../../server/models';
 import { seedRecipes } from '../../server/seed/recipes';
 import { computeRecipe } from '../../shared/brewing';
 import { createTestBrewery, type TestBrewery } from './helpers';
@@ -37,6 +37,15 @@ describe('planning a batch', () => {
     expect(second.body.plan.equipment.batchVolumeL).toBe(500);
     const nextYear = await t.as.head_brewer.post('/api/batches').send({ recipeVersionId: version.id, batchVolumeL: 500, brewDate: '2027-01-04' });
     expect(nextYear.body.number).toBe('2027-001');
+  });
+
+  it('puts the batch into the chosen fermenter; a fermenter holding a batch answers 409', async () => {
+    const fv = await Vessel.create({ breweryId: t.brewery.id, name: 'FV-test', type: 'fermenter', capacityL: 1400, ratedPressureKpa: 103, status: 'clean', currentBatchId: null });
+    const first = await t.as.head_brewer.post('/api/batches').send({ recipeVersionId: version.id, brewDate: '2026-12-11', fermenterId: fv.id });
+    expect(first.body.vessel).toEqual({ id: fv.id, name: 'FV-test' });
+    const second = await t.as.head_brewer.post('/api/batches').send({ recipeVersionId: version.id, brewDate: '2026-12-12', fermenterId: fv.id });
+    expect(second.status).toBe(409);
+    expect(second.body.error.message).toMatch(/FV-test already holds batch/);
   });
 
   it('later changes to the recipe never change a planned batch', async () => {
