@@ -9,6 +9,7 @@ import { vesselsRouter, cellarRouter } from './cellar';
 import { tastingRouter } from './tasting';
 import { batchAttachmentsRouter, attachmentsRouter } from './attachments';
 import { taproomRouter, releaseRouter } from './taproom';
+import { reportsRouter } from './reports';
 
 /** Every API router and where it is mounted. Each area adds its line here. */
 export const apiRouters: [string, Router][] = [
@@ -26,4 +27,5 @@ export const apiRouters: [string, Router][] = [
   ['/api/batches', releaseRouter],
   ['/api/attachments', attachmentsRouter],
   ['/api/taproom', taproomRouter],
+  ['/api/reports', reportsRouter],
 ];

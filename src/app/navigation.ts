@@ -15,6 +15,8 @@ export const NAV_ITEMS: NavItem[] = [
   { to: '/library', label: 'Brewhouse', roles: ['head_brewer', 'assistant_brewer'] },
   { to: '/batches', label: 'Batches', roles: ['head_brewer', 'assistant_brewer'] },
   { to: '/cellar', label: 'Cellar', roles: ['head_brewer', 'assistant_brewer'] },
+  { to: '/reports/history', label: 'History', roles: ['head_brewer', 'assistant_brewer'] },
+  { to: '/reports/production', label: 'Production', roles: ['head_brewer'] },
   { to: '/team', label: 'Team', roles: ['head_brewer'] },
   // The taproom manager's Home is the taproom itself.
   { to: '/taproom', label: 'Taproom', roles: ['head_brewer', 'assistant_brewer'] },

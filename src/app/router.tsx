@@ -37,6 +37,8 @@ export const router = createBrowserRouter([
       { path: 'releases', lazy: () => import('../features/taproom/components/releases-page').then((m) => ({ Component: m.ReleasesPage })) },
       { path: 'batches/:batchId/release', lazy: () => import('../features/taproom/components/release-page').then((m) => ({ Component: m.ReleasePage })) },
       { path: 'batches/:batchId/tasting', lazy: () => import('../features/tasting/components/tasting-page').then((m) => ({ Component: m.TastingPage })) },
+      { path: 'reports/production', lazy: () => import('../features/reports/components/production-page').then((m) => ({ Component: m.ProductionPage })) },
+      { path: 'reports/history', lazy: () => import('../features/reports/components/history-page').then((m) => ({ Component: m.HistoryPage })) },
     ],
   },
   { path: '*', Component: NotFoundPage },

@@ -1,0 +1,44 @@
+import type { z } from 'zod';
+import { defineRouter, actor } from './define';
+import { historyQuery, productionQuery } from '../../shared/schemas/reports';
+import { BREWING_ROLES } from '../../shared/schemas/roles';
+import { lToHl, lToUsBbl } from '../../shared/brewing';
+import * as reports from '../services/reports';
+
+// The head brewer files the production figures; the assistant may read a recipe's batch history.
+export const reportsRouter = defineRouter('/api/reports', [
+  {
+    method: 'get',
+    path: '/production',
+    access: ['head_brewer'],
+    query: productionQuery,
+    handler: async (req, res) => {
+      const { month } = req.query as unknown as z.infer<typeof productionQuery>;
+      res.json(await reports.productionReport(actor(req).breweryId, month));
+    },
+  },
+  {
+    method: 'get',
+    path: '/production/csv',
+    access: ['head_brewer'],
+    query: productionQuery,
+    handler: async (req, res) => {
+      const { month } = req.query as unknown as z.infer<typeof productionQuery>;
+      const report = await reports.productionReport(actor(req).breweryId, month);
+      res
+        .type('text/csv; charset=utf-8')
+        .attachment(`production-${month}.csv`)
+        .send(reports.productionCsv(report, { bbl: lToUsBbl, hl: lToHl }));
+    },
+  },
+  {
+    method: 'get',
+    path: '/history',
+    access: BREWING_ROLES,
+    query: historyQuery,
+    handler: async (req, res) => {
+      const { recipeId, limit } = req.query as unknown as z.infer<typeof historyQuery>;
+      res.json(await reports.batchHistory(actor(req).breweryId, recipeId, limit));
+    },
+  },
+]);

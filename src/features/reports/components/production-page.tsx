@@ -1,0 +1,135 @@
+import { useState } from 'react';
+import { lToHl, lToUsBbl, KEG_SIZES } from '../../../../shared/brewing';
+import type { BeerFigures } from '../../../../shared/schemas/reports';
+import { Button, Card, EmptyState, ErrorState, Loading, PageHeader, Table, Td, TextField, Th } from '../../../components/ui';
+import { productionCsvUrl, useProductionReport } from '../api/production';
+
+const FIGURES = [
+  ['brewedL', 'Brewed (knockout)'],
+  ['packagedL', 'Packaged'],
+  ['dumpedL', 'Dumped'],
+  ['inTankL', 'In tanks at month end'],
+] as const;
+
+const bbl = (l: number) => lToUsBbl(l).toFixed(2);
+const hl = (l: number) => lToHl(l).toFixed(2);
+
+const KEG_LABELS: Record<keyof typeof KEG_SIZES, string> = {
+  half_bbl: '½ bbl keg',
+  quarter_bbl: '¼ bbl keg',
+  sixth_bbl: '⅙ bbl keg',
+  keg_20l: '20 L keg',
+  keg_30l: '30 L keg',
+  keg_50l: '50 L keg',
+};
+const packageLabel = (kind: string, size: string) => (kind === 'keg' ? (KEG_LABELS[size as keyof typeof KEG_SIZES] ?? size) : `${kind === 'can' ? 'Can' : 'Bottle'} ${size} mL`);
+
+function lastMonth(): string {
+  const d = new Date();
+  d.setUTCDate(1);
+  d.setUTCMonth(d.getUTCMonth() - 1);
+  return d.toISOString().slice(0, 7);
+}
+
+function FiguresRow({ name, b, strong }: { name: string; b: Omit<BeerFigures, 'beerName'>; strong?: boolean }) {
+  return (
+    <tr className={strong ? 'font-bold' : undefined}>
+      <Td>{name}</Td>
+      {FIGURES.map(([key]) => (
+        <Td key={key} className="text-right">
+          {bbl(b[key])}
+          <span className="block text-sm font-normal text-ink-500">{hl(b[key])} hL</span>
+        </Td>
+      ))}
+    </tr>
+  );
+}
+
+/** The month's production per beer and in total, in US barrels and hectolitres; CSV and a print-ready page. */
+export function ProductionPage() {
+  const [month, setMonth] = useState(lastMonth);
+  const report = useProductionReport(month);
+  return (
+    <div className="space-y-5">
+      <PageHeader
+        title="Monthly production"
+        subtitle="Volume brewed, packaged, dumped and in tanks, per beer."
+        actions={
+          <div className="flex gap-3 print:hidden">
+            <a href={productionCsvUrl(month)} className="inline-flex min-h-11 items-center rounded-lg border border-mist-300 bg-white px-4 font-semibold text-ink-800 hover:bg-mist-100">
+              Download CSV
+            </a>
+            <Button variant="secondary" onClick={() => window.print()}>
+              Print
+            </Button>
+          </div>
+        }
+      />
+      <Card className="border-sky-200 bg-sky-50 text-ink-800">
+        Official production and excise forms differ by country and by state or province. These figures help you prepare
+        them; they are not a filing. Check every figure against your own records before you submit anything.
+      </Card>
+      <div className="w-56 print:hidden">
+        <TextField label="Month" type="month" value={month} max={new Date().toISOString().slice(0, 7)} onChange={(e) => e.target.value && setMonth(e.target.value)} />
+      </div>
+      {report.isPending ? (
+        <Loading label="Adding up the month" />
+      ) : report.isError ? (
+        <ErrorState error={report.error} onRetry={() => report.refetch()} />
+      ) : report.data.beers.length === 0 ? (
+        <EmptyState title={`Nothing brewed, packaged or in tanks in ${month}`}>Choose another month.</EmptyState>
+      ) : (
+        <>
+          <p className="text-sm text-ink-500">
+            {month}, in the brewery's time zone ({report.data.timeZone}). US barrels of 31 gallons; hectolitres below each figure.
+          </p>
+          <Table>
+            <thead>
+              <tr>
+                <Th>Beer</Th>
+                {FIGURES.map(([key, label]) => (
+                  <Th key={key} className="text-right">
+                    {label} (bbl)
+                  </Th>
+                ))}
+              </tr>
+            </thead>
+            <tbody>
+              {report.data.beers.map((b) => (
+                <FiguresRow key={b.beerName} name={b.beerName} b={b} />
+              ))}
+              <FiguresRow name="Total" b={report.data.totals} strong />
+            </tbody>
+          </Table>
+          <h2 className="pt-2 text-xl font-bold text-ink-900">Packaged by package</h2>
+          {report.data.packages.length === 0 ? (
+            <p className="text-ink-500">Nothing was packaged this month.</p>
+          ) : (
+            <Table>
+              <thead>
+                <tr>
+                  <Th>Beer</Th>
+                  <Th>Package</Th>
+                  <Th className="text-right">Count</Th>
+                  <Th className="text-right">bbl</Th>
+                  <Th className="text-right">hL</Th>
+                </tr>
+              </thead>
+              <tbody>
+                {report.data.packages.map((p) => (
+                  <tr key={`${p.beerName}-${p.kind}-${p.size}`}>
+                    <Td>{p.beerName}</Td>
+                    <Td>{packageLabel(p.kind, p.size)}</Td>
+                    <Td className="text-right">{p.count}</Td>
+                    <Td className="text-right">{bbl(p.volumeL)}</Td>
+                    <Td className="text-right">{hl(p.volumeL)}</Td>
+                  </tr>
+                ))}
+              </tbody>
+            </Table>
+          )}
+        </>
+      )}
+    </div>
+  );
+}
