@@ -32,6 +32,7 @@ describe('outbox', () => {
     const store = memoryStore();
     const server = scriptedServer(['retry']);
     const box = createOutbox(store, server.send);
+    box.setUser({ id: 7, displayName: 'Ilya Brandt' });
     await box.enqueue(write('one'));
     await box.flush();
     await box.enqueue(write('two'));
@@ -44,11 +45,12 @@ describe('outbox', () => {
     const store = memoryStore();
     const server = scriptedServer(['signed-out']);
     const box = createOutbox(store, server.send);
+    box.setUser({ id: 7, displayName: 'Ilya Brandt' });
     const item = await box.enqueue(write('mash in'));
     await box.flush();
     expect(box.getSnapshot().needsSignIn).toBe(true);
     expect(store.items.map((i) => i.idempotencyKey)).toEqual([item.idempotencyKey]);
-    box.resume();
+    box.setUser({ id: 7, displayName: 'Ilya Brandt' });
     await box.flush();
     expect(server.received.map((r) => r.key)).toEqual([item.idempotencyKey, item.idempotencyKey]);
     expect(store.items).toEqual([]);
@@ -58,6 +60,7 @@ describe('outbox', () => {
     const store = memoryStore();
     const server = scriptedServer(['rejected', 'sent']);
     const box = createOutbox(store, server.send);
+    box.setUser({ id: 7, displayName: 'Ilya Brandt' });
     await box.enqueue(write('bad'));
     await box.enqueue(write('good'));
     await box.flush();
@@ -65,6 +68,18 @@ describe('outbox', () => {
     expect(store.items[0]).toMatchObject({ label: 'bad', state: 'rejected', message: 'Temperature must be at most 110' });
     await box.dismiss(store.items[0]!.idempotencyKey);
     expect(store.items).toEqual([]);
+  });
+
+  it('sends only the signed-in person’s items: another person’s wait for them', async () => {
+    const store = memoryStore();
+    const item = (label: string, userId: number): OutboxItem => ({ ...write(label), authorName: 'someone', idempotencyKey: label, capturedAt: '2026-12-01T12:00:00Z', userId, state: 'waiting', attempts: 0 });
+    store.items = [item('by seven', 7), item('by eight', 8)];
+    const server = scriptedServer([]);
+    const box = createOutbox(store, server.send);
+    box.setUser({ id: 8, displayName: 'Maren Holt' });
+    await box.flush();
+    expect(server.received.map((r) => r.label)).toEqual(['by eight']);
+    expect(store.items.map((i) => i.label)).toEqual(['by seven']);
   });
 
   it('backs off exponentially up to a minute', () => {

@@ -21,6 +21,9 @@ export interface OutboxItem {
   label: string;
   /** Groups items for a screen, e.g. `batch:12`. */
   group: string;
+  /** Who did it: only their own session sends it, so a shared tablet never signs one person's work as another's. */
+  userId: number;
+  authorName: string;
   state: 'waiting' | 'rejected';
   attempts: number;
   /** The server's message for a rejected item, or the last failure while waiting. */
@@ -84,13 +87,15 @@ export async function sendItem(item: OutboxItem): Promise<SendResult> {
 
 export interface OutboxSnapshot {
   items: OutboxItem[];
+  /** The signed-in person on this page; only their items are sent. */
+  user: { id: number; displayName: string } | null;
   /** The session ended: sign in again to send. */
   needsSignIn: boolean;
 }
 
 /** One outbox per page: holds the items in memory, mirrors them to the store, and sends them one at a time. */
 export function createOutbox(store: OutboxStore = idbStore, send: (item: OutboxItem) => Promise<SendResult> = sendItem) {
-  let snapshot: OutboxSnapshot = { items: [], needsSignIn: false };
+  let snapshot: OutboxSnapshot = { items: [], user: null, needsSignIn: false };
   const listeners = new Set<() => void>();
   const sentListeners = new Set<(item: OutboxItem) => void>();
   let running: Promise<void> | null = null;
@@ -109,8 +114,9 @@ export function createOutbox(store: OutboxStore = idbStore, send: (item: OutboxI
   async function drain(): Promise<void> {
     await reload();
     for (;;) {
-      if (snapshot.needsSignIn) return;
-      const item = snapshot.items.find((i) => i.state === 'waiting');
+      const user = snapshot.user;
+      if (snapshot.needsSignIn || !user) return;
+      const item = snapshot.items.find((i) => i.state === 'waiting' && i.userId === user.id);
       if (!item) return;
       const result = await send(item);
       const same = (i: OutboxItem) => i.idempotencyKey === item.idempotencyKey;
@@ -160,8 +166,12 @@ export function createOutbox(store: OutboxStore = idbStore, send: (item: OutboxI
     flush,
     /** Keeps a write on the device and tries to send it straight away. */
     async enqueue(write: Pick<OutboxItem, 'url' | 'body' | 'label' | 'group'> & { capturedAt?: string }): Promise<OutboxItem> {
+      const user = snapshot.user;
+      if (!user) throw new Error('The outbox has no signed-in person: call setUser() first');
       const item: OutboxItem = {
         ...write,
+        userId: user.id,
+        authorName: user.displayName,
         idempotencyKey: crypto.randomUUID(),
         capturedAt: write.capturedAt ?? new Date().toISOString(),
         state: 'waiting',
@@ -171,15 +181,15 @@ export function createOutbox(store: OutboxStore = idbStore, send: (item: OutboxI
       void flush();
       return item;
     },
-    /** The person has signed in again: send with the original keys. */
-    resume() {
-      publish({ needsSignIn: false });
+    /** Who is signed in on this page (after sign-in, or signing in again): their waiting items go, with their original keys. */
+    setUser(user: { id: number; displayName: string }) {
+      publish({ user, needsSignIn: false });
       void flush();
     },
     /** Removes a rejected item the person has read (and re-entered if needed). */
     dismiss: (idempotencyKey: string) => change((items) => items.filter((i) => i.idempotencyKey !== idempotencyKey || i.state !== 'rejected')),
-    /** Drops everything (sign-out after the person confirmed). */
-    clear: () => change(() => []),
+    /** Drops the signed-in person's items (sign-out after they confirmed); other people's stay. */
+    discardMine: () => change((items) => items.filter((i) => i.userId !== snapshot.user?.id)),
   };
 }
 

@@ -4,7 +4,7 @@ import { showTime } from './format';
 
 /** What this device still has to send for a batch, and anything the server refused (with its message). */
 export function OutboxPanel({ group, timeZone }: { group: string; timeZone: string }) {
-  const { items } = useOutbox(group);
+  const { items, user } = useOutbox(group);
   const waiting = items.filter((i) => i.state === 'waiting');
   const rejected = items.filter((i) => i.state === 'rejected');
   if (!items.length) return null;
@@ -19,7 +19,10 @@ export function OutboxPanel({ group, timeZone }: { group: string; timeZone: stri
           <ul className="mt-2 divide-y divide-mist-200">
             {waiting.map((i) => (
               <li key={i.idempotencyKey} className="flex justify-between gap-2 py-1" data-testid="waiting-item">
-                <span>{i.label}</span>
+                <span>
+                  {i.label}
+                  {i.userId !== user?.id && <span className="block text-sm text-ink-500">Sent when {i.authorName} signs in</span>}
+                </span>
                 <span className="tabular-nums text-ink-500">{showTime(i.capturedAt, timeZone)}</span>
               </li>
             ))}

@@ -4,16 +4,18 @@ import { Button, Dialog } from '../../../components/ui';
 import { outbox, useOutbox } from '../../../lib/outbox';
 import { forgetOfflineAnswers } from '../../../lib/service-worker';
 import { useSignOut } from '../../auth/api/session';
+import { useCurrentUser } from '../../../app/current-user';
 
 /** Shown when the session ended with writes waiting: they are kept, and sent with their original keys after signing in. */
 export function OutboxBanner() {
-  const { items, needsSignIn } = useOutbox();
+  const { items, needsSignIn, user } = useOutbox();
   const navigate = useNavigate();
   const location = useLocation();
-  // Mounted inside the signed-in layout: a (new) session exists, so anything held back can go.
-  useEffect(() => outbox().resume(), []);
+  const me = useCurrentUser();
+  // Mounted inside the signed-in layout: a (new) session exists, so this person's waiting items can go.
+  useEffect(() => outbox().setUser({ id: me.id, displayName: me.displayName }), [me.id, me.displayName]);
   if (!needsSignIn) return null;
-  const waiting = items.filter((i) => i.state === 'waiting').length;
+  const waiting = items.filter((i) => i.state === 'waiting' && i.userId === user?.id).length;
   return (
     <div role="alert" className="no-print bg-brass-400 px-4 py-3 text-ink-900">
       <div className="mx-auto flex max-w-7xl flex-wrap items-center justify-between gap-3">
@@ -27,11 +29,11 @@ export function OutboxBanner() {
 /** Sign out, warning first when entries are still waiting on this device. */
 export function SignOutButton({ onSignedOut }: { onSignedOut: () => void }) {
   const signOut = useSignOut();
-  const { items } = useOutbox();
+  const { items, user } = useOutbox();
   const [asking, setAsking] = useState(false);
-  const waiting = items.filter((i) => i.state === 'waiting').length;
+  const waiting = items.filter((i) => i.state === 'waiting' && i.userId === user?.id).length;
   const leave = async (discard: boolean) => {
-    if (discard) await outbox().clear();
+    if (discard) await outbox().discardMine();
     await signOut.mutateAsync();
     await forgetOfflineAnswers();
     onSignedOut();
