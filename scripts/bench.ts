@@ -48,6 +48,8 @@ if (process.argv[2] === '--ceiling') {
 
 // ------------------------------------------------------------------ measuring
 
+type LargeSeedShape = import('./seed-large').LargeSeed;
+
 interface Row {
   name: string;
   kind: 'ceiling' | 'read' | 'write' | 'report';
@@ -104,7 +106,8 @@ function initialJsGzipKb(): number {
 
 async function main() {
   console.log(`Preparing the bench instance (.data-bench/, port ${BENCH_DATA.port}) ...`);
-  const instance = await prepareInstance({ ...BENCH_DATA, fresh: true });
+  // KW_BENCH_RESEED=1 starts from an empty database; otherwise a seeded bench database is reused.
+  const instance = await prepareInstance({ ...BENCH_DATA, fresh: process.env.KW_BENCH_RESEED === '1' });
   const secret = randomBytes(36).toString('base64url');
   const env = {
     NODE_ENV: 'production',
@@ -117,10 +120,15 @@ async function main() {
     PUBLIC_URL: `https://127.0.0.1:${API_PORT}`,
   };
   Object.assign(process.env, env);
-  const { seedLarge, LARGE_PEOPLE, LARGE_PASSWORD } = await import('./seed-large');
-  console.log('Seeding ten years of a busy brewery (scripts/seed-large.ts) ...');
-  const seed = await seedLarge(instance.ownerUrl);
-  console.log(`  ${JSON.stringify(seed.counts)} in ${seed.seconds.toFixed(1)} s`);
+  const { seedLarge, findLargeSeed, LARGE_PEOPLE, LARGE_PASSWORD } = await import('./seed-large');
+  let seed = await findLargeSeed();
+  if (seed) {
+    console.log(`Reusing the seeded brewery (${seed.batchIds.length} batches); KW_BENCH_RESEED=1 seeds afresh.`);
+  } else {
+    console.log('Seeding ten years of a busy brewery (scripts/seed-large.ts) ...');
+    seed = await seedLarge(instance.ownerUrl);
+    console.log(`  ${JSON.stringify(seed.counts)} in ${seed.seconds.toFixed(1)} s`);
+  }
 
   const ceiling = spawn(process.execPath, ['--import', 'tsx', path.join(ROOT, 'scripts/bench.ts'), '--ceiling', String(CEILING_PORT), instance.appUrl], { stdio: ['ignore', 'pipe', 'inherit'] });
   let api: Awaited<ReturnType<typeof startApi>> | undefined;
@@ -135,7 +143,7 @@ async function main() {
   }
 }
 
-async function measureAll(apiUrl: string, seed: import('./seed-large').LargeSeed, email: string, password: string) {
+async function measureAll(apiUrl: string, seed: LargeSeedShape, email: string, password: string) {
   // Production cookies are Secure: the API trusts one proxy, so say the request came over HTTPS.
   const https = { 'x-forwarded-proto': 'https' };
   const signIn = await fetch(`${apiUrl}/api/auth/sign-in`, {

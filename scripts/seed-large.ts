@@ -29,6 +29,23 @@ export interface LargeSeed {
 
 const RECIPE_NAMES = ['Breakwater Pale', 'Foghorn Stout', 'Tidepool Saison', 'Lantern Amber', 'Gull Rock IPA', 'Slipway Lager'];
 
+/** The large brewery when it is already seeded (the benchmark reuses it), else null. */
+export async function findLargeSeed(): Promise<LargeSeed | null> {
+  const { Batch, Recipe, RecipeVersion, User } = await import('../server/models');
+  const head = await User.findOne({ where: { email: LARGE_PEOPLE.head_brewer.email } });
+  if (!head) return null;
+  const recipes = await Recipe.findAll({ where: { breweryId: head.breweryId }, order: [['id', 'ASC']] });
+  const versions = await RecipeVersion.findAll({ where: { recipeId: recipes.map((r) => r.id) }, order: [['id', 'ASC']] });
+  const batches = await Batch.findAll({ where: { breweryId: head.breweryId }, attributes: ['id'], order: [['id', 'ASC']] });
+  return {
+    breweryId: head.breweryId,
+    recipes: recipes.map((r) => ({ recipeId: r.id, versionId: versions.find((v) => v.recipeId === r.id)!.id })),
+    batchIds: batches.map((b) => b.id),
+    counts: { batches: batches.length, readings: 0, brewDayEntries: 0, allLogEntries: 0, packagingRuns: 0 },
+    seconds: 0,
+  };
+}
+
 /** Seeds the large brewery into the database DATABASE_URL points at (owner URL for the bulk inserts). */
 export async function seedLarge(ownerUrl: string, size = { batches: 3000, readingsPerBatch: 100, brewDayEntriesPerBatch: 33 }): Promise<LargeSeed> {
   const started = Date.now();

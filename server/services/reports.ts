@@ -38,8 +38,11 @@ const json = <T>(v: T | string): T => (typeof v === 'string' ? (JSON.parse(v) as
 async function knockouts(entryIds: number[]): Promise<Map<number, { volumeL?: number; gravitySg?: number }>> {
   if (!entryIds.length) return new Map();
   const rows = await sequelize.query<EntryRow>(
-    `SELECT id, kind, step_key, data, corrects_entry_id FROM batch_log_entries
-      WHERE id IN (:ids) OR corrects_entry_id IN (:ids) ORDER BY id`,
+    // Two index lookups (primary key; corrects_entry_id) rather than one OR, which MariaDB may answer with a scan.
+    `SELECT id, kind, step_key, data, corrects_entry_id FROM batch_log_entries WHERE id IN (:ids)
+     UNION ALL
+     SELECT id, kind, step_key, data, corrects_entry_id FROM batch_log_entries WHERE corrects_entry_id IN (:ids)
+     ORDER BY id`,
     { replacements: { ids: entryIds }, type: QueryTypes.SELECT },
   );
   const effective = effectiveMeasurements(
