@@ -59,6 +59,8 @@ export async function runRestartFault(options: { entries: number; restarts: numb
   box.onSent(() => {
     sent += 1;
   });
+  // The outbox sends only the signed-in person's writes; the cookie above is the assistant's session.
+  box.setUser({ id: 0, displayName: emails.assistant_brewer! });
   const keys: string[] = [];
   try {
     const restartEvery = Math.floor(options.entries / (options.restarts + 1));
