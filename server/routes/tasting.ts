@@ -1,8 +1,6 @@
 import { z } from 'zod';
 import { defineRouter, actor } from './define';
 import type { Request } from 'express';
-import { methodNotAllowed, notFound } from '../errors';
-import { TastingNote } from '../models';
 import { BREWING_ROLES } from '../../shared/schemas/roles';
 import { idParam } from '../../shared/schemas/taproom';
 import { tastingNoteInputSchema } from '../../shared/schemas/tasting';
@@ -11,11 +9,7 @@ import * as tasting from '../services/tasting';
 const batchParams = z.strictObject({ batchId: idParam });
 const noteParams = z.strictObject({ batchId: idParam, noteId: idParam });
 /** Notes are append-only: a change or delete answers 405, after the usual 404 for another brewery's note. */
-const appendOnly = async (req: Request) => {
-  const note = await TastingNote.findOne({ where: { id: Number(req.params.noteId), batchId: Number(req.params.batchId), breweryId: actor(req).breweryId } });
-  if (!note) throw notFound('This tasting note');
-  throw methodNotAllowed('Signed tasting notes cannot be changed or deleted. Add a correction that points at the note instead.');
-};
+const appendOnly = (req: Request) => tasting.refuseNoteChange(actor(req), Number(req.params.batchId), Number(req.params.noteId));
 
 export const tastingRouter = defineRouter('/api/batches', [
   {

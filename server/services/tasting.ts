@@ -5,7 +5,7 @@
 import { Op, Transaction, UniqueConstraintError } from 'sequelize';
 import { sequelize } from '../config/database';
 import { TastingNote } from '../models';
-import { unprocessable } from '../errors';
+import { methodNotAllowed, notFound, unprocessable } from '../errors';
 import { canonicalJson, GENESIS_HASH, sha256 } from './batch-log';
 import { findBatch } from './batches';
 import type { Role } from '../../shared/schemas/roles';
@@ -140,6 +140,13 @@ async function append(actor: Express.User, batchId: number, input: TastingNoteIn
   };
   const row = await TastingNote.create({ ...fields, prevHash, hash: noteHash(prevHash, fields) }, { transaction });
   return { row, created: true };
+}
+
+/** Signed notes are never changed or deleted: 404 for a note that is not this brewery's, else 405. */
+export async function refuseNoteChange(actor: Express.User, batchId: number, noteId: number): Promise<never> {
+  const note = await TastingNote.findOne({ where: { id: noteId, batchId, breweryId: actor.breweryId } });
+  if (!note) throw notFound('This tasting note');
+  throw methodNotAllowed('Signed tasting notes cannot be changed or deleted. Add a correction that points at the note instead.');
 }
 
 /** What the taproom reads: current notes only (a corrected note counts through its correction). */
