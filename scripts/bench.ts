@@ -161,6 +161,8 @@ async function measureAll(apiUrl: string, seed: LargeSeedShape, email: string, p
   let n = 0;
   const routes: { name: string; kind: Row['kind']; method?: 'GET' | 'POST'; path: () => string; body?: () => string }[] = [
     { name: 'Ceiling: Express + 1 PK SELECT', kind: 'ceiling', path: () => `/ceiling/${seed.breweryId}` },
+    // The floor every signed-in route stands on: session, user, one small answer.
+    { name: 'GET /api/auth/me (sign-in floor)', kind: 'read', path: () => '/api/auth/me' },
     { name: 'GET /api/batches (list, page 1)', kind: 'read', path: () => '/api/batches' },
     { name: 'GET /api/batches/:id/log (134 entries)', kind: 'read', path: () => `/api/batches/${oldBatch}/log` },
     { name: 'GET /api/recipes/:id/versions/:v (computed)', kind: 'read', path: () => `/api/recipes/${recipeId}/versions/${versionId}` },
