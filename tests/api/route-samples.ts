@@ -5,7 +5,7 @@ import type { RouteEntry } from '../../server/routes/define';
 import { randomUUID } from 'node:crypto';
 import { Alert, Attachment, Release, User } from '../../server/models';
 import { DEMO_EQUIPMENT, SEASONAL_CONTENT } from '../../server/seed/recipe-data';
-import type { TestBrewery } from './helpers';
+import { GOOD_PASSWORD, type TestBrewery } from './helpers';
 import { plannedBatch, writeHeaders } from './batch-fixtures';
 import { addTastingNote } from '../../server/services/tasting';
 import { SHEET, TASTING_CONTENT } from './taproom-fixtures';
@@ -147,7 +147,7 @@ export const VALID_BODIES: Record<string, (ids: Record<string, number>) => unkno
   'POST /api/recipes/:recipeId/versions': () => ({ changeNote: 'Sample', equipmentProfileId: 1, content: SEASONAL_CONTENT }),
   'PATCH /api/recipes/:recipeId/versions/:versionId': () => ({ changeNote: 'Sample', equipmentProfileId: 1, content: SEASONAL_CONTENT }),
   'PUT /api/batches/:id/vessel': () => ({ vesselId: 1 }),
-  'POST /api/batches/:id/sign-off': () => ({ password: 'not-checked-before-the-batch-is-found' }),
+  'POST /api/batches/:id/sign-off': () => ({ password: GOOD_PASSWORD }),
   'PUT /api/cellar/batches/:batchId/plan': () => ({
     plannedFg: 1.012, tempUnit: 'c', primaryTemp: 19, dRestPoints: 3, dRestTemp: 21, crashTemp: 1, co2Volumes: 2.5, readingIntervalHours: 24,
   }),
