@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { CartesianGrid, Legend, Line, LineChart, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
+import { Bar, BarChart, CartesianGrid, Legend, Line, LineChart, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import { EmptyState, ErrorState, Loading, PageHeader, SelectField, Table, Td, Th } from '../../../components/ui';
 import { useRecipeList } from '../../recipes/api/list-recipes';
 import { useBatchHistory } from '../api/history';
@@ -19,6 +19,7 @@ export function HistoryPage() {
     actualOg: r.actualOg,
     efficiency: r.actualEfficiency === null ? null : r.actualEfficiency * 100,
     attenuation: r.apparentAttenuation === null ? null : r.apparentAttenuation * 100,
+    days: r.daysBrewToPackage,
   }));
   return (
     <div className="space-y-5">
@@ -43,18 +44,18 @@ export function HistoryPage() {
         <EmptyState title="No batches of this recipe yet">Plan one from the recipe's scale screen.</EmptyState>
       ) : (
         <>
-          <div className="grid gap-4 lg:grid-cols-2">
+          <div className="grid gap-4 md:grid-cols-2 xl:grid-cols-3">
             <figure className="h-72 rounded-xl border border-mist-200 bg-white p-3">
               <figcaption className="px-2 text-sm font-semibold text-ink-700">OG, planned and measured</figcaption>
               <ResponsiveContainer width="100%" height="90%">
                 <LineChart data={points}>
                   <CartesianGrid stroke="#e5e7eb" />
                   <XAxis dataKey="number" tick={{ fontSize: 12 }} />
-                  <YAxis domain={['auto', 'auto']} tickFormatter={(v: number) => v.toFixed(3)} width={56} />
+                  <YAxis type="number" domain={[(min: number) => min - 0.003, (max: number) => max + 0.003]} tickFormatter={(v: number) => v.toFixed(3)} width={56} />
                   <Tooltip formatter={(v) => (typeof v === 'number' ? v.toFixed(3) : String(v))} />
                   <Legend />
-                  <Line type="stepAfter" dataKey="plannedOg" name="Planned OG" stroke="#64748b" strokeDasharray="5 4" dot={false} />
-                  <Line type="linear" dataKey="actualOg" name="Measured OG" stroke="#2f6b4f" strokeWidth={2} connectNulls />
+                  <Line type="stepAfter" dataKey="plannedOg" name="Planned OG" stroke="#64748b" strokeWidth={2} strokeDasharray="6 4" isAnimationActive={false} />
+                  <Line type="linear" dataKey="actualOg" name="Measured OG" stroke="#2f6b4f" strokeWidth={3} connectNulls isAnimationActive={false} />
                 </LineChart>
               </ResponsiveContainer>
             </figure>
@@ -64,12 +65,24 @@ export function HistoryPage() {
                 <LineChart data={points}>
                   <CartesianGrid stroke="#e5e7eb" />
                   <XAxis dataKey="number" tick={{ fontSize: 12 }} />
-                  <YAxis domain={['auto', 'auto']} width={40} />
+                  <YAxis type="number" domain={[(min: number) => Math.floor(min - 2), (max: number) => Math.ceil(max + 2)]} width={40} />
                   <Tooltip formatter={(v) => (typeof v === 'number' ? `${v.toFixed(1)} %` : String(v))} />
                   <Legend />
-                  <Line dataKey="efficiency" name="Efficiency" stroke="#b7791f" strokeWidth={2} connectNulls />
-                  <Line dataKey="attenuation" name="Attenuation" stroke="#2563eb" strokeWidth={2} connectNulls />
+                  <Line dataKey="efficiency" name="Efficiency" stroke="#b7791f" strokeWidth={3} connectNulls isAnimationActive={false} />
+                  <Line dataKey="attenuation" name="Attenuation" stroke="#2563eb" strokeWidth={3} connectNulls isAnimationActive={false} />
                 </LineChart>
+              </ResponsiveContainer>
+            </figure>
+            <figure className="h-72 rounded-xl border border-mist-200 bg-white p-3">
+              <figcaption className="px-2 text-sm font-semibold text-ink-700">Days from brew to package</figcaption>
+              <ResponsiveContainer width="100%" height="90%">
+                <BarChart data={points}>
+                  <CartesianGrid stroke="#e5e7eb" />
+                  <XAxis dataKey="number" tick={{ fontSize: 12 }} />
+                  <YAxis allowDecimals={false} width={32} />
+                  <Tooltip formatter={(v) => `${String(v)} days`} />
+                  <Bar dataKey="days" name="Days" fill="#2f6b4f" isAnimationActive={false} />
+                </BarChart>
               </ResponsiveContainer>
             </figure>
           </div>
