@@ -53,8 +53,10 @@ async function knockouts(entryIds: number[]): Promise<Map<number, { volumeL?: nu
 
 /**
  * The report's batch query: every batch that counts in the month, tagged by why — knocked out in the month,
- * dumped in the month, or still in a tank at its end (knocked out before the end, not dumped and without a
- * final packaging run by then). Exported so the benchmark can EXPLAIN exactly what the report runs.
+ * dumped in the month, or still in a tank at its end. A batch was in a tank at the month's end when it was
+ * knocked out before then and had not finished: it is still open now (brewing, fermenting, conditioning), or it
+ * was dumped or had its final packaging run after the end. Starting from those keeps the work proportional to
+ * what happened since the month, not to the brewery's whole history. Exported so the benchmark can EXPLAIN it.
  */
 export const PRODUCTION_BATCHES_SQL = `
   SELECT 'brewed' AS why, k.batch_id AS batchId, b.beer_name AS beerName, k.id AS knockoutId
@@ -66,12 +68,17 @@ export const PRODUCTION_BATCHES_SQL = `
    WHERE b.brewery_id = :breweryId AND b.status = 'dumped' AND b.updated_at >= :from AND b.updated_at < :to
   UNION ALL
   SELECT 'in_tank', k.batch_id, b.beer_name, k.id
-    FROM batch_log_entries k JOIN batches b ON b.id = k.batch_id
-   WHERE k.brewery_id = :breweryId AND k.step_key = 'knockout-end' AND k.captured_at < :to
-     AND NOT (b.status = 'dumped' AND b.updated_at < :to)
-     AND NOT EXISTS (
-       SELECT 1 FROM packaging_runs p JOIN batch_log_entries pe ON pe.id = p.log_entry_id
-        WHERE p.batch_id = k.batch_id AND p.packaged_at < :to AND JSON_VALUE(pe.data, '$.final') IN ('1', 'true'))`;
+    FROM (
+      SELECT id FROM batches WHERE brewery_id = :breweryId AND status IN ('brewing', 'fermenting', 'conditioning')
+      UNION
+      SELECT id FROM batches WHERE brewery_id = :breweryId AND status = 'dumped' AND updated_at >= :to
+      UNION
+      SELECT p.batch_id FROM packaging_runs p JOIN batch_log_entries pe ON pe.id = p.log_entry_id
+       WHERE p.brewery_id = :breweryId AND p.packaged_at >= :to AND JSON_VALUE(pe.data, '$.final') IN ('1', 'true')
+    ) still_open
+    JOIN batches b ON b.id = still_open.id
+    JOIN batch_log_entries k ON k.batch_id = b.id AND k.step_key = 'knockout-end'
+   WHERE k.captured_at < :to`;
 
 /** Packaging runs in the month, and runs before the month's end of batches still in a tank (partly packaged). */
 export const PRODUCTION_PACKAGING_SQL = `

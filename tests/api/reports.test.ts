@@ -126,13 +126,41 @@ describe('monthly production', () => {
   });
 });
 
+describe('a batch knocked out last month and packaged this month', () => {
+  it('counts in last month’s tanks at the month’s end, and in this month’s packaging', async () => {
+    const now = new Date();
+    const lastMonthMid = new Date(Date.UTC(now.getUTCFullYear(), now.getUTCMonth() - 1, 15, 12));
+    const previous = lastMonthMid.toISOString().slice(0, 7);
+    const before = (await t.as.head_brewer.get(`/api/reports/production?month=${previous}`)).body as ProductionReport;
+    const planned = await t.as.head_brewer.post('/api/batches').send({ recipeVersionId: versionId, brewDate: lastMonthMid.toISOString().slice(0, 10) });
+    ok(planned, 201);
+    const id = planned.body.id as number;
+    ok(
+      await t.as.assistant_brewer
+        .post(`/api/batches/${id}/log`)
+        .set(writeHeaders({ capturedAt: lastMonthMid }))
+        .send({ kind: 'step', stepKey: 'knockout-end', label: 'Knockout end', measurements: { gravitySg: 1.054, volumeL: 30 } }),
+      201,
+    );
+    ok(await t.as.assistant_brewer.post(`/api/batches/${id}/status`).send({ status: 'fermenting' }));
+    ok(await t.as.assistant_brewer.post(`/api/cellar/batches/${id}/packaging`).set(writeHeaders()).send({ kind: 'packaging', lines: [KEG], final: true }), 201);
+
+    const last = (await t.as.head_brewer.get(`/api/reports/production?month=${previous}`)).body as ProductionReport;
+    expect(last.totals.brewedL - before.totals.brewedL).toBeCloseTo(30, 9);
+    expect(last.totals.inTankL - before.totals.inTankL).toBeCloseTo(30, 9);
+    expect(last.totals.packagedL - before.totals.packagedL).toBeCloseTo(0, 9);
+    const current = (await t.as.head_brewer.get(`/api/reports/production?month=${month}`)).body as ProductionReport;
+    expect(current.totals.packagedL).toBeCloseTo(lineVolumeL(CANS) + 2 * lineVolumeL(KEG), 9);
+  });
+});
+
 describe('batch history', () => {
   it('lists each batch of the recipe, newest first, planned against actual', async () => {
     const res = await t.as.assistant_brewer.get(`/api/reports/history?recipeId=${recipeId}`);
     ok(res);
     const history = res.body as BatchHistory;
     expect(history.recipeName).toBe('Report Amber');
-    expect(history.rows.map((r) => r.batchId)).toEqual([dumpedId, inTankId, packagedId]);
+    expect(history.rows.map((r) => r.batchId).filter((id) => [dumpedId, inTankId, packagedId].includes(id))).toEqual([dumpedId, inTankId, packagedId]);
     const row = history.rows.find((r) => r.batchId === packagedId)!;
     expect(row.actualOg).toBe(1.056);
     // Apparent attenuation (OG − FG)/(OG − 1): (1.056 − 1.012)/0.056 = 0.7857 (Palmer, How to Brew, 4th ed.).
