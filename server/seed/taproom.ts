@@ -64,14 +64,14 @@ const BEERS: DemoBeer[] = [
     fgOffset: -0.001,
     stage: 'released',
     sheet: {
-      description: 'Bright, resinous and full of citrus peel, with enough malt to hold the bitterness steady. Best fresh, so it will not last long.',
+      description: 'Black as the harbour at night: roasted barley and cocoa up front, oats for a silky body, and a quiet coffee bitterness on the way out.',
       glass: 'shaker_pint',
-      servingTempC: 6,
-      servingNotes: 'A finger of head carries the aroma.',
+      servingTempC: 11,
+      servingNotes: 'Serve cellar-cool, not ice-cold; a thick tan head.',
       allergens: ['gluten'],
       comingSoon: false,
     },
-    notes: [{ who: 'head_brewer', content: note(4.5, 'Grapefruit pith, pine, a touch of mango', 'Firm bitterness, citrus, light caramel', 'Dry hop came through well', 'deep gold') }],
+    notes: [{ who: 'head_brewer', content: note(4.5, 'Dark chocolate, roast coffee, a little toffee', 'Roast first, then smooth oats and a dry finish', 'Body is right where we want it', 'near black') }],
   },
   {
     recipeIndex: 2,

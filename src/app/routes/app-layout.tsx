@@ -1,4 +1,4 @@
-import { Navigate, NavLink, Outlet, useLocation, useNavigate } from 'react-router-dom';
+import { Navigate, NavLink, Outlet, ScrollRestoration, useLocation, useNavigate } from 'react-router-dom';
 import { useMe } from '../../features/auth/api/me';
 import { OutboxBanner, SignOutButton } from '../../features/batches/components/outbox-status';
 import { ROLE_LABELS } from '../../../shared/schemas/roles';
@@ -21,28 +21,12 @@ export function AppLayout() {
     <CurrentUserContext.Provider value={user}>
       <div className="min-h-screen">
         <header className="no-print sticky top-0 z-40 bg-cellar-800 text-white shadow">
-          <div className="mx-auto flex max-w-7xl flex-wrap items-center gap-x-4 gap-y-2 px-4 py-2">
+          {/* Two rows: who and where on top, the menu below in one line that scrolls sideways if it must. */}
+          <div className="mx-auto flex max-w-7xl items-center justify-between gap-4 px-4 pt-2">
             <NavLink to="/" className="flex min-h-touch items-center gap-2 font-bold">
               <img src="/kettle.svg" alt="" className="h-8 w-8" />
               <span className="text-lg">{user.brewery.name}</span>
             </NavLink>
-            <nav aria-label="Main" className="flex flex-1 flex-wrap gap-1">
-              {navFor(user.role).map((item) => (
-                <NavLink
-                  key={item.to}
-                  to={item.to}
-                  end={item.to === '/'}
-                  className={({ isActive }) =>
-                    cx(
-                      'flex min-h-touch items-center rounded-lg px-3 font-semibold',
-                      isActive ? 'bg-brass-400 text-cellar-900' : 'text-cellar-100 hover:bg-cellar-700',
-                    )
-                  }
-                >
-                  {item.label}
-                </NavLink>
-              ))}
-            </nav>
             <div className="flex items-center gap-3">
               <span className="text-sm text-cellar-100">
                 {user.displayName} · {ROLE_LABELS[user.role]}
@@ -50,11 +34,30 @@ export function AppLayout() {
               <SignOutButton onSignedOut={() => navigate('/sign-in', { replace: true })} />
             </div>
           </div>
+          <nav aria-label="Main" className="mx-auto flex max-w-7xl gap-1 overflow-x-auto px-3 pb-2 pt-1">
+            {navFor(user.role).map((item) => (
+              <NavLink
+                key={item.to}
+                to={item.to}
+                end={item.to === '/'}
+                className={({ isActive }) =>
+                  cx(
+                    'flex min-h-touch shrink-0 items-center rounded-lg px-3 font-semibold',
+                    isActive ? 'bg-brass-400 text-cellar-900' : 'text-cellar-100 hover:bg-cellar-700',
+                  )
+                }
+              >
+                {item.label}
+              </NavLink>
+            ))}
+          </nav>
         </header>
         <OutboxBanner />
         <main className="mx-auto max-w-7xl px-4 py-6">
           <Outlet />
         </main>
+        {/* A new page opens at its top, not at the previous page's scroll position. */}
+        <ScrollRestoration />
       </div>
     </CurrentUserContext.Provider>
   );
