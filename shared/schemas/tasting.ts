@@ -9,7 +9,7 @@ import type { Role } from './roles';
 /** Off-flavours tasters commonly name, with a plain description of how each presents. */
 export const OFF_FLAVOURS = {
   diacetyl: { label: 'Diacetyl', hint: 'butter, butterscotch, slick feel' },
-  acetaldehyde: { label: 'Acetaldehyde', hint: 'green apple, fresh-cut pumpkin' },
+  acetaldehyde: { label: 'Acetaldehyde', hint: 'green apple, latex paint' },
   dms: { label: 'DMS', hint: 'cooked corn, cabbage' },
   oxidised: { label: 'Oxidised', hint: 'wet cardboard, sherry, stale' },
   phenolic: { label: 'Phenolic', hint: 'plastic, medicinal, clove where not intended' },

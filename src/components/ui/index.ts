@@ -6,3 +6,7 @@ export { Table, Th, Td } from './table';
 export { Dialog } from './dialog';
 export { ToastProvider, useToast } from './toast';
 export { cx } from './cx';
+export { FormBanner } from './form-banner';
+export { PasswordHint } from './password-hint';
+export { TimeZoneOptions } from './time-zone-options';
+export { UnitField } from './unit-field';

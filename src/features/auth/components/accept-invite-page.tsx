@@ -8,8 +8,9 @@ import { Button, ErrorState, Loading, TextField } from '../../../components/ui';
 import { applyServerErrors } from '../../../lib/forms';
 import { useAcceptInvite } from '../api/session';
 import { useInvite } from '../api/links';
-import { AuthFrame, FormBanner } from './auth-frame';
-import { PasswordHint } from './password-hint';
+import { AuthFrame } from './auth-frame';
+import { FormBanner } from '../../../components/ui/form-banner';
+import { PasswordHint } from '../../../components/ui/password-hint';
 
 export function AcceptInvitePage() {
   const { token = '' } = useParams();

@@ -22,12 +22,3 @@ export function AuthFrame({ title, children }: { title: string; children: ReactN
     </div>
   );
 }
-
-export function FormBanner({ message }: { message?: string }) {
-  if (!message) return null;
-  return (
-    <p role="alert" className="rounded-lg bg-ember-100 px-4 py-3 font-medium text-ember-700">
-      {message}
-    </p>
-  );
-}

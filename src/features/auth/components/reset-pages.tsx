@@ -11,8 +11,9 @@ import {
 import { Button, TextField } from '../../../components/ui';
 import { applyServerErrors } from '../../../lib/forms';
 import { useRequestReset, useResetPassword } from '../api/links';
-import { AuthFrame, FormBanner } from './auth-frame';
-import { PasswordHint } from './password-hint';
+import { AuthFrame } from './auth-frame';
+import { FormBanner } from '../../../components/ui/form-banner';
+import { PasswordHint } from '../../../components/ui/password-hint';
 
 export function ForgotPasswordPage() {
   const request = useRequestReset();

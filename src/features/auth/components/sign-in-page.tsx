@@ -6,7 +6,8 @@ import { signInSchema, type SignInInput } from '../../../../shared/schemas/auth'
 import { Button, TextField } from '../../../components/ui';
 import { applyServerErrors } from '../../../lib/forms';
 import { useSignIn } from '../api/session';
-import { AuthFrame, FormBanner } from './auth-frame';
+import { AuthFrame } from './auth-frame';
+import { FormBanner } from '../../../components/ui/form-banner';
 
 export function SignInPage() {
   const navigate = useNavigate();

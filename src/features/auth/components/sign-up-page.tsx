@@ -6,9 +6,10 @@ import { signUpSchema, type SignUpInput } from '../../../../shared/schemas/auth'
 import { Button, SelectField, TextField } from '../../../components/ui';
 import { applyServerErrors } from '../../../lib/forms';
 import { useSignUp } from '../api/session';
-import { AuthFrame, FormBanner } from './auth-frame';
-import { TimeZoneOptions } from '../../settings/components/time-zone-options';
-import { PasswordHint } from './password-hint';
+import { AuthFrame } from './auth-frame';
+import { FormBanner } from '../../../components/ui/form-banner';
+import { TimeZoneOptions } from '../../../components/ui/time-zone-options';
+import { PasswordHint } from '../../../components/ui/password-hint';
 
 export function SignUpPage() {
   const navigate = useNavigate();

@@ -11,10 +11,11 @@ import { ActualsCard } from './actuals-card';
 import { BoilTimer } from './boil-timer';
 import { LogList } from './log-list';
 import { MeasurementFields, toMeasurements, type GravityUnit, type Typed } from './measurement-fields';
-import { OutboxPanel } from './outbox-panel';
+import { OutboxPanel } from '../../../components/outbox-panel';
 import { SignOffPanel, Signatures } from './sign-off-panel';
 import { StatusCard } from './status-card';
-import { showAddition, showMeasurements, showTime } from './format';
+import { showAddition, showMeasurements } from './format';
+import { showTime } from '../../../lib/time';
 import { useOnline } from './use-online';
 
 interface Done {

@@ -3,18 +3,6 @@ import type { UnitSystem } from '../../../../shared/schemas/auth';
 import type { Addition } from '../../../../shared/batches/brew-day';
 import { show, showMeasured, showSmallWeight } from '../../../lib/units';
 
-/** A time in the brewery's zone with the zone named, e.g. "Dec 1, 14:05 AST". */
-export function showTime(iso: string, timeZone: string, withDate = false): string {
-  return new Intl.DateTimeFormat('en-US', {
-    timeZone,
-    hour: '2-digit',
-    minute: '2-digit',
-    hourCycle: 'h23',
-    timeZoneName: 'short',
-    ...(withDate ? { year: 'numeric', month: 'short', day: 'numeric' } : {}),
-  }).format(new Date(iso));
-}
-
 export function showAddition(system: UnitSystem, a: Addition): string {
   if (a.amount.unit === 'g') return showSmallWeight(system, a.amount.value);
   if (a.amount.unit === 'each') return `${a.amount.value} each`;

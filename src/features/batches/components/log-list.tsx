@@ -5,7 +5,8 @@ import { ROLE_LABELS, type Role } from '../../../../shared/schemas/roles';
 import { Button, Dialog, TextAreaField, cx } from '../../../components/ui';
 import { logEntry } from '../api/log-entry';
 import { MeasurementFields, toMeasurements, type GravityUnit, type Typed } from './measurement-fields';
-import { showMeasurements, showTime } from './format';
+import { showMeasurements } from './format';
+import { showTime } from '../../../lib/time';
 import type { MeasureKey } from '../../../../shared/batches/brew-day';
 
 function what(e: LogEntry): string {

@@ -5,7 +5,7 @@ import { Button, Card, TextField } from '../../../components/ui';
 import { ApiError } from '../../../lib/api-client';
 import { useOnline } from './use-online';
 import { useSignOff } from '../api/sign-off';
-import { showTime } from './format';
+import { showTime } from '../../../lib/time';
 
 /** Every signature with printed name, date and time with zone, and meaning; flagged when what was signed changed. */
 export function Signatures({ signatures, timeZone }: { signatures: Signature[]; timeZone: string }) {

@@ -14,7 +14,7 @@ import { CarbonationPanel } from './carbonation-panel';
 import { PackagingForm } from './packaging-form';
 import { ProbeImport } from './probe-import';
 import { PlanForm } from './plan-form';
-import { OutboxPanel } from '../../batches/components/outbox-panel';
+import { OutboxPanel } from '../../../components/outbox-panel';
 
 function Section({ title, children }: { title: string; children: ReactNode }) {
   return (

@@ -3,7 +3,7 @@ import { Button, SelectField, Table, Td, Th, cx } from '../../../components/ui';
 import type { ProbeImportInput, ProbeImportResult } from '../../../../shared/schemas/cellar';
 import { ApiError } from '../../../lib/api-client';
 import { useImportReadings, usePreviewImport } from '../api/probe-import';
-import { TimeZoneOptions } from '../../settings/components/time-zone-options';
+import { TimeZoneOptions } from '../../../components/ui/time-zone-options';
 
 type Options = Omit<ProbeImportInput, 'csv'>;
 

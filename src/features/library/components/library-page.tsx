@@ -6,7 +6,7 @@ import { Button, Card, Dialog, ErrorState, Loading, PageHeader, SelectField, Tab
 import { useCurrentUser } from '../../../app/current-user';
 import { applyServerErrors } from '../../../lib/forms';
 import { show, showVolume } from '../../../lib/units';
-import { UnitField, asNumber } from '../../recipes/components/unit-field';
+import { UnitField, asNumber } from '../../../components/ui/unit-field';
 import { useEquipment, useSaveEquipment, type EquipmentRow } from '../api/equipment';
 import { useIngredients, useSaveIngredient, type IngredientRow } from '../api/ingredients';
 

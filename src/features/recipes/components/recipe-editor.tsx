@@ -24,7 +24,7 @@ import { Button, Card, SelectField, TextAreaField, TextField, cx } from '../../.
 import type { EquipmentRow } from '../../library/api/equipment';
 import type { IngredientRow } from '../../library/api/ingredients';
 import { LiveNumbersPanel, useLiveNumbers } from './live-numbers';
-import { UnitField, asNumber } from './unit-field';
+import { UnitField, asNumber } from '../../../components/ui/unit-field';
 import { show } from '../../../lib/units';
 
 type FormIn = z.input<typeof createRecipeSchema>;

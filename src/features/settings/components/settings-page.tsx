@@ -12,9 +12,9 @@ import { Button, Card, PageHeader, SelectField, TextField, useToast } from '../.
 import { applyServerErrors } from '../../../lib/forms';
 import { useUpdateBrewery } from '../api/brewery';
 import { useChangePassword } from '../../auth/api/links';
-import { FormBanner } from '../../auth/components/auth-frame';
-import { PasswordHint } from '../../auth/components/password-hint';
-import { TimeZoneOptions } from './time-zone-options';
+import { FormBanner } from '../../../components/ui/form-banner';
+import { PasswordHint } from '../../../components/ui/password-hint';
+import { TimeZoneOptions } from '../../../components/ui/time-zone-options';
 import { useCurrentUser } from '../../../app/current-user';
 
 function BreweryForm({ me }: { me: Me }) {

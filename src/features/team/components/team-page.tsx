@@ -6,7 +6,7 @@ import { ROLES, ROLE_LABELS, type Role } from '../../../../shared/schemas/roles'
 import { Button, Card, ErrorState, Loading, PageHeader, SelectField, Table, Td, TextField, Th, useToast } from '../../../components/ui';
 import { applyServerErrors } from '../../../lib/forms';
 import { useInviteTeammate, useTeam, useUpdateMember } from '../api/team';
-import { FormBanner } from '../../auth/components/auth-frame';
+import { FormBanner } from '../../../components/ui/form-banner';
 import { useCurrentUser } from '../../../app/current-user';
 
 function InviteForm() {

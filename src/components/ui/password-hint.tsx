@@ -1,4 +1,4 @@
-import { PASSWORD_MAX, PASSWORD_MIN } from '../../../../shared/schemas/auth';
+import { PASSWORD_MAX, PASSWORD_MIN } from '../../../shared/schemas/auth';
 
 export function PasswordHint() {
   return (

@@ -1,8 +1,8 @@
 import { useState } from 'react';
 import { useController, type Control, type FieldValues, type Path } from 'react-hook-form';
-import { TextField } from '../../../components/ui';
-import { UNITS, type Quantity } from '../../../lib/units';
-import type { UnitSystem } from '../../../../shared/schemas/auth';
+import { TextField } from './field';
+import { UNITS, type Quantity } from '../../lib/units';
+import type { UnitSystem } from '../../../shared/schemas/auth';
 
 interface Props<T extends FieldValues> {
   control: Control<T>;

@@ -1,6 +1,6 @@
-import { useOutbox, outbox } from '../../../lib/outbox';
-import { Button, Card } from '../../../components/ui';
-import { showTime } from './format';
+import { useOutbox, outbox } from '../lib/outbox';
+import { showTime } from '../lib/time';
+import { Button, Card } from './ui';
 
 /** What this device still has to send for a batch, and anything the server refused (with its message). */
 export function OutboxPanel({ group, timeZone }: { group: string; timeZone: string }) {
