@@ -134,7 +134,13 @@ export async function listBatches(breweryId: number, query: BatchListQuery): Pro
     ? await Promise.all([
         Vessel.findAll({ where: { breweryId, currentBatchId: { [Op.in]: ids } } }),
         BatchLogEntry.findAll({
-          where: { batchId: { [Op.in]: ids }, [Op.or]: [{ stepKey: 'knockout-end' }, { kind: 'correction' }] },
+          // Two indexed lookups (knockouts by batch and step; corrections by brewery and kind) instead of reading every entry of the page's batches.
+          where: {
+            [Op.or]: [
+              { batchId: { [Op.in]: ids }, stepKey: 'knockout-end' },
+              { breweryId, kind: 'correction', batchId: { [Op.in]: ids } },
+            ],
+          },
           attributes: ['id', 'batchId', 'kind', 'stepKey', 'data', 'correctsEntryId'],
           order: [['sequence', 'ASC']],
         }),
