@@ -53,7 +53,7 @@ export const authRouter = defineRouter('/api/auth', [
       }
       await logIn(req, user);
       await recordAudit(req, 'sign-in.success', null, { userId: user.id, breweryId: user.breweryId });
-      res.json(await auth.me(user.id));
+      res.json(await auth.me(user));
     },
   },
   {
@@ -65,7 +65,7 @@ export const authRouter = defineRouter('/api/auth', [
       const user = await auth.signUp(req.body);
       await logIn(req, auth.toSessionUser(user));
       await recordAudit(req, 'sign-up', null, { userId: user.id, breweryId: user.breweryId });
-      res.status(201).json(await auth.me(user.id));
+      res.status(201).json(await auth.me(auth.toSessionUser(user)));
     },
   },
   {
@@ -84,7 +84,7 @@ export const authRouter = defineRouter('/api/auth', [
     path: '/me',
     access: 'signed-in',
     handler: async (req, res) => {
-      res.json(await auth.me(actor(req).id));
+      res.json(await auth.me(actor(req)));
     },
   },
   {
@@ -144,7 +144,7 @@ export const authRouter = defineRouter('/api/auth', [
       const user = await auth.acceptInvite(req.params.token as string, req.body);
       await logIn(req, auth.toSessionUser(user));
       await recordAudit(req, 'invite.accept', null, { userId: user.id, breweryId: user.breweryId });
-      res.status(201).json(await auth.me(user.id));
+      res.status(201).json(await auth.me(auth.toSessionUser(user)));
     },
   },
 ]);

@@ -39,18 +39,22 @@ export async function verifyCredentials(email: string, password: string): Promis
   return user;
 }
 
-export async function me(userId: number): Promise<Me> {
-  const user = await User.findByPk(userId);
-  if (!user) throw unauthenticated();
-  const brewery = await Brewery.findByPk(user.breweryId);
-  if (!brewery) throw unauthenticated();
+/** What the client knows of the signed-in person: the session's user (loaded this request) and their brewery. */
+export async function me(user: Express.User): Promise<Me> {
+  const brewery = await breweryOf(user);
   return {
     id: user.id,
     email: user.email,
     displayName: user.displayName,
     role: user.role,
-    brewery: { id: brewery.id, name: brewery.name, unitSystem: brewery.unitSystem, timeZone: brewery.timeZone },
+    brewery,
   };
+}
+
+export async function breweryOf(user: Pick<Express.User, 'breweryId'>): Promise<Me['brewery']> {
+  const brewery = await Brewery.findByPk(user.breweryId);
+  if (!brewery) throw unauthenticated();
+  return { id: brewery.id, name: brewery.name, unitSystem: brewery.unitSystem, timeZone: brewery.timeZone };
 }
 
 /** Sign-up creates a brewery and its head brewer. */
