@@ -7,6 +7,5 @@ export { Dialog } from './dialog';
 export { ToastProvider, useToast } from './toast';
 export { cx } from './cx';
 export { FormBanner } from './form-banner';
-export { PasswordHint } from './password-hint';
-export { TimeZoneOptions } from './time-zone-options';
-export { UnitField } from './unit-field';
+// PasswordHint, TimeZoneOptions and UnitField are imported by path: they pull in form and unit code
+// that the initial page (sign-in, app shell) must not load.
