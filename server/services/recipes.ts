@@ -10,6 +10,9 @@ import {
   type SaveScaledInput,
   type SaveVersionInput,
   type UpdateRecipeInput,
+  type RecipeListRow,
+  type VersionSummary,
+  type Difference,
 } from '../../shared/schemas/recipes';
 import { sequelize } from '../config/database';
 import { conflict, notFound } from '../errors';
@@ -19,22 +22,6 @@ import { equipmentFromRow, findEquipment, findVersion, scaleVersion } from './re
 interface Actor {
   id: number;
   breweryId: number;
-}
-
-export interface RecipeListRow {
-  id: number;
-  name: string;
-  style: string;
-  status: string;
-  latestVersionId: number;
-  latestVersion: number;
-  og: number;
-  fg: number;
-  ibu: number;
-  srm: number;
-  abvPct: number;
-  lastBrewedAt: string | null;
-  updatedAt: string;
 }
 
 export async function listRecipes(breweryId: number): Promise<RecipeListRow[]> {
@@ -54,22 +41,6 @@ export async function listRecipes(breweryId: number): Promise<RecipeListRow[]> {
     lastBrewedAt: r.lastBrewedAt ? new Date(r.lastBrewedAt).toISOString() : null,
     updatedAt: new Date(r.updatedAt).toISOString(),
   }));
-}
-
-export interface VersionSummary {
-  id: number;
-  number: number;
-  changeNote: string;
-  authorName: string;
-  createdAt: string;
-  frozenAt: string | null;
-  equipmentProfileId: number;
-  batchVolumeL: number;
-  og: number;
-  fg: number;
-  ibu: number;
-  srm: number;
-  abvPct: number;
 }
 
 async function findRecipe(breweryId: number, id: number, transaction?: Transaction): Promise<Recipe> {
@@ -212,12 +183,6 @@ export async function saveScaledVersion(actor: Actor, recipeId: number, versionI
     const version = await writeVersion(actor, s.recipe, { changeNote: input.changeNote, equipmentProfileId: s.targetEquipmentId, content }, transaction);
     return { id: version.id, number: version.number };
   });
-}
-
-export interface Difference {
-  path: string;
-  a: string | number | boolean | null;
-  b: string | number | boolean | null;
 }
 
 type Leaf = string | number | boolean | null;

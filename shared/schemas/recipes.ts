@@ -347,3 +347,46 @@ export function resolveHopShares(recipeName: string, content: RecipeVersionConte
   const solved = hopWeightsForIbuShares(toRecipeInput(recipeName, content), equipment, content.targets.ibu, shares);
   return { ...content, hops: content.hops.map((h, i) => ({ ...h, weightG: solved[i]!.weightG })) };
 }
+
+// ---------------------------------------------------------------- API answers (shared by the server and the client)
+
+/** One row of the recipe list: the recipe with its latest version's numbers. */
+export interface RecipeListRow {
+  id: number;
+  name: string;
+  style: string;
+  status: RecipeStatus;
+  latestVersionId: number;
+  latestVersion: number;
+  og: number;
+  fg: number;
+  ibu: number;
+  srm: number;
+  abvPct: number;
+  lastBrewedAt: string | null;
+  updatedAt: string;
+}
+
+/** A version in a recipe's history. */
+export interface VersionSummary {
+  id: number;
+  number: number;
+  changeNote: string;
+  authorName: string;
+  createdAt: string;
+  frozenAt: string | null;
+  equipmentProfileId: number;
+  batchVolumeL: number;
+  og: number;
+  fg: number;
+  ibu: number;
+  srm: number;
+  abvPct: number;
+}
+
+/** One changed value between two versions, by its path in the version's content. */
+export interface Difference {
+  path: string;
+  a: string | number | boolean | null;
+  b: string | number | boolean | null;
+}

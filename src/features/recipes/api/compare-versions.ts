@@ -1,13 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
+import type { Difference } from '../../../../shared/schemas/recipes';
 import type { VersionDetail } from './get-version';
 import { recipeKeys } from './keys';
-
-export interface Difference {
-  path: string;
-  a: string | number | boolean | null;
-  b: string | number | boolean | null;
-}
 
 export interface Comparison {
   recipe: VersionDetail['recipe'];

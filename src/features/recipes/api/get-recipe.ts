@@ -1,23 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import type { RecipeStatus } from '../../../../shared/schemas/recipes';
+import type { RecipeStatus, VersionSummary } from '../../../../shared/schemas/recipes';
 import { recipeKeys } from './keys';
-
-export interface VersionSummary {
-  id: number;
-  number: number;
-  changeNote: string;
-  authorName: string;
-  createdAt: string;
-  frozenAt: string | null;
-  equipmentProfileId: number;
-  batchVolumeL: number;
-  og: number;
-  fg: number;
-  ibu: number;
-  srm: number;
-  abvPct: number;
-}
 
 export interface RecipeDetail {
   id: number;

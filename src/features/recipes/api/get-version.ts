@@ -1,8 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import type { ComputedRecipe } from '../../../../shared/brewing';
-import type { RecipeStatus, RecipeVersionContent } from '../../../../shared/schemas/recipes';
-import type { VersionSummary } from './get-recipe';
+import type { RecipeStatus, RecipeVersionContent, VersionSummary } from '../../../../shared/schemas/recipes';
 import { recipeKeys } from './keys';
 
 export interface VersionDetail {

@@ -3,7 +3,8 @@ import { Card, ErrorState, Loading, PageHeader, Table, Td, Th, cx } from '../../
 import type { UnitSystem } from '../../../../shared/schemas/auth';
 import { useCurrentUser } from '../../../app/current-user';
 import { show, showGrain, showSmallWeight, showVolume } from '../../../lib/units';
-import { useComparison, type Difference } from '../api/compare-versions';
+import { useComparison } from '../api/compare-versions';
+import type { Difference } from '../../../../shared/schemas/recipes';
 import type { VersionDetail } from '../api/get-version';
 
 /** Plain words for the paths in a version's document. */

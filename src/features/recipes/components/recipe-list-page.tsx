@@ -12,7 +12,8 @@ import {
 import { srmToHex } from '../../../../shared/brewing';
 import { Button, EmptyState, ErrorState, Loading, PageHeader, SelectField, Table, Td, TextField, Th } from '../../../components/ui';
 import { useCurrentUser } from '../../../app/current-user';
-import { useRecipeList, type RecipeListRow } from '../api/list-recipes';
+import { useRecipeList } from '../api/list-recipes';
+import type { RecipeListRow } from '../../../../shared/schemas/recipes';
 
 const col = createColumnHelper<RecipeListRow>();
 
