@@ -9,7 +9,7 @@ import { pathToFileURL } from 'node:url';
 import * as mariadb from 'mariadb';
 import { startMariaDb, stopMariaDb } from './lib/mariadb-instance';
 import { ROOT } from './lib/paths';
-import { apiEnv, prepareInstance, signIn, startApi, type ApiProcess } from './fault-harness';
+import { apiEnv, numberArg, prepareInstance, signIn, startApi, type ApiProcess } from './fault-harness';
 import { connectionParts } from './backup';
 
 export const FAULT_DATA = {
@@ -185,13 +185,8 @@ export async function runCrashFault(options: { entries: number; rounds?: number;
   }
 }
 
-function arg(name: string, fallback: number): number {
-  const i = process.argv.indexOf(`--${name}`);
-  return i > 0 ? Number(process.argv[i + 1]) : fallback;
-}
-
 if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) {
-  runCrashFault({ entries: arg('entries', 200), rounds: arg('rounds', 1) }).then(
+  runCrashFault({ entries: numberArg('entries', 200), rounds: numberArg('rounds', 1) }).then(
     (r) => {
       const ok = r.ackedMissing + r.ackedWithoutAudit + r.ackedWithoutIdempotency + r.halfWritten + r.duplicateKeys + r.chainsBroken === 0 && r.finalEntries === r.sent;
       console.log(ok ? 'PASS: nothing answered 201 was lost, nothing half-written, every entry exactly once.' : 'FAIL');

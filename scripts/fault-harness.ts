@@ -80,3 +80,9 @@ export async function signIn(url: string, email: string, password: string): Prom
   if (!cookie) throw new Error('sign-in set no cookie');
   return cookie.split(';')[0]!;
 }
+
+/** A numeric command-line option of the long-form fault runs (`--entries 500`), or its default. */
+export function numberArg(name: string, fallback: number): number {
+  const i = process.argv.indexOf(`--${name}`);
+  return i > 0 ? Number(process.argv[i + 1]) : fallback;
+}

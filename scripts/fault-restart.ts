@@ -5,7 +5,7 @@
 import { pathToFileURL } from 'node:url';
 import * as mariadb from 'mariadb';
 import { stopMariaDb } from './lib/mariadb-instance';
-import { apiEnv, prepareInstance, signIn, startApi, type ApiProcess } from './fault-harness';
+import { apiEnv, numberArg, prepareInstance, signIn, startApi, type ApiProcess } from './fault-harness';
 import { FAULT_DATA } from './fault-crash';
 import { connectionParts } from './backup';
 import { createOutbox, sendItem, type OutboxItem, type OutboxStore } from '../src/lib/outbox';
@@ -119,13 +119,8 @@ export async function runRestartFault(options: { entries: number; restarts: numb
   }
 }
 
-function arg(name: string, fallback: number): number {
-  const i = process.argv.indexOf(`--${name}`);
-  return i > 0 ? Number(process.argv[i + 1]) : fallback;
-}
-
 if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) {
-  runRestartFault({ entries: arg('entries', 60), restarts: arg('restarts', 2) }).then(
+  runRestartFault({ entries: numberArg('entries', 60), restarts: numberArg('restarts', 2) }).then(
     (r) => {
       const ok = r.arrived === r.enqueued && r.duplicates === 0 && r.outOfOrder === 0;
       console.log(ok ? 'PASS: every entry arrived exactly once, in order.' : 'FAIL');
