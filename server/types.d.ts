@@ -1,4 +1,5 @@
 import type { Role } from '../shared/schemas/roles';
+import type { Me } from '../shared/schemas/auth';
 
 declare global {
   namespace Express {
@@ -9,6 +10,7 @@ declare global {
       role: Role;
       email: string;
       displayName: string;
+      brewery: Me['brewery'];
     }
   }
 }
@@ -19,6 +21,8 @@ declare module 'express-session' {
     signedInAt?: number;
     /** Last request (ms since epoch, to the minute): the idle timeout counts from here. */
     lastSeenAt?: number;
+    /** The person and brewery the session store loaded with the session (never stored; see server/middlewares/session.ts). */
+    loadedUser?: { id: number; user: Express.User | false };
   }
 }
 

@@ -23,7 +23,7 @@ function logIn(req: Request, user: Express.User): Promise<void> {
   return new Promise((resolve, reject) => {
     req.login(user, (err) => {
       if (err) return reject(err);
-      req.session.signedInAt = Date.now();
+      req.session.signedInAt = req.session.lastSeenAt = Date.now();
       resolve();
     });
   });
@@ -53,7 +53,7 @@ export const authRouter = defineRouter('/api/auth', [
       }
       await logIn(req, user);
       await recordAudit(req, 'sign-in.success', null, { userId: user.id, breweryId: user.breweryId });
-      res.json(await auth.me(user));
+      res.json(auth.me(user));
     },
   },
   {
@@ -63,9 +63,11 @@ export const authRouter = defineRouter('/api/auth', [
     body: signUpSchema,
     handler: async (req, res) => {
       const user = await auth.signUp(req.body);
-      await logIn(req, auth.toSessionUser(user));
+      const signedIn = await auth.sessionUser(user.id);
+      if (!signedIn) throw unauthenticated();
+      await logIn(req, signedIn);
       await recordAudit(req, 'sign-up', null, { userId: user.id, breweryId: user.breweryId });
-      res.status(201).json(await auth.me(auth.toSessionUser(user)));
+      res.status(201).json(auth.me(signedIn));
     },
   },
   {
@@ -84,7 +86,7 @@ export const authRouter = defineRouter('/api/auth', [
     path: '/me',
     access: 'signed-in',
     handler: async (req, res) => {
-      res.json(await auth.me(actor(req)));
+      res.json(auth.me(actor(req)));
     },
   },
   {
@@ -142,9 +144,11 @@ export const authRouter = defineRouter('/api/auth', [
     body: acceptInviteSchema,
     handler: async (req, res) => {
       const user = await auth.acceptInvite(req.params.token as string, req.body);
-      await logIn(req, auth.toSessionUser(user));
+      const signedIn = await auth.sessionUser(user.id);
+      if (!signedIn) throw unauthenticated();
+      await logIn(req, signedIn);
       await recordAudit(req, 'invite.accept', null, { userId: user.id, breweryId: user.breweryId });
-      res.status(201).json(await auth.me(auth.toSessionUser(user)));
+      res.status(201).json(auth.me(signedIn));
     },
   },
 ]);

@@ -46,7 +46,7 @@ export const breweryRouter = defineRouter('/api/brewery', [
     path: '/',
     access: 'signed-in',
     handler: async (req, res) => {
-      res.json(await auth.breweryOf(actor(req)));
+      res.json(actor(req).brewery);
     },
   },
   {

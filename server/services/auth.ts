@@ -1,4 +1,4 @@
-import { Op } from 'sequelize';
+import { Op, QueryTypes } from 'sequelize';
 import { sequelize } from '../config/database';
 import { Brewery, Invite, Session, User } from '../models';
 import { badRequest, conflict, notFound, unauthenticated } from '../errors';
@@ -19,15 +19,42 @@ import { ROLE_LABELS } from '../../shared/schemas/roles';
 const INVITE_HOURS = 72;
 const RESET_HOURS = 2;
 
-export function toSessionUser(user: User): Express.User {
-  return { id: user.id, breweryId: user.breweryId, role: user.role, email: user.email, displayName: user.displayName };
+/** The person behind a session, with their brewery: the columns one signed-in request reads. */
+export const SESSION_USER_COLUMNS = `u.id AS userId, u.brewery_id AS breweryId, u.role, u.email, u.display_name AS displayName,
+  u.disabled_at AS disabledAt, b.name AS breweryName, b.unit_system AS unitSystem, b.time_zone AS timeZone`;
+
+export interface SessionUserRow {
+  userId: number | null;
+  breweryId: number | null;
+  role: Express.User['role'] | null;
+  email: string | null;
+  displayName: string | null;
+  disabledAt: Date | null;
+  breweryName: string | null;
+  unitSystem: Express.User['brewery']['unitSystem'] | null;
+  timeZone: string | null;
 }
 
-/** Loads the person behind a session; a disabled or vanished account has no session. */
+/** A row of SESSION_USER_COLUMNS as the signed-in person; a disabled or vanished account has no session. */
+export function toSessionUser(row: SessionUserRow | undefined): Express.User | false {
+  if (!row || row.userId === null || row.disabledAt !== null || row.breweryName === null) return false;
+  return {
+    id: row.userId,
+    breweryId: row.breweryId!,
+    role: row.role!,
+    email: row.email!,
+    displayName: row.displayName!,
+    brewery: { id: row.breweryId!, name: row.breweryName, unitSystem: row.unitSystem!, timeZone: row.timeZone! },
+  };
+}
+
+/** Loads the person with this id and their brewery in one statement. */
 export async function sessionUser(id: number): Promise<Express.User | false> {
-  const user = await User.findByPk(id);
-  if (!user || user.disabledAt) return false;
-  return toSessionUser(user);
+  const [row] = await sequelize.query<SessionUserRow>(
+    `SELECT ${SESSION_USER_COLUMNS} FROM users u JOIN breweries b ON b.id = u.brewery_id WHERE u.id = ?`,
+    { type: QueryTypes.SELECT, replacements: [id] },
+  );
+  return toSessionUser(row);
 }
 
 /** Checks e-mail and password; answers the same way whether the e-mail is unknown or the password wrong. */
@@ -39,22 +66,9 @@ export async function verifyCredentials(email: string, password: string): Promis
   return user;
 }
 
-/** What the client knows of the signed-in person: the session's user (loaded this request) and their brewery. */
-export async function me(user: Express.User): Promise<Me> {
-  const brewery = await breweryOf(user);
-  return {
-    id: user.id,
-    email: user.email,
-    displayName: user.displayName,
-    role: user.role,
-    brewery,
-  };
-}
-
-export async function breweryOf(user: Pick<Express.User, 'breweryId'>): Promise<Me['brewery']> {
-  const brewery = await Brewery.findByPk(user.breweryId);
-  if (!brewery) throw unauthenticated();
-  return { id: brewery.id, name: brewery.name, unitSystem: brewery.unitSystem, timeZone: brewery.timeZone };
+/** What the client knows of the signed-in person: the session's user and brewery, both loaded this request. */
+export function me(user: Express.User): Me {
+  return { id: user.id, email: user.email, displayName: user.displayName, role: user.role, brewery: user.brewery };
 }
 
 /** Sign-up creates a brewery and its head brewer. */

@@ -54,8 +54,11 @@ function toView(n: TastingNote, prevHash: string, correctedBy: number[]): Tastin
   };
 }
 
+/** Who reads or signs notes: the signed-in person (their brewery's settings are not needed). */
+type NoteAuthor = Omit<Express.User, 'brewery'>;
+
 /** A batch's notes in order, each with its signature checked against the chain. */
-export async function listTastingNotes(actor: Express.User, batchId: number, transaction?: Transaction): Promise<TastingNoteView[]> {
+export async function listTastingNotes(actor: NoteAuthor, batchId: number, transaction?: Transaction): Promise<TastingNoteView[]> {
   await findBatch(actor.breweryId, batchId, transaction);
   const rows = await TastingNote.findAll({ where: { batchId, breweryId: actor.breweryId }, order: [['sequence', 'ASC']], transaction });
   const correctedBy = new Map<number, number[]>();
@@ -73,7 +76,7 @@ export async function listTastingNotes(actor: Express.User, batchId: number, tra
   });
 }
 
-async function replayOf(actor: Express.User, batchId: number, input: TastingNoteInput, transaction?: Transaction): Promise<TastingNote | null> {
+async function replayOf(actor: NoteAuthor, batchId: number, input: TastingNoteInput, transaction?: Transaction): Promise<TastingNote | null> {
   const existing = await TastingNote.findOne({ where: { breweryId: actor.breweryId, idempotencyKey: input.idempotencyKey }, transaction });
   if (!existing) return null;
   const same =
@@ -87,7 +90,7 @@ async function replayOf(actor: Express.User, batchId: number, input: TastingNote
 
 /** Records one signed note; the same idempotency key with the same note returns the first. */
 export async function addTastingNote(
-  actor: Express.User,
+  actor: NoteAuthor,
   batchId: number,
   input: TastingNoteInput,
   transaction?: Transaction,
@@ -109,7 +112,7 @@ export async function addTastingNote(
   return { note: notes.find((n) => n.id === Number(result.row.id))!, created: result.created };
 }
 
-async function append(actor: Express.User, batchId: number, input: TastingNoteInput, transaction: Transaction) {
+async function append(actor: NoteAuthor, batchId: number, input: TastingNoteInput, transaction: Transaction) {
   // Locking the batch row serialises the notes of one batch, so the chain never forks.
   const batch = await findBatch(actor.breweryId, batchId, transaction, true);
   const replay = await replayOf(actor, batch.id, input, transaction);
