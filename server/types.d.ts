@@ -3,6 +3,11 @@ import type { Me } from '../shared/schemas/auth';
 
 declare global {
   namespace Express {
+    interface Request {
+      /** The person and brewery the session store loaded with the session (see server/middlewares/session.ts). */
+      loadedSessionUser?: { id: number; user: User | false };
+    }
+
     /** The signed-in person, loaded from the session on every request. */
     interface User {
       id: number;
@@ -21,8 +26,6 @@ declare module 'express-session' {
     signedInAt?: number;
     /** Last request (ms since epoch, to the minute): the idle timeout counts from here. */
     lastSeenAt?: number;
-    /** The person and brewery the session store loaded with the session (never stored; see server/middlewares/session.ts). */
-    loadedUser?: { id: number; user: Express.User | false };
   }
 }
 

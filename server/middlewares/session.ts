@@ -14,11 +14,13 @@ export const SESSION_ABSOLUTE_MS = 24 * 60 * 60 * 1000;
 export const SESSION_COOKIE = isProduction ? '__Host-kettlewright' : 'kettlewright.sid';
 
 const SequelizeStore = connectSessionSequelize(session.Store);
+const LOADED_USER = Symbol('loaded user');
+type LoadedSession = SessionData & { [LOADED_USER]?: Request['loadedSessionUser'] };
 
 /**
  * Sessions in MariaDB through connect-session-sequelize, whose get() is replaced by one SELECT that also loads
  * the signed-in person and their brewery: a signed-in request costs one statement before its route runs.
- * What was loaded rides on the session as `loadedUser` for passport's deserializer and is never written back.
+ * What was loaded is handed to passport's deserializer on the request (req.loadedSessionUser).
  */
 class SessionStore extends SequelizeStore {
   override get(sid: string, callback: (err: unknown, session?: SessionData | null) => void): void {
@@ -26,26 +28,29 @@ class SessionStore extends SequelizeStore {
       .query<SessionUserRow & { data: string | null }>(
         `SELECT s.data, ${SESSION_USER_COLUMNS}
            FROM sessions s LEFT JOIN users u ON u.id = s.user_id LEFT JOIN breweries b ON b.id = u.brewery_id
-          WHERE s.sid = ? AND s.expires > ?`,
-        { type: QueryTypes.SELECT, replacements: [sid, new Date()] },
+          WHERE s.sid = ? AND s.expires > UTC_TIMESTAMP()`,
+        { type: QueryTypes.SELECT, replacements: [sid] },
       )
       .then(([row]) => {
         if (!row?.data) return callback(null, null);
-        const data = JSON.parse(row.data) as SessionData;
-        if (row.userId !== null) data.loadedUser = { id: row.userId, user: toSessionUser(row) };
+        const data = JSON.parse(row.data) as LoadedSession;
+        if (row.userId !== null) data[LOADED_USER] = { id: row.userId, user: toSessionUser(row) };
         callback(null, data);
       }, callback);
   }
 
-  override set(sid: string, data: SessionData, callback?: (err?: unknown) => void): void {
-    const { loadedUser: _loaded, ...stored } = data;
-    super.set(sid, stored as SessionData, callback);
+  /** express-session builds req.session here: the person loaded with it moves to the request, not the session. */
+  override createSession(req: Request, data: SessionData): session.Session & SessionData {
+    const loaded = data as LoadedSession;
+    req.loadedSessionUser = loaded[LOADED_USER];
+    delete loaded[LOADED_USER];
+    return super.createSession(req, data);
   }
 }
 
 passport.serializeUser((user, done) => done(null, user.id));
 passport.deserializeUser<number, Request>((req, id, done) => {
-  const loaded = req.session.loadedUser;
+  const loaded = req.loadedSessionUser;
   if (loaded?.id === id) return done(null, loaded.user);
   sessionUser(id).then((user) => done(null, user), done);
 });
