@@ -14,7 +14,7 @@ export const reportsRouter = defineRouter('/api/reports', [
     query: productionQuery,
     handler: async (req, res) => {
       const { month } = req.query as unknown as z.infer<typeof productionQuery>;
-      res.json(await reports.productionReport(actor(req).breweryId, month));
+      res.json(await reports.productionReport(actor(req).brewery, month));
     },
   },
   {
@@ -24,7 +24,7 @@ export const reportsRouter = defineRouter('/api/reports', [
     query: productionQuery,
     handler: async (req, res) => {
       const { month } = req.query as unknown as z.infer<typeof productionQuery>;
-      const report = await reports.productionReport(actor(req).breweryId, month);
+      const report = await reports.productionReport(actor(req).brewery, month);
       res
         .type('text/csv; charset=utf-8')
         .attachment(`production-${month}.csv`)

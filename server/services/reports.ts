@@ -1,14 +1,12 @@
 /**
  * Production figures and batch history, read straight from the signed log and its projections:
  * knockout volumes and OG from the brew-day log (after corrections), packaging runs, gravity readings.
- * Each report is a fixed handful of indexed queries, whatever the brewery's size.
+ * Each report is one statement that reads indexes and a handful of rows, whatever the brewery's size.
  */
 import { QueryTypes } from 'sequelize';
 import { sequelize } from '../config/database';
-import { Brewery, Recipe } from '../models';
 import { notFound } from '../errors';
 import { achievedEfficiency, apparentAttenuation, lineVolumeL, type PackageLine } from '../../shared/brewing';
-import { effectiveMeasurements } from '../../shared/batches/brew-day';
 import type { BatchHistory, BeerFigures, HistoryRow, PackageFigures, ProductionReport } from '../../shared/schemas/reports';
 
 /** The UTC instant of local midnight on the first of `year-month` in `timeZone` (month may be 13 → next year). */
@@ -24,113 +22,119 @@ export function monthStartUtc(year: number, month: number, timeZone: string): Da
   return new Date(guess - (asLocal - guess));
 }
 
-interface EntryRow {
-  id: number;
-  kind: string;
-  step_key: string | null;
-  data: Record<string, unknown> | string;
-  corrects_entry_id: number | null;
-}
-
 const json = <T>(v: T | string): T => (typeof v === 'string' ? (JSON.parse(v) as T) : v);
 
-/** Knockout litres and OG per knockout entry id, after corrections. */
-async function knockouts(entryIds: number[]): Promise<Map<number, { volumeL?: number; gravitySg?: number }>> {
-  if (!entryIds.length) return new Map();
-  const rows = await sequelize.query<EntryRow>(
-    // Two index lookups (primary key; corrects_entry_id) rather than one OR, which MariaDB may answer with a scan.
-    `SELECT id, kind, step_key, data, corrects_entry_id FROM batch_log_entries WHERE id IN (:ids)
-     UNION ALL
-     SELECT id, kind, step_key, data, corrects_entry_id FROM batch_log_entries WHERE corrects_entry_id IN (:ids)
-     ORDER BY id`,
-    { replacements: { ids: entryIds }, type: QueryTypes.SELECT },
-  );
-  const effective = effectiveMeasurements(
-    rows.map((r) => ({ id: Number(r.id), kind: r.kind, stepKey: r.step_key, data: json(r.data), correctsEntryId: r.corrects_entry_id === null ? null : Number(r.corrects_entry_id) })),
-  );
-  return new Map([...effective].map(([id, e]) => [id, e.measurements]));
-}
+/**
+ * A knockout entry's measured value after corrections, as the log's JSON text (NULL when not measured): the latest
+ * correction that sets the field wins, else the entry's own value. Corrections count only for an entry that carries
+ * measurements itself, as in shared/batches' effectiveMeasurements. `k` is the knockout entry's alias.
+ */
+const measured = (k: string, field: 'volumeL' | 'gravitySg') => `IF(JSON_EXISTS(${k}.data, '$.measurements'), COALESCE(
+    (SELECT JSON_VALUE(c.data, '$.measurements.${field}') FROM batch_log_entries c
+      WHERE c.corrects_entry_id = ${k}.id AND c.kind = 'correction' AND JSON_EXISTS(c.data, '$.measurements.${field}')
+      ORDER BY c.id DESC LIMIT 1),
+    JSON_VALUE(${k}.data, '$.measurements.${field}')), NULL)`;
+
+/** A batch's knockout entries (a step or measurement at 'knockout-end') with the litres measured, after corrections. */
+const KNOCKOUTS = `knockout AS (
+  SELECT k.id, k.brewery_id, k.batch_id, k.captured_at, ${measured('k', 'volumeL')} AS volumeL
+    FROM batch_log_entries k WHERE k.step_key = 'knockout-end')`;
+
+/** One in-tank row per knockout before the month's end of the batches (alias b) that `tables` and `where` find, with what each packaged before the month. */
+const inTank = (tables: string, where: string) => `
+  SELECT 'in_tank', b.id, b.beer_name, k.volumeL, NULL,
+         (SELECT SUM(p.packaged_l) FROM packaging_runs p WHERE p.batch_id = b.id AND p.packaged_at < :from)
+    FROM ${tables}
+    JOIN knockout k ON k.batch_id = b.id AND k.captured_at < :to
+   WHERE ${where}`;
 
 /**
- * The report's batch query: every batch that counts in the month, tagged by why — knocked out in the month,
- * dumped in the month, or still in a tank at its end. A batch was in a tank at the month's end when it was
- * knocked out before then and had not finished: it is still open now (brewing, fermenting, conditioning), or it
- * was dumped or had its final packaging run after the end. Starting from those keeps the work proportional to
- * what happened since the month, not to the brewery's whole history. Exported so the benchmark can EXPLAIN it.
+ * The monthly report in one statement, one row per reason a batch or run counts:
+ * - brewed: a knockout in the month;
+ * - dumped: a batch dumped in the month, with its first knockout;
+ * - in_tank: a knockout before the month's end of a batch still unfinished then: open now (brewing, fermenting,
+ *   conditioning), dumped after the end, or with its final packaging run after the end. The last are found among
+ *   runs after the end of batches knocked out before it, both read from indexes alone, so a month years back costs
+ *   index entries rather than rows; each carries the litres its batch packaged before the month;
+ * - packaged: a packaging run in the month, with its package lines.
+ * Exported so the benchmark can EXPLAIN it.
  */
-export const PRODUCTION_BATCHES_SQL = `
-  SELECT 'brewed' AS why, k.batch_id AS batchId, b.beer_name AS beerName, k.id AS knockoutId
-    FROM batch_log_entries k JOIN batches b ON b.id = k.batch_id
-   WHERE k.brewery_id = :breweryId AND k.step_key = 'knockout-end' AND k.captured_at >= :from AND k.captured_at < :to
+export const PRODUCTION_SQL = `WITH ${KNOCKOUTS}
+  SELECT 'brewed' AS why, b.id AS batchId, b.beer_name AS beerName, k.volumeL, NULL AS runLines, NULL AS packagedL
+    FROM knockout k JOIN batches b ON b.id = k.batch_id
+   WHERE k.brewery_id = :breweryId AND k.captured_at >= :from AND k.captured_at < :to
   UNION ALL
-  SELECT 'dumped', b.id, b.beer_name, (SELECT MIN(k.id) FROM batch_log_entries k WHERE k.batch_id = b.id AND k.step_key = 'knockout-end')
+  SELECT 'dumped', b.id, b.beer_name, (SELECT k.volumeL FROM knockout k WHERE k.batch_id = b.id ORDER BY k.id LIMIT 1), NULL, NULL
     FROM batches b
    WHERE b.brewery_id = :breweryId AND b.status = 'dumped' AND b.updated_at >= :from AND b.updated_at < :to
+  UNION ALL ${inTank('batches b', `b.brewery_id = :breweryId AND b.status IN ('brewing', 'fermenting', 'conditioning')`)}
+  UNION ALL ${inTank('batches b', `b.brewery_id = :breweryId AND b.status = 'dumped' AND b.updated_at >= :to`)}
+  UNION ALL ${inTank(
+    `packaging_runs fp
+    JOIN batches b ON b.id = fp.batch_id AND NOT (b.status = 'dumped' AND b.updated_at >= :to)
+    JOIN batch_log_entries fe ON fe.id = fp.log_entry_id AND JSON_VALUE(fe.data, '$.final') IN ('1', 'true')`,
+    `fp.brewery_id = :breweryId AND fp.packaged_at >= :to
+     AND fp.batch_id IN (SELECT kb.batch_id FROM batch_log_entries kb WHERE kb.brewery_id = :breweryId AND kb.step_key = 'knockout-end' AND kb.captured_at < :to)`,
+  )}
   UNION ALL
-  SELECT 'in_tank', k.batch_id, b.beer_name, k.id
-    FROM (
-      SELECT id FROM batches WHERE brewery_id = :breweryId AND status IN ('brewing', 'fermenting', 'conditioning')
-      UNION
-      SELECT id FROM batches WHERE brewery_id = :breweryId AND status = 'dumped' AND updated_at >= :to
-      UNION
-      SELECT p.batch_id FROM packaging_runs p JOIN batch_log_entries pe ON pe.id = p.log_entry_id
-       WHERE p.brewery_id = :breweryId AND p.packaged_at >= :to AND JSON_VALUE(pe.data, '$.final') IN ('1', 'true')
-    ) still_open
-    JOIN batches b ON b.id = still_open.id
-    JOIN batch_log_entries k ON k.batch_id = b.id AND k.step_key = 'knockout-end'
-   WHERE k.captured_at < :to`;
-
-/** Packaging runs in the month, and runs before the month's end of batches still in a tank (partly packaged). */
-export const PRODUCTION_PACKAGING_SQL = `
-  SELECT IF(p.packaged_at >= :from, 'in_month', 'earlier') AS why, p.batch_id AS batchId, b.beer_name AS beerName, p.lines, p.packaged_l AS packagedL
+  SELECT 'packaged', b.id, b.beer_name, NULL, p.lines, p.packaged_l
     FROM packaging_runs p JOIN batches b ON b.id = p.batch_id
-   WHERE p.brewery_id = :breweryId AND p.packaged_at < :to AND (p.packaged_at >= :from OR p.batch_id IN (:inTank))`;
+   WHERE p.brewery_id = :breweryId AND p.packaged_at >= :from AND p.packaged_at < :to`;
 
-export async function productionReport(breweryId: number, month: string): Promise<ProductionReport> {
-  const brewery = await Brewery.findByPk(breweryId, { attributes: ['timeZone'] });
-  if (!brewery) throw notFound('This brewery');
+interface ProductionRow {
+  why: 'brewed' | 'dumped' | 'in_tank' | 'packaged';
+  batchId: number;
+  beerName: string;
+  /** Knockout litres as the log's JSON text. */
+  volumeL: string | null;
+  runLines: PackageLine[] | string | null;
+  /** A run's litres; for in_tank, what the batch packaged before the month. */
+  packagedL: number | null;
+}
+
+/** The month's bounds in the brewery's time zone. */
+function monthBounds(month: string, timeZone: string) {
   const [year, mon] = month.split('-').map(Number) as [number, number];
-  const from = monthStartUtc(year, mon, brewery.timeZone);
-  const to = monthStartUtc(year, mon + 1, brewery.timeZone);
+  return { from: monthStartUtc(year, mon, timeZone), to: monthStartUtc(year, mon + 1, timeZone) };
+}
 
-  const batches = await sequelize.query<{ why: 'brewed' | 'dumped' | 'in_tank'; batchId: number; beerName: string; knockoutId: number | null }>(
-    PRODUCTION_BATCHES_SQL,
-    { replacements: { breweryId, from, to }, type: QueryTypes.SELECT },
-  );
-  const inTank = batches.filter((b) => b.why === 'in_tank').map((b) => b.batchId);
-  const [volumes, runs] = await Promise.all([
-    knockouts([...new Set(batches.map((b) => b.knockoutId).filter((id): id is number => id !== null))]),
-    sequelize.query<{ why: 'in_month' | 'earlier'; batchId: number; beerName: string; lines: PackageLine[] | string; packagedL: number }>(
-      PRODUCTION_PACKAGING_SQL,
-      { replacements: { breweryId, from, to, inTank: inTank.length ? inTank : [0] }, type: QueryTypes.SELECT },
-    ),
-  ]);
+export async function productionReport(brewery: { id: number; timeZone: string }, month: string): Promise<ProductionReport> {
+  const { from, to } = monthBounds(month, brewery.timeZone);
+  const rows = await sequelize.query<ProductionRow>(PRODUCTION_SQL, { replacements: { breweryId: brewery.id, from, to }, type: QueryTypes.SELECT });
 
   const beers = new Map<string, BeerFigures>();
   const beer = (name: string) => {
     if (!beers.has(name)) beers.set(name, { beerName: name, brewedL: 0, packagedL: 0, dumpedL: 0, inTankL: 0 });
     return beers.get(name)!;
   };
-  const knockoutL = (id: number | null) => (id === null ? 0 : (volumes.get(id)?.volumeL ?? 0));
+  // What each batch had packaged by the month's end: its runs in the month, and for a batch in a tank, before it.
   const packagedBefore = new Map<number, number>();
-  for (const r of runs) packagedBefore.set(r.batchId, (packagedBefore.get(r.batchId) ?? 0) + Number(r.packagedL));
-  for (const b of batches) {
-    if (b.why === 'brewed') beer(b.beerName).brewedL += knockoutL(b.knockoutId);
-    // A dumped batch loses what was still in the tank: its knockout volume less anything packaged before.
-    if (b.why === 'dumped') beer(b.beerName).dumpedL += Math.max(0, knockoutL(b.knockoutId) - (packagedBefore.get(b.batchId) ?? 0));
-    if (b.why === 'in_tank') beer(b.beerName).inTankL += Math.max(0, knockoutL(b.knockoutId) - (packagedBefore.get(b.batchId) ?? 0));
-  }
+  const addPackaged = (batchId: number, litres: number) => packagedBefore.set(batchId, (packagedBefore.get(batchId) ?? 0) + litres);
+  const earlierCounted = new Set<number>();
   const packages = new Map<string, PackageFigures>();
-  for (const r of runs.filter((x) => x.why === 'in_month')) {
-    for (const line of json(r.lines)) {
-      const size = line.kind === 'keg' ? line.size : String(line.sizeMl);
-      const key = `${r.beerName}\u0000${line.kind}\u0000${size}`;
-      const p = packages.get(key) ?? { beerName: r.beerName, kind: line.kind, size, count: 0, volumeL: 0 };
-      p.count += line.count;
-      p.volumeL += lineVolumeL(line);
-      packages.set(key, p);
-      beer(r.beerName).packagedL += lineVolumeL(line);
+  for (const r of rows) {
+    if (r.why === 'packaged') {
+      addPackaged(r.batchId, Number(r.packagedL));
+      for (const line of json(r.runLines!)) {
+        const size = line.kind === 'keg' ? line.size : String(line.sizeMl);
+        const key = `${r.beerName}\u0000${line.kind}\u0000${size}`;
+        const p = packages.get(key) ?? { beerName: r.beerName, kind: line.kind, size, count: 0, volumeL: 0 };
+        p.count += line.count;
+        p.volumeL += lineVolumeL(line);
+        packages.set(key, p);
+        beer(r.beerName).packagedL += lineVolumeL(line);
+      }
+    } else if (r.why === 'in_tank' && r.packagedL !== null && !earlierCounted.has(r.batchId)) {
+      earlierCounted.add(r.batchId);
+      addPackaged(r.batchId, Number(r.packagedL));
     }
+  }
+  const knockoutL = (r: ProductionRow) => (r.volumeL === null ? 0 : Number(r.volumeL));
+  for (const r of rows) {
+    if (r.why === 'brewed') beer(r.beerName).brewedL += knockoutL(r);
+    // A dumped batch loses what was still in the tank: its knockout volume less anything packaged before.
+    if (r.why === 'dumped') beer(r.beerName).dumpedL += Math.max(0, knockoutL(r) - (packagedBefore.get(r.batchId) ?? 0));
+    if (r.why === 'in_tank') beer(r.beerName).inTankL += Math.max(0, knockoutL(r) - (packagedBefore.get(r.batchId) ?? 0));
   }
   const list = [...beers.values()].sort((a, b) => a.beerName.localeCompare(b.beerName));
   const totals = list.reduce(
@@ -148,62 +152,68 @@ export async function productionReport(breweryId: number, month: string): Promis
   };
 }
 
-/** The EXPLAIN plan of the report's two queries (for the benchmark's output). */
+/** The EXPLAIN plan of the report's statement (for the benchmark's output). */
 export async function explainProductionReport(breweryId: number, month: string): Promise<string[]> {
-  const [year, mon] = month.split('-').map(Number) as [number, number];
-  const from = monthStartUtc(year, mon, 'UTC');
-  const to = monthStartUtc(year, mon + 1, 'UTC');
-  const out: string[] = [];
-  for (const [name, sql] of [['batches', PRODUCTION_BATCHES_SQL], ['packaging', PRODUCTION_PACKAGING_SQL]] as const) {
-    const rows = await sequelize.query<Record<string, unknown>>(`EXPLAIN ${sql}`, {
-      replacements: { breweryId, from, to, inTank: [0] },
-      type: QueryTypes.SELECT,
-    });
-    out.push(`${name}:`);
-    for (const r of rows) out.push(`  ${r.id} ${r.select_type} ${r.table} type=${r.type} key=${r.key ?? '-'} rows=${r.rows} ${r.Extra ?? ''}`);
-  }
-  return out;
+  const rows = await sequelize.query<Record<string, unknown>>(`EXPLAIN ${PRODUCTION_SQL}`, {
+    replacements: { breweryId, ...monthBounds(month, 'UTC') },
+    type: QueryTypes.SELECT,
+  });
+  return rows.map((r) => `${r.id} ${r.select_type} ${r.table} type=${r.type} key=${r.key ?? '-'} rows=${r.rows} ${r.Extra ?? ''}`);
 }
 
-const HISTORY_BATCHES_SQL = `
-  SELECT b.id, b.number, b.brew_date AS brewDate, b.status, b.planned_og AS plannedOg,
-         JSON_VALUE(b.plan, '$.equipment.brewhouseEfficiency') AS plannedEfficiency,
-         JSON_VALUE(b.plan, '$.computed.volumes.knockoutL') AS plannedKnockoutL,
-         (SELECT MIN(k.id) FROM batch_log_entries k WHERE k.batch_id = b.id AND k.step_key = 'knockout-end') AS knockoutId
-    FROM batches b
-   WHERE b.brewery_id = :breweryId AND b.recipe_id = :recipeId
-   ORDER BY b.brew_date DESC, b.id DESC
-   LIMIT :limit`;
+/**
+ * A recipe's latest batches, newest first, planned against actual, in one statement: no row when the recipe is not
+ * the brewery's, one row with no batch when it has none. Each batch's first knockout gives the measured OG and
+ * litres (after corrections), its latest gravity reading the FG, its first packaging run the packaging day.
+ */
+const HISTORY_SQL = `
+  SELECT r.name AS recipeName, h.id, h.number, h.brewDate, h.status, h.plannedOg, h.plannedEfficiency, h.plannedKnockoutL,
+         ${measured('k', 'gravitySg')} AS og, ${measured('k', 'volumeL')} AS volumeL,
+         (SELECT g.sg FROM gravity_readings g WHERE g.batch_id = h.id ORDER BY g.taken_at DESC LIMIT 1) AS lastSg,
+         (SELECT MIN(p.packaged_at) FROM packaging_runs p WHERE p.batch_id = h.id) AS firstPackagedAt
+    FROM recipes r
+    LEFT JOIN (
+      SELECT b.id, b.number, b.brew_date AS brewDate, b.status, b.planned_og AS plannedOg,
+             b.planned_efficiency AS plannedEfficiency, b.planned_knockout_l AS plannedKnockoutL,
+             (SELECT MIN(ko.id) FROM batch_log_entries ko WHERE ko.batch_id = b.id AND ko.step_key = 'knockout-end') AS knockoutId
+        FROM batches b
+       WHERE b.brewery_id = :breweryId AND b.recipe_id = :recipeId
+       ORDER BY b.brew_date DESC, b.id DESC
+       LIMIT :limit
+    ) h ON TRUE
+    LEFT JOIN batch_log_entries k ON k.id = h.knockoutId
+   WHERE r.id = :recipeId AND r.brewery_id = :breweryId
+   ORDER BY h.brewDate DESC, h.id DESC`;
+
+interface HistorySqlRow {
+  recipeName: string;
+  id: number | null;
+  number: string;
+  brewDate: string;
+  status: string;
+  plannedOg: number;
+  /** From the frozen plan (stored generated columns). */
+  plannedEfficiency: number | null;
+  plannedKnockoutL: number | null;
+  /** Measured OG and knockout litres as the log's JSON text. */
+  og: string | null;
+  volumeL: string | null;
+  lastSg: number | null;
+  firstPackagedAt: Date | string | null;
+}
 
 /** The latest `limit` batches of a recipe, planned against actual, newest first. */
 export async function batchHistory(breweryId: number, recipeId: number, limit: number): Promise<BatchHistory> {
-  const recipe = await Recipe.findOne({ where: { id: recipeId, breweryId }, attributes: ['id', 'name'] });
-  if (!recipe) throw notFound('This recipe');
-  const batches = await sequelize.query<{
-    id: number; number: string; brewDate: string; status: string; plannedOg: number; plannedEfficiency: string; plannedKnockoutL: string; knockoutId: number | null;
-  }>(HISTORY_BATCHES_SQL, { replacements: { breweryId, recipeId, limit }, type: QueryTypes.SELECT });
-  const ids = batches.length ? batches.map((b) => b.id) : [0];
-  const [measured, later] = await Promise.all([
-    knockouts(batches.map((b) => b.knockoutId).filter((id): id is number => id !== null)),
-    sequelize.query<{ batchId: number; lastSg: number | null; firstPackagedAt: Date | string | null }>(
-      `SELECT b.id AS batchId,
-              (SELECT r.sg FROM gravity_readings r WHERE r.batch_id = b.id ORDER BY r.taken_at DESC LIMIT 1) AS lastSg,
-              (SELECT MIN(p.packaged_at) FROM packaging_runs p WHERE p.batch_id = b.id) AS firstPackagedAt
-         FROM batches b WHERE b.id IN (:ids)`,
-      { replacements: { ids }, type: QueryTypes.SELECT },
-    ),
-  ]);
-  const byBatch = new Map(later.map((l) => [l.batchId, l]));
-  const rows: HistoryRow[] = batches.map((b) => {
-    const m = b.knockoutId === null ? undefined : measured.get(b.knockoutId);
-    const og = m?.gravitySg ?? null;
-    const volumeL = m?.volumeL ?? null;
+  const found = await sequelize.query<HistorySqlRow>(HISTORY_SQL, { replacements: { breweryId, recipeId, limit }, type: QueryTypes.SELECT });
+  if (!found.length) throw notFound('This recipe');
+  const rows: HistoryRow[] = found.filter((b) => b.id !== null).map((b) => {
+    const og = b.og === null ? null : Number(b.og);
+    const volumeL = b.volumeL === null ? null : Number(b.volumeL);
     const plannedEfficiency = Number(b.plannedEfficiency);
-    const l = byBatch.get(b.id);
-    const fg = l?.lastSg ?? null;
-    const packagedAt = l?.firstPackagedAt ? new Date(l.firstPackagedAt) : null;
+    const fg = b.lastSg;
+    const packagedAt = b.firstPackagedAt ? new Date(b.firstPackagedAt) : null;
     return {
-      batchId: b.id,
+      batchId: b.id!,
       number: b.number,
       brewDate: String(b.brewDate),
       status: b.status,
@@ -218,7 +228,7 @@ export async function batchHistory(breweryId: number, recipeId: number, limit: n
       daysBrewToPackage: packagedAt ? Math.floor((packagedAt.getTime() - Date.parse(`${b.brewDate}T00:00:00Z`)) / 86_400_000) : null,
     };
   });
-  return { recipeId: recipe.id, recipeName: recipe.name, rows };
+  return { recipeId, recipeName: found[0]!.recipeName, rows };
 }
 
 /** The monthly report as CSV: one line per beer and a total, in litres, US barrels and hectolitres; then packages. */
