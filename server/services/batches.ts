@@ -1,12 +1,13 @@
 /** Batches: planning from a recipe version, the list, one batch with its log, status and vessel. */
-import { Op, Transaction, type WhereOptions } from 'sequelize';
+import { QueryTypes, Transaction } from 'sequelize';
 import { sequelize } from '../config/database';
-import { AuditEvent, Batch, BatchLogEntry, Vessel } from '../models';
+import { AuditEvent, Batch, Vessel } from '../models';
 import { conflict, notFound } from '../errors';
 import { freezeRecipeVersion, planForBatch } from './recipe-plans';
 import { logEntries } from './batch-log';
 import { signaturesOf } from './signatures';
 import { batchActuals, effectiveMeasurements } from '../../shared/batches/brew-day';
+import type { Measurements } from '../../shared/schemas/batch-log';
 import {
   BATCH_STATUS_LABELS,
   canMoveTo,
@@ -119,43 +120,84 @@ function summary(batch: Batch, vessel: Vessel | undefined, actualOg: number | nu
   };
 }
 
-/** One page of the brewery's batches, newest first, with vessel and planned/actual OG. */
-export async function listBatches(breweryId: number, query: BatchListQuery): Promise<BatchList> {
-  const where: WhereOptions<Batch> = { breweryId, ...(query.status ? { status: query.status } : {}), ...(query.recipeId ? { recipeId: query.recipeId } : {}) };
-  const { rows, count } = await Batch.findAndCountAll({
-    where,
-    attributes: { exclude: ['plan'] },
-    order: [['brewDate', 'DESC'], ['id', 'DESC']],
-    limit: BATCH_PAGE_SIZE,
-    offset: (query.page - 1) * BATCH_PAGE_SIZE,
-  });
-  const ids = rows.map((b) => b.id);
-  const [vessels, entries] = ids.length
-    ? await Promise.all([
-        Vessel.findAll({ where: { breweryId, currentBatchId: { [Op.in]: ids } } }),
-        BatchLogEntry.findAll({
-          // Two indexed lookups (knockouts by batch and step; corrections by brewery and kind) instead of reading every entry of the page's batches.
-          where: {
-            [Op.or]: [
-              { batchId: { [Op.in]: ids }, stepKey: 'knockout-end' },
-              { breweryId, kind: 'correction', batchId: { [Op.in]: ids } },
-            ],
-          },
-          attributes: ['id', 'batchId', 'kind', 'stepKey', 'data', 'correctsEntryId'],
-          order: [['sequence', 'ASC']],
-        }),
-      ])
-    : [[], []];
-  const ogByBatch = new Map<number, number>();
-  for (const id of ids) {
-    const mine = entries.filter((e) => e.batchId === id).map((e) => ({ ...e.get(), id: Number(e.id), correctsEntryId: e.correctsEntryId === null ? null : Number(e.correctsEntryId) }));
-    for (const { stepKey, measurements } of effectiveMeasurements(mine).values()) {
-      if (stepKey === 'knockout-end' && measurements.gravitySg !== undefined) ogByBatch.set(id, measurements.gravitySg);
-    }
+/** A knockout-end entry or a correction of one, as the list query returns it: [id, sequence, kind, stepKey, correctsEntryId, measurements]. */
+type KnockoutTuple = [number, number, string, string | null, number | null, Measurements | null];
+
+interface ListRow {
+  id: number;
+  number: string;
+  beerName: string;
+  recipeId: number | null;
+  status: BatchSummary['status'];
+  brewDate: string;
+  plannedOg: number;
+  vesselId: number | null;
+  vesselName: string | null;
+  knockouts: string | KnockoutTuple[] | null;
+  corrections: string | KnockoutTuple[] | null;
+  total: number | bigint;
+}
+
+const tuples = (raw: ListRow['knockouts']): KnockoutTuple[] => (raw === null ? [] : typeof raw === 'string' ? (JSON.parse(raw) as KnockoutTuple[]) : raw);
+
+/** The OG measured at knockout, after corrections: the same rule as the batch page (effectiveMeasurements). */
+function knockoutOg(row: ListRow): number | null {
+  const entries = [...tuples(row.knockouts), ...tuples(row.corrections)]
+    .sort((a, b) => a[1] - b[1])
+    .map(([id, , kind, stepKey, correctsEntryId, measurements]) => ({ id, kind, stepKey, correctsEntryId, data: measurements === null ? {} : { measurements } }));
+  let og: number | null = null;
+  for (const { stepKey, measurements } of effectiveMeasurements(entries).values()) {
+    if (stepKey === 'knockout-end' && measurements.gravitySg !== undefined) og = measurements.gravitySg;
   }
+  return og;
+}
+
+/**
+ * One page of the brewery's batches, newest first, with vessel and planned/actual OG, in one statement:
+ * the page in index order (brewery, brew date, id) with its vessel; each batch's knockout-end entries
+ * (index on batch and step) and the corrections pointing at them (index on corrects_entry_id); the total
+ * as an uncorrelated count over the brewery's index range, evaluated once.
+ */
+export async function listBatches(breweryId: number, query: BatchListQuery): Promise<BatchList> {
+  const filters = [...(query.status ? ['status = ?'] : []), ...(query.recipeId ? ['recipe_id = ?'] : [])];
+  const values = [...(query.status ? [query.status] : []), ...(query.recipeId ? [query.recipeId] : [])];
+  const where = (t: string) => [`${t}.brewery_id = ?`, ...filters.map((f) => `${t}.${f}`)].join(' AND ');
+  const rows = await sequelize.query<ListRow>(
+    `SELECT b.id, b.number, b.beer_name AS beerName, b.recipe_id AS recipeId, b.status,
+            DATE_FORMAT(b.brew_date, '%Y-%m-%d') AS brewDate, b.planned_og AS plannedOg,
+            v.id AS vesselId, v.name AS vesselName,
+            (SELECT JSON_ARRAYAGG(JSON_ARRAY(k.id, k.sequence, k.kind, k.step_key, k.corrects_entry_id, JSON_EXTRACT(k.data, '$.measurements')))
+               FROM batch_log_entries k
+              WHERE k.batch_id = b.id AND k.step_key = 'knockout-end') AS knockouts,
+            (SELECT JSON_ARRAYAGG(JSON_ARRAY(c.id, c.sequence, c.kind, c.step_key, c.corrects_entry_id, JSON_EXTRACT(c.data, '$.measurements')))
+               FROM batch_log_entries k STRAIGHT_JOIN batch_log_entries c ON c.corrects_entry_id = k.id
+              WHERE k.batch_id = b.id AND k.step_key = 'knockout-end' AND c.kind = 'correction') AS corrections,
+            (SELECT COUNT(*) FROM batches n WHERE ${where('n')}) AS total
+       FROM batches b
+       LEFT JOIN vessels v ON v.current_batch_id = b.id AND v.brewery_id = b.brewery_id
+      WHERE ${where('b')}
+      ORDER BY b.brew_date DESC, b.id DESC
+      LIMIT ? OFFSET ?`,
+    {
+      type: QueryTypes.SELECT,
+      replacements: [breweryId, ...values, breweryId, ...values, BATCH_PAGE_SIZE, (query.page - 1) * BATCH_PAGE_SIZE],
+    },
+  );
+  // Past the last page there is no row to carry the total.
+  const total = rows.length ? Number(rows[0]!.total) : await Batch.count({ where: { breweryId, ...(query.status ? { status: query.status } : {}), ...(query.recipeId ? { recipeId: query.recipeId } : {}) } });
   return {
-    items: rows.map((b) => summary(b, vessels.find((v) => v.currentBatchId === b.id), ogByBatch.get(b.id) ?? null)),
-    total: count,
+    items: rows.map((r) => ({
+      id: r.id,
+      number: r.number,
+      beerName: r.beerName,
+      recipeId: r.recipeId,
+      status: r.status,
+      brewDate: r.brewDate,
+      vessel: r.vesselId === null ? null : { id: r.vesselId, name: r.vesselName! },
+      plannedOg: r.plannedOg,
+      actualOg: knockoutOg(r),
+    })),
+    total,
     page: query.page,
     pageSize: BATCH_PAGE_SIZE,
   };

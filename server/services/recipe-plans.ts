@@ -4,12 +4,12 @@
  */
 import type { Transaction } from 'sequelize';
 import { scaleRecipe, type ComputedRecipe, type EquipmentProfile, type RecipeInput, type ScaleChange, type ScaledRecipe } from '../../shared/brewing';
-import { equipmentAtVolume, toRecipeInput, type RecipeVersionContent, type ScaleTarget } from '../../shared/schemas/recipes';
+import { equipmentAtVolume, toRecipeInput, type EquipmentInput, type RecipeVersionContent, type ScaleTarget } from '../../shared/schemas/recipes';
 import { EquipmentProfile as EquipmentRow, Recipe, RecipeVersion } from '../models';
 import { notFound } from '../errors';
 
-/** The calculation view of a stored equipment profile. */
-export function equipmentFromRow(row: EquipmentRow): EquipmentProfile {
+/** The calculation view of a stored equipment profile (a model row, or a raw row with the same names). */
+export function equipmentFromRow(row: EquipmentInput): EquipmentProfile {
   return {
     name: row.name,
     batchVolumeL: row.batchVolumeL,

@@ -13,6 +13,7 @@ import {
   type RecipeListRow,
   type VersionSummary,
   type Difference,
+  type EquipmentInput,
 } from '../../shared/schemas/recipes';
 import { sequelize } from '../config/database';
 import { conflict, notFound } from '../errors';
@@ -49,16 +50,18 @@ async function findRecipe(breweryId: number, id: number, transaction?: Transacti
   return recipe;
 }
 
-async function summaries(versions: RecipeVersion[]): Promise<VersionSummary[]> {
-  const authors = await User.findAll({ where: { id: [...new Set(versions.map((v) => v.authorId))] }, attributes: ['id', 'displayName'] });
-  const byId = new Map(authors.map((a) => [a.id, a.displayName]));
-  return versions.map((v) => ({
+const iso = (d: Date | string) => new Date(d).toISOString();
+
+type VersionFields = Omit<VersionSummary, 'authorName' | 'createdAt' | 'frozenAt'> & { createdAt: Date | string; frozenAt: Date | string | null };
+
+function versionSummary(v: VersionFields, authorName: string | null | undefined): VersionSummary {
+  return {
     id: v.id,
     number: v.number,
     changeNote: v.changeNote,
-    authorName: byId.get(v.authorId) ?? 'Former teammate',
-    createdAt: v.createdAt.toISOString(),
-    frozenAt: v.frozenAt ? v.frozenAt.toISOString() : null,
+    authorName: authorName ?? 'Former teammate',
+    createdAt: iso(v.createdAt),
+    frozenAt: v.frozenAt === null ? null : iso(v.frozenAt),
     equipmentProfileId: v.equipmentProfileId,
     batchVolumeL: v.batchVolumeL,
     og: v.og,
@@ -66,7 +69,13 @@ async function summaries(versions: RecipeVersion[]): Promise<VersionSummary[]> {
     ibu: v.ibu,
     srm: v.srm,
     abvPct: v.abvPct,
-  }));
+  };
+}
+
+async function summaries(versions: RecipeVersion[]): Promise<VersionSummary[]> {
+  const authors = await User.findAll({ where: { id: [...new Set(versions.map((v) => v.authorId))] }, attributes: ['id', 'displayName'] });
+  const byId = new Map(authors.map((a) => [a.id, a.displayName]));
+  return versions.map((v) => versionSummary(v, byId.get(v.authorId)));
 }
 
 function recipeJson(recipe: Recipe) {
@@ -135,11 +144,72 @@ async function versionOf(breweryId: number, recipeId: number, versionId: number,
   return found;
 }
 
+/** A version with its recipe, author and brewhouse, as getVersion's one statement returns it (the brewhouse under its own names). */
+interface VersionRow extends VersionFields, EquipmentInput {
+  recipeId: number;
+  versionBatchVolumeL: number;
+  authorName: string | null;
+  content: string | RecipeVersionContent;
+  recipeName: string;
+  style: string;
+  description: string;
+  status: Recipe['status'];
+}
+
+/**
+ * A version's computed numbers depend only on the recipe's name, the version's content and its brewhouse.
+ * The key is all three exactly as stored, so an edited version, a renamed recipe or a changed equipment
+ * profile makes a different key: a cached answer can never be stale. Values are shared: never mutate them.
+ */
+const computedCache = new Map<string, { content: RecipeVersionContent; computed: ComputedRecipe }>();
+const COMPUTED_CACHE_SIZE = 500;
+
+function computedFor(recipeName: string, contentText: string, profile: EquipmentInput) {
+  const key = JSON.stringify([recipeName, profile, contentText]);
+  const hit = computedCache.get(key);
+  if (hit) {
+    // Most recently used last, so the least recently used is the first to go.
+    computedCache.delete(key);
+    computedCache.set(key, hit);
+    return hit;
+  }
+  const content = JSON.parse(contentText) as RecipeVersionContent;
+  const equipment = equipmentAtVolume(profile, content.targets.batchVolumeL);
+  const value = { content, computed: computeRecipe(toRecipeInput(recipeName, resolveHopShares(recipeName, content, equipment)), equipment) };
+  computedCache.set(key, value);
+  if (computedCache.size > COMPUTED_CACHE_SIZE) computedCache.delete(computedCache.keys().next().value!);
+  return value;
+}
+
+/** A version with its recipe and computed numbers, read in one statement (version, recipe, author, brewhouse). */
 export async function getVersion(breweryId: number, recipeId: number, versionId: number) {
-  const { version, recipe } = await versionOf(breweryId, recipeId, versionId);
-  const { computed } = await compute(breweryId, recipe.name, version.equipmentProfileId, version.content);
-  const [summary] = await summaries([version]);
-  return { recipe: recipeJson(recipe), version: { ...summary!, content: version.content }, computed };
+  const [row] = await sequelize.query<VersionRow>(
+    `SELECT v.id, v.recipe_id AS recipeId, v.number, v.change_note AS changeNote, u.display_name AS authorName,
+            v.created_at AS createdAt, v.frozen_at AS frozenAt, v.equipment_profile_id AS equipmentProfileId,
+            v.batch_volume_l AS versionBatchVolumeL, v.og, v.fg, v.ibu, v.srm, v.abv_pct AS abvPct, v.content,
+            r.name AS recipeName, r.style, r.description, r.status,
+            e.name, e.batch_volume_l AS batchVolumeL,
+            e.brewhouse_efficiency AS brewhouseEfficiency, e.boil_off_l_per_hour AS boilOffLPerHour, e.boil_minutes AS boilMinutes,
+            e.mash_tun_dead_space_l AS mashTunDeadSpaceL, e.kettle_dead_space_l AS kettleDeadSpaceL,
+            e.trub_chiller_loss_l AS trubChillerLossL, e.fermenter_loss_l AS fermenterLossL,
+            e.grain_absorption_l_per_kg AS grainAbsorptionLPerKg, e.max_mash_tun_volume_l AS maxMashTunVolumeL,
+            e.max_kettle_volume_l AS maxKettleVolumeL, e.mash_thickness_l_per_kg AS mashThicknessLPerKg
+       FROM recipe_versions v
+       JOIN recipes r ON r.id = v.recipe_id AND r.brewery_id = v.brewery_id
+       LEFT JOIN users u ON u.id = v.author_id
+       LEFT JOIN equipment_profiles e ON e.id = v.equipment_profile_id AND e.brewery_id = v.brewery_id
+      WHERE v.id = ? AND v.brewery_id = ? AND v.recipe_id = ?`,
+    { type: QueryTypes.SELECT, replacements: [versionId, breweryId, recipeId] },
+  );
+  if (!row) throw notFound('This recipe version');
+  if (row.name === null) throw notFound('This equipment profile');
+  const contentText = typeof row.content === 'string' ? row.content : JSON.stringify(row.content);
+  const { content, computed } = computedFor(row.recipeName, contentText, equipmentFromRow(row));
+  return {
+    recipe: { id: row.recipeId, name: row.recipeName, style: row.style, description: row.description, status: row.status },
+    version: { ...versionSummary({ ...row, batchVolumeL: row.versionBatchVolumeL }, row.authorName), content },
+    computed,
+  };
 }
 
 /** Saves the next version of a recipe (from the editor's content, whatever version it started from). */

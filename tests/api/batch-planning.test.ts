@@ -4,6 +4,8 @@ import { sequelize } from '../../server/config/database';
 import { EquipmentProfile, RecipeVersion, Vessel } from '../../server/models';
 import { seedRecipes } from '../../server/seed/recipes';
 import { computeRecipe } from '../../shared/brewing';
+import type { BatchList } from '../../shared/schemas/batches';
+import { plannedBatch, writeHeaders } from './batch-fixtures';
 import { createTestBrewery, type TestBrewery } from './helpers';
 
 let t: TestBrewery;
@@ -63,5 +65,53 @@ describe('planning a batch', () => {
     const bad = await t.as.head_brewer.post('/api/batches').send({ recipeVersionId: version.id, batchVolumeL: -3, brewDate: 'someday' });
     expect(bad.status).toBe(400);
     expect(bad.body.error.fields).toMatchObject({ batchVolumeL: expect.stringMatching(/at least 1 L/), brewDate: expect.any(String) });
+  });
+});
+
+describe('the batch list', () => {
+  it('pages newest first with the total, and shows the OG measured at knockout as corrected', async () => {
+    const u = await createTestBrewery();
+    const actor = { id: u.users.head_brewer.id, breweryId: u.brewery.id };
+    const older = await plannedBatch(actor, '2026-10-01');
+    const newer = await plannedBatch(actor, '2026-10-02');
+    const log = (batchId: number, body: object) => u.as.assistant_brewer.post(`/api/batches/${batchId}/log`).set(writeHeaders()).send(body);
+    const listed = async (query = '') => {
+      const res = await u.as.assistant_brewer.get(`/api/batches${query}`);
+      expect(res.status).toBe(200);
+      return res.body as BatchList;
+    };
+    const ogOf = async (id: number) => (await listed()).items.find((i) => i.id === id)!.actualOg;
+
+    const first = await listed();
+    expect(first).toMatchObject({ total: 2, page: 1, pageSize: 50 });
+    expect(first.items.map((i) => [i.id, i.brewDate, i.actualOg, i.vessel])).toEqual([
+      [newer.id, '2026-10-02', null, null],
+      [older.id, '2026-10-01', null, null],
+    ]);
+    expect(first.items[0]!.plannedOg).toBe(newer.plannedOg);
+
+    const mashIn = await log(older.id, { kind: 'step', stepKey: 'mash-in', label: 'Mash in', measurements: { tempC: 66 } });
+    const knockout = await log(older.id, { kind: 'step', stepKey: 'knockout-end', label: 'Knockout end', measurements: { gravitySg: 1.061, volumeL: 38 } });
+    expect(knockout.status).toBe(201);
+    expect(await ogOf(older.id)).toBe(1.061);
+    expect(await ogOf(newer.id)).toBeNull();
+
+    const correct = (id: number, measurements: object) => log(older.id, { kind: 'correction', correctsEntryId: id, reason: 'Refractometer re-read', measurements });
+    expect((await correct(knockout.body.id, { gravitySg: 1.058 })).status).toBe(201);
+    expect(await ogOf(older.id)).toBe(1.058);
+    // A correction of the volume alone, or of another entry, leaves the OG as corrected.
+    await correct(knockout.body.id, { volumeL: 37 });
+    await correct(mashIn.body.id, { tempC: 65, gravitySg: 1.09 });
+    expect(await ogOf(older.id)).toBe(1.058);
+    // The batch's own page says the same.
+    expect((await u.as.head_brewer.get(`/api/batches/${older.id}`)).body.actuals.og.actual).toBe(1.058);
+    // A later knockout reading is the one shown.
+    await log(older.id, { kind: 'measurement', stepKey: 'knockout-end', label: 'Knockout end, re-measured', measurements: { gravitySg: 1.06 } });
+    expect(await ogOf(older.id)).toBe(1.06);
+
+    expect((await listed('?status=brewing')).items.map((i) => i.id)).toEqual([older.id]);
+    expect(await listed('?page=2')).toMatchObject({ items: [], total: 2, page: 2 });
+    // Another brewery sees none of them.
+    expect((await other.as.head_brewer.get('/api/batches')).body.items.map((i: { id: number }) => i.id)).not.toContain(older.id);
   });
 });

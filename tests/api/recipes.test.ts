@@ -108,6 +108,38 @@ describe('recipes API', () => {
     expect(v.body.version.content.hops[0].weightG).toBeGreaterThan(0);
   });
 
+  it('answers a version’s numbers for its brewhouse as it is now, after the profile or the version changes', async () => {
+    const profile = { ...DEMO_EQUIPMENT.pilot, name: 'Pilot kit (numbers test)' };
+    const equipmentId = (await t.as.head_brewer.post('/api/equipment').send(profile)).body.id as number;
+    const created = await t.as.head_brewer.post('/api/recipes').send({
+      name: 'Numbers test', style: 'Spiced amber', description: '', status: 'draft', changeNote: 'Pilot recipe', equipmentProfileId: equipmentId, content: SEASONAL_CONTENT,
+    });
+    const url = `/api/recipes/${created.body.id}/versions/${created.body.versionId}`;
+    const expected = (content: RecipeVersionContent, efficiency: number) =>
+      computeRecipe(toRecipeInput('Numbers test', content), equipmentAtVolume({ ...profile, brewhouseEfficiency: efficiency }, usGalToL(10)));
+
+    const before = await t.as.head_brewer.get(url);
+    expect(before.body.computed.og).toBeCloseTo(expected(SEASONAL_CONTENT, 0.7).og, 12);
+    // Asked again: the same answer.
+    expect((await t.as.head_brewer.get(url)).body.computed).toEqual(before.body.computed);
+
+    expect((await t.as.head_brewer.put(`/api/equipment/${equipmentId}`).send({ ...profile, brewhouseEfficiency: 0.8 })).status).toBe(200);
+    const better = await t.as.head_brewer.get(url);
+    expect(better.body.computed.og).toBeCloseTo(expected(SEASONAL_CONTENT, 0.8).og, 12);
+    expect(better.body.computed.og).toBeGreaterThan(before.body.computed.og);
+
+    const edited: RecipeVersionContent = { ...SEASONAL_CONTENT, hops: [{ ...SEASONAL_CONTENT.hops[0]!, weightG: 90 }, SEASONAL_CONTENT.hops[1]!] };
+    expect((await t.as.head_brewer.patch(url).send({ changeNote: 'More bittering', equipmentProfileId: equipmentId, content: edited })).status).toBe(200);
+    const bitterer = await t.as.head_brewer.get(url);
+    expect(bitterer.body.computed.ibu).toBeCloseTo(expected(edited, 0.8).ibu, 12);
+    expect(bitterer.body.computed.ibu).toBeGreaterThan(better.body.computed.ibu);
+
+    // Back to the first profile and content: the first numbers again.
+    await t.as.head_brewer.put(`/api/equipment/${equipmentId}`).send(profile);
+    await t.as.head_brewer.patch(url).send({ changeNote: 'Pilot recipe', equipmentProfileId: equipmentId, content: SEASONAL_CONTENT });
+    expect((await t.as.head_brewer.get(url)).body.computed).toEqual(before.body.computed);
+  });
+
   it('compares two versions and lists exactly what changed', async () => {
     const { recipeId, versionId: v1 } = await createSeasonal('Compare test');
     const changed: RecipeVersionContent = {
