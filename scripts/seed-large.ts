@@ -134,7 +134,7 @@ export async function seedLarge(ownerUrl: string, size = { batches: 3000, readin
           const eid = entryId++;
           entryRows.push([
             eid, brewery.id, id, seq, kind, stepKey, JSON.stringify(data), null, null, assistant.id, 'assistant_brewer', fields.authorName,
-            'performed', at, at, fields.deviceId, 0, fields.idempotencyKey, prevHash, hash,
+            'performed', at, at, fields.deviceId, 0, fields.idempotencyKey, hash, prevHash, hash,
           ]);
           prevHash = hash;
           return eid;
@@ -178,13 +178,9 @@ export async function seedLarge(ownerUrl: string, size = { batches: 3000, readin
       );
       await conn.batch(
         `INSERT INTO batch_log_entries (id, brewery_id, batch_id, sequence, kind, step_key, data, corrects_entry_id, reason, author_id,
-           author_role, author_name, meaning, captured_at, received_at, device_id, late, idempotency_key, prev_hash, hash)
-         VALUES (?,?,?,?,?,?,?,?,?,?,?,?,?,?,?,?,?,?,?,?)`,
-        entryRows,
-      );
-      await conn.batch(
-        `INSERT INTO idempotency_keys (brewery_id, \`key\`, request_hash, scope, result_id, created_at) VALUES (?,?,?,?,?,?)`,
-        entryRows.map((e) => [brewery.id, e[17], e[19], 'batch-log', e[0], e[13]]),
+           author_role, author_name, meaning, captured_at, received_at, device_id, late, idempotency_key, request_hash, prev_hash, hash)
+         VALUES (?,?,?,?,?,?,?,?,?,?,?,?,?,?,?,?,?,?,?,?,?)`,
+        entryRows, // the table's trigger writes each entry's idempotency record and audit row
       );
       await conn.batch(
         `INSERT INTO gravity_readings (brewery_id, batch_id, log_entry_id, taken_at, sg, entered_value, entered_unit, temp_c, ph, method,

@@ -28,6 +28,8 @@ export class BatchLogEntry extends Model<InferAttributes<BatchLogEntry>, InferCr
   declare deviceId: string;
   declare late: boolean;
   declare idempotencyKey: string;
+  /** SHA-256 of the request that created the entry; the insert trigger copies it into the idempotency record. */
+  declare requestHash: string;
   declare prevHash: string;
   declare hash: string;
 }
@@ -52,6 +54,7 @@ BatchLogEntry.init(
     deviceId: { type: DataTypes.STRING(64), allowNull: false },
     late: { type: DataTypes.BOOLEAN, allowNull: false },
     idempotencyKey: { type: DataTypes.STRING(64), allowNull: false },
+    requestHash: { type: DataTypes.CHAR(64), allowNull: false },
     prevHash: { type: DataTypes.CHAR(64), allowNull: false },
     hash: { type: DataTypes.CHAR(64), allowNull: false },
   },

@@ -1,11 +1,12 @@
 /**
  * The batch log: signed, append-only entries chained by SHA-256 per batch. Every write goes through
- * appendLogEntry, which does idempotency, the hash chain, authorship, lateness and the audit row in one transaction.
+ * appendLogEntry, which does idempotency, the hash chain, authorship, lateness and the audit row in one transaction
+ * (the table's insert trigger writes the idempotency record and the audit row with the entry, see migration 0901).
  */
 import { createHash } from 'node:crypto';
-import { Transaction, UniqueConstraintError } from 'sequelize';
+import { QueryTypes, Transaction, UniqueConstraintError } from 'sequelize';
 import { sequelize } from '../config/database';
-import { AuditEvent, Batch, BatchLogEntry, IdempotencyKey } from '../models';
+import { Batch, BatchLogEntry, IdempotencyKey } from '../models';
 import { badRequest, conflict, notFound, unprocessable } from '../errors';
 import { fieldMessages } from '../middlewares/validate';
 import { BREW_DAY_KINDS, writeMetaSchema, type ChainCheck, type LogEntry, type SignatureMeaning, type WriteMeta } from '../../shared/schemas/batch-log';
@@ -102,15 +103,19 @@ export function writeMetaFromHeaders(get: (name: string) => string | undefined):
 const requestHash = (batchId: number, input: NewLogEntry, meta: WriteMeta) =>
   sha256(canonicalJson({ scope: 'batch-log', batchId, input, capturedAt: meta.capturedAt.toISOString(), deviceId: meta.deviceId }));
 
-async function findReplay(breweryId: number, batchId: number, input: NewLogEntry, meta: WriteMeta, transaction?: Transaction): Promise<BatchLogEntry | null> {
-  const existing = await IdempotencyKey.findOne({ where: { breweryId, key: meta.idempotencyKey }, transaction });
-  if (!existing) return null;
-  if (existing.scope !== 'batch-log' || existing.requestHash !== requestHash(batchId, input, meta)) {
+/** The answer to a write whose idempotency key was used before: its entry, or 422 for a different request. */
+async function replayOf(key: { scope: string; requestHash: string; resultId: number }, expectedHash: string, transaction?: Transaction): Promise<BatchLogEntry> {
+  if (key.scope !== 'batch-log' || key.requestHash !== expectedHash) {
     throw unprocessable('This idempotency key was already used for a different request. Nothing was saved.');
   }
-  const entry = await BatchLogEntry.findByPk(existing.resultId, { transaction });
+  const entry = await BatchLogEntry.findByPk(key.resultId, { transaction });
   if (!entry) throw notFound('The entry for this idempotency key');
   return entry;
+}
+
+async function findReplay(breweryId: number, batchId: number, input: NewLogEntry, meta: WriteMeta): Promise<BatchLogEntry | null> {
+  const existing = await IdempotencyKey.findOne({ where: { breweryId, key: meta.idempotencyKey } });
+  return existing ? replayOf(existing, requestHash(batchId, input, meta)) : null;
 }
 
 /** Whether the brew day of a batch has been signed off. */
@@ -118,33 +123,75 @@ export async function brewDaySigned(batchId: number, transaction?: Transaction):
   return (await BatchLogEntry.count({ where: { batchId, kind: 'sign_off' }, transaction })) > 0;
 }
 
+/** The newest entry of the batch (`h`), joined to the batch `b`: the log's head that the next entry chains to. */
+const LOG_HEAD_JOIN = `LEFT JOIN batch_log_entries h
+       ON h.batch_id = b.id AND h.sequence = (SELECT MAX(x.sequence) FROM batch_log_entries x WHERE x.batch_id = b.id)`;
+
+interface AppendState {
+  status: string;
+  lastSequence: number | null;
+  lastHash: string | null;
+  keyScope: string | null;
+  keyRequestHash: string | null;
+  keyResultId: number | null;
+  /** The kind of the entry to correct, when it is in this batch's log. */
+  targetKind: string | null;
+  signed: number;
+}
+
+/**
+ * Everything an append decides on, in one locking read: the batch (scoped to the brewery), its log's head,
+ * this write's idempotency record and, when asked, the entry to correct and whether the brew day is signed.
+ * Locking the batch row serialises the writers of one batch, so the chain never forks (the unique
+ * (batch_id, sequence) index would refuse a fork anyway). READ COMMITTED keeps the read to the rows it finds:
+ * no gap locks on the idempotency index, where writers of different batches would otherwise deadlock.
+ */
+async function lockForAppend(breweryId: number, batchId: number, key: string, correctsEntryId: number | null, checkSigned: boolean, transaction: Transaction) {
+  const [state] = await sequelize.query<AppendState>(
+    `SELECT b.status, h.sequence AS lastSequence, h.hash AS lastHash,
+            k.scope AS keyScope, k.request_hash AS keyRequestHash, k.result_id AS keyResultId, t.kind AS targetKind,
+            ${checkSigned ? "EXISTS (SELECT 1 FROM batch_log_entries s WHERE s.batch_id = b.id AND s.kind = 'sign_off')" : '0'} AS signed
+       FROM batches b
+       ${LOG_HEAD_JOIN}
+       LEFT JOIN idempotency_keys k ON k.brewery_id = b.brewery_id AND k.\`key\` = :key
+       LEFT JOIN batch_log_entries t ON t.id = :correctsEntryId AND t.batch_id = b.id
+      WHERE b.id = :batchId AND b.brewery_id = :breweryId
+        FOR UPDATE`,
+    { type: QueryTypes.SELECT, replacements: { breweryId, batchId, key, correctsEntryId }, transaction },
+  );
+  return state;
+}
+
+const INSERT_ENTRY = `INSERT INTO batch_log_entries
+  (brewery_id, batch_id, sequence, kind, step_key, data, corrects_entry_id, reason, author_id, author_role, author_name, meaning,
+   captured_at, received_at, device_id, late, idempotency_key, request_hash, prev_hash, hash)
+  VALUES (:breweryId, :batchId, :sequence, :kind, :stepKey, :data, :correctsEntryId, :reason, :authorId, :authorRole, :authorName, :meaning,
+   :capturedAt, :receivedAt, :deviceId, :late, :idempotencyKey, :requestHash, :prevHash, :hash)`;
+
 async function append(actor: LogActor, batchId: number, input: NewLogEntry, meta: WriteMeta, options: AppendOptions, transaction: Transaction): Promise<BatchLogEntry> {
-  // Locking the batch row serialises writers of one batch, so the chain never forks.
-  const batch = await Batch.findOne({ where: { id: batchId, breweryId: actor.breweryId }, lock: transaction.LOCK.UPDATE, transaction });
-  if (!batch) throw notFound('This batch');
-  const replay = await findReplay(actor.breweryId, batchId, input, meta, transaction);
-  if (replay) return replay;
+  const { kind, stepKey = null, correctsEntryId = null, reason = null, meaning = 'performed', ...data } = input;
+  const state = await lockForAppend(actor.breweryId, batchId, meta.idempotencyKey, correctsEntryId, BREW_DAY_KINDS.includes(kind), transaction);
+  if (!state) throw notFound('This batch');
+  const hashOfRequest = requestHash(batchId, input, meta);
+  if (state.keyResultId !== null) {
+    return replayOf({ scope: state.keyScope!, requestHash: state.keyRequestHash!, resultId: Number(state.keyResultId) }, hashOfRequest, transaction);
+  }
 
   const receivedAt = new Date();
   if (meta.capturedAt.getTime() > receivedAt.getTime() + CLOCK_SKEW_MS) {
     throw unprocessable('The captured time is in the future: check the tablet’s clock. Nothing was saved.');
   }
-  const { kind, stepKey = null, correctsEntryId = null, reason = null, meaning = 'performed', ...data } = input;
-  if (BREW_DAY_KINDS.includes(kind) && (await brewDaySigned(batchId, transaction))) {
-    throw conflict('The brew day is signed off: add a correction instead.');
-  }
+  if (Number(state.signed)) throw conflict('The brew day is signed off: add a correction instead.');
   if (correctsEntryId !== null) {
-    const target = await BatchLogEntry.findOne({ where: { id: correctsEntryId, batchId }, transaction });
-    if (!target) throw unprocessable('The entry to correct is not in this batch’s log.');
-    if (target.kind === 'sign_off') throw unprocessable('A signature cannot be corrected.');
+    if (state.targetKind === null) throw unprocessable('The entry to correct is not in this batch’s log.');
+    if (state.targetKind === 'sign_off') throw unprocessable('A signature cannot be corrected.');
   }
 
-  const previous = await BatchLogEntry.findOne({ where: { batchId }, order: [['sequence', 'DESC']], transaction });
-  const prevHash = previous?.hash ?? GENESIS_HASH;
+  const prevHash = state.lastHash ?? GENESIS_HASH;
   const fields = {
     breweryId: actor.breweryId,
     batchId,
-    sequence: (previous?.sequence ?? 0) + 1,
+    sequence: Number(state.lastSequence ?? 0) + 1,
     kind,
     stepKey,
     data,
@@ -160,17 +207,16 @@ async function append(actor: LogActor, batchId: number, input: NewLogEntry, meta
     late: receivedAt.getTime() - meta.capturedAt.getTime() > LATE_AFTER_MS,
     idempotencyKey: meta.idempotencyKey,
   };
-  const entry = await BatchLogEntry.create({ ...fields, prevHash, hash: entryHash(prevHash, fields) }, { transaction });
-  await IdempotencyKey.create(
-    { breweryId: actor.breweryId, key: meta.idempotencyKey, requestHash: requestHash(batchId, input, meta), scope: 'batch-log', resultId: entry.id },
-    { transaction },
-  );
-  await AuditEvent.create(
-    { breweryId: actor.breweryId, userId: actor.id, action: 'batch-log.append', detail: { batchId, entryId: entry.id, kind }, ip: null, userAgent: null, requestId: null },
-    { transaction },
-  );
+  const hash = entryHash(prevHash, fields);
+  // One statement: the table's trigger writes the idempotency record and the audit row with the entry.
+  const [id] = await sequelize.query(INSERT_ENTRY, {
+    type: QueryTypes.INSERT,
+    replacements: { ...fields, data: JSON.stringify(data), requestHash: hashOfRequest, prevHash, hash },
+    transaction,
+  });
+  const entry = BatchLogEntry.build({ id: Number(id), ...fields, requestHash: hashOfRequest, prevHash, hash }, { isNewRecord: false });
   // The first brew-day step starts the brew.
-  if (kind === 'step' && batch.status === 'planned') await batch.update({ status: 'brewing' }, { transaction });
+  if (kind === 'step' && state.status === 'planned') await Batch.update({ status: 'brewing' }, { where: { id: batchId }, transaction });
   await options.onInsert?.(entry, transaction);
   return entry;
 }
@@ -213,8 +259,15 @@ export async function verifyChain(batchId: number): Promise<ChainCheck> {
   return { ok: true, checked: entries.length, firstBad: null };
 }
 
+/** The columns an entry is answered with. */
+type AnsweredFields = Pick<
+  BatchLogEntry,
+  | 'id' | 'batchId' | 'sequence' | 'kind' | 'stepKey' | 'data' | 'correctsEntryId' | 'reason' | 'authorId' | 'authorRole'
+  | 'authorName' | 'meaning' | 'capturedAt' | 'receivedAt' | 'deviceId' | 'late' | 'hash'
+>;
+
 /** An entry as the API answers it. */
-export function toLogEntry(e: BatchLogEntry, correctedByIds: number[] = []): LogEntry {
+export function toLogEntry(e: AnsweredFields, correctedByIds: number[] = []): LogEntry {
   return {
     id: Number(e.id),
     batchId: e.batchId,
@@ -237,9 +290,8 @@ export function toLogEntry(e: BatchLogEntry, correctedByIds: number[] = []): Log
   };
 }
 
-/** A batch's entries in order, each with the corrections that point at it. */
-export async function logEntries(batchId: number, transaction?: Transaction): Promise<{ rows: BatchLogEntry[]; entries: LogEntry[] }> {
-  const rows = await BatchLogEntry.findAll({ where: { batchId }, order: [['sequence', 'ASC']], transaction });
+/** Entries in order as the API answers them, each with the corrections that point at it. */
+function toLogEntries(rows: AnsweredFields[]): LogEntry[] {
   const correctedBy = new Map<number, number[]>();
   for (const r of rows) {
     if (r.correctsEntryId !== null) {
@@ -247,5 +299,74 @@ export async function logEntries(batchId: number, transaction?: Transaction): Pr
       correctedBy.set(target, [...(correctedBy.get(target) ?? []), Number(r.id)]);
     }
   }
-  return { rows, entries: rows.map((r) => toLogEntry(r, correctedBy.get(Number(r.id)))) };
+  return rows.map((r) => toLogEntry(r, correctedBy.get(Number(r.id))));
+}
+
+/** A batch's entries in order, each with the corrections that point at it. */
+export async function logEntries(batchId: number, transaction?: Transaction): Promise<{ rows: BatchLogEntry[]; entries: LogEntry[] }> {
+  const rows = await BatchLogEntry.findAll({ where: { batchId }, order: [['sequence', 'ASC']], transaction });
+  return { rows, entries: toLogEntries(rows) };
+}
+
+/**
+ * Serialized logs by batch id, each under the head (last sequence and hash) it was read at. Entries are
+ * never changed or deleted (the application account may only INSERT and SELECT them) and every append
+ * moves the head, so a log whose head matches the batch's current head is exactly the log: never stale.
+ * Least recently used logs leave first once the cache holds more than LOG_CACHE_CHARS characters.
+ */
+const LOG_CACHE_CHARS = 8 * 1024 * 1024;
+const logCache = new Map<number, { sequence: number; hash: string; json: string }>();
+let logCacheChars = 0;
+
+function forgetLog(batchId: number) {
+  const cached = logCache.get(batchId);
+  if (!cached) return;
+  logCache.delete(batchId);
+  logCacheChars -= cached.json.length;
+}
+
+function rememberLog(batchId: number, head: { sequence: number; hash: string }, json: string) {
+  forgetLog(batchId);
+  if (json.length > LOG_CACHE_CHARS / 4) return;
+  logCache.set(batchId, { ...head, json });
+  logCacheChars += json.length;
+  for (const oldest of logCache.keys()) {
+    if (logCacheChars <= LOG_CACHE_CHARS) break;
+    forgetLog(oldest);
+  }
+}
+
+/**
+ * A batch's log as the API's JSON (an array of LogEntry) and the head it was read at (null while empty).
+ * One statement finds the batch within the brewery (404 otherwise) and its head; a second reads the
+ * entries only when the cache has no log at that head.
+ */
+export async function batchLogJson(breweryId: number, batchId: number): Promise<{ json: string; head: { sequence: number; hash: string } | null }> {
+  const [found] = await sequelize.query<{ sequence: number | null; hash: string | null }>(
+    `SELECT h.sequence, h.hash FROM batches b ${LOG_HEAD_JOIN} WHERE b.id = :batchId AND b.brewery_id = :breweryId`,
+    { type: QueryTypes.SELECT, replacements: { batchId, breweryId } },
+  );
+  if (!found) throw notFound('This batch');
+  if (found.sequence === null || found.hash === null) return { json: '[]', head: null };
+  const cached = logCache.get(batchId);
+  if (cached && cached.sequence === Number(found.sequence) && cached.hash === found.hash) {
+    // Most recently used goes last.
+    logCache.delete(batchId);
+    logCache.set(batchId, cached);
+    return { json: cached.json, head: { sequence: cached.sequence, hash: cached.hash } };
+  }
+  const rows = await sequelize.query<AnsweredFields>(
+    `SELECT id, batch_id AS batchId, sequence, kind, step_key AS stepKey, data, corrects_entry_id AS correctsEntryId, reason,
+            author_id AS authorId, author_role AS authorRole, author_name AS authorName, meaning,
+            captured_at AS capturedAt, received_at AS receivedAt, device_id AS deviceId, late, hash
+       FROM batch_log_entries WHERE batch_id = :batchId ORDER BY sequence`,
+    { type: QueryTypes.SELECT, replacements: { batchId } },
+  );
+  for (const r of rows) if (typeof r.data === 'string') r.data = JSON.parse(r.data) as Record<string, unknown>;
+  const json = JSON.stringify(toLogEntries(rows));
+  // Cached under the head of what was read: an entry appended since the first statement is in it.
+  const last = rows.at(-1)!;
+  const head = { sequence: Number(last.sequence), hash: last.hash };
+  rememberLog(batchId, head, json);
+  return { json, head };
 }

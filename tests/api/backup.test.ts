@@ -28,12 +28,13 @@ async function withConnection<T>(database: string, fn: (conn: mariadb.Connection
 }
 
 interface Fingerprint {
+  triggers: string[];
   rows: Record<string, number>;
   checksums: Record<string, number>;
   chainHeads: Record<string, string>;
 }
 
-/** Row count and CHECKSUM TABLE of every table, and the newest hash of each batch's log. */
+/** The triggers, row count and CHECKSUM TABLE of every table, and the newest hash of each batch's log. */
 async function fingerprint(database: string): Promise<Fingerprint> {
   return withConnection(database, async (conn) => {
     const tables = (await conn.query<{ name: string }[]>(
@@ -53,7 +54,11 @@ async function fingerprint(database: string): Promise<Fingerprint> {
       `SELECT e.batch_id AS batchId, e.hash FROM batch_log_entries e
         WHERE e.sequence = (SELECT MAX(x.sequence) FROM batch_log_entries x WHERE x.batch_id = e.batch_id)`,
     );
-    return { rows, checksums, chainHeads: Object.fromEntries(heads.map((h) => [String(h.batchId), h.hash])) };
+    const triggers = (await conn.query<{ name: string }[]>(
+      'SELECT TRIGGER_NAME AS name FROM information_schema.TRIGGERS WHERE TRIGGER_SCHEMA = ? ORDER BY TRIGGER_NAME',
+      [database],
+    )).map((t) => t.name);
+    return { triggers, rows, checksums, chainHeads: Object.fromEntries(heads.map((h) => [String(h.batchId), h.hash])) };
   });
 }
 
@@ -82,6 +87,9 @@ describe('backup and restore', () => {
 
     expect(Object.keys(before.rows).length).toBeGreaterThan(3);
     expect(before.rows.breweries).toBeGreaterThan(0);
+    // The trigger that writes each log entry's idempotency record and audit row comes back too.
+    expect(before.triggers).toContain('batch_log_entries_after_insert');
+    expect(after.triggers).toEqual(before.triggers);
     expect(after.rows).toEqual(before.rows);
     expect(after.checksums).toEqual(before.checksums);
     expect(before.chainHeads[String(batch.id)]).toMatch(/^[0-9a-f]{64}$/);

@@ -101,6 +101,61 @@ describe('entries are never changed', () => {
   });
 });
 
+describe('reading the log', () => {
+  it('answers the entries as the batch page shows them; the next answer after an append carries the new entry', async () => {
+    const b = await plannedBatch(actorOf(t.users.head_brewer));
+    expect((await t.as.head_brewer.get(`/api/batches/${b.id}/log`)).body).toEqual([]);
+    const first = await t.as.assistant_brewer.post(`/api/batches/${b.id}/log`).set(writeHeaders()).send(step('mash-in', { tempC: 67 }));
+    await t.as.assistant_brewer.post(`/api/batches/${b.id}/log`).set(writeHeaders()).send({ kind: 'note', text: 'Grain bed settled “nicely” — ünïcode' });
+    const log = await t.as.head_brewer.get(`/api/batches/${b.id}/log`);
+    expect(log.status).toBe(200);
+    expect(log.body.map((e: { sequence: number }) => e.sequence)).toEqual([1, 2]);
+    expect(log.body).toEqual((await t.as.head_brewer.get(`/api/batches/${b.id}`)).body.entries);
+    // Unchanged since: the tag still matches.
+    expect((await t.as.head_brewer.get(`/api/batches/${b.id}/log`).set('If-None-Match', log.headers.etag)).status).toBe(304);
+
+    const correction = await t.as.head_brewer
+      .post(`/api/batches/${b.id}/log`)
+      .set(writeHeaders())
+      .send({ kind: 'correction', correctsEntryId: first.body.id, reason: 'Probe was in the foundation water', measurements: { tempC: 66 } });
+    const after = await t.as.head_brewer.get(`/api/batches/${b.id}/log`).set('If-None-Match', log.headers.etag);
+    expect(after.status).toBe(200);
+    expect(after.body.map((e: { id: number }) => e.id)).toEqual([...log.body.map((e: { id: number }) => e.id), correction.body.id]);
+    expect(after.body[0].correctedByIds).toEqual([correction.body.id]);
+    expect(after.body).toEqual((await t.as.head_brewer.get(`/api/batches/${b.id}`)).body.entries);
+  });
+});
+
+describe('the database keeps each entry with its records', () => {
+  const insertEntry = (b: Batch, key: string) =>
+    owner.query(
+      `INSERT INTO batch_log_entries (brewery_id, batch_id, sequence, kind, data, author_id, author_role, author_name, meaning,
+         captured_at, received_at, device_id, late, idempotency_key, request_hash, prev_hash, hash)
+       VALUES (?, ?, 1, 'note', '{"text":"written without the app"}', ?, 'head_brewer', 'Test', 'performed', NOW(3), NOW(3), 'test', 0, ?, ?, ?, ?)`,
+      { replacements: [b.breweryId, b.id, t.users.head_brewer.id, key, 'a'.repeat(64), '0'.repeat(64), 'b'.repeat(64)], type: QueryTypes.INSERT },
+    );
+
+  it('writes the idempotency record and the audit row in the same statement as the entry', async () => {
+    const b = await plannedBatch(actorOf(t.users.head_brewer));
+    const key = randomUUID();
+    const [entryId] = await insertEntry(b, key);
+    const record = await IdempotencyKey.findOne({ where: { breweryId: t.brewery.id, key } });
+    expect(record).toMatchObject({ scope: 'batch-log', requestHash: 'a'.repeat(64), resultId: entryId });
+    const audits = await AuditEvent.findAll({ where: { action: 'batch-log.append', breweryId: t.brewery.id, userId: t.users.head_brewer.id } });
+    expect(audits.map((a) => a.detail)).toContainEqual({ batchId: b.id, entryId, kind: 'note' });
+  });
+
+  it('writes no entry when its idempotency record cannot be written', async () => {
+    const used = await t.as.assistant_brewer.post(`/api/batches/${batch.id}/log`).set(writeHeaders()).send({ kind: 'note', text: 'key in use' });
+    const b = await plannedBatch(actorOf(t.users.head_brewer));
+    await expect(insertEntry(b, (await BatchLogEntry.findByPk(used.body.id))!.idempotencyKey)).rejects.toMatchObject({
+      name: 'SequelizeUniqueConstraintError',
+      parent: { sqlMessage: expect.stringMatching(/Duplicate entry .* for key 'idempotency_keys_brewery_id_key'/) },
+    });
+    expect(await BatchLogEntry.count({ where: { batchId: b.id } })).toBe(0);
+  });
+});
+
 describe('corrections', () => {
   it('a correction is a new entry pointing at the original, with a reason; both stay in the log', async () => {
     const original = await t.as.assistant_brewer.post(`/api/batches/${batch.id}/log`).set(writeHeaders()).send(step('mash-in', { tempC: 76 }));
