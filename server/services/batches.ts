@@ -120,9 +120,6 @@ function summary(batch: Batch, vessel: Vessel | undefined, actualOg: number | nu
   };
 }
 
-/** A knockout-end entry or a correction of one, as the list query returns it: [id, sequence, kind, stepKey, correctsEntryId, measurements]. */
-type KnockoutTuple = [number, number, string, string | null, number | null, Measurements | null];
-
 interface ListRow {
   id: number;
   number: string;
@@ -133,30 +130,76 @@ interface ListRow {
   plannedOg: number;
   vesselId: number | null;
   vesselName: string | null;
-  knockouts: string | KnockoutTuple[] | null;
-  corrections: string | KnockoutTuple[] | null;
+  /** The log's last entry as `sequence:id` (null for an empty log). */
+  logHead: string | null;
   total: number | bigint;
 }
 
-const tuples = (raw: ListRow['knockouts']): KnockoutTuple[] => (raw === null ? [] : typeof raw === 'string' ? (JSON.parse(raw) as KnockoutTuple[]) : raw);
-
-/** The OG measured at knockout, after corrections: the same rule as the batch page (effectiveMeasurements). */
-function knockoutOg(row: ListRow): number | null {
-  const entries = [...tuples(row.knockouts), ...tuples(row.corrections)]
-    .sort((a, b) => a[1] - b[1])
-    .map(([id, , kind, stepKey, correctsEntryId, measurements]) => ({ id, kind, stepKey, correctsEntryId, data: measurements === null ? {} : { measurements } }));
-  let og: number | null = null;
-  for (const { stepKey, measurements } of effectiveMeasurements(entries).values()) {
-    if (stepKey === 'knockout-end' && measurements.gravitySg !== undefined) og = measurements.gravitySg;
-  }
-  return og;
+/** A knockout-end entry or a correction of one, as read for the list. */
+interface KnockoutRow {
+  batchId: number;
+  id: number | bigint;
+  sequence: number;
+  kind: string;
+  stepKey: string | null;
+  correctsEntryId: number | bigint | null;
+  measurements: string | Measurements | null;
 }
 
 /**
- * One page of the brewery's batches, newest first, with vessel and planned/actual OG, in one statement:
- * the page in index order (brewery, brew date, id) with its vessel; each batch's knockout-end entries
- * (index on batch and step) and the corrections pointing at them (index on corrects_entry_id); the total
- * as an uncorrelated count over the brewery's index range, evaluated once.
+ * The OG measured at knockout of a batch, after corrections, by `batchId:logHead`. A log is append-only,
+ * so the entries up to a given head never change: an entry added later makes a new head, hence a new key.
+ */
+const knockoutOgCache = new Map<string, number | null>();
+const KNOCKOUT_OG_CACHE_SIZE = 20_000;
+
+/** Each batch's knockout-end entries and the corrections pointing at them, up to the log head the page was read at. */
+async function knockoutOgs(breweryId: number, heads: Map<number, number>): Promise<Map<number, number | null>> {
+  const ids = [...heads.keys()];
+  const rows = await sequelize.query<KnockoutRow>(
+    `SELECT k.batch_id AS batchId, k.id, k.sequence, k.kind, k.step_key AS stepKey, k.corrects_entry_id AS correctsEntryId,
+            JSON_EXTRACT(k.data, '$.measurements') AS measurements
+       FROM batch_log_entries k
+      WHERE k.batch_id IN (?) AND k.step_key = 'knockout-end' AND k.brewery_id = ?
+     UNION ALL
+     SELECT k.batch_id, c.id, c.sequence, c.kind, c.step_key, c.corrects_entry_id, JSON_EXTRACT(c.data, '$.measurements')
+       FROM batch_log_entries k STRAIGHT_JOIN batch_log_entries c ON c.corrects_entry_id = k.id
+      WHERE k.batch_id IN (?) AND k.step_key = 'knockout-end' AND k.brewery_id = ? AND c.kind = 'correction'`,
+    { type: QueryTypes.SELECT, replacements: [ids, breweryId, ids, breweryId] },
+  );
+  const byBatch = new Map<number, KnockoutRow[]>(ids.map((id) => [id, []]));
+  // Entries appended after the page was read belong to a later head.
+  for (const r of rows) if (r.sequence <= heads.get(r.batchId)!) byBatch.get(r.batchId)!.push(r);
+  const ogs = new Map<number, number | null>();
+  for (const [batchId, entries] of byBatch) {
+    const ordered = entries
+      .sort((x, y) => x.sequence - y.sequence)
+      .map((e) => {
+        const measurements = typeof e.measurements === 'string' ? (JSON.parse(e.measurements) as Measurements) : e.measurements;
+        return {
+          id: Number(e.id),
+          kind: e.kind,
+          stepKey: e.stepKey,
+          correctsEntryId: e.correctsEntryId === null ? null : Number(e.correctsEntryId),
+          data: measurements === null ? {} : { measurements },
+        };
+      });
+    let og: number | null = null;
+    // The same rule as the batch page: each entry's measurements after corrections, the last knockout reading wins.
+    for (const { stepKey, measurements } of effectiveMeasurements(ordered).values()) {
+      if (stepKey === 'knockout-end' && measurements.gravitySg !== undefined) og = measurements.gravitySg;
+    }
+    ogs.set(batchId, og);
+  }
+  return ogs;
+}
+
+/**
+ * One page of the brewery's batches, newest first, with vessel and planned/actual OG. One statement reads
+ * the page in index order (brewery, brew date, id) with its vessel, each batch's log head (index-only) and
+ * the total (an uncorrelated count over the brewery's index range, evaluated once). The actual OGs come
+ * from the cache by log head; a second statement reads knockouts and corrections only for batches whose
+ * log has grown since.
  */
 export async function listBatches(breweryId: number, query: BatchListQuery): Promise<BatchList> {
   const filters = [...(query.status ? ['status = ?'] : []), ...(query.recipeId ? ['recipe_id = ?'] : [])];
@@ -166,12 +209,7 @@ export async function listBatches(breweryId: number, query: BatchListQuery): Pro
     `SELECT b.id, b.number, b.beer_name AS beerName, b.recipe_id AS recipeId, b.status,
             DATE_FORMAT(b.brew_date, '%Y-%m-%d') AS brewDate, b.planned_og AS plannedOg,
             v.id AS vesselId, v.name AS vesselName,
-            (SELECT JSON_ARRAYAGG(JSON_ARRAY(k.id, k.sequence, k.kind, k.step_key, k.corrects_entry_id, JSON_EXTRACT(k.data, '$.measurements')))
-               FROM batch_log_entries k
-              WHERE k.batch_id = b.id AND k.step_key = 'knockout-end') AS knockouts,
-            (SELECT JSON_ARRAYAGG(JSON_ARRAY(c.id, c.sequence, c.kind, c.step_key, c.corrects_entry_id, JSON_EXTRACT(c.data, '$.measurements')))
-               FROM batch_log_entries k STRAIGHT_JOIN batch_log_entries c ON c.corrects_entry_id = k.id
-              WHERE k.batch_id = b.id AND k.step_key = 'knockout-end' AND c.kind = 'correction') AS corrections,
+            (SELECT CONCAT(k.sequence, ':', k.id) FROM batch_log_entries k WHERE k.batch_id = b.id ORDER BY k.sequence DESC LIMIT 1) AS logHead,
             (SELECT COUNT(*) FROM batches n WHERE ${where('n')}) AS total
        FROM batches b
        LEFT JOIN vessels v ON v.current_batch_id = b.id AND v.brewery_id = b.brewery_id
@@ -185,6 +223,30 @@ export async function listBatches(breweryId: number, query: BatchListQuery): Pro
   );
   // Past the last page there is no row to carry the total.
   const total = rows.length ? Number(rows[0]!.total) : await Batch.count({ where: { breweryId, ...(query.status ? { status: query.status } : {}), ...(query.recipeId ? { recipeId: query.recipeId } : {}) } });
+
+  const og = new Map<number, number | null>();
+  const stale = new Map<number, number>();
+  for (const r of rows) {
+    if (r.logHead === null) og.set(r.id, null);
+    else {
+      const key = `${r.id}:${r.logHead}`;
+      const cached = knockoutOgCache.get(key);
+      if (cached === undefined) stale.set(r.id, Number(r.logHead.split(':')[0]));
+      else {
+        // Most recently used last, so the least recently used is the first to go.
+        knockoutOgCache.delete(key);
+        knockoutOgCache.set(key, cached);
+        og.set(r.id, cached);
+      }
+    }
+  }
+  if (stale.size) {
+    for (const [batchId, value] of await knockoutOgs(breweryId, stale)) {
+      og.set(batchId, value);
+      knockoutOgCache.set(`${batchId}:${rows.find((r) => r.id === batchId)!.logHead}`, value);
+    }
+    while (knockoutOgCache.size > KNOCKOUT_OG_CACHE_SIZE) knockoutOgCache.delete(knockoutOgCache.keys().next().value!);
+  }
   return {
     items: rows.map((r) => ({
       id: r.id,
@@ -195,7 +257,7 @@ export async function listBatches(breweryId: number, query: BatchListQuery): Pro
       brewDate: r.brewDate,
       vessel: r.vesselId === null ? null : { id: r.vesselId, name: r.vesselName! },
       plannedOg: r.plannedOg,
-      actualOg: knockoutOg(r),
+      actualOg: og.get(r.id)!,
     })),
     total,
     page: query.page,
