@@ -149,7 +149,8 @@ interface VersionRow extends VersionFields, EquipmentInput {
   recipeId: number;
   versionBatchVolumeL: number;
   authorName: string | null;
-  content: string | RecipeVersionContent;
+  /** The stored text (cast, so the driver does not parse it): the cache key, parsed only on a miss. */
+  content: string;
   recipeName: string;
   style: string;
   description: string;
@@ -186,7 +187,8 @@ export async function getVersion(breweryId: number, recipeId: number, versionId:
   const [row] = await sequelize.query<VersionRow>(
     `SELECT v.id, v.recipe_id AS recipeId, v.number, v.change_note AS changeNote, u.display_name AS authorName,
             v.created_at AS createdAt, v.frozen_at AS frozenAt, v.equipment_profile_id AS equipmentProfileId,
-            v.batch_volume_l AS versionBatchVolumeL, v.og, v.fg, v.ibu, v.srm, v.abv_pct AS abvPct, v.content,
+            v.batch_volume_l AS versionBatchVolumeL, v.og, v.fg, v.ibu, v.srm, v.abv_pct AS abvPct,
+            CAST(v.content AS CHAR) AS content,
             r.name AS recipeName, r.style, r.description, r.status,
             e.name, e.batch_volume_l AS batchVolumeL,
             e.brewhouse_efficiency AS brewhouseEfficiency, e.boil_off_l_per_hour AS boilOffLPerHour, e.boil_minutes AS boilMinutes,
@@ -203,8 +205,7 @@ export async function getVersion(breweryId: number, recipeId: number, versionId:
   );
   if (!row) throw notFound('This recipe version');
   if (row.name === null) throw notFound('This equipment profile');
-  const contentText = typeof row.content === 'string' ? row.content : JSON.stringify(row.content);
-  const { content, computed } = computedFor(row.recipeName, contentText, equipmentFromRow(row));
+  const { content, computed } = computedFor(row.recipeName, row.content, equipmentFromRow(row));
   return {
     recipe: { id: row.recipeId, name: row.recipeName, style: row.style, description: row.description, status: row.status },
     version: { ...versionSummary({ ...row, batchVolumeL: row.versionBatchVolumeL }, row.authorName), content },
