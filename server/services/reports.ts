@@ -9,15 +9,22 @@ import { notFound } from '../errors';
 import { achievedEfficiency, apparentAttenuation, lineVolumeL, type PackageLine } from '../../shared/brewing';
 import type { BatchHistory, BeerFigures, HistoryRow, PackageFigures, ProductionReport } from '../../shared/schemas/reports';
 
+/** One formatter per time zone (building one costs more than the rest of a report's arithmetic); a zone's rules never change while the process runs. */
+const zoneFormatters = new Map<string, Intl.DateTimeFormat>();
+function zoneFormatter(timeZone: string): Intl.DateTimeFormat {
+  let f = zoneFormatters.get(timeZone);
+  if (!f) {
+    f = new Intl.DateTimeFormat('en-US', { timeZone, hourCycle: 'h23', year: 'numeric', month: '2-digit', day: '2-digit', hour: '2-digit', minute: '2-digit', second: '2-digit' });
+    zoneFormatters.set(timeZone, f);
+  }
+  return f;
+}
+
 /** The UTC instant of local midnight on the first of `year-month` in `timeZone` (month may be 13 → next year). */
 export function monthStartUtc(year: number, month: number, timeZone: string): Date {
   const guess = Date.UTC(year, month - 1, 1);
   // The zone's offset at that moment, read back through Intl (no time-zone tables needed in MariaDB).
-  const parts = Object.fromEntries(
-    new Intl.DateTimeFormat('en-US', { timeZone, hourCycle: 'h23', year: 'numeric', month: '2-digit', day: '2-digit', hour: '2-digit', minute: '2-digit', second: '2-digit' })
-      .formatToParts(new Date(guess))
-      .map((p) => [p.type, p.value]),
-  );
+  const parts = Object.fromEntries(zoneFormatter(timeZone).formatToParts(new Date(guess)).map((p) => [p.type, p.value]));
   const asLocal = Date.UTC(Number(parts.year), Number(parts.month) - 1, Number(parts.day), Number(parts.hour), Number(parts.minute), Number(parts.second));
   return new Date(guess - (asLocal - guess));
 }
@@ -40,44 +47,42 @@ const KNOCKOUTS = `knockout AS (
   SELECT k.id, k.brewery_id, k.batch_id, k.captured_at, ${measured('k', 'volumeL')} AS volumeL
     FROM batch_log_entries k WHERE k.step_key = 'knockout-end')`;
 
-/** One in-tank row per knockout before the month's end of the batches (alias b) that `tables` and `where` find, with what each packaged before the month. */
-const inTank = (tables: string, where: string) => `
-  SELECT 'in_tank', b.id, b.beer_name, k.volumeL, NULL,
-         (SELECT SUM(p.packaged_l) FROM packaging_runs p WHERE p.batch_id = b.id AND p.packaged_at < :from)
-    FROM ${tables}
-    JOIN knockout k ON k.batch_id = b.id AND k.captured_at < :to
-   WHERE ${where}`;
+/** What a batch packaged before the month (alias b), for a batch in a tank at the month's end. */
+const PACKAGED_BEFORE = '(SELECT SUM(p.packaged_l) FROM packaging_runs p WHERE p.batch_id = b.id AND p.packaged_at < :from)';
 
 /**
- * The monthly report in one statement, one row per reason a batch or run counts:
+ * The monthly report in one statement. Each table a statement names costs MariaDB planning time, so it names few:
  * - brewed: a knockout in the month;
- * - dumped: a batch dumped in the month, with its first knockout;
- * - in_tank: a knockout before the month's end of a batch still unfinished then: open now (brewing, fermenting,
- *   conditioning), dumped after the end, or with its final packaging run after the end. The last are found among
- *   runs after the end of batches knocked out before it, both read from indexes alone, so a month years back costs
- *   index entries rather than rows; each carries the litres its batch packaged before the month;
+ * - batches dumped since the month began, and batches open now (brewing, fermenting, conditioning), each with all
+ *   its knockouts: one dumped in the month counts its first knockout as dumped; one dumped after the month's end,
+ *   or open now, was still in a tank then and counts its knockouts before the end;
+ * - in_tank: the knockouts before the month's end of a batch whose final packaging run came after the end, found
+ *   among runs after the end of batches knocked out before it, both read from indexes alone, so a month years back
+ *   costs index entries rather than rows;
  * - packaged: a packaging run in the month, with its package lines.
+ * Batches that may be in a tank carry the litres they packaged before the month.
  * Exported so the benchmark can EXPLAIN it.
  */
 export const PRODUCTION_SQL = `WITH ${KNOCKOUTS}
-  SELECT 'brewed' AS why, b.id AS batchId, b.beer_name AS beerName, k.volumeL, NULL AS runLines, NULL AS packagedL
+  SELECT 'brewed' AS why, b.id AS batchId, b.beer_name AS beerName, k.id AS knockoutId, 1 AS knockedOutByEnd, k.volumeL,
+         NULL AS runLines, NULL AS packagedL
     FROM knockout k JOIN batches b ON b.id = k.batch_id
    WHERE k.brewery_id = :breweryId AND k.captured_at >= :from AND k.captured_at < :to
   UNION ALL
-  SELECT 'dumped', b.id, b.beer_name, (SELECT k.volumeL FROM knockout k WHERE k.batch_id = b.id ORDER BY k.id LIMIT 1), NULL, NULL
-    FROM batches b
-   WHERE b.brewery_id = :breweryId AND b.status = 'dumped' AND b.updated_at >= :from AND b.updated_at < :to
-  UNION ALL ${inTank('batches b', `b.brewery_id = :breweryId AND b.status IN ('brewing', 'fermenting', 'conditioning')`)}
-  UNION ALL ${inTank('batches b', `b.brewery_id = :breweryId AND b.status = 'dumped' AND b.updated_at >= :to`)}
-  UNION ALL ${inTank(
-    `packaging_runs fp
-    JOIN batches b ON b.id = fp.batch_id AND NOT (b.status = 'dumped' AND b.updated_at >= :to)
-    JOIN batch_log_entries fe ON fe.id = fp.log_entry_id AND JSON_VALUE(fe.data, '$.final') IN ('1', 'true')`,
-    `fp.brewery_id = :breweryId AND fp.packaged_at >= :to
-     AND fp.batch_id IN (SELECT kb.batch_id FROM batch_log_entries kb WHERE kb.brewery_id = :breweryId AND kb.step_key = 'knockout-end' AND kb.captured_at < :to)`,
-  )}
+  SELECT IF(b.status = 'dumped' AND b.updated_at < :to, 'dumped', 'in_tank'), b.id, b.beer_name, k.id, k.captured_at < :to, k.volumeL,
+         NULL, ${PACKAGED_BEFORE}
+    FROM batches b LEFT JOIN knockout k ON k.batch_id = b.id
+   WHERE b.brewery_id = :breweryId AND (b.status IN ('brewing', 'fermenting', 'conditioning') OR (b.status = 'dumped' AND b.updated_at >= :from))
   UNION ALL
-  SELECT 'packaged', b.id, b.beer_name, NULL, p.lines, p.packaged_l
+  SELECT 'in_tank', b.id, b.beer_name, k.id, 1, k.volumeL, NULL, ${PACKAGED_BEFORE}
+    FROM packaging_runs fp
+    JOIN batches b ON b.id = fp.batch_id AND NOT (b.status = 'dumped' AND b.updated_at >= :to)
+    JOIN batch_log_entries fe ON fe.id = fp.log_entry_id AND JSON_VALUE(fe.data, '$.final') IN ('1', 'true')
+    JOIN knockout k ON k.batch_id = b.id AND k.captured_at < :to
+   WHERE fp.brewery_id = :breweryId AND fp.packaged_at >= :to
+     AND fp.batch_id IN (SELECT kb.batch_id FROM batch_log_entries kb WHERE kb.brewery_id = :breweryId AND kb.step_key = 'knockout-end' AND kb.captured_at < :to)
+  UNION ALL
+  SELECT 'packaged', b.id, b.beer_name, NULL, NULL, NULL, p.lines, p.packaged_l
     FROM packaging_runs p JOIN batches b ON b.id = p.batch_id
    WHERE p.brewery_id = :breweryId AND p.packaged_at >= :from AND p.packaged_at < :to`;
 
@@ -85,10 +90,13 @@ interface ProductionRow {
   why: 'brewed' | 'dumped' | 'in_tank' | 'packaged';
   batchId: number;
   beerName: string;
+  knockoutId: number | string | null;
+  /** 1 when the knockout came before the month's end. */
+  knockedOutByEnd: number | string | null;
   /** Knockout litres as the log's JSON text. */
   volumeL: string | null;
   runLines: PackageLine[] | string | null;
-  /** A run's litres; for in_tank, what the batch packaged before the month. */
+  /** A run's litres; for a batch that may be in a tank, what it packaged before the month. */
   packagedL: number | null;
 }
 
@@ -107,35 +115,39 @@ export async function productionReport(brewery: { id: number; timeZone: string }
     if (!beers.has(name)) beers.set(name, { beerName: name, brewedL: 0, packagedL: 0, dumpedL: 0, inTankL: 0 });
     return beers.get(name)!;
   };
+  const litres = (r: ProductionRow) => (r.volumeL === null ? 0 : Number(r.volumeL));
+  const inTank = rows.filter((r) => r.why === 'in_tank' && r.knockoutId !== null && Number(r.knockedOutByEnd) === 1);
+  // A batch dumped in the month counts its first knockout.
+  const dumped = new Map<number, ProductionRow>();
+  for (const r of rows) {
+    if (r.why !== 'dumped') continue;
+    const first = dumped.get(r.batchId);
+    if (!first || (r.knockoutId !== null && (first.knockoutId === null || Number(r.knockoutId) < Number(first.knockoutId)))) dumped.set(r.batchId, r);
+  }
+
   // What each batch had packaged by the month's end: its runs in the month, and for a batch in a tank, before it.
   const packagedBefore = new Map<number, number>();
-  const addPackaged = (batchId: number, litres: number) => packagedBefore.set(batchId, (packagedBefore.get(batchId) ?? 0) + litres);
-  const earlierCounted = new Set<number>();
+  const addPackaged = (batchId: number, l: number) => packagedBefore.set(batchId, (packagedBefore.get(batchId) ?? 0) + l);
+  for (const r of new Map(inTank.map((r) => [r.batchId, r])).values()) if (r.packagedL !== null) addPackaged(r.batchId, Number(r.packagedL));
   const packages = new Map<string, PackageFigures>();
   for (const r of rows) {
-    if (r.why === 'packaged') {
-      addPackaged(r.batchId, Number(r.packagedL));
-      for (const line of json(r.runLines!)) {
-        const size = line.kind === 'keg' ? line.size : String(line.sizeMl);
-        const key = `${r.beerName}\u0000${line.kind}\u0000${size}`;
-        const p = packages.get(key) ?? { beerName: r.beerName, kind: line.kind, size, count: 0, volumeL: 0 };
-        p.count += line.count;
-        p.volumeL += lineVolumeL(line);
-        packages.set(key, p);
-        beer(r.beerName).packagedL += lineVolumeL(line);
-      }
-    } else if (r.why === 'in_tank' && r.packagedL !== null && !earlierCounted.has(r.batchId)) {
-      earlierCounted.add(r.batchId);
-      addPackaged(r.batchId, Number(r.packagedL));
+    if (r.why !== 'packaged') continue;
+    addPackaged(r.batchId, Number(r.packagedL));
+    for (const line of json(r.runLines!)) {
+      const size = line.kind === 'keg' ? line.size : String(line.sizeMl);
+      const key = `${r.beerName}\u0000${line.kind}\u0000${size}`;
+      const p = packages.get(key) ?? { beerName: r.beerName, kind: line.kind, size, count: 0, volumeL: 0 };
+      p.count += line.count;
+      p.volumeL += lineVolumeL(line);
+      packages.set(key, p);
+      beer(r.beerName).packagedL += lineVolumeL(line);
     }
   }
-  const knockoutL = (r: ProductionRow) => (r.volumeL === null ? 0 : Number(r.volumeL));
-  for (const r of rows) {
-    if (r.why === 'brewed') beer(r.beerName).brewedL += knockoutL(r);
-    // A dumped batch loses what was still in the tank: its knockout volume less anything packaged before.
-    if (r.why === 'dumped') beer(r.beerName).dumpedL += Math.max(0, knockoutL(r) - (packagedBefore.get(r.batchId) ?? 0));
-    if (r.why === 'in_tank') beer(r.beerName).inTankL += Math.max(0, knockoutL(r) - (packagedBefore.get(r.batchId) ?? 0));
-  }
+
+  for (const r of rows) if (r.why === 'brewed') beer(r.beerName).brewedL += litres(r);
+  // A dumped batch loses what was still in the tank: its knockout volume less anything packaged before.
+  for (const r of dumped.values()) beer(r.beerName).dumpedL += Math.max(0, litres(r) - (packagedBefore.get(r.batchId) ?? 0));
+  for (const r of inTank) beer(r.beerName).inTankL += Math.max(0, litres(r) - (packagedBefore.get(r.batchId) ?? 0));
   const list = [...beers.values()].sort((a, b) => a.beerName.localeCompare(b.beerName));
   const totals = list.reduce(
     (t, b) => ({ brewedL: t.brewedL + b.brewedL, packagedL: t.packagedL + b.packagedL, dumpedL: t.dumpedL + b.dumpedL, inTankL: t.inTankL + b.inTankL }),
@@ -162,31 +174,28 @@ export async function explainProductionReport(breweryId: number, month: string):
 }
 
 /**
- * A recipe's latest batches, newest first, planned against actual, in one statement: no row when the recipe is not
- * the brewery's, one row with no batch when it has none. Each batch's first knockout gives the measured OG and
- * litres (after corrections), its latest gravity reading the FG, its first packaging run the packaging day.
+ * A recipe's latest batches, newest first, planned against actual, in one statement: a first row with the recipe's
+ * name (none when the recipe is not the brewery's), then the batches in index order. Each batch's first knockout
+ * gives the measured OG and litres (after corrections), its latest gravity reading the FG, its first packaging run
+ * the packaging day.
  */
 const HISTORY_SQL = `
-  SELECT r.name AS recipeName, h.id, h.number, h.brewDate, h.status, h.plannedOg, h.plannedEfficiency, h.plannedKnockoutL,
-         ${measured('k', 'gravitySg')} AS og, ${measured('k', 'volumeL')} AS volumeL,
-         (SELECT g.sg FROM gravity_readings g WHERE g.batch_id = h.id ORDER BY g.taken_at DESC LIMIT 1) AS lastSg,
-         (SELECT MIN(p.packaged_at) FROM packaging_runs p WHERE p.batch_id = h.id) AS firstPackagedAt
-    FROM recipes r
-    LEFT JOIN (
-      SELECT b.id, b.number, b.brew_date AS brewDate, b.status, b.planned_og AS plannedOg,
-             b.planned_efficiency AS plannedEfficiency, b.planned_knockout_l AS plannedKnockoutL,
-             (SELECT MIN(ko.id) FROM batch_log_entries ko WHERE ko.batch_id = b.id AND ko.step_key = 'knockout-end') AS knockoutId
-        FROM batches b
-       WHERE b.brewery_id = :breweryId AND b.recipe_id = :recipeId
-       ORDER BY b.brew_date DESC, b.id DESC
-       LIMIT :limit
-    ) h ON TRUE
-    LEFT JOIN batch_log_entries k ON k.id = h.knockoutId
-   WHERE r.id = :recipeId AND r.brewery_id = :breweryId
-   ORDER BY h.brewDate DESC, h.id DESC`;
+  (SELECT r.name AS recipeName, NULL AS id, NULL AS number, NULL AS brewDate, NULL AS status, NULL AS plannedOg,
+          NULL AS plannedEfficiency, NULL AS plannedKnockoutL, NULL AS measured, NULL AS lastSg, NULL AS firstPackagedAt
+     FROM recipes r WHERE r.id = :recipeId AND r.brewery_id = :breweryId)
+  UNION ALL
+  (SELECT NULL, b.id, b.number, b.brew_date, b.status, b.planned_og, b.planned_efficiency, b.planned_knockout_l,
+          (SELECT JSON_ARRAY(${measured('k', 'gravitySg')}, ${measured('k', 'volumeL')})
+             FROM batch_log_entries k WHERE k.batch_id = b.id AND k.step_key = 'knockout-end' ORDER BY k.id LIMIT 1),
+          (SELECT g.sg FROM gravity_readings g WHERE g.batch_id = b.id ORDER BY g.taken_at DESC LIMIT 1),
+          (SELECT MIN(p.packaged_at) FROM packaging_runs p WHERE p.batch_id = b.id)
+     FROM batches b
+    WHERE b.brewery_id = :breweryId AND b.recipe_id = :recipeId
+    ORDER BY b.brew_date DESC, b.id DESC
+    LIMIT :limit)`;
 
 interface HistorySqlRow {
-  recipeName: string;
+  recipeName: string | null;
   id: number | null;
   number: string;
   brewDate: string;
@@ -195,9 +204,8 @@ interface HistorySqlRow {
   /** From the frozen plan (stored generated columns). */
   plannedEfficiency: number | null;
   plannedKnockoutL: number | null;
-  /** Measured OG and knockout litres as the log's JSON text. */
-  og: string | null;
-  volumeL: string | null;
+  /** [OG, knockout litres] measured at the first knockout, each as the log's JSON text or null; null without a knockout. */
+  measured: [string | null, string | null] | string | null;
   lastSg: number | null;
   firstPackagedAt: Date | string | null;
 }
@@ -205,30 +213,35 @@ interface HistorySqlRow {
 /** The latest `limit` batches of a recipe, planned against actual, newest first. */
 export async function batchHistory(breweryId: number, recipeId: number, limit: number): Promise<BatchHistory> {
   const found = await sequelize.query<HistorySqlRow>(HISTORY_SQL, { replacements: { breweryId, recipeId, limit }, type: QueryTypes.SELECT });
-  if (!found.length) throw notFound('This recipe');
-  const rows: HistoryRow[] = found.filter((b) => b.id !== null).map((b) => {
-    const og = b.og === null ? null : Number(b.og);
-    const volumeL = b.volumeL === null ? null : Number(b.volumeL);
-    const plannedEfficiency = Number(b.plannedEfficiency);
-    const fg = b.lastSg;
-    const packagedAt = b.firstPackagedAt ? new Date(b.firstPackagedAt) : null;
-    return {
-      batchId: b.id!,
-      number: b.number,
-      brewDate: String(b.brewDate),
-      status: b.status,
-      plannedOg: b.plannedOg,
-      actualOg: og,
-      plannedEfficiency,
-      actualEfficiency:
-        og !== null && volumeL !== null
-          ? achievedEfficiency({ plannedEfficiency, plannedOg: b.plannedOg, plannedVolumeL: Number(b.plannedKnockoutL), actualOg: og, actualVolumeL: volumeL })
-          : null,
-      apparentAttenuation: og !== null && fg !== null && fg < og ? apparentAttenuation(og, fg) : null,
-      daysBrewToPackage: packagedAt ? Math.floor((packagedAt.getTime() - Date.parse(`${b.brewDate}T00:00:00Z`)) / 86_400_000) : null,
-    };
-  });
-  return { recipeId, recipeName: found[0]!.recipeName, rows };
+  const recipe = found.find((r) => r.id === null);
+  if (!recipe) throw notFound('This recipe');
+  const rows: HistoryRow[] = found
+    .filter((b) => b.id !== null)
+    .sort((a, b) => (a.brewDate === b.brewDate ? b.id! - a.id! : a.brewDate < b.brewDate ? 1 : -1))
+    .map((b) => {
+      const [ogText, volumeText] = b.measured === null ? [null, null] : json(b.measured);
+      const og = ogText === null ? null : Number(ogText);
+      const volumeL = volumeText === null ? null : Number(volumeText);
+      const plannedEfficiency = Number(b.plannedEfficiency);
+      const fg = b.lastSg;
+      const packagedAt = b.firstPackagedAt ? new Date(b.firstPackagedAt) : null;
+      return {
+        batchId: b.id!,
+        number: b.number,
+        brewDate: String(b.brewDate),
+        status: b.status,
+        plannedOg: b.plannedOg,
+        actualOg: og,
+        plannedEfficiency,
+        actualEfficiency:
+          og !== null && volumeL !== null
+            ? achievedEfficiency({ plannedEfficiency, plannedOg: b.plannedOg, plannedVolumeL: Number(b.plannedKnockoutL), actualOg: og, actualVolumeL: volumeL })
+            : null,
+        apparentAttenuation: og !== null && fg !== null && fg < og ? apparentAttenuation(og, fg) : null,
+        daysBrewToPackage: packagedAt ? Math.floor((packagedAt.getTime() - Date.parse(`${b.brewDate}T00:00:00Z`)) / 86_400_000) : null,
+      };
+    });
+  return { recipeId, recipeName: recipe.recipeName!, rows };
 }
 
 /** The monthly report as CSV: one line per beer and a total, in litres, US barrels and hectolitres; then packages. */
