@@ -42,10 +42,8 @@ const measured = (k: string, field: 'volumeL' | 'gravitySg') => `IF(JSON_EXISTS(
       ORDER BY c.id DESC LIMIT 1),
     JSON_VALUE(${k}.data, '$.measurements.${field}')), NULL)`;
 
-/** A batch's knockout entries (a step or measurement at 'knockout-end') with the litres measured, after corrections. */
-const KNOCKOUTS = `knockout AS (
-  SELECT k.id, k.brewery_id, k.batch_id, k.captured_at, ${measured('k', 'volumeL')} AS volumeL
-    FROM batch_log_entries k WHERE k.step_key = 'knockout-end')`;
+/** A knockout entry (a step or measurement at 'knockout-end', alias k) and the litres it measured, after corrections. */
+const KNOCKOUT_LITRES = measured('k', 'volumeL');
 
 /** What a batch packaged before the month (alias b), for a batch in a tank at the month's end. */
 const PACKAGED_BEFORE = '(SELECT SUM(p.packaged_l) FROM packaging_runs p WHERE p.batch_id = b.id AND p.packaged_at < :from)';
@@ -63,22 +61,22 @@ const PACKAGED_BEFORE = '(SELECT SUM(p.packaged_l) FROM packaging_runs p WHERE p
  * Batches that may be in a tank carry the litres they packaged before the month.
  * Exported so the benchmark can EXPLAIN it.
  */
-export const PRODUCTION_SQL = `WITH ${KNOCKOUTS}
-  SELECT 'brewed' AS why, b.id AS batchId, b.beer_name AS beerName, k.id AS knockoutId, 1 AS knockedOutByEnd, k.volumeL,
+export const PRODUCTION_SQL = `
+  SELECT 'brewed' AS why, b.id AS batchId, b.beer_name AS beerName, k.id AS knockoutId, 1 AS knockedOutByEnd, ${KNOCKOUT_LITRES} AS volumeL,
          NULL AS runLines, NULL AS packagedL
-    FROM knockout k JOIN batches b ON b.id = k.batch_id
-   WHERE k.brewery_id = :breweryId AND k.captured_at >= :from AND k.captured_at < :to
+    FROM batch_log_entries k JOIN batches b ON b.id = k.batch_id
+   WHERE k.brewery_id = :breweryId AND k.step_key = 'knockout-end' AND k.captured_at >= :from AND k.captured_at < :to
   UNION ALL
-  SELECT IF(b.status = 'dumped' AND b.updated_at < :to, 'dumped', 'in_tank'), b.id, b.beer_name, k.id, k.captured_at < :to, k.volumeL,
+  SELECT IF(b.status = 'dumped' AND b.updated_at < :to, 'dumped', 'in_tank'), b.id, b.beer_name, k.id, k.captured_at < :to, ${KNOCKOUT_LITRES},
          NULL, ${PACKAGED_BEFORE}
-    FROM batches b LEFT JOIN knockout k ON k.batch_id = b.id
+    FROM batches b LEFT JOIN batch_log_entries k ON k.batch_id = b.id AND k.step_key = 'knockout-end'
    WHERE b.brewery_id = :breweryId AND (b.status IN ('brewing', 'fermenting', 'conditioning') OR (b.status = 'dumped' AND b.updated_at >= :from))
   UNION ALL
-  SELECT 'in_tank', b.id, b.beer_name, k.id, 1, k.volumeL, NULL, ${PACKAGED_BEFORE}
+  SELECT 'in_tank', b.id, b.beer_name, k.id, 1, ${KNOCKOUT_LITRES}, NULL, ${PACKAGED_BEFORE}
     FROM packaging_runs fp
     JOIN batches b ON b.id = fp.batch_id AND NOT (b.status = 'dumped' AND b.updated_at >= :to)
     JOIN batch_log_entries fe ON fe.id = fp.log_entry_id AND JSON_VALUE(fe.data, '$.final') IN ('1', 'true')
-    JOIN knockout k ON k.batch_id = b.id AND k.captured_at < :to
+    JOIN batch_log_entries k ON k.batch_id = b.id AND k.step_key = 'knockout-end' AND k.captured_at < :to
    WHERE fp.brewery_id = :breweryId AND fp.packaged_at >= :to
      AND fp.batch_id IN (SELECT kb.batch_id FROM batch_log_entries kb WHERE kb.brewery_id = :breweryId AND kb.step_key = 'knockout-end' AND kb.captured_at < :to)
   UNION ALL
