@@ -9,6 +9,7 @@ import { sequelize } from '../config/database';
 import { Batch, BatchLogEntry, IdempotencyKey } from '../models';
 import { badRequest, conflict, notFound, unprocessable } from '../errors';
 import { fieldMessages } from '../middlewares/validate';
+import { LruCache } from './lru-cache';
 import { BREW_DAY_KINDS, writeMetaSchema, type ChainCheck, type LogEntry, type SignatureMeaning, type WriteMeta } from '../../shared/schemas/batch-log';
 import type { Role } from '../../shared/schemas/roles';
 
@@ -309,32 +310,12 @@ export async function logEntries(batchId: number, transaction?: Transaction): Pr
 }
 
 /**
- * Serialized logs by batch id, each under the head (last sequence and hash) it was read at. Entries are
+ * Serialized logs by batch id, each with the head (last sequence and hash) it was read at. Entries are
  * never changed or deleted (the application account may only INSERT and SELECT them) and every append
  * moves the head, so a log whose head matches the batch's current head is exactly the log: never stale.
- * Least recently used logs leave first once the cache holds more than LOG_CACHE_CHARS characters.
+ * At most 8 M characters of JSON in all (about 120 logs of 130 entries), none over 2 M.
  */
-const LOG_CACHE_CHARS = 8 * 1024 * 1024;
-const logCache = new Map<number, { sequence: number; hash: string; json: string }>();
-let logCacheChars = 0;
-
-function forgetLog(batchId: number) {
-  const cached = logCache.get(batchId);
-  if (!cached) return;
-  logCache.delete(batchId);
-  logCacheChars -= cached.json.length;
-}
-
-function rememberLog(batchId: number, head: { sequence: number; hash: string }, json: string) {
-  forgetLog(batchId);
-  if (json.length > LOG_CACHE_CHARS / 4) return;
-  logCache.set(batchId, { ...head, json });
-  logCacheChars += json.length;
-  for (const oldest of logCache.keys()) {
-    if (logCacheChars <= LOG_CACHE_CHARS) break;
-    forgetLog(oldest);
-  }
-}
+const logCache = new LruCache<number, { sequence: number; hash: string; json: string }>(8 * 1024 * 1024, (log) => log.json.length, 2 * 1024 * 1024);
 
 /**
  * A batch's log as the API's JSON (an array of LogEntry) and the head it was read at (null while empty).
@@ -350,9 +331,6 @@ export async function batchLogJson(breweryId: number, batchId: number): Promise<
   if (found.sequence === null || found.hash === null) return { json: '[]', head: null };
   const cached = logCache.get(batchId);
   if (cached && cached.sequence === Number(found.sequence) && cached.hash === found.hash) {
-    // Most recently used goes last.
-    logCache.delete(batchId);
-    logCache.set(batchId, cached);
     return { json: cached.json, head: { sequence: cached.sequence, hash: cached.hash } };
   }
   const rows = await sequelize.query<AnsweredFields>(
@@ -367,6 +345,6 @@ export async function batchLogJson(breweryId: number, batchId: number): Promise<
   // Cached under the head of what was read: an entry appended since the first statement is in it.
   const last = rows.at(-1)!;
   const head = { sequence: Number(last.sequence), hash: last.hash };
-  rememberLog(batchId, head, json);
+  logCache.set(batchId, { ...head, json });
   return { json, head };
 }
