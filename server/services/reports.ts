@@ -185,7 +185,7 @@ const HISTORY_SQL = `
   (SELECT NULL, b.id, b.number, b.brew_date, b.status, b.planned_og, b.planned_efficiency, b.planned_knockout_l,
           (SELECT JSON_ARRAY(${measured('k', 'gravitySg')}, ${measured('k', 'volumeL')})
              FROM batch_log_entries k WHERE k.batch_id = b.id AND k.step_key = 'knockout-end' ORDER BY k.id LIMIT 1),
-          (SELECT g.sg FROM gravity_readings g WHERE g.batch_id = b.id ORDER BY g.taken_at DESC LIMIT 1),
+          (SELECT g.sg FROM gravity_readings g WHERE g.batch_id = b.id ORDER BY g.taken_at DESC, g.id DESC LIMIT 1),
           (SELECT MIN(p.packaged_at) FROM packaging_runs p WHERE p.batch_id = b.id)
      FROM batches b
     WHERE b.brewery_id = :breweryId AND b.recipe_id = :recipeId
