@@ -9,22 +9,15 @@ import { notFound } from '../errors';
 import { achievedEfficiency, apparentAttenuation, lineVolumeL, type PackageLine } from '../../shared/brewing';
 import type { BatchHistory, BeerFigures, HistoryRow, PackageFigures, ProductionReport } from '../../shared/schemas/reports';
 
-/** One formatter per time zone (building one costs more than the rest of a report's arithmetic); a zone's rules never change while the process runs. */
-const zoneFormatters = new Map<string, Intl.DateTimeFormat>();
-function zoneFormatter(timeZone: string): Intl.DateTimeFormat {
-  let f = zoneFormatters.get(timeZone);
-  if (!f) {
-    f = new Intl.DateTimeFormat('en-US', { timeZone, hourCycle: 'h23', year: 'numeric', month: '2-digit', day: '2-digit', hour: '2-digit', minute: '2-digit', second: '2-digit' });
-    zoneFormatters.set(timeZone, f);
-  }
-  return f;
-}
-
 /** The UTC instant of local midnight on the first of `year-month` in `timeZone` (month may be 13 → next year). */
 export function monthStartUtc(year: number, month: number, timeZone: string): Date {
   const guess = Date.UTC(year, month - 1, 1);
   // The zone's offset at that moment, read back through Intl (no time-zone tables needed in MariaDB).
-  const parts = Object.fromEntries(zoneFormatter(timeZone).formatToParts(new Date(guess)).map((p) => [p.type, p.value]));
+  const parts = Object.fromEntries(
+    new Intl.DateTimeFormat('en-US', { timeZone, hourCycle: 'h23', year: 'numeric', month: '2-digit', day: '2-digit', hour: '2-digit', minute: '2-digit', second: '2-digit' })
+      .formatToParts(new Date(guess))
+      .map((p) => [p.type, p.value]),
+  );
   const asLocal = Date.UTC(Number(parts.year), Number(parts.month) - 1, Number(parts.day), Number(parts.hour), Number(parts.minute), Number(parts.second));
   return new Date(guess - (asLocal - guess));
 }
@@ -98,10 +91,20 @@ interface ProductionRow {
   packagedL: number | null;
 }
 
+// Working a month's bounds out through Intl costs more than the rest of the report's arithmetic, and they depend
+// only on the zone's rules, which never change while the process runs: each zone and month is worked out once.
+const monthBoundsMs = new Map<string, [number, number]>();
+
 /** The month's bounds in the brewery's time zone. */
-function monthBounds(month: string, timeZone: string) {
-  const [year, mon] = month.split('-').map(Number) as [number, number];
-  return { from: monthStartUtc(year, mon, timeZone), to: monthStartUtc(year, mon + 1, timeZone) };
+function monthBounds(month: string, timeZone: string): { from: Date; to: Date } {
+  const key = `${timeZone} ${month}`;
+  let bounds = monthBoundsMs.get(key);
+  if (!bounds) {
+    const [year, mon] = month.split('-').map(Number) as [number, number];
+    bounds = [monthStartUtc(year, mon, timeZone).getTime(), monthStartUtc(year, mon + 1, timeZone).getTime()];
+    monthBoundsMs.set(key, bounds);
+  }
+  return { from: new Date(bounds[0]), to: new Date(bounds[1]) };
 }
 
 export async function productionReport(brewery: { id: number; timeZone: string }, month: string): Promise<ProductionReport> {
