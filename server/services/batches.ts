@@ -5,6 +5,7 @@ import { AuditEvent, Batch, Vessel } from '../models';
 import { conflict, notFound } from '../errors';
 import { freezeRecipeVersion, planForBatch } from './recipe-plans';
 import { logEntries } from './batch-log';
+import { LruCache } from './lru-cache';
 import { signaturesOf } from './signatures';
 import { batchActuals, effectiveMeasurements } from '../../shared/batches/brew-day';
 import type { Measurements } from '../../shared/schemas/batch-log';
@@ -150,8 +151,7 @@ interface KnockoutRow {
  * The OG measured at knockout of a batch, after corrections, by `batchId:logHead`. A log is append-only,
  * so the entries up to a given head never change: an entry added later makes a new head, hence a new key.
  */
-const knockoutOgCache = new Map<string, number | null>();
-const KNOCKOUT_OG_CACHE_SIZE = 20_000;
+const knockoutOgCache = new LruCache<string, number | null>(20_000);
 
 /** Each batch's knockout-end entries and the corrections pointing at them, up to the log head the page was read at. */
 async function knockoutOgs(breweryId: number, heads: Map<number, number>): Promise<Map<number, number | null>> {
@@ -229,15 +229,9 @@ export async function listBatches(breweryId: number, query: BatchListQuery): Pro
   for (const r of rows) {
     if (r.logHead === null) og.set(r.id, null);
     else {
-      const key = `${r.id}:${r.logHead}`;
-      const cached = knockoutOgCache.get(key);
+      const cached = knockoutOgCache.get(`${r.id}:${r.logHead}`);
       if (cached === undefined) stale.set(r.id, Number(r.logHead.split(':')[0]));
-      else {
-        // Most recently used last, so the least recently used is the first to go.
-        knockoutOgCache.delete(key);
-        knockoutOgCache.set(key, cached);
-        og.set(r.id, cached);
-      }
+      else og.set(r.id, cached);
     }
   }
   if (stale.size) {
@@ -245,7 +239,6 @@ export async function listBatches(breweryId: number, query: BatchListQuery): Pro
       og.set(batchId, value);
       knockoutOgCache.set(`${batchId}:${rows.find((r) => r.id === batchId)!.logHead}`, value);
     }
-    while (knockoutOgCache.size > KNOCKOUT_OG_CACHE_SIZE) knockoutOgCache.delete(knockoutOgCache.keys().next().value!);
   }
   return {
     items: rows.map((r) => ({

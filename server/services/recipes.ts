@@ -19,6 +19,7 @@ import { sequelize } from '../config/database';
 import { conflict, notFound } from '../errors';
 import { EquipmentProfile, Recipe, RecipeVersion, User } from '../models';
 import { equipmentFromRow, findEquipment, findVersion, scaleVersion } from './recipe-plans';
+import { LruCache } from './lru-cache';
 
 interface Actor {
   id: number;
@@ -162,23 +163,16 @@ interface VersionRow extends VersionFields, EquipmentInput {
  * The key is all three exactly as stored, so an edited version, a renamed recipe or a changed equipment
  * profile makes a different key: a cached answer can never be stale. Values are shared: never mutate them.
  */
-const computedCache = new Map<string, { content: RecipeVersionContent; computed: ComputedRecipe }>();
-const COMPUTED_CACHE_SIZE = 500;
+const computedCache = new LruCache<string, { content: RecipeVersionContent; computed: ComputedRecipe }>(500);
 
 function computedFor(recipeName: string, contentText: string, profile: EquipmentInput) {
   const key = JSON.stringify([recipeName, profile, contentText]);
   const hit = computedCache.get(key);
-  if (hit) {
-    // Most recently used last, so the least recently used is the first to go.
-    computedCache.delete(key);
-    computedCache.set(key, hit);
-    return hit;
-  }
+  if (hit) return hit;
   const content = JSON.parse(contentText) as RecipeVersionContent;
   const equipment = equipmentAtVolume(profile, content.targets.batchVolumeL);
   const value = { content, computed: computeRecipe(toRecipeInput(recipeName, resolveHopShares(recipeName, content, equipment)), equipment) };
   computedCache.set(key, value);
-  if (computedCache.size > COMPUTED_CACHE_SIZE) computedCache.delete(computedCache.keys().next().value!);
   return value;
 }
 
