@@ -78,10 +78,10 @@ export const batchesRouter = defineRouter('/api/batches', [
     access: BREWING_ROLES,
     params: batchIdParams,
     handler: async (req, res) => {
-      const { json, head } = await batchLogJson(actor(req).breweryId, Number(req.params.id));
+      const { body, head } = await batchLogJson(actor(req).breweryId, Number(req.params.id));
       // The head names the whole log (entries are append-only), so it tags the answer without hashing 60 KB of JSON.
       if (head) res.set('ETag', `W/"${req.params.id}-${head.sequence}-${head.hash.slice(0, 16)}"`);
-      res.type('json').send(json);
+      res.type('json').send(body);
     },
   },
   {

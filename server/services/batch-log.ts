@@ -310,28 +310,29 @@ export async function logEntries(batchId: number, transaction?: Transaction): Pr
 }
 
 /**
- * Serialized logs by batch id, each with the head (last sequence and hash) it was read at. Entries are
+ * Logs as UTF-8 JSON by batch id, each with the head (last sequence and hash) it was read at. Entries are
  * never changed or deleted (the application account may only INSERT and SELECT them) and every append
  * moves the head, so a log whose head matches the batch's current head is exactly the log: never stale.
- * At most 8 M characters of JSON in all (about 120 logs of 130 entries), none over 2 M.
+ * At most 8 MB in all (about 120 logs of 130 entries), none over 2 MB. Kept as bytes, so an answer
+ * is written out as it is, without encoding (and allocating) it again for every request.
  */
-const logCache = new LruCache<number, { sequence: number; hash: string; json: string }>(8 * 1024 * 1024, (log) => log.json.length, 2 * 1024 * 1024);
+const logCache = new LruCache<number, { sequence: number; hash: string; body: Buffer }>(8 * 1024 * 1024, (log) => log.body.length, 2 * 1024 * 1024);
 
 /**
- * A batch's log as the API's JSON (an array of LogEntry) and the head it was read at (null while empty).
+ * A batch's log as the API's JSON (an array of LogEntry, UTF-8) and the head it was read at (null while empty).
  * One statement finds the batch within the brewery (404 otherwise) and its head; a second reads the
  * entries only when the cache has no log at that head.
  */
-export async function batchLogJson(breweryId: number, batchId: number): Promise<{ json: string; head: { sequence: number; hash: string } | null }> {
+export async function batchLogJson(breweryId: number, batchId: number): Promise<{ body: Buffer; head: { sequence: number; hash: string } | null }> {
   const [found] = await sequelize.query<{ sequence: number | null; hash: string | null }>(
     `SELECT h.sequence, h.hash FROM batches b ${LOG_HEAD_JOIN} WHERE b.id = :batchId AND b.brewery_id = :breweryId`,
     { type: QueryTypes.SELECT, replacements: { batchId, breweryId } },
   );
   if (!found) throw notFound('This batch');
-  if (found.sequence === null || found.hash === null) return { json: '[]', head: null };
+  if (found.sequence === null || found.hash === null) return { body: Buffer.from('[]'), head: null };
   const cached = logCache.get(batchId);
   if (cached && cached.sequence === Number(found.sequence) && cached.hash === found.hash) {
-    return { json: cached.json, head: { sequence: cached.sequence, hash: cached.hash } };
+    return { body: cached.body, head: { sequence: cached.sequence, hash: cached.hash } };
   }
   const rows = await sequelize.query<AnsweredFields>(
     `SELECT id, batch_id AS batchId, sequence, kind, step_key AS stepKey, data, corrects_entry_id AS correctsEntryId, reason,
@@ -341,10 +342,10 @@ export async function batchLogJson(breweryId: number, batchId: number): Promise<
     { type: QueryTypes.SELECT, replacements: { batchId } },
   );
   for (const r of rows) if (typeof r.data === 'string') r.data = JSON.parse(r.data) as Record<string, unknown>;
-  const json = JSON.stringify(toLogEntries(rows));
+  const body = Buffer.from(JSON.stringify(toLogEntries(rows)));
   // Cached under the head of what was read: an entry appended since the first statement is in it.
   const last = rows.at(-1)!;
   const head = { sequence: Number(last.sequence), hash: last.hash };
-  logCache.set(batchId, { ...head, json });
-  return { json, head };
+  logCache.set(batchId, { ...head, body });
+  return { body, head };
 }
