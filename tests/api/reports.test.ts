@@ -191,3 +191,38 @@ describe('who may read reports', () => {
     expect((await t.as.taproom_manager.get(`/api/reports/history?recipeId=${recipeId}`)).status).toBe(403);
   });
 });
+
+describe('a corrected knockout', () => {
+  it('counts the corrected litres and OG, the latest correction of each winning', async () => {
+    const c = await createTestBrewery();
+    const pilot = await c.as.head_brewer.post('/api/equipment').send(DEMO_EQUIPMENT.pilot);
+    ok(pilot, 201);
+    const recipe = await c.as.head_brewer.post('/api/recipes').send({
+      name: 'Corrected Amber', style: 'Spiced amber', description: '', status: 'active', changeNote: 'First', equipmentProfileId: pilot.body.id, content: SEASONAL_CONTENT,
+    });
+    ok(recipe, 201);
+    const planned = await c.as.head_brewer.post('/api/batches').send({ recipeVersionId: recipe.body.versionId, brewDate: new Date().toISOString().slice(0, 10) });
+    ok(planned, 201);
+    const id = planned.body.id as number;
+    const log = (body: object) => c.as.assistant_brewer.post(`/api/batches/${id}/log`).set(writeHeaders()).send(body);
+    const knockout = await log({ kind: 'step', stepKey: 'knockout-end', label: 'Knockout end', measurements: { gravitySg: 1.05, volumeL: 40 } });
+    ok(knockout, 201);
+    const correct = (measurements: object) => log({ kind: 'correction', correctsEntryId: knockout.body.id, reason: 'Read the sight glass again', measurements });
+    ok(await correct({ volumeL: 41 }), 201);
+    ok(await correct({ gravitySg: 1.052 }), 201);
+    ok(await correct({ volumeL: 42 }), 201);
+
+    const report = (await c.as.head_brewer.get(`/api/reports/production?month=${month}`)).body as ProductionReport;
+    expect(report.totals.brewedL).toBe(42);
+    expect(report.totals.inTankL).toBe(42);
+    const history = (await c.as.head_brewer.get(`/api/reports/history?recipeId=${recipe.body.id}`)).body as BatchHistory;
+    const row = history.rows.find((r) => r.batchId === id)!;
+    expect(row.actualOg).toBe(1.052);
+    const detail = await c.as.head_brewer.get(`/api/batches/${id}`);
+    const plan = detail.body.plan ?? detail.body;
+    expect(row.actualEfficiency).toBeCloseTo(
+      achievedEfficiency({ plannedEfficiency: row.plannedEfficiency, plannedOg: row.plannedOg, plannedVolumeL: plan.computed?.volumes?.knockoutL ?? 0, actualOg: 1.052, actualVolumeL: 42 }),
+      9,
+    );
+  });
+});
