@@ -34,6 +34,10 @@ export async function migrate(ownerUrl: string, appUser: string): Promise<string
   }
 }
 
+/**
+ * Gives the application account exactly its privileges on each of this database's tables. Grants come
+ * before revokes and nothing it keeps is revoked first, so a running app never loses access mid-migration.
+ */
 async function grantApplicationAccount(sequelize: Sequelize, appUser: string): Promise<void> {
   const database = sequelize.getDatabaseName();
   const tables = await sequelize.query<{ name: string }>(
@@ -42,14 +46,16 @@ async function grantApplicationAccount(sequelize: Sequelize, appUser: string): P
   );
   for (const host of ['127.0.0.1', 'localhost']) {
     const account = `'${appUser}'@'${host}'`;
+    // Only this database's tables: other databases on the instance keep their grants.
+    const held = await sequelize.query<{ name: string; privilege: string }>(
+      'SELECT TABLE_NAME AS name, PRIVILEGE_TYPE AS privilege FROM information_schema.TABLE_PRIVILEGES WHERE GRANTEE = ? AND TABLE_SCHEMA = ?',
+      { replacements: [account, database], type: QueryTypes.SELECT },
+    );
     for (const { name } of tables) {
-      // Only this database's tables: other databases on the instance keep their grants.
-      await sequelize
-        .query(`REVOKE ALL PRIVILEGES ON \`${database}\`.\`${name}\` FROM ${account}`, { type: QueryTypes.RAW })
-        .catch(() => undefined); // no grant yet on a new table
-      if (name === 'schema_migrations') continue;
-      const privileges = APPEND_ONLY_TABLES.includes(name) ? 'SELECT, INSERT' : 'SELECT, INSERT, UPDATE, DELETE';
-      await sequelize.query(`GRANT ${privileges} ON \`${database}\`.\`${name}\` TO ${account}`, { type: QueryTypes.RAW });
+      const wanted = name === 'schema_migrations' ? [] : APPEND_ONLY_TABLES.includes(name) ? ['SELECT', 'INSERT'] : ['SELECT', 'INSERT', 'UPDATE', 'DELETE'];
+      if (wanted.length) await sequelize.query(`GRANT ${wanted.join(', ')} ON \`${database}\`.\`${name}\` TO ${account}`, { type: QueryTypes.RAW });
+      const extra = held.filter((h) => h.name === name && !wanted.includes(h.privilege)).map((h) => h.privilege);
+      if (extra.length) await sequelize.query(`REVOKE ${extra.join(', ')} ON \`${database}\`.\`${name}\` FROM ${account}`, { type: QueryTypes.RAW });
     }
   }
 }
