@@ -1,10 +1,11 @@
-// Foundation: the sign-in limiter, forged cross-site writes, malformed input, append-only audit grants, a durable database.
+// Foundation: the sign-in limiter, forged cross-site writes, malformed input, append-only audit grants, re-grants without a gap, a durable database.
 import { randomBytes } from 'node:crypto';
-import { QueryTypes } from 'sequelize';
+import { QueryTypes, Sequelize } from 'sequelize';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { createApp } from '../../server/app';
 import { sequelize } from '../../server/config/database';
 import { durabilityProblems } from '../../server/config/durability';
+import { migrate } from '../../server/migrations/umzug';
 import { AuditEvent, Invite, User } from '../../server/models';
 import { GOOD_PASSWORD, agent, createTestBrewery, mailCatcher, type Agent, type TestBrewery } from './helpers';
 
@@ -313,6 +314,39 @@ describe('audit_events is append-only for the application account', () => {
       type: QueryTypes.BULKUPDATE,
     });
     expect(affected).toBe(1);
+  });
+});
+
+describe('migrations re-grant the application account without a gap', () => {
+  it('a stray privilege is revoked and the account keeps its own, while it goes on reading', async () => {
+    const owner = new Sequelize(process.env.KW_OWNER_DATABASE_URL!.replace(/^mysql:/, 'mariadb:'), { dialect: 'mariadb', logging: false });
+    const appUser = decodeURIComponent(new URL(process.env.DATABASE_URL!).username);
+    const privileges = async () =>
+      (
+        await owner.query<{ privilege: string }>(
+          'SELECT PRIVILEGE_TYPE AS privilege FROM information_schema.TABLE_PRIVILEGES WHERE GRANTEE = ? AND TABLE_SCHEMA = DATABASE() AND TABLE_NAME = ?',
+          { replacements: [`'${appUser}'@'127.0.0.1'`, 'alerts'], type: QueryTypes.SELECT },
+        )
+      )
+        .map((r) => r.privilege)
+        .sort();
+    try {
+      await owner.query(`GRANT ALTER ON alerts TO '${appUser}'@'127.0.0.1'`, { type: QueryTypes.RAW });
+      expect(await privileges()).toContain('ALTER');
+      // Reads through the app's account go on while the grants are rewritten: none may be refused.
+      let reading = true;
+      const reads = (async () => {
+        let n = 0;
+        while (reading) n += (await sequelize.query('SELECT COUNT(*) AS n FROM sessions', { type: QueryTypes.SELECT })).length;
+        return n;
+      })();
+      await migrate(process.env.KW_OWNER_DATABASE_URL!, appUser);
+      reading = false;
+      expect(await reads).toBeGreaterThan(0);
+      expect(await privileges()).toEqual(['DELETE', 'INSERT', 'SELECT', 'UPDATE']);
+    } finally {
+      await owner.close();
+    }
   });
 });
 
