@@ -93,7 +93,7 @@ export async function runCrashFault(options: { entries: number; rounds?: number;
     const all: Sent[] = [];
 
     // A round counts when the kill landed mid-run (some requests answered 201, some not). The kill comes
-    // as soon as the first 201 arrives, while the rest are in flight or waiting on a batch's lock.
+    // once a quarter of the round has been answered 201, while the rest are in flight or waiting on a batch's lock.
     for (let round = 1, attempts = 0; round <= rounds; attempts++) {
       if (attempts >= rounds * 5) throw new Error('The kill never landed mid-run');
       const sends: Sent[] = Array.from({ length: options.entries }, (_, i) => ({
@@ -106,10 +106,11 @@ export async function runCrashFault(options: { entries: number; rounds?: number;
       all.push(...sends);
       report.sent += sends.length;
       let killed: Promise<boolean> | undefined;
+      let answered = 0;
       const inFlight = Promise.all(
         sends.map((s) =>
           post(api!.url, cookie, s).then(() => {
-            if (s.status === 201) killed ??= stopMariaDb(FAULT_DATA.dataDir, 'SIGKILL');
+            if (s.status === 201 && ++answered >= sends.length / 4) killed ??= stopMariaDb(FAULT_DATA.dataDir, 'SIGKILL');
           }),
         ),
       );
