@@ -9,7 +9,7 @@ import { sequelize } from '../config/database';
 import { Batch, BatchLogEntry, IdempotencyKey } from '../models';
 import { badRequest, conflict, notFound, unprocessable } from '../errors';
 import { fieldMessages } from '../middlewares/validate';
-import { LruCache } from './lru-cache';
+import { LRUCache } from 'lru-cache';
 import { BREW_DAY_KINDS, writeMetaSchema, type ChainCheck, type LogEntry, type SignatureMeaning, type WriteMeta } from '../../shared/schemas/batch-log';
 import type { Role } from '../../shared/schemas/roles';
 
@@ -316,7 +316,11 @@ export async function logEntries(batchId: number, transaction?: Transaction): Pr
  * At most 8 MB in all (about 120 logs of 130 entries), none over 2 MB. Kept as bytes, so an answer
  * is written out as it is, without encoding (and allocating) it again for every request.
  */
-const logCache = new LruCache<number, { sequence: number; hash: string; body: Buffer }>(8 * 1024 * 1024, (log) => log.body.length, 2 * 1024 * 1024);
+const logCache = new LRUCache<number, { sequence: number; hash: string; body: Buffer }>({
+  maxSize: 8 * 1024 * 1024,
+  maxEntrySize: 2 * 1024 * 1024,
+  sizeCalculation: (log) => log.body.length,
+});
 
 /**
  * A batch's log as the API's JSON (an array of LogEntry, UTF-8) and the head it was read at (null while empty).

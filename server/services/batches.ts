@@ -5,7 +5,7 @@ import { AuditEvent, Batch, Vessel } from '../models';
 import { conflict, notFound } from '../errors';
 import { freezeRecipeVersion, planForBatch } from './recipe-plans';
 import { logEntries } from './batch-log';
-import { LruCache } from './lru-cache';
+import { LRUCache } from 'lru-cache';
 import { signaturesOf } from './signatures';
 import { batchActuals, effectiveMeasurements } from '../../shared/batches/brew-day';
 import type { Measurements } from '../../shared/schemas/batch-log';
@@ -151,7 +151,7 @@ interface KnockoutRow {
  * The OG measured at knockout of a batch, after corrections, by `batchId:logHead`. A log is append-only,
  * so the entries up to a given head never change: an entry added later makes a new head, hence a new key.
  */
-const knockoutOgCache = new LruCache<string, number | null>(20_000);
+const knockoutOgCache = new LRUCache<string, { og: number | null }>({ max: 20_000 });
 
 /** Each batch's knockout-end entries and the corrections pointing at them, up to the log head the page was read at. */
 async function knockoutOgs(breweryId: number, heads: Map<number, number>): Promise<Map<number, number | null>> {
@@ -231,13 +231,13 @@ export async function listBatches(breweryId: number, query: BatchListQuery): Pro
     else {
       const cached = knockoutOgCache.get(`${r.id}:${r.logHead}`);
       if (cached === undefined) stale.set(r.id, Number(r.logHead.split(':')[0]));
-      else og.set(r.id, cached);
+      else og.set(r.id, cached.og);
     }
   }
   if (stale.size) {
     for (const [batchId, value] of await knockoutOgs(breweryId, stale)) {
       og.set(batchId, value);
-      knockoutOgCache.set(`${batchId}:${rows.find((r) => r.id === batchId)!.logHead}`, value);
+      knockoutOgCache.set(`${batchId}:${rows.find((r) => r.id === batchId)!.logHead}`, { og: value });
     }
   }
   return {

@@ -19,7 +19,7 @@ import { sequelize } from '../config/database';
 import { conflict, notFound } from '../errors';
 import { EquipmentProfile, Recipe, RecipeVersion, User } from '../models';
 import { equipmentFromRow, findEquipment, findVersion, scaleVersion } from './recipe-plans';
-import { LruCache } from './lru-cache';
+import { LRUCache } from 'lru-cache';
 
 interface Actor {
   id: number;
@@ -163,7 +163,7 @@ interface VersionRow extends VersionFields, EquipmentInput {
  * The key is all three exactly as stored, so an edited version, a renamed recipe or a changed equipment
  * profile makes a different key: a cached answer can never be stale. Values are shared: never mutate them.
  */
-const computedCache = new LruCache<string, { content: RecipeVersionContent; computed: ComputedRecipe }>(500);
+const computedCache = new LRUCache<string, { content: RecipeVersionContent; computed: ComputedRecipe }>({ max: 500 });
 
 function computedFor(recipeName: string, contentText: string, profile: EquipmentInput) {
   const key = JSON.stringify([recipeName, profile, contentText]);
