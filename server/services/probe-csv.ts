@@ -4,6 +4,7 @@
  * already stored and writes the rows in one transaction.
  */
 import Papa from 'papaparse';
+import { fromZonedTime } from 'date-fns-tz';
 import { BrewingInputError, fToC, MAX_SG, MIN_SG, platoToSg } from '../../shared/brewing';
 import type { ProbeImportOptions, ProbeRow } from '../../shared/schemas/cellar';
 
@@ -12,23 +13,6 @@ export const MAX_IMPORT_ROWS = 5000;
 
 const LOCAL_TIME = /^(\d{4})[-/](\d{2})[-/](\d{2})[ T](\d{1,2}):(\d{2})(?::(\d{2})(?:\.\d+)?)?$/;
 const ZONED_TIME = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}(:\d{2}(\.\d+)?)?(Z|[+-]\d{2}:?\d{2})$/;
-
-/** Offset of `timeZone` from UTC at an instant, ms (positive east of Greenwich). */
-function zoneOffsetMs(atMs: number, timeZone: string): number {
-  const parts = new Intl.DateTimeFormat('en-US', {
-    timeZone,
-    hourCycle: 'h23',
-    year: 'numeric',
-    month: '2-digit',
-    day: '2-digit',
-    hour: '2-digit',
-    minute: '2-digit',
-    second: '2-digit',
-  }).formatToParts(new Date(atMs));
-  const get = (type: string) => Number(parts.find((p) => p.type === type)!.value);
-  const asUtc = Date.UTC(get('year'), get('month') - 1, get('day'), get('hour'), get('minute'), get('second'));
-  return asUtc - Math.floor(atMs / 1000) * 1000;
-}
 
 /** A wall-clock time in a named time zone → the instant, ms. Null when the text is not a time we read. */
 export function parseProbeTime(text: string, timeZone: string): number | null {
@@ -43,10 +27,7 @@ export function parseProbeTime(text: string, timeZone: string): number | null {
   const wall = Date.UTC(y!, mo! - 1, d!, h!, mi!, s!);
   const check = new Date(wall);
   if (check.getUTCMonth() !== mo! - 1 || check.getUTCDate() !== d! || h! > 23) return null;
-  // Two passes settle the offset across a daylight-saving change.
-  let utc = wall - zoneOffsetMs(wall, timeZone);
-  utc = wall - zoneOffsetMs(utc, timeZone);
-  return utc;
+  return fromZonedTime(check.toISOString().slice(0, 19), timeZone).getTime();
 }
 
 function parseNumber(text: string): number | null {

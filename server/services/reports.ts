@@ -4,6 +4,7 @@
  * Each report is one statement that reads indexes and a handful of rows, whatever the brewery's size.
  */
 import { QueryTypes } from 'sequelize';
+import { fromZonedTime } from 'date-fns-tz';
 import { sequelize } from '../config/database';
 import { notFound } from '../errors';
 import { achievedEfficiency, apparentAttenuation, lineVolumeL, type PackageLine } from '../../shared/brewing';
@@ -11,15 +12,8 @@ import type { BatchHistory, BeerFigures, HistoryRow, PackageFigures, ProductionR
 
 /** The UTC instant of local midnight on the first of `year-month` in `timeZone` (month may be 13 → next year). */
 export function monthStartUtc(year: number, month: number, timeZone: string): Date {
-  const guess = Date.UTC(year, month - 1, 1);
-  // The zone's offset at that moment, read back through Intl (no time-zone tables needed in MariaDB).
-  const parts = Object.fromEntries(
-    new Intl.DateTimeFormat('en-US', { timeZone, hourCycle: 'h23', year: 'numeric', month: '2-digit', day: '2-digit', hour: '2-digit', minute: '2-digit', second: '2-digit' })
-      .formatToParts(new Date(guess))
-      .map((p) => [p.type, p.value]),
-  );
-  const asLocal = Date.UTC(Number(parts.year), Number(parts.month) - 1, Number(parts.day), Number(parts.hour), Number(parts.minute), Number(parts.second));
-  return new Date(guess - (asLocal - guess));
+  const first = new Date(Date.UTC(year, month - 1, 1)).toISOString().slice(0, 19);
+  return fromZonedTime(first, timeZone);
 }
 
 const json = <T>(v: T | string): T => (typeof v === 'string' ? (JSON.parse(v) as T) : v);
@@ -91,20 +85,10 @@ interface ProductionRow {
   packagedL: number | null;
 }
 
-// Working a month's bounds out through Intl costs more than the rest of the report's arithmetic, and they depend
-// only on the zone's rules, which never change while the process runs: each zone and month is worked out once.
-const monthBoundsMs = new Map<string, [number, number]>();
-
 /** The month's bounds in the brewery's time zone. */
 function monthBounds(month: string, timeZone: string): { from: Date; to: Date } {
-  const key = `${timeZone} ${month}`;
-  let bounds = monthBoundsMs.get(key);
-  if (!bounds) {
-    const [year, mon] = month.split('-').map(Number) as [number, number];
-    bounds = [monthStartUtc(year, mon, timeZone).getTime(), monthStartUtc(year, mon + 1, timeZone).getTime()];
-    monthBoundsMs.set(key, bounds);
-  }
-  return { from: new Date(bounds[0]), to: new Date(bounds[1]) };
+  const [year, mon] = month.split('-').map(Number) as [number, number];
+  return { from: monthStartUtc(year, mon, timeZone), to: monthStartUtc(year, mon + 1, timeZone) };
 }
 
 export async function productionReport(brewery: { id: number; timeZone: string }, month: string): Promise<ProductionReport> {
