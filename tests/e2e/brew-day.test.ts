@@ -1,9 +1,8 @@
 // The brew day on a tablet with a dropped network: five steps logged offline survive a reload and
 // reach the server exactly once with their original captured times; then the head brewer signs off.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import path from 'node:path';
 import type { BrowserContext, Page } from 'playwright-core';
-import { openBrowser, signIn, SCREENSHOT_DIR } from './browser';
+import { openBrowser, screenshot, signIn } from './browser';
 import { DEMO_PASSWORD, DEMO_PEOPLE } from '../../server/seed/demo';
 
 /** Waits for a condition the page reaches on its own time (loading, the outbox sending). */
@@ -82,7 +81,7 @@ describe('brew day offline (Chromium, 1024×768)', () => {
     await logStep(page, 'Start the boil', { Volume: '350', Gravity: '1.048' });
     await eventually(() => page.getByTestId('waiting-count').textContent()).toBe('5 waiting to send');
     await page.evaluate(() => window.scrollTo(0, 0));
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'brew-day-offline-1024.png') });
+    await screenshot(page, 'brew-day-offline-1024.png', { fullPage: false });
 
     const captured = await outboxCapturedTimes(page);
     expect(captured).toHaveLength(5);
@@ -106,7 +105,7 @@ describe('brew day offline (Chromium, 1024×768)', () => {
     expect(log.map((e) => e.capturedAt)).toEqual(captured);
     expect(new Set(log.map((e) => e.authorName))).toEqual(new Set([ilya.displayName]));
     await eventually(() => page.getByTestId('log-entry').count()).toBe(5);
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'brew-day-online-1024.png'), fullPage: true });
+    await screenshot(page, 'brew-day-online-1024.png');
   });
 
   it('the head brewer signs the brew day off with their password', async () => {
@@ -120,13 +119,13 @@ describe('brew day offline (Chromium, 1024×768)', () => {
     await eventually(() => page.getByTestId('signature').textContent()).toContain(`Reviewed by ${maren.displayName}`);
     expect(await page.getByTestId('signature').textContent()).toContain('Signature valid');
     await page.evaluate(() => window.scrollTo(0, 0));
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'brew-day-signed-1024.png'), fullPage: true });
+    await screenshot(page, 'brew-day-signed-1024.png');
 
     // The printable record carries the signature and a QR code that opens this batch on a tablet.
     await page.getByRole('link', { name: 'Record and QR labels' }).click();
     await eventually(() => page.getByRole('img', { name: /^QR code: Batch / }).count()).toBe(1);
     expect(await page.getByTestId('signature').textContent()).toContain(`Reviewed by ${maren.displayName}`);
     await page.emulateMedia({ media: 'print' });
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'batch-record-print.png'), fullPage: true });
+    await screenshot(page, 'batch-record-print.png');
   });
 });

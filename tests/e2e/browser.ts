@@ -35,3 +35,8 @@ export async function signIn(page: Page, email: string, password = DEMO_PASSWORD
   await page.getByRole('button', { name: 'Sign in' }).click();
   await page.waitForURL((url) => !url.pathname.startsWith('/sign-in'));
 }
+
+/** Saves a screenshot into test-results/screenshots for a person to look at (the whole page unless told otherwise). */
+export function screenshot(page: Page, name: string, options: { fullPage: boolean } = { fullPage: true }): Promise<Buffer> {
+  return page.screenshot({ path: path.join(SCREENSHOT_DIR, name), ...options });
+}

@@ -1,7 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import path from 'node:path';
 import type { BrowserContext, Page } from 'playwright-core';
-import { openBrowser, signIn, SCREENSHOT_DIR } from './browser';
+import { openBrowser, screenshot, signIn } from './browser';
 import { DEMO_PEOPLE } from '../../server/seed/demo';
 
 const write = { 'x-kettlewright': '1' };
@@ -71,21 +70,21 @@ describe('cellar readings on the tablet (Chromium, 1024×768)', () => {
     // The form keeps the last temperature for the next reading.
     expect(await form.getByLabel('Temperature (°F)').inputValue()).toBe('67.5');
     await page.getByRole('heading', { name: 'Fermentation curve' }).scrollIntoViewIfNeeded();
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'cellar-batch-reading-1024.png') });
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'cellar-batch-full-1024.png'), fullPage: true });
+    await screenshot(page, 'cellar-batch-reading-1024.png', { fullPage: false });
+    await screenshot(page, 'cellar-batch-full-1024.png');
 
     await page.getByRole('link', { name: 'Vessel board' }).click();
     const tile = page.getByRole('article', { name: batch.vessel });
     await expect.poll(() => tile.getByTestId('board-gravity').textContent()).toBe('1.021');
     expect(await tile.textContent()).toContain(batch.number);
     await page.evaluate(() => window.scrollTo(0, 0));
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'cellar-board-1024.png') });
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'cellar-board-full-1024.png'), fullPage: true });
+    await screenshot(page, 'cellar-board-1024.png', { fullPage: false });
+    await screenshot(page, 'cellar-board-full-1024.png');
 
     // The demo batch a week into fermentation: a curve with its prediction.
     await page.getByRole('article', { name: 'FV-1' }).click();
     await page.getByRole('heading', { name: 'Fermentation curve' }).scrollIntoViewIfNeeded();
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'cellar-curve-1024.png') });
+    await screenshot(page, 'cellar-curve-1024.png', { fullPage: false });
   });
 
   it('the head brewer adds a bright tank with its rated pressure', async () => {
@@ -98,7 +97,7 @@ describe('cellar readings on the tablet (Chromium, 1024×768)', () => {
     await dialog.getByLabel('Type').selectOption('bright_tank');
     await dialog.getByLabel('Capacity').fill('7');
     await dialog.getByLabel('Rated working pressure (gauge)').fill('30');
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'cellar-vessel-form-1024.png') });
+    await screenshot(page, 'cellar-vessel-form-1024.png', { fullPage: false });
     await dialog.getByRole('button', { name: 'Add vessel' }).click();
     const row = page.getByRole('row', { name: new RegExp(name) });
     await expect.poll(() => row.textContent()).toMatch(/Bright tank.*7\.0 bbl.*30 psi.*Clean/);

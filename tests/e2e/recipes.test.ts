@@ -1,6 +1,5 @@
 // The head brewer scales the pilot seasonal to the 10 bbl brewhouse, saves it, and prints the brew sheet (Chromium).
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import path from 'node:path';
 import type { BrowserContext, Page } from 'playwright-core';
 import { extractText, getDocumentProxy } from 'unpdf';
 import { roundForMeasuring, scaleRecipe, usBblToL, usGalToL } from '../../shared/brewing';
@@ -8,7 +7,7 @@ import { equipmentAtVolume, toRecipeInput } from '../../shared/schemas/recipes';
 import { DEMO_EQUIPMENT, SEASONAL_CONTENT, SEASONAL_NAME } from '../../server/seed/recipe-data';
 import { DEMO_PEOPLE } from '../../server/seed/demo';
 import { showGrain, showMeasured, showSmallWeight } from '../../src/lib/units';
-import { openBrowser, signIn, SCREENSHOT_DIR } from './browser';
+import { openBrowser, screenshot, signIn } from './browser';
 
 // What the 10 bbl version must say, from shared/brewing for the same input.
 const expected = scaleRecipe(
@@ -34,7 +33,7 @@ describe('scaling the seasonal and printing its brew sheet (Chromium)', () => {
     await page.getByRole('link', { name: SEASONAL_NAME }).click();
     await page.getByRole('link', { name: /Edit version 1/ }).click();
     await expect.poll(() => page.getByRole('group', { name: 'IBU' }).textContent()).toContain(expected.before.ibu.toFixed(1));
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'recipe-editor-1024.png'), fullPage: true });
+    await screenshot(page, 'recipe-editor-1024.png');
   });
 
   it('scales it from the pilot to the 10 bbl profile: adjunct and spice per volume, IBU on target', async () => {
@@ -57,7 +56,7 @@ describe('scaling the seasonal and printing its brew sheet (Chromium)', () => {
     expect(await spice.textContent()).toContain('62 tsp');
     // The hops do not scale in proportion: the page says so.
     expect(await table.getByRole('row', { name: /Earthy English-type hop/ }).textContent()).toContain('Not in proportion');
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'recipe-scale-1024.png'), fullPage: true });
+    await screenshot(page, 'recipe-scale-1024.png');
   });
 
   it('saves the scaled recipe as version 2 and prints its brew sheet with the scaled weights', async () => {
@@ -69,7 +68,7 @@ describe('scaling the seasonal and printing its brew sheet (Chromium)', () => {
     await page.getByRole('link', { name: 'Brew sheet' }).click();
     await expect.poll(() => page.getByRole('heading', { level: 1 }).textContent()).toBe(SEASONAL_NAME);
     await page.emulateMedia({ media: 'print' });
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'brew-sheet-print-1024.png'), fullPage: true });
+    await screenshot(page, 'brew-sheet-print-1024.png');
     const pdf = await page.pdf({ format: 'Letter', printBackground: true });
     const { text } = await extractText(await getDocumentProxy(new Uint8Array(pdf)), { mergePages: true });
     const flat = text.replace(/\s+/g, ' ');
@@ -97,7 +96,7 @@ describe('scaling the seasonal and printing its brew sheet (Chromium)', () => {
     await page.getByRole('button', { name: 'Compare the two ticked' }).click();
     const changes = page.getByRole('table', { name: 'What changed' });
     await expect.poll(() => changes.textContent()).toContain('Scaled to the 10 bbl for the winter run');
-    await page.screenshot({ path: path.join(SCREENSHOT_DIR, 'recipe-compare-1024.png'), fullPage: true });
+    await screenshot(page, 'recipe-compare-1024.png');
     const text = await changes.textContent();
     expect(text).toContain('Pilot kit 10 gal');
     expect(text).toContain('Main brewhouse 10 bbl');

@@ -2,14 +2,12 @@
 // forms differ by country, a CSV download and a print button) and a recipe's batch history chart; the taproom
 // manager cannot open the production figures. Screenshots into test-results/screenshots/.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import path from 'node:path';
-import type { BrowserContext, Page } from 'playwright-core';
-import { openBrowser, signIn, SCREENSHOT_DIR } from './browser';
+import type { BrowserContext } from 'playwright-core';
+import { openBrowser, screenshot, signIn } from './browser';
 import { DEMO_PEOPLE } from '../../server/seed/demo';
 
 const maren = DEMO_PEOPLE.find((p) => p.role === 'head_brewer')!;
 const priya = DEMO_PEOPLE.find((p) => p.role === 'taproom_manager')!;
-const shot = (page: Page, name: string) => page.screenshot({ path: path.join(SCREENSHOT_DIR, name), fullPage: true });
 
 let brewer: BrowserContext;
 let taproom: BrowserContext;
@@ -40,7 +38,7 @@ describe('reports (Chromium, 1024×768)', () => {
     expect(response.status()).toBe(200);
     expect(await response.text()).toContain('Official forms differ by country');
     expect(await page.getByRole('button', { name: 'Print' }).count()).toBe(1);
-    await shot(page, 'reports-production-1024.png');
+    await screenshot(page, 'reports-production-1024.png');
   });
 
   it('charts a recipe’s batches, planned against measured OG', async () => {
@@ -62,7 +60,7 @@ describe('reports (Chromium, 1024×768)', () => {
     }
     expect(found).toBe(true);
     await expect.poll(() => page.locator('.recharts-line').count()).toBeGreaterThanOrEqual(2);
-    await shot(page, 'reports-history-1024.png');
+    await screenshot(page, 'reports-history-1024.png');
   });
 
   it('refuses the production figures to the taproom manager', async () => {

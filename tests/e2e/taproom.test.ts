@@ -1,10 +1,9 @@
 // The head brewer releases a packaged batch with a description and a photo; the taproom manager finds it
 // on their home screen and opens its briefing sheet. Screenshots of the taproom at tablet and desktop sizes.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import path from 'node:path';
 import sharp from 'sharp';
-import type { BrowserContext, Page } from 'playwright-core';
-import { openBrowser, signIn, SCREENSHOT_DIR } from './browser';
+import type { BrowserContext } from 'playwright-core';
+import { openBrowser, screenshot, signIn } from './browser';
 import { DEMO_PEOPLE } from '../../server/seed/demo';
 import { abv } from '../../shared/brewing';
 
@@ -16,7 +15,6 @@ let brewer: BrowserContext;
 let taproom: BrowserContext;
 let beerName: string;
 
-const shot = (page: Page, name: string) => page.screenshot({ path: path.join(SCREENSHOT_DIR, name), fullPage: true });
 
 beforeAll(async () => {
   brewer = await openBrowser();
@@ -64,7 +62,7 @@ describe('releasing a beer to the taproom (Chromium, 1024×768)', () => {
     await expect.poll(() => dialog.textContent()).toContain(`ABV ${abv(og, fg).toFixed(1)} %`);
     await dialog.getByRole('button', { name: 'Confirm and release' }).click();
     await page.getByText(`On tap, released by ${maren.displayName}`).waitFor();
-    await shot(page, 'taproom-release-page-1024.png');
+    await screenshot(page, 'taproom-release-page-1024.png');
   });
 
   it('the taproom manager finds it on their home screen and opens its briefing sheet', async () => {
@@ -82,7 +80,7 @@ describe('releasing a beer to the taproom (Chromium, 1024×768)', () => {
     // The photo the head brewer chose, served to the taproom as a thumbnail.
     const img = card.getByRole('img', { name: `${beerName} in the glass` });
     await expect.poll(() => img.evaluate((el: HTMLImageElement) => el.complete && el.naturalWidth)).toBe(480);
-    await shot(page, 'taproom-home-1024.png');
+    await screenshot(page, 'taproom-home-1024.png');
 
     await page.getByLabel('Search beers').fill(beerName.split(' ').at(-1)!);
     await expect.poll(() => onTap.getByRole('heading', { level: 3 }).allTextContents()).toEqual([beerName]);
@@ -93,11 +91,11 @@ describe('releasing a beer to the taproom (Chromium, 1024×768)', () => {
     await expect.poll(() => sheet.textContent()).toContain('Tulip glass, leave room for the aroma.');
     await expect.poll(() => sheet.textContent()).toMatch(/On tap since/);
     await expect.poll(() => sheet.getByRole('img', { name: `${beerName} in the glass` }).evaluate((el: HTMLImageElement) => el.complete && el.naturalWidth > 0)).toBe(true);
-    await shot(page, 'taproom-briefing-1024.png');
+    await screenshot(page, 'taproom-briefing-1024.png');
     // As printed: the app's menu and the page's buttons stay off the paper.
     await page.emulateMedia({ media: 'print' });
     await expect.poll(() => page.getByRole('button', { name: 'Print' }).isVisible()).toBe(false);
-    await shot(page, 'taproom-briefing-print.png');
+    await screenshot(page, 'taproom-briefing-print.png');
     await page.emulateMedia({ media: 'screen' });
 
     // The taproom screens are their own chunks: the recipe editor is never downloaded.
@@ -111,11 +109,11 @@ describe('releasing a beer to the taproom (Chromium, 1024×768)', () => {
       const page = await desktop.newPage();
       await signIn(page, priya.email);
       await page.getByRole('region', { name: 'On tap' }).getByRole('heading', { name: beerName, exact: true }).waitFor();
-      await shot(page, 'taproom-home-desktop.png');
+      await screenshot(page, 'taproom-home-desktop.png');
       await page.getByRole('link', { name: 'Bar screen' }).click();
       await page.getByRole('heading', { level: 1, name: /^On tap at / }).waitFor();
       await page.getByText(beerName, { exact: true }).waitFor();
-      await shot(page, 'taproom-bar-screen-desktop.png');
+      await screenshot(page, 'taproom-bar-screen-desktop.png');
     } finally {
       await desktop.close();
     }
