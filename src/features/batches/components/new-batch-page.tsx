@@ -10,6 +10,7 @@ import { useCurrentUser } from '../../../app/current-user';
 import { showVolume } from '../../../lib/units';
 import { usePlanBatch } from '../api/plan-batch';
 import { useFreeFermenters } from '../api/free-fermenters';
+import { FormBanner } from '../../../components/ui/form-banner';
 
 /**
  * Plans a batch: `/batches/new?recipeVersionId=&equipmentProfileId=` or `&batchVolumeL=` (from the recipe's
@@ -66,7 +67,7 @@ export function NewBatchPage() {
             .map(([k, e]) => (
               <p key={k} className="text-ember-700">{e?.message as string}</p>
             ))}
-          {banner && <p role="alert" className="font-semibold text-ember-700">{banner}</p>}
+          <FormBanner message={banner} />
           <Button type="submit" size="lg" busy={plan.isPending}>
             Plan the batch
           </Button>

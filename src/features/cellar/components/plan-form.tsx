@@ -8,6 +8,7 @@ import type { UnitSystem } from '../../../../shared/schemas/auth';
 import { UNITS } from '../../../lib/units';
 import { applyServerErrors } from '../../../lib/forms';
 import { useSavePlan } from '../api/plan';
+import { FormBanner } from '../../../components/ui/form-banner';
 
 /** The batch's cellar plan: what readings and alerts are measured against. The head brewer adjusts it. */
 export function PlanForm({ batchId, plan, unitSystem, canEdit }: { batchId: number; plan: CellarPlanView; unitSystem: UnitSystem; canEdit: boolean }) {
@@ -45,7 +46,7 @@ export function PlanForm({ batchId, plan, unitSystem, canEdit }: { batchId: numb
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-3">
       {!plan.saved && <p className="text-sm text-ink-500">From the batch's recipe plan; defaults where the recipe gives none (common practice).</p>}
-      {banner && <p role="alert" className="text-ember-700">{banner}</p>}
+      <FormBanner message={banner} />
       <fieldset disabled={!canEdit} className="grid grid-cols-2 gap-3 md:grid-cols-4">
         <TextField label="Planned FG" inputMode="decimal" {...register('plannedFg', num)} error={e.plannedFg?.message} />
         <TextField label="D-rest trigger (points above FG)" inputMode="decimal" hint={trigger ? `Starts at ${trigger.toFixed(3)}` : undefined} {...register('dRestPoints', num)} error={e.dRestPoints?.message} />

@@ -9,6 +9,7 @@ import { applyServerErrors } from '../../../lib/forms';
 import { showVolume } from '../../../lib/units';
 import { useSaveVessel, useVessels } from '../api/vessels';
 import { useDeleteVessel, useMarkClean } from '../api/vessel-state';
+import { FormBanner } from '../../../components/ui/form-banner';
 
 function VesselForm({ vessel, onDone }: { vessel?: VesselView; onDone: () => void }) {
   const me = useCurrentUser();
@@ -40,7 +41,7 @@ function VesselForm({ vessel, onDone }: { vessel?: VesselView; onDone: () => voi
   });
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-3">
-      {banner && <p role="alert" className="text-ember-700">{banner}</p>}
+      <FormBanner message={banner} />
       <TextField label="Name" {...register('name')} error={e.name?.message} />
       <SelectField label="Type" {...register('type')} error={e.type?.message}>
         <option value="fermenter">Fermenter</option>

@@ -9,6 +9,7 @@ import { show, showVolume } from '../../../lib/units';
 import { UnitField, asNumber } from '../../../components/ui/unit-field';
 import { useEquipment, useSaveEquipment, type EquipmentRow } from '../api/equipment';
 import { useIngredients, useSaveIngredient, type IngredientRow } from '../api/ingredients';
+import { FormBanner } from '../../../components/ui/form-banner';
 
 function EquipmentForm({ row, onDone }: { row?: EquipmentRow; onDone: () => void }) {
   const me = useCurrentUser();
@@ -34,7 +35,7 @@ function EquipmentForm({ row, onDone }: { row?: EquipmentRow; onDone: () => void
         }
       })}
     >
-      {banner && <p role="alert" className="rounded bg-ember-100 p-2 text-ember-700">{banner}</p>}
+      <FormBanner message={banner} />
       <TextField label="Name" {...register('name')} error={err('name')} />
       <div className="grid grid-cols-2 gap-3">
         {volume('batchVolumeL', 'Batch into fermenter')}
@@ -81,7 +82,7 @@ function IngredientForm({ row, onDone }: { row?: IngredientRow; onDone: () => vo
         }
       })}
     >
-      {banner && <p role="alert" className="rounded bg-ember-100 p-2 text-ember-700">{banner}</p>}
+      <FormBanner message={banner} />
       <div className="grid grid-cols-2 gap-3">
         <SelectField label="Kind" {...register('kind')}>
           {INGREDIENT_KINDS.map((k) => <option key={k} value={k}>{k}</option>)}

@@ -26,6 +26,7 @@ import type { IngredientRow } from '../../library/api/ingredients';
 import { LiveNumbersPanel, useLiveNumbers } from './live-numbers';
 import { UnitField, asNumber } from '../../../components/ui/unit-field';
 import { show } from '../../../lib/units';
+import { FormBanner } from '../../../components/ui/form-banner';
 
 type FormIn = z.input<typeof createRecipeSchema>;
 type Ctl = Control<FormIn, unknown, CreateRecipeInput>;
@@ -569,7 +570,7 @@ export function RecipeEditor({ initial, equipment, library, system, canEdit, not
           <Card className="space-y-3">
             {notice}
             <TextField label="What changed" {...register('changeNote')} error={errorAt(formState.errors, 'changeNote')} />
-            {banner && <p role="alert" className="rounded-lg bg-ember-100 p-3 text-sm font-medium text-ember-700">{banner}</p>}
+            <FormBanner message={banner} />
             <Button type="submit" size="lg" className={cx('w-full')} busy={formState.isSubmitting && !asNew.current} onClick={() => (asNew.current = false)}>
               {saveLabel}
             </Button>
