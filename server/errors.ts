@@ -14,6 +14,12 @@ export class HttpError extends Error {
 export const badRequest = (message: string, fields?: Record<string, string>) =>
   new HttpError(400, 'invalid', message, fields);
 export const unauthenticated = (message = 'Sign in to continue') => new HttpError(401, 'unauthenticated', message);
+/**
+ * A password check that failed. The sign-in limiter counts exactly these (by code), never a malformed body.
+ * Sign-in answers 401; a signed-in person re-entering their password answers 400, as 401 would mean "signed out".
+ */
+export const wrongPassword = (status: 400 | 401, message: string, fields?: Record<string, string>) =>
+  new HttpError(status, 'wrong_password', message, fields);
 export const forbidden = (message = 'Your role does not allow this') => new HttpError(403, 'forbidden', message);
 export const notFound = (what = 'This item') => new HttpError(404, 'not_found', `${what} was not found`);
 export const methodNotAllowed = (message: string) => new HttpError(405, 'method_not_allowed', message);

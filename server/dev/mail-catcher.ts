@@ -16,12 +16,15 @@ export interface MailCatcher {
   port: number;
   url: string;
   messages(): CaughtMail[];
+  /** The first message (caught already or arriving later) that `match` accepts; rejects after `timeoutMs`. */
+  waitFor(match: (mail: CaughtMail) => boolean, timeoutMs?: number): Promise<CaughtMail>;
   close(): Promise<void>;
 }
 
 /** Starts the catcher on loopback; messages are kept in memory and, when `dir` is given, as JSON files. */
 export function startMailCatcher(port: number, dir?: string): Promise<MailCatcher> {
   const received: CaughtMail[] = [];
+  const waiting = new Set<(mail: CaughtMail) => void>();
   if (dir) mkdirSync(dir, { recursive: true });
   const server = new SMTPServer({
     authOptional: true,
@@ -39,6 +42,7 @@ export function startMailCatcher(port: number, dir?: string): Promise<MailCatche
             receivedAt: new Date().toISOString(),
           };
           received.push(mail);
+          for (const notify of waiting) notify(mail);
           if (dir) writeFileSync(path.join(dir, `${mail.id}.json`), JSON.stringify(mail, null, 2));
           callback();
         },
@@ -55,6 +59,24 @@ export function startMailCatcher(port: number, dir?: string): Promise<MailCatche
         port: actualPort,
         url: `smtp://127.0.0.1:${actualPort}`,
         messages: () => [...received],
+        waitFor: (match, timeoutMs = 5000) => {
+          const caught = received.find(match);
+          if (caught) return Promise.resolve(caught);
+          return new Promise((resolveMail, rejectMail) => {
+            const notify = (mail: CaughtMail) => {
+              if (!match(mail)) return;
+              clearTimeout(timer);
+              waiting.delete(notify);
+              resolveMail(mail);
+            };
+            const timer = setTimeout(() => {
+              waiting.delete(notify);
+              const subjects = received.map((m) => `"${m.subject}" to ${m.to}`).join('; ') || 'none';
+              rejectMail(new Error(`No matching e-mail arrived within ${timeoutMs} ms (caught so far: ${subjects})`));
+            }, timeoutMs);
+            waiting.add(notify);
+          });
+        },
         close: () => new Promise((r) => server.close(() => r())),
       });
     });

@@ -61,6 +61,7 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   }
 
   if (status >= 500) req.log?.error({ err }, 'request failed');
+  res.locals.errorCode = code; // read by the sign-in limiter
   res.status(status).json({ error: { code, message, ...(fields ? { fields } : {}), requestId: req.id } });
 };
 

@@ -4,6 +4,8 @@ import { rateLimit } from 'express-rate-limit';
 /**
  * Five failed password checks per client in 15 minutes; the sixth answers 429.
  * Shared by sign-in, reset requests and signatures that re-enter a password.
+ * Only an answer the error handler gave the code 'wrong_password' counts (sign-in's 401, a signature's 400):
+ * a malformed body (400 too), another batch's 404 or a reset request never uses up a person's attempts.
  * Kept in memory per app server: behind a load balancer, use a shared store (see README).
  */
 function createSignInLimiter(): RequestHandler {
@@ -11,6 +13,7 @@ function createSignInLimiter(): RequestHandler {
     windowMs: 15 * 60 * 1000,
     limit: 5,
     skipSuccessfulRequests: true,
+    requestWasSuccessful: (_req, res) => res.locals.errorCode !== 'wrong_password',
     standardHeaders: 'draft-8',
     legacyHeaders: false,
     handler: (_req, res) => {

@@ -13,7 +13,7 @@ import {
 import { defineRouter, actor } from './define';
 import * as auth from '../services/auth';
 import { recordAudit } from '../services/audit';
-import { unauthenticated } from '../errors';
+import { unauthenticated, wrongPassword } from '../errors';
 import { signInLimiter } from '../middlewares/rate-limit';
 
 const tokenParams = z.strictObject({ token: tokenParam });
@@ -49,7 +49,7 @@ export const authRouter = defineRouter('/api/auth', [
       const user = await authenticateLocal(req, res);
       if (!user) {
         await recordAudit(req, 'sign-in.failure', { email: req.body.email }, { userId: null, breweryId: null });
-        throw unauthenticated('E-mail or password is not right');
+        throw wrongPassword(401, 'E-mail or password is not right');
       }
       await logIn(req, user);
       await recordAudit(req, 'sign-in.success', null, { userId: user.id, breweryId: user.breweryId });
@@ -107,7 +107,7 @@ export const authRouter = defineRouter('/api/auth', [
     before: [signInLimiter],
     body: resetRequestSchema,
     handler: async (req, res) => {
-      const user = await auth.requestPasswordReset(req.body.email);
+      const user = await auth.requestPasswordReset(req.body.email, req.log);
       await recordAudit(req, 'password.reset-request', { email: req.body.email }, {
         userId: user?.id ?? null,
         breweryId: user?.breweryId ?? null,

@@ -1,10 +1,11 @@
 import { Op, QueryTypes } from 'sequelize';
 import { sequelize } from '../config/database';
 import { Brewery, Invite, Session, User } from '../models';
-import { badRequest, conflict, notFound, unauthenticated } from '../errors';
+import { badRequest, conflict, notFound, unauthenticated, wrongPassword } from '../errors';
 import { assertStrongPassword, checkPassword, hashPassword, standInHash } from './passwords';
 import { hashToken, newToken } from './tokens';
-import { publicLink, sendMail } from './mail';
+import type { Logger } from 'pino';
+import { publicLink, sendMail, sendMailInBackground } from './mail';
 import type {
   AcceptInviteInput,
   ChangePasswordInput,
@@ -99,7 +100,7 @@ export async function changePassword(userId: number, input: ChangePasswordInput,
   const user = await User.findByPk(userId);
   if (!user) throw unauthenticated();
   if (!(await checkPassword(input.currentPassword, user.passwordHash))) {
-    throw badRequest('Your current password is not right', { currentPassword: 'This is not your current password' });
+    throw wrongPassword(400, 'Your current password is not right', { currentPassword: 'This is not your current password' });
   }
   assertStrongPassword(input.newPassword, [user.email, user.displayName], 'newPassword');
   user.passwordHash = await hashPassword(input.newPassword);
@@ -192,12 +193,16 @@ export async function acceptInvite(token: string, input: AcceptInviteInput): Pro
   });
 }
 
-/** Sends a reset link if the account exists; the caller answers the same either way. */
-export async function requestPasswordReset(email: string): Promise<User | null> {
+/**
+ * Sends a reset link if the account exists; the caller answers the same either way. The link is stored
+ * before this returns, but the mail goes out in the background (failures go to `log`), so waiting on
+ * the mail server does not make a known address answer slower than an unknown one.
+ */
+export async function requestPasswordReset(email: string, log: Logger): Promise<User | null> {
   const user = await User.findOne({ where: { email } });
   if (!user || user.disabledAt) return null;
   const token = await issueLink('reset', { breweryId: user.breweryId, email, role: null, createdById: null });
-  await sendMail({
+  sendMailInBackground({
     to: email,
     subject: 'Reset your Kettlewright password',
     text: [
@@ -208,7 +213,7 @@ export async function requestPasswordReset(email: string): Promise<User | null> 
       '',
       'If it was not you, ignore this message: your password stays as it is.',
     ].join('\n'),
-  });
+  }, log);
   return user;
 }
 

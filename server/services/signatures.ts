@@ -5,7 +5,7 @@
 import { Transaction } from 'sequelize';
 import { sequelize } from '../config/database';
 import { Batch, BatchLogEntry, Brewery, User } from '../models';
-import { badRequest, conflict, notFound } from '../errors';
+import { conflict, notFound, wrongPassword } from '../errors';
 import { checkPassword } from './passwords';
 import { appendLogEntry, brewDaySigned, canonicalJson, entryContent, sha256, type LogActor } from './batch-log';
 import { BREW_DAY_KINDS, type Signature, type WriteMeta } from '../../shared/schemas/batch-log';
@@ -44,7 +44,7 @@ export function signaturesOf(batch: Batch, rows: readonly BatchLogEntry[]): Sign
 export async function signOffBrewDay(actor: LogActor, batchId: number, password: string, meta: WriteMeta): Promise<Signature> {
   const user = await User.findOne({ where: { id: actor.id, breweryId: actor.breweryId } });
   if (!user || !(await checkPassword(password, user.passwordHash))) {
-    throw badRequest('Your password is not right. Nothing was signed.', { password: 'This is not your password' });
+    throw wrongPassword(400, 'Your password is not right. Nothing was signed.', { password: 'This is not your password' });
   }
   const brewery = await Brewery.findByPk(actor.breweryId);
   return sequelize.transaction({ isolationLevel: Transaction.ISOLATION_LEVELS.READ_COMMITTED }, async (transaction) => {

@@ -17,9 +17,21 @@ beforeAll(async () => {
 });
 
 describe('sign-in rate limit', () => {
-  it('five wrong passwords answer 401; the sixth attempt within 15 minutes answers 429, even with the right password', async () => {
+  it('malformed bodies are not counted; five wrong passwords answer 401 and the sixth attempt answers 429, even with the right password', async () => {
     const client = agent(createApp()); // a fresh app: the limiter's memory starts empty
     const email = t.users.taproom_manager.email;
+    const malformed: Array<[string, () => ReturnType<Agent['post']>]> = [
+      ['no e-mail', () => client.post('/api/auth/sign-in').send({ password: GOOD_PASSWORD })],
+      ['no password', () => client.post('/api/auth/sign-in').send({ email })],
+      ['no body', () => client.post('/api/auth/sign-in')],
+      ['an unknown field', () => client.post('/api/auth/sign-in').send({ email, password: GOOD_PASSWORD, remember: true })],
+      ['a number for the e-mail', () => client.post('/api/auth/sign-in').send({ email: 42, password: GOOD_PASSWORD })],
+      ['an empty password', () => client.post('/api/auth/sign-in').send({ email, password: '' })],
+      ['a reset request without an e-mail', () => client.post('/api/auth/reset-request').send({})],
+    ];
+    for (const [what, send] of malformed) expect((await send()).status, what).toBe(400);
+    expect((await client.post('/api/auth/sign-in').send({ email, password: GOOD_PASSWORD })).status).toBe(200);
+
     for (let i = 1; i <= 5; i++) {
       const res = await client.post('/api/auth/sign-in').send({ email, password: `wrong-guess-${i}` });
       expect(res.status, `attempt ${i}`).toBe(401);
