@@ -154,7 +154,7 @@ export async function seedLarge(ownerUrl: string, size = { batches: 3000, readin
           const sg = fg + (og - fg) * Math.exp(-i / 18);
           const data = { method: 'probe', gravity: sg, gravityUnit: 'sg', temp: 19, tempUnit: 'c' };
           const eid = push('reading', null, data, at);
-          readingRows.push([brewery.id, id, eid, at, sg, sg, 'sg', 19, null, 'probe', LARGE_PEOPLE.assistant_brewer.displayName, at]);
+          readingRows.push([brewery.id, id, eid, eid, at, sg, sg, 'sg', 19, null, 'probe', LARGE_PEOPLE.assistant_brewer.displayName, at]);
           counts.readings += 1;
         }
         if (!recent && !dumped) {
@@ -183,8 +183,8 @@ export async function seedLarge(ownerUrl: string, size = { batches: 3000, readin
         entryRows, // the table's trigger writes each entry's idempotency record and audit row
       );
       await conn.batch(
-        `INSERT INTO gravity_readings (brewery_id, batch_id, log_entry_id, taken_at, sg, entered_value, entered_unit, temp_c, ph, method,
-           author_name, created_at) VALUES (?,?,?,?,?,?,?,?,?,?,?,?)`,
+        `INSERT INTO gravity_readings (brewery_id, batch_id, log_entry_id, reading_entry_id, taken_at, sg, entered_value, entered_unit, temp_c,
+           ph, method, author_name, created_at) VALUES (?,?,?,?,?,?,?,?,?,?,?,?,?)`,
         readingRows,
       );
       if (packagingRows.length) {

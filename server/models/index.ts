@@ -12,7 +12,7 @@ export { Batch } from './batch';
 export { Vessel } from './vessel';
 export { BatchLogEntry } from './batch-log-entry';
 export { IdempotencyKey } from './idempotency-key';
-export { GravityReading } from './gravity-reading';
+export { GravityReading, IN_FORCE, readingInForce } from './gravity-reading';
 export { CellarPlan } from './cellar-plan';
 export { Alert } from './alert';
 export { PackagingRun } from './packaging-run';

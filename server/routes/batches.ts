@@ -4,7 +4,8 @@ import { BREWING_ROLES } from '../../shared/schemas/roles';
 import { batchIdParams, batchListQuery, changeStatusSchema, createBatchSchema } from '../../shared/schemas/batches';
 import { logEntryInputSchema, signOffSchema } from '../../shared/schemas/batch-log';
 import * as batches from '../services/batches';
-import { appendLogEntry, batchLogJson, toLogEntry, verifyChain, writeMetaFromHeaders } from '../services/batch-log';
+import { batchLogJson, toLogEntry, verifyChain, writeMetaFromHeaders } from '../services/batch-log';
+import { appendBatchLogEntry } from '../services/readings';
 import { signOffBrewDay } from '../services/signatures';
 import type { Request } from 'express';
 import { BatchLogEntry } from '../models';
@@ -92,7 +93,7 @@ export const batchesRouter = defineRouter('/api/batches', [
     body: logEntryInputSchema,
     handler: async (req, res) => {
       const meta = writeMetaFromHeaders((name) => req.get(name));
-      const entry = await appendLogEntry(actor(req), Number(req.params.id), req.body, meta);
+      const entry = await appendBatchLogEntry(actor(req), Number(req.params.id), req.body, meta);
       res.status(201).json(toLogEntry(entry));
     },
   },

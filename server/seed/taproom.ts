@@ -126,7 +126,7 @@ async function brew(ctx: DemoContext, beer: DemoBeer, recipe: Recipe, t: Transac
       transaction: t,
       onInsert: async (entry, tx) => {
         await GravityReading.create(
-          { breweryId: brewery.id, batchId: batch.id, logEntryId: Number(entry.id), takenAt: m.capturedAt, sg, enteredValue: sg, enteredUnit: 'sg', tempC: 19, ph: null, method: 'hydrometer', authorName: assistant.displayName },
+          { breweryId: brewery.id, batchId: batch.id, logEntryId: Number(entry.id), readingEntryId: Number(entry.id), takenAt: m.capturedAt, sg, enteredValue: sg, enteredUnit: 'sg', tempC: 19, ph: null, method: 'hydrometer', authorName: assistant.displayName },
           { transaction: tx },
         );
       },

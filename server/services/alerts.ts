@@ -4,7 +4,7 @@
  * index), shown in the app and e-mailed to every head brewer of the brewery.
  */
 import { Op, UniqueConstraintError } from 'sequelize';
-import { Alert, Batch, BatchLogEntry, GravityReading, User } from '../models';
+import { Alert, Batch, BatchLogEntry, GravityReading, IN_FORCE, User } from '../models';
 import { notFound } from '../errors';
 import { sendMail, publicLink } from './mail';
 import { cellarPlanFor } from './cellar';
@@ -47,7 +47,7 @@ export async function evaluateReadingAlerts(breweryId: number, batchId: number):
   if (!batch || batch.status !== 'fermenting') return;
   const plan = await cellarPlanFor(batch);
   const trigger = dRestTriggerSg(plan.plannedFg, plan.dRestPoints);
-  const readings = await GravityReading.findAll({ where: { batchId }, order: [['takenAt', 'ASC'], ['id', 'ASC']], attributes: ['sg', 'takenAt'] });
+  const readings = await GravityReading.findAll({ where: { batchId, [Op.and]: [IN_FORCE] }, order: [['takenAt', 'ASC'], ['id', 'ASC']], attributes: ['sg', 'takenAt'] });
   const dRestLogged = await BatchLogEntry.count({ where: { batchId, kind: 'action', stepKey: 'd_rest' } });
 
   const crossing = readings.findIndex((r, i) => crossesDRestTrigger(i === 0 ? null : readings[i - 1]!.sg, r.sg, trigger));
@@ -73,7 +73,7 @@ export async function sweepOverdueReadings(now = new Date()): Promise<number> {
   let raised = 0;
   for (const batch of batches) {
     const plan = await cellarPlanFor(batch);
-    const last = await GravityReading.findOne({ where: { batchId: batch.id }, order: [['takenAt', 'DESC']] });
+    const last = await GravityReading.findOne({ where: { batchId: batch.id, [Op.and]: [IN_FORCE] }, order: [['takenAt', 'DESC']] });
     const since = last ? new Date(last.takenAt) : batch.updatedAt;
     if (readingOverdue(since.getTime(), now.getTime(), plan.readingIntervalHours)) {
       const before = await Alert.count({ where: { batchId: batch.id, kind: 'overdue' } });

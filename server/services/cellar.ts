@@ -3,7 +3,7 @@
  * the carbonation setting capped by the vessel's rating, and the vessel board.
  */
 import { Op, Transaction, UniqueConstraintError } from 'sequelize';
-import { Batch, BatchLogEntry, CellarPlan, GravityReading, Vessel } from '../models';
+import { Batch, BatchLogEntry, CellarPlan, GravityReading, IN_FORCE, Vessel } from '../models';
 import { conflict, notFound, unprocessable } from '../errors';
 import { appendLogEntry, type LogActor } from './batch-log';
 import { assignVessel, changeBatchStatus, findBatch } from './batches';
@@ -300,7 +300,7 @@ export async function vesselBoard(breweryId: number, now = new Date()): Promise<
   const batchIds = vessels.map((v) => v.currentBatchId).filter((id): id is number => id !== null);
   const [batches, readings, entries] = await Promise.all([
     Batch.findAll({ where: { breweryId, id: { [Op.in]: batchIds } } }),
-    GravityReading.findAll({ where: { batchId: { [Op.in]: batchIds } }, order: [['takenAt', 'ASC']], attributes: ['batchId', 'takenAt', 'sg', 'tempC'] }),
+    GravityReading.findAll({ where: { batchId: { [Op.in]: batchIds }, [Op.and]: [IN_FORCE] }, order: [['takenAt', 'ASC']], attributes: ['batchId', 'takenAt', 'sg', 'tempC'] }),
     BatchLogEntry.findAll({
       where: { batchId: { [Op.in]: batchIds }, [Op.or]: [{ kind: 'action' }, { stepKey: 'knockout-end' }] },
       attributes: ['batchId', 'kind', 'stepKey', 'capturedAt'],

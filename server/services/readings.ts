@@ -1,13 +1,15 @@
 /**
  * Gravity readings: each is a signed batch log entry, with its `gravity_readings` row written in the
- * same transaction. Probe imports write every row in one transaction or none.
+ * same transaction. Probe imports write every row in one transaction or none. A correction of a reading
+ * that carries values adds the reading's corrected row; readers take the rows in force (IN_FORCE).
  */
 import { createHash } from 'node:crypto';
 import { Op, Transaction } from 'sequelize';
 import { sequelize } from '../config/database';
-import { Batch, GravityReading } from '../models';
+import { Batch, BatchLogEntry, GravityReading, IN_FORCE } from '../models';
 import { badRequest, conflict } from '../errors';
 import { appendLogEntry, type LogActor } from './batch-log';
+import type { LogEntryInput, Measurements } from '../../shared/schemas/batch-log';
 import { changeBatchStatus, findBatch } from './batches';
 import { parseProbeCsv, MAX_IMPORT_ROWS } from './probe-csv';
 import { evaluateReadingAlerts } from './alerts';
@@ -22,6 +24,7 @@ export function toReadingView(r: GravityReading): ReadingView {
   return {
     id: Number(r.id),
     logEntryId: Number(r.logEntryId),
+    corrected: Number(r.logEntryId) !== Number(r.readingEntryId),
     takenAt: new Date(r.takenAt).toISOString(),
     sg: r.sg,
     plato: sgToPlato(r.sg),
@@ -77,6 +80,7 @@ export async function writeReading(
           breweryId: actor.breweryId,
           batchId,
           logEntryId: Number(e.id),
+          readingEntryId: Number(e.id),
           takenAt: meta.capturedAt,
           sg,
           enteredValue: input.gravity,
@@ -101,8 +105,61 @@ export async function recordReading(actor: LogActor, batchId: number, input: Rea
   return toReadingView(reading);
 }
 
+/**
+ * The batch page's log write. A correction of a reading, or of an earlier correction of one, that carries a
+ * gravity, temperature or pH also writes the reading's corrected row in the same transaction: the values it
+ * gives replace those in force, the others stay, and the sample keeps the time it was taken. The alerts are
+ * checked again against the corrected curve.
+ */
+export async function appendBatchLogEntry(actor: LogActor, batchId: number, input: LogEntryInput, meta: WriteMeta): Promise<BatchLogEntry> {
+  if (input.kind !== 'correction') return appendLogEntry(actor, batchId, input, meta);
+  let corrected = false;
+  const entry = await appendLogEntry(actor, batchId, input, meta, {
+    onInsert: async (e, t) => {
+      corrected = await writeReadingCorrection(actor, e, input.measurements, t);
+    },
+  });
+  if (corrected) await evaluateReadingAlerts(actor.breweryId, batchId);
+  return entry;
+}
+
+async function writeReadingCorrection(actor: LogActor, correction: BatchLogEntry, m: Measurements | undefined, transaction: Transaction): Promise<boolean> {
+  if (m?.gravitySg === undefined && m?.tempC === undefined && m?.ph === undefined) return false;
+  // The reading the corrected entry stands for: its own row, or (for a correction that carried no values) its target's.
+  let target: number | null = Number(correction.correctsEntryId);
+  let readingEntryId: number | null = null;
+  while (target !== null && readingEntryId === null) {
+    const row = await GravityReading.findOne({ where: { logEntryId: target }, attributes: ['readingEntryId'], transaction });
+    if (row) readingEntryId = Number(row.readingEntryId);
+    else {
+      const entry: BatchLogEntry | null = await BatchLogEntry.findOne({ where: { id: target, batchId: correction.batchId, kind: 'correction' }, attributes: ['correctsEntryId'], transaction });
+      target = entry?.correctsEntryId == null ? null : Number(entry.correctsEntryId);
+    }
+  }
+  if (readingEntryId === null) return false;
+  const current = await GravityReading.findOne({ where: { readingEntryId }, order: [['id', 'DESC']], transaction, rejectOnEmpty: true });
+  await GravityReading.create(
+    {
+      breweryId: actor.breweryId,
+      batchId: current.batchId,
+      logEntryId: Number(correction.id),
+      readingEntryId,
+      takenAt: current.takenAt,
+      sg: m.gravitySg ?? current.sg,
+      enteredValue: m.gravitySg ?? current.enteredValue,
+      enteredUnit: m.gravitySg === undefined ? current.enteredUnit : 'sg',
+      tempC: m.tempC ?? current.tempC,
+      ph: m.ph ?? current.ph,
+      method: current.method,
+      authorName: actor.displayName,
+    },
+    { transaction },
+  );
+  return true;
+}
+
 export async function batchReadings(batchId: number): Promise<ReadingView[]> {
-  const rows = await GravityReading.findAll({ where: { batchId }, order: [['takenAt', 'ASC'], ['id', 'ASC']] });
+  const rows = await GravityReading.findAll({ where: { batchId, [Op.and]: [IN_FORCE] }, order: [['takenAt', 'ASC'], ['id', 'ASC']] });
   return rows.map(toReadingView);
 }
 

@@ -1,10 +1,10 @@
 /**
  * Release to the taproom: the head brewer writes the public sheet, confirms the measured numbers and releases;
- * the batch moves to released. ABV comes from the measured OG (brew-day log) and FG (latest gravity reading).
+ * the batch moves to released. ABV comes from the measured OG (brew-day log) and FG (latest gravity reading in force).
  */
 import { Op, type Transaction } from 'sequelize';
 import { sequelize } from '../config/database';
-import { Attachment, Batch, GravityReading, PackagingRun, Release, User } from '../models';
+import { Attachment, Batch, GravityReading, IN_FORCE, PackagingRun, Release, User } from '../models';
 import { conflict, unprocessable } from '../errors';
 import { changeBatchStatus, findBatch } from './batches';
 import { logEntries } from './batch-log';
@@ -22,7 +22,7 @@ const GRAVITY_MATCH = 0.0005;
 export async function finalNumbers(batch: Batch, transaction?: Transaction): Promise<FinalNumbers> {
   const [{ entries }, lastReading] = await Promise.all([
     logEntries(batch.id, transaction),
-    GravityReading.findOne({ where: { batchId: batch.id }, order: [['takenAt', 'DESC'], ['id', 'DESC']], transaction }),
+    GravityReading.findOne({ where: { batchId: batch.id, [Op.and]: [IN_FORCE] }, order: [['takenAt', 'DESC'], ['id', 'DESC']], transaction }),
   ]);
   const og = batchActuals(batch.plan, entries).og.actual;
   const fg = lastReading?.sg ?? null;

@@ -7,6 +7,7 @@ import { QueryTypes } from 'sequelize';
 import { fromZonedTime } from 'date-fns-tz';
 import { sequelize } from '../config/database';
 import { notFound } from '../errors';
+import { readingInForce } from '../models';
 import { achievedEfficiency, apparentAttenuation, lineVolumeL, type PackageLine } from '../../shared/brewing';
 import type { BatchHistory, BeerFigures, HistoryRow, PackageFigures, ProductionReport } from '../../shared/schemas/reports';
 
@@ -172,7 +173,7 @@ const HISTORY_SQL = `
   (SELECT NULL, b.id, b.number, b.brew_date, b.status, b.planned_og, b.planned_efficiency, b.planned_knockout_l,
           (SELECT JSON_ARRAY(${measured('k', 'gravitySg')}, ${measured('k', 'volumeL')})
              FROM batch_log_entries k WHERE k.batch_id = b.id AND k.step_key = 'knockout-end' ORDER BY k.id LIMIT 1),
-          (SELECT g.sg FROM gravity_readings g WHERE g.batch_id = b.id ORDER BY g.taken_at DESC, g.id DESC LIMIT 1),
+          (SELECT g.sg FROM gravity_readings g WHERE g.batch_id = b.id AND ${readingInForce('g')} ORDER BY g.taken_at DESC, g.id DESC LIMIT 1),
           (SELECT MIN(p.packaged_at) FROM packaging_runs p WHERE p.batch_id = b.id)
      FROM batches b
     WHERE b.brewery_id = :breweryId AND b.recipe_id = :recipeId

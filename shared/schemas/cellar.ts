@@ -111,7 +111,10 @@ export type ReadingEntryInput = z.infer<typeof readingEntrySchema>;
 /** A reading as the API returns it: gravity stored as SG, shown in either unit. */
 export interface ReadingView {
   id: number;
+  /** The log entry whose values are shown: the reading's, or the latest correction's that carried values. */
   logEntryId: number;
+  /** A correction replaced what was first entered (the original stays in the batch log). */
+  corrected: boolean;
   takenAt: string;
   sg: number;
   plato: number;

@@ -4,6 +4,7 @@ import { plannedBatch, writeHeaders } from './batch-fixtures';
 import { changeBatchStatus } from '../../server/services/batches';
 import { Alert, Batch, BatchLogEntry, GravityReading } from '../../server/models';
 import { sweepOverdueReadings } from '../../server/services/alerts';
+import { finalNumbers } from '../../server/services/release';
 import { headPressureKpa, KEG_SIZES, platoToSg, refractometerBeerSg, sgToPlato } from '../../shared/brewing';
 import type { BatchCellarView, ProbeImportResult, ReadingView, VesselView } from '../../shared/schemas/cellar';
 
@@ -107,6 +108,46 @@ describe('gravity readings', () => {
     expect(bad.body.error.fields.gravityUnit).toMatch(/°Brix/);
     const taproom = await t.as.taproom_manager.post(`/api/cellar/batches/${batch.id}/readings`).set(writeHeaders()).send(reading(1.05));
     expect(taproom.status).toBe(403);
+  });
+});
+
+describe('correcting a reading', () => {
+  const correct = (batchId: number, body: object) =>
+    t.as.assistant_brewer.post(`/api/batches/${batchId}/log`).set(writeHeaders()).send({ kind: 'correction', meaning: 'performed', ...body });
+
+  it('replaces the values a correction gives, keeps the rest and the original entry, and the release FG follows', async () => {
+    const batch = await knockedOutBatch();
+    const hour = 3_600_000;
+    const takenAt = new Date(Date.now() - hour);
+    await postReading(batch.id, reading(1.05), new Date(Date.now() - 3 * hour));
+    await postReading(batch.id, reading(1.02), new Date(Date.now() - 2 * hour));
+    const typo = await postReading(batch.id, reading(1.1), takenAt); // 1.100 typed for 1.010
+    expect(typo.status).toBe(201);
+
+    const first = await correct(batch.id, { correctsEntryId: typo.body.logEntryId, reason: 'Typed 1.100 for 1.010', measurements: { gravitySg: 1.01 } });
+    expect(first.status).toBe(201);
+    let view = await cellarView(batch.id);
+    expect(view.readings.map((r) => r.sg)).toEqual([1.05, 1.02, 1.01]);
+    expect(view.readings[2]).toMatchObject({ sg: 1.01, tempC: 19, corrected: true, logEntryId: first.body.id, takenAt: takenAt.toISOString(), method: 'hydrometer' });
+    expect(view.readings[0]!.corrected).toBe(false);
+
+    // A second correction (of the correction) changes only the temperature; the corrected gravity stays.
+    const second = await correct(batch.id, { correctsEntryId: first.body.id, reason: 'Thermometer read 20 °C', measurements: { tempC: 20 } });
+    expect(second.status).toBe(201);
+    // A correction without values of the first reading is a remark: the reading stands.
+    expect((await correct(batch.id, { correctsEntryId: view.readings[0]!.logEntryId, reason: 'Sample drawn from the racking arm' })).status).toBe(201);
+    view = await cellarView(batch.id);
+    expect(view.readings.map((r) => [r.sg, r.tempC])).toEqual([
+      [1.05, 19],
+      [1.02, 19],
+      [1.01, 20],
+    ]);
+
+    // Nothing was changed in place: the three readings' entries and first rows are all still there.
+    expect(await BatchLogEntry.count({ where: { batchId: batch.id, kind: 'reading' } })).toBe(3);
+    expect(await GravityReading.count({ where: { batchId: batch.id } })).toBe(5);
+    const stored = await Batch.findByPk(batch.id, { rejectOnEmpty: true });
+    expect((await finalNumbers(stored)).fg).toBe(1.01);
   });
 });
 

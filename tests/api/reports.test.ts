@@ -177,6 +177,25 @@ describe('batch history', () => {
     expect(history.rows.find((r) => r.batchId === inTankId)!.daysBrewToPackage).toBeNull();
   });
 
+  it('takes a corrected reading as the final gravity', async () => {
+    const posted = await t.as.assistant_brewer
+      .post(`/api/cellar/batches/${inTankId}/readings`)
+      .set(writeHeaders())
+      .send({ kind: 'reading', method: 'hydrometer', gravity: 1.1, gravityUnit: 'sg', temp: 18, tempUnit: 'c' });
+    ok(posted, 201);
+    ok(
+      await t.as.assistant_brewer
+        .post(`/api/batches/${inTankId}/log`)
+        .set(writeHeaders())
+        .send({ kind: 'correction', correctsEntryId: posted.body.logEntryId, reason: 'Typed 1.100 for 1.010', measurements: { gravitySg: 1.01 } }),
+      201,
+    );
+    const res = await t.as.head_brewer.get(`/api/reports/history?recipeId=${recipeId}`);
+    ok(res);
+    // (1.050 − 1.010)/(1.050 − 1) = 0.8, by the same formula as above.
+    expect((res.body as BatchHistory).rows.find((r) => r.batchId === inTankId)!.apparentAttenuation).toBeCloseTo(0.8, 9);
+  });
+
   it('answers 404 for another brewery’s recipe', async () => {
     const res = await other.as.head_brewer.get(`/api/reports/history?recipeId=${recipeId}`);
     expect(res.status).toBe(404);

@@ -81,6 +81,24 @@ describe('cellar readings on the tablet (Chromium, 1024×768)', () => {
     await screenshot(page, 'cellar-board-1024.png', { fullPage: false });
     await screenshot(page, 'cellar-board-full-1024.png');
 
+    // 1.021 was misread: the assistant corrects it in the batch record; the cellar and the board show the correction.
+    await page.goBack();
+    await page.getByRole('link', { name: 'batch record' }).click();
+    await page.waitForURL(`**/batches/${batch.id}/record`);
+    await page.getByTestId('log-entry').filter({ hasText: '1.021' }).getByRole('button', { name: /Correct entry/ }).click();
+    const dialog = page.getByRole('dialog', { name: /Correct entry/ });
+    await dialog.getByLabel('Gravity (SG)').fill('1.019');
+    await dialog.getByLabel('Reason').fill('Read the hydrometer at the meniscus top; it is 1.019');
+    await screenshot(page, 'cellar-reading-correction-1024.png', { fullPage: false });
+    await dialog.getByRole('button', { name: 'Save correction' }).click();
+    await expect.poll(() => page.getByTestId('log-entry').filter({ hasText: 'Correction: Read the hydrometer' }).count(), { timeout: 15_000 }).toBe(1);
+    await page.goto(`/cellar/batches/${batch.id}`);
+    await expect.poll(() => page.getByLabel('Readings and cellar work').textContent()).toMatch(/1\.019 .*corrected/);
+    expect(await page.getByLabel('Readings and cellar work').textContent()).not.toContain('1.021');
+    expect(await points.count()).toBe(3);
+    await page.getByRole('link', { name: 'Vessel board' }).click();
+    await expect.poll(() => tile.getByTestId('board-gravity').textContent()).toBe('1.019');
+
     // The demo batch a week into fermentation: a curve with its prediction.
     await page.getByRole('article', { name: 'FV-1' }).click();
     await page.getByRole('heading', { name: 'Fermentation curve' }).scrollIntoViewIfNeeded();

@@ -11,11 +11,23 @@ import type { MeasureKey } from '../../../../shared/batches/brew-day';
 
 function what(e: LogEntry): string {
   const d = e.data as { label?: string; text?: string };
+  if (e.kind === 'reading') return 'Gravity reading';
   if (e.kind === 'note') return `${(e.data as { deviation?: boolean }).deviation ? 'Deviation' : 'Note'}: ${d.text}`;
   if (e.kind === 'correction') return `Correction: ${e.reason}`;
   if (e.kind === 'sign_off') return 'Brew day signed off';
   return d.label ?? e.kind;
 }
+
+/** What an entry measured: its measurements, or a cellar reading's gravity, temperature and pH. */
+function measuredIn(e: LogEntry): Measurements | undefined {
+  if (e.kind !== 'reading') return e.data.measurements as Measurements | undefined;
+  const d = e.data as { sg: number; tempC: number | null; ph?: number };
+  return { gravitySg: d.sg, ...(d.tempC === null ? {} : { tempC: d.tempC }), ...(d.ph === undefined ? {} : { ph: d.ph }) };
+}
+
+/** Entries a person may correct; a reading's correction may give a new gravity, temperature or pH. */
+const CORRECTABLE = ['step', 'measurement', 'note', 'reading'];
+const READING_ASKS: MeasureKey[] = ['gravitySg', 'tempC', 'ph'];
 
 /** The log as recorded: a corrected entry is struck through beside its correction, with both authors and times. */
 export function LogList({ batchId, entries, system, timeZone }: { batchId: number; entries: LogEntry[]; system: UnitSystem; timeZone: string }) {
@@ -24,7 +36,7 @@ export function LogList({ batchId, entries, system, timeZone }: { batchId: numbe
     <>
       <ol className="divide-y divide-mist-200" aria-label="Log">
         {entries.map((e) => {
-          const m = e.data.measurements as Measurements | undefined;
+          const m = measuredIn(e);
           const corrected = e.correctedByIds.length > 0;
           return (
             <li key={e.id} className={cx('flex items-start gap-3 py-2', e.kind === 'correction' && 'pl-6')} data-testid="log-entry">
@@ -41,7 +53,7 @@ export function LogList({ batchId, entries, system, timeZone }: { batchId: numbe
                   {e.correctsEntryId && <span className="ml-2">corrects #{entries.find((x) => x.id === e.correctsEntryId)?.sequence}</span>}
                 </p>
               </div>
-              {(e.kind === 'step' || e.kind === 'measurement' || e.kind === 'note') && (
+              {CORRECTABLE.includes(e.kind) && (
                 <Button variant="quiet" className="no-print" onClick={() => setCorrecting(e)} aria-label={`Correct entry ${e.sequence}`}>
                   Correct
                 </Button>
@@ -60,7 +72,7 @@ function CorrectionDialog({ batchId, entry, system, onClose }: { batchId: number
   const [typed, setTyped] = useState<Typed>({});
   const [gravity, setGravity] = useState<GravityUnit>('sg');
   const [error, setError] = useState<string | null>(null);
-  const asks = Object.keys((entry.data.measurements as Measurements | undefined) ?? {}) as MeasureKey[];
+  const asks = entry.kind === 'reading' ? READING_ASKS : (Object.keys(measuredIn(entry) ?? {}) as MeasureKey[]);
   const submit = async () => {
     const { measurements, error: bad } = toMeasurements(typed, system, gravity);
     if (bad) return setError(bad);

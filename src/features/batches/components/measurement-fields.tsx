@@ -9,11 +9,12 @@ export type GravityUnit = 'sg' | 'plato';
 /** What the person typed, per measurement, in the units shown. */
 export type Typed = Partial<Record<MeasureKey, string>>;
 
-function unitOf(key: MeasureKey, system: UnitSystem, gravity: GravityUnit): string {
+/** The unit a field is typed in; pH has none. */
+function unitOf(key: MeasureKey, system: UnitSystem, gravity: GravityUnit): string | null {
   if (key === 'tempC') return UNITS[system].tempC.unit;
   if (key === 'volumeL') return UNITS[system].volumeL.unit;
   if (key === 'gravitySg') return gravity === 'sg' ? 'SG' : '°P';
-  return 'pH';
+  return null;
 }
 const NAMES: Record<MeasureKey, string> = { tempC: 'Temperature', volumeL: 'Volume', gravitySg: 'Gravity', ph: 'pH' };
 
@@ -64,11 +65,12 @@ export function MeasurementFields({
       {asks.map((key) => {
         const id = `measure-${key}`;
         const want = expected[key];
+        const unit = unitOf(key, system, gravity);
         return (
           <div key={key}>
             <div className="flex items-end justify-between gap-2">
               <label htmlFor={id} className="text-base font-semibold text-ink-700">
-                {NAMES[key]} ({unitOf(key, system, gravity)})
+                {unit ? `${NAMES[key]} (${unit})` : NAMES[key]}
               </label>
               {key === 'gravitySg' && (
                 <div role="group" aria-label="Gravity unit" className="flex overflow-hidden rounded-lg border-2 border-cellar-700">

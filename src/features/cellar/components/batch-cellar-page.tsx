@@ -84,12 +84,21 @@ export function BatchCellarPage() {
         )}
       </div>
       <Section title="Readings and cellar work">
+        {data.readings.length > 0 && (
+          <p className="mb-2 text-sm text-ink-500">
+            A reading typed wrong is corrected in the{' '}
+            <Link className="font-semibold text-cellar-700 underline" to={`/batches/${batchId}/record`}>
+              batch record
+            </Link>
+            : the original stays in the log beside the correction.
+          </p>
+        )}
         <ul className="divide-y divide-mist-200" aria-label="Readings and cellar work">
           {[
             ...data.readings.map((r) => ({
               at: r.takenAt,
               key: `r${r.id}`,
-              text: `${r.sg.toFixed(3)} (${r.plato.toFixed(1)} °P)${r.tempC !== null ? ` · ${show(system, 'tempC', r.tempC)}` : ''}${r.ph !== null ? ` · pH ${r.ph}` : ''} · ${READING_METHOD_LABELS[r.method]}`,
+              text: `${r.sg.toFixed(3)} (${r.plato.toFixed(1)} °P)${r.tempC !== null ? ` · ${show(system, 'tempC', r.tempC)}` : ''}${r.ph !== null ? ` · pH ${r.ph}` : ''} · ${READING_METHOD_LABELS[r.method]}${r.corrected ? ' · corrected' : ''}`,
               who: r.authorName,
             })),
             ...data.actions.map((a) => ({
