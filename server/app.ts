@@ -5,6 +5,7 @@ import { existsSync } from 'node:fs';
 import helmet from 'helmet';
 import passport from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
+import { pino, type Logger } from 'pino';
 import { pinoHttp } from 'pino-http';
 import { env, isProduction } from './config/env';
 import { databaseAnswers } from './config/database';
@@ -25,7 +26,8 @@ passport.use(
   }),
 );
 
-export function createApp(options: { serveClient?: boolean } = {}): Express {
+/** `logger` is where request logs and errors go (default: standard output at LOG_LEVEL). */
+export function createApp(options: { serveClient?: boolean; logger?: Logger } = {}): Express {
   const app = express();
   app.disable('x-powered-by');
   if (isProduction) app.set('trust proxy', 1);
@@ -33,7 +35,7 @@ export function createApp(options: { serveClient?: boolean } = {}): Express {
 
   app.use(
     pinoHttp({
-      level: env.LOG_LEVEL,
+      logger: options.logger ?? pino<never>({ level: env.LOG_LEVEL }),
       genReqId: (_req, res) => {
         const id = randomUUID();
         res.setHeader('x-request-id', id);

@@ -4,6 +4,9 @@ import { simpleParser } from 'mailparser';
 import { mkdirSync, writeFileSync, readdirSync, readFileSync, existsSync } from 'node:fs';
 import path from 'node:path';
 
+/** Mail to this domain is refused (550, as for a mailbox that does not exist), so a failed send can be seen. */
+export const UNDELIVERABLE_DOMAIN = 'undeliverable.example';
+
 export interface CaughtMail {
   id: string;
   to: string;
@@ -30,6 +33,12 @@ export function startMailCatcher(port: number, dir?: string): Promise<MailCatche
     authOptional: true,
     disabledCommands: ['STARTTLS'],
     logger: false,
+    onRcptTo(address, _session, callback) {
+      if (address.address.toLowerCase().endsWith(`@${UNDELIVERABLE_DOMAIN}`)) {
+        return callback(Object.assign(new Error('No such mailbox'), { responseCode: 550 }));
+      }
+      callback();
+    },
     onData(stream, _session, callback) {
       simpleParser(stream).then(
         (parsed) => {

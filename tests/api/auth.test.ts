@@ -1,10 +1,12 @@
 // Foundation: sign-in, sign-out, sessions (cookie, fixation, restart), password change and reset by e-mail.
 import { createHmac, randomBytes } from 'node:crypto';
 import request, { type Response } from 'supertest';
-import { beforeAll, describe, expect, it } from 'vitest';
+import { pino } from 'pino';
+import { beforeAll, describe, expect, it, vi } from 'vitest';
 import { createApp } from '../../server/app';
 import { SESSION_COOKIE, SESSION_IDLE_MS } from '../../server/middlewares/session';
 import { env } from '../../server/config/env';
+import { UNDELIVERABLE_DOMAIN } from '../../server/dev/mail-catcher';
 import { hashToken } from '../../server/services/tokens';
 import { AuditEvent, Invite, Session, User } from '../../server/models';
 import { GOOD_PASSWORD, agent, createTestBrewery, mailCatcher, testApp, type TestBrewery } from './helpers';
@@ -302,6 +304,21 @@ describe('password reset by e-mail', () => {
     expect(hashToken(await resetToken(known.email))).toBe(stored[0].tokenHash);
     // The stranger's request was answered first, so a mail for it would have been on its way before the known one's.
     expect(mailCatcher().messages().filter((m) => m.to.includes(stranger))).toHaveLength(0);
+  });
+
+  it('a reset mail the mail server refuses still answers 202, keeps the link, and is logged as an error', async () => {
+    const logged: Array<Record<string, unknown>> = [];
+    const app = createApp({ logger: pino({ level: 'error' }, { write: (line: string) => logged.push(JSON.parse(line)) }) });
+    const user = await newUser(t);
+    await user.update({ email: `person.${randomBytes(4).toString('hex')}@${UNDELIVERABLE_DOMAIN}` });
+
+    const res = await agent(app).post('/api/auth/reset-request').send({ email: user.email });
+    expect(res.status).toBe(202);
+    expect(await Invite.count({ where: { email: user.email, purpose: 'reset' } })).toBe(1);
+    await vi.waitFor(
+      () => expect(logged).toContainEqual(expect.objectContaining({ msg: 'e-mail could not be sent', subject: 'Reset your Kettlewright password' })),
+      { timeout: 5000 },
+    );
   });
 
   it('a made-up reset token answers 404', async () => {
