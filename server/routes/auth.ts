@@ -94,6 +94,8 @@ export const authRouter = defineRouter('/api/auth', [
     path: '/password',
     access: 'signed-in',
     body: changePasswordSchema,
+    // A stolen session must not be a way to guess the password without limit.
+    before: [signInLimiter],
     handler: async (req, res) => {
       await auth.changePassword(actor(req).id, req.body, req.sessionID);
       await recordAudit(req, 'password.change');

@@ -56,6 +56,16 @@ describe('sign-in rate limit', () => {
     expect((await client.post('/api/auth/sign-in').send({ email, password: 'nope-6' })).status).toBe(429);
   });
 
+  it('a signed-in person guessing the current password to change it is stopped on the sixth try', async () => {
+    const client = agent(createApp());
+    const email = t.users.taproom_manager.email;
+    expect((await client.post('/api/auth/sign-in').send({ email, password: GOOD_PASSWORD })).status).toBe(200);
+    for (let i = 1; i <= 5; i++) {
+      expect((await client.post('/api/auth/password').send({ currentPassword: `guess-${i}`, newPassword: 'Tidal-brine-copper-88' })).status).toBe(400);
+    }
+    expect((await client.post('/api/auth/password').send({ currentPassword: 'guess-6', newPassword: 'Tidal-brine-copper-88' })).status).toBe(429);
+  });
+
   it('each app keeps its own count: a client blocked by one app signs in on a freshly created one', async () => {
     const blocked = agent(createApp());
     const email = t.users.taproom_manager.email;
