@@ -1,7 +1,7 @@
-import { useState } from 'react';
+import { useState, type ReactNode } from 'react';
 import { useController, type Control, type FieldValues, type Path } from 'react-hook-form';
 import { TextField } from './field';
-import { UNITS, type Quantity } from '../../lib/units';
+import { UNITS, limitInUnits, type Quantity } from '../../lib/units';
 import type { UnitSystem } from '../../../shared/schemas/auth';
 
 interface Props<T extends FieldValues> {
@@ -12,10 +12,14 @@ interface Props<T extends FieldValues> {
   system: UnitSystem;
   optional?: boolean;
   disabled?: boolean;
+  hint?: ReactNode;
 }
 
-/** A number stored in SI, typed and shown in the brewery's units (lb, oz, °F, gal or kg, g, °C, L). */
-export function UnitField<T extends FieldValues>({ control, name, label, quantity, system, optional, disabled }: Props<T>) {
+/**
+ * A number stored in SI, typed and shown in the brewery's units (lb, oz, °F, gal, qt/lb or kg, g, °C, L, L/kg);
+ * its limit messages are restated in those units too.
+ */
+export function UnitField<T extends FieldValues>({ control, name, label, quantity, system, optional, disabled, hint }: Props<T>) {
   const { field, fieldState } = useController({ control, name });
   const u = UNITS[system][quantity];
   // While the person types, keep their text (e.g. "12.") rather than re-formatting it under the cursor.
@@ -28,6 +32,7 @@ export function UnitField<T extends FieldValues>({ control, name, label, quantit
       inputMode="decimal"
       value={shown}
       disabled={disabled}
+      hint={hint}
       name={field.name}
       ref={field.ref}
       onChange={(e) => {
@@ -40,7 +45,7 @@ export function UnitField<T extends FieldValues>({ control, name, label, quantit
         setText(null);
         field.onBlur();
       }}
-      error={fieldState.error?.message}
+      error={fieldState.error?.message && limitInUnits(fieldState.error.message, system, quantity)}
     />
   );
 }

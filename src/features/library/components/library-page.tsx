@@ -46,8 +46,8 @@ function EquipmentForm({ row, onDone }: { row?: EquipmentRow; onDone: () => void
         {volume('kettleDeadSpaceL', 'Kettle dead space')}
         {volume('trubChillerLossL', 'Trub and chiller loss')}
         {volume('fermenterLossL', 'Fermenter loss')}
-        <TextField label="Grain absorption (L/kg)" type="number" step="0.05" {...register('grainAbsorptionLPerKg', asNumber())} error={err('grainAbsorptionLPerKg')} />
-        <TextField label="Mash thickness (L/kg)" type="number" step="0.1" {...register('mashThicknessLPerKg', asNumber())} error={err('mashThicknessLPerKg')} />
+        <UnitField control={control} name="grainAbsorptionLPerKg" label="Grain absorption" quantity="lPerKg" system={system} />
+        <UnitField control={control} name="mashThicknessLPerKg" label="Mash thickness" quantity="lPerKg" system={system} />
         {volume('maxMashTunVolumeL', 'Mash tun capacity')}
         {volume('maxKettleVolumeL', 'Kettle capacity')}
       </div>

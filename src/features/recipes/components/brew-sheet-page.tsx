@@ -149,7 +149,7 @@ function Sheet({ data, system }: { data: ScaleResult; system: UnitSystem }) {
 
       <Part n={3} title="Mash">
         <p className="mb-1">
-          Grain at {t(content.mash.grainTempC)}. Strike with <strong>{v(c.volumes.strikeL)}</strong> at <strong>{t(c.strikeTempC)}</strong> ({c.thicknessLPerKg.toFixed(2)} L/kg). Mash
+          Grain at {t(content.mash.grainTempC)}. Strike with <strong>{v(c.volumes.strikeL)}</strong> at <strong>{t(c.strikeTempC)}</strong> ({show(system, 'lPerKg', c.thicknessLPerKg)}). Mash
           volume about {v(c.volumes.mashVolumeL)}.
         </p>
         <Grid

@@ -64,4 +64,20 @@ describe('recipe editor', () => {
     expect(within(screen.getByRole('group', { name: 'IBU' })).getByText('—')).toBeTruthy();
     expect(screen.getByText(/Some fields need attention/)).toBeTruthy();
   });
+
+  it('takes mash thickness in qt/lb and states a rest limit in °F in a US brewery', async () => {
+    renderEditor();
+    // 1 qt/lb = 2.086 L/kg (US quart 0.946353 L, pound 0.45359237 kg; NIST SP 811 appendix B).
+    const thickness = screen.getByLabelText('Mash thickness (qt/lb)');
+    fireEvent.change(thickness, { target: { value: '1.5' } });
+    fireEvent.blur(thickness);
+    expect((thickness as HTMLInputElement).value).toBe('1.5');
+
+    // The schema allows rests up to 80 °C, which is 176 °F.
+    const rest = within(screen.getByRole('group', { name: 'Mash-in rest' })).getByLabelText('Rest (°F)');
+    fireEvent.change(rest, { target: { value: '190' } });
+    expect(await screen.findByText('Rest temperature must be at most 176 °F')).toBeTruthy();
+    fireEvent.change(thickness, { target: { value: '0.5' } });
+    expect(await screen.findByText('Mash thickness must be at least 0.72 qt/lb')).toBeTruthy();
+  });
 });

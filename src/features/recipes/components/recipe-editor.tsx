@@ -249,7 +249,7 @@ function Mash({ control, register, errors, system, disabled }: Shared) {
     <Section title="Mash">
       <div className="flex flex-wrap gap-3">
         {w('w-40', <UnitField control={control} name="content.mash.grainTempC" label="Grain temp" quantity="tempC" system={system} disabled={disabled} />)}
-        {w('w-56', <TextField label="Mash thickness (L/kg), blank = equipment's" type="number" step="any" {...register('content.mash.thicknessLPerKg', asNumber(true))} error={errorAt(errors, 'content.mash.thicknessLPerKg')} disabled={disabled} />)}
+        {w('w-56', <UnitField control={control} name="content.mash.thicknessLPerKg" label="Mash thickness" quantity="lPerKg" system={system} optional disabled={disabled} hint="Blank: the equipment's" />)}
       </div>
       {steps.fields.map((f, i) => {
         const p = `content.mash.steps.${i}` as const;
