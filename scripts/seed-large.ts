@@ -116,7 +116,7 @@ export async function seedLarge(ownerUrl: string, size = { batches: 3000, readin
         batchRows.push([
           id, brewery.id, `${year}-${String(sequence).padStart(3, '0')}`, year, sequence, plan.recipeName, recipes[ri]!.recipeId,
           recipes[ri]!.versionId, JSON.stringify(plan), plan.equipment.batchVolumeL, plan.computed.og, brewAt.toISOString().slice(0, 10),
-          status, dumped ? 'Infected: sour off-flavour at day 6' : null, head.id, brewAt, brewAt,
+          status, dumped ? 'Infected: sour off-flavour at day 6' : null, dumped ? brewAt : null, head.id, brewAt, brewAt,
         ]);
         // The log: brew-day entries (one of them knockout, with OG and volume), then readings, then packaging.
         let prevHash = GENESIS_HASH;
@@ -173,7 +173,7 @@ export async function seedLarge(ownerUrl: string, size = { batches: 3000, readin
       await conn.beginTransaction();
       await conn.batch(
         `INSERT INTO batches (id, brewery_id, number, year, sequence, beer_name, recipe_id, recipe_version_id, plan, planned_volume_l,
-           planned_og, brew_date, status, dumped_reason, created_by_id, created_at, updated_at) VALUES (?,?,?,?,?,?,?,?,?,?,?,?,?,?,?,?,?)`,
+           planned_og, brew_date, status, dumped_reason, dumped_at, created_by_id, created_at, updated_at) VALUES (?,?,?,?,?,?,?,?,?,?,?,?,?,?,?,?,?,?)`,
         batchRows,
       );
       await conn.batch(

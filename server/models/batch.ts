@@ -21,6 +21,8 @@ export class Batch extends Model<InferAttributes<Batch>, InferCreationAttributes
   declare brewDate: string;
   declare status: BatchStatus;
   declare dumpedReason: string | null;
+  /** When it was dumped: the month the production report files the loss in. */
+  declare dumpedAt: Date | null;
   declare createdById: number;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -46,6 +48,7 @@ Batch.init(
       allowNull: false,
     },
     dumpedReason: { type: DataTypes.STRING(500), allowNull: true },
+    dumpedAt: { type: DataTypes.DATE(3), allowNull: true },
     createdById: { type: DataTypes.INTEGER, allowNull: false },
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,

@@ -88,6 +88,7 @@ export async function createBatchFromPlan(
       brewDate: input.brewDate,
       status: 'planned',
       dumpedReason: null,
+      dumpedAt: null,
       createdById: actor.id,
     },
     { transaction },
@@ -266,6 +267,7 @@ export async function batchDetail(breweryId: number, id: number): Promise<BatchD
   return {
     ...summary(batch, vessel ?? undefined, actuals.og.actual),
     dumpedReason: batch.dumpedReason,
+    dumpedAt: batch.dumpedAt ? new Date(batch.dumpedAt).toISOString() : null,
     recipeVersionId: batch.recipeVersionId,
     plan: batch.plan,
     entries,
@@ -287,7 +289,8 @@ export async function changeBatchStatus(actor: Actor, batchId: number, input: Ch
     }
     const from = batch.status;
     if (input.status === 'dumped') await releaseVessel(actor.breweryId, batchId, t);
-    await batch.update({ status: input.status, dumpedReason: input.status === 'dumped' ? input.reason! : null }, { transaction: t });
+    const dumped = input.status === 'dumped';
+    await batch.update({ status: input.status, dumpedReason: dumped ? input.reason! : null, dumpedAt: dumped ? new Date() : null }, { transaction: t });
     await audit(actor, 'batch.status', { batchId, from, to: input.status }, t);
     return batch;
   };

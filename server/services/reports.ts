@@ -55,14 +55,14 @@ export const PRODUCTION_SQL = `
     FROM batch_log_entries k JOIN batches b ON b.id = k.batch_id
    WHERE k.brewery_id = :breweryId AND k.step_key = 'knockout-end' AND k.captured_at >= :from AND k.captured_at < :to
   UNION ALL
-  SELECT IF(b.status = 'dumped' AND b.updated_at < :to, 'dumped', 'in_tank'), b.id, b.beer_name, k.id, k.captured_at < :to, ${KNOCKOUT_LITRES},
+  SELECT IF(b.status = 'dumped' AND b.dumped_at < :to, 'dumped', 'in_tank'), b.id, b.beer_name, k.id, k.captured_at < :to, ${KNOCKOUT_LITRES},
          NULL, ${PACKAGED_BEFORE}
     FROM batches b LEFT JOIN batch_log_entries k ON k.batch_id = b.id AND k.step_key = 'knockout-end'
-   WHERE b.brewery_id = :breweryId AND (b.status IN ('brewing', 'fermenting', 'conditioning') OR (b.status = 'dumped' AND b.updated_at >= :from))
+   WHERE b.brewery_id = :breweryId AND (b.status IN ('brewing', 'fermenting', 'conditioning') OR (b.status = 'dumped' AND b.dumped_at >= :from))
   UNION ALL
   SELECT 'in_tank', b.id, b.beer_name, k.id, 1, ${KNOCKOUT_LITRES}, NULL, ${PACKAGED_BEFORE}
     FROM packaging_runs fp
-    JOIN batches b ON b.id = fp.batch_id AND NOT (b.status = 'dumped' AND b.updated_at >= :to)
+    JOIN batches b ON b.id = fp.batch_id AND NOT (b.status = 'dumped' AND b.dumped_at >= :to)
     JOIN batch_log_entries fe ON fe.id = fp.log_entry_id AND JSON_VALUE(fe.data, '$.final') IN ('1', 'true')
     JOIN batch_log_entries k ON k.batch_id = b.id AND k.step_key = 'knockout-end' AND k.captured_at < :to
    WHERE fp.brewery_id = :breweryId AND fp.packaged_at >= :to

@@ -113,6 +113,8 @@ export interface BatchActuals {
 
 export interface BatchDetail extends BatchSummary {
   dumpedReason: string | null;
+  /** ISO time the batch was dumped. */
+  dumpedAt: string | null;
   recipeVersionId: number | null;
   plan: FrozenPlan;
   entries: LogEntry[];

@@ -7,6 +7,7 @@ import { monthStartUtc } from '../../server/services/reports';
 import type { BatchHistory, ProductionReport } from '../../shared/schemas/reports';
 import { createTestBrewery, type TestBrewery } from './helpers';
 import { writeHeaders } from './batch-fixtures';
+import { sequelize } from '../../server/config/database';
 
 let t: TestBrewery;
 let other: TestBrewery;
@@ -87,6 +88,15 @@ describe('monthly production', () => {
       { beerName: 'Report Amber', kind: 'can', size: '473', count: 24, volumeL: expect.closeTo(24 * 0.473, 9) },
       { beerName: 'Report Amber', kind: 'keg', size: 'keg_20l', count: 1, volumeL: 20 },
     ]);
+  });
+
+  it('files a dump in the month it happened, whatever later changes the batch row', async () => {
+    await sequelize.query('UPDATE batches SET updated_at = DATE_ADD(UTC_TIMESTAMP(), INTERVAL 62 DAY) WHERE id = ?', { replacements: [dumpedId] });
+    const res = await t.as.head_brewer.get(`/api/reports/production?month=${month}`);
+    ok(res);
+    expect((res.body as ProductionReport).beers[0]!.dumpedL).toBeCloseTo(35, 9);
+    const detail = await t.as.head_brewer.get(`/api/batches/${dumpedId}`);
+    expect(detail.body.dumpedAt.slice(0, 7)).toBe(month);
   });
 
   it('counts nothing in a month before anything was brewed', async () => {

@@ -86,6 +86,11 @@ export function BrewDayPage() {
             {BATCH_STATUS_LABELS[b.status]} · brew date {b.brewDate}
             {b.vessel && ` · ${b.vessel.name}`}
           </p>
+          {b.dumpedAt && (
+            <p className="text-lg font-semibold text-ember-700">
+              Dumped {showTime(b.dumpedAt, timeZone, true)}: {b.dumpedReason}
+            </p>
+          )}
         </div>
         <div className="flex items-center gap-2">
           <span className={cx('rounded-full px-3 py-1 font-semibold', online ? 'bg-cellar-100 text-cellar-800' : 'bg-brass-400 text-ink-900')} role="status">
