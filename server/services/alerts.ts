@@ -1,7 +1,7 @@
 /**
  * Cellar alerts for the head brewer: the D-rest trigger crossed, gravity not moving across three
- * readings, no reading for the plan's interval. Each is raised once per batch and kind (a unique
- * index), shown in the app and e-mailed to every head brewer of the brewery.
+ * readings, no reading for the plan's interval. The first two are raised once per batch, "no reading" once per
+ * lapse (a unique index on batch, kind and occasion), shown in the app and e-mailed to every head brewer.
  */
 import { Op, UniqueConstraintError } from 'sequelize';
 import { Alert, Batch, BatchLogEntry, GravityReading, IN_FORCE, User } from '../models';
@@ -13,19 +13,20 @@ import type { AlertKind, AlertView } from '../../shared/schemas/cellar';
 
 const sg3 = (sg: number) => sg.toFixed(3);
 
-/** Raises an alert unless this batch already has one of this kind; e-mails it when new. */
-async function raise(batch: Batch, kind: AlertKind, message: string): Promise<void> {
+/** Raises an alert unless this batch already has one of this kind for this occasion; e-mails it when new. */
+async function raise(batch: Batch, kind: AlertKind, message: string, occasion = ''): Promise<boolean> {
   let alert: Alert;
   try {
-    alert = await Alert.create({ breweryId: batch.breweryId, batchId: batch.id, kind, message, emailedAt: null, readAt: null });
+    alert = await Alert.create({ breweryId: batch.breweryId, batchId: batch.id, kind, occasion, message, emailedAt: null, readAt: null });
   } catch (error) {
-    if (error instanceof UniqueConstraintError) return; // already raised: sent once only
+    if (error instanceof UniqueConstraintError) return false; // already raised: sent once only
     throw error;
   }
   await emailAlert(alert, batch).catch((err: unknown) => {
     // The reading is saved and the alert shows in the app; the sweep sends the e-mail later.
     console.error(`alert ${alert.id} e-mail failed`, err);
   });
+  return true;
 }
 
 /** E-mails every head brewer of the brewery, then marks the alert sent. */
@@ -76,9 +77,8 @@ export async function sweepOverdueReadings(now = new Date()): Promise<number> {
     const last = await GravityReading.findOne({ where: { batchId: batch.id, [Op.and]: [IN_FORCE] }, order: [['takenAt', 'DESC']] });
     const since = last ? new Date(last.takenAt) : batch.updatedAt;
     if (readingOverdue(since.getTime(), now.getTime(), plan.readingIntervalHours)) {
-      const before = await Alert.count({ where: { batchId: batch.id, kind: 'overdue' } });
-      await raise(batch, 'overdue', `No gravity reading for over ${plan.readingIntervalHours} hours`);
-      raised += before === 0 ? 1 : 0;
+      // Once per lapse: the next reading starts a new one.
+      if (await raise(batch, 'overdue', `No gravity reading for over ${plan.readingIntervalHours} hours`, since.toISOString())) raised += 1;
     }
   }
   return raised;

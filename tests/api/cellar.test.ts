@@ -344,4 +344,19 @@ describe('alerts', () => {
     await expect.poll(() => mailFor().length).toBe(1);
     expect((await Batch.findByPk(batch.id))!.status).toBe('fermenting');
   });
+
+  it('raises "no reading" again for a new lapse after the next reading, once', async () => {
+    const batch = await knockedOutBatch();
+    const hour = 3_600_000;
+    const overdue = () => Alert.count({ where: { batchId: batch.id, kind: 'overdue' } });
+    await postReading(batch.id, reading(1.05), new Date(Date.now() - 60 * hour));
+    expect(await sweepOverdueReadings()).toBeGreaterThanOrEqual(1); // 60 h since the reading, interval 24 h
+    expect(await overdue()).toBe(1);
+    await postReading(batch.id, reading(1.04), new Date(Date.now() - hour));
+    await sweepOverdueReadings();
+    expect(await overdue()).toBe(1);
+    await sweepOverdueReadings(new Date(Date.now() + 30 * hour));
+    await sweepOverdueReadings(new Date(Date.now() + 40 * hour));
+    expect(await overdue()).toBe(2);
+  });
 });
