@@ -3,7 +3,8 @@
 import { randomBytes } from 'node:crypto';
 import { env } from '../server/config/env';
 import { sequelize } from '../server/config/database';
-import { Brewery, User } from '../server/models';
+import { User } from '../server/models';
+import { createBrewery } from '../server/services/auth';
 import { hashPassword } from '../server/services/passwords';
 import { createBatchFromPlan } from '../server/services/batches';
 import { computeRecipe } from '../shared/brewing';
@@ -16,7 +17,7 @@ async function seed(batches: number) {
   const passwordHash = await hashPassword(password);
   const tag = randomBytes(4).toString('hex');
   return sequelize.transaction(async (transaction) => {
-    const brewery = await Brewery.create({ name: `Fault brewery ${tag}`, unitSystem: 'us', timeZone: 'UTC' }, { transaction });
+    const brewery = await createBrewery({ name: `Fault brewery ${tag}`, unitSystem: 'us', timeZone: 'UTC' }, transaction);
     const emails = {} as Record<Role, string>;
     const ids = {} as Record<Role, number>;
     for (const role of ['head_brewer', 'assistant_brewer', 'taproom_manager'] as Role[]) {

@@ -49,7 +49,8 @@ export async function findLargeSeed(): Promise<LargeSeed | null> {
 /** Seeds the large brewery into the database DATABASE_URL points at (owner URL for the bulk inserts). */
 export async function seedLarge(ownerUrl: string, size = { batches: 3000, readingsPerBatch: 100, brewDayEntriesPerBatch: 33 }): Promise<LargeSeed> {
   const started = Date.now();
-  const { Brewery, User } = await import('../server/models');
+  const { User } = await import('../server/models');
+  const { createBrewery } = await import('../server/services/auth');
   const { hashPassword } = await import('../server/services/passwords');
   const { createEquipment } = await import('../server/services/equipment');
   const { createRecipe } = await import('../server/services/recipes');
@@ -62,7 +63,7 @@ export async function seedLarge(ownerUrl: string, size = { batches: 3000, readin
   if (existing) throw new Error(`The large brewery is already seeded (brewery ${existing.breweryId}).`);
 
   const passwordHash = await hashPassword(LARGE_PASSWORD);
-  const brewery = await Brewery.create({ name: 'Saltmarsh Brewing (ten-year sample)', unitSystem: 'us', timeZone: 'America/Halifax' });
+  const brewery = await createBrewery({ name: 'Saltmarsh Brewing (ten-year sample)', unitSystem: 'us', timeZone: 'America/Halifax' });
   const users: Record<string, InstanceType<typeof User>> = {};
   for (const [role, p] of Object.entries(LARGE_PEOPLE)) {
     users[role] = await User.create({ breweryId: brewery.id, ...p, role: role as 'head_brewer', passwordHash, disabledAt: null });

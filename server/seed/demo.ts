@@ -1,6 +1,7 @@
 // The demo brewery: an invented harbour-town brewpub. Every name and number here is made up.
 import { sequelize } from '../config/database';
-import { Brewery, User } from '../models';
+import { User, type Brewery } from '../models';
+import { createBrewery } from '../services/auth';
 import { hashPassword } from '../services/passwords';
 import type { Role } from '../../shared/schemas/roles';
 import type { Transaction } from 'sequelize';
@@ -31,10 +32,7 @@ export async function seedDemo(): Promise<boolean> {
   if (await User.findOne({ where: { email: DEMO_PEOPLE[0]!.email } })) return false;
   const passwordHash = await hashPassword(DEMO_PASSWORD);
   await sequelize.transaction(async (transaction) => {
-    const brewery = await Brewery.create(
-      { name: 'Tidewrack Brewing Co.', unitSystem: 'us', timeZone: 'America/Halifax' },
-      { transaction },
-    );
+    const brewery = await createBrewery({ name: 'Tidewrack Brewing Co.', unitSystem: 'us', timeZone: 'America/Halifax' }, transaction);
     const users = {} as Record<Role, User>;
     for (const person of DEMO_PEOPLE) {
       users[person.role] = await User.create(

@@ -1,13 +1,11 @@
-// Seeds the demo brewery's equipment, ingredient library and recipes (data in recipe-data.ts).
+// Seeds the demo brewery's equipment and recipes (data in recipe-data.ts); its ingredient library comes with the brewery.
 import { computeRecipe } from '../../shared/brewing';
 import { equipmentAtVolume, toRecipeInput, type EquipmentInput } from '../../shared/schemas/recipes';
 import { EquipmentProfile, Recipe, RecipeVersion } from '../models';
-import { seedStarterIngredients } from '../services/ingredients';
 import type { DemoContext } from './demo';
 import { DEMO_EQUIPMENT, DEMO_RECIPES } from './recipe-data';
 
 export async function seedRecipes({ brewery, users, transaction }: DemoContext): Promise<void> {
-  await seedStarterIngredients(brewery.id, transaction);
   const equipment = {} as Record<keyof typeof DEMO_EQUIPMENT, EquipmentProfile>;
   for (const [key, profile] of Object.entries(DEMO_EQUIPMENT) as [keyof typeof DEMO_EQUIPMENT, EquipmentInput][]) {
     equipment[key] = await EquipmentProfile.create({ breweryId: brewery.id, ...profile }, { transaction });

@@ -1,9 +1,10 @@
-import { Op, QueryTypes } from 'sequelize';
+import { Op, QueryTypes, type Transaction } from 'sequelize';
 import { sequelize } from '../config/database';
 import { Brewery, Invite, Session, User } from '../models';
 import { badRequest, conflict, notFound, unauthenticated, wrongPassword } from '../errors';
 import { assertStrongPassword, checkPassword, hashPassword, standInHash } from './passwords';
 import { hashToken, newToken } from './tokens';
+import { addStarterIngredients } from './ingredients';
 import type { Logger } from 'pino';
 import { publicLink, sendMail, sendMailInBackground } from './mail';
 import type {
@@ -72,6 +73,13 @@ export function me(user: Express.User): Me {
   return { id: user.id, email: user.email, displayName: user.displayName, role: user.role, brewery: user.brewery };
 }
 
+/** A new brewery, with the starter ingredient library every brewery begins with. */
+export async function createBrewery(fields: { name: string; unitSystem: Brewery['unitSystem']; timeZone: string }, transaction?: Transaction): Promise<Brewery> {
+  const brewery = await Brewery.create(fields, { transaction });
+  await addStarterIngredients(brewery.id, transaction);
+  return brewery;
+}
+
 /** Sign-up creates a brewery and its head brewer. */
 export async function signUp(input: SignUpInput): Promise<User> {
   assertStrongPassword(input.password, [input.email, input.displayName, input.breweryName]);
@@ -80,10 +88,7 @@ export async function signUp(input: SignUpInput): Promise<User> {
   }
   const passwordHash = await hashPassword(input.password);
   return sequelize.transaction(async (transaction) => {
-    const brewery = await Brewery.create(
-      { name: input.breweryName, unitSystem: input.unitSystem, timeZone: input.timeZone },
-      { transaction },
-    );
+    const brewery = await createBrewery({ name: input.breweryName, unitSystem: input.unitSystem, timeZone: input.timeZone }, transaction);
     return User.create(
       { breweryId: brewery.id, email: input.email, displayName: input.displayName, role: 'head_brewer', passwordHash, disabledAt: null },
       { transaction },

@@ -3,7 +3,8 @@ import { randomBytes } from 'node:crypto';
 import type { Express } from 'express';
 import type { MailCatcher } from '../../server/dev/mail-catcher';
 import { createApp } from '../../server/app';
-import { Brewery, User } from '../../server/models';
+import { User, type Brewery } from '../../server/models';
+import { createBrewery } from '../../server/services/auth';
 import { hashPassword } from '../../server/services/passwords';
 import type { Role } from '../../shared/schemas/roles';
 
@@ -47,7 +48,7 @@ export interface TestBrewery {
 export async function createTestBrewery(target: Express = testApp()): Promise<TestBrewery> {
   cachedHash ??= await hashPassword(GOOD_PASSWORD);
   const t = tag();
-  const brewery = await Brewery.create({ name: `Test brewery ${t}`, unitSystem: 'us', timeZone: 'UTC' });
+  const brewery = await createBrewery({ name: `Test brewery ${t}`, unitSystem: 'us', timeZone: 'UTC' });
   const users = {} as Record<Role, User>;
   const as = {} as Record<Role, Agent>;
   for (const role of ['head_brewer', 'assistant_brewer', 'taproom_manager'] as Role[]) {

@@ -5,6 +5,10 @@ import { equipmentAtVolume, toRecipeInput, type RecipeVersionContent } from '../
 import { DEMO_EQUIPMENT, SEASONAL_CONTENT } from '../../server/seed/recipe-data';
 import { freezeRecipeVersion, planForBatch } from '../../server/services/recipe-plans';
 import { createTestBrewery, type TestBrewery } from './helpers';
+import { sequelize } from '../../server/config/database';
+import { Brewery, Ingredient } from '../../server/models';
+import { up as addStarterLibraries } from '../../server/migrations/0953-starter-ingredients';
+import { STARTER_INGREDIENTS } from '../../server/services/starter-ingredients';
 
 let t: TestBrewery;
 let other: TestBrewery;
@@ -261,5 +265,14 @@ describe('recipes API', () => {
     expect(mine.body.typical).toBe(false);
     expect((await other.as.head_brewer.get('/api/ingredients?kind=hop')).body.map((i: { name: string }) => i.name)).not.toContain('Harbour wild hop');
     expect((await other.as.head_brewer.put(`/api/ingredients/${mine.body.id}`).send({ kind: 'hop', name: 'Stolen', notes: '' })).status).toBe(404);
+  });
+
+  it('gives a brewery whose library was never opened the starter entries on upgrade, once', async () => {
+    const before = await Brewery.create({ name: 'Made before libraries came with breweries', unitSystem: 'metric', timeZone: 'UTC' });
+    const upgrade = () => addStarterLibraries({ context: sequelize.getQueryInterface() } as never);
+    await upgrade();
+    await upgrade();
+    expect(await Ingredient.count({ where: { breweryId: before.id } })).toBe(STARTER_INGREDIENTS.length);
+    expect(await Ingredient.count({ where: { breweryId: t.brewery.id, typical: true } })).toBe(STARTER_INGREDIENTS.length);
   });
 });

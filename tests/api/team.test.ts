@@ -1,7 +1,8 @@
 // Foundation: the team — invites by e-mail, role and access changes, and one brewery never reaching another's people.
 import { randomBytes } from 'node:crypto';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { AuditEvent, Brewery, Invite, Session, User } from '../../server/models';
+import { AuditEvent, Invite, Session, User, type Brewery } from '../../server/models';
+import { createBrewery } from '../../server/services/auth';
 import { hashToken } from '../../server/services/tokens';
 import { GOOD_PASSWORD, agent, createTestBrewery, mailCatcher, type TestBrewery } from './helpers';
 
@@ -29,7 +30,7 @@ let other: { brewery: Brewery; user: User };
 beforeAll(async () => {
   a = await createTestBrewery();
   // Brewery B needs a person, not a session: created directly.
-  const brewery = await Brewery.create({ name: `Other brewery ${tag()}`, unitSystem: 'metric', timeZone: 'Europe/Berlin' });
+  const brewery = await createBrewery({ name: `Other brewery ${tag()}`, unitSystem: 'metric', timeZone: 'Europe/Berlin' });
   const user = await User.create({
     breweryId: brewery.id,
     email: `other.${tag()}@test.example`,
