@@ -1,6 +1,7 @@
 /**
  * The batch log: signed, append-only entries chained by SHA-256 per batch. Every write goes through
- * appendLogEntry, which does idempotency, the hash chain, authorship, lateness and the audit row in one transaction
+ * appendLogEntry (or, for a probe file's many readings, appendLogEntries), which does idempotency, the hash chain,
+ * authorship, lateness and the audit row in one transaction
  * (the table's insert trigger writes the idempotency record and the audit row with the entry, see migration 0901).
  */
 import { createHash } from 'node:crypto';
@@ -163,36 +164,34 @@ async function lockForAppend(breweryId: number, batchId: number, key: string, co
   return state;
 }
 
-const INSERT_ENTRY = `INSERT INTO batch_log_entries
-  (brewery_id, batch_id, sequence, kind, step_key, data, corrects_entry_id, reason, author_id, author_role, author_name, meaning,
-   captured_at, received_at, device_id, late, idempotency_key, request_hash, prev_hash, hash)
-  VALUES (:breweryId, :batchId, :sequence, :kind, :stepKey, :data, :correctsEntryId, :reason, :authorId, :authorRole, :authorName, :meaning,
-   :capturedAt, :receivedAt, :deviceId, :late, :idempotencyKey, :requestHash, :prevHash, :hash)`;
+type EntryFields = ReturnType<typeof entryFields>;
+/** An entry as inserted: its fields, the hash of the request that wrote it, and its place in the chain. */
+type EntryRow = EntryFields & { requestHash: string; prevHash: string; hash: string };
 
-async function append(actor: LogActor, batchId: number, input: NewLogEntry, meta: WriteMeta, options: AppendOptions, transaction: Transaction): Promise<BatchLogEntry> {
+const INSERT_FIELDS = [
+  'breweryId', 'batchId', 'sequence', 'kind', 'stepKey', 'data', 'correctsEntryId', 'reason', 'authorId', 'authorRole', 'authorName',
+  'meaning', 'capturedAt', 'receivedAt', 'deviceId', 'late', 'idempotencyKey', 'requestHash', 'prevHash', 'hash',
+] as const;
+/** INSERT of `rows` entries; the table's trigger writes each one's idempotency record and audit row with it. */
+const insertSql = (rows: number) =>
+  `INSERT INTO batch_log_entries (${INSERT_FIELDS.map((f) => f.replace(/[A-Z]/g, (c) => `_${c.toLowerCase()}`)).join(', ')}) VALUES ${Array(rows)
+    .fill(`(${INSERT_FIELDS.map(() => '?').join(', ')})`)
+    .join(', ')}`;
+const INSERT_ONE = insertSql(1);
+const insertValues = (row: EntryRow) => INSERT_FIELDS.map((f) => (f === 'data' ? JSON.stringify(row.data) : row[f]));
+/** Rows per INSERT in a bulk append: well inside max_allowed_packet for readings' small data. */
+const INSERT_CHUNK = 500;
+
+/** An entry's columns as the next entry of its batch's chain (before its hash). */
+function entryFields(actor: LogActor, batchId: number, input: NewLogEntry, meta: WriteMeta, sequence: number, receivedAt: Date) {
   const { kind, stepKey = null, correctsEntryId = null, reason = null, meaning = 'performed', ...data } = input;
-  const state = await lockForAppend(actor.breweryId, batchId, meta.idempotencyKey, correctsEntryId, BREW_DAY_KINDS.includes(kind), transaction);
-  if (!state) throw notFound('This batch');
-  const hashOfRequest = requestHash(batchId, input, meta);
-  if (state.keyResultId !== null) {
-    return replayOf({ scope: state.keyScope!, requestHash: state.keyRequestHash!, resultId: Number(state.keyResultId) }, hashOfRequest, transaction);
-  }
-
-  const receivedAt = new Date();
   if (meta.capturedAt.getTime() > receivedAt.getTime() + CLOCK_SKEW_MS) {
     throw unprocessable('The captured time is in the future: check the tablet’s clock. Nothing was saved.');
   }
-  if (Number(state.signed)) throw conflict('The brew day is signed off: add a correction instead.');
-  if (correctsEntryId !== null) {
-    if (state.targetKind === null) throw unprocessable('The entry to correct is not in this batch’s log.');
-    if (state.targetKind === 'sign_off') throw unprocessable('A signature cannot be corrected.');
-  }
-
-  const prevHash = state.lastHash ?? GENESIS_HASH;
-  const fields = {
+  return {
     breweryId: actor.breweryId,
     batchId,
-    sequence: Number(state.lastSequence ?? 0) + 1,
+    sequence,
     kind,
     stepKey,
     data,
@@ -208,14 +207,29 @@ async function append(actor: LogActor, batchId: number, input: NewLogEntry, meta
     late: receivedAt.getTime() - meta.capturedAt.getTime() > LATE_AFTER_MS,
     idempotencyKey: meta.idempotencyKey,
   };
-  const hash = entryHash(prevHash, fields);
+}
+
+async function append(actor: LogActor, batchId: number, input: NewLogEntry, meta: WriteMeta, options: AppendOptions, transaction: Transaction): Promise<BatchLogEntry> {
+  const { kind, correctsEntryId = null } = input;
+  const state = await lockForAppend(actor.breweryId, batchId, meta.idempotencyKey, correctsEntryId, BREW_DAY_KINDS.includes(kind), transaction);
+  if (!state) throw notFound('This batch');
+  const hashOfRequest = requestHash(batchId, input, meta);
+  if (state.keyResultId !== null) {
+    return replayOf({ scope: state.keyScope!, requestHash: state.keyRequestHash!, resultId: Number(state.keyResultId) }, hashOfRequest, transaction);
+  }
+
+  const fields = entryFields(actor, batchId, input, meta, Number(state.lastSequence ?? 0) + 1, new Date());
+  if (Number(state.signed)) throw conflict('The brew day is signed off: add a correction instead.');
+  if (correctsEntryId !== null) {
+    if (state.targetKind === null) throw unprocessable('The entry to correct is not in this batch’s log.');
+    if (state.targetKind === 'sign_off') throw unprocessable('A signature cannot be corrected.');
+  }
+
+  const prevHash = state.lastHash ?? GENESIS_HASH;
+  const row = { ...fields, requestHash: hashOfRequest, prevHash, hash: entryHash(prevHash, fields) };
   // One statement: the table's trigger writes the idempotency record and the audit row with the entry.
-  const [id] = await sequelize.query(INSERT_ENTRY, {
-    type: QueryTypes.INSERT,
-    replacements: { ...fields, data: JSON.stringify(data), requestHash: hashOfRequest, prevHash, hash },
-    transaction,
-  });
-  const entry = BatchLogEntry.build({ id: Number(id), ...fields, requestHash: hashOfRequest, prevHash, hash }, { isNewRecord: false });
+  const [id] = await sequelize.query(INSERT_ONE, { type: QueryTypes.INSERT, replacements: insertValues(row), transaction });
+  const entry = BatchLogEntry.build({ id: Number(id), ...row }, { isNewRecord: false });
   // The first brew-day step starts the brew.
   if (kind === 'step' && state.status === 'planned') await Batch.update({ status: 'brewing' }, { where: { id: batchId }, transaction });
   await options.onInsert?.(entry, transaction);
@@ -239,6 +253,51 @@ export async function appendLogEntry(actor: LogActor, batchId: number, input: Ne
     }
     throw error;
   }
+}
+
+/**
+ * Appends many cellar entries (no brew-day kinds, no corrections) to one batch's log in order, inside the caller's
+ * READ COMMITTED transaction: one lock, one read of their idempotency records, then inserts of up to 500 rows.
+ * A write whose key was used before for the same request is already in the log and is skipped; for a
+ * different request nothing is saved (422). Returns the entries written now.
+ */
+export async function appendLogEntries(actor: LogActor, batchId: number, writes: { input: NewLogEntry; meta: WriteMeta }[], transaction: Transaction): Promise<BatchLogEntry[]> {
+  if (writes.some((w) => BREW_DAY_KINDS.includes(w.input.kind) || w.input.correctsEntryId != null)) {
+    throw new Error('appendLogEntries takes cellar entries only: brew-day entries and corrections go through appendLogEntry');
+  }
+  const state = await lockForAppend(actor.breweryId, batchId, '', null, false, transaction);
+  if (!state) throw notFound('This batch');
+  const used = new Map(
+    (await IdempotencyKey.findAll({ where: { breweryId: actor.breweryId, key: writes.map((w) => w.meta.idempotencyKey) }, transaction })).map((k) => [k.key, k]),
+  );
+  const receivedAt = new Date();
+  let sequence = Number(state.lastSequence ?? 0);
+  let prevHash = state.lastHash ?? GENESIS_HASH;
+  const rows: EntryRow[] = [];
+  for (const { input, meta } of writes) {
+    const requestHashOf = requestHash(batchId, input, meta);
+    const before = used.get(meta.idempotencyKey);
+    if (before) {
+      if (before.scope !== 'batch-log' || before.requestHash !== requestHashOf) {
+        throw unprocessable('This idempotency key was already used for a different request. Nothing was saved.');
+      }
+      continue;
+    }
+    const fields = entryFields(actor, batchId, input, meta, (sequence += 1), receivedAt);
+    const hash = entryHash(prevHash, fields);
+    rows.push({ ...fields, requestHash: requestHashOf, prevHash, hash });
+    prevHash = hash;
+  }
+  for (let i = 0; i < rows.length; i += INSERT_CHUNK) {
+    const chunk = rows.slice(i, i + INSERT_CHUNK);
+    await sequelize.query(insertSql(chunk.length), { type: QueryTypes.INSERT, replacements: chunk.flatMap(insertValues), transaction });
+  }
+  if (rows.length === 0) return [];
+  const ids = await sequelize.query<{ id: number; sequence: number }>(
+    'SELECT id, sequence FROM batch_log_entries WHERE batch_id = ? AND sequence BETWEEN ? AND ? ORDER BY sequence',
+    { type: QueryTypes.SELECT, replacements: [batchId, rows[0]!.sequence, rows[rows.length - 1]!.sequence], transaction },
+  );
+  return rows.map((row, i) => BatchLogEntry.build({ id: Number(ids[i]!.id), ...row }, { isNewRecord: false }));
 }
 
 /** Recomputes a batch's chain and names the first entry whose hash does not match. */

@@ -8,7 +8,7 @@ import { Op, Transaction } from 'sequelize';
 import { sequelize } from '../config/database';
 import { Batch, BatchLogEntry, GravityReading, IN_FORCE } from '../models';
 import { badRequest, conflict } from '../errors';
-import { appendLogEntry, type LogActor } from './batch-log';
+import { appendLogEntries, appendLogEntry, type LogActor } from './batch-log';
 import type { LogEntryInput, Measurements } from '../../shared/schemas/batch-log';
 import { changeBatchStatus, findBatch } from './batches';
 import { parseProbeCsv, MAX_IMPORT_ROWS } from './probe-csv';
@@ -61,6 +61,25 @@ async function readyForReadings(actor: LogActor, batchId: number, transaction: T
   if (batch.status === 'brewing') await changeBatchStatus(actor, batchId, { status: 'fermenting' }, transaction);
 }
 
+/** A reading's projected row, from its log entry (which holds the values in SI) and what was entered. */
+function readingRow(actor: LogActor, batchId: number, entry: BatchLogEntry, input: ReadingEntryInput) {
+  const { sg, tempC } = entry.data as { sg: number; tempC: number | null };
+  return {
+    breweryId: actor.breweryId,
+    batchId,
+    logEntryId: Number(entry.id),
+    readingEntryId: Number(entry.id),
+    takenAt: entry.capturedAt,
+    sg,
+    enteredValue: input.gravity,
+    enteredUnit: input.gravityUnit,
+    tempC,
+    ph: input.ph ?? null,
+    method: input.method,
+    authorName: actor.displayName,
+  };
+}
+
 /** Writes one reading's log entry and projection (inside `transaction` when given); alerts are the caller's to check. */
 export async function writeReading(
   actor: LogActor,
@@ -75,23 +94,7 @@ export async function writeReading(
     transaction,
     onInsert: async (e, t) => {
       await readyForReadings(actor, batchId, t);
-      reading = await GravityReading.create(
-        {
-          breweryId: actor.breweryId,
-          batchId,
-          logEntryId: Number(e.id),
-          readingEntryId: Number(e.id),
-          takenAt: meta.capturedAt,
-          sg,
-          enteredValue: input.gravity,
-          enteredUnit: input.gravityUnit,
-          tempC,
-          ph: input.ph ?? null,
-          method: input.method,
-          authorName: actor.displayName,
-        },
-        { transaction: t },
-      );
+      reading = await GravityReading.create(readingRow(actor, batchId, e, input), { transaction: t });
     },
   });
   // A replayed key returns the first entry, whose reading was written with it.
@@ -199,9 +202,9 @@ export async function importProbeCsv(actor: LogActor, batchId: number, input: Pr
     throw badRequest(`${result.errors} row${result.errors > 1 ? 's have' : ' has'} errors; nothing was imported. Fix the file and try again.`, fields);
   }
   if (result.toImport === 0) return { ...result, imported: true };
-  await sequelize.transaction({ isolationLevel: Transaction.ISOLATION_LEVELS.READ_COMMITTED }, async (transaction) => {
-    for (const row of rows) {
-      if (row.status !== 'ok') continue;
+  const readings = rows
+    .filter((row) => row.status === 'ok')
+    .map((row) => {
       const reading: ReadingEntryInput = {
         kind: 'reading',
         method: 'probe',
@@ -210,8 +213,18 @@ export async function importProbeCsv(actor: LogActor, batchId: number, input: Pr
         temp: Number(row.temp.replace(',', '.')),
         tempUnit: input.tempUnit,
       };
-      await writeReading(actor, batchId, reading, { ...meta, idempotencyKey: rowKey(meta.idempotencyKey, row.line), capturedAt: new Date(row.takenAt!) }, transaction);
-    }
+      return { reading, meta: { ...meta, idempotencyKey: rowKey(meta.idempotencyKey, row.line), capturedAt: new Date(row.takenAt!) } };
+    });
+  await sequelize.transaction({ isolationLevel: Transaction.ISOLATION_LEVELS.READ_COMMITTED }, async (transaction) => {
+    const writes = readings.map(({ reading, meta: m }) => ({ input: { ...reading, ...readingInSi(reading) }, meta: m }));
+    const entries = await appendLogEntries(actor, batchId, writes, transaction);
+    if (entries.length === 0) return;
+    await readyForReadings(actor, batchId, transaction);
+    const byKey = new Map(readings.map((r) => [r.meta.idempotencyKey, r.reading]));
+    await GravityReading.bulkCreate(
+      entries.map((e) => readingRow(actor, batchId, e, byKey.get(e.idempotencyKey)!)),
+      { transaction },
+    );
   });
   await evaluateReadingAlerts(actor.breweryId, batchId);
   return { ...result, imported: true };

@@ -2,7 +2,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { createTestBrewery, mailCatcher, type TestBrewery } from './helpers';
 import { plannedBatch, writeHeaders } from './batch-fixtures';
 import { changeBatchStatus } from '../../server/services/batches';
-import { Alert, Batch, BatchLogEntry, GravityReading } from '../../server/models';
+import { Alert, AuditEvent, Batch, BatchLogEntry, GravityReading, IdempotencyKey } from '../../server/models';
 import { sweepOverdueReadings } from '../../server/services/alerts';
 import { finalNumbers } from '../../server/services/release';
 import { headPressureKpa, KEG_SIZES, platoToSg, refractometerBeerSg, sgToPlato } from '../../shared/brewing';
@@ -187,6 +187,40 @@ describe('importing a logging probe file', () => {
     expect(second.status).toBe(201);
     expect(second.body).toMatchObject({ imported: true, toImport: 2, duplicates: 3, errors: 0 });
     expect(await GravityReading.count({ where: { batchId: batch.id } })).toBe(5);
+  });
+});
+
+describe('importing a long probe file', () => {
+  it('writes 1,200 readings as signed, chained entries with their records, and a second send of the file writes none', async () => {
+    const batch = await knockedOutBatch();
+    const start = Date.parse('2026-11-01T00:00:00Z');
+    const lines = ['time,gravity,temp'];
+    for (let i = 0; i < 1200; i++) lines.push(`${new Date(start + i * 15 * 60_000).toISOString().slice(0, 16).replace('T', ' ')},${(1.06 - i * 0.00004).toFixed(5)},19.5`);
+    const body = { delimiter: ',', gravityUnit: 'sg', tempUnit: 'c', timeZone: 'UTC', csv: lines.join('\n') };
+    const headers = writeHeaders();
+    const res = await t.as.assistant_brewer.post(`/api/cellar/batches/${batch.id}/readings/import`).set(headers).send(body);
+    expect(res.status).toBe(201);
+    expect(res.body).toMatchObject({ imported: true, toImport: 1200, duplicates: 0, errors: 0 });
+
+    const entries = await BatchLogEntry.findAll({ where: { batchId: batch.id, kind: 'reading' }, order: [['sequence', 'ASC']] });
+    expect(entries).toHaveLength(1200);
+    expect(entries.map((e) => Number(e.sequence))).toEqual(entries.map((_, i) => i + 1));
+    expect((await t.as.head_brewer.get(`/api/batches/${batch.id}/log/verify`)).body).toMatchObject({ ok: true, checked: 1200 });
+    const ids = entries.map((e) => e.id);
+    expect(await AuditEvent.count({ where: { action: 'batch-log.append', breweryId: t.brewery.id, userId: t.users.assistant_brewer.id, detail: { batchId: batch.id } } })).toBe(1200);
+    expect(await IdempotencyKey.count({ where: { resultId: ids } })).toBe(1200);
+    const view = await cellarView(batch.id);
+    expect(view.readings).toHaveLength(1200);
+    expect(view.readings[1199]).toMatchObject({ takenAt: new Date(start + 1199 * 15 * 60_000).toISOString(), sg: Number((1.06 - 1199 * 0.00004).toFixed(5)), tempC: 19.5, method: 'probe' });
+    expect(view.batch.status).toBe('fermenting');
+
+    const again = await t.as.assistant_brewer.post(`/api/cellar/batches/${batch.id}/readings/import`).set(headers).send(body);
+    expect(again.body).toMatchObject({ toImport: 0, duplicates: 1200 });
+    // The same key with rows at other times is a different request: nothing more is saved.
+    const shifted = lines.map((l, i) => (i === 0 ? l : l.replace('2026-11-', '2026-10-')));
+    const reused = await t.as.assistant_brewer.post(`/api/cellar/batches/${batch.id}/readings/import`).set(headers).send({ ...body, csv: shifted.join('\n') });
+    expect(reused.status).toBe(422);
+    expect(await BatchLogEntry.count({ where: { batchId: batch.id } })).toBe(1200);
   });
 });
 
