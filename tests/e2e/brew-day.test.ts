@@ -30,7 +30,7 @@ function outboxCapturedTimes(page: Page): Promise<string[]> {
 async function logStep(page: Page, step: string, values: Record<string, string>) {
   await page.getByRole('button', { name: new RegExp(`^\\d+\\.\\s*${step}`) }).click();
   await eventually(() => page.getByTestId('current-step').textContent()).toBe(step);
-  for (const [label, value] of Object.entries(values)) await page.getByLabel(new RegExp(`^${label} \\(`)).fill(value);
+  for (const [label, value] of Object.entries(values)) await page.getByLabel(new RegExp(`^${label}( \\(|$)`)).fill(value);
   await page.getByRole('button', { name: 'Done', exact: true }).click();
 }
 
