@@ -34,4 +34,14 @@ export const equipmentRouter = defineRouter('/api/equipment', [
       res.json(await equipment.updateEquipment(actor(req).breweryId, Number(req.params.equipmentId), req.body));
     },
   },
+  {
+    method: 'delete',
+    path: '/:equipmentId',
+    access: ['head_brewer'],
+    params,
+    handler: async (req, res) => {
+      await equipment.deleteEquipment(actor(req).breweryId, Number(req.params.equipmentId));
+      res.status(204).end();
+    },
+  },
 ]);

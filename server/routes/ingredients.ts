@@ -36,4 +36,14 @@ export const ingredientsRouter = defineRouter('/api/ingredients', [
       res.json(await ingredients.updateIngredient(actor(req).breweryId, Number(req.params.ingredientId), req.body));
     },
   },
+  {
+    method: 'delete',
+    path: '/:ingredientId',
+    access: ['head_brewer'],
+    params,
+    handler: async (req, res) => {
+      await ingredients.deleteIngredient(actor(req).breweryId, Number(req.params.ingredientId));
+      res.status(204).end();
+    },
+  },
 ]);

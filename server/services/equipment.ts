@@ -1,7 +1,8 @@
 /** Equipment profiles: a brewery's brewhouses, as shared/brewing sees them. */
 import { validateEquipment } from '../../shared/brewing';
 import type { EquipmentInput } from '../../shared/schemas/recipes';
-import { EquipmentProfile } from '../models';
+import { EquipmentProfile, RecipeVersion } from '../models';
+import { conflict } from '../errors';
 import { equipmentFromRow, findEquipment } from './recipe-plans';
 
 function json(row: EquipmentProfile) {
@@ -24,4 +25,14 @@ export async function updateEquipment(breweryId: number, id: number, input: Equi
   const row = await findEquipment(breweryId, id);
   await row.update(input);
   return json(row);
+}
+
+/** Removes a profile no recipe version was written for; one that was stays, as part of those versions' record (409). */
+export async function deleteEquipment(breweryId: number, id: number): Promise<void> {
+  const row = await findEquipment(breweryId, id);
+  const versions = await RecipeVersion.count({ where: { equipmentProfileId: id } });
+  if (versions > 0) {
+    throw conflict(`${row.name} is what ${versions === 1 ? 'a recipe version was' : `${versions} recipe versions were`} written for, so it stays. Rename it if it is no longer in use.`);
+  }
+  await row.destroy();
 }

@@ -64,3 +64,8 @@ export async function updateIngredient(breweryId: number, id: number, input: Ing
   await row.update({ ...columns(input), typical: false });
   return json(row);
 }
+
+/** Removes an entry from the library; recipes keep their own copy of what they use. */
+export async function deleteIngredient(breweryId: number, id: number): Promise<void> {
+  if ((await Ingredient.destroy({ where: { id, breweryId } })) === 0) throw notFound('This ingredient');
+}

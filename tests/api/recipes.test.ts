@@ -267,6 +267,21 @@ describe('recipes API', () => {
     expect((await other.as.head_brewer.put(`/api/ingredients/${mine.body.id}`).send({ kind: 'hop', name: 'Stolen', notes: '' })).status).toBe(404);
   });
 
+  it('removes an ingredient, and equipment no recipe version was written for; a profile in use stays (409)', async () => {
+    const added = await t.as.head_brewer.post('/api/ingredients').send({ kind: 'adjunct', name: 'Sea buckthorn', notes: 'Trial, not repeated' });
+    expect((await t.as.assistant_brewer.delete(`/api/ingredients/${added.body.id}`)).status).toBe(403);
+    expect((await t.as.head_brewer.delete(`/api/ingredients/${added.body.id}`)).status).toBe(204);
+    expect((await t.as.head_brewer.get('/api/ingredients')).body.map((i: { name: string }) => i.name)).not.toContain('Sea buckthorn');
+    expect((await t.as.head_brewer.delete(`/api/ingredients/${added.body.id}`)).status).toBe(404);
+
+    const spare = await t.as.head_brewer.post('/api/equipment').send({ ...DEMO_EQUIPMENT.pilot, name: 'Typo kit' });
+    expect((await t.as.head_brewer.delete(`/api/equipment/${spare.body.id}`)).status).toBe(204);
+    const inUse = await t.as.head_brewer.delete(`/api/equipment/${equipmentIds.pilot}`);
+    expect(inUse.status).toBe(409);
+    expect(inUse.body.error.message).toMatch(/recipe versions? (was|were) written for, so it stays/);
+    expect((await t.as.head_brewer.get('/api/equipment')).body.map((e: { id: number }) => e.id)).toContain(equipmentIds.pilot);
+  });
+
   it('gives a brewery whose library was never opened the starter entries on upgrade, once', async () => {
     const before = await Brewery.create({ name: 'Made before libraries came with breweries', unitSystem: 'metric', timeZone: 'UTC' });
     const upgrade = () => addStarterLibraries({ context: sequelize.getQueryInterface() } as never);

@@ -104,6 +104,25 @@ describe('scaling the seasonal and printing its brew sheet (Chromium)', () => {
     expect(text).not.toContain('Computed IBU');
   });
 
+  it('keeps an equipment profile recipes were written for, and removes a library entry', async () => {
+    await page.goto('/library');
+    await page.getByRole('row', { name: /Pilot kit 10 gal/ }).getByRole('button', { name: 'Edit' }).click();
+    const dialog = page.getByRole('dialog', { name: 'Edit equipment' });
+    await expect.poll(() => dialog.getByLabel('Mash thickness (qt/lb)').inputValue()).toMatch(/^\d\.\d+$/);
+    await dialog.getByRole('button', { name: 'Remove…' }).click();
+    await dialog.getByRole('button', { name: 'Remove Pilot kit 10 gal' }).click();
+    await expect.poll(() => dialog.getByRole('alert').textContent()).toMatch(/written for, so it stays/);
+    await screenshot(page, 'library-equipment-in-use-1024.png', { fullPage: false });
+    await dialog.getByRole('button', { name: 'Cancel' }).click();
+
+    const row = page.getByRole('row', { name: /Chocolate malt/ });
+    await row.getByRole('button', { name: 'Edit' }).click();
+    const ingredient = page.getByRole('dialog', { name: 'Edit ingredient' });
+    await ingredient.getByRole('button', { name: 'Remove…' }).click();
+    await ingredient.getByRole('button', { name: 'Remove Chocolate malt' }).click();
+    await expect.poll(() => row.count()).toBe(0);
+  });
+
   it('gives the taproom manager no recipe menu item', async () => {
     const taproom = await context.newPage();
     await context.clearCookies();

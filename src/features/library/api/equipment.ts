@@ -18,3 +18,12 @@ export function useSaveEquipment() {
     onSuccess: () => client.invalidateQueries({ queryKey: equipmentKeys.all }),
   });
 }
+
+/** Removes a profile; one a recipe version was written for answers 409 with the reason. */
+export function useRemoveEquipment() {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: (id: number) => api.delete(`/api/equipment/${id}`),
+    onSuccess: () => client.invalidateQueries({ queryKey: equipmentKeys.all }),
+  });
+}

@@ -27,3 +27,11 @@ export function useSaveIngredient() {
     onSuccess: () => client.invalidateQueries({ queryKey: ingredientKeys.all }),
   });
 }
+
+export function useRemoveIngredient() {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: (id: number) => api.delete(`/api/ingredients/${id}`),
+    onSuccess: () => client.invalidateQueries({ queryKey: ingredientKeys.all }),
+  });
+}

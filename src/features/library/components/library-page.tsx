@@ -7,14 +7,48 @@ import { useCurrentUser } from '../../../app/current-user';
 import { applyServerErrors } from '../../../lib/forms';
 import { show, showVolume } from '../../../lib/units';
 import { UnitField, asNumber } from '../../../components/ui/unit-field';
-import { useEquipment, useSaveEquipment, type EquipmentRow } from '../api/equipment';
-import { useIngredients, useSaveIngredient, type IngredientRow } from '../api/ingredients';
+import { useEquipment, useRemoveEquipment, useSaveEquipment, type EquipmentRow } from '../api/equipment';
+import { useIngredients, useRemoveIngredient, useSaveIngredient, type IngredientRow } from '../api/ingredients';
 import { FormBanner } from '../../../components/ui/form-banner';
+
+/** Removing takes two taps: the first asks, the second removes. A refusal shows in the form's banner. */
+function RemoveButton({ name, remove, onRemoved, onRefused }: { name: string; remove: () => Promise<unknown>; onRemoved: () => void; onRefused: (error: unknown) => void }) {
+  const [asking, setAsking] = useState(false);
+  const [busy, setBusy] = useState(false);
+  if (!asking) {
+    return (
+      <Button variant="quiet" onClick={() => setAsking(true)}>
+        Remove…
+      </Button>
+    );
+  }
+  return (
+    <Button
+      variant="danger"
+      busy={busy}
+      onClick={async () => {
+        setBusy(true);
+        try {
+          await remove();
+          onRemoved();
+        } catch (error) {
+          onRefused(error);
+          setAsking(false);
+        } finally {
+          setBusy(false);
+        }
+      }}
+    >
+      Remove {name}
+    </Button>
+  );
+}
 
 function EquipmentForm({ row, onDone }: { row?: EquipmentRow; onDone: () => void }) {
   const me = useCurrentUser();
   const system = me.brewery.unitSystem;
   const save = useSaveEquipment();
+  const remove = useRemoveEquipment();
   const toast = useToast();
   const [banner, setBanner] = useState<string>();
   const { id: _id, ...initial } = row ?? { id: 0, name: '', batchVolumeL: 100, brewhouseEfficiency: 0.75, boilOffLPerHour: 10, boilMinutes: 60, mashTunDeadSpaceL: 5, kettleDeadSpaceL: 3, trubChillerLossL: 5, fermenterLossL: 5, grainAbsorptionLPerKg: 1, maxMashTunVolumeL: 200, maxKettleVolumeL: 200, mashThicknessLPerKg: 3 };
@@ -51,8 +85,9 @@ function EquipmentForm({ row, onDone }: { row?: EquipmentRow; onDone: () => void
         {volume('maxMashTunVolumeL', 'Mash tun capacity')}
         {volume('maxKettleVolumeL', 'Kettle capacity')}
       </div>
-      <div className="flex justify-end gap-2">
-        <Button variant="quiet" onClick={onDone}>Cancel</Button>
+      <div className="flex items-center gap-2">
+        {row && <RemoveButton name={row.name} remove={() => remove.mutateAsync(row.id)} onRemoved={onDone} onRefused={(error) => setBanner(applyServerErrors(error, setError))} />}
+        <Button variant="quiet" className="ml-auto" onClick={onDone}>Cancel</Button>
         <Button type="submit" busy={save.isPending}>Save equipment</Button>
       </div>
     </form>
@@ -63,6 +98,7 @@ const blankIngredient: IngredientInput = { kind: 'fermentable', name: '', notes:
 
 function IngredientForm({ row, onDone }: { row?: IngredientRow; onDone: () => void }) {
   const save = useSaveIngredient();
+  const remove = useRemoveIngredient();
   const [banner, setBanner] = useState<string>();
   const initial: IngredientInput = row
     ? { kind: row.kind, name: row.name, notes: row.notes, ...(row.ppg !== null ? { ppg: row.ppg } : {}), ...(row.colourLovibond !== null ? { colourLovibond: row.colourLovibond } : {}), ...(row.alphaAcidPct !== null ? { alphaAcidPct: row.alphaAcidPct } : {}), ...(row.attenuationPct !== null ? { attenuationPct: row.attenuationPct } : {}) }
@@ -94,8 +130,9 @@ function IngredientForm({ row, onDone }: { row?: IngredientRow; onDone: () => vo
         {kind === 'yeast' && <TextField label="Attenuation (%)" type="number" step="any" {...register('attenuationPct', asNumber(true))} error={formState.errors.attenuationPct?.message} />}
       </div>
       <TextAreaField label="Notes" rows={2} {...register('notes')} error={formState.errors.notes?.message} />
-      <div className="flex justify-end gap-2">
-        <Button variant="quiet" onClick={onDone}>Cancel</Button>
+      <div className="flex items-center gap-2">
+        {row && <RemoveButton name={row.name} remove={() => remove.mutateAsync(row.id)} onRemoved={onDone} onRefused={(error) => setBanner(applyServerErrors(error, setError))} />}
+        <Button variant="quiet" className="ml-auto" onClick={onDone}>Cancel</Button>
         <Button type="submit" busy={save.isPending}>Save ingredient</Button>
       </div>
     </form>
