@@ -21,6 +21,8 @@ const CEILING_PORT = API_PORT + 1;
 const DURATION_S = Number(process.env.KW_BENCH_SECONDS ?? 10);
 const WARM_UP_S = 3;
 const CONNECTIONS = 50;
+/** A brewery's own staff at their screens at once: the list and reports are also measured at this load. */
+const STAFF_CONNECTIONS = 5;
 
 // ------------------------------------------------------------------ the ceiling, as its own process
 
@@ -64,11 +66,11 @@ interface Row {
   ceilingP99: number;
 }
 
-async function load(url: string, opts: { method?: 'GET' | 'POST'; headers?: Record<string, string>; body?: () => string; path: () => string }, seconds: number) {
+async function load(url: string, opts: { method?: 'GET' | 'POST'; headers?: Record<string, string>; body?: () => string; path: () => string }, seconds: number, connections = CONNECTIONS) {
   const headers = { ...opts.headers };
   const result = await autocannon({
     url,
-    connections: CONNECTIONS,
+    connections,
     duration: seconds,
     requests: [
       {
@@ -90,9 +92,9 @@ async function load(url: string, opts: { method?: 'GET' | 'POST'; headers?: Reco
   return result;
 }
 
-async function measure(name: string, kind: Row['kind'], url: string, opts: Parameters<typeof load>[1]): Promise<Row> {
-  await load(url, opts, WARM_UP_S);
-  const r = await load(url, opts, DURATION_S);
+async function measure(name: string, kind: Row['kind'], url: string, opts: Parameters<typeof load>[1], connections = CONNECTIONS): Promise<Row> {
+  await load(url, opts, WARM_UP_S, connections);
+  const r = await load(url, opts, DURATION_S, connections);
   return { name, kind, rps: r.requests.average, p50: r.latency.p50, p97_5: r.latency.p97_5, p99: r.latency.p99, non2xx: r.non2xx + r.errors, ceilingRps: r.requests.average, ceilingP99: r.latency.p99 };
 }
 
@@ -220,6 +222,13 @@ async function measureAll(apiUrl: string, seed: LargeSeedShape, email: string, p
     rows.push({ ...row, queries: queries[r.name], ceilingRps: ceilingRow.rps, ceilingP99: ceilingRow.p99 });
   }
 
+  // The same list and reports with the brewery's own staff at once: the large data set without a queue of 50.
+  const staffRows: Row[] = [];
+  for (const r of appRoutes.filter((x) => x.kind === 'report' || x.name.startsWith('GET /api/batches (list'))) {
+    process.stdout.write(`  measuring ${r.name} at ${STAFF_CONNECTIONS} connections ...\n`);
+    staffRows.push(await measure(r.name, r.kind, apiUrl, { headers, path: r.path }, STAFF_CONNECTIONS));
+  }
+
   const { benchScaling } = await import('./bench-brewing');
   const scaling = benchScaling();
   const jsKb = existsSync(path.join(ROOT, 'dist/index.html')) ? initialJsGzipKb() : NaN;
@@ -244,6 +253,14 @@ async function measureAll(apiUrl: string, seed: LargeSeedShape, email: string, p
   const machine = `${cpus().length} CPU (${cpus()[0]?.model.trim()}), ${(totalmem() / 2 ** 30).toFixed(0)} GB RAM, Node ${process.version}, MariaDB 10.11 (own instance), ${CONNECTIONS} connections, ${DURATION_S} s per route after ${WARM_UP_S} s warm-up, the ceiling measured the same way just before each route`;
   console.log(`\n${machine}\n`);
   console.log(lines.join('\n'));
+  console.log(`\nList and reports at ${STAFF_CONNECTIONS} connections (a brewery's staff at once), ${DURATION_S} s each after ${WARM_UP_S} s warm-up:\n`);
+  console.log(
+    [
+      '| Route | req/s | p50 ms | p97.5 ms | p99 ms | target |',
+      '|---|---:|---:|---:|---:|---|',
+      ...staffRows.map((r) => `| ${r.name} | ${r.rps.toFixed(0)} | ${r.p50} | ${r.p97_5} | ${r.p99} | ${r.p97_5 < 100 ? 'ok p97.5<100' : 'MISS p97.5'} |`),
+    ].join('\n'),
+  );
   console.log(`\nshared/brewing scaleRecipe pilot → 10 bbl: median ${scaling.medianUs.toFixed(1)} µs over ${scaling.iterations} runs (target < 100 µs)`);
   console.log(`Initial JavaScript (entry + modulepreloads in dist/index.html): ${jsKb.toFixed(1)} KB gzip (target < 170 KB)`);
 
@@ -252,7 +269,7 @@ async function measureAll(apiUrl: string, seed: LargeSeedShape, email: string, p
   for (const line of await explainProductionReport(seed.breweryId, '2026-10')) console.log(`  ${line}`);
 
   mkdirSync(path.join(ROOT, 'test-results'), { recursive: true });
-  writeFileSync(path.join(ROOT, 'test-results/bench.json'), JSON.stringify({ machine, rows, scaling, jsKb, seed: seed.counts }, null, 2));
+  writeFileSync(path.join(ROOT, 'test-results/bench.json'), JSON.stringify({ machine, rows, staffRows, scaling, jsKb, seed: seed.counts }, null, 2));
 
   await sequelize.close();
 }
