@@ -30,6 +30,7 @@ export const router = createBrowserRouter([
       { path: 'batches/:batchId/record', lazy: () => import('../features/batches/components/batch-record-page').then((m) => ({ Component: m.BatchRecordPage })) },
       { path: 'cellar', lazy: () => import('../features/cellar/components/vessel-board-page').then((m) => ({ Component: m.VesselBoardPage })) },
       { path: 'cellar/vessels', lazy: () => import('../features/cellar/components/vessels-page').then((m) => ({ Component: m.VesselsPage })) },
+      { path: 'cellar/vessels/labels', lazy: () => import('../features/cellar/components/vessel-labels-page').then((m) => ({ Component: m.VesselLabelsPage })) },
       { path: 'cellar/batches/:batchId', lazy: () => import('../features/cellar/components/batch-cellar-page').then((m) => ({ Component: m.BatchCellarPage })) },
       { path: 'taproom', lazy: () => import('../features/taproom/components/taproom-home').then((m) => ({ Component: m.TaproomHome })) },
       { path: 'taproom/board', lazy: () => import('../features/taproom/components/bar-board-page').then((m) => ({ Component: m.BarBoardPage })) },

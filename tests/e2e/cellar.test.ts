@@ -6,7 +6,7 @@ import { DEMO_PEOPLE } from '../../server/seed/demo';
 const write = { 'x-kettlewright': '1' };
 
 /** The head brewer plans a batch into an empty fermenter and starts its brew day, through the API. */
-async function fermentingBatch(page: Page): Promise<{ id: number; number: string; vessel: string }> {
+async function fermentingBatch(page: Page): Promise<{ id: number; number: string; vessel: string; vesselId: number }> {
   const recipes = (await (await page.request.get('/api/recipes')).json()) as { latestVersionId: number }[];
   const vessels = (await (await page.request.get('/api/vessels')).json()) as { id: number; name: string; type: string; status: string; currentBatchId: number | null }[];
   let fermenter = vessels.find((v) => v.type === 'fermenter' && v.status === 'clean' && v.currentBatchId === null);
@@ -25,7 +25,7 @@ async function fermentingBatch(page: Page): Promise<{ id: number; number: string
   const batch = (await planned.json()) as { id: number; number: string };
   const brewing = await page.request.post(`/api/batches/${batch.id}/status`, { headers: write, data: { status: 'brewing' } });
   expect(brewing.status()).toBe(200);
-  return { ...batch, vessel: fermenter!.name };
+  return { ...batch, vessel: fermenter!.name, vesselId: fermenter!.id };
 }
 
 describe('cellar readings on the tablet (Chromium, 1024×768)', () => {
@@ -98,6 +98,17 @@ describe('cellar readings on the tablet (Chromium, 1024×768)', () => {
     expect(await points.count()).toBe(3);
     await page.getByRole('link', { name: 'Vessel board' }).click();
     await expect.poll(() => tile.getByTestId('board-gravity').textContent()).toBe('1.019');
+
+    // A tank's label opens the batch in it; the label sheet has one label per vessel.
+    await page.goto(`/cellar?vessel=${batch.vesselId}`);
+    await page.waitForURL(`**/cellar/batches/${batch.id}`);
+    await page.goto('/cellar/vessels');
+    await page.getByRole('link', { name: 'Print labels' }).click();
+    const labels = page.getByRole('region', { name: 'Labels' }).getByRole('figure');
+    await expect.poll(() => labels.count()).toBe(await page.evaluate(async () => ((await (await fetch('/api/vessels')).json()) as unknown[]).length));
+    await expect.poll(() => labels.filter({ hasText: batch.vessel }).getByRole('img').count()).toBe(1);
+    await screenshot(page, 'cellar-vessel-labels-1024.png', { fullPage: false });
+    await page.goto('/cellar');
 
     // The demo batch a week into fermentation: a curve with its prediction.
     await page.getByRole('article', { name: 'FV-1' }).click();

@@ -8,7 +8,7 @@ import { BATCH_STATUS_LABELS } from '../../../../shared/schemas/batches';
 import { show } from '../../../lib/units';
 import { ActualsCard } from './actuals-card';
 import { LogList } from './log-list';
-import { QrCode } from './qr-code';
+import { QrCode } from '../../../components/qr-code';
 import { Signatures } from './sign-off-panel';
 import { showSg } from './format';
 

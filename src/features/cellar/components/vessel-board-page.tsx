@@ -1,4 +1,5 @@
-import { Link } from 'react-router-dom';
+import { useEffect } from 'react';
+import { Link, Navigate, useSearchParams } from 'react-router-dom';
 import { ErrorState, Loading, EmptyState, cx } from '../../../components/ui';
 import { VESSEL_STATUS_LABELS, VESSEL_TYPE_LABELS, type BoardVessel } from '../../../../shared/schemas/cellar';
 import { useCurrentUser } from '../../../app/current-user';
@@ -16,15 +17,18 @@ function relative(iso: string, now: number): string {
   return ms >= 0 ? `in ${span}` : `${span} ago`;
 }
 
-function VesselTile({ v, now }: { v: BoardVessel; now: number }) {
+function VesselTile({ v, now, asked }: { v: BoardVessel; now: number; asked: boolean }) {
   const me = useCurrentUser();
   const system = me.brewery.unitSystem;
   const b = v.batch;
   const body = (
     <article
+      id={`vessel-${v.id}`}
       aria-label={v.name}
+      aria-current={asked || undefined}
       className={cx(
         'flex h-full flex-col rounded-2xl border-4 p-5',
+        asked && 'ring-4 ring-brass-400 ring-offset-2',
         b?.readingOverdue ? 'border-ember-600 bg-cellar-900 text-white' : b ? 'border-cellar-700 bg-cellar-900 text-white' : 'border-mist-300 bg-white text-ink-700',
       )}
     >
@@ -81,12 +85,21 @@ function VesselTile({ v, now }: { v: BoardVessel; now: number }) {
   );
 }
 
-/** Every vessel, readable across the room: what it holds, days in tank, latest reading, what comes next. */
+/**
+ * Every vessel, readable across the room: what it holds, days in tank, latest reading, what comes next.
+ * `?vessel=ID` (a tank's label) opens the batch in that vessel, or shows the vessel when it is empty.
+ */
 export function VesselBoardPage() {
   const me = useCurrentUser();
   const { data, error, refetch, isPending, dataUpdatedAt } = useBoard();
+  const asked = Number(useSearchParams()[0].get('vessel'));
+  useEffect(() => {
+    if (data && asked) document.getElementById(`vessel-${asked}`)?.scrollIntoView({ block: 'center' });
+  }, [data, asked]);
   if (isPending) return <Loading label="Loading the vessel board" />;
   if (error) return <ErrorState error={error} onRetry={() => void refetch()} />;
+  const holding = data.find((v) => v.id === asked)?.batch;
+  if (holding) return <Navigate to={`/cellar/batches/${holding.id}`} replace />;
   return (
     <div className="space-y-4">
       <div className="flex flex-wrap items-end justify-between gap-3">
@@ -101,7 +114,7 @@ export function VesselBoardPage() {
       ) : (
         <div className="grid gap-4 md:grid-cols-2 xl:grid-cols-3">
           {data.map((v) => (
-            <VesselTile key={v.id} v={v} now={dataUpdatedAt} />
+            <VesselTile key={v.id} v={v} now={dataUpdatedAt} asked={v.id === asked} />
           ))}
         </div>
       )}

@@ -1,4 +1,5 @@
 import { useState } from 'react';
+import { Link } from 'react-router-dom';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Button, Dialog, EmptyState, ErrorState, Loading, PageHeader, SelectField, Table, Td, TextField, Th, useToast } from '../../../components/ui';
@@ -82,7 +83,18 @@ export function VesselsPage() {
   const act = (p: Promise<unknown>, done: string) => p.then(() => toast(done), (err: Error) => toast(err.message));
   return (
     <div>
-      <PageHeader title="Vessels" subtitle="Fermenters and bright tanks, with the pressure each is rated for." actions={isHead && <Button onClick={() => setEditing('new')}>Add a vessel</Button>} />
+      <PageHeader
+        title="Vessels"
+        subtitle="Fermenters and bright tanks, with the pressure each is rated for."
+        actions={
+          <div className="flex gap-2">
+            <Link to="/cellar/vessels/labels" className="inline-flex min-h-touch items-center rounded-lg border-2 border-cellar-800 px-4 font-semibold text-cellar-800 hover:bg-cellar-100">
+              Print labels
+            </Link>
+            {isHead && <Button onClick={() => setEditing('new')}>Add a vessel</Button>}
+          </div>
+        }
+      />
       {data.length === 0 ? (
         <EmptyState title="No vessels yet" />
       ) : (
