@@ -44,4 +44,14 @@ export const batchAttachmentsRouter = defineRouter('/api/batches', [
 export const attachmentsRouter = defineRouter('/api/attachments', [
   { method: 'get', path: '/:attachmentId/file', access: 'signed-in', params: attachmentParams, handler: (req, res) => send(req, res, 'file') },
   { method: 'get', path: '/:attachmentId/thumbnail', access: 'signed-in', params: attachmentParams, handler: (req, res) => send(req, res, 'thumbnail') },
+  {
+    method: 'delete',
+    path: '/:attachmentId',
+    access: ['head_brewer'],
+    params: attachmentParams,
+    handler: async (req, res) => {
+      await attachments.removeAttachment(actor(req), Number(req.params.attachmentId));
+      res.status(204).end();
+    },
+  },
 ]);

@@ -7,8 +7,8 @@ import type { RequestHandler } from 'express';
 import { Op } from 'sequelize';
 import { Attachment, Batch, Release, TastingNote, User } from '../models';
 import type { AttachmentKind } from '../models/attachment';
-import { badRequest, HttpError, notFound, tooLarge } from '../errors';
-import { getObject, putObject } from './storage';
+import { badRequest, conflict, HttpError, notFound, tooLarge } from '../errors';
+import { deleteObject, getObject, putObject } from './storage';
 import { UPLOAD_MAX_BYTES, type AttachmentView } from '../../shared/schemas/taproom';
 import { findBatch } from './batches';
 
@@ -156,4 +156,22 @@ export async function downloadAttachment(actor: Express.User, id: number, varian
   const filename = `batch-${batch?.number ?? attachment.batchId}-file-${attachment.id}.${extension}`.replace(/[^A-Za-z0-9._-]/g, '-');
   const disposition = attachment.kind === 'photo' ? `inline; filename="${filename}"` : `attachment; filename="${filename}"`;
   return { body: await getObject(attachment.storageKey), contentType: attachment.contentType, disposition };
+}
+
+/**
+ * Removes a file put on the wrong batch or taken badly. A file that is part of a signed tasting note, or the
+ * photo of a release sheet, stays (409): the note is a signed record, and the sheet must change photo first.
+ * The row goes first; an object whose deletion fails is only logged, as an orphan loses nothing.
+ */
+export async function removeAttachment(actor: Express.User, id: number): Promise<void> {
+  const attachment = await Attachment.findOne({ where: { id, breweryId: actor.breweryId } });
+  if (!attachment) throw notFound('This file');
+  if (attachment.tastingNoteId !== null) throw conflict('This file belongs to a signed tasting note, so it stays with the note.');
+  if (await Release.count({ where: { breweryId: actor.breweryId, photoAttachmentId: attachment.id } })) {
+    throw conflict('This photo is on the release sheet: choose another photo there first.');
+  }
+  await attachment.destroy();
+  for (const key of [attachment.storageKey, attachment.thumbnailKey]) {
+    if (key) await deleteObject(key).catch((err: unknown) => console.error(`stored file ${key} was not deleted`, err));
+  }
 }

@@ -1,6 +1,6 @@
 // Object storage for uploaded files, through the S3 API: the fake server in development and tests,
 // a real object store in production (bucket and endpoint from configuration).
-import { GetObjectCommand, PutObjectCommand, S3Client, S3ServiceException } from '@aws-sdk/client-s3';
+import { DeleteObjectCommand, GetObjectCommand, PutObjectCommand, S3Client, S3ServiceException } from '@aws-sdk/client-s3';
 import { env } from '../config/env';
 import { HttpError, notFound } from '../errors';
 
@@ -39,6 +39,15 @@ export async function getObject(key: string): Promise<Buffer> {
     const out = await client.send(new GetObjectCommand({ Bucket: env.S3_BUCKET, Key: key }));
     if (!out.Body) throw notFound('This file');
     return Buffer.from(await out.Body.transformToByteArray());
+  } catch (err) {
+    throw storageError(err);
+  }
+}
+
+/** Deletes an object; one already gone counts as deleted. */
+export async function deleteObject(key: string): Promise<void> {
+  try {
+    await client.send(new DeleteObjectCommand({ Bucket: env.S3_BUCKET, Key: key }));
   } catch (err) {
     throw storageError(err);
   }

@@ -7,7 +7,7 @@ import { HeadObjectCommand, S3Client } from '@aws-sdk/client-s3';
 import { Attachment } from '../../server/models';
 import { createTestBrewery, type TestBrewery } from './helpers';
 import { plannedBatch } from './batch-fixtures';
-import { TASTING_CONTENT } from './taproom-fixtures';
+import { SHEET, TASTING_CONTENT } from './taproom-fixtures';
 import type { Batch } from '../../server/models';
 
 let t: TestBrewery;
@@ -117,6 +117,45 @@ describe('attaching to a tasting note', () => {
       .field('tastingNoteId', String(note.body.id))
       .attach('file', PDF, { filename: 'lab.pdf', contentType: 'application/pdf' });
     expect(wrong.status).toBe(404);
+  });
+});
+
+describe('removing a file', () => {
+  const upload = (batchId: number, as = t.as.assistant_brewer) =>
+    as.post(`/api/batches/${batchId}/attachments`).attach('file', PDF, { filename: 'wrong batch.pdf', contentType: 'application/pdf' });
+
+  it('lets the head brewer remove a wrong file: its row and its stored object go', async () => {
+    const res = await upload(batch.id);
+    expect(res.status).toBe(201);
+    const row = await Attachment.findByPk(res.body.id);
+    expect((await t.as.assistant_brewer.delete(`/api/attachments/${res.body.id}`)).status).toBe(403);
+    expect((await other.as.head_brewer.delete(`/api/attachments/${res.body.id}`)).status).toBe(404);
+    expect((await t.as.head_brewer.delete(`/api/attachments/${res.body.id}`)).status).toBe(204);
+    expect((await t.as.head_brewer.get(`/api/batches/${batch.id}/attachments`)).body.map((a: { id: number }) => a.id)).not.toContain(res.body.id);
+    expect((await t.as.head_brewer.get(`/api/attachments/${res.body.id}/file`)).status).toBe(404);
+    await expect(s3().send(new HeadObjectCommand({ Bucket: process.env.S3_BUCKET, Key: row!.storageKey }))).rejects.toMatchObject({ name: 'NotFound' });
+  });
+
+  it("keeps a tasting note's file and the release sheet's photo (409)", async () => {
+    const fermenting = await plannedBatch({ id: t.users.head_brewer.id, breweryId: t.brewery.id });
+    await fermenting.update({ status: 'fermenting' });
+    const note = await t.as.head_brewer.post(`/api/batches/${fermenting.id}/tasting-notes`).send({ idempotencyKey: randomUUID(), content: TASTING_CONTENT });
+    const onNote = await t.as.head_brewer
+      .post(`/api/batches/${fermenting.id}/attachments`)
+      .field('tastingNoteId', String(note.body.id))
+      .attach('file', PDF, { filename: 'lab.pdf', contentType: 'application/pdf' });
+    const kept = await t.as.head_brewer.delete(`/api/attachments/${onNote.body.id}`);
+    expect(kept.status).toBe(409);
+    expect(kept.body.error.message).toMatch(/signed tasting note/);
+
+    const shot = await t.as.head_brewer
+      .post(`/api/batches/${fermenting.id}/attachments`)
+      .attach('file', await photo(), { filename: 'glass.jpg', contentType: 'image/jpeg' });
+    expect((await t.as.head_brewer.put(`/api/batches/${fermenting.id}/release`).send({ ...SHEET, photoAttachmentId: shot.body.id })).status).toBe(200);
+    const onSheet = await t.as.head_brewer.delete(`/api/attachments/${shot.body.id}`);
+    expect(onSheet.status).toBe(409);
+    expect(onSheet.body.error.message).toMatch(/release sheet/);
+    expect(await Attachment.count({ where: { id: [onNote.body.id, shot.body.id] } })).toBe(2);
   });
 });
 

@@ -10,39 +10,7 @@ import { UnitField, asNumber } from '../../../components/ui/unit-field';
 import { useEquipment, useRemoveEquipment, useSaveEquipment, type EquipmentRow } from '../api/equipment';
 import { useIngredients, useRemoveIngredient, useSaveIngredient, type IngredientRow } from '../api/ingredients';
 import { FormBanner } from '../../../components/ui/form-banner';
-
-/** Removing takes two taps: the first asks, the second removes. A refusal shows in the form's banner. */
-function RemoveButton({ name, remove, onRemoved, onRefused }: { name: string; remove: () => Promise<unknown>; onRemoved: () => void; onRefused: (error: unknown) => void }) {
-  const [asking, setAsking] = useState(false);
-  const [busy, setBusy] = useState(false);
-  if (!asking) {
-    return (
-      <Button variant="quiet" onClick={() => setAsking(true)}>
-        Remove…
-      </Button>
-    );
-  }
-  return (
-    <Button
-      variant="danger"
-      busy={busy}
-      onClick={async () => {
-        setBusy(true);
-        try {
-          await remove();
-          onRemoved();
-        } catch (error) {
-          onRefused(error);
-          setAsking(false);
-        } finally {
-          setBusy(false);
-        }
-      }}
-    >
-      Remove {name}
-    </Button>
-  );
-}
+import { RemoveButton } from '../../../components/remove-button';
 
 function EquipmentForm({ row, onDone }: { row?: EquipmentRow; onDone: () => void }) {
   const me = useCurrentUser();

@@ -18,3 +18,12 @@ export function useUploadAttachment(batchId: number) {
     onSuccess: () => client.invalidateQueries({ queryKey: taproomKeys.attachments(batchId) }),
   });
 }
+
+/** Removes a file (head brewer); one on a tasting note or a release sheet answers 409 with the reason. */
+export function useRemoveAttachment(batchId: number) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: (id: number) => api.delete(`/api/attachments/${id}`),
+    onSuccess: () => client.invalidateQueries({ queryKey: taproomKeys.attachments(batchId) }),
+  });
+}

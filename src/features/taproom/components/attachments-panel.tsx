@@ -2,14 +2,18 @@ import { useRef, useState } from 'react';
 import { Card, ErrorState, Loading } from '../../../components/ui';
 import { ApiError } from '../../../lib/api-client';
 import { UPLOAD_ACCEPT, UPLOAD_MAX_BYTES } from '../../../../shared/schemas/taproom';
-import { useAttachments, useUploadAttachment } from '../api/attachments';
+import { useAttachments, useRemoveAttachment, useUploadAttachment } from '../api/attachments';
+import { useCurrentUser } from '../../../app/current-user';
+import { RemoveButton } from '../../../components/remove-button';
 
 const sizeText = (bytes: number) => (bytes >= 1024 * 1024 ? `${(bytes / 1024 / 1024).toFixed(1)} MB` : `${Math.max(1, Math.round(bytes / 1024))} KB`);
 
-/** Photos and lab sheets on a batch: add one, see them all, open each. */
+/** Photos and lab sheets on a batch: add one, see them all, open each; the head brewer removes a wrong one. */
 export function AttachmentsPanel({ batchId }: { batchId: number }) {
   const files = useAttachments(batchId);
   const upload = useUploadAttachment(batchId);
+  const remove = useRemoveAttachment(batchId);
+  const canRemove = useCurrentUser().role === 'head_brewer';
   const input = useRef<HTMLInputElement>(null);
   const [problem, setProblem] = useState<string | null>(null);
 
@@ -72,6 +76,13 @@ export function AttachmentsPanel({ batchId }: { batchId: number }) {
               <span className="text-ink-500">
                 {sizeText(f.byteSize)} · {f.uploadedBy}
               </span>
+              {canRemove && (
+                <RemoveButton
+                  name="this file"
+                  remove={() => remove.mutateAsync(f.id)}
+                  onRefused={(error) => setProblem(error instanceof ApiError ? error.message : 'The file could not be removed. Try again.')}
+                />
+              )}
             </li>
           ))}
         </ul>
