@@ -83,7 +83,7 @@ describe('cellar readings on the tablet (Chromium, 1024×768)', () => {
 
     // 1.021 was misread: the assistant corrects it in the batch record; the cellar and the board show the correction.
     await page.goBack();
-    await page.getByRole('link', { name: 'batch record' }).click();
+    await page.getByRole('link', { name: 'Correct a reading' }).click();
     await page.waitForURL(`**/batches/${batch.id}/record`);
     await page.getByTestId('log-entry').filter({ hasText: '1.021' }).getByRole('button', { name: /Correct entry/ }).click();
     const dialog = page.getByRole('dialog', { name: /Correct entry/ });

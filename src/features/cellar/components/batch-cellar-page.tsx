@@ -85,12 +85,11 @@ export function BatchCellarPage() {
       </div>
       <Section title="Readings and cellar work">
         {data.readings.length > 0 && (
-          <p className="mb-2 text-sm text-ink-500">
-            A reading typed wrong is corrected in the{' '}
-            <Link className="font-semibold text-cellar-700 underline" to={`/batches/${batchId}/record`}>
-              batch record
+          <p className="mb-2 flex flex-wrap items-center gap-x-3 text-sm text-ink-500">
+            <span>A reading typed wrong is corrected in the batch record; the original stays in the log beside the correction.</span>
+            <Link className="inline-flex min-h-touch items-center rounded-lg px-3 font-semibold text-cellar-700 underline hover:bg-mist-100" to={`/batches/${batchId}/record`}>
+              Correct a reading
             </Link>
-            : the original stays in the log beside the correction.
           </p>
         )}
         <ul className="divide-y divide-mist-200" aria-label="Readings and cellar work">
