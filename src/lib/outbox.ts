@@ -7,7 +7,8 @@
  *   sent with their original keys, so nothing is written twice.
  * - Any other 4xx marks the item rejected with the server's message; it stays visible until the person dismisses it.
  */
-import { useSyncExternalStore } from 'react';
+import { useEffect, useSyncExternalStore } from 'react';
+import { useQueryClient } from '@tanstack/react-query';
 import { get, update } from 'idb-keyval';
 
 export interface OutboxItem {
@@ -214,3 +215,12 @@ export function useOutbox(group?: string): OutboxSnapshot {
   return group ? { ...snap, items: snap.items.filter((i) => i.group === group) } : snap;
 }
 
+/**
+ * Marks every answer stale each time a write reaches the server: one write can change several screens
+ * (a corrected reading moves the curve, the vessel board, the log and the release numbers). Screens on show
+ * refetch at once; the others when next opened. Mounted once, in the signed-in layout.
+ */
+export function useRefreshOnDelivery() {
+  const client = useQueryClient();
+  useEffect(() => outbox().onSent(() => void client.invalidateQueries()), [client]);
+}

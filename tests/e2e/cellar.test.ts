@@ -92,7 +92,9 @@ describe('cellar readings on the tablet (Chromium, 1024×768)', () => {
     await screenshot(page, 'cellar-reading-correction-1024.png', { fullPage: false });
     await dialog.getByRole('button', { name: 'Save correction' }).click();
     await expect.poll(() => page.getByTestId('log-entry').filter({ hasText: 'Correction: Read the hydrometer' }).count(), { timeout: 15_000 }).toBe(1);
-    await page.goto(`/cellar/batches/${batch.id}`);
+    // Back inside the app (no reload): the cellar page shows the correction, not what it had before.
+    await page.goBack();
+    await page.waitForURL(`**/cellar/batches/${batch.id}`);
     await expect.poll(() => page.getByLabel('Readings and cellar work').textContent()).toMatch(/1\.019 .*corrected/);
     expect(await page.getByLabel('Readings and cellar work').textContent()).not.toContain('1.021');
     expect(await points.count()).toBe(3);

@@ -5,12 +5,14 @@ import { ROLE_LABELS } from '../../../shared/schemas/roles';
 import { ErrorState, Loading, cx } from '../../components/ui';
 import { CurrentUserContext } from '../current-user';
 import { navFor } from '../navigation';
+import { useRefreshOnDelivery } from '../../lib/outbox';
 
 /** The signed-in shell: the brewery's name, the menu for the person's role, and the page. */
 export function AppLayout() {
   const me = useMe();
   const location = useLocation();
   const navigate = useNavigate();
+  useRefreshOnDelivery();
 
   if (me.isPending) return <Loading label="Opening Kettlewright" />;
   if (me.isError) return <div className="p-6"><ErrorState error={me.error} onRetry={() => me.refetch()} /></div>;

@@ -2,7 +2,6 @@ import { useParams } from 'react-router-dom';
 import { Button, ErrorState, Loading } from '../../../components/ui';
 import { useCurrentUser } from '../../../app/current-user';
 import { useBatch } from '../api/get-batch';
-import { useRefreshOnSent } from '../api/log-entry';
 import { brewDaySteps } from '../../../../shared/batches/brew-day';
 import { BATCH_STATUS_LABELS } from '../../../../shared/schemas/batches';
 import { show } from '../../../lib/units';
@@ -17,7 +16,6 @@ export function BatchRecordPage() {
   const id = Number(useParams().batchId);
   const me = useCurrentUser();
   const batch = useBatch(id);
-  useRefreshOnSent(id);
   if (batch.isPending) return <Loading label="Opening the record" />;
   if (batch.isError) return <ErrorState error={batch.error} onRetry={() => batch.refetch()} />;
   const b = batch.data;

@@ -6,7 +6,7 @@ import { Button, Card, Caution, ErrorState, Loading, TextAreaField, cx } from '.
 import { useCurrentUser } from '../../../app/current-user';
 import { useOutbox, type OutboxItem } from '../../../lib/outbox';
 import { useBatch } from '../api/get-batch';
-import { batchGroup, logEntry, useRefreshOnSent } from '../api/log-entry';
+import { batchGroup, logEntry } from '../api/log-entry';
 import { ActualsCard } from './actuals-card';
 import { BoilTimer } from './boil-timer';
 import { LogList } from './log-list';
@@ -43,7 +43,6 @@ export function BrewDayPage() {
   const batch = useBatch(id);
   const { items } = useOutbox(batchGroup(id));
   const online = useOnline();
-  useRefreshOnSent(id);
   const [selected, setSelected] = useState<string | null>(null);
   const [typed, setTyped] = useState<Typed>({});
   const [gravity, setGravity] = useState<GravityUnit>('sg');

@@ -6,7 +6,7 @@ import { Card, ErrorState, Loading, PageHeader, Stat } from '../../../components
 import { useCurrentUser } from '../../../app/current-user';
 import { show } from '../../../lib/units';
 import { useBatchCellar } from '../api/batch-cellar';
-import { cellarGroup, useRefreshOnSent } from '../api/log-cellar-entry';
+import { cellarGroup } from '../api/log-cellar-entry';
 import { FermentationChart } from './fermentation-chart';
 import { ReadingForm } from './reading-form';
 import { ActionForm } from './action-form';
@@ -30,7 +30,6 @@ export function BatchCellarPage() {
   const batchId = Number(useParams().batchId);
   const me = useCurrentUser();
   const { data, error, refetch, isPending } = useBatchCellar(batchId);
-  useRefreshOnSent();
   const prediction = useMemo(
     () => (data ? predictFermentation(data.readings.map((r) => ({ atMs: Date.parse(r.takenAt), sg: r.sg }))) : null),
     [data],
