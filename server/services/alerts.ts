@@ -75,7 +75,9 @@ export async function sweepOverdueReadings(now = new Date()): Promise<number> {
   for (const batch of batches) {
     const plan = await cellarPlanFor(batch);
     const last = await GravityReading.findOne({ where: { batchId: batch.id, [Op.and]: [IN_FORCE] }, order: [['takenAt', 'DESC']] });
-    const since = last ? new Date(last.takenAt) : batch.updatedAt;
+    // Without a reading yet, the wait runs from knockout (or, with no knockout logged, from the batch's last change).
+    const knockout = last ? null : await BatchLogEntry.findOne({ where: { batchId: batch.id, stepKey: 'knockout-end' }, order: [['sequence', 'ASC']] });
+    const since = last ? new Date(last.takenAt) : new Date(knockout?.capturedAt ?? batch.updatedAt);
     if (readingOverdue(since.getTime(), now.getTime(), plan.readingIntervalHours)) {
       // Once per lapse: the next reading starts a new one.
       if (await raise(batch, 'overdue', `No gravity reading for over ${plan.readingIntervalHours} hours`, since.toISOString())) raised += 1;

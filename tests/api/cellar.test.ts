@@ -5,6 +5,7 @@ import { changeBatchStatus } from '../../server/services/batches';
 import { Alert, AuditEvent, Batch, BatchLogEntry, GravityReading, IdempotencyKey } from '../../server/models';
 import { sweepOverdueReadings } from '../../server/services/alerts';
 import { finalNumbers } from '../../server/services/release';
+import { sequelize } from '../../server/config/database';
 import { headPressureKpa, KEG_SIZES, platoToSg, refractometerBeerSg, sgToPlato } from '../../shared/brewing';
 import type { BatchCellarView, ProbeImportResult, ReadingView, VesselView } from '../../shared/schemas/cellar';
 
@@ -377,6 +378,23 @@ describe('alerts', () => {
     expect(await Alert.count({ where: { batchId: batch.id, kind: 'overdue' } })).toBe(1);
     await expect.poll(() => mailFor().length).toBe(1);
     expect((await Batch.findByPk(batch.id))!.status).toBe('fermenting');
+  });
+
+  it('counts a batch without readings from its knockout, however often its row changes', async () => {
+    const batch = await knockedOutBatch();
+    const knockout = await t.as.assistant_brewer
+      .post(`/api/batches/${batch.id}/log`)
+      .set(writeHeaders({ capturedAt: new Date(Date.now() - 30 * 3_600_000) }))
+      .send({ kind: 'step', stepKey: 'knockout-end', label: 'End knockout', measurements: { gravitySg: 1.05, volumeL: 40 } });
+    expect(knockout.status).toBe(201);
+    await changeBatchStatus({ id: t.users.head_brewer.id, breweryId: t.brewery.id }, batch.id, { status: 'fermenting' });
+    const overdue = () => Alert.count({ where: { batchId: batch.id, kind: 'overdue' } });
+    await sweepOverdueReadings(); // 30 h since knockout, interval 24 h
+    expect(await overdue()).toBe(1);
+    // Any later change to the batch row moves updated_at.
+    await sequelize.query('UPDATE batches SET updated_at = UTC_TIMESTAMP() WHERE id = ?', { replacements: [batch.id] });
+    await sweepOverdueReadings(new Date(Date.now() + 3_600_000));
+    expect(await overdue()).toBe(1);
   });
 
   it('raises "no reading" again for a new lapse after the next reading, once', async () => {
