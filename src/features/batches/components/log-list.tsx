@@ -4,7 +4,8 @@ import type { LogEntry, Measurements } from '../../../../shared/schemas/batch-lo
 import { ROLE_LABELS, type Role } from '../../../../shared/schemas/roles';
 import { Button, Dialog, TextAreaField, cx } from '../../../components/ui';
 import { logEntry } from '../api/log-entry';
-import { MeasurementFields, toMeasurements, type GravityUnit, type Typed } from './measurement-fields';
+import { MeasurementFields, toMeasurements, type BrixToSg, type GravityUnit, type Typed } from './measurement-fields';
+import { refractometerBeerSg, refractometerWortSg } from '../../../../shared/brewing';
 import { showMeasurements } from './format';
 import { showTime } from '../../../lib/time';
 import type { MeasureKey } from '../../../../shared/batches/brew-day';
@@ -67,14 +68,22 @@ export function LogList({ batchId, entries, system, timeZone }: { batchId: numbe
   );
 }
 
+/** For a refractometer reading: its °Brix to SG with the same wort and alcohol corrections (shared/brewing). */
+function refractometerOf(entry: LogEntry): BrixToSg | undefined {
+  const d = entry.data as { gravityUnit?: string; originalBrix?: number; wortCorrection?: number };
+  if (entry.kind !== 'reading' || d.gravityUnit !== 'brix') return undefined;
+  return (brix) => (d.originalBrix === undefined ? refractometerWortSg(brix, d.wortCorrection) : refractometerBeerSg(d.originalBrix, brix, d.wortCorrection));
+}
+
 function CorrectionDialog({ batchId, entry, system, onClose }: { batchId: number; entry: LogEntry; system: UnitSystem; onClose: () => void }) {
+  const brixToSg = refractometerOf(entry);
   const [reason, setReason] = useState('');
   const [typed, setTyped] = useState<Typed>({});
-  const [gravity, setGravity] = useState<GravityUnit>('sg');
+  const [gravity, setGravity] = useState<GravityUnit>(brixToSg ? 'brix' : 'sg');
   const [error, setError] = useState<string | null>(null);
   const asks = entry.kind === 'reading' ? READING_ASKS : (Object.keys(measuredIn(entry) ?? {}) as MeasureKey[]);
   const submit = async () => {
-    const { measurements, error: bad } = toMeasurements(typed, system, gravity);
+    const { measurements, error: bad } = toMeasurements(typed, system, gravity, brixToSg);
     if (bad) return setError(bad);
     if (reason.trim().length < 3) return setError('Say why (at least 3 characters)');
     await logEntry(batchId, { kind: 'correction', correctsEntryId: entry.id, reason: reason.trim(), meaning: 'performed', ...(measurements ? { measurements } : {}) }, `Correction of #${entry.sequence}`);
@@ -83,7 +92,7 @@ function CorrectionDialog({ batchId, entry, system, onClose }: { batchId: number
   return (
     <Dialog open onClose={onClose} title={`Correct entry #${entry.sequence}`}>
       <p className="mb-3 text-ink-500">The original stays in the log, struck through, beside your correction.</p>
-      {asks.length > 0 && <MeasurementFields asks={asks} expected={{}} typed={typed} onChange={setTyped} system={system} gravity={gravity} onGravityUnit={setGravity} />}
+      {asks.length > 0 && <MeasurementFields asks={asks} expected={{}} typed={typed} onChange={setTyped} system={system} gravity={gravity} onGravityUnit={setGravity} brix={brixToSg !== undefined} />}
       <div className="mt-3">
         <TextAreaField label="Reason" value={reason} onChange={(e) => setReason(e.target.value)} error={error ?? undefined} />
       </div>

@@ -5,7 +5,10 @@ import type { UnitSystem } from '../../../../shared/schemas/auth';
 import { UNITS } from '../../../lib/units';
 import { cx } from '../../../components/ui';
 
-export type GravityUnit = 'sg' | 'plato';
+/** How gravity is typed; °Brix only where the field knows how the refractometer converts (a refractometer reading). */
+export type GravityUnit = 'sg' | 'plato' | 'brix';
+/** A refractometer's °Brix to SG, with the corrections of the reading it belongs to. */
+export type BrixToSg = (brix: number) => number;
 /** What the person typed, per measurement, in the units shown. */
 export type Typed = Partial<Record<MeasureKey, string>>;
 
@@ -13,7 +16,7 @@ export type Typed = Partial<Record<MeasureKey, string>>;
 function unitOf(key: MeasureKey, system: UnitSystem, gravity: GravityUnit): string | null {
   if (key === 'tempC') return UNITS[system].tempC.unit;
   if (key === 'volumeL') return UNITS[system].volumeL.unit;
-  if (key === 'gravitySg') return gravity === 'sg' ? 'SG' : '°P';
+  if (key === 'gravitySg') return { sg: 'SG', plato: '°P', brix: '°Bx' }[gravity];
   return null;
 }
 const NAMES: Record<MeasureKey, string> = { tempC: 'Temperature', volumeL: 'Volume', gravitySg: 'Gravity', ph: 'pH' };
@@ -26,7 +29,7 @@ export function expectedText(key: MeasureKey, si: number, system: UnitSystem, gr
 }
 
 /** Converts typed values to SI for the API; a value that is not a number is reported by its label. */
-export function toMeasurements(typed: Typed, system: UnitSystem, gravity: GravityUnit): { measurements?: Measurements; error?: string } {
+export function toMeasurements(typed: Typed, system: UnitSystem, gravity: GravityUnit, brixToSg?: BrixToSg): { measurements?: Measurements; error?: string } {
   const out: Measurements = {};
   for (const [key, text] of Object.entries(typed) as [MeasureKey, string | undefined][]) {
     if (!text?.trim()) continue;
@@ -35,8 +38,13 @@ export function toMeasurements(typed: Typed, system: UnitSystem, gravity: Gravit
     if (key === 'tempC') out.tempC = Number(UNITS[system].tempC.fromDisplay(n).toFixed(2));
     else if (key === 'volumeL') out.volumeL = Number(UNITS[system].volumeL.fromDisplay(n).toFixed(2));
     else if (key === 'gravitySg') {
-      if (gravity === 'plato' && (n < 0 || n > 40)) return { error: 'Gravity: °P is between 0 and 40' };
-      out.gravitySg = Number((gravity === 'sg' ? n : platoToSg(n)).toFixed(4));
+      if (gravity !== 'sg' && (n < 0 || n > 40)) return { error: `Gravity: ${gravity === 'plato' ? '°P' : '°Bx'} is between 0 and 40` };
+      if (gravity === 'brix' && !brixToSg) return { error: 'Gravity: enter SG or °P' };
+      try {
+        out.gravitySg = Number((gravity === 'sg' ? n : gravity === 'plato' ? platoToSg(n) : brixToSg!(n)).toFixed(4));
+      } catch (error) {
+        return { error: `Gravity: ${error instanceof Error ? error.message : 'not a reading this converts'}` };
+      }
     } else out.ph = n;
   }
   return Object.keys(out).length ? { measurements: out } : {};
@@ -51,6 +59,7 @@ export function MeasurementFields({
   system,
   gravity,
   onGravityUnit,
+  brix = false,
 }: {
   asks: MeasureKey[];
   expected: Partial<Record<MeasureKey, number>>;
@@ -59,6 +68,8 @@ export function MeasurementFields({
   system: UnitSystem;
   gravity: GravityUnit;
   onGravityUnit: (unit: GravityUnit) => void;
+  /** Offers °Bx beside SG and °P (correcting a refractometer reading). */
+  brix?: boolean;
 }) {
   return (
     <div className="grid grid-cols-2 gap-4">
@@ -74,7 +85,7 @@ export function MeasurementFields({
               </label>
               {key === 'gravitySg' && (
                 <div role="group" aria-label="Gravity unit" className="flex overflow-hidden rounded-lg border-2 border-cellar-700">
-                  {(['sg', 'plato'] as const).map((u) => (
+                  {(brix ? (['sg', 'plato', 'brix'] as const) : (['sg', 'plato'] as const)).map((u) => (
                     <button
                       key={u}
                       type="button"
@@ -82,7 +93,7 @@ export function MeasurementFields({
                       onClick={() => onGravityUnit(u)}
                       className={cx('min-h-touch min-w-touch px-3 font-semibold', gravity === u ? 'bg-cellar-700 text-white' : 'bg-white text-cellar-800')}
                     >
-                      {u === 'sg' ? 'SG' : '°P'}
+                      {{ sg: 'SG', plato: '°P', brix: '°Bx' }[u]}
                     </button>
                   ))}
                 </div>
