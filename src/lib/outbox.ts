@@ -215,12 +215,25 @@ export function useOutbox(group?: string): OutboxSnapshot {
   return group ? { ...snap, items: snap.items.filter((i) => i.group === group) } : snap;
 }
 
+/** Writes delivered within this long of each other (a queue flushing after the network returns) refresh once. */
+const REFRESH_AFTER_MS = 200;
+
 /**
- * Marks every answer stale each time a write reaches the server: one write can change several screens
- * (a corrected reading moves the curve, the vessel board, the log and the release numbers). Screens on show
- * refetch at once; the others when next opened. Mounted once, in the signed-in layout.
+ * Marks every answer stale once writes reach the server: one write can change several screens (a corrected
+ * reading moves the curve, the vessel board, the log and the release numbers). Screens on show refetch;
+ * the others when next opened. Mounted once, in the signed-in layout.
  */
 export function useRefreshOnDelivery() {
   const client = useQueryClient();
-  useEffect(() => outbox().onSent(() => void client.invalidateQueries()), [client]);
+  useEffect(() => {
+    let timer: ReturnType<typeof setTimeout> | undefined;
+    const stop = outbox().onSent(() => {
+      clearTimeout(timer);
+      timer = setTimeout(() => void client.invalidateQueries(), REFRESH_AFTER_MS);
+    });
+    return () => {
+      clearTimeout(timer);
+      stop();
+    };
+  }, [client]);
 }
