@@ -13,7 +13,7 @@ import type { LogEntryInput, Measurements } from '../../shared/schemas/batch-log
 import { changeBatchStatus, findBatch } from './batches';
 import { parseProbeCsv, MAX_IMPORT_ROWS } from './probe-csv';
 import { evaluateReadingAlerts } from './alerts';
-import { fToC, platoToSg, refractometerBeerSg, refractometerWortSg, sgToPlato } from '../../shared/brewing';
+import { fToC, platoToSg, refractometerSg, sgToPlato } from '../../shared/brewing';
 import type { WriteMeta } from '../../shared/schemas/batch-log';
 import type { ProbeImportInput, ProbeImportResult, ReadingEntryInput, ReadingView } from '../../shared/schemas/cellar';
 
@@ -39,15 +39,12 @@ export function toReadingView(r: GravityReading): ReadingView {
 
 /** SG and °C from what was entered (refractometer readings corrected for wort and, once fermenting, alcohol). */
 export function readingInSi(input: ReadingEntryInput): { sg: number; tempC: number | null } {
-  let sg: number;
-  if (input.gravityUnit === 'brix') {
-    sg =
-      input.originalBrix === undefined
-        ? refractometerWortSg(input.gravity, input.wortCorrection)
-        : refractometerBeerSg(input.originalBrix, input.gravity, input.wortCorrection);
-  } else {
-    sg = input.gravityUnit === 'plato' ? platoToSg(input.gravity, 'gravity') : input.gravity;
-  }
+  const sg =
+    input.gravityUnit === 'brix'
+      ? refractometerSg(input.gravity, input.originalBrix, input.wortCorrection)
+      : input.gravityUnit === 'plato'
+        ? platoToSg(input.gravity, 'gravity')
+        : input.gravity;
   const tempC = input.temp === undefined ? null : input.tempUnit === 'f' ? fToC(input.temp) : input.temp;
   return { sg, tempC };
 }

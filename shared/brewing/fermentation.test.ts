@@ -8,6 +8,7 @@ import {
   readingOverdue,
   refractometerBeerSg,
   refractometerWortSg,
+  refractometerSg,
 } from './fermentation';
 import { platoToSg } from './gravity';
 import { expectInputError } from './test-helpers';
@@ -76,6 +77,11 @@ describe('refractometer', () => {
     expect(refractometerBeerSg(16, 7)).toBeLessThan(refractometerBeerSg(16, 8));
     expectInputError(() => refractometerBeerSg(10, 12), 'brix');
     expectInputError(() => refractometerBeerSg(16, 8, 2), 'wortCorrection');
+  });
+
+  it('a reading: wort without an original reading, beer (corrected for alcohol) with one', () => {
+    expect(refractometerSg(13.52)).toBe(refractometerWortSg(13.52));
+    expect(refractometerSg(8, 16, 1.02)).toBe(refractometerBeerSg(16, 8, 1.02));
   });
 });
 

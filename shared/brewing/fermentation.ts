@@ -151,6 +151,14 @@ export function refractometerBeerSg(originalBrix: number, currentBrix: number, w
   return requireGravity(sg, 'brix');
 }
 
+/**
+ * A refractometer reading as SG: unfermented wort when there is no original reading to correct for
+ * alcohol (refractometerWortSg), fermenting beer when there is (refractometerBeerSg).
+ */
+export function refractometerSg(brix: number, originalBrix?: number, wortCorrection?: number): number {
+  return originalBrix === undefined ? refractometerWortSg(brix, wortCorrection) : refractometerBeerSg(originalBrix, brix, wortCorrection);
+}
+
 // ----------------------------------------------------------------- alert rules
 
 /** True when this reading is the first at or below the D-rest trigger. */

@@ -114,6 +114,7 @@ export {
   DEFAULT_WORT_CORRECTION,
   refractometerWortSg,
   refractometerBeerSg,
+  refractometerSg,
   crossesDRestTrigger,
   STALL_TOLERANCE_SG,
   gravityStalled,

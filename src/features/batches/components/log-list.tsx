@@ -5,7 +5,7 @@ import { ROLE_LABELS, type Role } from '../../../../shared/schemas/roles';
 import { Button, Dialog, TextAreaField, cx } from '../../../components/ui';
 import { logEntry } from '../api/log-entry';
 import { MeasurementFields, toMeasurements, type BrixToSg, type GravityUnit, type Typed } from './measurement-fields';
-import { refractometerBeerSg, refractometerWortSg } from '../../../../shared/brewing';
+import { refractometerSg } from '../../../../shared/brewing';
 import { showMeasurements } from './format';
 import { showTime } from '../../../lib/time';
 import type { MeasureKey } from '../../../../shared/batches/brew-day';
@@ -72,7 +72,7 @@ export function LogList({ batchId, entries, system, timeZone }: { batchId: numbe
 function refractometerOf(entry: LogEntry): BrixToSg | undefined {
   const d = entry.data as { gravityUnit?: string; originalBrix?: number; wortCorrection?: number };
   if (entry.kind !== 'reading' || d.gravityUnit !== 'brix') return undefined;
-  return (brix) => (d.originalBrix === undefined ? refractometerWortSg(brix, d.wortCorrection) : refractometerBeerSg(d.originalBrix, brix, d.wortCorrection));
+  return (brix) => refractometerSg(brix, d.originalBrix, d.wortCorrection);
 }
 
 function CorrectionDialog({ batchId, entry, system, onClose }: { batchId: number; entry: LogEntry; system: UnitSystem; onClose: () => void }) {
