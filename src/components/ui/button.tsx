@@ -1,8 +1,8 @@
 import { forwardRef, type ButtonHTMLAttributes } from 'react';
 import { cx } from './cx';
 
-type Variant = 'primary' | 'secondary' | 'quiet' | 'danger' | 'onDark';
-type Size = 'md' | 'lg' | 'xl';
+export type Variant = 'primary' | 'secondary' | 'quiet' | 'danger' | 'onDark';
+export type Size = 'md' | 'lg' | 'xl';
 
 const variants: Record<Variant, string> = {
   primary: 'bg-cellar-800 text-white hover:bg-cellar-700 active:bg-cellar-900 disabled:bg-ink-300',
@@ -17,6 +17,16 @@ const sizes: Record<Size, string> = {
   lg: 'min-h-[56px] px-6 text-lg',
   xl: 'min-h-[72px] px-8 text-xl',
 };
+
+/** The look of a button, for anything that should look like one (a link that is a step in the work). */
+export function buttonClass({ variant = 'primary', size = 'md', className }: { variant?: Variant; size?: Size; className?: string } = {}): string {
+  return cx(
+    'inline-flex min-w-touch items-center justify-center gap-2 rounded-lg font-semibold transition-colors disabled:cursor-not-allowed',
+    variants[variant],
+    sizes[size],
+    className,
+  );
+}
 
 export interface ButtonProps extends ButtonHTMLAttributes<HTMLButtonElement> {
   variant?: Variant;
@@ -34,12 +44,7 @@ export const Button = forwardRef<HTMLButtonElement, ButtonProps>(function Button
       type={type}
       disabled={disabled || busy}
       aria-busy={busy || undefined}
-      className={cx(
-        'inline-flex min-w-touch items-center justify-center gap-2 rounded-lg font-semibold transition-colors disabled:cursor-not-allowed',
-        variants[variant],
-        sizes[size],
-        className,
-      )}
+      className={buttonClass({ variant, size, className })}
       {...rest}
     >
       {busy && <span className="h-4 w-4 animate-spin rounded-full border-2 border-current border-t-transparent" aria-hidden />}

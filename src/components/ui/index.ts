@@ -1,4 +1,5 @@
 export { Button } from './button';
+export { LinkButton } from './link-button';
 export { TextField, SelectField, TextAreaField } from './field';
 export { Card, PageHeader, Stat } from './card';
 export { Loading, ErrorState, EmptyState, Caution } from './states';

@@ -1,8 +1,8 @@
 import { useMemo, useState } from 'react';
-import { Link, useParams } from 'react-router-dom';
+import { useParams } from 'react-router-dom';
 import { brewDaySteps, boilAdditions, type BrewDayStep } from '../../../../shared/batches/brew-day';
 import { BATCH_STATUS_LABELS } from '../../../../shared/schemas/batches';
-import { Button, Card, Caution, ErrorState, Loading, TextAreaField, cx } from '../../../components/ui';
+import { Button, Card, Caution, ErrorState, LinkButton, Loading, TextAreaField, cx } from '../../../components/ui';
 import { useCurrentUser } from '../../../app/current-user';
 import { useOutbox, type OutboxItem } from '../../../lib/outbox';
 import { useBatch } from '../api/get-batch';
@@ -95,9 +95,7 @@ export function BrewDayPage() {
           <span className={cx('rounded-full px-3 py-1 font-semibold', online ? 'bg-cellar-100 text-cellar-800' : 'bg-brass-400 text-ink-900')} role="status">
             {online ? 'Online' : 'Offline: entries kept on this tablet'}
           </span>
-          <Link to={`/batches/${id}/record`} className="flex min-h-touch items-center rounded-lg border-2 border-cellar-800 px-4 font-semibold text-cellar-800">
-            Record and QR labels
-          </Link>
+          <LinkButton to={`/batches/${id}/record`}>Record and QR labels</LinkButton>
         </div>
       </header>
 

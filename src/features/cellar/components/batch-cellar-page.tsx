@@ -1,8 +1,8 @@
 import { useMemo, type ReactNode } from 'react';
-import { Link, useParams } from 'react-router-dom';
+import { useParams } from 'react-router-dom';
 import { apparentAttenuation, predictFermentation } from '../../../../shared/brewing';
 import { CELLAR_ACTION_LABELS, READING_METHOD_LABELS } from '../../../../shared/schemas/cellar';
-import { Card, ErrorState, Loading, PageHeader, Stat } from '../../../components/ui';
+import { Card, ErrorState, LinkButton, Loading, PageHeader, Stat } from '../../../components/ui';
 import { useCurrentUser } from '../../../app/current-user';
 import { show } from '../../../lib/units';
 import { useBatchCellar } from '../api/batch-cellar';
@@ -50,7 +50,7 @@ export function BatchCellarPage() {
       <PageHeader
         title={`${data.batch.beerName} · ${data.batch.number}`}
         subtitle={`${data.batch.status[0]!.toUpperCase()}${data.batch.status.slice(1)}${data.vessel ? ` in ${data.vessel.name}` : ''} · brewed ${data.batch.brewDate}`}
-        actions={<Link className="inline-flex min-h-touch items-center rounded-lg px-4 font-semibold text-cellar-700 hover:bg-mist-100" to="/cellar">Vessel board</Link>}
+        actions={<LinkButton variant="quiet" to="/cellar">Vessel board</LinkButton>}
       />
       <div className="grid grid-cols-2 gap-3 md:grid-cols-4">
         <Stat label={data.og.measured ? 'OG (measured)' : 'OG (planned)'} value={data.og.sg.toFixed(3)} />
@@ -86,9 +86,9 @@ export function BatchCellarPage() {
         {data.readings.length > 0 && (
           <p className="mb-2 flex flex-wrap items-center gap-x-3 text-sm text-ink-500">
             <span>A reading typed wrong is corrected in the batch record; the original stays in the log beside the correction.</span>
-            <Link className="inline-flex min-h-touch items-center rounded-lg px-3 font-semibold text-cellar-700 underline hover:bg-mist-100" to={`/batches/${batchId}/record`}>
+            <LinkButton variant="quiet" className="underline" to={`/batches/${batchId}/record`}>
               Correct a reading
-            </Link>
+            </LinkButton>
           </p>
         )}
         <ul className="divide-y divide-mist-200" aria-label="Readings and cellar work">

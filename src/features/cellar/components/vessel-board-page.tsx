@@ -1,6 +1,6 @@
 import { useEffect } from 'react';
 import { Link, Navigate, useSearchParams } from 'react-router-dom';
-import { ErrorState, Loading, EmptyState, cx } from '../../../components/ui';
+import { EmptyState, ErrorState, LinkButton, Loading, cx } from '../../../components/ui';
 import { VESSEL_STATUS_LABELS, VESSEL_TYPE_LABELS, type BoardVessel } from '../../../../shared/schemas/cellar';
 import { useCurrentUser } from '../../../app/current-user';
 import { show, showVolume } from '../../../lib/units';
@@ -104,9 +104,7 @@ export function VesselBoardPage() {
     <div className="space-y-4">
       <div className="flex flex-wrap items-end justify-between gap-3">
         <h1 className="text-3xl font-bold">Vessel board</h1>
-        <Link to="/cellar/vessels" className="inline-flex min-h-touch items-center rounded-lg border-2 border-cellar-800 px-4 font-semibold text-cellar-800 hover:bg-cellar-100">
-          Manage vessels
-        </Link>
+        <LinkButton to="/cellar/vessels">Manage vessels</LinkButton>
       </div>
       {me.role === 'head_brewer' && <AlertsPanel />}
       {data.length === 0 ? (

@@ -1,5 +1,4 @@
-import { Link } from 'react-router-dom';
-import { Button, EmptyState, ErrorState, Loading, PageHeader } from '../../../components/ui';
+import { Button, EmptyState, ErrorState, LinkButton, Loading, PageHeader } from '../../../components/ui';
 import { QrCode } from '../../../components/qr-code';
 import { VESSEL_TYPE_LABELS } from '../../../../shared/schemas/cellar';
 import { useVessels } from '../api/vessels';
@@ -19,9 +18,9 @@ export function VesselLabelsPage() {
         subtitle="Print on weatherproof label stock. Scanning a label opens the batch in that vessel now."
         actions={
           <div className="no-print flex gap-2">
-            <Link to="/cellar/vessels" className="inline-flex min-h-touch items-center rounded-lg px-4 font-semibold text-cellar-700 hover:bg-mist-100">
+            <LinkButton variant="quiet" to="/cellar/vessels">
               Vessels
-            </Link>
+            </LinkButton>
             <Button onClick={() => window.print()}>Print</Button>
           </div>
         }

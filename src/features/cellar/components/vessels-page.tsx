@@ -1,8 +1,7 @@
 import { useState } from 'react';
-import { Link } from 'react-router-dom';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { Button, Dialog, EmptyState, ErrorState, Loading, PageHeader, SelectField, Table, Td, TextField, Th, useToast } from '../../../components/ui';
+import { Button, Dialog, EmptyState, ErrorState, LinkButton, Loading, PageHeader, SelectField, Table, Td, TextField, Th, useToast } from '../../../components/ui';
 import { kpaToPsi, lToUsBbl } from '../../../../shared/brewing';
 import { VESSEL_STATUS_LABELS, VESSEL_TYPE_LABELS, vesselInputSchema, type VesselInput, type VesselView } from '../../../../shared/schemas/cellar';
 import { useCurrentUser } from '../../../app/current-user';
@@ -88,9 +87,7 @@ export function VesselsPage() {
         subtitle="Fermenters and bright tanks, with the pressure each is rated for."
         actions={
           <div className="flex gap-2">
-            <Link to="/cellar/vessels/labels" className="inline-flex min-h-touch items-center rounded-lg border-2 border-cellar-800 px-4 font-semibold text-cellar-800 hover:bg-cellar-100">
-              Print labels
-            </Link>
+            <LinkButton to="/cellar/vessels/labels">Print labels</LinkButton>
             {isHead && <Button onClick={() => setEditing('new')}>Add a vessel</Button>}
           </div>
         }

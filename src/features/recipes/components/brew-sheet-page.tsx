@@ -1,9 +1,9 @@
 import type { ReactNode } from 'react';
-import { Link, useParams } from 'react-router-dom';
+import { useParams } from 'react-router-dom';
 import { BrewingInputError, headPressureKpa, kpaToPsi, sgFromPoints, gravityPoints, doseBasisLabel, roundForMeasuring } from '../../../../shared/brewing';
 import { SALT_LABELS } from '../../../../shared/schemas/recipes';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
-import { Button, Caution, ErrorState, Loading } from '../../../components/ui';
+import { Button, Caution, ErrorState, LinkButton, Loading } from '../../../components/ui';
 import { useCurrentUser } from '../../../app/current-user';
 import { show, showGrain, showMeasured, showSmallWeight, showVolume } from '../../../lib/units';
 import { useScale, type ScaleResult } from '../api/scale-version';
@@ -247,9 +247,7 @@ export function BrewSheetPage() {
     <>
       <div className="no-print mb-4 flex flex-wrap gap-2">
         <Button onClick={() => window.print()}>Print</Button>
-        <Link to={`/recipes/${recipeId}/versions/${versionId}/scale?${new URLSearchParams(Object.entries(target).map(([k, x]) => [k, String(x)])).toString()}`}>
-          <Button variant="secondary">Back to scaling</Button>
-        </Link>
+        <LinkButton to={`/recipes/${recipeId}/versions/${versionId}/scale?${new URLSearchParams(Object.entries(target).map(([k, x]) => [k, String(x)])).toString()}`}>Back to scaling</LinkButton>
       </div>
       <Sheet data={scale.data} system={me.brewery.unitSystem} />
     </>

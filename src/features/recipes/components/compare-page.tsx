@@ -1,5 +1,5 @@
-import { Link, useParams, useSearchParams } from 'react-router-dom';
-import { Card, ErrorState, Loading, PageHeader, Table, Td, Th, cx } from '../../../components/ui';
+import { useParams, useSearchParams } from 'react-router-dom';
+import { Card, ErrorState, LinkButton, Loading, PageHeader, Table, Td, Th, cx } from '../../../components/ui';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
 import { useCurrentUser } from '../../../app/current-user';
 import { show, showGrain, showSmallWeight, showVolume } from '../../../lib/units';
@@ -75,7 +75,7 @@ export function ComparePage() {
       <PageHeader
         title={`${recipe.name}: version ${left.version.number} and ${right.version.number}`}
         subtitle={`${differences.length} difference${differences.length === 1 ? '' : 's'}`}
-        actions={<Link to={`/recipes/${recipeId}`} className="flex min-h-touch items-center px-3 font-semibold text-cellar-700 underline">All versions</Link>}
+        actions={<LinkButton variant="quiet" className="underline" to={`/recipes/${recipeId}`}>All versions</LinkButton>}
       />
       <div className="mb-4 grid gap-4 md:grid-cols-2">
         {[left, right].map((v) => (

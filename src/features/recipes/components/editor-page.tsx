@@ -1,6 +1,6 @@
 import { useNavigate, useParams } from 'react-router-dom';
 import type { CreateRecipeInput } from '../../../../shared/schemas/recipes';
-import { Button, Caution, EmptyState, ErrorState, Loading, PageHeader } from '../../../components/ui';
+import { Caution, EmptyState, ErrorState, LinkButton, Loading, PageHeader } from '../../../components/ui';
 import { useCurrentUser } from '../../../app/current-user';
 import { ApiError } from '../../../lib/api-client';
 import { useToast } from '../../../components/ui';
@@ -11,7 +11,6 @@ import { useRecipe } from '../api/get-recipe';
 import { useCreateRecipe, useSaveVersion, useUpdateRecipe } from '../api/save-recipe';
 import { RecipeEditor } from './recipe-editor';
 import { NEW_RECIPE } from './new-recipe';
-import { Link } from 'react-router-dom';
 
 const failure = (error: unknown) =>
   error instanceof ApiError ? { fieldErrors: error.fields, message: error.message } : { message: 'Something went wrong. Nothing was lost: try again.' };
@@ -60,9 +59,9 @@ export function EditorPage() {
         subtitle={`${v.changeNote} — ${v.authorName}, ${new Date(v.createdAt).toLocaleDateString()}`}
         actions={
           <>
-            <Link to={`/recipes/${recipeId}`} className="flex min-h-touch items-center px-3 font-semibold text-cellar-700 underline">All versions</Link>
-            <Link to={`/recipes/${recipeId}/versions/${versionId}/scale`} className="flex min-h-touch items-center px-3 font-semibold text-cellar-700 underline">Scale</Link>
-            <Link to={`/recipes/${recipeId}/versions/${versionId}/brew-sheet`} className="flex min-h-touch items-center px-3 font-semibold text-cellar-700 underline">Brew sheet</Link>
+            <LinkButton variant="quiet" className="underline" to={`/recipes/${recipeId}`}>All versions</LinkButton>
+            <LinkButton variant="quiet" className="underline" to={`/recipes/${recipeId}/versions/${versionId}/scale`}>Scale</LinkButton>
+            <LinkButton variant="quiet" className="underline" to={`/recipes/${recipeId}/versions/${versionId}/brew-sheet`}>Brew sheet</LinkButton>
           </>
         }
       />
@@ -93,7 +92,7 @@ export function NewRecipePage() {
   const first = equipment.data[0];
   if (!first) {
     return (
-      <EmptyState title="Add your brewhouse first" action={<Link to="/library"><Button>Add equipment</Button></Link>}>
+      <EmptyState title="Add your brewhouse first" action={<LinkButton variant="primary" to="/library">Add equipment</LinkButton>}>
         A recipe is written for a brewhouse: its efficiency and losses turn the recipe into weights and volumes.
       </EmptyState>
     );

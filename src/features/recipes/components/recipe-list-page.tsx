@@ -10,7 +10,7 @@ import {
   type SortingState,
 } from '@tanstack/react-table';
 import { srmToHex } from '../../../../shared/brewing';
-import { Button, EmptyState, ErrorState, Loading, PageHeader, SelectField, Table, Td, TextField, Th } from '../../../components/ui';
+import { EmptyState, ErrorState, LinkButton, Loading, PageHeader, SelectField, Table, Td, TextField, Th } from '../../../components/ui';
 import { useCurrentUser } from '../../../app/current-user';
 import { useRecipeList } from '../api/list-recipes';
 import type { RecipeListRow } from '../../../../shared/schemas/recipes';
@@ -81,7 +81,7 @@ export function RecipeListPage() {
       <PageHeader
         title="Recipes"
         subtitle="Every beer, its latest version and how it was last brewed."
-        actions={me.role === 'head_brewer' && <Link to="/recipes/new"><Button>New recipe</Button></Link>}
+        actions={me.role === 'head_brewer' && <LinkButton variant="primary" to="/recipes/new">New recipe</LinkButton>}
       />
       {recipes.isPending ? (
         <Loading label="Loading recipes" />

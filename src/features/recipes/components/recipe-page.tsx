@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { Link, useNavigate, useParams } from 'react-router-dom';
 import { srmToHex } from '../../../../shared/brewing';
-import { Button, Card, ErrorState, Loading, PageHeader, Table, Td, Th } from '../../../components/ui';
+import { Button, Card, ErrorState, LinkButton, Loading, PageHeader, Table, Td, Th } from '../../../components/ui';
 import { useCurrentUser } from '../../../app/current-user';
 import { showVolume } from '../../../lib/units';
 import { useEquipment } from '../../library/api/equipment';
@@ -31,9 +31,9 @@ export function RecipePage() {
         subtitle={`${r.style} · ${r.status} · ${r.description}`}
         actions={
           <>
-            <Link to={`/recipes/${r.id}/versions/${latest.id}`}><Button variant={me.role === 'head_brewer' ? 'primary' : 'secondary'}>{me.role === 'head_brewer' ? `Edit version ${latest.number}` : `Open version ${latest.number}`}</Button></Link>
-            <Link to={`/recipes/${r.id}/versions/${latest.id}/scale`}><Button variant="secondary">Scale</Button></Link>
-            <Link to={`/recipes/${r.id}/versions/${latest.id}/brew-sheet`}><Button variant="secondary">Brew sheet</Button></Link>
+            <LinkButton variant={me.role === 'head_brewer' ? 'primary' : 'secondary'} to={`/recipes/${r.id}/versions/${latest.id}`}>{me.role === 'head_brewer' ? `Edit version ${latest.number}` : `Open version ${latest.number}`}</LinkButton>
+            <LinkButton variant="secondary" to={`/recipes/${r.id}/versions/${latest.id}/scale`}>Scale</LinkButton>
+            <LinkButton variant="secondary" to={`/recipes/${r.id}/versions/${latest.id}/brew-sheet`}>Brew sheet</LinkButton>
           </>
         }
       />

@@ -1,6 +1,6 @@
 import { useState } from 'react';
-import { Link, useNavigate, useParams, useSearchParams } from 'react-router-dom';
-import { Button, Card, Dialog, ErrorState, Loading, PageHeader, SelectField, TextField, useToast } from '../../../components/ui';
+import { useNavigate, useParams, useSearchParams } from 'react-router-dom';
+import { Button, Card, Dialog, ErrorState, LinkButton, Loading, PageHeader, SelectField, TextField, useToast } from '../../../components/ui';
 import { useCurrentUser } from '../../../app/current-user';
 import { ApiError } from '../../../lib/api-client';
 import { UNITS, showVolume } from '../../../lib/units';
@@ -104,10 +104,10 @@ export function ScalePage() {
         subtitle="Weights are re-solved for the same OG, IBU and water ppm on the new brewhouse; adjuncts and spices follow their dose per volume."
         actions={
           <>
-            <Link to={`/recipes/${recipeId}/versions/${versionId}`} className="flex min-h-touch items-center px-3 font-semibold text-cellar-700 underline">Back to the recipe</Link>
-            <Link to={`/recipes/${recipeId}/versions/${versionId}/brew-sheet?${search}`}><Button variant="secondary">Brew sheet</Button></Link>
+            <LinkButton variant="quiet" className="underline" to={`/recipes/${recipeId}/versions/${versionId}`}>Back to the recipe</LinkButton>
+            <LinkButton variant="secondary" to={`/recipes/${recipeId}/versions/${versionId}/brew-sheet?${search}`}>Brew sheet</LinkButton>
             {me.role === 'head_brewer' && <Button variant="secondary" onClick={() => setSaving(true)}>Save as new version</Button>}
-            {me.role === 'head_brewer' && <Link to={`/batches/new?${planSearch.toString()}`}><Button>Plan a batch</Button></Link>}
+            {me.role === 'head_brewer' && <LinkButton variant="primary" to={`/batches/new?${planSearch.toString()}`}>Plan a batch</LinkButton>}
           </>
         }
       />

@@ -1,6 +1,5 @@
-import { Link } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
-import { ErrorState, Loading } from '../../../components/ui';
+import { ErrorState, LinkButton, Loading } from '../../../components/ui';
 import { useCurrentUser } from '../../../app/current-user';
 import { beersQuery } from '../api/list-beers';
 import { ColourSwatch, abvText, servingLine } from './beer-facts';
@@ -19,9 +18,9 @@ export function BarBoardPage() {
     <div className="fixed inset-0 z-50 overflow-auto bg-cellar-900 p-8 text-white">
       <header className="mb-8 flex items-center justify-between gap-4">
         <h1 className="text-5xl font-bold">On tap at {me.brewery.name}</h1>
-        <Link to="/taproom" className="no-print inline-flex min-h-touch items-center rounded-lg border-2 border-white/70 px-4 font-semibold hover:bg-cellar-700">
+        <LinkButton variant="onDark" className="no-print" to="/taproom">
           Close
-        </Link>
+        </LinkButton>
       </header>
       {beers.isPending ? (
         <Loading label="Reading the tap list" />

@@ -1,5 +1,5 @@
-import { Link, useParams } from 'react-router-dom';
-import { Button, Caution, ErrorState, Loading, PageHeader } from '../../../components/ui';
+import { useParams } from 'react-router-dom';
+import { Button, Caution, ErrorState, LinkButton, Loading, PageHeader } from '../../../components/ui';
 import { useCurrentUser } from '../../../app/current-user';
 import { srmToEbc } from '../../../../shared/brewing';
 import { useBeer } from '../api/get-beer';
@@ -43,9 +43,9 @@ export function BriefingSheetPage() {
         subtitle="Print it for the bar, or read it before the shift."
         actions={
           <>
-            <Link to="/taproom" className="inline-flex min-h-touch items-center rounded-lg px-4 font-semibold text-cellar-700 hover:bg-mist-100">
+            <LinkButton variant="quiet" to="/taproom">
               Back to the taproom
-            </Link>
+            </LinkButton>
             <Button onClick={() => window.print()}>Print</Button>
           </>
         }

@@ -1,5 +1,4 @@
-import { Link } from 'react-router-dom';
-import { EmptyState, ErrorState, Loading, PageHeader, Table, Td, Th } from '../../../components/ui';
+import { EmptyState, ErrorState, LinkButton, Loading, PageHeader, Table, Td, Th } from '../../../components/ui';
 import { BATCH_STATUS_LABELS, type BatchStatus } from '../../../../shared/schemas/batches';
 import { useReleases } from '../api/list-releases';
 import { useCurrentUser } from '../../../app/current-user';
@@ -41,17 +40,17 @@ export function ReleasesPage() {
                 <Td>{r.state ? STATE_TEXT[r.state] : 'Not started'}</Td>
                 <Td>
                   <span className="flex flex-wrap gap-2">
-                    <Link className="inline-flex min-h-touch items-center rounded-lg px-3 font-semibold text-cellar-700 hover:bg-mist-100" to={`/batches/${r.batchId}/tasting`}>
+                    <LinkButton variant="quiet" to={`/batches/${r.batchId}/tasting`}>
                       Tasting notes
-                    </Link>
+                    </LinkButton>
                     {me.role === 'head_brewer' && (
-                      <Link
-                        className="inline-flex min-h-touch items-center rounded-lg bg-cellar-800 px-3 font-semibold text-white hover:bg-cellar-700"
+                      <LinkButton
+                        variant="primary"
                         to={`/batches/${r.batchId}/release`}
                         aria-label={`Release ${r.beerName} (${r.number})`}
                       >
                         {r.state === 'on_tap' ? 'View release' : 'Prepare release'}
-                      </Link>
+                      </LinkButton>
                     )}
                   </span>
                 </Td>
