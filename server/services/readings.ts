@@ -4,7 +4,7 @@
  * that carries values adds the reading's corrected row; readers take the rows in force (IN_FORCE).
  */
 import { createHash } from 'node:crypto';
-import { Op, Transaction } from 'sequelize';
+import { Op, QueryTypes, Transaction } from 'sequelize';
 import { sequelize } from '../config/database';
 import { Batch, BatchLogEntry, GravityReading, IN_FORCE } from '../models';
 import { badRequest, conflict } from '../errors';
@@ -125,19 +125,21 @@ export async function appendBatchLogEntry(actor: LogActor, batchId: number, inpu
 
 async function writeReadingCorrection(actor: LogActor, correction: BatchLogEntry, m: Measurements | undefined, transaction: Transaction): Promise<boolean> {
   if (m?.gravitySg === undefined && m?.tempC === undefined && m?.ph === undefined) return false;
-  // The reading the corrected entry stands for: its own row, or (for a correction that carried no values) its target's.
-  let target: number | null = Number(correction.correctsEntryId);
-  let readingEntryId: number | null = null;
-  while (target !== null && readingEntryId === null) {
-    const row = await GravityReading.findOne({ where: { logEntryId: target }, attributes: ['readingEntryId'], transaction });
-    if (row) readingEntryId = Number(row.readingEntryId);
-    else {
-      const entry: BatchLogEntry | null = await BatchLogEntry.findOne({ where: { id: target, batchId: correction.batchId, kind: 'correction' }, attributes: ['correctsEntryId'], transaction });
-      target = entry?.correctsEntryId == null ? null : Number(entry.correctsEntryId);
-    }
-  }
-  if (readingEntryId === null) return false;
-  const current = await GravityReading.findOne({ where: { readingEntryId }, order: [['id', 'DESC']], transaction, rejectOnEmpty: true });
+  // The row in force of the reading the corrected entry stands for: found through the entry's own row, or
+  // (for a correction that carried no values) through the entries it corrects in turn.
+  const [current] = await sequelize.query<GravityReading>(
+    `WITH RECURSIVE chain (id, corrects) AS (
+       SELECT id, corrects_entry_id FROM batch_log_entries WHERE id = :target AND batch_id = :batchId
+       UNION ALL
+       SELECT e.id, e.corrects_entry_id FROM batch_log_entries e JOIN chain c ON e.id = c.corrects AND e.batch_id = :batchId
+     )
+     SELECT g.* FROM gravity_readings g
+      WHERE g.reading_entry_id = (SELECT r.reading_entry_id FROM chain JOIN gravity_readings r ON r.log_entry_id = chain.id LIMIT 1)
+      ORDER BY g.id DESC LIMIT 1`,
+    { type: QueryTypes.SELECT, model: GravityReading, mapToModel: true, replacements: { target: correction.correctsEntryId, batchId: correction.batchId }, transaction },
+  );
+  if (!current) return false;
+  const readingEntryId = Number(current.readingEntryId);
   await GravityReading.create(
     {
       breweryId: actor.breweryId,

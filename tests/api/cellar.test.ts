@@ -136,17 +136,21 @@ describe('correcting a reading', () => {
     const second = await correct(batch.id, { correctsEntryId: first.body.id, reason: 'Thermometer read 20 °C', measurements: { tempC: 20 } });
     expect(second.status).toBe(201);
     // A correction without values of the first reading is a remark: the reading stands.
-    expect((await correct(batch.id, { correctsEntryId: view.readings[0]!.logEntryId, reason: 'Sample drawn from the racking arm' })).status).toBe(201);
+    const remark = await correct(batch.id, { correctsEntryId: view.readings[0]!.logEntryId, reason: 'Sample drawn from the racking arm' });
+    expect(remark.status).toBe(201);
     view = await cellarView(batch.id);
     expect(view.readings.map((r) => [r.sg, r.tempC])).toEqual([
       [1.05, 19],
       [1.02, 19],
       [1.01, 20],
     ]);
+    // A correction of that remark with a value reaches back to the reading it was about.
+    expect((await correct(batch.id, { correctsEntryId: remark.body.id, reason: 'Re-read from the fermenter', measurements: { gravitySg: 1.049 } })).status).toBe(201);
+    expect((await cellarView(batch.id)).readings.map((r) => r.sg)).toEqual([1.049, 1.02, 1.01]);
 
     // Nothing was changed in place: the three readings' entries and first rows are all still there.
     expect(await BatchLogEntry.count({ where: { batchId: batch.id, kind: 'reading' } })).toBe(3);
-    expect(await GravityReading.count({ where: { batchId: batch.id } })).toBe(5);
+    expect(await GravityReading.count({ where: { batchId: batch.id } })).toBe(6);
     const stored = await Batch.findByPk(batch.id, { rejectOnEmpty: true });
     expect((await finalNumbers(stored)).fg).toBe(1.01);
   });
