@@ -3,8 +3,9 @@
  * readings, no reading for the plan's interval. The first two are raised once per batch, "no reading" once per
  * lapse (a unique index on batch, kind and occasion), shown in the app and e-mailed to every head brewer.
  */
-import { Op, UniqueConstraintError } from 'sequelize';
-import { Alert, Batch, BatchLogEntry, GravityReading, IN_FORCE, User } from '../models';
+import { Op, QueryTypes, UniqueConstraintError } from 'sequelize';
+import { sequelize } from '../config/database';
+import { Alert, Batch, BatchLogEntry, GravityReading, IN_FORCE, readingInForce, User } from '../models';
 import { notFound } from '../errors';
 import { sendMail, publicLink } from './mail';
 import { cellarPlanFor } from './cellar';
@@ -71,13 +72,22 @@ export async function sweepOverdueReadings(now = new Date()): Promise<number> {
     if (batch) await emailAlert(alert, batch);
   }
   const batches = await Batch.findAll({ where: { status: 'fermenting' } });
+  if (batches.length === 0) return 0;
+  const timeByBatch = async (sql: string) => {
+    const rows = await sequelize.query<{ batchId: number; at: Date }>(sql, { type: QueryTypes.SELECT, replacements: { ids: batches.map((b) => b.id) } });
+    return new Map(rows.map((r) => [Number(r.batchId), new Date(r.at)]));
+  };
+  const [lastReadings, knockouts] = await Promise.all([
+    timeByBatch(`SELECT g.batch_id AS batchId, MAX(g.taken_at) AS at FROM gravity_readings g
+                  WHERE g.batch_id IN (:ids) AND ${readingInForce('g')} GROUP BY g.batch_id`),
+    timeByBatch(`SELECT batch_id AS batchId, MIN(captured_at) AS at FROM batch_log_entries
+                  WHERE batch_id IN (:ids) AND step_key = 'knockout-end' GROUP BY batch_id`),
+  ]);
   let raised = 0;
   for (const batch of batches) {
     const plan = await cellarPlanFor(batch);
-    const last = await GravityReading.findOne({ where: { batchId: batch.id, [Op.and]: [IN_FORCE] }, order: [['takenAt', 'DESC']] });
     // Without a reading yet, the wait runs from knockout (or, with no knockout logged, from the batch's last change).
-    const knockout = last ? null : await BatchLogEntry.findOne({ where: { batchId: batch.id, stepKey: 'knockout-end' }, order: [['sequence', 'ASC']] });
-    const since = last ? new Date(last.takenAt) : new Date(knockout?.capturedAt ?? batch.updatedAt);
+    const since = lastReadings.get(batch.id) ?? knockouts.get(batch.id) ?? batch.updatedAt;
     if (readingOverdue(since.getTime(), now.getTime(), plan.readingIntervalHours)) {
       // Once per lapse: the next reading starts a new one.
       if (await raise(batch, 'overdue', `No gravity reading for over ${plan.readingIntervalHours} hours`, since.toISOString())) raised += 1;

@@ -143,12 +143,12 @@ interface AppendState {
 
 /**
  * Everything an append decides on, in one locking read: the batch (scoped to the brewery), its log's head,
- * this write's idempotency record and, when asked, the entry to correct and whether the brew day is signed.
+ * this write's idempotency record (when a key is given) and, when asked, the entry to correct and whether the brew day is signed.
  * Locking the batch row serialises the writers of one batch, so the chain never forks (the unique
  * (batch_id, sequence) index would refuse a fork anyway). READ COMMITTED keeps the read to the rows it finds:
  * no gap locks on the idempotency index, where writers of different batches would otherwise deadlock.
  */
-async function lockForAppend(breweryId: number, batchId: number, key: string, correctsEntryId: number | null, checkSigned: boolean, transaction: Transaction) {
+async function lockForAppend(breweryId: number, batchId: number, key: string | null, correctsEntryId: number | null, checkSigned: boolean, transaction: Transaction) {
   const [state] = await sequelize.query<AppendState>(
     `SELECT b.status, h.sequence AS lastSequence, h.hash AS lastHash,
             k.scope AS keyScope, k.request_hash AS keyRequestHash, k.result_id AS keyResultId, t.kind AS targetKind,
@@ -265,7 +265,7 @@ export async function appendLogEntries(actor: LogActor, batchId: number, writes:
   if (writes.some((w) => BREW_DAY_KINDS.includes(w.input.kind) || w.input.correctsEntryId != null)) {
     throw new Error('appendLogEntries takes cellar entries only: brew-day entries and corrections go through appendLogEntry');
   }
-  const state = await lockForAppend(actor.breweryId, batchId, '', null, false, transaction);
+  const state = await lockForAppend(actor.breweryId, batchId, null, null, false, transaction);
   if (!state) throw notFound('This batch');
   const used = new Map(
     (await IdempotencyKey.findAll({ where: { breweryId: actor.breweryId, key: writes.map((w) => w.meta.idempotencyKey) }, transaction })).map((k) => [k.key, k]),
