@@ -2,11 +2,12 @@
 // brewer's release. Each batch carries a full record (brew-day log with its OG, cellar readings, packaging,
 // tasting notes) so the released numbers come from the logs. Every name, number and word is invented.
 import type { Transaction } from 'sequelize';
-import { Batch, GravityReading, PackagingRun, Recipe, RecipeVersion, Release } from '../models';
+import { Batch, PackagingRun, Recipe, RecipeVersion, Release } from '../models';
 import { freezeRecipeVersion, planForBatch } from '../services/recipe-plans';
 import { createBatchFromPlan } from '../services/batches';
 import { appendLogEntry, type LogActor } from '../services/batch-log';
 import { addTastingNote } from '../services/tasting';
+import { writeReading } from '../services/readings';
 import { finalNumbers } from '../services/release';
 import { brewDaySteps } from '../../shared/batches/brew-day';
 import { abv, ABV_METHOD_SHOWN, KEG_SIZES, lineVolumeL, type PackageLine } from '../../shared/brewing';
@@ -117,20 +118,11 @@ async function brew(ctx: DemoContext, beer: DemoBeer, recipe: Recipe, t: Transac
   }
   await batch.update({ status: 'fermenting' }, { transaction: t });
 
-  // Daily-ish readings falling to the final gravity, recorded as the cellar records them: a log entry and its reading row.
+  // Daily-ish readings falling to the final gravity, recorded as the cellar records them (a log entry and its reading row).
   const readings = [og - (og - fg) * 0.45, og - (og - fg) * 0.85, fg + 0.001, fg];
   for (const [i, raw] of readings.entries()) {
     const sg = Math.round(raw * 1000) / 1000;
-    const m = meta(at(60 * 24 * (2 + i * 2)));
-    await appendLogEntry(assistant, batch.id, { kind: 'reading', method: 'hydrometer', gravity: sg, gravityUnit: 'sg', temp: 19, tempUnit: 'c', sg, tempC: 19 }, m, {
-      transaction: t,
-      onInsert: async (entry, tx) => {
-        await GravityReading.create(
-          { breweryId: brewery.id, batchId: batch.id, logEntryId: Number(entry.id), readingEntryId: Number(entry.id), takenAt: m.capturedAt, sg, enteredValue: sg, enteredUnit: 'sg', tempC: 19, ph: null, method: 'hydrometer', authorName: assistant.displayName },
-          { transaction: tx },
-        );
-      },
-    });
+    await writeReading(assistant, batch.id, { kind: 'reading', method: 'hydrometer', gravity: sg, gravityUnit: 'sg', temp: 19, tempUnit: 'c' }, meta(at(60 * 24 * (2 + i * 2))), t);
   }
   await batch.update({ status: 'conditioning' }, { transaction: t });
   if (beer.stage === 'conditioning') return batch;

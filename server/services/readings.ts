@@ -58,21 +58,21 @@ async function readyForReadings(actor: LogActor, batchId: number, transaction: T
   if (batch.status === 'brewing') await changeBatchStatus(actor, batchId, { status: 'fermenting' }, transaction);
 }
 
-/** A reading's projected row, from its log entry (which holds the values in SI) and what was entered. */
-function readingRow(actor: LogActor, batchId: number, entry: BatchLogEntry, input: ReadingEntryInput) {
-  const { sg, tempC } = entry.data as { sg: number; tempC: number | null };
+/** A reading's projected row, from its log entry (which holds what was entered and the values in SI). */
+function readingRow(actor: LogActor, entry: BatchLogEntry) {
+  const d = entry.data as Omit<ReadingEntryInput, 'kind'> & { sg: number; tempC: number | null };
   return {
     breweryId: actor.breweryId,
-    batchId,
+    batchId: Number(entry.batchId),
     logEntryId: Number(entry.id),
     readingEntryId: Number(entry.id),
     takenAt: entry.capturedAt,
-    sg,
-    enteredValue: input.gravity,
-    enteredUnit: input.gravityUnit,
-    tempC,
-    ph: input.ph ?? null,
-    method: input.method,
+    sg: d.sg,
+    enteredValue: d.gravity,
+    enteredUnit: d.gravityUnit,
+    tempC: d.tempC,
+    ph: d.ph ?? null,
+    method: d.method,
     authorName: actor.displayName,
   };
 }
@@ -85,13 +85,12 @@ export async function writeReading(
   meta: WriteMeta,
   transaction?: Transaction,
 ): Promise<GravityReading> {
-  const { sg, tempC } = readingInSi(input);
   let reading: GravityReading | null = null;
-  const entry = await appendLogEntry(actor, batchId, { ...input, sg, tempC }, meta, {
+  const entry = await appendLogEntry(actor, batchId, { ...input, ...readingInSi(input) }, meta, {
     transaction,
     onInsert: async (e, t) => {
       await readyForReadings(actor, batchId, t);
-      reading = await GravityReading.create(readingRow(actor, batchId, e, input), { transaction: t });
+      reading = await GravityReading.create(readingRow(actor, e), { transaction: t });
     },
   });
   // A replayed key returns the first entry, whose reading was written with it.
@@ -201,7 +200,7 @@ export async function importProbeCsv(actor: LogActor, batchId: number, input: Pr
     throw badRequest(`${result.errors} row${result.errors > 1 ? 's have' : ' has'} errors; nothing was imported. Fix the file and try again.`, fields);
   }
   if (result.toImport === 0) return { ...result, imported: true };
-  const readings = rows
+  const writes = rows
     .filter((row) => row.status === 'ok')
     .map((row) => {
       const reading: ReadingEntryInput = {
@@ -212,18 +211,13 @@ export async function importProbeCsv(actor: LogActor, batchId: number, input: Pr
         temp: Number(row.temp.replace(',', '.')),
         tempUnit: input.tempUnit,
       };
-      return { reading, meta: { ...meta, idempotencyKey: rowKey(meta.idempotencyKey, row.line), capturedAt: new Date(row.takenAt!) } };
+      return { input: { ...reading, ...readingInSi(reading) }, meta: { ...meta, idempotencyKey: rowKey(meta.idempotencyKey, row.line), capturedAt: new Date(row.takenAt!) } };
     });
   await sequelize.transaction({ isolationLevel: Transaction.ISOLATION_LEVELS.READ_COMMITTED }, async (transaction) => {
-    const writes = readings.map(({ reading, meta: m }) => ({ input: { ...reading, ...readingInSi(reading) }, meta: m }));
     const entries = await appendLogEntries(actor, batchId, writes, transaction);
     if (entries.length === 0) return;
     await readyForReadings(actor, batchId, transaction);
-    const byKey = new Map(readings.map((r) => [r.meta.idempotencyKey, r.reading]));
-    await GravityReading.bulkCreate(
-      entries.map((e) => readingRow(actor, batchId, e, byKey.get(e.idempotencyKey)!)),
-      { transaction },
-    );
+    await GravityReading.bulkCreate(entries.map((e) => readingRow(actor, e)), { transaction });
   });
   await evaluateReadingAlerts(actor.breweryId, batchId);
   return { ...result, imported: true };
