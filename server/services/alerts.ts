@@ -8,7 +8,8 @@ import { sequelize } from '../config/database';
 import { Alert, Batch, BatchLogEntry, GravityReading, IN_FORCE, readingInForce, User } from '../models';
 import { notFound } from '../errors';
 import { sendMail, publicLink } from './mail';
-import { cellarPlanFor } from './cellar';
+import { logger } from '../logger';
+import { cellarPlanFor, cellarPlansFor } from './cellar';
 import { crossesDRestTrigger, dRestTriggerSg, gravityStalled, readingOverdue } from '../../shared/brewing';
 import type { AlertKind, AlertView } from '../../shared/schemas/cellar';
 
@@ -25,7 +26,7 @@ async function raise(batch: Batch, kind: AlertKind, message: string, occasion = 
   }
   await emailAlert(alert, batch).catch((err: unknown) => {
     // The reading is saved and the alert shows in the app; the sweep sends the e-mail later.
-    console.error(`alert ${alert.id} e-mail failed`, err);
+    logger.error({ err, alertId: alert.id }, 'alert e-mail failed');
   });
   return true;
 }
@@ -83,9 +84,10 @@ export async function sweepOverdueReadings(now = new Date()): Promise<number> {
     timeByBatch(`SELECT batch_id AS batchId, MIN(captured_at) AS at FROM batch_log_entries
                   WHERE batch_id IN (:ids) AND step_key = 'knockout-end' GROUP BY batch_id`),
   ]);
+  const plans = await cellarPlansFor(batches);
   let raised = 0;
   for (const batch of batches) {
-    const plan = await cellarPlanFor(batch);
+    const plan = plans.get(batch.id)!;
     // Without a reading yet, the wait runs from knockout (or, with no knockout logged, from the batch's last change).
     const since = lastReadings.get(batch.id) ?? knockouts.get(batch.id) ?? batch.updatedAt;
     if (readingOverdue(since.getTime(), now.getTime(), plan.readingIntervalHours)) {

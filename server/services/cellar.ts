@@ -126,7 +126,18 @@ const DEFAULT_READING_INTERVAL_HOURS = 24;
 
 /** The batch's cellar plan: saved by the head brewer, or else taken from the frozen recipe plan. */
 export async function cellarPlanFor(batch: Batch, transaction?: Transaction): Promise<CellarPlanView> {
-  const saved = await CellarPlan.findOne({ where: { batchId: batch.id }, transaction });
+  return (await cellarPlansFor([batch], transaction)).get(batch.id)!;
+}
+
+/** The cellar plans of several batches (the vessel board, the overdue sweep) in one query, by batch id. */
+export async function cellarPlansFor(batches: Batch[], transaction?: Transaction): Promise<Map<number, CellarPlanView>> {
+  const saved = batches.length ? await CellarPlan.findAll({ where: { batchId: { [Op.in]: batches.map((b) => b.id) } }, transaction }) : [];
+  const savedByBatch = new Map(saved.map((p) => [p.batchId, p]));
+  return new Map(batches.map((batch) => [batch.id, planView(batch, savedByBatch.get(batch.id))]));
+}
+
+/** A batch's saved cellar plan, or one drawn from its frozen recipe plan with the trade's usual defaults. */
+function planView(batch: Batch, saved: CellarPlan | undefined): CellarPlanView {
   if (saved) {
     return {
       saved: true,
@@ -307,38 +318,37 @@ export async function vesselBoard(breweryId: number, now = new Date()): Promise<
       order: [['capturedAt', 'ASC']],
     }),
   ]);
-  return Promise.all(
-    vessels.map(async (vessel): Promise<BoardVessel> => {
-      const batch = batches.find((b) => b.id === vessel.currentBatchId);
-      if (!batch) return { ...toVesselView(vessel), batch: null };
-      const plan = await cellarPlanFor(batch);
-      const own = readings.filter((r) => r.batchId === batch.id);
-      const latest = own[own.length - 1];
-      const log = entries.filter((e) => e.batchId === batch.id);
-      const done = new Set(log.filter((e) => e.kind === 'action').map((e) => e.stepKey ?? ''));
-      const filled =
-        vessel.type === 'bright_tank'
-          ? log.filter((e) => e.stepKey === 'transfer').at(-1)?.capturedAt
-          : (log.find((e) => e.stepKey === 'knockout-end')?.capturedAt ?? own[0]?.takenAt);
-      const inSince = filled ? new Date(filled) : new Date(`${batch.brewDate}T12:00:00Z`);
-      const lastAt = latest ? new Date(latest.takenAt) : inSince;
-      const taking = batch.status === 'fermenting';
-      return {
-        ...toVesselView(vessel),
-        batch: {
-          id: batch.id,
-          number: batch.number,
-          beerName: batch.beerName,
-          status: batch.status,
-          inSince: inSince.toISOString(),
-          latestSg: latest?.sg ?? null,
-          latestTempC: latest?.tempC ?? null,
-          latestAt: latest ? new Date(latest.takenAt).toISOString() : null,
-          nextAction: nextAction(plan, vessel, done, own.map((r) => ({ atMs: new Date(r.takenAt).getTime(), sg: r.sg }))),
-          nextReadingDueAt: taking ? new Date(lastAt.getTime() + plan.readingIntervalHours * 3_600_000).toISOString() : null,
-          readingOverdue: taking && readingOverdue(lastAt.getTime(), now.getTime(), plan.readingIntervalHours),
-        },
-      };
-    }),
-  );
+  const plans = await cellarPlansFor(batches);
+  return vessels.map((vessel): BoardVessel => {
+    const batch = batches.find((b) => b.id === vessel.currentBatchId);
+    if (!batch) return { ...toVesselView(vessel), batch: null };
+    const plan = plans.get(batch.id)!;
+    const own = readings.filter((r) => r.batchId === batch.id);
+    const latest = own[own.length - 1];
+    const log = entries.filter((e) => e.batchId === batch.id);
+    const done = new Set(log.filter((e) => e.kind === 'action').map((e) => e.stepKey ?? ''));
+    const filled =
+      vessel.type === 'bright_tank'
+        ? log.filter((e) => e.stepKey === 'transfer').at(-1)?.capturedAt
+        : (log.find((e) => e.stepKey === 'knockout-end')?.capturedAt ?? own[0]?.takenAt);
+    const inSince = filled ? new Date(filled) : new Date(`${batch.brewDate}T12:00:00Z`);
+    const lastAt = latest ? new Date(latest.takenAt) : inSince;
+    const taking = batch.status === 'fermenting';
+    return {
+      ...toVesselView(vessel),
+      batch: {
+        id: batch.id,
+        number: batch.number,
+        beerName: batch.beerName,
+        status: batch.status,
+        inSince: inSince.toISOString(),
+        latestSg: latest?.sg ?? null,
+        latestTempC: latest?.tempC ?? null,
+        latestAt: latest ? new Date(latest.takenAt).toISOString() : null,
+        nextAction: nextAction(plan, vessel, done, own.map((r) => ({ atMs: new Date(r.takenAt).getTime(), sg: r.sg }))),
+        nextReadingDueAt: taking ? new Date(lastAt.getTime() + plan.readingIntervalHours * 3_600_000).toISOString() : null,
+        readingOverdue: taking && readingOverdue(lastAt.getTime(), now.getTime(), plan.readingIntervalHours),
+      },
+    };
+  });
 }

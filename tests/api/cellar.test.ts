@@ -5,7 +5,7 @@ import { changeBatchStatus } from '../../server/services/batches';
 import { Alert, AuditEvent, Batch, BatchLogEntry, GravityReading, IdempotencyKey } from '../../server/models';
 import { sweepOverdueReadings } from '../../server/services/alerts';
 import { finalNumbers } from '../../server/services/release';
-import { sequelize } from '../../server/config/database';
+import { queryCounter, sequelize } from '../../server/config/database';
 import { headPressureKpa, KEG_SIZES, platoToSg, refractometerBeerSg, sgToPlato } from '../../shared/brewing';
 import type { BatchCellarView, ProbeImportResult, ReadingView, VesselView } from '../../shared/schemas/cellar';
 
@@ -253,6 +253,26 @@ describe('vessels', () => {
     expect(view.batch.status).toBe('conditioning');
     expect(view.vessel?.id).toBe(tank.id);
     expect(view.actions[0]).toMatchObject({ action: 'transfer', volumeL: 700, toVesselId: tank.id });
+  });
+
+  it('draws the vessel board with as many SQL statements for three filled tanks as for one', async () => {
+    const statements = async () => {
+      queryCounter.count = 0;
+      const res = await t.as.head_brewer.get('/api/cellar/board');
+      expect(res.status).toBe(200);
+      return queryCounter.count;
+    };
+    const fill = async () => {
+      const batch = await knockedOutBatch();
+      const tank = await vessel({ type: 'fermenter' });
+      expect((await t.as.head_brewer.put(`/api/batches/${batch.id}/vessel`).send({ vesselId: tank.id })).status).toBe(200);
+      await postReading(batch.id, reading(1.04));
+    };
+    await fill();
+    const withOne = await statements();
+    await fill();
+    await fill();
+    expect(await statements()).toBe(withOne);
   });
 
   it('stores capacity and rated pressure in SI from bbl and psi, and refuses a duplicate name', async () => {
