@@ -5,7 +5,7 @@ import { existsSync } from 'node:fs';
 import helmet from 'helmet';
 import passport from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
-import { pino, type Logger } from 'pino';
+import type { Logger } from 'pino';
 import { pinoHttp } from 'pino-http';
 import { env, isProduction } from './config/env';
 import { databaseAnswers } from './config/database';
@@ -17,6 +17,7 @@ import { useSignInLimiter } from './middlewares/rate-limit';
 import { errorHandler, notFoundHandler } from './middlewares/error-handler';
 import { apiRouters } from './routes';
 import { devMailRouter } from './dev/mail-page';
+import { logger } from './logger';
 
 passport.use(
   new LocalStrategy({ usernameField: 'email', passwordField: 'password' }, (email, password, done) => {
@@ -26,7 +27,7 @@ passport.use(
   }),
 );
 
-/** `logger` is where request logs and errors go (default: standard output at LOG_LEVEL). */
+/** `logger` is where request logs and errors go (default: the process's logger, server/logger.ts). */
 export function createApp(options: { serveClient?: boolean; logger?: Logger } = {}): Express {
   const app = express();
   app.disable('x-powered-by');
@@ -35,7 +36,8 @@ export function createApp(options: { serveClient?: boolean; logger?: Logger } = 
 
   app.use(
     pinoHttp({
-      logger: options.logger ?? pino<never>({ level: env.LOG_LEVEL }),
+      logger: options.logger ?? logger,
+      customSuccessMessage: (req, res, responseTime) => `${req.method} ${req.url} ${res.statusCode} ${Math.round(responseTime)} ms`,
       genReqId: (_req, res) => {
         const id = randomUUID();
         res.setHeader('x-request-id', id);

@@ -3,6 +3,7 @@ import { sequelize } from './config/database';
 import { durabilityProblems } from './config/durability';
 import { createApp } from './app';
 import { sweepOverdueReadings } from './services/alerts';
+import { logger } from './logger';
 
 /** How often fermenting batches are checked for an overdue gravity reading. */
 const OVERDUE_SWEEP_MS = 15 * 60 * 1000;
@@ -15,7 +16,7 @@ export async function startServer(options: { serveClient?: boolean } = { serveCl
   }
   const app = createApp(options);
   setInterval(() => {
-    sweepOverdueReadings().catch((err: unknown) => console.error('overdue reading check failed', err));
+    sweepOverdueReadings().catch((err: unknown) => logger.error({ err }, 'overdue reading check failed'));
   }, OVERDUE_SWEEP_MS).unref();
   return new Promise((resolve) => {
     const server = app.listen(env.PORT, env.HOST, () => resolve(server));

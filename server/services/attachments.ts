@@ -11,6 +11,7 @@ import { badRequest, conflict, HttpError, notFound, tooLarge } from '../errors';
 import { deleteObject, getObject, putObject } from './storage';
 import { UPLOAD_MAX_BYTES, type AttachmentView } from '../../shared/schemas/taproom';
 import { findBatch } from './batches';
+import { logger } from '../logger';
 
 const THUMBNAIL_PX = 480;
 /** Refuse pictures larger than this (pixels) before decoding: a small file can unpack to gigabytes. */
@@ -172,6 +173,6 @@ export async function removeAttachment(actor: Express.User, id: number): Promise
   }
   await attachment.destroy();
   for (const key of [attachment.storageKey, attachment.thumbnailKey]) {
-    if (key) await deleteObject(key).catch((err: unknown) => console.error(`stored file ${key} was not deleted`, err));
+    if (key) await deleteObject(key).catch((err: unknown) => logger.error({ err, key }, 'stored file was not deleted'));
   }
 }
