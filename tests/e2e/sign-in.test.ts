@@ -53,4 +53,18 @@ describe('signing in (Chromium)', () => {
     await signIn(page, DEMO_PEOPLE[2]!.email);
     await expect.poll(() => page.getByRole('navigation', { name: 'Main' }).textContent()).not.toContain('Team');
   });
+
+  it('the taproom manager who types a brewing address is told it is not for their role, with no form to fill', async () => {
+    const page = await context.newPage();
+    await page.context().clearCookies();
+    await signIn(page, DEMO_PEOPLE[2]!.email);
+    for (const address of ['/team', '/reports/production', '/batches/new']) {
+      await page.goto(address);
+      await expect.poll(() => page.getByText('Not open to your role').count()).toBe(1);
+      expect(await page.locator('main form, main input, main select').count()).toBe(0);
+    }
+    expect(await page.getByText('This page is for the head brewer.').count()).toBe(1);
+    await page.getByRole('link', { name: 'Go to the home screen' }).click();
+    await expect.poll(() => page.getByText('Not open to your role').count()).toBe(0);
+  });
 });

@@ -1,10 +1,11 @@
-import { Navigate, NavLink, Outlet, ScrollRestoration, useLocation, useNavigate } from 'react-router-dom';
+import { Navigate, NavLink, Outlet, ScrollRestoration, useLocation, useMatches, useNavigate } from 'react-router-dom';
 import { useMe } from '../../features/auth/api/me';
 import { OutboxBanner, SignOutButton } from '../../features/batches/components/outbox-status';
 import { ROLE_LABELS } from '../../../shared/schemas/roles';
 import { ErrorState, Loading, cx } from '../../components/ui';
 import { CurrentUserContext } from '../current-user';
-import { navFor } from '../navigation';
+import { navFor, pageRoles } from '../navigation';
+import { NotForYourRole } from './not-for-your-role';
 import { useRefreshOnDelivery } from '../../lib/outbox';
 
 /** The signed-in shell: the brewery's name, the menu for the person's role, and the page. */
@@ -12,6 +13,7 @@ export function AppLayout() {
   const me = useMe();
   const location = useLocation();
   const navigate = useNavigate();
+  const allowed = pageRoles(useMatches());
   useRefreshOnDelivery();
 
   if (me.isPending) return <Loading label="Opening Kettlewright" />;
@@ -56,7 +58,7 @@ export function AppLayout() {
         </header>
         <OutboxBanner />
         <main className="mx-auto max-w-7xl px-4 py-6">
-          <Outlet />
+          {allowed && !allowed.includes(user.role) ? <NotForYourRole roles={allowed} /> : <Outlet />}
         </main>
         {/* A new page opens at its top, not at the previous page's scroll position. */}
         <ScrollRestoration />

@@ -1,5 +1,9 @@
 import type { ReactNode } from 'react';
 import { Button } from './button';
+import { ApiError } from '../../lib/api-client';
+
+/** Answers that the same request cannot change by being sent again: refused, missing, or wrong. */
+const FINAL_STATUSES = new Set([400, 403, 404, 409, 410, 422]);
 
 export function Loading({ label = 'Loading' }: { label?: string }) {
   return (
@@ -10,13 +14,15 @@ export function Loading({ label = 'Loading' }: { label?: string }) {
   );
 }
 
+/** A failed load, with "Try again" only when trying again could help (a dropped connection, a busy server). */
 export function ErrorState({ error, onRetry }: { error: unknown; onRetry?: () => void }) {
   const message = error instanceof Error ? error.message : 'Something went wrong.';
+  const final = error instanceof ApiError && FINAL_STATUSES.has(error.status);
   return (
     <div role="alert" className="rounded-xl border-2 border-ember-600 bg-ember-100 p-5 text-ember-700">
       <p className="font-semibold">This could not be loaded.</p>
       <p className="mt-1">{message}</p>
-      {onRetry && (
+      {onRetry && !final && (
         <Button variant="secondary" className="mt-3" onClick={onRetry}>
           Try again
         </Button>
