@@ -7,7 +7,7 @@ import { Batch, Release } from '../models';
 import { notFound } from '../errors';
 import { packageSizes } from './release';
 import { tastingSummaries } from './tasting';
-import { STRENGTHS, type TaproomBeer, type TaproomListQuery } from '../../shared/schemas/taproom';
+import { strengthOf, type TaproomBeer, type TaproomListQuery } from '../../shared/schemas/taproom';
 
 const SHOWN = { [Op.in]: ['coming_soon', 'on_tap'] };
 
@@ -59,12 +59,11 @@ export async function listBeers(actor: Express.User, query: TaproomListQuery): P
     ...(words ? { [Op.or]: [{ beerName: { [Op.like]: words } }, { style: { [Op.like]: words } }, { description: { [Op.like]: words } }] } : {}),
   };
   const matching = await Release.findAll({ where, order: [['state', 'DESC'], ['releasedAt', 'DESC'], ['id', 'DESC']] });
-  let beers = await toBeers(actor.breweryId, matching);
-  if (query.strength) {
-    const band = STRENGTHS[query.strength];
-    beers = beers.filter((b) => b.abvPct >= band.min && b.abvPct < band.max);
-  }
-  return { beers, styles: shownStyles.map((r) => r.style).sort((a, b) => a.localeCompare(b)) };
+  const beers = await toBeers(actor.breweryId, matching);
+  return {
+    beers: query.strength ? beers.filter((b) => strengthOf(b.abvPct) === query.strength) : beers,
+    styles: shownStyles.map((r) => r.style).sort((a, b) => a.localeCompare(b)),
+  };
 }
 
 /** One announced or released beer; a draft or another brewery's answers 404. */

@@ -43,6 +43,19 @@ export const STRENGTHS = {
 } as const;
 export type Strength = keyof typeof STRENGTHS;
 
+/** ABV as every taproom screen shows it: one decimal. */
+export const shownAbvPct = (abvPct: number): number => Number(abvPct.toFixed(1));
+
+/**
+ * The strength band a beer is filed under, judged on the ABV it shows, so a beer shown as "4.5 %"
+ * is never filed under "under 4.5 %" because its unrounded figure is 4.4999.
+ */
+export function strengthOf(abvPct: number): Strength {
+  const shown = shownAbvPct(abvPct);
+  // The bands are listed weakest first and meet edge to edge.
+  return (Object.keys(STRENGTHS) as Strength[]).find((id) => shown < STRENGTHS[id].max) ?? 'strong';
+}
+
 /** The release sheet the head brewer writes: what guests read, and how the beer is served. */
 export const releaseSheetSchema = z.strictObject({
   beerName: z.string().trim().min(1, 'Name the beer').max(120, 'Use at most 120 characters'),

@@ -7,7 +7,8 @@ import { routeTable } from '../../server/routes/define';
 import { abv, abvBalling, abvSimple } from '../../shared/brewing';
 import { createTestBrewery, type TestBrewery } from './helpers';
 import { brewedBatch, SHEET, TASTING_CONTENT } from './taproom-fixtures';
-import type { Batch } from '../../server/models';
+import { plannedBatch } from './batch-fixtures';
+import { Release, type Batch } from '../../server/models';
 
 let t: TestBrewery;
 let other: TestBrewery;
@@ -129,6 +130,27 @@ describe("the taproom manager's home", () => {
     expect(await q('strength=strong')).toEqual(['Breakwater Pale']);
     expect(await q('q=%25')).toEqual([]); // a literal percent sign, not a wildcard
     expect((await t.as.taproom_manager.get('/api/taproom/beers?strength=huge')).status).toBe(400);
+  });
+
+  it('files a beer under the strength band of the ABV it shows (one decimal), not the unrounded figure', async () => {
+    // In the other brewery, so its tap list holds only these: each ABV sits just beside a band's edge.
+    const onTapAt = async (beerName: string, abvPct: number) => {
+      const b = await plannedBatch({ id: other.users.head_brewer.id, breweryId: other.brewery.id });
+      const { comingSoon: _, ...sheet } = SHEET;
+      await Release.create({
+        ...sheet, beerName, breweryId: other.brewery.id, batchId: b.id, state: 'on_tap', og: 1.05, fg: 1.01, abvPct, abvMethod: 'balling',
+        ibu: 30, srm: 5, releasedAt: new Date(), releasedById: other.users.head_brewer.id,
+      });
+    };
+    await onTapAt('Shown 4.5', 4.4999); // shown as 4.5 %
+    await onTapAt('Shown 4.4', 4.4449);
+    await onTapAt('Shown 6.5', 6.4951);
+    await onTapAt('Shown 6.4', 6.449);
+    const q = async (strength: string) =>
+      ((await other.as.taproom_manager.get(`/api/taproom/beers?strength=${strength}`)).body.beers as { beerName: string }[]).map((b) => b.beerName).sort();
+    expect(await q('session')).toEqual(['Shown 4.4']);
+    expect(await q('standard')).toEqual(['Shown 4.5', 'Shown 6.4']);
+    expect(await q('strong')).toEqual(['Shown 6.5']);
   });
 
   it('opens one beer for the briefing sheet; a draft or another brewery’s beer answers 404', async () => {

@@ -1,11 +1,11 @@
 import { srmToHex } from '../../../../shared/brewing';
-import { GLASSES, ALLERGENS, type PackageSize, type TaproomBeer } from '../../../../shared/schemas/taproom';
+import { GLASSES, ALLERGENS, shownAbvPct, type PackageSize, type TaproomBeer } from '../../../../shared/schemas/taproom';
 import { OFF_FLAVOURS, type TastingSummary } from '../../../../shared/schemas/tasting';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
 import { show } from '../../../lib/units';
 import { cx } from '../../../components/ui';
 
-export const abvText = (beer: Pick<TaproomBeer, 'abvPct' | 'abvIsPlanned'>) => `${beer.abvIsPlanned ? '≈ ' : ''}${beer.abvPct.toFixed(1)} %`;
+export const abvText = (beer: Pick<TaproomBeer, 'abvPct' | 'abvIsPlanned'>) => `${beer.abvIsPlanned ? '≈ ' : ''}${shownAbvPct(beer.abvPct).toFixed(1)} %`;
 
 /** The beer's colour from its SRM, with the number beside it for anyone who cannot tell colours apart. */
 export function ColourSwatch({ srm, size = 'md' }: { srm: number; size?: 'md' | 'lg' }) {
