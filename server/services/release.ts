@@ -10,7 +10,7 @@ import { changeBatchStatus, findBatch } from './batches';
 import { logEntries } from './batch-log';
 import { batchActuals } from '../../shared/batches/brew-day';
 import { abv, ABV_METHOD_SHOWN, type PackageLine } from '../../shared/brewing';
-import { KEG_SIZE_LABELS } from '../../shared/schemas/cellar';
+import { packageName } from '../../shared/schemas/cellar';
 import type { FinalNumbers, PackageSize, PublishReleaseInput, ReleaseDetail, ReleaseSheet } from '../../shared/schemas/taproom';
 
 /** Statuses a batch can be in while its release sheet is written: there is beer in the tank or in packages. */
@@ -38,10 +38,7 @@ export async function finalNumbers(batch: Batch, transaction?: Transaction): Pro
   };
 }
 
-function lineLabel(line: PackageLine): string {
-  if (line.kind === 'keg') return `${KEG_SIZE_LABELS[line.size]} keg`;
-  return `${line.sizeMl} mL ${line.kind}`;
-}
+const lineLabel = (line: PackageLine) => packageName(line.kind, line.kind === 'keg' ? line.size : line.sizeMl);
 
 /** What the batch was packaged into, by size, summed over its packaging runs. */
 export async function packageSizes(breweryId: number, batchIds: number[]): Promise<Map<number, PackageSize[]>> {

@@ -10,6 +10,7 @@ import { notFound } from '../errors';
 import { readingInForce } from '../models';
 import { achievedEfficiency, apparentAttenuation, lineVolumeL, type PackageLine } from '../../shared/brewing';
 import type { BatchHistory, BeerFigures, HistoryRow, PackageFigures, ProductionReport } from '../../shared/schemas/reports';
+import { packageName } from '../../shared/schemas/cellar';
 
 /** The UTC instant of local midnight on the first of `year-month` in `timeZone` (month may be 13 → next year). */
 export function monthStartUtc(year: number, month: number, timeZone: string): Date {
@@ -249,8 +250,8 @@ export function productionCsv(report: ProductionReport, convert: { bbl: (l: numb
     ...report.beers.map((b) => line(b.beerName, b)),
     line('Total', report.totals),
     '',
-    ['Beer', 'Package', 'Size', 'Count', 'Volume (L)', 'Volume (US bbl)', 'Volume (hL)'].map(cell).join(','),
-    ...report.packages.map((p) => [cell(p.beerName), cell(p.kind), cell(p.size), cell(p.count), cell(p.volumeL), cell(convert.bbl(p.volumeL)), cell(convert.hl(p.volumeL))].join(',')),
+    ['Beer', 'Package', 'Count', 'Volume (L)', 'Volume (US bbl)', 'Volume (hL)'].map(cell).join(','),
+    ...report.packages.map((p) => [cell(p.beerName), cell(packageName(p.kind, p.size)), cell(p.count), cell(p.volumeL), cell(convert.bbl(p.volumeL)), cell(convert.hl(p.volumeL))].join(',')),
   ];
   return `${lines.join('\r\n')}\r\n`;
 }

@@ -186,6 +186,12 @@ export const KEG_SIZE_LABELS: Record<(typeof KEG_SIZE_IDS)[number], string> = {
   keg_50l: '50 L',
 };
 
+/** What a person calls a package: "½ bbl keg", "473 mL can". `size` is a keg size id or a container size in mL. */
+export function packageName(kind: (typeof PACKAGE_KINDS)[number], size: string | number): string {
+  if (kind === 'keg') return `${KEG_SIZE_LABELS[size as (typeof KEG_SIZE_IDS)[number]] ?? size} keg`;
+  return `${size} mL ${kind}`;
+}
+
 const count = z.number({ error: 'Count: enter a whole number' }).int('Count must be a whole number').min(1, 'Count must be at least 1').max(100_000);
 export const packageLineSchema = z.discriminatedUnion('kind', [
   z.strictObject({ kind: z.literal('keg'), size: z.enum(KEG_SIZE_IDS as [string, ...string[]], { error: 'Choose a keg size' }), count }),

@@ -3,7 +3,7 @@ import { useFieldArray, useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Button, SelectField, TextField } from '../../../components/ui';
 import { KEG_SIZE_IDS, lToUsBbl } from '../../../../shared/brewing';
-import { KEG_SIZE_LABELS, packagingEntrySchema, type BatchCellarView, type PackagingEntryInput } from '../../../../shared/schemas/cellar';
+import { KEG_SIZE_LABELS, packageName, packagingEntrySchema, type BatchCellarView, type PackagingEntryInput } from '../../../../shared/schemas/cellar';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
 import { useLogCellarEntry } from '../api/log-cellar-entry';
 
@@ -24,7 +24,7 @@ export function PackagingForm({ batchId, packaging, unitSystem }: { batchId: num
   const kinds = watch('lines');
 
   const onSubmit = handleSubmit(async (values) => {
-    const label = `Packaging · ${values.lines.map((l) => `${l.count} × ${l.kind === 'keg' ? `${KEG_SIZE_LABELS[l.size as keyof typeof KEG_SIZE_LABELS]} keg` : `${l.sizeMl} mL ${l.kind}`}`).join(', ')}`;
+    const label = `Packaging · ${values.lines.map((l) => `${l.count} × ${packageName(l.kind, l.kind === 'keg' ? l.size : l.sizeMl)}`).join(', ')}`;
     await log(values, label);
     setSaved(label);
     reset();

@@ -1,5 +1,6 @@
 import { useState } from 'react';
-import { lToHl, lToUsBbl, KEG_SIZES } from '../../../../shared/brewing';
+import { lToHl, lToUsBbl } from '../../../../shared/brewing';
+import { packageName } from '../../../../shared/schemas/cellar';
 import type { BeerFigures } from '../../../../shared/schemas/reports';
 import { Button, Card, EmptyState, ErrorState, Loading, PageHeader, Table, Td, TextField, Th } from '../../../components/ui';
 import { productionCsvUrl, useProductionReport } from '../api/production';
@@ -14,15 +15,6 @@ const FIGURES = [
 const bbl = (l: number) => lToUsBbl(l).toFixed(2);
 const hl = (l: number) => lToHl(l).toFixed(2);
 
-const KEG_LABELS: Record<keyof typeof KEG_SIZES, string> = {
-  half_bbl: '½ bbl keg',
-  quarter_bbl: '¼ bbl keg',
-  sixth_bbl: '⅙ bbl keg',
-  keg_20l: '20 L keg',
-  keg_30l: '30 L keg',
-  keg_50l: '50 L keg',
-};
-const packageLabel = (kind: string, size: string) => (kind === 'keg' ? (KEG_LABELS[size as keyof typeof KEG_SIZES] ?? size) : `${kind === 'can' ? 'Can' : 'Bottle'} ${size} mL`);
 
 function lastMonth(): string {
   const d = new Date();
@@ -119,7 +111,7 @@ export function ProductionPage() {
                 {report.data.packages.map((p) => (
                   <tr key={`${p.beerName}-${p.kind}-${p.size}`}>
                     <Td>{p.beerName}</Td>
-                    <Td>{packageLabel(p.kind, p.size)}</Td>
+                    <Td>{packageName(p.kind, p.size)}</Td>
                     <Td className="text-right">{p.count}</Td>
                     <Td className="text-right">{bbl(p.volumeL)}</Td>
                     <Td className="text-right">{hl(p.volumeL)}</Td>
