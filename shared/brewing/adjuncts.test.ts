@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { convertPractical, doseAmount, doseLevelFromAmount, doseRange, roundForMeasuring, scaleDose } from './adjuncts';
+import { MEASURING_TOLERANCE, convertPractical, doseAmount, doseLevelFromAmount, doseRange, roundForMeasuring, scaleDose } from './adjuncts';
 import { expectInputError } from './test-helpers';
-import { kgToLb, mlToTsp, usBblToL, usGalToL } from './units';
+import { kgToLb, lbToKg, mlToTsp, ozToG, tspToMl, usBblToL, usGalToL } from './units';
+
 
 describe('dose rules', () => {
   it('3–5 lb of fruit per US gal scaled to a 3.5 bbl batch → 325.5–542.5 lb (common practice, no source)', () => {
@@ -59,12 +60,39 @@ describe('practical conversions and rounding', () => {
     expect(roundForMeasuring({ value: 147.64, unit: 'kg' }, 'metric')).toEqual({ value: 147.5, unit: 'kg' });
     expect(roundForMeasuring({ value: 1.2, unit: 'kg' }, 'us')).toEqual({ value: 2.75, unit: 'lb' });
     expect(roundForMeasuring({ value: 0.05, unit: 'kg' }, 'us')).toEqual({ value: 1.75, unit: 'oz' });
-    expect(roundForMeasuring({ value: 10.5, unit: 'mL' }, 'us')).toEqual({ value: 2.25, unit: 'tsp' });
-    expect(roundForMeasuring({ value: 1.3, unit: 'each' }, 'us')).toEqual({ value: 1.5, unit: 'each' });
+    // 10.5 mL = 2.13 tsp: 2.25 would be 5.6 % over, so the ⅛ tsp spoon is used.
+    expect(roundForMeasuring({ value: 10.5, unit: 'mL' }, 'us')).toEqual({ value: 2.125, unit: 'tsp' });
+    expect(roundForMeasuring({ value: 1.3, unit: 'each' }, 'us')).toEqual({ value: 1.25, unit: 'each' });
+    // 1.1 lb: a quarter-pound step would say 1 lb (9 % short); a tenth of a pound is within 5 %.
+    expect(roundForMeasuring({ value: lbToKg(1.1), unit: 'kg' }, 'us')).toEqual({ value: 1.1, unit: 'lb' });
+  });
+
+  it('coriander at 5 g per hL for a 10 US gal pilot batch is 1.9 g, in grams on a US sheet too', () => {
+    // 10 US gal = 37.854 L (NIST Handbook 44 Appendix C: 1 gal = 3.785411784 L); 5 g/hL × 0.37854 hL = 1.893 g.
+    const amount = doseAmount({ basis: 'gPerHl', low: 0.5, high: 8 }, 5, usGalToL(10));
+    expect(amount.value * 1000).toBeCloseTo(1.893, 3);
+    expect(roundForMeasuring(amount, 'us')).toEqual({ value: 1.9, unit: 'g' });
+    expect(roundForMeasuring(amount, 'metric')).toEqual({ value: 1.9, unit: 'g' });
+  });
+
+  it(`never changes an amount by more than ${MEASURING_TOLERANCE * 100} % (our bound), from a pinch to a pallet`, () => {
+    for (const system of ['us', 'metric'] as const) {
+      for (let exp = -7; exp <= 3; exp += 0.037) {
+        const kg = 10 ** exp;
+        const m = roundForMeasuring({ value: kg, unit: 'kg' }, system);
+        const backKg = m.unit === 'g' ? m.value / 1000 : m.unit === 'oz' ? ozToG(m.value) / 1000 : m.unit === 'lb' ? lbToKg(m.value) : m.value;
+        expect(Math.abs(backKg - kg) / kg).toBeLessThanOrEqual(MEASURING_TOLERANCE + 1e-9);
+        const ml = 10 ** (exp + 3);
+        const v = roundForMeasuring({ value: ml, unit: 'mL' }, system);
+        const backMl = v.unit === 'tsp' ? tspToMl(v.value) : v.value;
+        expect(Math.abs(backMl - ml) / ml).toBeLessThanOrEqual(MEASURING_TOLERANCE + 1e-9);
+      }
+    }
   });
 
   it('never rounds a non-zero amount to nothing', () => {
-    expect(roundForMeasuring({ value: 0.1, unit: 'mL' }, 'us')).toEqual({ value: 0.25, unit: 'tsp' });
+    expect(roundForMeasuring({ value: 0.1, unit: 'mL' }, 'us')).toEqual({ value: 0.1, unit: 'mL' });
+    expect(roundForMeasuring({ value: 0.0000012, unit: 'kg' }, 'us')).toEqual({ value: 0.0012, unit: 'g' });
     expect(roundForMeasuring({ value: 0, unit: 'kg' }, 'metric')).toEqual({ value: 0, unit: 'g' });
   });
 });

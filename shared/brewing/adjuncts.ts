@@ -113,36 +113,61 @@ export function convertPractical(value: number, from: string, to: string): numbe
 }
 
 /**
- * Rounds to `step`, never to zero for a non-zero amount (a brewer who wants a
- * pinch should see one step, not nothing).
+ * Largest relative change rounding for measuring may make to an amount (our choice: 5 %, about
+ * what brewers accept between a weighed and a written dose; a coarser step that would miss by more
+ * gives way to a finer unit or step).
  */
-function roundTo(value: number, step: number): number {
-  if (value === 0) return 0;
-  return Math.max(step, Math.round(value / step) * step);
-}
+export const MEASURING_TOLERANCE = 0.05;
+
+type Step = readonly [unit: MeasuredAmount['unit'], perSi: number, step: number];
 
 /**
- * Rounds an amount to something a brewer can weigh or measure, in display
- * units. Steps (our choice, matching common kitchen and floor scales):
- * metric mass: < 50 g → 1 g, < 1 kg → 5 g, < 25 kg → 0.05 kg, else 0.5 kg;
- * US mass: < 1 lb → 0.25 oz, else 0.25 lb;
- * volume: US → 0.25 tsp; metric → 1.25 mL (a quarter 5 mL spoon) below 20 mL, else 5 mL;
- * counts (sticks, beans): 0.5.
+ * The first (coarsest) step whose rounding stays within {@link MEASURING_TOLERANCE} of the
+ * amount; below the finest step the amount is kept to three significant figures, so a
+ * non-zero amount never rounds to nothing.
+ */
+function roundOnLadder(si: number, ladder: readonly Step[]): MeasuredAmount {
+  const finest = ladder[ladder.length - 1]!;
+  if (si === 0) return { value: 0, unit: ladder[0]![0] };
+  for (const [unit, perSi, step] of ladder) {
+    const shown = si * perSi;
+    const rounded = Number((Math.round(shown / step) * step).toFixed(6));
+    if (rounded > 0 && Math.abs(rounded - shown) <= MEASURING_TOLERANCE * shown) return { value: rounded, unit };
+  }
+  return { value: Number((si * finest[1]).toPrecision(3)), unit: finest[0] };
+}
+
+const G_PER_KG = 1000;
+const OZ_PER_KG = G_PER_KG / G_PER_OZ;
+const LB_PER_KG = 1 / KG_PER_LB;
+const TSP_PER_ML = mlToTsp(1);
+
+/**
+ * Rounds an amount to something a brewer can weigh or measure, in display units, never by more
+ * than {@link MEASURING_TOLERANCE}. Steps, coarsest first (our choice, matching common floor,
+ * kitchen and gram scales and measuring spoons):
+ * metric mass: ≥ 25 kg → 0.5 kg; ≥ 1 kg → 0.05 kg; ≥ 50 g → 5 g; then 1 g, 0.1 g, 0.01 g;
+ * US mass: ≥ 1 lb → 0.25 lb, 0.1 lb; below → 0.25 oz, then grams (1 g, 0.1 g, 0.01 g: a US
+ * brewer weighing 1.9 g of spice uses a gram scale);
+ * volume: US → 0.25 tsp, ⅛ tsp, then mL (0.1, 0.01); metric → 5 mL from 20 mL, 1.25 mL (a
+ * quarter 5 mL spoon), then 0.1 mL, 0.01 mL;
+ * counts (sticks, beans): 0.5, 0.25, 0.1.
  */
 export function roundForMeasuring(amount: Amount, system: MeasuringSystem): MeasuredAmount {
   const value = requireNonNegative(amount.value, 'amount.value', 'Amount');
-  if (amount.unit === 'each') return { value: roundTo(value, 0.5), unit: 'each' };
+  const fineGrams: Step[] = [['g', G_PER_KG, 1], ['g', G_PER_KG, 0.1], ['g', G_PER_KG, 0.01]];
+  const fineMl: Step[] = [['mL', 1, 0.1], ['mL', 1, 0.01]];
+  if (amount.unit === 'each') return roundOnLadder(value, [['each', 1, 0.5], ['each', 1, 0.25], ['each', 1, 0.1]]);
   if (amount.unit === 'mL') {
-    if (system === 'us') return { value: roundTo(mlToTsp(value), 0.25), unit: 'tsp' };
-    return { value: roundTo(value, value < 20 ? 1.25 : 5), unit: 'mL' };
+    if (system === 'us') return roundOnLadder(value, [['tsp', TSP_PER_ML, 0.25], ['tsp', TSP_PER_ML, 0.125], ...fineMl]);
+    return roundOnLadder(value, [...(value >= 20 ? [['mL', 1, 5] as const] : []), ['mL', 1, 1.25], ...fineMl]);
   }
   if (system === 'us') {
-    const lb = value / KG_PER_LB;
-    if (lb < 1) return { value: roundTo((value * 1000) / G_PER_OZ, 0.25), unit: 'oz' };
-    return { value: roundTo(lb, 0.25), unit: 'lb' };
+    if (value * LB_PER_KG >= 1) return roundOnLadder(value, [['lb', LB_PER_KG, 0.25], ['lb', LB_PER_KG, 0.1]]);
+    return roundOnLadder(value, [['oz', OZ_PER_KG, 0.25], ...fineGrams]);
   }
-  const g = value * 1000;
-  if (g < 50) return { value: roundTo(g, 1), unit: 'g' };
-  if (g < 1000) return { value: roundTo(g, 5), unit: 'g' };
-  return { value: Number(roundTo(value, value < 25 ? 0.05 : 0.5).toFixed(3)), unit: 'kg' };
+  if (value >= 25) return roundOnLadder(value, [['kg', 1, 0.5], ['kg', 1, 0.05]]);
+  if (value >= 1) return roundOnLadder(value, [['kg', 1, 0.05]]);
+  if (value * G_PER_KG >= 50) return roundOnLadder(value, [['g', G_PER_KG, 5], ...fineGrams]);
+  return roundOnLadder(value, fineGrams);
 }

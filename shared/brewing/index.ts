@@ -104,6 +104,7 @@ export {
   type PracticalEquivalent,
   convertPractical,
   roundForMeasuring,
+  MEASURING_TOLERANCE,
 } from './adjuncts';
 export { computeRecipe, planWort, resolveGrainBill, hopWeightsForIbuShares, type WortPlan } from './recipe';
 export { scaleRecipe } from './scaling';

@@ -82,6 +82,6 @@ export function showGrain(system: UnitSystem, kg: number): string {
 /** Hop and salt weights: oz and g side by side in US breweries (scales are often gram scales). */
 export function showSmallWeight(system: UnitSystem, grams: number): string {
   const m = roundForMeasuring({ value: grams / 1000, unit: 'kg' }, system);
-  if (system === 'us') return `${showMeasured(m)} (${grams < 1000 ? grams.toFixed(0) + ' g' : (grams / 1000).toFixed(2) + ' kg'})`;
+  if (system === 'us' && m.unit !== 'g') return `${showMeasured(m)} (${grams < 1000 ? grams.toFixed(0) + ' g' : (grams / 1000).toFixed(2) + ' kg'})`;
   return showMeasured(m);
 }
