@@ -1,5 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { MEASURING_TOLERANCE, convertPractical, doseAmount, doseLevelFromAmount, doseRange, roundForMeasuring, scaleDose } from './adjuncts';
+import { MEASURING_TOLERANCE, convertDoseRule, convertPractical, doseRangeLabel, doseAmount, doseLevelFromAmount, doseRange, roundForMeasuring, scaleDose } from './adjuncts';
+import { EXAMPLE_IPA, PILOT_SYSTEM } from './example-recipes';
+import { computeRecipe } from './recipe';
 import { expectInputError } from './test-helpers';
 import { kgToLb, lbToKg, mlToTsp, ozToG, tspToMl, usBblToL, usGalToL } from './units';
 
@@ -94,5 +96,32 @@ describe('practical conversions and rounding', () => {
     expect(roundForMeasuring({ value: 0.1, unit: 'mL' }, 'us')).toEqual({ value: 0.1, unit: 'mL' });
     expect(roundForMeasuring({ value: 0.0000012, unit: 'kg' }, 'us')).toEqual({ value: 0.0012, unit: 'g' });
     expect(roundForMeasuring({ value: 0, unit: 'kg' }, 'metric')).toEqual({ value: 0, unit: 'g' });
+  });
+});
+
+describe('dose units when the basis changes', () => {
+  it('restates 0.5–2 oz per US gal as g per hL: 1 oz/gal = 749 g/hL (NIST Handbook 44 Appendix C: 1 oz = 28.349523 g, 1 gal = 3.785411784 L)', () => {
+    const converted = convertDoseRule({ basis: 'ozPerUsGal', low: 0.5, high: 2 }, 1, 'gPerHl', usGalToL(10))!;
+    expect(converted.rule.basis).toBe('gPerHl');
+    expect(converted.level).toBeCloseTo(748.9, 1);
+    expect(converted.rule.low).toBeCloseTo(374.5, 1);
+    expect(converted.rule.high).toBeCloseTo(1497.8, 1);
+    // Same absolute amount in the batch either way.
+    expect(doseAmount(converted.rule, converted.level, 50).value).toBeCloseTo(doseAmount({ basis: 'ozPerUsGal', low: 0.5, high: 2 }, 1, 50).value, 10);
+  });
+
+  it('restates a per-volume dose per batch at the batch volume, and refuses weight to volume', () => {
+    const perBatch = convertDoseRule({ basis: 'kgPerHl', low: 1, high: 2 }, 1.5, 'fixedPerBatch', 200)!;
+    expect(perBatch.rule).toEqual({ basis: 'fixedPerBatch', low: 2, high: 4, fixedUnit: 'kg' });
+    expect(perBatch.level).toBeCloseTo(3, 12);
+    expect(convertDoseRule({ basis: 'gPerHl', low: 1, high: 2 }, 1, 'tspPer5UsGal', 100)).toBeUndefined();
+  });
+
+  it('states the unit in the range and in the out-of-range warning', () => {
+    expect(doseRangeLabel({ basis: 'gPerHl', low: 0.5, high: 2 })).toBe('0.5–2 g per hL');
+    expect(doseRangeLabel({ basis: 'fixedPerBatch', low: 1, high: 3, fixedUnit: 'each' })).toBe('1–3 each per batch');
+    const recipe = { ...EXAMPLE_IPA, adjuncts: [{ name: 'Coriander', category: 'spice' as const, stage: 'boil' as const, boilMinutes: 5, rule: { basis: 'gPerHl' as const, low: 0.5, high: 2 }, level: 5 }] };
+    const warning = computeRecipe(recipe, PILOT_SYSTEM).warnings.find((w) => w.code === 'adjunctOutsideRange')!;
+    expect(warning.message).toBe('Coriander: the dose of 5 g per hL is outside its 0.5–2 g per hL range.');
   });
 });

@@ -30,6 +30,34 @@ export function doseBasisLabel(basis: DoseBasis): string {
   return basis === 'fixedPerBatch' ? 'per batch' : BASES[basis].label;
 }
 
+/** Unit of a rule's low, high and level, for labels: "g per hL", "kg per batch". */
+export function doseUnitLabel(rule: Pick<DoseRule, 'basis' | 'fixedUnit'>): string {
+  return rule.basis === 'fixedPerBatch' ? `${rule.fixedUnit ?? 'each'} per batch` : BASES[rule.basis].label;
+}
+
+/** A rule's range with its unit, e.g. "0.5–2 g per hL". */
+export function doseRangeLabel(rule: DoseRule): string {
+  return `${rule.low}–${rule.high} ${doseUnitLabel(rule)}`;
+}
+
+/**
+ * The same rule and level restated in another basis, for a batch volume (needed only to or from
+ * `fixedPerBatch`), or undefined when the two measure different things (a weight and a volume,
+ * or a count) and no conversion exists.
+ */
+export function convertDoseRule(rule: DoseRule, level: number, to: DoseBasis, volumeL: number, fixedUnit?: AmountUnit): { rule: DoseRule; level: number } | undefined {
+  validateDoseRule(rule);
+  requirePositive(volumeL, 'volumeL', 'Batch volume');
+  const fromUnit = rule.basis === 'fixedPerBatch' ? (rule.fixedUnit ?? 'each') : BASES[rule.basis].unit;
+  const toUnit = to === 'fixedPerBatch' ? (fixedUnit ?? fromUnit) : BASES[to].unit;
+  if (fromUnit !== toUnit) return undefined;
+  // Absolute amount per rule unit in this batch, before and after.
+  const perUnit = (basis: DoseBasis) => (basis === 'fixedPerBatch' ? 1 : BASES[basis].perLitre * volumeL);
+  const factor = perUnit(rule.basis) / perUnit(to);
+  const next: DoseRule = { basis: to, low: rule.low * factor, high: rule.high * factor, ...(to === 'fixedPerBatch' ? { fixedUnit: toUnit } : {}) };
+  return { rule: next, level: level * factor };
+}
+
 /** Throws unless the rule is usable: known basis, 0 ≤ low ≤ high. */
 export function validateDoseRule(rule: DoseRule, field = 'rule'): void {
   if (rule.basis !== 'fixedPerBatch' && !(rule.basis in BASES)) {

@@ -94,6 +94,9 @@ export {
 } from './carbonation';
 export {
   doseBasisLabel,
+  doseUnitLabel,
+  doseRangeLabel,
+  convertDoseRule,
   validateDoseRule,
   doseAmount,
   doseRange,

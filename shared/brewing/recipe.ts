@@ -2,7 +2,7 @@
  * computeRecipe: every live number for a recipe on one equipment profile, for
  * the recipe editor, the API and the brew sheet.
  */
-import { doseAmount, doseRange, isWithinRange, roundForMeasuring } from './adjuncts';
+import { doseAmount, doseRange, doseRangeLabel, doseUnitLabel, isWithinRange, roundForMeasuring } from './adjuncts';
 import { buGu, ibuForAddition, hopUtilisation, hopWeightForIbu } from './bitterness';
 import { srmFromFermentables, srmToEbc, srmToHex } from './colour';
 import { BrewingInputError, requireFinite, requireInRange, requireNonNegative } from './errors';
@@ -196,7 +196,7 @@ function computeAdjuncts(recipe: RecipeInput, volumeL: number, warnings: Brewing
       warnings.push({
         code: 'adjunctOutsideRange',
         field: `adjuncts.${i}.level`,
-        message: `${adjunct.name}: the dose is outside its ${adjunct.rule.low}–${adjunct.rule.high} range.`,
+        message: `${adjunct.name}: the dose of ${adjunct.level} ${doseUnitLabel(adjunct.rule)} is outside its ${doseRangeLabel(adjunct.rule)} range.`,
       });
     }
     return {

@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 import { useParams } from 'react-router-dom';
-import { BrewingInputError, headPressureKpa, kpaToPsi, sgFromPoints, gravityPoints, doseBasisLabel, roundForMeasuring } from '../../../../shared/brewing';
+import { BrewingInputError, headPressureKpa, kpaToPsi, sgFromPoints, gravityPoints, doseUnitLabel, roundForMeasuring } from '../../../../shared/brewing';
 import { SALT_LABELS } from '../../../../shared/schemas/recipes';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
 import { Button, Caution, ErrorState, LinkButton, Loading } from '../../../components/ui';
@@ -171,7 +171,7 @@ function Sheet({ data, system }: { data: ScaleResult; system: UnitSystem }) {
           {content.adjuncts.map((a, i) => (
             <div key={i} className="mb-2">
               <p className="font-semibold">
-                {a.name}: {showAdjunct(c.adjuncts[i]!, system)} ({a.level} {doseBasisLabel(a.rule.basis)}; range {showMeasured(roundForMeasuring(c.adjuncts[i]!.low, system))}–
+                {a.name}: {showAdjunct(c.adjuncts[i]!, system)} ({a.level} {doseUnitLabel(a.rule)}; range {showMeasured(roundForMeasuring(c.adjuncts[i]!.low, system))}–
                 {showMeasured(roundForMeasuring(c.adjuncts[i]!.high, system))})
               </p>
               <ol className="ml-1 list-none space-y-1">

@@ -80,4 +80,15 @@ describe('recipe editor', () => {
     fireEvent.change(thickness, { target: { value: '0.5' } });
     expect(await screen.findByText('Mash thickness must be at least 0.72 qt/lb')).toBeTruthy();
   });
+
+  it('restates the dose range in the new unit when the dose unit changes, and names the unit', () => {
+    renderEditor();
+    const adjunct = within(screen.getByRole('group', { name: 'Adjunct 1' }));
+    fireEvent.change(adjunct.getByLabelText('Dosed'), { target: { value: 'kgPerHl' } });
+    // 1 lb per US gal = 0.45359237 kg / 3.785411784 L = 11.98 kg per hL (NIST Handbook 44 Appendix C).
+    expect((adjunct.getByLabelText('Low (kg per hL)') as HTMLInputElement).value).toBe('4.793');
+    expect((adjunct.getByLabelText('High (kg per hL)') as HTMLInputElement).value).toBe('11.98');
+    expect((adjunct.getByLabelText('Dose (kg per hL)') as HTMLInputElement).value).toBe('7.19');
+    expect(screen.queryByText(/outside its/)).toBeNull();
+  });
 });

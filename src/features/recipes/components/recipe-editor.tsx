@@ -2,7 +2,7 @@ import { useRef, useState, type ReactNode } from 'react';
 import { useController, useFieldArray, useForm, useWatch, type Control, type UseFormRegister, type UseFormSetValue, type FieldErrors } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
-import { doseBasisLabel, percentagesFromWeights } from '../../../../shared/brewing';
+import { convertDoseRule, doseBasisLabel, doseUnitLabel, percentagesFromWeights, type DoseRule } from '../../../../shared/brewing';
 import {
   ADJUNCT_CATEGORIES,
   ADJUNCT_STAGES,
@@ -379,7 +379,10 @@ function PreparationSteps({ control, index, disabled }: { control: Ctl; index: n
   );
 }
 
-function Additions({ control, register, errors, disabled, kind, amounts }: Shared & { kind: 'adjuncts' | 'spices'; amounts: string[] }) {
+/** Four significant figures: enough for a dose restated in another unit, short enough to read. */
+const sig4 = (x: number) => Number(x.toPrecision(4));
+
+function Additions({ control, register, errors, disabled, kind, amounts, setValue, volumeL }: Shared & { kind: 'adjuncts' | 'spices'; amounts: string[]; volumeL: number | undefined }) {
   const list = useFieldArray({ control, name: `content.${kind}` as 'content.spices' });
   const values = useWatch({ control, name: `content.${kind}` as 'content.spices' });
   const title = kind === 'adjuncts' ? 'Prepared adjuncts' : 'Spices';
@@ -388,6 +391,7 @@ function Additions({ control, register, errors, disabled, kind, amounts }: Share
       {list.fields.map((f, i) => {
         const p = `content.${kind}.${i}` as 'content.spices.0';
         const v = values[i];
+        const unit = v?.rule ? doseUnitLabel(v.rule as DoseRule) : '';
         return (
           <Row key={f.id} legend={`${kind === 'adjuncts' ? 'Adjunct' : 'Spice'} ${i + 1}`} onRemove={() => list.remove(i)} disabled={disabled}>
             {w('min-w-64 flex-1', <TextField label="Name" list={kind === 'adjuncts' ? 'kw-library-adjunct' : undefined} {...register(`${p}.name`)} error={errorAt(errors, `${p}.name`)} disabled={disabled} />)}
@@ -404,13 +408,30 @@ function Additions({ control, register, errors, disabled, kind, amounts }: Share
             {v?.stage === 'boil' && w('w-28', <TextField label="Minutes left" type="number" step="any" {...register(`${p}.boilMinutes`, asNumber(true))} error={errorAt(errors, `${p}.boilMinutes`)} disabled={disabled} />)}
             <div className="flex w-full flex-wrap items-end gap-3">
               {w('w-44', (
-                <SelectField label="Dosed" {...register(`${p}.rule.basis`)} disabled={disabled}>
+                <SelectField
+                  label="Dosed"
+                  {...register(`${p}.rule.basis`, {
+                    // Restate low, high and dose in the new unit so the same amount goes in; a weight cannot become a volume, so those stay as typed.
+                    onChange: (e) => {
+                      const before = v?.rule;
+                      if (!before || v.level === undefined || !volumeL) return;
+                      try {
+                        const next = convertDoseRule(before as DoseRule, v.level as number, e.target.value, volumeL);
+                        if (!next) return;
+                        setValue(`${p}.rule`, { ...next.rule, low: sig4(next.rule.low), high: sig4(next.rule.high) }, { shouldValidate: true });
+                        setValue(`${p}.level`, sig4(next.level), { shouldValidate: true });
+                      } catch {
+                        // An unfinished rule (e.g. high below low) is left for its own field errors.
+                      }
+                    },
+                  })}
+                  disabled={disabled}
+                >
                   {DOSE_BASES.map((x) => <option key={x} value={x}>{doseBasisLabel(x)}</option>)}
                 </SelectField>
               ))}
-              {w('w-24', <TextField label="Low" type="number" step="any" {...register(`${p}.rule.low`, asNumber())} error={errorAt(errors, `${p}.rule.low`)} disabled={disabled} />)}
-              {w('w-24', <TextField label="High" type="number" step="any" {...register(`${p}.rule.high`, asNumber())} error={errorAt(errors, `${p}.rule.high`)} disabled={disabled} />)}
-              {w('w-24', <TextField label="Dose" type="number" step="any" {...register(`${p}.level`, asNumber())} error={errorAt(errors, `${p}.level`)} disabled={disabled} />)}
+              {(['low', 'high'] as const).map((end) => w('w-36', <TextField key={end} label={`${end === 'low' ? 'Low' : 'High'} (${unit})`} type="number" step="any" {...register(`${p}.rule.${end}`, asNumber())} error={errorAt(errors, `${p}.rule.${end}`)} disabled={disabled} />))}
+              {w('w-36', <TextField label={`Dose (${unit})`} type="number" step="any" {...register(`${p}.level`, asNumber())} error={errorAt(errors, `${p}.level`)} disabled={disabled} />)}
               <p className="min-h-touch pb-2 text-lg font-semibold tabular-nums" aria-label={`${title} ${i + 1} amount`}>
                 {amounts[i] ?? ''}
               </p>
@@ -474,6 +495,7 @@ export function RecipeEditor({ initial, equipment, library, system, canEdit, not
   const shared: Shared = { control, register, errors: formState.errors, system, disabled, fromLibrary, setValue };
   const c = live.computed;
   const adjunctCount = values.content?.adjuncts?.length ?? 0;
+  const batchVolumeL = values.content?.targets?.batchVolumeL as number | undefined;
   const measured = (i: number) => (c?.adjuncts[i] ? `${c.adjuncts[i]!.amount.value > 0 ? (system === 'us' ? c.adjuncts[i]!.measuredUs : c.adjuncts[i]!.measuredMetric).value + ' ' + (system === 'us' ? c.adjuncts[i]!.measuredUs : c.adjuncts[i]!.measuredMetric).unit : '0'}` : '');
 
   const submit = handleSubmit(async (v) => {
@@ -528,8 +550,8 @@ export function RecipeEditor({ initial, equipment, library, system, canEdit, not
         <Hops {...shared} ibus={c?.hops.map((h) => h.ibu)} solvedWeights={c?.hops.map((h) => h.weightG)} targetIbu={values.content?.targets?.ibu as number | undefined} />
         <Mash {...shared} />
         <Water {...shared} setWater={(water) => setValue('content.water', water, { shouldValidate: true })} />
-        <Additions {...shared} kind="adjuncts" amounts={Array.from({ length: adjunctCount }, (_, i) => measured(i))} />
-        <Additions {...shared} kind="spices" amounts={Array.from({ length: values.content?.spices?.length ?? 0 }, (_, i) => measured(adjunctCount + i))} />
+        <Additions {...shared} kind="adjuncts" volumeL={batchVolumeL} amounts={Array.from({ length: adjunctCount }, (_, i) => measured(i))} />
+        <Additions {...shared} kind="spices" volumeL={batchVolumeL} amounts={Array.from({ length: values.content?.spices?.length ?? 0 }, (_, i) => measured(adjunctCount + i))} />
         <Section title="Yeast">
           <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
             <div className="col-span-2"><TextField label="Yeast" list="kw-library-yeast" {...register('content.yeast.name', {

@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import { doseBasisLabel, type ComputedAdjunct, type ScaleChange } from '../../../../shared/brewing';
+import { doseRangeLabel, doseUnitLabel, type ComputedAdjunct, type ScaleChange } from '../../../../shared/brewing';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
 import { SALT_LABELS } from '../../../../shared/schemas/recipes';
 import { Table, Td, Th, cx } from '../../../components/ui';
@@ -114,7 +114,7 @@ export function ScaleTable({ data, system }: { data: ScaleResult; system: UnitSy
                 <>
                   {c.item.slice(9)}
                   <span className="block text-sm text-ink-500">
-                    {rules[i]!.level} {doseBasisLabel(rules[i]!.rule.basis)} (range {rules[i]!.rule.low}–{rules[i]!.rule.high})
+                    {rules[i]!.level} {doseUnitLabel(rules[i]!.rule)} (range {doseRangeLabel(rules[i]!.rule)})
                   </span>
                 </>,
                 c,
