@@ -54,6 +54,24 @@ describe('signing in (Chromium)', () => {
     await expect.poll(() => page.getByRole('navigation', { name: 'Main' }).textContent()).not.toContain('Team');
   });
 
+  it('the team page asks before a role change or a block takes effect, and Cancel leaves the person as they were', async () => {
+    const page = await context.newPage();
+    await page.context().clearCookies();
+    await signIn(page, DEMO_PEOPLE[0]!.email);
+    await page.goto('/team');
+    const assistant = DEMO_PEOPLE[1]!;
+    const row = page.getByRole('row').filter({ hasText: assistant.email });
+    await row.getByLabel(`Role of ${assistant.displayName}`).selectOption('taproom_manager');
+    await row.getByRole('button', { name: 'Cancel' }).click();
+    expect(await row.getByLabel(`Role of ${assistant.displayName}`).inputValue()).toBe('assistant_brewer');
+    await row.getByRole('button', { name: 'Block access…' }).click();
+    expect(await row.getByRole('button', { name: `Block ${assistant.displayName}` }).count()).toBe(1);
+    await row.getByRole('button', { name: 'Cancel' }).click();
+    expect(await row.getByRole('button', { name: 'Block access…' }).count()).toBe(1);
+    const team = await page.evaluate(() => fetch('/api/team', { headers: { 'x-kettlewright': '1' } }).then((r) => r.json()));
+    expect(team.members.find((m: { email: string }) => m.email === assistant.email)).toMatchObject({ role: 'assistant_brewer', disabled: false });
+  });
+
   it('the taproom manager who types a brewing address is told it is not for their role, with no form to fill', async () => {
     const page = await context.newPage();
     await page.context().clearCookies();

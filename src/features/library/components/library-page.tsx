@@ -10,7 +10,7 @@ import { UnitField, asNumber } from '../../../components/ui/unit-field';
 import { useEquipment, useRemoveEquipment, useSaveEquipment, type EquipmentRow } from '../api/equipment';
 import { useIngredients, useRemoveIngredient, useSaveIngredient, type IngredientRow } from '../api/ingredients';
 import { FormBanner } from '../../../components/ui/form-banner';
-import { RemoveButton } from '../../../components/remove-button';
+import { ConfirmButton } from '../../../components/confirm-button';
 
 function EquipmentForm({ row, onDone }: { row?: EquipmentRow; onDone: () => void }) {
   const me = useCurrentUser();
@@ -54,7 +54,7 @@ function EquipmentForm({ row, onDone }: { row?: EquipmentRow; onDone: () => void
         {volume('maxKettleVolumeL', 'Kettle capacity')}
       </div>
       <div className="flex items-center gap-2">
-        {row && <RemoveButton name={row.name} remove={() => remove.mutateAsync(row.id)} onRemoved={onDone} onRefused={(error) => setBanner(applyServerErrors(error, setError))} />}
+        {row && <ConfirmButton ask="Remove…" confirm={`Remove ${row.name}`} act={() => remove.mutateAsync(row.id)} onDone={onDone} onRefused={(error) => setBanner(applyServerErrors(error, setError))} />}
         <Button variant="quiet" className="ml-auto" onClick={onDone}>Cancel</Button>
         <Button type="submit" busy={save.isPending}>Save equipment</Button>
       </div>
@@ -99,7 +99,7 @@ function IngredientForm({ row, onDone }: { row?: IngredientRow; onDone: () => vo
       </div>
       <TextAreaField label="Notes" rows={2} {...register('notes')} error={formState.errors.notes?.message} />
       <div className="flex items-center gap-2">
-        {row && <RemoveButton name={row.name} remove={() => remove.mutateAsync(row.id)} onRemoved={onDone} onRefused={(error) => setBanner(applyServerErrors(error, setError))} />}
+        {row && <ConfirmButton ask="Remove…" confirm={`Remove ${row.name}`} act={() => remove.mutateAsync(row.id)} onDone={onDone} onRefused={(error) => setBanner(applyServerErrors(error, setError))} />}
         <Button variant="quiet" className="ml-auto" onClick={onDone}>Cancel</Button>
         <Button type="submit" busy={save.isPending}>Save ingredient</Button>
       </div>

@@ -4,7 +4,7 @@ import { ApiError } from '../../../lib/api-client';
 import { UPLOAD_ACCEPT, UPLOAD_MAX_BYTES } from '../../../../shared/schemas/taproom';
 import { useAttachments, useRemoveAttachment, useUploadAttachment } from '../api/attachments';
 import { useCurrentUser } from '../../../app/current-user';
-import { RemoveButton } from '../../../components/remove-button';
+import { ConfirmButton } from '../../../components/confirm-button';
 
 const sizeText = (bytes: number) => (bytes >= 1024 * 1024 ? `${(bytes / 1024 / 1024).toFixed(1)} MB` : `${Math.max(1, Math.round(bytes / 1024))} KB`);
 
@@ -77,9 +77,10 @@ export function AttachmentsPanel({ batchId }: { batchId: number }) {
                 {sizeText(f.byteSize)} · {f.uploadedBy}
               </span>
               {canRemove && (
-                <RemoveButton
-                  name="this file"
-                  remove={() => remove.mutateAsync(f.id)}
+                <ConfirmButton
+                  ask="Remove…"
+                  confirm="Remove this file"
+                  act={() => remove.mutateAsync(f.id)}
                   onRefused={(error) => setProblem(error instanceof ApiError ? error.message : 'The file could not be removed. Try again.')}
                 />
               )}

@@ -5,8 +5,9 @@ import { inviteSchema, type InviteInput } from '../../../../shared/schemas/auth'
 import { ROLES, ROLE_LABELS, type Role } from '../../../../shared/schemas/roles';
 import { Button, Card, ErrorState, Loading, PageHeader, SelectField, Table, Td, TextField, Th, useToast } from '../../../components/ui';
 import { applyServerErrors } from '../../../lib/forms';
-import { useInviteTeammate, useTeam, useUpdateMember } from '../api/team';
+import { useInviteTeammate, useTeam, useUpdateMember, type Team } from '../api/team';
 import { FormBanner } from '../../../components/ui/form-banner';
+import { ConfirmButton } from '../../../components/confirm-button';
 import { useCurrentUser } from '../../../app/current-user';
 
 function InviteForm() {
@@ -48,18 +49,50 @@ function InviteForm() {
   );
 }
 
+/** A teammate's role: choosing another one asks before it takes effect (it changes what they may open at once). */
+function RoleChoice({ member, onChange }: { member: Team['members'][number]; onChange: (role: Role) => Promise<void> }) {
+  const [role, setRole] = useState<Role>(member.role);
+  return (
+    <span className="inline-flex flex-wrap items-center gap-2">
+      <select
+        aria-label={`Role of ${member.displayName}`}
+        className="min-h-touch rounded-lg border-2 border-mist-300 bg-white px-2"
+        value={role}
+        onChange={(e) => setRole(e.target.value as Role)}
+      >
+        {ROLES.map((r) => (
+          <option key={r} value={r}>
+            {ROLE_LABELS[r]}
+          </option>
+        ))}
+      </select>
+      {role !== member.role && (
+        <>
+          <Button variant="danger" onClick={() => onChange(role)}>
+            Make {ROLE_LABELS[role].toLowerCase()}
+          </Button>
+          <Button variant="quiet" onClick={() => setRole(member.role)}>
+            Cancel
+          </Button>
+        </>
+      )}
+    </span>
+  );
+}
+
 export function TeamPage() {
   const team = useTeam();
   const update = useUpdateMember();
   const me = useCurrentUser();
   const toast = useToast();
 
+  const refused = (error: unknown) => toast(error instanceof Error ? error.message : 'Not saved', 'error');
   const change = async (id: number, input: { role?: Role; disabled?: boolean }, done: string) => {
     try {
       await update.mutateAsync({ id, ...input });
       toast(done);
     } catch (error) {
-      toast(error instanceof Error ? error.message : 'Not saved', 'error');
+      refused(error);
     }
   };
 
@@ -90,32 +123,26 @@ export function TeamPage() {
                         {m.id === me.id ? (
                           ROLE_LABELS[m.role]
                         ) : (
-                          <select
-                            aria-label={`Role of ${m.displayName}`}
-                            className="min-h-touch rounded-lg border-2 border-mist-300 bg-white px-2"
-                            value={m.role}
-                            onChange={(e) => change(m.id, { role: e.target.value as Role }, `${m.displayName} is now ${ROLE_LABELS[e.target.value as Role].toLowerCase()}`)}
-                          >
-                            {ROLES.map((r) => (
-                              <option key={r} value={r}>
-                                {ROLE_LABELS[r]}
-                              </option>
-                            ))}
-                          </select>
+                          <RoleChoice member={m} onChange={(role) => change(m.id, { role }, `${m.displayName} is now ${ROLE_LABELS[role].toLowerCase()}`)} />
                         )}
                       </Td>
                       <Td>
                         {m.id === me.id ? (
                           'You'
                         ) : (
-                          <Button
-                            variant={m.disabled ? 'secondary' : 'quiet'}
-                            onClick={() =>
-                              change(m.id, { disabled: !m.disabled }, m.disabled ? `${m.displayName} can sign in again` : `${m.displayName} is signed out and blocked`)
-                            }
-                          >
-                            {m.disabled ? 'Restore access' : 'Block access'}
-                          </Button>
+                          m.disabled ? (
+                            <Button variant="secondary" onClick={() => change(m.id, { disabled: false }, `${m.displayName} can sign in again`)}>
+                              Restore access
+                            </Button>
+                          ) : (
+                            <ConfirmButton
+                              ask="Block access…"
+                              confirm={`Block ${m.displayName}`}
+                              act={() => update.mutateAsync({ id: m.id, disabled: true })}
+                              onDone={() => toast(`${m.displayName} is signed out and blocked`)}
+                              onRefused={refused}
+                            />
+                          )
                         )}
                       </Td>
                     </tr>
