@@ -9,6 +9,7 @@ import { useLogCellarEntry } from '../api/log-cellar-entry';
 import { useVessels } from '../api/vessels';
 
 import { optionalNumber } from './form-values';
+import { useSubmitOnce } from './submit-once';
 const ACTIONS_HERE = CELLAR_ACTIONS.filter((a) => a !== 'carbonation'); // carbonation is set from its own panel
 
 /** Logs D-rest, cold crash, dry hop, fining or a transfer as a signed entry through the outbox. */
@@ -26,12 +27,13 @@ export function ActionForm({ batchId, plan, unitSystem }: { batchId: number; pla
   const errors = formState.errors;
   const tanks = (vessels.data ?? []).filter((v: VesselView) => v.type === 'bright_tank' && (v.currentBatchId === null || v.currentBatchId === batchId));
 
-  const onSubmit = handleSubmit(async (values) => {
+  const { once, busy } = useSubmitOnce();
+  const onSubmit = once(handleSubmit(async (values) => {
     const label = CELLAR_ACTION_LABELS[values.action];
     await log(values, label);
     setSaved(label);
     reset({ kind: 'action', action: values.action, tempUnit: values.tempUnit, volumeUnit: values.volumeUnit });
-  });
+  }));
 
   return (
     <form onSubmit={onSubmit} noValidate aria-label="Log cellar work" className="space-y-3">
@@ -77,7 +79,7 @@ export function ActionForm({ batchId, plan, unitSystem }: { batchId: number; pla
         </div>
       )}
       <TextField label="Note (optional)" {...register('note', { setValueAs: (v: string) => (v ? v : undefined) })} error={errors.note?.message} />
-      <Button type="submit" size="lg" className="w-full" busy={formState.isSubmitting}>
+      <Button type="submit" size="lg" className="w-full" busy={busy}>
         Log: {CELLAR_ACTION_LABELS[action]}
       </Button>
       {saved && <p role="status" className="text-sm text-ink-700">Saved on this tablet: {saved}.</p>}

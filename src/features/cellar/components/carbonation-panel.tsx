@@ -6,6 +6,7 @@ import type { UnitSystem } from '../../../../shared/schemas/auth';
 import { UNITS } from '../../../lib/units';
 import { useCarbonation } from '../api/carbonation';
 import { useLogCellarEntry } from '../api/log-cellar-entry';
+import { useSubmitOnce } from './submit-once';
 
 const pressure = (system: UnitSystem, kpa: number) => (system === 'us' ? `${kpaToPsi(kpa).toFixed(1)} psi` : `${kpa.toFixed(0)} kPa`);
 
@@ -20,6 +21,7 @@ export function CarbonationPanel({ batchId, vessel, plan, unitSystem }: { batchI
   const tempUnit = unitSystem === 'us' ? 'f' : 'c';
   const query = valid ? { vesselId: vessel.id, co2Volumes: Number(volumes), temp: Number(beerTemp), tempUnit } as const : null;
   const answer = useCarbonation(query);
+  const { once, busy } = useSubmitOnce();
 
   return (
     <div className="space-y-3">
@@ -42,12 +44,13 @@ export function CarbonationPanel({ batchId, vessel, plan, unitSystem }: { batchI
         size="lg"
         className="w-full"
         disabled={!answer.data}
-        onClick={async () => {
+        busy={busy}
+        onClick={once(async () => {
           if (!query || !answer.data) return;
           const label = `Carbonation set · ${volumes} vol at ${pressure(unitSystem, answer.data.pressureKpa)}`;
           await log({ kind: 'action', action: 'carbonation', co2Volumes: query.co2Volumes, temp: query.temp, tempUnit, volumeUnit: 'l', pressureKpa: answer.data.pressureKpa }, label);
           setSaved(label);
-        }}
+        })}
       >
         Log this pressure as set
       </Button>

@@ -6,6 +6,7 @@ import { KEG_SIZE_IDS, lToUsBbl } from '../../../../shared/brewing';
 import { KEG_SIZE_LABELS, packageName, packagingEntrySchema, type BatchCellarView, type PackagingEntryInput } from '../../../../shared/schemas/cellar';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
 import { useLogCellarEntry } from '../api/log-cellar-entry';
+import { useSubmitOnce } from './submit-once';
 
 const CONTAINER_SIZES_ML = [355, 473, 500, 330, 750];
 
@@ -23,12 +24,13 @@ export function PackagingForm({ batchId, packaging, unitSystem }: { batchId: num
   const lines = useFieldArray({ control, name: 'lines' });
   const kinds = watch('lines');
 
-  const onSubmit = handleSubmit(async (values) => {
+  const { once, busy } = useSubmitOnce();
+  const onSubmit = once(handleSubmit(async (values) => {
     const label = `Packaging · ${values.lines.map((l) => `${l.count} × ${packageName(l.kind, l.kind === 'keg' ? l.size : l.sizeMl)}`).join(', ')}`;
     await log(values, label);
     setSaved(label);
     reset();
-  });
+  }));
 
   return (
     <div className="space-y-4">
@@ -73,7 +75,7 @@ export function PackagingForm({ batchId, packaging, unitSystem }: { batchId: num
           <input type="checkbox" className="h-6 w-6" {...register('final')} />
           Last run: the tank is empty and the batch is packaged
         </label>
-        <Button type="submit" size="lg" className="w-full" busy={formState.isSubmitting}>Log packaging run</Button>
+        <Button type="submit" size="lg" className="w-full" busy={busy}>Log packaging run</Button>
         {saved && <p role="status" className="text-sm text-ink-700">Saved on this tablet: {saved}.</p>}
       </form>
     </div>

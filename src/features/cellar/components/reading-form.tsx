@@ -8,6 +8,7 @@ import { UNITS } from '../../../lib/units';
 import { useLogCellarEntry } from '../api/log-cellar-entry';
 
 import { optionalNumber } from './form-values';
+import { useSubmitOnce } from './submit-once';
 const UNIT_LABEL = { sg: 'SG', plato: '°P', brix: '°Bx' } as const;
 
 /** The last values, so a routine reading is one number and one tap. */
@@ -38,13 +39,14 @@ export function ReadingForm({ batchId, readings, unitSystem }: { batchId: number
   const gravityUnit = watch('gravityUnit');
   const tempUnit = UNITS[unitSystem].tempC.unit;
   const errors = formState.errors;
+  const { once, busy } = useSubmitOnce();
 
-  const onSubmit = handleSubmit(async (values) => {
+  const onSubmit = once(handleSubmit(async (values) => {
     const label = `Reading ${values.gravity} ${UNIT_LABEL[values.gravityUnit]}${values.temp !== undefined ? ` · ${values.temp} ${tempUnit}` : ''}`;
     await log(values, label);
     setSaved(label);
     reset({ ...values, gravity: undefined as unknown as number, ph: undefined, note: undefined });
-  });
+  }));
 
   return (
     <form onSubmit={onSubmit} noValidate aria-label="Log a reading" className="space-y-4">
@@ -110,7 +112,7 @@ export function ReadingForm({ batchId, readings, unitSystem }: { batchId: number
       </div>
       <TextField label="Note (optional)" {...register('note', { setValueAs: (v: string) => (v ? v : undefined) })} error={errors.note?.message} />
       {errors.gravityUnit && method === 'refractometer' && <p className="text-sm text-ember-700">{errors.gravityUnit.message}</p>}
-      <Button type="submit" size="xl" className="w-full" busy={formState.isSubmitting}>
+      <Button type="submit" size="xl" className="w-full" busy={busy}>
         Save reading
       </Button>
       {saved && (

@@ -10,6 +10,7 @@ import { showVolume } from '../../../lib/units';
 import { useSaveVessel, useVessels } from '../api/vessels';
 import { useDeleteVessel, useMarkClean } from '../api/vessel-state';
 import { FormBanner } from '../../../components/ui/form-banner';
+import { useSubmitOnce } from './submit-once';
 
 function VesselForm({ vessel, onDone }: { vessel?: VesselView; onDone: () => void }) {
   const me = useCurrentUser();
@@ -75,6 +76,7 @@ export function VesselsPage() {
   const remove = useDeleteVessel();
   const toast = useToast();
   const [editing, setEditing] = useState<VesselView | 'new' | null>(null);
+  const { once, busy } = useSubmitOnce();
   const isHead = me.role === 'head_brewer';
   const us = me.brewery.unitSystem === 'us';
   if (isPending) return <Loading label="Loading vessels" />;
@@ -108,7 +110,7 @@ export function VesselsPage() {
                 <Td>{us ? `${kpaToPsi(v.ratedPressureKpa).toFixed(0)} psi` : `${v.ratedPressureKpa.toFixed(0)} kPa`}</Td>
                 <Td>{VESSEL_STATUS_LABELS[v.status]}</Td>
                 <Td className="space-x-2 whitespace-nowrap text-right">
-                  {v.status === 'needs_cleaning' && <Button variant="secondary" onClick={() => act(clean.mutateAsync(v.id), `${v.name} marked clean`)}>Mark clean</Button>}
+                  {v.status === 'needs_cleaning' && <Button variant="secondary" busy={busy && clean.variables === v.id} onClick={once(() => act(clean.mutateAsync(v.id), `${v.name} marked clean`))}>Mark clean</Button>}
                   {isHead && <Button variant="quiet" onClick={() => setEditing(v)}>Edit</Button>}
                   {isHead && v.currentBatchId === null && (
                     <Button variant="quiet" onClick={() => window.confirm(`Remove ${v.name}?`) && act(remove.mutateAsync(v.id), `${v.name} removed`)}>Remove</Button>
