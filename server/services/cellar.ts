@@ -21,6 +21,7 @@ import {
   usBblToL,
   type CarbonationSetting,
 } from '../../shared/brewing';
+import { formatGaugePressure, type CarbonationUnits } from '../../shared/brewing/carbonation';
 import type { WriteMeta } from '../../shared/schemas/batch-log';
 import type { FrozenPlan } from '../../shared/schemas/batches';
 import {
@@ -209,9 +210,12 @@ async function vesselOf(breweryId: number, batchId: number, transaction?: Transa
 }
 
 /** The head pressure for a target on a vessel; refused (422) above the vessel's rated working pressure. */
+/** A screen that sends °F shows psi (a US brewery); one that sends °C shows kPa. */
+const screenUnits = (tempUnit: 'c' | 'f'): CarbonationUnits => (tempUnit === 'f' ? 'us' : 'metric');
+
 export async function carbonationFor(breweryId: number, query: CarbonationQuery): Promise<CarbonationSetting & { pressurePsi: number }> {
   const vessel = await findVessel(breweryId, query.vesselId);
-  const setting = carbonationSetting(toC(query.temp, query.tempUnit), query.co2Volumes, vessel.ratedPressureKpa);
+  const setting = carbonationSetting(toC(query.temp, query.tempUnit), query.co2Volumes, vessel.ratedPressureKpa, screenUnits(query.tempUnit));
   return { ...setting, pressurePsi: kpaToPsi(setting.pressureKpa) };
 }
 
@@ -227,9 +231,10 @@ export async function recordAction(actor: LogActor, batchId: number, input: Acti
   if (input.action === 'carbonation') {
     const vessel = await vesselOf(actor.breweryId, batchId);
     if (!vessel) throw conflict('This batch is in no vessel: a head pressure is set on the vessel that holds it.');
-    const setting = carbonationSetting(tempC!, input.co2Volumes!, vessel.ratedPressureKpa);
+    const units = screenUnits(input.tempUnit);
+    const setting = carbonationSetting(tempC!, input.co2Volumes!, vessel.ratedPressureKpa, units);
     if (pressureKpa !== undefined && pressureKpa > vessel.ratedPressureKpa) {
-      throw unprocessable(`${pressureKpa.toFixed(0)} kPa is above ${vessel.name}'s rated working pressure of ${vessel.ratedPressureKpa.toFixed(0)} kPa.`);
+      throw unprocessable(`${formatGaugePressure(pressureKpa, units)} is above ${vessel.name}'s rated working pressure of ${formatGaugePressure(vessel.ratedPressureKpa, units)}.`);
     }
     pressureKpa ??= setting.pressureKpa;
   }

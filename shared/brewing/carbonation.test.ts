@@ -68,4 +68,17 @@ describe('carbonation setting on a vessel', () => {
     expectInputError(() => carbonationSetting(2, 2.6, needed - 1), 'volumes');
     expectInputError(() => carbonationSetting(2, 2.6, 0), 'ratedKpa');
   });
+
+  it('words the refusal in the units of the screen that asked', () => {
+    // 4.5 volumes at 60 °F (15.6 °C) on a tank rated 30 psi: the testers' case. 30 psi = 206.8 kPa
+    // (1 psi = 6.894757 kPa, NIST SP 811 appendix B); the pressure needed comes from the regression above.
+    const tempC = (60 - 32) / 1.8;
+    const rated = 30 * 6.894757;
+    const needPsi = headPressurePsi(60, 4.5);
+    expect(() => carbonationSetting(tempC, 4.5, rated, 'us')).toThrow(
+      `4.5 volumes at 60 °F needs ${needPsi.toFixed(1)} psi, above this vessel's rated working pressure of 30.0 psi.`,
+    );
+    expect(() => carbonationSetting(tempC, 4.5, rated, 'us')).not.toThrow(/°C|kPa/);
+    expect(() => carbonationSetting(tempC, 4.5, rated, 'metric')).toThrow(/^4\.5 volumes at 15\.6 °C needs \d+ kPa, above this vessel's rated working pressure of 207 kPa\./);
+  });
 });

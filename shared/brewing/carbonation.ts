@@ -124,18 +124,28 @@ export interface CarbonationSetting {
   ratedKpa: number;
 }
 
+/** The units a refusal is written in: those of the screen that asked (°F and psi, or °C and kPa). */
+export type CarbonationUnits = 'us' | 'metric';
+
+/** "30.0 psi" or "207 kPa": as the carbonation card shows a pressure. */
+export function formatGaugePressure(kpa: number, units: CarbonationUnits): string {
+  return units === 'us' ? `${kpaToPsi(kpa).toFixed(1)} psi` : `${kpa.toFixed(0)} kPa`;
+}
+
 /**
  * The head pressure for `volumes` of CO2 at `tempC` (see {@link headPressureKpa}),
  * refused when it is above the vessel's rated working pressure: the app never
- * recommends a pressure the vessel is not rated for.
+ * recommends a pressure the vessel is not rated for. The refusal is worded in
+ * `units`, so a US screen reads °F and psi beside its "Rated … psi".
  */
-export function carbonationSetting(tempC: number, volumes: number, ratedKpa: number): CarbonationSetting {
+export function carbonationSetting(tempC: number, volumes: number, ratedKpa: number, units: CarbonationUnits = 'metric'): CarbonationSetting {
   requirePositive(ratedKpa, 'ratedKpa', "Vessel's rated working pressure (kPa)");
   const pressureKpa = headPressureKpa(tempC, volumes);
   if (pressureKpa > ratedKpa) {
+    const temp = units === 'us' ? `${Number(cToF(tempC).toFixed(1))} °F` : `${Number(tempC.toFixed(1))} °C`;
     throw new BrewingInputError(
       'volumes',
-      `${volumes} volumes at ${Number(tempC.toFixed(1))} °C needs ${pressureKpa.toFixed(0)} kPa, above this vessel's rated working pressure of ${ratedKpa.toFixed(0)} kPa. Chill the beer further or choose a lower target.`,
+      `${volumes} volumes at ${temp} needs ${formatGaugePressure(pressureKpa, units)}, above this vessel's rated working pressure of ${formatGaugePressure(ratedKpa, units)}. Chill the beer further or choose a lower target.`,
     );
   }
   return { pressureKpa, ratedKpa };

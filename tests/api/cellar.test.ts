@@ -298,6 +298,11 @@ describe('carbonation', () => {
     const capped = await t.as.assistant_brewer.get('/api/cellar/carbonation').query({ vesselId: weak.id, co2Volumes: 2.6, temp: 2, tempUnit: 'c' });
     expect(capped.status).toBe(422);
     expect(capped.body.error.message).toMatch(/above this vessel's rated working pressure/);
+    // A US screen (°F) reads the refusal in °F and psi, as its card shows the rating.
+    const cappedUs = await t.as.assistant_brewer.get('/api/cellar/carbonation').query({ vesselId: weak.id, co2Volumes: 2.6, temp: 35.6, tempUnit: 'f' });
+    expect(cappedUs.status).toBe(422);
+    expect(cappedUs.body.error.message).toMatch(/^2\.6 volumes at 35\.6 °F needs \d+\.\d psi, above this vessel's rated working pressure of \d+\.\d psi\./);
+    expect(cappedUs.body.error.message).not.toMatch(/°C|kPa/);
 
     // Logging a carbonation on a batch in the weak tank is refused the same way; nothing is written.
     const batch = await knockedOutBatch();
