@@ -11,7 +11,10 @@ import { changeBatchStatus, findBatch, releaseVessel } from './batches';
 import { batchActuals } from '../../shared/batches/brew-day';
 import { lineVolumeL, packagingTotals, type PackageLine } from '../../shared/brewing';
 import type { WriteMeta } from '../../shared/schemas/batch-log';
-import type { BatchCellarView, PackagingEntryInput, PackagingRunView } from '../../shared/schemas/cellar';
+import type { PackagingEntryInput, PackagingRunView, PackagingSummaryView } from '../../shared/schemas/cellar';
+
+/** Statuses after which no beer of the batch is left in a tank: what was not packaged is a loss. */
+const PACKAGING_DONE = ['packaged', 'released', 'dumped'];
 
 /** Litres into the fermenter at knockout: measured on the brew day, else planned. */
 async function knockoutLitres(batch: Batch, transaction?: Transaction): Promise<number> {
@@ -33,20 +36,26 @@ function toRunView(run: PackagingRun, authorName: string): PackagingRunView {
   };
 }
 
-export async function packagingSummary(batch: Batch, transaction?: Transaction): Promise<BatchCellarView['packaging']> {
+export async function packagingSummary(batch: Batch, transaction?: Transaction): Promise<PackagingSummaryView> {
   const runs = await PackagingRun.findAll({ where: { batchId: batch.id }, order: [['packagedAt', 'ASC']], transaction });
   const authors = await BatchLogEntry.findAll({ where: { id: runs.map((r) => r.logEntryId) }, attributes: ['id', 'authorName'], transaction });
   const knockoutL = await knockoutLitres(batch, transaction);
   const totals = packagingTotals(runs.flatMap((r) => r.lines), knockoutL);
+  // Before the last run the difference is beer still in the tank, not a loss.
+  const complete = PACKAGING_DONE.includes(batch.status);
   return {
     runs: runs.map((r) => toRunView(r, authors.find((a) => Number(a.id) === Number(r.logEntryId))?.authorName ?? '')),
     knockoutL,
-    ...totals,
+    packagedL: totals.packagedL,
+    complete,
+    notPackagedL: complete ? 0 : totals.lossL,
+    lossL: complete ? totals.lossL : null,
+    lossFraction: complete ? totals.lossFraction : null,
   };
 }
 
 /** Records a packaging run; refuses (422) more beer in packages than was knocked out. */
-export async function recordPackaging(actor: LogActor, batchId: number, input: PackagingEntryInput, meta: WriteMeta): Promise<BatchCellarView['packaging']> {
+export async function recordPackaging(actor: LogActor, batchId: number, input: PackagingEntryInput, meta: WriteMeta): Promise<PackagingSummaryView> {
   const lines = input.lines as PackageLine[];
   await appendLogEntry(actor, batchId, { ...input }, meta, {
     onInsert: async (entry, t) => {

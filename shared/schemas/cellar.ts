@@ -317,7 +317,23 @@ export interface BatchCellarView {
   og: { sg: number; measured: boolean };
   readings: ReadingView[];
   actions: ActionView[];
-  packaging: { runs: PackagingRunView[]; knockoutL: number; packagedL: number; lossL: number; lossFraction: number };
+  packaging: PackagingSummaryView;
+}
+
+/**
+ * Packaged so far against knockout. Until the batch is fully packaged the rest is still in the tank
+ * (`notPackagedL`), not lost: `lossL` and `lossFraction` are null until then.
+ */
+export interface PackagingSummaryView {
+  runs: PackagingRunView[];
+  knockoutL: number;
+  packagedL: number;
+  /** True once the last run is logged (or the batch has left the cellar). */
+  complete: boolean;
+  /** Knockout less packaged while the batch is still being packaged; 0 once complete. */
+  notPackagedL: number;
+  lossL: number | null;
+  lossFraction: number | null;
 }
 
 // -------------------------------------------------------------------- alerts

@@ -331,12 +331,19 @@ describe('packaging', () => {
     expect(tooMuch.status).toBe(422);
     const first = await run([{ kind: 'keg', size: 'keg_20l', count: 1 }]);
     expect(first.status).toBe(201);
+    // A part run: the rest is still in the tank, not lost. Losses are counted once the batch is packaged.
+    expect(first.body).toMatchObject({ complete: false, lossL: null, lossFraction: null });
+    expect(first.body.packagedL).toBeCloseTo(KEG_SIZES.keg_20l, 9);
+    expect(first.body.notPackagedL).toBeCloseTo(knockoutL - KEG_SIZES.keg_20l, 9);
     const last = await run([{ kind: 'can', sizeMl: 355, count: 12 }], true);
     expect(last.status).toBe(201);
     const packaged = KEG_SIZES.keg_20l + 12 * 0.355;
     expect(knockoutL).toBeGreaterThan(packaged);
     expect(last.body.packagedL).toBeCloseTo(packaged, 9);
+    expect(last.body.complete).toBe(true);
     expect(last.body.lossL).toBeCloseTo(knockoutL - packaged, 9);
+    expect(last.body.lossFraction).toBeCloseTo((knockoutL - packaged) / knockoutL, 9);
+    expect(last.body.notPackagedL).toBe(0);
     expect(last.body.runs).toHaveLength(2);
 
     const view = await cellarView(batch.id);

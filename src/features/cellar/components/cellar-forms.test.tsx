@@ -71,10 +71,28 @@ describe('cellar forms take one tap at a time', () => {
 
   it('a double tap on Log packaging run writes one run', async () => {
     const release = slowLog();
-    render(<PackagingForm batchId={1} packaging={{ runs: [], knockoutL: 1173, packagedL: 0, lossL: 0, lossFraction: 0 }} unitSystem="us" />);
+    render(<PackagingForm batchId={1} packaging={{ runs: [], knockoutL: 1173, packagedL: 0, complete: false, notPackagedL: 1173, lossL: null, lossFraction: null }} unitSystem="us" />);
     doubleTap(screen.getByRole('form', { name: 'Log a packaging run' }));
     await waitFor(() => expect(log).toHaveBeenCalledTimes(1));
     await release();
     expect(log).toHaveBeenCalledTimes(1);
+  });
+});
+
+describe('packaging summary', () => {
+  const run = { logEntryId: 1, packagedAt: '2026-12-01T10:00:00Z', lines: [{ kind: 'keg' as const, size: 'half_bbl', count: 5 }], packagedL: 293.2, authorName: 'A' };
+
+  it('after a part run shows what is packaged so far and what is still in the tank, not losses', () => {
+    // 10.14 bbl knocked out, 2.50 bbl (five ½ bbl kegs) packaged: 7.64 bbl still in the tank.
+    render(<PackagingForm batchId={1} packaging={{ runs: [run], knockoutL: 1189.5, packagedL: 293.2, complete: false, notPackagedL: 896.3, lossL: null, lossFraction: null }} unitSystem="us" />);
+    const dl = screen.getByLabelText('Packaged volume');
+    expect(dl.textContent).toContain('Packaged so far2.50 bbl');
+    expect(dl.textContent).toContain('Still in the tank7.64 bbl');
+    expect(dl.textContent).not.toMatch(/Losses/i);
+  });
+
+  it('once the batch is packaged shows the losses', () => {
+    render(<PackagingForm batchId={1} packaging={{ runs: [run], knockoutL: 1189.5, packagedL: 1100, complete: true, notPackagedL: 0, lossL: 89.5, lossFraction: 89.5 / 1189.5 }} unitSystem="us" />);
+    expect(screen.getByLabelText('Packaged volume').textContent).toContain('Losses0.76 bbl (7.5 %)');
   });
 });

@@ -13,7 +13,16 @@ const CONTAINER_SIZES_ML = [355, 473, 500, 330, 750];
 /** Packaging volumes in one unit side by side: bbl (US) or L (metric). */
 const volume = (system: UnitSystem, litres: number) => (system === 'us' ? `${lToUsBbl(litres).toFixed(2)} bbl` : `${litres.toFixed(0)} L`);
 
-/** Packaging runs and the batch's packaged volume and losses so far. */
+function SummaryItem({ term, value }: { term: string; value: string }) {
+  return (
+    <div className="rounded-lg bg-mist-100 p-3">
+      <dt className="text-xs font-semibold uppercase text-ink-500">{term}</dt>
+      <dd className="text-xl font-semibold tabular-nums">{value}</dd>
+    </div>
+  );
+}
+
+/** Packaging runs, what is packaged so far and what is still in the tank; losses once the batch is packaged. */
 export function PackagingForm({ batchId, packaging, unitSystem }: { batchId: number; packaging: BatchCellarView['packaging']; unitSystem: UnitSystem }) {
   const log = useLogCellarEntry(batchId);
   const [saved, setSaved] = useState<string>();
@@ -34,11 +43,17 @@ export function PackagingForm({ batchId, packaging, unitSystem }: { batchId: num
 
   return (
     <div className="space-y-4">
-      <dl className="grid grid-cols-3 gap-3 text-center">
-        <div className="rounded-lg bg-mist-100 p-3"><dt className="text-xs font-semibold uppercase text-ink-500">Knockout</dt><dd className="text-xl font-semibold">{volume(unitSystem, packaging.knockoutL)}</dd></div>
-        <div className="rounded-lg bg-mist-100 p-3"><dt className="text-xs font-semibold uppercase text-ink-500">Packaged</dt><dd className="text-xl font-semibold">{volume(unitSystem, packaging.packagedL)}</dd></div>
-        <div className="rounded-lg bg-mist-100 p-3"><dt className="text-xs font-semibold uppercase text-ink-500">Losses</dt><dd className="text-xl font-semibold">{packaging.runs.length ? `${volume(unitSystem, packaging.lossL)} (${(packaging.lossFraction * 100).toFixed(1)} %)` : '—'}</dd></div>
+      <dl className="grid grid-cols-3 gap-3 text-center" aria-label="Packaged volume">
+        <SummaryItem term="Knockout" value={volume(unitSystem, packaging.knockoutL)} />
+        <SummaryItem term={packaging.complete ? 'Packaged' : 'Packaged so far'} value={volume(unitSystem, packaging.packagedL)} />
+        {packaging.complete ? (
+          <SummaryItem term="Losses" value={packaging.lossL === null || packaging.lossFraction === null ? '—' : `${volume(unitSystem, packaging.lossL)} (${(packaging.lossFraction * 100).toFixed(1)} %)`} />
+        ) : (
+          // Not a loss yet: until the last run, what is not in packages is still in the tank.
+          <SummaryItem term="Still in the tank" value={packaging.runs.length ? volume(unitSystem, packaging.notPackagedL) : '—'} />
+        )}
       </dl>
+      {!packaging.complete && packaging.runs.length > 0 && <p className="text-sm text-ink-500">Losses are counted once the last run is logged.</p>}
       <form onSubmit={onSubmit} noValidate aria-label="Log a packaging run" className="space-y-3">
         {lines.fields.map((field, i) => (
           <div key={field.id} className="grid grid-cols-[8rem_1fr_7rem_auto] items-end gap-2">
