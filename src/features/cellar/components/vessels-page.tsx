@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { Button, Dialog, EmptyState, ErrorState, LinkButton, Loading, PageHeader, SelectField, Table, Td, TextField, Th, useToast } from '../../../components/ui';
+import { Button, Caution, Dialog, EmptyState, ErrorState, LinkButton, Loading, PageHeader, SelectField, Table, Td, TextField, Th, useToast } from '../../../components/ui';
 import { kpaToPsi, lToUsBbl } from '../../../../shared/brewing';
 import { VESSEL_STATUS_LABELS, VESSEL_TYPE_LABELS, vesselInputSchema, type VesselInput, type VesselView } from '../../../../shared/schemas/cellar';
 import { useCurrentUser } from '../../../app/current-user';
@@ -68,15 +68,64 @@ function VesselForm({ vessel, onDone }: { vessel?: VesselView; onDone: () => voi
   );
 }
 
+/** The cautions for cleaning a tank with caustic or acid, shown where the cleaning is recorded. */
+function CleaningCaution() {
+  return (
+    <Caution title="Caustic and acid cleaners">
+      <ul className="list-disc space-y-1 pl-5">
+        <li>Wear eye and face protection, chemical-resistant gloves and sleeves.</li>
+        <li>Add concentrated chemical to water, never water to the concentrate: it can boil and spatter.</li>
+        <li>
+          Vent and purge CO₂ from a closed tank before caustic goes in: caustic absorbs CO₂, and the vacuum can collapse the
+          tank. Keep the tank open to air while it is cleaned.
+        </li>
+        <li>Never mix caustic and acid, or either with chlorine-based sanitiser.</li>
+      </ul>
+      <p className="mt-2">Follow your chemical supplier&apos;s safety data sheet, your local rules and licensed practice.</p>
+    </Caution>
+  );
+}
+
+/** Records that an emptied vessel was cleaned, with the cleaning cautions in front of the person doing it. */
+function CleanVessel({ vessel, onDone }: { vessel: VesselView; onDone: () => void }) {
+  const clean = useMarkClean();
+  const toast = useToast();
+  const { once, busy } = useSubmitOnce();
+  return (
+    <div className="space-y-4">
+      <CleaningCaution />
+      <p>Record {vessel.name} as cleaned and ready for the next batch.</p>
+      <div className="flex gap-2">
+        <Button
+          busy={busy}
+          onClick={once(async () => {
+            try {
+              await clean.mutateAsync(vessel.id);
+              toast(`${vessel.name} marked clean`);
+              onDone();
+            } catch (err) {
+              toast((err as Error).message);
+            }
+          })}
+        >
+          {vessel.name} is clean
+        </Button>
+        <Button variant="quiet" onClick={onDone}>
+          Cancel
+        </Button>
+      </div>
+    </div>
+  );
+}
+
 /** Fermenters and bright tanks: add, edit, mark clean, remove. */
 export function VesselsPage() {
   const me = useCurrentUser();
   const { data, error, isPending, refetch } = useVessels();
-  const clean = useMarkClean();
+  const [cleaning, setCleaning] = useState<VesselView | null>(null);
   const remove = useDeleteVessel();
   const toast = useToast();
   const [editing, setEditing] = useState<VesselView | 'new' | null>(null);
-  const { once, busy } = useSubmitOnce();
   const isHead = me.role === 'head_brewer';
   const us = me.brewery.unitSystem === 'us';
   if (isPending) return <Loading label="Loading vessels" />;
@@ -110,7 +159,7 @@ export function VesselsPage() {
                 <Td>{us ? `${kpaToPsi(v.ratedPressureKpa).toFixed(0)} psi` : `${v.ratedPressureKpa.toFixed(0)} kPa`}</Td>
                 <Td>{VESSEL_STATUS_LABELS[v.status]}</Td>
                 <Td className="space-x-2 whitespace-nowrap text-right">
-                  {v.status === 'needs_cleaning' && <Button variant="secondary" busy={busy && clean.variables === v.id} onClick={once(() => act(clean.mutateAsync(v.id), `${v.name} marked clean`))}>Mark clean</Button>}
+                  {v.status === 'needs_cleaning' && <Button variant="secondary" onClick={() => setCleaning(v)}>Mark clean</Button>}
                   {isHead && <Button variant="quiet" onClick={() => setEditing(v)}>Edit</Button>}
                   {isHead && v.currentBatchId === null && (
                     <Button variant="quiet" onClick={() => window.confirm(`Remove ${v.name}?`) && act(remove.mutateAsync(v.id), `${v.name} removed`)}>Remove</Button>
@@ -123,6 +172,9 @@ export function VesselsPage() {
       )}
       <Dialog open={editing !== null} onClose={() => setEditing(null)} title={editing === 'new' ? 'Add a vessel' : `Edit ${editing?.name ?? ''}`}>
         {editing !== null && <VesselForm key={editing === 'new' ? 'new' : editing.id} vessel={editing === 'new' ? undefined : editing} onDone={() => setEditing(null)} />}
+      </Dialog>
+      <Dialog open={cleaning !== null} onClose={() => setCleaning(null)} title={`Clean ${cleaning?.name ?? ''}`}>
+        {cleaning !== null && <CleanVessel key={cleaning.id} vessel={cleaning} onDone={() => setCleaning(null)} />}
       </Dialog>
     </div>
   );
