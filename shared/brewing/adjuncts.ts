@@ -4,7 +4,8 @@
  * measure. Per-volume doses refer to the batch volume into the fermenter.
  */
 import { BrewingInputError, requireNonNegative, requirePositive } from './errors';
-import type { AdjunctAddition, Amount, AmountUnit, DoseBasis, DoseRule, MeasuredAmount, MeasuringSystem } from './types';
+import { potentialPointLitresPerKg } from './gravity';
+import type { AdjunctAddition, AdjunctCategory, Amount, AmountUnit, DoseBasis, DoseRule, MeasuredAmount, MeasuringSystem } from './types';
 import { G_PER_OZ, KG_PER_LB, L_PER_HL, L_PER_US_GAL, ML_PER_US_TSP, mlToTsp } from './units';
 
 interface BasisInfo {
@@ -106,6 +107,50 @@ export function scaleDose(rule: DoseRule, level: number, fromVolumeL: number, to
 /** True when the chosen level lies within the rule's low–high range. */
 export function isWithinRange(adjunct: AdjunctAddition): boolean {
   return adjunct.level >= adjunct.rule.low && adjunct.level <= adjunct.rule.high;
+}
+
+/** Typical fermentable sugar of an adjunct, % of its weight, used when the recipe gives none. */
+export const TYPICAL_SUGAR_PCT: Readonly<Record<AdjunctCategory, { pct: number; source: string }>> = {
+  fruit: {
+    pct: 10,
+    source: 'food-composition tables (USDA FoodData Central): fresh fruit about 4–14 g sugars per 100 g (raspberry ≈ 4, apricot ≈ 9, cherry ≈ 13); 10 taken as typical for a purée, from memory',
+  },
+  honey: { pct: 82, source: 'USDA FoodData Central, honey: about 82 g sugars per 100 g, from memory' },
+  sugar: { pct: 100, source: 'refined sugar is sucrose, the 100 % reference of extract' },
+  lactose: { pct: 0, source: 'brewing yeast does not ferment lactose; not counted' },
+  vegetable: { pct: 0, source: 'mostly starch and water; counted only when the recipe gives a sugar %' },
+  spice: { pct: 0, source: 'no fermentable sugar to speak of' },
+  herb: { pct: 0, source: 'no fermentable sugar to speak of' },
+  other: { pct: 0, source: 'unknown; counted only when the recipe gives a sugar %' },
+};
+
+/** What an adjunct's sugar adds to the beer. */
+export interface AdjunctSugar {
+  /** Sugar % of weight used (the recipe's, or the category's typical one). */
+  sugarPct: number;
+  sugarKg: number;
+  /** Gravity points · L this sugar delivers (at 100 %: it dissolves fully, like a kettle sugar). */
+  pointLitres: number;
+  /** Why a sugary adjunct's sugar is not counted, when it is not. */
+  notCounted?: string;
+}
+
+/**
+ * Fermentable sugar of an adjunct and the gravity it adds: sugar kg × the potential of sucrose
+ * (extract 100 %, ≈ 46.2 ppg). Weighed adjuncts in the mash, boil, whirlpool or fermenter count;
+ * a packaging addition is priming, and a dose by volume or by count has no weight to go on.
+ */
+export function adjunctSugar(adjunct: AdjunctAddition, amount: Amount, field = 'adjunct'): AdjunctSugar {
+  const sugarPct = adjunct.sugarPct ?? TYPICAL_SUGAR_PCT[adjunct.category].pct;
+  if (adjunct.sugarPct !== undefined && (adjunct.sugarPct < 0 || adjunct.sugarPct > 100)) {
+    throw new BrewingInputError(`${field}.sugarPct`, 'Sugar must be between 0 and 100 % of the weight.');
+  }
+  const none = (notCounted?: string): AdjunctSugar => ({ sugarPct, sugarKg: 0, pointLitres: 0, ...(notCounted && sugarPct > 0 ? { notCounted } : {}) });
+  if (sugarPct === 0) return none();
+  if (adjunct.stage === 'packaging') return none('added at packaging, so its sugar is not counted toward OG');
+  if (amount.unit !== 'kg') return none(amount.unit === 'mL' ? 'dosed by volume, so its sugar is not counted: dose it by weight to count it' : 'dosed by count, so its sugar is not counted: dose it by weight to count it');
+  const sugarKg = (amount.value * sugarPct) / 100;
+  return { sugarPct, sugarKg, pointLitres: sugarKg * potentialPointLitresPerKg({ extractPct: 100 }) };
 }
 
 /** A practical equivalence between two household or trade measures. */

@@ -108,6 +108,9 @@ export {
   convertPractical,
   roundForMeasuring,
   MEASURING_TOLERANCE,
+  TYPICAL_SUGAR_PCT,
+  adjunctSugar,
+  type AdjunctSugar,
 } from './adjuncts';
 export { computeRecipe, planWort, resolveGrainBill, hopWeightsForIbuShares, type WortPlan } from './recipe';
 export { scaleRecipe } from './scaling';

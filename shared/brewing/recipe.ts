@@ -2,10 +2,10 @@
  * computeRecipe: every live number for a recipe on one equipment profile, for
  * the recipe editor, the API and the brew sheet.
  */
-import { doseAmount, doseRange, doseRangeLabel, doseUnitLabel, isWithinRange, roundForMeasuring } from './adjuncts';
+import { adjunctSugar, doseAmount, doseRange, doseRangeLabel, doseUnitLabel, isWithinRange, roundForMeasuring } from './adjuncts';
 import { buGu, ibuForAddition, hopUtilisation, hopWeightForIbu } from './bitterness';
 import { srmFromFermentables, srmToEbc, srmToHex } from './colour';
-import { BrewingInputError, requireFinite, requireInRange, requireNonNegative } from './errors';
+import { BrewingInputError, MAX_SG, requireFinite, requireInRange, requireNonNegative } from './errors';
 import { percentagesFromWeights, weightsForTargetOg } from './grain-bill';
 import {
   abv,
@@ -42,11 +42,16 @@ import {
 } from './types';
 import { ION_KEYS, chlorideSulfateRatio, residualAlkalinity, solveSaltAdditions, waterAfterAdditions } from './water';
 
-/** Weighed fermentables for a bill: weights as written, or solved from percentages and target OG. */
-export function resolveGrainBill(bill: GrainBill, brewhouseEfficiency: number, volumeL: number): WeighedFermentable[] {
+/**
+ * Weighed fermentables for a bill: weights as written, or solved from percentages and target OG.
+ * `otherPoints` (gravity points from adjunct sugar) come off the target, so the beer reaches it.
+ */
+export function resolveGrainBill(bill: GrainBill, brewhouseEfficiency: number, volumeL: number, otherPoints = 0): WeighedFermentable[] {
   if (bill.items.length === 0) throw new BrewingInputError('grainBill.items', 'A recipe needs at least one fermentable.');
   if (bill.mode === 'weight') return bill.items;
-  const weights = weightsForTargetOg(bill.items, bill.targetOg, brewhouseEfficiency, volumeL);
+  const grainOg = bill.targetOg - otherPoints / 1000;
+  if (grainOg <= 1) throw new BrewingInputError('grainBill.targetOg', `The adjuncts' sugar alone reaches ${bill.targetOg.toFixed(3)}: raise the target OG.`);
+  const weights = weightsForTargetOg(bill.items, grainOg, brewhouseEfficiency, volumeL);
   return bill.items.map(({ percent: _percent, ...spec }, i) => ({ ...spec, weightKg: weights[i]! }));
 }
 
@@ -55,6 +60,8 @@ export interface WortPlan {
   fermentables: WeighedFermentable[];
   /** Gravity points·L each fermentable delivers. */
   pointLitres: number[];
+  /** Gravity points·L each adjunct's sugar delivers (see adjunctSugar). */
+  adjunctPointLitres: number[];
   og: number;
   mashGrainKg: number;
   thicknessLPerKg: number;
@@ -108,14 +115,21 @@ export function planWort(recipe: RecipeInput, equipment: EquipmentProfile): Wort
   validateEquipment(equipment);
   const volumeL = equipment.batchVolumeL;
   const efficiency = equipment.brewhouseEfficiency;
-  const fermentables = resolveGrainBill(recipe.grainBill, efficiency, volumeL);
+  const adjunctPoints = recipe.adjuncts.map((a, i) => adjunctSugar(a, doseAmount(a.rule, a.level, volumeL, `adjuncts.${i}.level`), `adjuncts.${i}`).pointLitres);
+  const adjunctTotal = adjunctPoints.reduce((s, p) => s + p, 0);
+  const fermentables = resolveGrainBill(recipe.grainBill, efficiency, volumeL, adjunctTotal / volumeL);
   const points = pointLitres(fermentables, efficiency, 'grainBill.items');
-  const og = ogFromFermentables(fermentables, efficiency, volumeL);
+  const og = ogFromFermentables(fermentables, efficiency, volumeL) + adjunctTotal / volumeL / 1000;
+  if (og > MAX_SG) throw new BrewingInputError('adjuncts', `With the adjuncts' sugar the OG would be ${og.toFixed(3)}, above the 1.200 the formulas cover.`);
   let mashGrainKg = 0;
   let kettlePoints = 0;
   fermentables.forEach((f, i) => {
     if (f.stage === 'mash') mashGrainKg += f.weightKg;
     if (f.stage !== 'fermenter') kettlePoints += points[i]!;
+  });
+  // Sugar in the mash or boil is in the boiling wort; whirlpool and fermenter additions come after it.
+  recipe.adjuncts.forEach((a, i) => {
+    if (a.stage === 'mash' || a.stage === 'boil') kettlePoints += adjunctPoints[i]!;
   });
   const thicknessLPerKg = recipe.mash.thicknessLPerKg ?? equipment.mashThicknessLPerKg;
   const mash = planMash(recipe, equipment, mashGrainKg, thicknessLPerKg);
@@ -129,6 +143,7 @@ export function planWort(recipe: RecipeInput, equipment: EquipmentProfile): Wort
   return {
     fermentables,
     pointLitres: points,
+    adjunctPointLitres: adjunctPoints,
     og,
     mashGrainKg,
     thicknessLPerKg,
@@ -199,6 +214,7 @@ function computeAdjuncts(recipe: RecipeInput, volumeL: number, warnings: Brewing
         message: `${adjunct.name}: the dose of ${adjunct.level} ${doseUnitLabel(adjunct.rule)} is outside its ${doseRangeLabel(adjunct.rule)} range.`,
       });
     }
+    const sugar = adjunctSugar(adjunct, amount, `adjuncts.${i}`);
     return {
       name: adjunct.name,
       category: adjunct.category,
@@ -207,6 +223,9 @@ function computeAdjuncts(recipe: RecipeInput, volumeL: number, warnings: Brewing
       ...doseRange(adjunct.rule, volumeL),
       measuredMetric: roundForMeasuring(amount, 'metric'),
       measuredUs: roundForMeasuring(amount, 'us'),
+      sugarPct: sugar.sugarPct,
+      gravityPoints: sugar.pointLitres / volumeL,
+      ...(sugar.notCounted ? { sugarNotCounted: sugar.notCounted } : {}),
     };
   });
 }

@@ -25,9 +25,11 @@ const TEMPERATURE_TOLERANCE_C = 0.05;
 function scaleGrainBill(recipe: RecipeInput, before: ComputedRecipe, target: EquipmentProfile): GrainBill {
   const bill = recipe.grainBill;
   if (bill.mode === 'percent') return bill;
-  // Keep the bill's proportions by weight and its OG; mash items follow the new efficiency.
+  // Keep the bill's proportions by weight and its share of the OG (adjunct sugar is dosed per
+  // volume, so it brings the same points); mash items follow the new efficiency.
   const shares = bill.items.map((item, i) => ({ ...item, percent: before.fermentables[i]!.percent }));
-  const weights = weightsForTargetOg(shares, before.og, target.brewhouseEfficiency, target.batchVolumeL);
+  const grainOg = 1 + before.fermentables.reduce((s, f) => s + f.gravityPoints, 0) / 1000;
+  const weights = weightsForTargetOg(shares, grainOg, target.brewhouseEfficiency, target.batchVolumeL);
   return { mode: 'weight', items: bill.items.map((item, i) => ({ ...item, weightKg: weights[i]! })) };
 }
 

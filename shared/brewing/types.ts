@@ -174,8 +174,8 @@ export type AdjunctCategory = 'fruit' | 'vegetable' | 'spice' | 'herb' | 'sugar'
 export type AdjunctStage = 'mash' | 'boil' | 'whirlpool' | 'fermenter' | 'packaging';
 
 /**
- * A fruit, vegetable, spice or other addition dosed by rule. Fermentable
- * sugars that should count toward OG belong in the grain bill instead.
+ * A fruit, vegetable, spice or other addition dosed by rule. The sugar of a weighed adjunct
+ * (fruit, honey, sugar, or any with a sugar %) counts toward OG, like a kettle sugar at 100 %.
  */
 export interface AdjunctAddition {
   name: string;
@@ -186,6 +186,8 @@ export interface AdjunctAddition {
   rule: DoseRule;
   /** The chosen dose, in the rule's basis (normally between low and high). */
   level: number;
+  /** Fermentable sugar, % of the adjunct's weight; absent: the category's typical value (TYPICAL_SUGAR_PCT). */
+  sugarPct?: number;
 }
 
 /** An absolute amount. */
@@ -352,6 +354,12 @@ export interface ComputedAdjunct {
   high: Amount;
   measuredMetric: MeasuredAmount;
   measuredUs: MeasuredAmount;
+  /** Sugar % of weight used for gravity. */
+  sugarPct: number;
+  /** Gravity points this adjunct's sugar adds to the OG. */
+  gravityPoints: number;
+  /** Set when the adjunct has sugar that is not counted, saying why. */
+  sugarNotCounted?: string;
 }
 
 /** Every live number for a recipe on one equipment profile. */

@@ -156,6 +156,8 @@ const additionBase = {
   boilMinutes: num('Boil minute', 0, 240).optional(),
   rule: doseRuleSchema,
   level: num('Dose', 0, 100000),
+  /** Fermentable sugar, % of weight; blank: typical for its kind (fruit 10, honey 82, sugar 100, others 0). */
+  sugarPct: num('Sugar (%)', 0, 100).optional(),
   /** How it goes in, e.g. "in mesh bags, lifted out at knockout". */
   howAdded: z.string().trim().max(200, 'Use at most 200 characters'),
 };
@@ -308,13 +310,14 @@ export const ingredientQuerySchema = z.strictObject({ kind: z.enum(INGREDIENT_KI
 
 /** The calculation view of a version: what computeRecipe and scaleRecipe take. */
 export function toRecipeInput(recipeName: string, content: RecipeVersionContent): RecipeInput {
-  const addition = ({ name, category, stage, boilMinutes, rule, level }: SpiceAddition | AdjunctPrep): AdjunctAddition => ({
+  const addition = ({ name, category, stage, boilMinutes, rule, level, sugarPct }: SpiceAddition | AdjunctPrep): AdjunctAddition => ({
     name,
     category,
     stage,
     ...(boilMinutes === undefined ? {} : { boilMinutes }),
     rule,
     level,
+    ...(sugarPct === undefined ? {} : { sugarPct }),
   });
   return {
     name: recipeName,

@@ -91,4 +91,16 @@ describe('recipe editor', () => {
     expect((adjunct.getByLabelText('Dose (kg per hL)') as HTMLInputElement).value).toBe('7.19');
     expect(screen.queryByText(/outside its/)).toBeNull();
   });
+
+  it("counts a fruit adjunct's sugar toward OG and ABV, and drops it when its sugar is set to 0", () => {
+    renderEditor();
+    const ogOnScreen = () => within(screen.getByRole('group', { name: 'OG' })).getByText(/^1\.\d{3}$/).textContent;
+    const withFruit = computeRecipe(toRecipeInput(SEASONAL_NAME, SEASONAL_CONTENT), equipmentAtVolume(pilot, SEASONAL_CONTENT.targets.batchVolumeL));
+    expect(ogOnScreen()).toBe(withFruit.og.toFixed(3));
+    // Roasted quince at 0.6 lb per US gal, 10 % sugar (typical fruit, from memory) × 46.2 ppg sucrose = 2.8 points.
+    const adjunct = within(screen.getByRole('group', { name: 'Adjunct 1' }));
+    expect(adjunct.getByLabelText('Prepared adjuncts 1 sugar').textContent).toBe('10 % sugar adds 2.8 points to the OG');
+    fireEvent.change(adjunct.getByLabelText('Sugar (% of weight)'), { target: { value: '0' } });
+    expect(Number(ogOnScreen())).toBeCloseTo(withFruit.og - 0.0028, 3);
+  });
 });

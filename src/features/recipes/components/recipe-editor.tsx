@@ -2,7 +2,7 @@ import { useRef, useState, type ReactNode } from 'react';
 import { useController, useFieldArray, useForm, useWatch, type Control, type UseFormRegister, type UseFormSetValue, type FieldErrors } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
-import { convertDoseRule, doseBasisLabel, doseUnitLabel, percentagesFromWeights, type DoseRule } from '../../../../shared/brewing';
+import { TYPICAL_SUGAR_PCT, convertDoseRule, doseBasisLabel, doseUnitLabel, percentagesFromWeights, type DoseRule } from '../../../../shared/brewing';
 import {
   ADJUNCT_CATEGORIES,
   ADJUNCT_STAGES,
@@ -382,7 +382,7 @@ function PreparationSteps({ control, index, disabled }: { control: Ctl; index: n
 /** Four significant figures: enough for a dose restated in another unit, short enough to read. */
 const sig4 = (x: number) => Number(x.toPrecision(4));
 
-function Additions({ control, register, errors, disabled, kind, amounts, setValue, volumeL }: Shared & { kind: 'adjuncts' | 'spices'; amounts: string[]; volumeL: number | undefined }) {
+function Additions({ control, register, errors, disabled, kind, amounts, sugar, setValue, volumeL }: Shared & { kind: 'adjuncts' | 'spices'; amounts: string[]; sugar: string[]; volumeL: number | undefined }) {
   const list = useFieldArray({ control, name: `content.${kind}` as 'content.spices' });
   const values = useWatch({ control, name: `content.${kind}` as 'content.spices' });
   const title = kind === 'adjuncts' ? 'Prepared adjuncts' : 'Spices';
@@ -434,6 +434,22 @@ function Additions({ control, register, errors, disabled, kind, amounts, setValu
               {w('w-36', <TextField label={`Dose (${unit})`} type="number" step="any" {...register(`${p}.level`, asNumber())} error={errorAt(errors, `${p}.level`)} disabled={disabled} />)}
               <p className="min-h-touch pb-2 text-lg font-semibold tabular-nums" aria-label={`${title} ${i + 1} amount`}>
                 {amounts[i] ?? ''}
+              </p>
+            </div>
+            <div className="flex w-full flex-wrap items-end gap-3">
+              {w('w-36', (
+                <TextField
+                  label="Sugar (% of weight)"
+                  type="number"
+                  step="any"
+                  placeholder={v?.category ? String(TYPICAL_SUGAR_PCT[v.category].pct) : ''}
+                  {...register(`${p}.sugarPct`, asNumber(true))}
+                  error={errorAt(errors, `${p}.sugarPct`)}
+                  disabled={disabled}
+                />
+              ))}
+              <p className="min-h-touch flex-1 pb-2 text-sm text-ink-700" aria-label={`${title} ${i + 1} sugar`}>
+                {sugar[i] ?? ''}
               </p>
             </div>
             {w('w-full', <TextField label="How it goes in" {...register(`${p}.howAdded`)} error={errorAt(errors, `${p}.howAdded`)} disabled={disabled} />)}
@@ -496,6 +512,14 @@ export function RecipeEditor({ initial, equipment, library, system, canEdit, not
   const c = live.computed;
   const adjunctCount = values.content?.adjuncts?.length ?? 0;
   const batchVolumeL = values.content?.targets?.batchVolumeL as number | undefined;
+  const spiceCount = values.content?.spices?.length ?? 0;
+  // What each addition's sugar does to the OG, or why it is not counted; blank when it has none.
+  const sugarNote = (i: number) => {
+    const a = c?.adjuncts[i];
+    if (!a) return '';
+    if (a.sugarNotCounted) return `Sugar not counted: ${a.sugarNotCounted}.`;
+    return a.gravityPoints > 0 ? `${a.sugarPct} % sugar adds ${a.gravityPoints.toFixed(1)} points to the OG` : a.sugarPct > 0 ? '' : 'No sugar counted toward the OG';
+  };
   const measured = (i: number) => (c?.adjuncts[i] ? `${c.adjuncts[i]!.amount.value > 0 ? (system === 'us' ? c.adjuncts[i]!.measuredUs : c.adjuncts[i]!.measuredMetric).value + ' ' + (system === 'us' ? c.adjuncts[i]!.measuredUs : c.adjuncts[i]!.measuredMetric).unit : '0'}` : '');
 
   const submit = handleSubmit(async (v) => {
@@ -550,8 +574,8 @@ export function RecipeEditor({ initial, equipment, library, system, canEdit, not
         <Hops {...shared} ibus={c?.hops.map((h) => h.ibu)} solvedWeights={c?.hops.map((h) => h.weightG)} targetIbu={values.content?.targets?.ibu as number | undefined} />
         <Mash {...shared} />
         <Water {...shared} setWater={(water) => setValue('content.water', water, { shouldValidate: true })} />
-        <Additions {...shared} kind="adjuncts" volumeL={batchVolumeL} amounts={Array.from({ length: adjunctCount }, (_, i) => measured(i))} />
-        <Additions {...shared} kind="spices" volumeL={batchVolumeL} amounts={Array.from({ length: values.content?.spices?.length ?? 0 }, (_, i) => measured(adjunctCount + i))} />
+        <Additions {...shared} kind="adjuncts" volumeL={batchVolumeL} amounts={Array.from({ length: adjunctCount }, (_, i) => measured(i))} sugar={Array.from({ length: adjunctCount }, (_, i) => sugarNote(i))} />
+        <Additions {...shared} kind="spices" volumeL={batchVolumeL} amounts={Array.from({ length: spiceCount }, (_, i) => measured(adjunctCount + i))} sugar={Array.from({ length: spiceCount }, (_, i) => sugarNote(adjunctCount + i))} />
         <Section title="Yeast">
           <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
             <div className="col-span-2"><TextField label="Yeast" list="kw-library-yeast" {...register('content.yeast.name', {
