@@ -2,7 +2,7 @@
 // on their home screen and opens its briefing sheet. Screenshots of the taproom at tablet and desktop sizes.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import sharp from 'sharp';
-import type { BrowserContext } from 'playwright-core';
+import type { BrowserContext, Locator, Page } from 'playwright-core';
 import { openBrowser, screenshot, signIn } from './browser';
 import { DEMO_PEOPLE } from '../../server/seed/demo';
 import { abv } from '../../shared/brewing';
@@ -117,5 +117,82 @@ describe('releasing a beer to the taproom (Chromium, 1024×768)', () => {
     } finally {
       await desktop.close();
     }
+  });
+});
+
+/** Whether an element's content runs past its own box (a cut-off name, a number spilling out of its frame). */
+const overflows = (l: Locator) => l.evaluate((el) => el.scrollWidth > el.clientWidth + 1);
+/** How many lines of text an element takes. */
+const lines = (l: Locator) => l.evaluate((el) => Math.round(el.getBoundingClientRect().height / parseFloat(getComputedStyle(el).lineHeight)));
+
+async function openBoard(page: Page) {
+  await page.getByRole('link', { name: 'Bar screen' }).click();
+  await page.getByRole('heading', { level: 1, name: /^On tap at / }).waitFor();
+  await page.getByRole('region', { name: /^On tap at / }).getByRole('listitem').first().waitFor();
+}
+
+describe('the bar screen on a phone (Chromium, 390×844)', () => {
+  it('the bar screen keeps every name whole, the ABV clear of it and the swatches one width', async () => {
+    const phone = await openBrowser({ width: 390, height: 844 });
+    try {
+      const page = await phone.newPage();
+      await signIn(page, priya.email);
+      await openBoard(page);
+      const board = page.getByRole('region', { name: /^On tap at / });
+      expect(await overflows(board)).toBe(false);
+      const rows = await board.getByRole('listitem').all();
+      expect(rows.length).toBeGreaterThan(1);
+      const swatchWidths = new Set<number>();
+      const nameLefts = new Set<number>();
+      for (const row of rows) {
+        const [name, detail] = await row.locator('p').all();
+        const abv = row.getByText(/ %$/);
+        expect(await overflows(name!)).toBe(false);
+        expect(await lines(detail!), await detail!.textContent() ?? '').toBeLessThanOrEqual(2);
+        const n = (await name!.boundingBox())!;
+        const a = (await abv.boundingBox())!;
+        expect(a.y >= n.y + n.height || a.x >= n.x + n.width, 'the ABV overlaps the name').toBe(true);
+        expect(await lines(abv)).toBe(1);
+        swatchWidths.add(Math.round((await row.locator('span').first().boundingBox())!.width));
+        nameLefts.add(Math.round(n.x));
+      }
+      expect(swatchWidths.size).toBe(1);
+      expect(nameLefts.size).toBe(1);
+      await screenshot(page, 'taproom-bar-screen-390.png');
+    } finally {
+      await phone.close();
+    }
+  });
+});
+
+describe('the bar screen as a full-screen view (Chromium, 1024×768)', () => {
+  it('keeps Tab inside it, shows where focus is, and Escape goes back to the taproom', async () => {
+    const page = await taproom.newPage();
+    await signIn(page, priya.email);
+    await page.goto('/taproom?q=a');
+    await page.getByRole('heading', { level: 1, name: 'Taproom' }).waitFor();
+    await openBoard(page);
+    const board = page.getByRole('region', { name: /^On tap at / });
+    // The app behind it (the menu, Sign out among it) is inert: out of reach of Tab, clicks and screen readers.
+    expect(await page.locator('#root').evaluate((el) => el.hasAttribute('inert'))).toBe(true);
+    // Tab goes round the board's own controls (and out to the browser's), never into the app behind it.
+    for (let i = 0; i < 6; i++) {
+      await page.keyboard.press('Tab');
+      expect(await page.locator('#root').evaluate((el) => el.contains(document.activeElement))).toBe(false);
+    }
+    const close = board.getByRole('button', { name: 'Close' });
+    await page.keyboard.press('Shift+Tab');
+    expect(await close.evaluate((el) => el === document.activeElement && el.matches(':focus-visible') && getComputedStyle(el).outlineStyle !== 'none')).toBe(true);
+    await screenshot(page, 'taproom-bar-screen-focus-1024.png', { fullPage: false });
+    await page.keyboard.press('Escape');
+    await page.waitForURL((url) => url.pathname === '/taproom' && url.search === '?q=a');
+    await page.getByRole('button', { name: 'Sign out' }).waitFor();
+
+    // Opened on its own (a TV's bookmark), Escape leaves to the taproom.
+    await page.goto('/taproom/board');
+    await page.getByRole('heading', { level: 1, name: /^On tap at / }).waitFor();
+    await page.keyboard.press('Escape');
+    await page.waitForURL((url) => url.pathname === '/taproom');
+    await page.close();
   });
 });
