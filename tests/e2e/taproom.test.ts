@@ -131,7 +131,7 @@ async function openBoard(page: Page) {
   await page.getByRole('region', { name: /^On tap at / }).getByRole('listitem').first().waitFor();
 }
 
-describe('the bar screen on a phone (Chromium, 390×844)', () => {
+describe('the bar screen and the briefing sheet on a phone (Chromium, 390×844)', () => {
   it('the bar screen keeps every name whole, the ABV clear of it and the swatches one width', async () => {
     const phone = await openBrowser({ width: 390, height: 844 });
     try {
@@ -159,6 +159,30 @@ describe('the bar screen on a phone (Chromium, 390×844)', () => {
       expect(swatchWidths.size).toBe(1);
       expect(nameLefts.size).toBe(1);
       await screenshot(page, 'taproom-bar-screen-390.png');
+    } finally {
+      await phone.close();
+    }
+  });
+
+  it('the briefing sheet keeps each number on one line inside its box', async () => {
+    const phone = await openBrowser({ width: 390, height: 844 });
+    try {
+      const page = await phone.newPage();
+      await signIn(page, priya.email);
+      await page.getByRole('region', { name: 'On tap' }).getByRole('heading', { level: 3 }).first().waitFor();
+      // The batch number stays on one line on the tap card ("Batch 2026-" / "003" before).
+      const batch = page.getByRole('region', { name: 'On tap' }).getByText(/^Batch \d/).first();
+      expect(await lines(batch)).toBe(1);
+      await screenshot(page, 'taproom-home-390.png');
+      await page.getByRole('link', { name: 'Staff briefing sheet' }).first().click();
+      const sheet = page.getByRole('article', { name: /^Briefing: / });
+      await sheet.getByRole('heading', { level: 2 }).first().waitFor();
+      for (const label of ['ABV', 'Bitterness', 'Colour']) {
+        const fact = sheet.getByText(label, { exact: true }).locator('..');
+        expect(await overflows(fact), label).toBe(false);
+        expect(await lines(fact.locator(':scope > div').nth(1)), label).toBe(1);
+      }
+      await screenshot(page, 'taproom-briefing-390.png');
     } finally {
       await phone.close();
     }

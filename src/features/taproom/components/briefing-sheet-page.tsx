@@ -1,15 +1,15 @@
 import { useParams } from 'react-router-dom';
-import { Button, Caution, ErrorState, LinkButton, Loading, PageHeader } from '../../../components/ui';
+import { Button, Caution, ErrorState, LinkButton, Loading, PageHeader, cx } from '../../../components/ui';
 import { useCurrentUser } from '../../../app/current-user';
 import { srmToEbc } from '../../../../shared/brewing';
 import { useBeer } from '../api/get-beer';
 import { ColourSwatch, abvText, allergensLine, offFlavoursLine, packagesLine, servingLine, tastingLine } from './beer-facts';
 
-function Fact({ label, children }: { label: string; children: React.ReactNode }) {
+function Fact({ label, className, children }: { label: string; className?: string; children: React.ReactNode }) {
   return (
-    <div className="rounded-lg border border-mist-200 px-4 py-3 print:border-ink-300">
+    <div className={cx('min-w-0 rounded-lg border border-mist-200 px-4 py-3 print:border-ink-300', className)}>
       <div className="text-xs font-semibold uppercase tracking-wide text-ink-500">{label}</div>
-      <div className="text-3xl font-semibold tabular-nums text-ink-900">{children}</div>
+      <div className="whitespace-nowrap text-3xl font-semibold tabular-nums text-ink-900">{children}</div>
     </div>
   );
 }
@@ -50,23 +50,24 @@ export function BriefingSheetPage() {
           </>
         }
       />
-      <article aria-label={`Briefing: ${b.beerName}`} className="mx-auto max-w-4xl space-y-6 rounded-xl bg-white p-6 shadow-sm print:max-w-none print:p-0 print:shadow-none">
+      <article aria-label={`Briefing: ${b.beerName}`} className="mx-auto max-w-4xl space-y-6 rounded-xl bg-white p-4 shadow-sm sm:p-6 print:max-w-none print:p-0 print:shadow-none">
         <header className="flex flex-wrap items-start justify-between gap-4 border-b-2 border-ink-900 pb-4">
-          <div>
-            <h2 className="text-4xl font-bold text-ink-900">{b.beerName}</h2>
+          <div className="min-w-0">
+            <h2 className="break-words text-4xl font-bold text-ink-900">{b.beerName}</h2>
             <p className="mt-1 text-xl text-ink-700">{b.style}</p>
             <p className="mt-1 text-ink-500">
-              Batch {b.batchNumber} · {when} · {me.brewery.name}
+              <span className="whitespace-nowrap">Batch {b.batchNumber}</span> · {when} · {me.brewery.name}
             </p>
           </div>
           {b.photo && <img src={b.photo.thumbnailUrl} alt={`${b.beerName} in the glass`} className="h-40 w-40 rounded-lg object-cover" />}
         </header>
 
-        <div className="grid grid-cols-3 gap-3">
+        {/* Two across on a phone, the colour (swatch and EBC) below on its own row; three across from a tablet and on paper. */}
+        <div className="grid grid-cols-2 gap-3 md:grid-cols-3 print:grid-cols-3">
           <Fact label={b.abvIsPlanned ? 'ABV (planned)' : 'ABV'}>{abvText(b)}</Fact>
           <Fact label="Bitterness">{b.ibu.toFixed(0)} IBU</Fact>
-          <Fact label="Colour">
-            <span className="flex items-center gap-3">
+          <Fact label="Colour" className="col-span-2 md:col-span-1 print:col-span-1">
+            <span className="flex flex-wrap items-center gap-x-3 gap-y-1">
               <ColourSwatch srm={b.srm} />
               <span className="text-base font-medium text-ink-500">EBC {srmToEbc(b.srm).toFixed(0)}</span>
             </span>

@@ -19,7 +19,7 @@ function BeerCard({ beer }: { beer: TaproomBeer }) {
         <div className="min-w-0 flex-1">
           <h3 className="text-xl font-bold text-ink-900">{beer.beerName}</h3>
           <p className="text-ink-500">
-            {beer.style} · Batch {beer.batchNumber}
+            {beer.style} · <span className="whitespace-nowrap">Batch {beer.batchNumber}</span>
           </p>
         </div>
         <ColourSwatch srm={beer.srm} />
@@ -27,7 +27,7 @@ function BeerCard({ beer }: { beer: TaproomBeer }) {
       <dl className="grid grid-cols-2 gap-2">
         <div className="rounded-lg bg-mist-100 px-3 py-2">
           <dt className="text-xs font-semibold uppercase tracking-wide text-ink-500">ABV{beer.abvIsPlanned ? ' (planned)' : ''}</dt>
-          <dd className="text-3xl font-semibold tabular-nums text-ink-900">{abvText(beer)}</dd>
+          <dd className="whitespace-nowrap text-3xl font-semibold tabular-nums text-ink-900">{abvText(beer)}</dd>
         </div>
         <div className="rounded-lg bg-mist-100 px-3 py-2">
           <dt className="text-xs font-semibold uppercase tracking-wide text-ink-500">IBU</dt>
