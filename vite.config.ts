@@ -1,11 +1,25 @@
 /// <reference types="vitest/config" />
-import { defineConfig } from 'vite';
+import { readFileSync } from 'node:fs';
+import { defineConfig, type Plugin } from 'vite';
 import react from '@vitejs/plugin-react';
+
+/** Writes src/sw.js into the build with the list of the build's scripts and styles (see the worker's header). */
+function serviceWorker(): Plugin {
+  return {
+    name: 'kettlewright-service-worker',
+    apply: 'build',
+    generateBundle(_options, bundle) {
+      const files = Object.keys(bundle).filter((f) => /\.(js|css)$/.test(f)).map((f) => `/${f}`);
+      const source = readFileSync('src/sw.js', 'utf8').replace('self.__PRECACHE__', JSON.stringify(files));
+      this.emitFile({ type: 'asset', fileName: 'sw.js', source });
+    },
+  };
+}
 
 const apiPort = Number(process.env.PORT ?? 3000);
 
 export default defineConfig({
-  plugins: [react()],
+  plugins: [react(), serviceWorker()],
   server: {
     port: 5173,
     proxy: { '/api': `http://127.0.0.1:${apiPort}` },

@@ -1,6 +1,10 @@
-// Kettlewright's service worker: keeps the app shell and the last answers of the pages a person opened,
-// so the tablet can reload the brew-day screen with no network. Writes never pass through here:
-// they go to the outbox in the page (src/lib/outbox.ts), which keeps them until the server has them.
+// Kettlewright's service worker: keeps the app shell, the code of every screen, and the last answers of the
+// pages a person opened, so the tablet can reload the brew-day screen, or open a screen it has not opened
+// yet, with no network. Writes never pass through here: they go to the outbox in the page (src/lib/outbox.ts),
+// which keeps them until the server has them.
+// The build (vite.config.ts) writes this file into dist/ with the list of this build's scripts and styles in
+// place of PRECACHE, so each build is a new worker that fetches its own files.
+const PRECACHE = self.__PRECACHE__;
 const SHELL = 'kw-shell-v1';
 const API = 'kw-api';
 
@@ -10,8 +14,18 @@ async function cacheShell() {
   if (!response.ok) return;
   const html = await response.clone().text();
   await cache.put('/', response);
-  const assets = [...html.matchAll(/(?:src|href)="(\/[^"]+)"/g)].map((m) => m[1]);
-  await cache.addAll(assets);
+  const linked = [...html.matchAll(/(?:src|href)="(\/[^"]+)"/g)].map((m) => m[1]);
+  await cache.addAll([...new Set([...linked, ...PRECACHE])]);
+}
+
+/** Scripts and styles of earlier builds: their names carry a hash, so they are never asked for again. */
+async function forgetOldBuilds() {
+  const cache = await caches.open(SHELL);
+  const current = new Set(PRECACHE);
+  for (const request of await cache.keys()) {
+    const path = new URL(request.url).pathname;
+    if (/\.(js|css)$/.test(path) && !current.has(path)) await cache.delete(request);
+  }
 }
 
 self.addEventListener('install', (event) => {
@@ -19,7 +33,7 @@ self.addEventListener('install', (event) => {
 });
 
 self.addEventListener('activate', (event) => {
-  event.waitUntil(self.clients.claim());
+  event.waitUntil(forgetOldBuilds().then(() => self.clients.claim()));
 });
 
 async function networkFirst(request, cacheName, key) {

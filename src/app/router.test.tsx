@@ -3,7 +3,7 @@ import { router } from './router';
 import { NAV_ITEMS, pageRoles } from './navigation';
 
 describe('page access', () => {
-  const signedIn = router.routes.find((r) => r.path === '/')!.children!;
+  const signedIn = router.routes.find((r) => r.path === '/')!.children![0]!.children!;
 
   it('every signed-in page names the roles that may open it', () => {
     const missing = signedIn.filter((r) => !pageRoles([{ handle: r.handle }])?.length).map((r) => r.path ?? '(home)');
