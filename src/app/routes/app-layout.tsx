@@ -25,20 +25,20 @@ export function AppLayout() {
     <CurrentUserContext.Provider value={user}>
       <div className="min-h-screen">
         <header className="no-print sticky top-0 z-40 bg-cellar-800 text-white shadow">
-          {/* Two rows: who and where on top, the menu below in one line that scrolls sideways if it must. */}
+          {/* Who and where on top, the menu below: it wraps onto a second line on a narrow screen, so no item hides off the edge. */}
           <div className="mx-auto flex max-w-7xl items-center justify-between gap-4 px-4 pt-2">
             <NavLink to="/" className="flex min-h-touch items-center gap-2 font-bold">
               <img src="/kettle.svg" alt="" className="h-8 w-8" />
               <span className="text-lg">{user.brewery.name}</span>
             </NavLink>
-            <div className="flex items-center gap-3">
-              <span className="text-sm text-cellar-100">
+            <div className="flex shrink-0 items-center gap-3">
+              <span className="hidden text-sm text-cellar-100 sm:inline">
                 {user.displayName} · {ROLE_LABELS[user.role]}
               </span>
               <SignOutButton onSignedOut={() => navigate('/sign-in', { replace: true })} />
             </div>
           </div>
-          <nav aria-label="Main" className="mx-auto flex max-w-7xl gap-1 overflow-x-auto px-3 pb-2 pt-1">
+          <nav aria-label="Main" className="mx-auto flex max-w-7xl flex-wrap gap-1 px-3 pb-2 pt-1">
             {navFor(user.role).map((item) => (
               <NavLink
                 key={item.to}
