@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { computeRecipe } from '../brewing';
 import { EXAMPLE_IPA, PILOT_SYSTEM } from '../brewing/example-recipes';
-import { batchActuals, boilAdditions, brewDaySteps, type EntryLike } from './brew-day';
+import { batchActuals, boilAdditions, brewDaySteps, farFromExpected, type EntryLike } from './brew-day';
 import type { FrozenPlan } from '../schemas/batches';
 
 const plan: FrozenPlan = {
@@ -47,5 +47,18 @@ describe('planned vs actual', () => {
     // Hitting the planned OG and volume exactly gives the planned efficiency (Palmer, How to Brew, ch. 12).
     expect(actuals.brewhouseEfficiency.actual).toBeCloseTo(PILOT_SYSTEM.brewhouseEfficiency, 12);
     expect(batchActuals(plan, []).brewhouseEfficiency.actual).toBeNull();
+  });
+});
+
+describe('far from expected', () => {
+  it('flags a slipped digit but not a normal brew-day difference (tolerances: common practice, no source)', () => {
+    expect(farFromExpected('tempC', 66.5, 67)).toBe(false);
+    expect(farFromExpected('tempC', 912, 74)).toBe(true);
+    expect(farFromExpected('volumeL', 380, 400)).toBe(false);
+    expect(farFromExpected('volumeL', 40, 400)).toBe(true);
+    expect(farFromExpected('gravitySg', 1.048, 1.052)).toBe(false);
+    expect(farFromExpected('gravitySg', 1.52, 1.052)).toBe(true);
+    expect(farFromExpected('ph', 5.4, 5.3)).toBe(false);
+    expect(farFromExpected('ph', 4.5, 5.3)).toBe(true);
   });
 });

@@ -27,6 +27,25 @@ export interface BrewDayStep {
   hot?: boolean;
 }
 
+/**
+ * How far a measurement may sit from the step's expected value before the screen asks the brewer to check it
+ * (a warning, never a refusal): 3 °C (about 5 °F), 10 % of a volume, 8 gravity points, 0.3 pH.
+ * Common practice, no source: wide enough for a normal brew day, narrow enough to catch a slipped digit.
+ */
+export const EXPECTED_TOLERANCE: Record<MeasureKey, { absolute?: number; relative?: number }> = {
+  tempC: { absolute: 3 },
+  volumeL: { relative: 0.1 },
+  gravitySg: { absolute: 0.008 },
+  ph: { absolute: 0.3 },
+};
+
+/** True when a measured value is further from the expected one than {@link EXPECTED_TOLERANCE} allows. */
+export function farFromExpected(key: MeasureKey, actual: number, expected: number): boolean {
+  const { absolute, relative } = EXPECTED_TOLERANCE[key];
+  const allowed = absolute ?? (relative ?? 0) * Math.abs(expected);
+  return Math.abs(actual - expected) > allowed + 1e-9;
+}
+
 const grams = (g: number): Addition['amount'] => ({ value: g, unit: 'g' });
 
 /** Additions timed in the boil (hops, kettle sugars, adjuncts and spices), by minutes remaining, latest first. */

@@ -24,13 +24,25 @@ export const BREW_DAY_KINDS: readonly string[] = ['step', 'measurement', 'note']
 const num = (label: string, min: number, max: number) =>
   z.number({ error: `${label}: enter a number` }).min(min, `${label} must be at least ${min}`).max(max, `${label} must be at most ${max}`);
 
+/**
+ * What a measurement may be, in SI: the API refuses anything outside, and the tablet checks the same limits
+ * (restated in the units it shows) before an entry is kept.
+ */
+export const MEASUREMENT_LIMITS = {
+  tempC: { label: 'Temperature', min: -10, max: 110 },
+  volumeL: { label: 'Volume', min: 0, max: 200_000 },
+  gravitySg: { label: 'Gravity', min: 0.98, max: 1.2 },
+  ph: { label: 'pH', min: 2, max: 10 },
+} as const;
+const limited = (key: keyof typeof MEASUREMENT_LIMITS) => num(MEASUREMENT_LIMITS[key].label, MEASUREMENT_LIMITS[key].min, MEASUREMENT_LIMITS[key].max);
+
 /** Measurements in SI (the screen converts from the brewery's units): °C, L, specific gravity, pH. */
 export const measurementsSchema = z
   .strictObject({
-    tempC: num('Temperature', -10, 110).optional(),
-    volumeL: num('Volume', 0, 200_000).optional(),
-    gravitySg: num('Gravity', 0.98, 1.2).optional(),
-    ph: num('pH', 2, 10).optional(),
+    tempC: limited('tempC').optional(),
+    volumeL: limited('volumeL').optional(),
+    gravitySg: limited('gravitySg').optional(),
+    ph: limited('ph').optional(),
   })
   .refine((m) => Object.keys(m).length > 0, 'Enter at least one measurement');
 export type Measurements = z.infer<typeof measurementsSchema>;

@@ -108,6 +108,36 @@ describe('brew day offline (Chromium, 1024×768)', () => {
     await screenshot(page, 'brew-day-online-1024.png');
   });
 
+  it('a fat-finger temperature is refused on the tablet in °F with the value kept, and a double tap logs one entry', async () => {
+    const page = tablet.pages().at(-1)!;
+    const logged = async () => ((await (await page.request.get(`/api/batches/${batchId}/log`)).json()) as { stepKey: string }[]).map((e) => e.stepKey);
+    const before = await logged();
+    await page.getByRole('button', { name: /^\d+\.\s*Heat strike water/ }).click();
+    await eventually(() => page.getByTestId('current-step').textContent()).toBe('Heat strike water');
+    const temperature = page.getByLabel(/^Temperature \(/);
+    await temperature.fill('1674');
+    // Far from the plan: a warning beside the field, before Done.
+    await eventually(() => page.getByText(/^Far from the expected/).count()).toBe(1);
+    await page.getByRole('button', { name: 'Log again', exact: true }).click();
+    // The shared schema's 110 °C limit, said in the °F the field shows.
+    await eventually(() => page.getByRole('alert').filter({ hasText: 'Temperature must be at most 230 °F' }).count()).toBe(1);
+    expect(await page.getByTestId('current-step').textContent()).toBe('Heat strike water');
+    expect(await temperature.inputValue()).toBe('1674');
+    expect(await temperature.getAttribute('aria-invalid')).toBe('true');
+    await screenshot(page, 'brew-day-limit-1024.png', { fullPage: false });
+    await page.setViewportSize({ width: 768, height: 1024 });
+    await screenshot(page, 'brew-day-limit-768.png', { fullPage: false });
+    await page.setViewportSize({ width: 1024, height: 768 });
+
+    await page.getByRole('button', { name: /^\d+\.\s*Start knockout/ }).click();
+    await eventually(() => page.getByTestId('current-step').textContent()).toBe('Start knockout');
+    await temperature.fill('66');
+    await page.getByRole('button', { name: 'Done', exact: true }).dblclick();
+    await eventually(async () => (await logged()).length).toBe(before.length + 1);
+    await page.waitForTimeout(1500);
+    expect(await logged()).toEqual([...before, 'knockout-start']);
+  });
+
   it('the head brewer signs the brew day off with their password', async () => {
     const page = await head.newPage();
     await page.goto(`/batches/${batchId}`);

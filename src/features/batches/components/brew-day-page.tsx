@@ -1,22 +1,23 @@
-import { useMemo, useState } from 'react';
+import { useEffect, useMemo, useRef, useState } from 'react';
 import { useParams } from 'react-router-dom';
-import { brewDaySteps, boilAdditions, type BrewDayStep } from '../../../../shared/batches/brew-day';
+import { brewDaySteps, boilAdditions, type BrewDayStep, type MeasureKey } from '../../../../shared/batches/brew-day';
 import { BATCH_STATUS_LABELS } from '../../../../shared/schemas/batches';
 import { Button, Card, Caution, ErrorState, LinkButton, Loading, TextAreaField, cx } from '../../../components/ui';
 import { useCurrentUser } from '../../../app/current-user';
-import { useOutbox, type OutboxItem } from '../../../lib/outbox';
+import { outbox, useOutbox, type OutboxItem } from '../../../lib/outbox';
 import { useBatch } from '../api/get-batch';
 import { batchGroup, logEntry } from '../api/log-entry';
 import { ActualsCard } from './actuals-card';
 import { BoilTimer } from './boil-timer';
 import { LogList } from './log-list';
-import { MeasurementFields, toMeasurements, type GravityUnit, type Typed } from './measurement-fields';
+import { MeasurementFields, refusalOf, toMeasurements, type GravityUnit, type Typed } from './measurement-fields';
 import { OutboxPanel } from '../../../components/outbox-panel';
 import { SignOffPanel, Signatures } from './sign-off-panel';
 import { StatusCard } from './status-card';
 import { showAddition, showMeasurements } from './format';
 import { showTime } from '../../../lib/time';
 import { useOnline } from './use-online';
+import { useTapGuard } from './use-tap-guard';
 
 interface Done {
   at: string;
@@ -47,12 +48,34 @@ export function BrewDayPage() {
   const [typed, setTyped] = useState<Typed>({});
   const [gravity, setGravity] = useState<GravityUnit>('sg');
   const [error, setError] = useState<string | null>(null);
+  const [invalid, setInvalid] = useState<MeasureKey | undefined>(undefined);
+  /** What was typed for each entry this screen sent, so a refusal brings the values back (by idempotency key). */
+  const sent = useRef(new Map<string, { stepKey: string; typed: Typed; gravity: GravityUnit }>());
+  /** The refused entry whose values are back on screen: dismissed once the step is sent again. */
+  const refused = useRef<string | null>(null);
+  const guard = useTapGuard();
   const [note, setNote] = useState('');
   const [deviation, setDeviation] = useState(false);
 
   const plan = batch.data?.plan;
   const steps = useMemo(() => (plan ? brewDaySteps(plan) : []), [plan]);
   const additions = useMemo(() => (plan ? boilAdditions(plan) : []), [plan]);
+
+  // The server refused a step this screen sent: go back to that step with what was typed, and say which field and why.
+  useEffect(() => {
+    for (const item of items) {
+      const mine = sent.current.get(item.idempotencyKey);
+      if (item.state !== 'rejected' || !mine) continue;
+      sent.current.delete(item.idempotencyKey);
+      const { message, field } = refusalOf(item, system, mine.gravity);
+      refused.current = item.idempotencyKey;
+      setSelected(mine.stepKey);
+      setTyped(mine.typed);
+      setGravity(mine.gravity);
+      setInvalid(field);
+      setError(`Not saved: ${message}. Your values are kept: correct them and tap Done again.`);
+    }
+  }, [items, system]);
   if (batch.isPending) return <Loading label="Opening the batch" />;
   if (batch.isError) return <ErrorState error={batch.error} onRetry={() => batch.refetch()} />;
   const b = batch.data;
@@ -61,17 +84,30 @@ export function BrewDayPage() {
   const waitingCount = items.filter((i) => i.state === 'waiting').length;
   const signed = b.brewDaySigned;
 
-  const markDone = async (step: BrewDayStep) => {
-    const { measurements, error: bad } = toMeasurements(typed, system, gravity);
-    if (bad) return setError(bad);
+  /** Logs the step once per press: a second tap while it is kept, or just after, is ignored (see useTapGuard). */
+  const markDone = (step: BrewDayStep) => guard.run(step.key, selected === step.key, () => logStep(step));
+  const logStep = async (step: BrewDayStep): Promise<boolean> => {
+    const { measurements, error: bad, field } = toMeasurements(typed, system, gravity);
+    if (bad) {
+      setInvalid(field);
+      setError(bad);
+      return false;
+    }
     setError(null);
-    await logEntry(
+    setInvalid(undefined);
+    const item = await logEntry(
       id,
       { kind: 'step', stepKey: step.key, label: step.label, meaning: 'performed', ...(measurements ? { measurements } : {}) },
       measurements ? `${step.label} · ${showMeasurements(system, measurements)}` : step.label,
     );
+    sent.current.set(item.idempotencyKey, { stepKey: step.key, typed, gravity });
+    if (refused.current) {
+      void outbox().dismiss(refused.current);
+      refused.current = null;
+    }
     setTyped({});
     setSelected(null);
+    return true;
   };
 
   return (
@@ -130,7 +166,16 @@ export function BrewDayPage() {
               )}
               {current.asks.length > 0 && (
                 <div className="mt-4">
-                  <MeasurementFields asks={current.asks} expected={current.expected} typed={typed} onChange={setTyped} system={system} gravity={gravity} onGravityUnit={setGravity} />
+                  <MeasurementFields
+                    asks={current.asks}
+                    expected={current.expected}
+                    typed={typed}
+                    onChange={setTyped}
+                    system={system}
+                    gravity={gravity}
+                    onGravityUnit={setGravity}
+                    invalid={invalid}
+                  />
                 </div>
               )}
               {error && (
@@ -138,7 +183,7 @@ export function BrewDayPage() {
                   {error}
                 </p>
               )}
-              <Button size="xl" className="mt-5 w-full text-2xl" onClick={() => void markDone(current)}>
+              <Button size="xl" className="mt-5 w-full text-2xl" busy={guard.pending} onClick={() => void markDone(current)}>
                 {done.has(current.key) ? 'Log again' : 'Done'}
               </Button>
             </Card>
@@ -158,7 +203,13 @@ export function BrewDayPage() {
                   <li key={s.key}>
                     <button
                       type="button"
-                      onClick={() => setSelected(s.key)}
+                      onClick={() => {
+                        if (s.key !== current?.key) {
+                          setError(null);
+                          setInvalid(undefined);
+                        }
+                        setSelected(s.key);
+                      }}
                       aria-current={current?.key === s.key ? 'step' : undefined}
                       className={cx(
                         'flex min-h-[56px] w-full items-center justify-between gap-2 rounded-lg border-2 px-3 text-left',
