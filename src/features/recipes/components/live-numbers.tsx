@@ -5,10 +5,11 @@ import {
   targetWarnings,
   waterDoseWarnings,
   type BrewingWarning,
+  type ComputedAdjunct,
   type ComputedRecipe,
   type EquipmentProfile,
 } from '../../../../shared/brewing';
-import { equipmentAtVolume, recipeContentSchema, resolveHopShares, toRecipeInput, type RecipeVersionContent } from '../../../../shared/schemas/recipes';
+import { adjunctSchema, equipmentAtVolume, recipeContentSchema, spiceSchema, resolveHopShares, toRecipeInput, type RecipeVersionContent } from '../../../../shared/schemas/recipes';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
 import { show, showVolume } from '../../../lib/units';
 import { cx } from '../../../components/ui';
@@ -16,24 +17,60 @@ import { cx } from '../../../components/ui';
 export interface LiveNumbers {
   computed?: ComputedRecipe;
   problem?: string;
+  /** Rows the numbers leave out while they are being filled in, e.g. "Spice 2". */
+  leftOut?: string[];
   warnings: BrewingWarning[];
+  /** The computed adjunct for the i-th addition on the form (prepared adjuncts, then spices), if it was counted. */
+  adjunctAt: (i: number) => ComputedAdjunct | undefined;
+}
+
+interface RowsIn {
+  adjuncts?: unknown[];
+  spices?: unknown[];
+}
+
+/**
+ * The content without adjunct and spice rows that are not complete yet (a row just added has no
+ * name), so the rest of the recipe still has numbers; `slots` maps each form row to its computed row.
+ */
+function withoutIncompleteRows(content: unknown): { content: unknown; slots: (number | undefined)[]; leftOut: string[] } {
+  const rows = (content ?? {}) as RowsIn;
+  const slots: (number | undefined)[] = [];
+  const leftOut: string[] = [];
+  let next = 0;
+  const keep = (list: unknown[] | undefined, schema: typeof adjunctSchema | typeof spiceSchema, label: string) =>
+    (list ?? []).filter((row, i) => {
+      const ok = schema.safeParse(row).success;
+      slots.push(ok ? next++ : undefined);
+      if (!ok) leftOut.push(`${label} ${i + 1}`);
+      return ok;
+    });
+  const adjuncts = keep(rows.adjuncts, adjunctSchema, 'Adjunct');
+  const spices = keep(rows.spices, spiceSchema, 'Spice');
+  return { content: { ...rows, adjuncts, spices }, slots, leftOut };
 }
 
 /** Every number for the editor's current values, from shared/brewing; nothing is computed here. */
 export function useLiveNumbers(name: string, content: unknown, equipment: EquipmentProfile | undefined): LiveNumbers {
   const json = JSON.stringify(content);
   return useMemo(() => {
-    if (!equipment) return { problem: 'Choose the equipment this recipe is written for.', warnings: [] };
-    const parsed = recipeContentSchema.safeParse(JSON.parse(json));
-    if (!parsed.success) return { problem: 'Some fields need attention; the numbers update once they are filled in.', warnings: [] };
+    const none = () => undefined;
+    if (!equipment) return { problem: 'Choose the equipment this recipe is written for.', warnings: [], adjunctAt: none };
+    const { content: complete, slots, leftOut } = withoutIncompleteRows(JSON.parse(json));
+    const parsed = recipeContentSchema.safeParse(complete);
+    if (!parsed.success) return { problem: 'Some fields need attention; the numbers update once they are filled in.', warnings: [], adjunctAt: none };
     try {
       const atVolume = equipmentAtVolume(equipment, parsed.data.targets.batchVolumeL);
       const c: RecipeVersionContent = resolveHopShares(name || 'Recipe', parsed.data, atVolume);
       const computed = computeRecipe(toRecipeInput(name || 'Recipe', c), atVolume);
       const warnings = [...computed.warnings, ...targetWarnings(computed, c.targets), ...(computed.water ? waterDoseWarnings(computed.water) : [])];
-      return { computed, warnings };
+      const adjunctAt = (i: number) => {
+        const slot = slots[i];
+        return slot === undefined ? undefined : computed.adjuncts[slot];
+      };
+      return { computed, warnings, adjunctAt, ...(leftOut.length ? { leftOut } : {}) };
     } catch (error) {
-      if (error instanceof BrewingInputError) return { problem: error.message, warnings: [] };
+      if (error instanceof BrewingInputError) return { problem: error.message, warnings: [], adjunctAt: none };
       throw error;
     }
   }, [name, json, equipment]);
@@ -54,6 +91,7 @@ export function LiveNumbersPanel({ live, system }: { live: LiveNumbers; system: 
   return (
     <section aria-label="Live numbers" className="space-y-3">
       {live.problem && <p className="rounded-lg bg-sky-100 p-3 text-sm text-sky-700">{live.problem}</p>}
+      {live.leftOut && <p className="rounded-lg bg-sky-100 p-3 text-sm text-sky-700">Leaving out {live.leftOut.join(', ')} until {live.leftOut.length > 1 ? 'they are' : 'it is'} filled in.</p>}
       <div className="grid grid-cols-2 gap-2">
         <Figure label="OG">{c ? c.og.toFixed(3) : '—'}</Figure>
         <Figure label="FG">{c ? c.fg.toFixed(3) : '—'}</Figure>

@@ -103,4 +103,17 @@ describe('recipe editor', () => {
     fireEvent.change(adjunct.getByLabelText('Sugar (% of weight)'), { target: { value: '0' } });
     expect(Number(ogOnScreen())).toBeCloseTo(withFruit.og - 0.0028, 3);
   });
+
+  it('keeps the numbers from the complete rows while a new spice row has no name yet', () => {
+    renderEditor();
+    const ibuBefore = ibuOnScreen();
+    fireEvent.click(screen.getByRole('button', { name: 'Add a spice' }));
+    expect(ibuOnScreen()).toBe(ibuBefore);
+    expect(within(screen.getByRole('group', { name: 'OG' })).getByText(/^1\.\d{3}$/)).toBeTruthy();
+    expect(screen.queryByText(/Some fields need attention/)).toBeNull();
+    expect(screen.getByText('Leaving out Spice 2 until it is filled in.')).toBeTruthy();
+    // The first spice's amount is still shown against its own row.
+    expect(screen.getByLabelText('Spices 1 amount').textContent).not.toBe('');
+    expect(screen.getByLabelText('Spices 2 amount').textContent).toBe('');
+  });
 });

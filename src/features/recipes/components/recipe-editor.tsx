@@ -24,6 +24,7 @@ import { Button, Card, SelectField, TextAreaField, TextField, cx } from '../../.
 import type { EquipmentRow } from '../../library/api/equipment';
 import type { IngredientRow } from '../../library/api/ingredients';
 import { LiveNumbersPanel, useLiveNumbers } from './live-numbers';
+import { showAdjunct } from './scale-view';
 import { UnitField, asNumber } from '../../../components/ui/unit-field';
 import { show } from '../../../lib/units';
 import { FormBanner } from '../../../components/ui/form-banner';
@@ -515,12 +516,15 @@ export function RecipeEditor({ initial, equipment, library, system, canEdit, not
   const spiceCount = values.content?.spices?.length ?? 0;
   // What each addition's sugar does to the OG, or why it is not counted; blank when it has none.
   const sugarNote = (i: number) => {
-    const a = c?.adjuncts[i];
+    const a = live.adjunctAt(i);
     if (!a) return '';
     if (a.sugarNotCounted) return `Sugar not counted: ${a.sugarNotCounted}.`;
     return a.gravityPoints > 0 ? `${a.sugarPct} % sugar adds ${a.gravityPoints.toFixed(1)} points to the OG` : a.sugarPct > 0 ? '' : 'No sugar counted toward the OG';
   };
-  const measured = (i: number) => (c?.adjuncts[i] ? `${c.adjuncts[i]!.amount.value > 0 ? (system === 'us' ? c.adjuncts[i]!.measuredUs : c.adjuncts[i]!.measuredMetric).value + ' ' + (system === 'us' ? c.adjuncts[i]!.measuredUs : c.adjuncts[i]!.measuredMetric).unit : '0'}` : '');
+  const measured = (i: number) => {
+    const a = live.adjunctAt(i);
+    return a ? (a.amount.value > 0 ? showAdjunct(a, system) : '0') : '';
+  };
 
   const submit = handleSubmit(async (v) => {
     setBanner(undefined);
