@@ -1,8 +1,10 @@
 import { forwardRef, useId, type InputHTMLAttributes, type ReactNode, type SelectHTMLAttributes, type TextareaHTMLAttributes } from 'react';
 import { cx } from './cx';
 
+// The field being typed in wears a brass ring as wide as the focus outline elsewhere; a field that cannot be
+// changed is greyed, so it never looks editable.
 const control =
-  'block w-full min-h-touch rounded-lg border-2 border-mist-300 bg-white px-3 text-base text-ink-900 placeholder:text-ink-300 focus:border-cellar-600 focus:outline-none aria-[invalid=true]:border-ember-600';
+  'block w-full min-h-touch rounded-lg border-2 border-mist-300 bg-white px-3 text-base text-ink-900 placeholder:text-ink-300 focus:border-cellar-600 focus:outline-none focus:ring-4 focus:ring-brass-400/70 aria-[invalid=true]:border-ember-600 disabled:cursor-not-allowed disabled:border-mist-200 disabled:bg-mist-100 disabled:text-ink-500';
 
 interface FieldShellProps {
   id: string;
