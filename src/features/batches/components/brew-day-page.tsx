@@ -35,6 +35,14 @@ function doneSteps(entries: { kind: string; stepKey: string | null; capturedAt: 
   return done;
 }
 
+/** When the boil ended: flame-out, or the first step after it that was logged (a flame-out not marked). */
+function boilEnd(steps: BrewDayStep[], done: Map<string, Done>): string | null {
+  const from = steps.findIndex((s) => s.key === 'flame-out');
+  if (from < 0) return null;
+  const times = steps.slice(from).flatMap((s) => (done.has(s.key) ? [done.get(s.key)!.at] : []));
+  return times.length ? times.reduce((a, b) => (Date.parse(a) <= Date.parse(b) ? a : b)) : null;
+}
+
 /** The tablet's brew-day screen: walk the plan step by step, measure, note, and sign off. */
 export function BrewDayPage() {
   const id = Number(useParams().batchId);
@@ -235,7 +243,15 @@ export function BrewDayPage() {
 
         <div className="space-y-4">
           <OutboxPanel group={batchGroup(id)} timeZone={timeZone} />
-          <BoilTimer boilStartedAt={done.get('boil-start')?.at ?? null} boilMinutes={b.plan.equipment.boilMinutes} additions={additions} system={system} />
+          <BoilTimer
+            boilStartedAt={done.get('boil-start')?.at ?? null}
+            boilEndedAt={boilEnd(steps, done)}
+            boilMinutes={b.plan.equipment.boilMinutes}
+            additions={additions}
+            loggedMinutes={new Set(steps.filter((s) => s.boilMinute !== undefined && done.has(s.key)).map((s) => s.boilMinute!))}
+            system={system}
+            timeZone={timeZone}
+          />
           {!signed && (
             <Card className="p-4">
               <h2 className="text-lg font-bold">Note or deviation</h2>
