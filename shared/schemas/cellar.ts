@@ -77,6 +77,20 @@ export const READING_METHOD_LABELS: Record<ReadingMethod, string> = {
 export const GRAVITY_UNITS = ['sg', 'plato', 'brix'] as const;
 export type GravityUnit = (typeof GRAVITY_UNITS)[number];
 
+/** Highest reading accepted per unit: SG 1.200 ≈ 43 °P; a wort above 35 °P or 40 °Bx is a typing slip. */
+const GRAVITY_MAX = { sg: 1.2, plato: 35, brix: 40 } as const;
+
+/**
+ * The message for a gravity outside its unit's range, in that unit, or null. A specific gravity typed
+ * as points ("1015", "15" for 1.015) is met with the reading it probably meant.
+ */
+export function gravityOutOfRange(gravity: number, unit: GravityUnit): string | null {
+  if (unit !== 'sg') return gravity > GRAVITY_MAX[unit] ? `Gravity must be at most ${GRAVITY_MAX[unit]} ${unit === 'plato' ? '°P' : '°Bx'}` : null;
+  if (gravity >= 0.98 && gravity <= GRAVITY_MAX.sg) return null;
+  const meant = gravity >= 980 && gravity <= 1200 ? gravity / 1000 : null;
+  return `A specific gravity is between 0.980 and 1.200${meant === null ? '' : `: did you mean ${meant.toFixed(3)}?`}`;
+}
+
 /**
  * One gravity reading. A hydrometer or probe reads SG or °Plato; a refractometer reads °Brix,
  * corrected for wort (and, once fermenting, for alcohol using the original reading).
@@ -85,7 +99,8 @@ export const readingEntrySchema = z
   .strictObject({
     kind: z.literal('reading'),
     method: z.enum(READING_METHODS, { error: 'Choose how it was measured' }),
-    gravity: num('Gravity', 0, 40),
+    /** Its range depends on `gravityUnit`: checked below, so the message gives the limit of the unit in use. */
+    gravity: z.number({ error: 'Gravity: enter a number' }).min(0, 'Gravity must be at least 0'),
     gravityUnit: z.enum(GRAVITY_UNITS, { error: 'Choose SG, °P or °Bx' }),
     /** Refractometer only: the reading at knockout, °Brix, for the alcohol correction. */
     originalBrix: num('Original reading', 0, 40).optional(),
@@ -99,12 +114,8 @@ export const readingEntrySchema = z
     if ((r.method === 'refractometer') !== (r.gravityUnit === 'brix')) {
       ctx.addIssue({ code: 'custom', path: ['gravityUnit'], message: 'A refractometer reads °Brix; a hydrometer or probe reads SG or °P' });
     }
-    if (r.gravityUnit === 'sg' && (r.gravity < 0.98 || r.gravity > 1.2)) {
-      ctx.addIssue({ code: 'custom', path: ['gravity'], message: 'A specific gravity is between 0.980 and 1.200' });
-    }
-    if (r.gravityUnit === 'plato' && r.gravity > 35) {
-      ctx.addIssue({ code: 'custom', path: ['gravity'], message: 'Gravity must be at most 35 °P' });
-    }
+    const gravityIssue = gravityOutOfRange(r.gravity, r.gravityUnit);
+    if (gravityIssue) ctx.addIssue({ code: 'custom', path: ['gravity'], message: gravityIssue });
   });
 export type ReadingEntryInput = z.infer<typeof readingEntrySchema>;
 

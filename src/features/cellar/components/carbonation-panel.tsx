@@ -7,6 +7,7 @@ import { UNITS } from '../../../lib/units';
 import { useCarbonation } from '../api/carbonation';
 import { useLogCellarEntry } from '../api/log-cellar-entry';
 import { useSubmitOnce } from './submit-once';
+import { optionalNumber } from './form-values';
 
 const pressure = (system: UnitSystem, kpa: number) => (system === 'us' ? `${kpaToPsi(kpa).toFixed(1)} psi` : `${kpa.toFixed(0)} kPa`);
 
@@ -17,9 +18,9 @@ export function CarbonationPanel({ batchId, vessel, plan, unitSystem }: { batchI
   const [beerTemp, setBeerTemp] = useState(temp.toDisplay(plan.crashTempC).toFixed(1));
   const [saved, setSaved] = useState<string>();
   const log = useLogCellarEntry(batchId);
-  const valid = Number.isFinite(Number(volumes)) && Number.isFinite(Number(beerTemp)) && volumes !== '' && beerTemp !== '';
+  const [co2Volumes, tempValue] = [optionalNumber(volumes.trim()), optionalNumber(beerTemp.trim())];
   const tempUnit = unitSystem === 'us' ? 'f' : 'c';
-  const query = valid ? { vesselId: vessel.id, co2Volumes: Number(volumes), temp: Number(beerTemp), tempUnit } as const : null;
+  const query = Number.isFinite(co2Volumes) && Number.isFinite(tempValue) ? ({ vesselId: vessel.id, co2Volumes: co2Volumes!, temp: tempValue!, tempUnit } as const) : null;
   const answer = useCarbonation(query);
   const { once, busy } = useSubmitOnce();
 

@@ -96,3 +96,28 @@ describe('packaging summary', () => {
     expect(screen.getByLabelText('Packaged volume').textContent).toContain('Losses0.76 bbl (7.5 %)');
   });
 });
+
+describe('reading form numbers', () => {
+  beforeEach(() => {
+    log.mockReset();
+    log.mockResolvedValue(undefined);
+  });
+
+  it('reads a decimal comma as a decimal point, as the brew-day screen does', async () => {
+    render(<ReadingForm batchId={1} readings={[]} unitSystem="us" />);
+    fireEvent.change(screen.getByLabelText('Gravity (SG)'), { target: { value: '1,012' } });
+    fireEvent.change(screen.getByLabelText('Temperature (°F)'), { target: { value: '66,5' } });
+    fireEvent.submit(screen.getByRole('form', { name: 'Log a reading' }));
+    await waitFor(() => expect(log).toHaveBeenCalledTimes(1));
+    expect(log.mock.calls[0]![0]).toMatchObject({ gravity: 1.012, gravityUnit: 'sg', temp: 66.5 });
+  });
+
+  it('gives the SG limit, not the °P one, for "1015" typed in SG', async () => {
+    render(<ReadingForm batchId={1} readings={[]} unitSystem="us" />);
+    fireEvent.change(screen.getByLabelText('Gravity (SG)'), { target: { value: '1015' } });
+    fireEvent.submit(screen.getByRole('form', { name: 'Log a reading' }));
+    expect(await screen.findByText('A specific gravity is between 0.980 and 1.200: did you mean 1.015?')).toBeTruthy();
+    expect(screen.queryByText(/at most 40/)).toBeNull();
+    expect(log).not.toHaveBeenCalled();
+  });
+});

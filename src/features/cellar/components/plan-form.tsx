@@ -9,6 +9,7 @@ import { UNITS } from '../../../lib/units';
 import { applyServerErrors } from '../../../lib/forms';
 import { useSavePlan } from '../api/plan';
 import { FormBanner } from '../../../components/ui/form-banner';
+import { optionalNumber } from './form-values';
 
 /** The batch's cellar plan: what readings and alerts are measured against. The head brewer adjusts it. */
 export function PlanForm({ batchId, plan, unitSystem, canEdit }: { batchId: number; plan: CellarPlanView; unitSystem: UnitSystem; canEdit: boolean }) {
@@ -31,7 +32,7 @@ export function PlanForm({ batchId, plan, unitSystem, canEdit }: { batchId: numb
     },
   });
   const e = formState.errors;
-  const num = { valueAsNumber: true } as const;
+  const num = { setValueAs: optionalNumber } as const;
   const [fg, points] = watch(['plannedFg', 'dRestPoints']);
   const trigger = Number.isFinite(fg) && Number.isFinite(points) && points >= 0 && points <= 20 && fg >= 0.98 && fg <= 1.2 ? dRestTriggerSg(fg, points) : null;
   const onSubmit = handleSubmit(async (values) => {

@@ -11,6 +11,7 @@ import { useSaveVessel, useVessels } from '../api/vessels';
 import { useDeleteVessel, useMarkClean } from '../api/vessel-state';
 import { FormBanner } from '../../../components/ui/form-banner';
 import { useSubmitOnce } from './submit-once';
+import { optionalNumber } from './form-values';
 
 function VesselForm({ vessel, onDone }: { vessel?: VesselView; onDone: () => void }) {
   const me = useCurrentUser();
@@ -49,12 +50,12 @@ function VesselForm({ vessel, onDone }: { vessel?: VesselView; onDone: () => voi
         <option value="bright_tank">Bright tank</option>
       </SelectField>
       <div className="grid grid-cols-[1fr_6rem] gap-3">
-        <TextField label="Capacity" inputMode="decimal" {...register('capacity', { valueAsNumber: true })} error={e.capacity?.message} />
+        <TextField label="Capacity" inputMode="decimal" {...register('capacity', { setValueAs: optionalNumber })} error={e.capacity?.message} />
         <SelectField label="Unit" {...register('capacityUnit')}>
           <option value="bbl">bbl</option>
           <option value="l">L</option>
         </SelectField>
-        <TextField label="Rated working pressure (gauge)" hint="From the vessel's nameplate." inputMode="decimal" {...register('ratedPressure', { valueAsNumber: true })} error={e.ratedPressure?.message} />
+        <TextField label="Rated working pressure (gauge)" hint="From the vessel's nameplate." inputMode="decimal" {...register('ratedPressure', { setValueAs: optionalNumber })} error={e.ratedPressure?.message} />
         <SelectField label="Unit" {...register('pressureUnit')}>
           <option value="psi">psi</option>
           <option value="kpa">kPa</option>
