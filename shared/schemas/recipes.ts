@@ -164,15 +164,25 @@ const additionBase = {
 
 const boilMinuteRequired = (a: { stage: string; boilMinutes?: number | undefined }) => a.stage !== 'boil' || a.boilMinutes !== undefined;
 
+/** Only a boil addition has a minute: one left over from before the stage changed is dropped, not saved or printed. */
+function withoutStaleMinute<T extends { stage: string; boilMinutes?: number | undefined }>(a: T): T {
+  if (a.stage === 'boil' || a.boilMinutes === undefined) return a;
+  const { boilMinutes: _stale, ...rest } = a;
+  return rest as T;
+}
+
 /** A prepared adjunct: the dose rule plus what is done to it before it goes in. */
 export const adjunctSchema = z.strictObject({
   ...additionBase,
   preparation: z
     .array(z.strictObject({ text: z.string().trim().min(1, 'Describe the step').max(300, 'Use at most 300 characters') }))
     .max(12),
-}).refine(boilMinuteRequired, { path: ['boilMinutes'], message: 'A boil addition needs its minute' });
+}).refine(boilMinuteRequired, { path: ['boilMinutes'], message: 'A boil addition needs its minute' }).transform(withoutStaleMinute);
 
-export const spiceSchema = z.strictObject(additionBase).refine(boilMinuteRequired, { path: ['boilMinutes'], message: 'A boil addition needs its minute' });
+export const spiceSchema = z
+  .strictObject(additionBase)
+  .refine(boilMinuteRequired, { path: ['boilMinutes'], message: 'A boil addition needs its minute' })
+  .transform(withoutStaleMinute);
 
 // ------------------------------------------------------------- yeast/ferment
 
@@ -314,7 +324,7 @@ export function toRecipeInput(recipeName: string, content: RecipeVersionContent)
     name,
     category,
     stage,
-    ...(boilMinutes === undefined ? {} : { boilMinutes }),
+    ...(boilMinutes === undefined || stage !== 'boil' ? {} : { boilMinutes }),
     rule,
     level,
     ...(sugarPct === undefined ? {} : { sugarPct }),

@@ -99,6 +99,16 @@ describe('recipes API', () => {
     expect(list.body.find((r: { id: number }) => r.id === recipeId).lastBrewedAt).not.toBeNull();
   });
 
+  it('drops the boil minute of an adjunct that goes in the fermenter, so the brew sheet never times it', async () => {
+    const moved: RecipeVersionContent = { ...SEASONAL_CONTENT, adjuncts: [{ ...SEASONAL_CONTENT.adjuncts[0]!, stage: 'fermenter', boilMinutes: 15 }] };
+    const res = await t.as.head_brewer.post('/api/recipes').send({ name: 'Fermenter fruit', style: '', description: '', status: 'draft', changeNote: 'Fruit to the fermenter', equipmentProfileId: equipmentIds.pilot, content: moved });
+    expect(res.status, JSON.stringify(res.body)).toBe(201);
+    const detail = await t.as.head_brewer.get(`/api/recipes/${res.body.id}/versions/${res.body.versionId}`);
+    expect(detail.body.version.content.adjuncts[0].stage).toBe('fermenter');
+    expect(detail.body.version.content.adjuncts[0]).not.toHaveProperty('boilMinutes');
+    expect(toRecipeInput('x', moved).adjuncts[0]).not.toHaveProperty('boilMinutes');
+  });
+
   it('stores the solved weight of a hop written as a share of the target IBU', async () => {
     const { recipeId, versionId } = await createSeasonal('Share test');
     const content: RecipeVersionContent = { ...SEASONAL_CONTENT, hops: [{ ...SEASONAL_CONTENT.hops[0]!, ibuSharePct: 75, weightG: 0 }, SEASONAL_CONTENT.hops[1]!] };

@@ -179,7 +179,7 @@ function Sheet({ data, system }: { data: ScaleResult; system: UnitSystem }) {
                   <li key={j} className="flex gap-2">{tick}<span>{j + 1}. {s.text}</span></li>
                 ))}
               </ol>
-              <p className="text-sm">Goes in: {a.stage}{a.boilMinutes !== undefined ? ` at ${a.boilMinutes} min left` : ''}. {a.howAdded}</p>
+              <p className="text-sm">Goes in: {a.stage}{a.stage === 'boil' && a.boilMinutes !== undefined ? ` at ${a.boilMinutes} min left` : ''}. {a.howAdded}</p>
             </div>
           ))}
         </Part>

@@ -116,4 +116,14 @@ describe('recipe editor', () => {
     expect(screen.getByLabelText('Spices 1 amount').textContent).not.toBe('');
     expect(screen.getByLabelText('Spices 2 amount').textContent).toBe('');
   });
+
+  it("clears an adjunct's boil minute when it moves to the fermenter", () => {
+    renderEditor();
+    const adjunct = within(screen.getByRole('group', { name: 'Adjunct 1' }));
+    expect((adjunct.getByLabelText('Minutes left') as HTMLInputElement).value).toBe('15');
+    fireEvent.change(adjunct.getByLabelText('Goes in'), { target: { value: 'fermenter' } });
+    expect(adjunct.queryByLabelText('Minutes left')).toBeNull();
+    fireEvent.change(adjunct.getByLabelText('Goes in'), { target: { value: 'boil' } });
+    expect((adjunct.getByLabelText('Minutes left') as HTMLInputElement).value).toBe('');
+  });
 });

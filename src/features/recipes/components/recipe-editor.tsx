@@ -402,11 +402,29 @@ function Additions({ control, register, errors, disabled, kind, amounts, sugar, 
               </SelectField>
             ))}
             {w('w-32', (
-              <SelectField label="Goes in" {...register(`${p}.stage`)} disabled={disabled}>
+              <SelectField
+                label="Goes in"
+                {...register(`${p}.stage`, {
+                  // Only the boil counts minutes left: a minute kept from the boil would put fruit in the fermenter "at 15 min left".
+                  onChange: (e) => e.target.value !== 'boil' && setValue(`${p}.boilMinutes`, undefined, { shouldValidate: true }),
+                })}
+                disabled={disabled}
+              >
                 {ADJUNCT_STAGES.map((x) => <option key={x} value={x}>{STAGE_LABELS[x]}</option>)}
               </SelectField>
             ))}
-            {v?.stage === 'boil' && w('w-28', <TextField label="Minutes left" type="number" step="any" {...register(`${p}.boilMinutes`, asNumber(true))} error={errorAt(errors, `${p}.boilMinutes`)} disabled={disabled} />)}
+            {v?.stage === 'boil' && w('w-28', (
+              // Controlled, so a minute cleared by leaving the boil stays cleared when the field comes back.
+              <TextField
+                label="Minutes left"
+                type="number"
+                step="any"
+                value={typeof v.boilMinutes === 'number' && Number.isFinite(v.boilMinutes) ? v.boilMinutes : ''}
+                onChange={(e) => setValue(`${p}.boilMinutes`, asNumber(true).setValueAs(e.target.value), { shouldValidate: true, shouldDirty: true })}
+                error={errorAt(errors, `${p}.boilMinutes`)}
+                disabled={disabled}
+              />
+            ))}
             <div className="flex w-full flex-wrap items-end gap-3">
               {w('w-44', (
                 <SelectField
