@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { checkPassword, hashPassword } from './passwords';
+import { assertStrongPassword, checkPassword, hashPassword } from './passwords';
+import { HttpError } from '../errors';
 
 describe('password hashing', () => {
   it('counts every character of a long passphrase (bcrypt alone stops at 72 bytes)', async () => {
@@ -12,5 +13,19 @@ describe('password hashing', () => {
   it('uses a bcrypt cost of at least 10', async () => {
     const hash = await hashPassword('slate-otter-windmill-45');
     expect(Number(hash.split('$')[2])).toBeGreaterThanOrEqual(10);
+  });
+});
+
+describe('refusing a weak password', () => {
+  it('words the reason as whole sentences, each ending in one full stop', () => {
+    for (const password of ['password1', 'qwertyuiop', 'aaaaaaaaaa']) {
+      let message = '';
+      try {
+        assertStrongPassword(password);
+      } catch (error) {
+        message = (error as HttpError).fields?.password ?? '';
+      }
+      expect(message).toMatch(/^[^.]+\. [^.]+\.$/);
+    }
   });
 });

@@ -20,9 +20,11 @@ const estimator = new ZxcvbnFactory({
 export function assertStrongPassword(password: string, context: string[] = [], field = 'password'): void {
   const result = estimator.check(password, context);
   if (result.score < 3) {
-    const reason = result.feedback.warning || 'This password is easy to guess';
-    const hint = result.feedback.suggestions[0] ?? 'Try a longer phrase of unrelated words.';
-    throw badRequest('Choose a stronger password', { [field]: `${reason}. ${hint}` });
+    // The estimator's own sentences may or may not end in a full stop.
+    const sentence = (text: string) => (/[.!?]$/.test(text) ? text : `${text}.`);
+    const reason = sentence(result.feedback.warning || 'This password is easy to guess');
+    const hint = sentence(result.feedback.suggestions[0] ?? 'Try a longer phrase of unrelated words');
+    throw badRequest('Choose a stronger password', { [field]: `${reason} ${hint}` });
   }
 }
 
