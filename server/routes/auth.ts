@@ -118,6 +118,16 @@ export const authRouter = defineRouter('/api/auth', [
     },
   },
   {
+    method: 'get',
+    path: '/reset/:token',
+    access: 'public',
+    params: tokenParams,
+    handler: async (req, res) => {
+      await auth.checkResetLink(req.params.token as string);
+      res.status(204).end();
+    },
+  },
+  {
     method: 'post',
     path: '/reset/:token',
     access: 'public',

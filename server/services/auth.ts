@@ -1,7 +1,7 @@
 import { Op, QueryTypes, type Transaction } from 'sequelize';
 import { sequelize } from '../config/database';
 import { Brewery, Invite, Session, User } from '../models';
-import { badRequest, conflict, notFound, unauthenticated, wrongPassword } from '../errors';
+import { badRequest, conflict, HttpError, notFound, unauthenticated, wrongPassword } from '../errors';
 import { assertStrongPassword, checkPassword, hashPassword, standInHash } from './passwords';
 import { hashToken, newToken } from './tokens';
 import { addStarterIngredients } from './ingredients';
@@ -161,10 +161,23 @@ export async function inviteTeammate(inviter: Express.User, input: InviteInput):
 
 async function openLink(token: string, purpose: 'invite' | 'reset'): Promise<Invite> {
   const invite = await Invite.findOne({ where: { tokenHash: hashToken(token), purpose } });
-  if (!invite || invite.usedAt || invite.expiresAt.getTime() < Date.now()) {
-    throw notFound(purpose === 'invite' ? 'This invitation' : 'This reset link');
-  }
+  if (!invite || invite.usedAt || invite.expiresAt.getTime() < Date.now()) throw linkGone(purpose);
   return invite;
+}
+
+/** A link that was used, has expired or never existed: the person can only ask for a new one. */
+const linkGone = (purpose: 'invite' | 'reset') =>
+  new HttpError(
+    404,
+    'not_found',
+    purpose === 'invite'
+      ? 'This invitation has been used or has expired. Ask your head brewer for a new one.'
+      : 'This reset link has been used or has expired. Ask for a new one from the sign-in page.',
+  );
+
+/** Whether a reset link can still be used, so its page can say so before a new password is typed. */
+export async function checkResetLink(token: string): Promise<void> {
+  await openLink(token, 'reset');
 }
 
 export async function describeInvite(token: string): Promise<{ email: string; breweryName: string; role: string }> {
@@ -183,7 +196,7 @@ export async function acceptInvite(token: string, input: AcceptInviteInput): Pro
       { usedAt: new Date() },
       { where: { id: invite.id, usedAt: null }, transaction },
     );
-    if (used !== 1) throw notFound('This invitation');
+    if (used !== 1) throw linkGone('invite');
     return User.create(
       {
         breweryId: invite.breweryId,
@@ -225,12 +238,12 @@ export async function requestPasswordReset(email: string, log: Logger): Promise<
 export async function resetPassword(token: string, password: string): Promise<User> {
   const link = await openLink(token, 'reset');
   const user = await User.findOne({ where: { email: link.email } });
-  if (!user) throw notFound('This reset link');
+  if (!user) throw linkGone('reset');
   assertStrongPassword(password, [user.email, user.displayName]);
   user.passwordHash = await hashPassword(password);
   await sequelize.transaction(async (transaction) => {
     const [used] = await Invite.update({ usedAt: new Date() }, { where: { id: link.id, usedAt: null }, transaction });
-    if (used !== 1) throw notFound('This reset link');
+    if (used !== 1) throw linkGone('reset');
     await user.save({ transaction });
   });
   await endSessions(user.id);

@@ -268,6 +268,7 @@ describe('password reset by e-mail', () => {
     const asked = await agent().post('/api/auth/reset-request').send({ email: user.email });
     expect(asked.status).toBe(202);
     const token = await resetToken(user.email);
+    expect((await agent().get(`/api/auth/reset/${token}`)).status).toBe(204);
 
     const reset = await agent().post(`/api/auth/reset/${token}`).send({ password: NEW_PASSWORD });
     expect(reset.status).toBe(204);
@@ -280,6 +281,10 @@ describe('password reset by e-mail', () => {
 
     const again = await agent().post(`/api/auth/reset/${token}`).send({ password: 'another-fresh-phrase-for-me' });
     expect(again.status).toBe(404);
+    // The page checks the link when it opens and says why it cannot be used, before a password is typed.
+    const opened = await agent().get(`/api/auth/reset/${token}`);
+    expect(opened.status).toBe(404);
+    expect(opened.body.error.message).toBe('This reset link has been used or has expired. Ask for a new one from the sign-in page.');
     expect(await AuditEvent.findOne({ where: { action: 'password.reset', userId: user.id } })).not.toBeNull();
   });
 

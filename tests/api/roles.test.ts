@@ -80,6 +80,7 @@ describe('routeTable', () => {
         { route: 'GET /api/auth/me', access: 'signed-in' },
         { route: 'POST /api/auth/password', access: 'signed-in' },
         { route: 'POST /api/auth/reset-request', access: 'public' },
+        { route: 'GET /api/auth/reset/:token', access: 'public' },
         { route: 'POST /api/auth/reset/:token', access: 'public' },
         { route: 'GET /api/auth/invites/:token', access: 'public' },
         { route: 'POST /api/auth/invites/:token', access: 'public' },

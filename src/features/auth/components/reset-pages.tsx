@@ -8,9 +8,9 @@ import {
   type ResetPasswordInput,
   type ResetRequestInput,
 } from '../../../../shared/schemas/auth';
-import { Button, TextField } from '../../../components/ui';
+import { Button, ErrorState, Loading, TextField } from '../../../components/ui';
 import { applyServerErrors } from '../../../lib/forms';
-import { useRequestReset, useResetPassword } from '../api/links';
+import { useRequestReset, useResetLink, useResetPassword } from '../api/links';
 import { AuthFrame } from './auth-frame';
 import { FormBanner } from '../../../components/ui/form-banner';
 import { PasswordHint } from '../../../components/ui/password-hint';
@@ -52,6 +52,7 @@ export function ForgotPasswordPage() {
 
 export function ResetPasswordPage() {
   const { token = '' } = useParams();
+  const link = useResetLink(token);
   const reset = useResetPassword(token);
   const [banner, setBanner] = useState<string>();
   const { register, handleSubmit, setError, formState } = useForm<ResetPasswordInput>({
@@ -73,6 +74,15 @@ export function ResetPasswordPage() {
             Sign in
           </Link>
         </p>
+      ) : link.isPending ? (
+        <Loading label="Checking the link" />
+      ) : link.isError ? (
+        <div className="space-y-4">
+          <ErrorState error={link.error} />
+          <Link className="underline" to="/forgot-password">
+            Ask for a new link
+          </Link>
+        </div>
       ) : (
         <form onSubmit={onSubmit} className="space-y-4" noValidate>
           <FormBanner message={banner} />
