@@ -26,11 +26,19 @@ interface Actor {
   breweryId: number;
 }
 
+/**
+ * The recipe list with each recipe's latest version. "Last brewed" is the brew date of the
+ * latest batch whose brew day has started: any status past planned, or dumped once its brew
+ * day had log entries. Planning a batch (which freezes the version) is not brewing it.
+ */
 export async function listRecipes(breweryId: number): Promise<RecipeListRow[]> {
-  const rows = await sequelize.query<RecipeListRow & { lastBrewedAt: Date | null; updatedAt: Date }>(
+  const rows = await sequelize.query<RecipeListRow & { lastBrewedAt: string | null; updatedAt: Date }>(
     `SELECT r.id, r.name, r.style, r.status, v.id AS latestVersionId, v.number AS latestVersion,
             v.og, v.fg, v.ibu, v.srm, v.abv_pct AS abvPct, r.updated_at AS updatedAt,
-            (SELECT MAX(u.last_used_at) FROM recipe_versions u WHERE u.recipe_id = r.id) AS lastBrewedAt
+            (SELECT DATE_FORMAT(MAX(b.brew_date), '%Y-%m-%d') FROM batches b
+              WHERE b.brewery_id = r.brewery_id AND b.recipe_id = r.id
+                AND (b.status NOT IN ('planned', 'dumped')
+                     OR (b.status = 'dumped' AND EXISTS (SELECT 1 FROM batch_log_entries e WHERE e.batch_id = b.id)))) AS lastBrewedAt
        FROM recipes r
        JOIN recipe_versions v ON v.recipe_id = r.id
         AND v.number = (SELECT MAX(m.number) FROM recipe_versions m WHERE m.recipe_id = r.id)
@@ -40,7 +48,7 @@ export async function listRecipes(breweryId: number): Promise<RecipeListRow[]> {
   );
   return rows.map((r) => ({
     ...r,
-    lastBrewedAt: r.lastBrewedAt ? new Date(r.lastBrewedAt).toISOString() : null,
+    lastBrewedAt: r.lastBrewedAt ?? null,
     updatedAt: new Date(r.updatedAt).toISOString(),
   }));
 }

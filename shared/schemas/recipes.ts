@@ -376,6 +376,7 @@ export interface RecipeListRow {
   ibu: number;
   srm: number;
   abvPct: number;
+  /** Brew date (YYYY-MM-DD) of the latest batch actually brewed (brew day started or later); null if none. */
   lastBrewedAt: string | null;
   updatedAt: string;
 }

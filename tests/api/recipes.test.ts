@@ -253,6 +253,33 @@ describe('recipes API', () => {
     await expect(planForBatch(t.brewery.id, { recipeVersionId: versionId, equipmentProfileId: (await addEquipment(other)).big })).rejects.toMatchObject({ status: 404 });
   });
 
+  it('shows as last brewed the brew date of the latest batch whose brew day started, not the latest planned or dumped-before-brewing one', async () => {
+    const { recipeId, versionId } = await createSeasonal('Last brewed test');
+    const lastBrewed = async () => (await t.as.head_brewer.get('/api/recipes')).body.find((r: { id: number }) => r.id === recipeId).lastBrewedAt;
+    const plan = async (brewDate: string) => {
+      const res = await t.as.head_brewer.post('/api/batches').send({ recipeVersionId: versionId, brewDate });
+      expect(res.status, JSON.stringify(res.body)).toBe(201);
+      return res.body.id as number;
+    };
+    const move = async (id: number, status: string, reason?: string) => {
+      const res = await t.as.head_brewer.post(`/api/batches/${id}/status`).send({ status, ...(reason ? { reason } : {}) });
+      expect(res.status, JSON.stringify(res.body)).toBe(200);
+    };
+    const first = await plan('2026-10-05');
+    expect(await lastBrewed()).toBeNull();
+    await move(first, 'brewing');
+    expect(await lastBrewed()).toBe('2026-10-05');
+    await move(first, 'fermenting');
+    // A later batch only planned, and one dumped before its brew day, are not brews.
+    await plan('2026-12-01');
+    const dumped = await plan('2026-11-20');
+    await move(dumped, 'dumped', 'Fruit did not arrive');
+    expect(await lastBrewed()).toBe('2026-10-05');
+    const second = await plan('2026-11-02');
+    await move(second, 'brewing');
+    expect(await lastBrewed()).toBe('2026-11-02');
+  });
+
   it("keeps recipes to the brewery and the brewing roles", async () => {
     const { recipeId, versionId } = await createSeasonal('Scope test');
     expect((await other.as.head_brewer.get(`/api/recipes/${recipeId}`)).status).toBe(404);

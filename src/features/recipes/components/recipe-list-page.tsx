@@ -54,7 +54,8 @@ const columns = [
   col.accessor('lastBrewedAt', {
     header: 'Last brewed',
     sortUndefined: 'last',
-    cell: (c) => (c.getValue() ? new Date(c.getValue()!).toLocaleDateString() : 'Not yet'),
+    // A calendar date: read as local midnight so it does not shift a day west of UTC.
+    cell: (c) => (c.getValue() ? new Date(`${c.getValue()!}T00:00:00`).toLocaleDateString() : 'Not yet'),
   }),
 ];
 
