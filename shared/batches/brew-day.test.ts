@@ -3,6 +3,8 @@ import { computeRecipe } from '../brewing';
 import { EXAMPLE_IPA, PILOT_SYSTEM } from '../brewing/example-recipes';
 import { batchActuals, boilAdditions, brewDaySteps, farFromExpected, type EntryLike } from './brew-day';
 import type { FrozenPlan } from '../schemas/batches';
+import type { RecipeVersionContent } from '../schemas/recipes';
+import type { RecipeInput } from '../brewing';
 
 const plan: FrozenPlan = {
   recipeName: EXAMPLE_IPA.name,
@@ -22,6 +24,73 @@ describe('brew-day steps', () => {
     expect(boilAdditions(plan).map((a) => a.minute)).toEqual([60, 30, 15, 5, 0]);
     const strike = brewDaySteps(plan)[0]!;
     expect(strike.expected).toEqual({ tempC: plan.computed.strikeTempC, volumeL: plan.computed.volumes.strikeL });
+  });
+});
+
+describe('what each step asks for, from the frozen plan', () => {
+  // The parts of a version's content the steps read (the rest does not matter here).
+  const content = {
+    yeast: { pitchTempC: 18 },
+    fermentation: { primaryTempC: 19 },
+    adjuncts: [],
+    spices: [{ howAdded: 'in a mesh bag' }, { howAdded: '' }, { howAdded: 'loose, lifted out at knockout' }],
+  } as unknown as RecipeVersionContent;
+  const withContent: FrozenPlan = { ...plan, content };
+  const byKey = (p: FrozenPlan) => new Map(brewDaySteps(p).map((s) => [s.key, s]));
+
+  it('lists the water salts with strike water and sparge, and the sparge water’s volume and temperature', () => {
+    const s = byKey(plan);
+    // The example recipe's mash and sparge salts, written for the pilot system it is computed on (example-recipes.ts).
+    expect(s.get('strike-water')!.additions).toEqual([
+      { what: 'Gypsum (mash salts)', amount: { value: 6, unit: 'g' } },
+      { what: 'Calcium chloride (dihydrate) (mash salts)', amount: { value: 2, unit: 'g' } },
+    ]);
+    const sparge = s.get('sparge-start')!;
+    expect(sparge.asks).toEqual(['tempC', 'volumeL']);
+    // Sparge water about 170 °F (77 °C): common practice, no source.
+    expect(sparge.expected).toEqual({ tempC: 77, volumeL: plan.computed.volumes.spargeL });
+    expect(sparge.additions.map((a) => a.what)).toEqual(['Gypsum (sparge salts)', 'Calcium chloride (dihydrate) (sparge salts)']);
+    expect(sparge.hot).toBe(true);
+  });
+
+  it('gives each rest its time and infusion water, and a mash out when the recipe has none', () => {
+    const s = byKey(plan);
+    expect(s.get('mash-in')!.holdMinutes).toBe(60);
+    const out = s.get('mash-rest-2')!;
+    expect(out.label).toBe('Mash out');
+    expect(out.holdMinutes).toBe(10);
+    expect(out.infusion?.tempC).toBe(95);
+    expect(out.infusion?.volumeL).toBeGreaterThan(0);
+    expect(s.has('mash-out')).toBe(false);
+
+    const singleRest: RecipeInput = { ...EXAMPLE_IPA, mash: { ...EXAMPLE_IPA.mash, steps: [EXAMPLE_IPA.mash.steps[0]!] } };
+    const keys = brewDaySteps({ ...plan, recipe: singleRest, computed: computeRecipe(singleRest, PILOT_SYSTEM) }).map((x) => x.key);
+    expect(keys.slice(0, 4)).toEqual(['strike-water', 'mash-in', 'mash-out', 'recirculate']);
+    // Mash out at about 168 °F (76 °C): DOMAIN.md, common practice.
+    expect(brewDaySteps({ ...plan, recipe: singleRest, computed: computeRecipe(singleRest, PILOT_SYSTEM) })[2]!.expected).toEqual({ tempC: 76 });
+  });
+
+  it('lists mash adjuncts at mash in, with how they go in', () => {
+    const recipe: RecipeInput = {
+      ...EXAMPLE_IPA,
+      adjuncts: EXAMPLE_IPA.adjuncts.map((a, i) => (i === 0 ? { ...a, name: 'Roasted squash', category: 'vegetable' as const, stage: 'mash' as const } : a)),
+    };
+    const mashIn = brewDaySteps({ ...withContent, recipe, computed: computeRecipe(recipe, PILOT_SYSTEM) })[1]!;
+    expect(mashIn.additions.at(-1)?.what).toBe('Roasted squash (in a mesh bag)');
+  });
+
+  it('gives the whirlpool its stand, knockout and pitch their temperature and cell count, and oxygen its caution', () => {
+    const s = byKey(withContent);
+    // The example's whirlpool hops stand 20 min at 80 °C (example-recipes.ts).
+    expect(s.get('whirlpool-start')!).toMatchObject({ expected: { tempC: 80 }, holdMinutes: 20 });
+    expect(s.get('whirlpool-start')!.additions.map((a) => a.what)).toContain('Sweet orange peel (loose, lifted out at knockout)');
+    expect(s.get('knockout-start')!.expected).toEqual({ tempC: 18 });
+    expect(s.get('knockout-end')!.expected.tempC).toBe(18);
+    expect(s.get('pitch-yeast')!.expected).toEqual({ tempC: 18 });
+    expect(s.get('pitch-yeast')!.pitchCellsBillion).toBe(plan.computed.yeastCellsBillion);
+    expect(s.get('oxygenate')!.oxygen).toBe(true);
+    // A plan frozen without a version's content has no pitch temperature to offer.
+    expect(byKey(plan).get('knockout-start')!.expected).toEqual({});
   });
 });
 

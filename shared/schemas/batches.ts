@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import type { ComputedRecipe, EquipmentProfile, RecipeInput } from '../brewing';
 import type { ChainCheck, LogEntry, Signature } from './batch-log';
+import type { RecipeVersionContent } from './recipes';
 
 export const BATCH_STATUSES = ['planned', 'brewing', 'fermenting', 'conditioning', 'packaged', 'released', 'dumped'] as const;
 export type BatchStatus = (typeof BATCH_STATUSES)[number];
@@ -74,6 +75,12 @@ export interface FrozenPlan {
   equipment: EquipmentProfile;
   recipe: RecipeInput;
   computed: ComputedRecipe;
+  /**
+   * The version's content as written (yeast pitch temperature, how adjuncts go in…), kept with plans made from
+   * a recipe version (server/services/recipe-plans.ts); plans frozen without a version have none. Its weights
+   * are for the version's own brewhouse: amounts come from `recipe` and `computed`.
+   */
+  content?: RecipeVersionContent;
 }
 
 export interface BatchSummary {

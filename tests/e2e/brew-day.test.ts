@@ -138,6 +138,29 @@ describe('brew day offline (Chromium, 1024×768)', () => {
     expect(await logged()).toEqual([...before, 'knockout-start']);
   });
 
+  it('each step shows what the frozen plan has: salts, sparge water, rest times, pitch temperature, and the oxygen caution', async () => {
+    const page = tablet.pages().at(-1)!;
+    const open = async (step: string) => {
+      await page.getByRole('button', { name: new RegExp(`^\\d+\\.\\s*${step}`) }).click();
+      await eventually(() => page.getByTestId('current-step').textContent()).toMatch(new RegExp(`^${step}`));
+    };
+    await open('Start sparge');
+    await eventually(() => page.getByLabel(/^Volume \(/).count()).toBe(1);
+    expect(await page.getByLabel('Current step').textContent()).toMatch(/Expected \d+(\.\d)?.*Expected \d+/);
+    await open('Mash in');
+    expect(await page.getByTestId('step-plan').textContent()).toMatch(/^Hold \d+ min at \d+\.\d °F$/);
+    await open('Pitch yeast');
+    expect(await page.getByLabel('Current step').textContent()).toContain('Expected');
+    await open('Oxygenate the wort');
+    expect(await page.getByRole('note').filter({ hasText: 'Compressed oxygen' }).count()).toBe(1);
+    await page.evaluate(() => window.scrollTo(0, 0));
+    await screenshot(page, 'brew-day-oxygen-1024.png', { fullPage: false });
+    await open('Heat strike water');
+    await page.setViewportSize({ width: 768, height: 1024 });
+    await screenshot(page, 'brew-day-strike-768.png', { fullPage: false });
+    await page.setViewportSize({ width: 1024, height: 768 });
+  });
+
   it('the head brewer signs the brew day off with their password', async () => {
     const page = await head.newPage();
     await page.goto(`/batches/${batchId}`);

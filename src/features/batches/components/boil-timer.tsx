@@ -3,7 +3,7 @@ import type { UnitSystem } from '../../../../shared/schemas/auth';
 import type { Addition } from '../../../../shared/batches/brew-day';
 import { Card } from '../../../components/ui';
 import { showTime } from '../../../lib/time';
-import { showAddition } from './format';
+import { AdditionList } from './step-details';
 
 const clock = (seconds: number) => {
   const s = Math.max(0, Math.round(seconds));
@@ -95,13 +95,7 @@ export function BoilTimer({
               {dueIn < -60 && <span className="block text-lg font-semibold text-brass-400">due {clock(-dueIn)} ago</span>}
             </p>
           )}
-          <ul className="mt-2 space-y-1 text-lg">
-            {next.additions.map((a, i) => (
-              <li key={i}>
-                <span className="font-semibold">{showAddition(system, a)}</span> {a.what}
-              </li>
-            ))}
-          </ul>
+          <AdditionList additions={next.additions} system={system} className="mt-2 text-lg" />
         </>
       ) : (
         <p className="mt-3 text-lg">Every boil addition is logged.</p>

@@ -2,7 +2,7 @@ import { useEffect, useMemo, useRef, useState } from 'react';
 import { useParams } from 'react-router-dom';
 import { brewDaySteps, boilAdditions, type BrewDayStep, type MeasureKey } from '../../../../shared/batches/brew-day';
 import { BATCH_STATUS_LABELS } from '../../../../shared/schemas/batches';
-import { Button, Card, Caution, ErrorState, LinkButton, Loading, TextAreaField, cx } from '../../../components/ui';
+import { Button, Card, ErrorState, LinkButton, Loading, TextAreaField, cx } from '../../../components/ui';
 import { useCurrentUser } from '../../../app/current-user';
 import { outbox, useOutbox, type OutboxItem } from '../../../lib/outbox';
 import { useBatch } from '../api/get-batch';
@@ -14,7 +14,8 @@ import { MeasurementFields, refusalOf, toMeasurements, type GravityUnit, type Ty
 import { OutboxPanel } from '../../../components/outbox-panel';
 import { SignOffPanel, Signatures } from './sign-off-panel';
 import { StatusCard } from './status-card';
-import { showAddition, showMeasurements } from './format';
+import { showMeasurements } from './format';
+import { StepDetails } from './step-details';
 import { showTime } from '../../../lib/time';
 import { useOnline } from './use-online';
 import { useTapGuard } from './use-tap-guard';
@@ -158,20 +159,7 @@ export function BrewDayPage() {
               <h2 className="text-3xl font-bold" data-testid="current-step">
                 {current.label}
               </h2>
-              {current.additions.length > 0 && (
-                <ul className="mt-3 space-y-1 text-xl">
-                  {current.additions.map((a, i) => (
-                    <li key={i}>
-                      <span className="font-bold tabular-nums">{showAddition(system, a)}</span> {a.what}
-                    </li>
-                  ))}
-                </ul>
-              )}
-              {current.hot && (
-                <div className="mt-3">
-                  <Caution title="Hot liquid">Near-boiling wort and water scald: wear gloves and eye protection, check hose clamps before pumping, and follow your local codes and licensed practice.</Caution>
-                </div>
-              )}
+              <StepDetails step={current} system={system} />
               {current.asks.length > 0 && (
                 <div className="mt-4">
                   <MeasurementFields
