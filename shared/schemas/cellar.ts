@@ -23,8 +23,6 @@ export const VESSEL_TYPES = ['fermenter', 'bright_tank'] as const;
 export const VESSEL_STATUSES = ['clean', 'in_use', 'needs_cleaning'] as const;
 export type VesselType = (typeof VESSEL_TYPES)[number];
 export type VesselStatus = (typeof VESSEL_STATUSES)[number];
-export const VESSEL_TYPE_LABELS: Record<VesselType, string> = { fermenter: 'Fermenter', bright_tank: 'Bright tank' };
-export const VESSEL_STATUS_LABELS: Record<VesselStatus, string> = { clean: 'Clean', in_use: 'In use', needs_cleaning: 'Needs cleaning' };
 
 export const vesselInputSchema = z.strictObject({
   name: z.string().trim().min(1, 'Name the vessel').max(60, 'Use at most 60 characters'),

@@ -1,7 +1,8 @@
 import { useEffect } from 'react';
 import { Link, Navigate, useSearchParams } from 'react-router-dom';
 import { EmptyState, ErrorState, LinkButton, Loading, cx } from '../../../components/ui';
-import { VESSEL_STATUS_LABELS, VESSEL_TYPE_LABELS, type BoardVessel } from '../../../../shared/schemas/cellar';
+import type { BoardVessel } from '../../../../shared/schemas/cellar';
+import { VESSEL_STATUS_LABELS, VESSEL_TYPE_LABELS } from '../labels';
 import { useCurrentUser } from '../../../app/current-user';
 import { show, showVolume } from '../../../lib/units';
 import { useBoard } from '../api/board';

@@ -1,6 +1,6 @@
 import { Button, EmptyState, ErrorState, LinkButton, Loading, PageHeader } from '../../../components/ui';
 import { QrCode } from '../../../components/qr-code';
-import { VESSEL_TYPE_LABELS } from '../../../../shared/schemas/cellar';
+import { VESSEL_TYPE_LABELS } from '../labels';
 import { useVessels } from '../api/vessels';
 
 /**
