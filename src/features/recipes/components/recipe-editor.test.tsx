@@ -126,4 +126,13 @@ describe('recipe editor', () => {
     fireEvent.change(adjunct.getByLabelText('Goes in'), { target: { value: 'boil' } });
     expect((adjunct.getByLabelText('Minutes left') as HTMLInputElement).value).toBe('');
   });
+
+  it('shows a brewhouse-sized batch in barrels beside the gallons typed', () => {
+    renderEditor();
+    const volume = screen.getByLabelText('Batch into fermenter (gal)');
+    expect(screen.queryByText(/= .* bbl/)).toBeNull();
+    // 310 US gal = 10 bbl (1 bbl = 31 US gal, 27 CFR 25.11).
+    fireEvent.change(volume, { target: { value: '310' } });
+    expect(screen.getByText('= 10.0 bbl')).toBeTruthy();
+  });
 });

@@ -26,7 +26,7 @@ import type { IngredientRow } from '../../library/api/ingredients';
 import { LiveNumbersPanel, useLiveNumbers } from './live-numbers';
 import { showAdjunct } from './scale-view';
 import { UnitField, asNumber } from '../../../components/ui/unit-field';
-import { show } from '../../../lib/units';
+import { UNITS, show, showVolume } from '../../../lib/units';
 import { FormBanner } from '../../../components/ui/form-banner';
 
 type FormIn = z.input<typeof createRecipeSchema>;
@@ -380,6 +380,13 @@ function PreparationSteps({ control, index, disabled }: { control: Ctl; index: n
   );
 }
 
+/** The batch volume as the rest of the app shows it (e.g. "= 10.0 bbl"), when that is not the field's own unit. */
+function batchVolumeHint(system: UnitSystem, litres: number | undefined): string | undefined {
+  if (typeof litres !== 'number' || !Number.isFinite(litres) || litres <= 0) return undefined;
+  const shown = showVolume(system, litres);
+  return shown.endsWith(` ${UNITS[system].volumeL.unit}`) ? undefined : `= ${shown}`;
+}
+
 /** Four significant figures: enough for a dose restated in another unit, short enough to read. */
 const sig4 = (x: number) => Number(x.toPrecision(4));
 
@@ -580,7 +587,15 @@ export function RecipeEditor({ initial, equipment, library, system, canEdit, not
             >
               {equipment.map((e) => <option key={e.id} value={e.id}>{e.name}</option>)}
             </SelectField>
-            <UnitField control={control} name="content.targets.batchVolumeL" label="Batch into fermenter" quantity="volumeL" system={system} disabled={disabled} />
+            <UnitField
+              control={control}
+              name="content.targets.batchVolumeL"
+              label="Batch into fermenter"
+              quantity="volumeL"
+              system={system}
+              disabled={disabled}
+              hint={batchVolumeHint(system, batchVolumeL)}
+            />
           </div>
           <TextAreaField label="Description" rows={2} {...register('description')} error={errorAt(formState.errors, 'description')} disabled={disabled} />
         </Section>

@@ -127,6 +127,7 @@ export function ScalePage() {
             placeholder={vol.toDisplay(data.target.equipment.batchVolumeL).toFixed(0)}
             onChange={(e) => setVolumeText(e.target.value)}
             onKeyDown={(e) => e.key === 'Enter' && applyVolume()}
+            hint={`Now ${showVolume(system, data.target.equipment.batchVolumeL)}`}
             error={volumeError}
           />
         </div>

@@ -127,7 +127,19 @@ export function ScaleTable({ data, system }: { data: ScaleResult; system: UnitSy
         <Group title="Water and temperature">
           {scaled.changes
             .filter((c) => !c.item.includes(': '))
-            .map((c, i) => row(`w${i}`, c.item[0]!.toUpperCase() + c.item.slice(1), c, amount(c, c.from, system), amount(c, c.to, system)))}
+            .map((c, i) =>
+              row(
+                `w${i}`,
+                c.item[0]!.toUpperCase() + c.item.slice(1),
+                c,
+                amount(c, c.from, system),
+                amount(c, c.to, system),
+                // The shared reason is in L/kg; restate the mash thickness in the brewery's units, as the editor takes it.
+                c.item === 'strike temperature'
+                  ? `mash thickness ${show(system, 'lPerKg', scaled.after.thicknessLPerKg)} (was ${show(system, 'lPerKg', scaled.before.thicknessLPerKg)})`
+                  : undefined,
+              ),
+            )}
         </Group>
       </tbody>
     </Table>
