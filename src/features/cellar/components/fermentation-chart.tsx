@@ -3,6 +3,7 @@ import { dRestTriggerSg, type FermentationPrediction } from '../../../../shared/
 import { CELLAR_ACTION_LABELS, type ActionView, type CellarPlanView, type ReadingView } from '../../../../shared/schemas/cellar';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
 import { UNITS } from '../../../lib/units';
+import { niceAxis } from '../chart-ticks';
 
 interface Props {
   readings: ReadingView[];
@@ -31,9 +32,8 @@ export function FermentationChart({ readings, actions, plan, prediction, unitSys
         return { t, predicted: Number(prediction.at(t).toFixed(4)) };
       })
     : [];
-  const gravities = [...points.map((p) => p.sg), plan.plannedFg, trigger];
-  const low = Math.floor((Math.min(...gravities) - 0.002) * 1000) / 1000;
-  const high = Math.ceil((Math.max(...gravities) + 0.002) * 1000) / 1000;
+  const gravityAxis = niceAxis([...points.map((p) => p.sg), ...predicted.map((p) => p.predicted), plan.plannedFg, trigger], { pad: 0.002 });
+  const tempAxis = niceAxis(points.map((p) => p.temp), { pad: 2, target: 4 });
   const dayFormat = new Intl.DateTimeFormat(undefined, { timeZone, month: 'short', day: 'numeric' });
   const timeFormat = new Intl.DateTimeFormat(undefined, { timeZone, month: 'short', day: 'numeric', hour: 'numeric', minute: '2-digit' });
 
@@ -50,9 +50,22 @@ export function FermentationChart({ readings, actions, plan, prediction, unitSys
             domain={[first - 3_600_000, end + 3_600_000]}
             tickFormatter={(t: number) => dayFormat.format(t)}
             allowDuplicatedCategory={false}
+            // Room at the ends so the first date does not run into the lowest gravity label.
+            padding={{ left: 28, right: 16 }}
+            tickMargin={6}
+            minTickGap={24}
           />
-          <YAxis yAxisId="sg" domain={[low, high]} tickFormatter={(v: number) => v.toFixed(3)} width={56} />
-          <YAxis yAxisId="temp" orientation="right" domain={[(min: number) => Math.floor(min - 3), (max: number) => Math.ceil(max + 3)]} tickFormatter={(v: number) => `${v}°`} width={40} />
+          <YAxis yAxisId="sg" type="number" domain={gravityAxis.domain} ticks={gravityAxis.ticks} interval={0} tickFormatter={(v: number) => v.toFixed(3)} width={56} />
+          <YAxis
+            yAxisId="temp"
+            type="number"
+            orientation="right"
+            domain={tempAxis.domain}
+            ticks={tempAxis.ticks}
+            interval={0}
+            tickFormatter={(v: number) => `${v.toFixed(tempAxis.decimals)}°`}
+            width={40}
+          />
           <Tooltip
             labelFormatter={(t) => timeFormat.format(Number(t))}
             formatter={(value, name) => (name === 'Temperature' ? [`${value} ${temp.unit}`, name] : [Number(value).toFixed(3), name])}

@@ -3,6 +3,8 @@ import { Bar, BarChart, CartesianGrid, Legend, Line, LineChart, ResponsiveContai
 import { EmptyState, ErrorState, Loading, PageHeader, SelectField, Table, Td, Th } from '../../../components/ui';
 import { useRecipeList } from '../../recipes/api/list-recipes';
 import { useBatchHistory } from '../api/history';
+// Round, evenly spaced axis ticks; belongs in src/lib once that folder's owner takes it (see the cellar change).
+import { niceAxis } from '../../cellar/chart-ticks';
 
 const sg = (v: number | null) => (v === null ? '–' : v.toFixed(3));
 const pct = (v: number | null) => (v === null ? '–' : `${(v * 100).toFixed(1)} %`);
@@ -21,6 +23,8 @@ export function HistoryPage() {
     attenuation: r.apparentAttenuation === null ? null : r.apparentAttenuation * 100,
     days: r.daysBrewToPackage,
   }));
+  const ogAxis = niceAxis(points.flatMap((p) => [p.plannedOg, p.actualOg]), { pad: 0.002, target: 4 });
+  const percentAxis = niceAxis(points.flatMap((p) => [p.efficiency, p.attenuation]), { pad: 1, target: 4 });
   return (
     <div className="space-y-5">
       <PageHeader title="Batch history" subtitle="Is the beer staying the same? Compare every batch of a recipe." />
@@ -51,7 +55,7 @@ export function HistoryPage() {
                 <LineChart data={points}>
                   <CartesianGrid stroke="#e5e7eb" />
                   <XAxis dataKey="number" tick={{ fontSize: 12 }} />
-                  <YAxis type="number" domain={[(min: number) => min - 0.003, (max: number) => max + 0.003]} tickFormatter={(v: number) => v.toFixed(3)} width={56} />
+                  <YAxis type="number" domain={ogAxis.domain} ticks={ogAxis.ticks} interval={0} tickFormatter={(v: number) => v.toFixed(3)} width={56} />
                   <Tooltip formatter={(v) => (typeof v === 'number' ? v.toFixed(3) : String(v))} />
                   <Legend />
                   <Line type="stepAfter" dataKey="plannedOg" name="Planned OG" stroke="#64748b" strokeWidth={2} strokeDasharray="6 4" isAnimationActive={false} />
@@ -65,7 +69,7 @@ export function HistoryPage() {
                 <LineChart data={points}>
                   <CartesianGrid stroke="#e5e7eb" />
                   <XAxis dataKey="number" tick={{ fontSize: 12 }} />
-                  <YAxis type="number" domain={[(min: number) => Math.floor(min - 2), (max: number) => Math.ceil(max + 2)]} width={40} />
+                  <YAxis type="number" domain={percentAxis.domain} ticks={percentAxis.ticks} interval={0} tickFormatter={(v: number) => v.toFixed(percentAxis.decimals)} width={40} />
                   <Tooltip formatter={(v) => (typeof v === 'number' ? `${v.toFixed(1)} %` : String(v))} />
                   <Legend />
                   <Line dataKey="efficiency" name="Efficiency" stroke="#b7791f" strokeWidth={3} connectNulls isAnimationActive={false} />
