@@ -68,6 +68,7 @@ describe('reports (Chromium, 1024×768)', () => {
     await signIn(page, priya.email);
     expect(await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Production' }).count()).toBe(0);
     await page.goto('/reports/production');
-    await expect.poll(() => page.getByText('Your role does not allow this').count(), { timeout: 15_000 }).toBeGreaterThan(0);
+    await expect.poll(() => page.getByText('Not open to your role').count(), { timeout: 15_000 }).toBe(1);
+    expect(await page.getByRole('link', { name: 'Download CSV' }).count()).toBe(0);
   });
 });

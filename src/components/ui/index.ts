@@ -1,4 +1,4 @@
-export { Button } from './button';
+export { Button, buttonClass } from './button';
 export { LinkButton } from './link-button';
 export { TextField, SelectField, TextAreaField } from './field';
 export { Card, PageHeader, Stat } from './card';

@@ -2,8 +2,9 @@ import { useState } from 'react';
 import { lToHl, lToUsBbl } from '../../../../shared/brewing';
 import { packageName } from '../../../../shared/schemas/cellar';
 import type { BeerFigures } from '../../../../shared/schemas/reports';
-import { Button, Card, EmptyState, ErrorState, Loading, PageHeader, Table, Td, TextField, Th } from '../../../components/ui';
+import { Button, buttonClass, Card, EmptyState, ErrorState, Loading, PageHeader, Table, Td, TextField, Th } from '../../../components/ui';
 import { productionCsvUrl, useProductionReport } from '../api/production';
+import { useCurrentUser } from '../../../app/current-user';
 
 const FIGURES = [
   ['brewedL', 'Brewed (knockout)'],
@@ -41,14 +42,15 @@ function FiguresRow({ name, b, strong }: { name: string; b: Omit<BeerFigures, 'b
 export function ProductionPage() {
   const [month, setMonth] = useState(lastMonth);
   const report = useProductionReport(month);
+  const me = useCurrentUser();
   return (
     <div className="space-y-5">
       <PageHeader
         title="Monthly production"
-        subtitle="Volume brewed, packaged, dumped and in tanks, per beer."
+        subtitle={`${me.brewery.name}: volume brewed, packaged, dumped and in tanks, per beer.`}
         actions={
           <div className="flex gap-3 print:hidden">
-            <a href={productionCsvUrl(month)} className="inline-flex min-h-11 items-center rounded-lg border border-mist-300 bg-white px-4 font-semibold text-ink-800 hover:bg-mist-100">
+            <a href={productionCsvUrl(month)} className={buttonClass({ variant: 'secondary' })}>
               Download CSV
             </a>
             <Button variant="secondary" onClick={() => window.print()}>
@@ -57,7 +59,7 @@ export function ProductionPage() {
           </div>
         }
       />
-      <Card className="border-sky-200 bg-sky-50 text-ink-800">
+      <Card className="border-sky-700 bg-sky-100 text-ink-900">
         Official production and excise forms differ by country and by state or province. These figures help you prepare
         them; they are not a filing. Check every figure against your own records before you submit anything.
       </Card>
