@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { defineRouter, actor } from './define';
 import { BREWING_ROLES } from '../../shared/schemas/roles';
-import { batchIdParams, batchListQuery, changeStatusSchema, createBatchSchema } from '../../shared/schemas/batches';
+import { batchIdParams, batchListQuery, changeStatusSchema, createBatchSchema, planPreviewQuery, type PlanPreviewQuery } from '../../shared/schemas/batches';
 import { logEntryInputSchema, signOffSchema } from '../../shared/schemas/batch-log';
 import * as batches from '../services/batches';
 import { batchLogJson, toLogEntry, verifyChain, writeMetaFromHeaders } from '../services/batch-log';
@@ -40,6 +40,15 @@ export const batchesRouter = defineRouter('/api/batches', [
     handler: async (req, res) => {
       const batch = await batches.planBatch(actor(req), req.body);
       res.status(201).json(await batches.batchDetail(batch.breweryId, batch.id));
+    },
+  },
+  {
+    method: 'get',
+    path: '/plan-preview',
+    access: ['head_brewer'],
+    query: planPreviewQuery,
+    handler: async (req, res) => {
+      res.json(await batches.previewPlan(actor(req).breweryId, req.query as unknown as PlanPreviewQuery));
     },
   },
   {

@@ -1,13 +1,14 @@
 /** Batches: planning from a recipe version, the list, one batch with its log, status and vessel. */
 import { QueryTypes, Transaction } from 'sequelize';
 import { sequelize } from '../config/database';
-import { AuditEvent, Batch, Vessel } from '../models';
-import { conflict, notFound } from '../errors';
+import { AuditEvent, Batch, Brewery, Vessel } from '../models';
+import { conflict, notFound, unprocessable } from '../errors';
 import { freezeRecipeVersion, planForBatch } from './recipe-plans';
 import { logEntries } from './batch-log';
 import { LRUCache } from 'lru-cache';
 import { signaturesOf } from './signatures';
 import { batchActuals, effectiveMeasurements } from '../../shared/batches/brew-day';
+import { fermenterFill, tooSmall, tooSmallMessage } from '../../shared/batches/fermenter';
 import type { Measurements } from '../../shared/schemas/batch-log';
 import {
   BATCH_STATUS_LABELS,
@@ -19,6 +20,8 @@ import {
   type ChangeStatusInput,
   type CreateBatchInput,
   type FrozenPlan,
+  type PlanPreview,
+  type PlanPreviewQuery,
 } from '../../shared/schemas/batches';
 
 export const BATCH_PAGE_SIZE = 50;
@@ -43,8 +46,10 @@ async function nextNumber(breweryId: number, year: number, transaction: Transact
 }
 
 /**
- * Puts a batch into a vessel (409 if the vessel holds another batch). A batch sits in one vessel at a time:
- * the one it leaves is marked as needing cleaning. The unique index on `current_batch_id` settles races.
+ * Puts a batch into a vessel (409 if the vessel holds another batch; 422 for a fermenter smaller than the
+ * volume the batch runs into it at knockout). A batch sits in one vessel at a time: the one it leaves is
+ * marked as needing cleaning. The unique index on `current_batch_id` settles races. A tank that needs
+ * cleaning is accepted: planning days ahead into a tank still to be cleaned is normal.
  */
 export async function assignVessel(breweryId: number, batchId: number, vesselId: number, transaction: Transaction): Promise<Vessel> {
   const vessel = await Vessel.findOne({ where: { id: vesselId, breweryId }, lock: transaction.LOCK.UPDATE, transaction });
@@ -53,6 +58,14 @@ export async function assignVessel(breweryId: number, batchId: number, vesselId:
   if (vessel.currentBatchId !== null) {
     const other = await Batch.findByPk(vessel.currentBatchId, { transaction });
     throw conflict(`${vessel.name} already holds batch ${other?.number ?? vessel.currentBatchId}. Empty it first.`);
+  }
+  if (vessel.type === 'fermenter') {
+    const batch = await Batch.findOne({ where: { id: batchId, breweryId }, transaction });
+    const fill = batch ? fermenterFill(batch.plan) : 0;
+    if (tooSmall(vessel.capacityL, fill)) {
+      const brewery = await Brewery.findByPk(breweryId, { transaction });
+      throw unprocessable(tooSmallMessage(brewery?.unitSystem ?? 'metric', vessel.name, vessel.capacityL, fill));
+    }
   }
   await releaseVessel(breweryId, batchId, transaction);
   return vessel.update({ currentBatchId: batchId, status: 'in_use' }, { transaction });
@@ -106,6 +119,18 @@ export async function planBatch(actor: Actor, input: CreateBatchInput): Promise<
     const batch = await createBatchFromPlan(actor, plan, input, transaction);
     return batch.update({ equipmentProfileId: plan.equipmentProfileId }, { transaction });
   });
+}
+
+/** What planning would freeze, without planning: recipe, version, brewhouse, volume, and what the fermenter must hold. */
+export async function previewPlan(breweryId: number, input: PlanPreviewQuery): Promise<PlanPreview> {
+  const plan = await planForBatch(breweryId, input);
+  return {
+    recipeName: plan.recipeName,
+    versionNumber: plan.versionNumber,
+    equipmentName: plan.equipmentName,
+    batchVolumeL: plan.equipment.batchVolumeL,
+    fermenterFillL: fermenterFill(plan),
+  };
 }
 
 function summary(batch: Batch, vessel: Vessel | undefined, actualOg: number | null): BatchSummary {

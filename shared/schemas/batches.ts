@@ -46,6 +46,18 @@ export const createBatchSchema = z.strictObject({
 });
 export type CreateBatchInput = z.infer<typeof createBatchSchema>;
 
+/** What the planning screen shows before the batch is planned. */
+export const planPreviewQuery = createBatchSchema.pick({ recipeVersionId: true, equipmentProfileId: true, batchVolumeL: true });
+export type PlanPreviewQuery = z.infer<typeof planPreviewQuery>;
+export interface PlanPreview {
+  recipeName: string;
+  versionNumber: number;
+  equipmentName: string;
+  batchVolumeL: number;
+  /** What the fermenter must hold at knockout, L. */
+  fermenterFillL: number;
+}
+
 export const batchListQuery = z.strictObject({
   status: z.enum(BATCH_STATUSES).optional(),
   recipeId: id.optional(),

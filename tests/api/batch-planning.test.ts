@@ -3,7 +3,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { sequelize } from '../../server/config/database';
 import { EquipmentProfile, RecipeVersion, Vessel } from '../../server/models';
 import { seedRecipes } from '../../server/seed/recipes';
-import { computeRecipe } from '../../shared/brewing';
+import { computeRecipe, usBblToL } from '../../shared/brewing';
 import type { BatchList } from '../../shared/schemas/batches';
 import { plannedBatch, writeHeaders } from './batch-fixtures';
 import { createTestBrewery, type TestBrewery } from './helpers';
@@ -48,6 +48,35 @@ describe('planning a batch', () => {
     const second = await t.as.head_brewer.post('/api/batches').send({ recipeVersionId: version.id, brewDate: '2026-12-12', fermenterId: fv.id });
     expect(second.status).toBe(409);
     expect(second.body.error.message).toMatch(/FV-test already holds batch/);
+  });
+
+  it('refuses a fermenter smaller than the batch, when planning and when assigning (422), and accepts one still to be cleaned', async () => {
+    // 1 US bbl = 117.348 L (27 CFR 25.11). The test brewery is a US brewery, as the demo is.
+    const small = await Vessel.create({ breweryId: t.brewery.id, name: 'FV-small', type: 'fermenter', capacityL: usBblToL(3.5), ratedPressureKpa: 103, status: 'clean', currentBatchId: null });
+    const dirty = await Vessel.create({ breweryId: t.brewery.id, name: 'FV-dirty', type: 'fermenter', capacityL: usBblToL(20), ratedPressureKpa: 103, status: 'needs_cleaning', currentBatchId: null });
+    const tenBbl = { recipeVersionId: version.id, batchVolumeL: usBblToL(10), brewDate: '2026-12-14' };
+    const refused = await t.as.head_brewer.post('/api/batches').send({ ...tenBbl, fermenterId: small.id });
+    expect(refused.status).toBe(422);
+    expect(refused.body.error.message).toMatch(/^FV-small holds (3\.5 bbl|350 L), but this batch runs (10\.0 bbl|11\.7 hL) into the fermenter at knockout\. Choose a larger fermenter\.$/);
+    expect((await Vessel.findByPk(small.id))!.currentBatchId).toBeNull();
+
+    const planned = await t.as.head_brewer.post('/api/batches').send(tenBbl);
+    expect(planned.status).toBe(201);
+    const assign = await t.as.assistant_brewer.put(`/api/batches/${planned.body.id}/vessel`).send({ vesselId: small.id });
+    expect(assign.status).toBe(422);
+    expect(assign.body.error.message).toMatch(/^FV-small holds/);
+    const intoDirty = await t.as.assistant_brewer.put(`/api/batches/${planned.body.id}/vessel`).send({ vesselId: dirty.id });
+    expect(intoDirty.status).toBe(200);
+  });
+
+  it('previews what planning would freeze: recipe, version, brewhouse, volume and what the fermenter must hold', async () => {
+    const res = await t.as.head_brewer.get(`/api/batches/plan-preview?recipeVersionId=${version.id}&batchVolumeL=500`);
+    expect(res.status).toBe(200);
+    expect(res.body).toMatchObject({ versionNumber: version.number, batchVolumeL: 500, fermenterFillL: 500 });
+    expect(res.body.recipeName).toEqual(expect.any(String));
+    expect(res.body.equipmentName).toEqual(expect.any(String));
+    expect((await t.as.assistant_brewer.get(`/api/batches/plan-preview?recipeVersionId=${version.id}`)).status).toBe(403);
+    expect((await other.as.head_brewer.get(`/api/batches/plan-preview?recipeVersionId=${version.id}`)).status).toBe(404);
   });
 
   it('later changes to the recipe never change a planned batch', async () => {

@@ -54,6 +54,10 @@ describe('brew day offline (Chromium, 1024×768)', () => {
     const recipes = (await (await page.request.get('/api/recipes')).json()) as { name: string; latestVersionId: number }[];
     const flagship = recipes[0]!;
     await page.goto(`/batches/new?recipeVersionId=${flagship.latestVersionId}`);
+    // Says what is being planned, and lists each empty fermenter with its size.
+    await eventually(() => page.getByText(new RegExp(`^${flagship.name} v\\d+ on .+, \\d+\\.\\d (bbl|gal)$`)).count()).toBe(1);
+    expect(await page.locator('option', { hasText: 'FV-4' }).textContent()).toMatch(/^FV-4 · 3\.5 bbl/);
+    await screenshot(page, 'plan-batch-1024.png');
     await page.getByRole('button', { name: 'Plan the batch' }).click();
     await page.waitForURL(/\/batches\/\d+$/);
     batchId = Number(new URL(page.url()).pathname.split('/').pop());

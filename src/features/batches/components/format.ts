@@ -22,3 +22,13 @@ export function showMeasurements(system: UnitSystem, m: { tempC?: number; volume
     .filter(Boolean)
     .join(' · ');
 }
+
+/** Today's date (YYYY-MM-DD) in the brewery's time zone: after 8 pm in Halifax the UTC date is already tomorrow. */
+export function todayIn(timeZone: string, now: Date = new Date()): string {
+  return dateIn(now.toISOString(), timeZone);
+}
+
+/** The calendar date (YYYY-MM-DD) of an instant in the brewery's time zone. */
+export function dateIn(iso: string, timeZone: string): string {
+  return new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }).format(new Date(iso));
+}

@@ -9,6 +9,11 @@ import { applyServerErrors } from '../../../lib/forms';
 import { useCurrentUser } from '../../../app/current-user';
 import { showVolume } from '../../../lib/units';
 import { usePlanBatch } from '../api/plan-batch';
+import { usePlanPreview } from '../api/plan-preview';
+import { todayIn } from './format';
+import { tooSmall } from '../../../../shared/batches/fermenter';
+import type { PlanPreview } from '../../../../shared/schemas/batches';
+import type { UnitSystem } from '../../../../shared/schemas/auth';
 import { useFreeFermenters } from '../api/free-fermenters';
 import { FormBanner } from '../../../components/ui/form-banner';
 
@@ -30,13 +35,15 @@ export function NewBatchPage() {
       recipeVersionId: num('recipeVersionId'),
       equipmentProfileId: num('equipmentProfileId'),
       batchVolumeL: num('batchVolumeL'),
-      brewDate: new Date().toISOString().slice(0, 10),
+      brewDate: todayIn(me.brewery.timeZone),
     },
   });
-  const volume = num('batchVolumeL');
+  const system = me.brewery.unitSystem;
+  const preview = usePlanPreview({ recipeVersionId: num('recipeVersionId'), equipmentProfileId: num('equipmentProfileId'), batchVolumeL: num('batchVolumeL') });
+  const fill = preview.data?.fermenterFillL;
   return (
     <div className="max-w-xl space-y-4">
-      <PageHeader title="Plan a batch" subtitle={volume ? `At ${showVolume(me.brewery.unitSystem, volume)}` : 'On the chosen equipment profile'} />
+      <PageHeader title="Plan a batch" subtitle={planned(system, preview.data, preview.isPending && params.has('recipeVersionId'))} />
       <Card className="p-5">
         <form
           className="space-y-4"
@@ -51,16 +58,21 @@ export function NewBatchPage() {
           <TextField label="Brew date" type="date" {...form.register('brewDate')} error={form.formState.errors.brewDate?.message} />
           <SelectField
             label="Fermenter"
-            hint="Only empty fermenters are listed; you can assign one later."
+            hint="Empty fermenters, largest first, with their size; one marked “needs cleaning” must be cleaned before knockout. You can assign one later."
             {...form.register('fermenterId', { setValueAs: (v: string) => (v ? Number(v) : undefined) })}
             error={form.formState.errors.fermenterId?.message}
           >
             <option value="">Choose later</option>
-            {(fermenters.data ?? []).map((v) => (
-              <option key={v.id} value={v.id}>
-                {v.name} · {showVolume(me.brewery.unitSystem, v.capacityL)}
-              </option>
-            ))}
+            {(fermenters.data ?? []).map((v) => {
+              const small = fill !== undefined && tooSmall(v.capacityL, fill);
+              return (
+                <option key={v.id} value={v.id} disabled={small}>
+                  {v.name} · {showVolume(system, v.capacityL)}
+                  {v.status === 'needs_cleaning' ? ' · needs cleaning' : ''}
+                  {small ? ' · too small for this batch' : ''}
+                </option>
+              );
+            })}
           </SelectField>
           {Object.entries(form.formState.errors)
             .filter(([k]) => k !== 'brewDate' && k !== 'fermenterId')
@@ -75,4 +87,10 @@ export function NewBatchPage() {
       </Card>
     </div>
   );
+}
+
+/** What is being planned, in words: "Breakwater Pale v3 on Main brewhouse, 10.0 bbl". */
+function planned(system: UnitSystem, preview: PlanPreview | undefined, loading: boolean): string {
+  if (preview) return `${preview.recipeName} v${preview.versionNumber} on ${preview.equipmentName}, ${showVolume(system, preview.batchVolumeL)}`;
+  return loading ? 'Reading the recipe version…' : 'Choose a recipe version first';
 }
