@@ -6,7 +6,7 @@ import { Button, Dialog, TextAreaField, cx } from '../../../components/ui';
 import { logEntry } from '../api/log-entry';
 import { MeasurementFields, toMeasurements, type BrixToSg, type GravityUnit, type Typed } from './measurement-fields';
 import { refractometerSg } from '../../../../shared/brewing';
-import { showMeasurements } from './format';
+import { dateIn, showMeasurements, todayIn } from './format';
 import { showTime } from '../../../lib/time';
 import type { MeasureKey } from '../../../../shared/batches/brew-day';
 
@@ -30,6 +30,11 @@ function measuredIn(e: LogEntry): Measurements | undefined {
 const CORRECTABLE = ['step', 'measurement', 'note', 'reading'];
 const READING_ASKS: MeasureKey[] = ['gravitySg', 'tempC', 'ph'];
 
+/** An entry's time, with its date when it is not from today in the brewery's zone (a week of readings at 12:46 must not look alike). */
+export function entryTime(iso: string, timeZone: string, now: Date = new Date()): string {
+  return showTime(iso, timeZone, dateIn(iso, timeZone) !== todayIn(timeZone, now));
+}
+
 /** The log as recorded: a corrected entry is struck through beside its correction, with both authors and times. */
 export function LogList({ batchId, entries, system, timeZone }: { batchId: number; entries: LogEntry[]; system: UnitSystem; timeZone: string }) {
   const [correcting, setCorrecting] = useState<LogEntry | null>(null);
@@ -41,7 +46,7 @@ export function LogList({ batchId, entries, system, timeZone }: { batchId: numbe
           const corrected = e.correctedByIds.length > 0;
           return (
             <li key={e.id} className={cx('flex items-start gap-3 py-2', e.kind === 'correction' && 'pl-6')} data-testid="log-entry">
-              <span className="w-24 shrink-0 tabular-nums text-ink-500">{showTime(e.capturedAt, timeZone)}</span>
+              <span className="w-36 shrink-0 tabular-nums text-ink-500">{entryTime(e.capturedAt, timeZone)}</span>
               <div className="flex-1">
                 <p className={cx('font-medium', corrected && 'text-ink-500 line-through')}>
                   {what(e)}
@@ -49,7 +54,7 @@ export function LogList({ batchId, entries, system, timeZone }: { batchId: numbe
                   {e.kind === 'note' || !e.data.note ? null : <span className="ml-2 text-ink-500">“{String(e.data.note)}”</span>}
                 </p>
                 <p className="text-sm text-ink-500">
-                  {e.authorName} · {ROLE_LABELS[e.authorRole as Role] ?? e.authorRole} · received {showTime(e.receivedAt, timeZone)}
+                  {e.authorName} · {ROLE_LABELS[e.authorRole as Role] ?? e.authorRole} · received {entryTime(e.receivedAt, timeZone)}
                   {e.late && <span className="ml-2 rounded bg-brass-100 px-1 font-semibold text-ink-900">Late entry</span>}
                   {e.correctsEntryId && <span className="ml-2">corrects #{entries.find((x) => x.id === e.correctsEntryId)?.sequence}</span>}
                 </p>
