@@ -11,8 +11,46 @@ import { useSavePlan } from '../api/plan';
 import { FormBanner } from '../../../components/ui/form-banner';
 import { optionalNumber } from './form-values';
 
-/** The batch's cellar plan: what readings and alerts are measured against. The head brewer adjusts it. */
-export function PlanForm({ batchId, plan, unitSystem, canEdit }: { batchId: number; plan: CellarPlanView; unitSystem: UnitSystem; canEdit: boolean }) {
+type PlanProps = { batchId: number; plan: CellarPlanView; unitSystem: UnitSystem };
+
+/**
+ * The batch's cellar plan: what readings and alerts are measured against. The head brewer adjusts it;
+ * everyone else reads it as text, so nothing looks like a field they could change.
+ */
+export function PlanForm({ canEdit, ...props }: PlanProps & { canEdit: boolean }) {
+  return canEdit ? <PlanEditor {...props} /> : <PlanText {...props} />;
+}
+
+function PlanText({ plan, unitSystem }: PlanProps) {
+  const temp = UNITS[unitSystem].tempC;
+  const t = (c: number) => `${temp.toDisplay(c).toFixed(1)} ${temp.unit}`;
+  const items: [string, string][] = [
+    ['Planned FG', plan.plannedFg.toFixed(3)],
+    ['D-rest trigger', `${plan.dRestPoints} points above FG (starts at ${dRestTriggerSg(plan.plannedFg, plan.dRestPoints).toFixed(3)})`],
+    ['Primary', t(plan.primaryTempC)],
+    ['D-rest', t(plan.dRestTempC)],
+    ['Crash', t(plan.crashTempC)],
+    ['Target CO₂', `${plan.co2Volumes} volumes`],
+    ['Reading due every', `${plan.readingIntervalHours} h`],
+  ];
+  return (
+    <div className="space-y-3">
+      <p className="rounded-lg bg-mist-100 px-3 py-2 text-sm text-ink-700" data-testid="plan-read-only">
+        Read only: a head brewer changes the plan.{!plan.saved && " It comes from the batch's recipe plan, with defaults where the recipe gives none (common practice)."}
+      </p>
+      <dl className="grid grid-cols-2 gap-x-4 gap-y-3 md:grid-cols-4" aria-label="Cellar plan">
+        {items.map(([term, value]) => (
+          <div key={term}>
+            <dt className="text-sm font-semibold text-ink-500">{term}</dt>
+            <dd className="text-lg font-semibold tabular-nums">{value}</dd>
+          </div>
+        ))}
+      </dl>
+    </div>
+  );
+}
+
+function PlanEditor({ batchId, plan, unitSystem }: PlanProps) {
   const temp = UNITS[unitSystem].tempC;
   const d = (c: number) => Number(temp.toDisplay(c).toFixed(1));
   const save = useSavePlan(batchId);
@@ -48,7 +86,7 @@ export function PlanForm({ batchId, plan, unitSystem, canEdit }: { batchId: numb
     <form onSubmit={onSubmit} noValidate className="space-y-3">
       {!plan.saved && <p className="text-sm text-ink-500">From the batch's recipe plan; defaults where the recipe gives none (common practice).</p>}
       <FormBanner message={banner} />
-      <fieldset disabled={!canEdit} className="grid grid-cols-2 gap-3 md:grid-cols-4">
+      <fieldset className="grid grid-cols-2 gap-3 md:grid-cols-4">
         <TextField label="Planned FG" inputMode="decimal" {...register('plannedFg', num)} error={e.plannedFg?.message} />
         <TextField label="D-rest trigger (points above FG)" inputMode="decimal" hint={trigger ? `Starts at ${trigger.toFixed(3)}` : undefined} {...register('dRestPoints', num)} error={e.dRestPoints?.message} />
         <TextField label={`Primary (${temp.unit})`} inputMode="decimal" {...register('primaryTemp', num)} error={e.primaryTemp?.message} />
@@ -57,7 +95,7 @@ export function PlanForm({ batchId, plan, unitSystem, canEdit }: { batchId: numb
         <TextField label="Target CO₂ (volumes)" inputMode="decimal" {...register('co2Volumes', num)} error={e.co2Volumes?.message} />
         <TextField label="Reading due every (hours)" inputMode="decimal" {...register('readingIntervalHours', num)} error={e.readingIntervalHours?.message} />
       </fieldset>
-      {canEdit ? <Button type="submit" busy={save.isPending}>Save cellar plan</Button> : <p className="text-ink-500">Only a head brewer changes the plan.</p>}
+      <Button type="submit" busy={save.isPending}>Save cellar plan</Button>
     </form>
   );
 }
