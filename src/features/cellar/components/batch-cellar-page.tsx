@@ -14,6 +14,7 @@ import { CarbonationPanel } from './carbonation-panel';
 import { PackagingForm } from './packaging-form';
 import { ProbeImport } from './probe-import';
 import { PlanForm } from './plan-form';
+import { PredictionNote } from './prediction-note';
 import { OutboxPanel } from '../../../components/outbox-panel';
 
 function Section({ title, children }: { title: string; children: ReactNode }) {
@@ -59,9 +60,7 @@ export function BatchCellarPage() {
         <div className="rounded-lg border-2 border-dashed border-brass-500 bg-brass-100 px-4 py-3" data-testid="prediction">
           <div className="text-xs font-semibold uppercase tracking-wide text-ink-700">Prediction from the curve</div>
           {prediction ? (
-            <div className="text-lg font-semibold tabular-nums">
-              FG ≈ {prediction.predictedFg.toFixed(3)} by {date.format(prediction.predictedAtMs)}
-            </div>
+            <PredictionNote prediction={prediction} latestSg={latest?.sg ?? null} nowMs={Date.now()} date={date} />
           ) : (
             <div className="text-sm text-ink-700">Not enough of a curve yet: it needs three falling readings over some hours.</div>
           )}
