@@ -133,4 +133,39 @@ describe('cellar readings on the tablet (Chromium, 1024×768)', () => {
     const row = page.getByRole('row', { name: new RegExp(name) });
     await expect.poll(() => row.textContent()).toMatch(/Bright tank.*7\.0 bbl.*30 psi.*Clean/);
   });
+
+  it('a double tap on Save reading writes one reading; the batch page at 768×1024 portrait', async () => {
+    const headPage = await head.newPage();
+    await signIn(headPage, DEMO_PEOPLE[0]!.email);
+    const batch = await fermentingBatch(headPage);
+    const portrait = await openBrowser({ width: 768, height: 1024 });
+    try {
+      const page = await portrait.newPage();
+      await signIn(page, DEMO_PEOPLE[1]!.email);
+      await page.goto(`/cellar/batches/${batch.id}`);
+      const form = page.getByRole('form', { name: 'Log a reading' });
+      await form.getByLabel('Gravity (SG)').fill('1,050');
+      await form.getByLabel('Temperature (°F)').fill('66');
+      await form.getByRole('button', { name: 'Save reading' }).dblclick();
+      const points = page.locator('[data-testid="gravity-point"]');
+      await expect.poll(() => points.count(), { timeout: 15_000 }).toBe(1);
+      // Give a second write every chance to land before counting.
+      await expect.poll(() => page.locator('[aria-label="Waiting to send"]').count(), { timeout: 15_000 }).toBe(0);
+      await page.waitForTimeout(1000);
+      const view = (await (await page.request.get(`/api/cellar/batches/${batch.id}`)).json()) as { readings: { sg: number }[] };
+      expect(view.readings.map((r) => r.sg)).toEqual([1.05]);
+
+      // The assistant reads the cellar plan as text.
+      await expect.poll(() => page.getByTestId('plan-read-only').textContent()).toMatch(/^Read only: a head brewer changes the plan/);
+      await page.goto('/cellar');
+      await page.getByRole('article', { name: 'FV-1' }).click();
+      await page.getByRole('heading', { name: 'Fermentation curve' }).scrollIntoViewIfNeeded();
+      await screenshot(page, 'cellar-batch-portrait-768.png', { fullPage: false });
+      await screenshot(page, 'cellar-batch-full-portrait-768.png');
+      await page.goto('/cellar/vessels');
+      await screenshot(page, 'cellar-vessels-portrait-768.png', { fullPage: false });
+    } finally {
+      await portrait.close();
+    }
+  });
 });
