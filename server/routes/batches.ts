@@ -67,7 +67,7 @@ export const batchesRouter = defineRouter('/api/batches', [
     params: batchIdParams,
     body: changeStatusSchema,
     handler: async (req, res) => {
-      await batches.changeBatchStatus(actor(req), Number(req.params.id), req.body);
+      await batches.requestStatusChange(actor(req), Number(req.params.id), req.body);
       res.json(await batches.batchDetail(actor(req).breweryId, Number(req.params.id)));
     },
   },

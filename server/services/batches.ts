@@ -2,7 +2,7 @@
 import { QueryTypes, Transaction } from 'sequelize';
 import { sequelize } from '../config/database';
 import { AuditEvent, Batch, Brewery, Vessel } from '../models';
-import { conflict, notFound, unprocessable } from '../errors';
+import { conflict, forbidden, notFound, unprocessable } from '../errors';
 import { freezeRecipeVersion, planForBatch } from './recipe-plans';
 import { logEntries } from './batch-log';
 import { LRUCache } from 'lru-cache';
@@ -13,6 +13,7 @@ import type { Measurements } from '../../shared/schemas/batch-log';
 import {
   BATCH_STATUS_LABELS,
   canMoveTo,
+  mayDump,
   type BatchDetail,
   type BatchList,
   type BatchListQuery,
@@ -320,6 +321,15 @@ export async function changeBatchStatus(actor: Actor, batchId: number, input: Ch
     return batch;
   };
   return transaction ? run(transaction) : sequelize.transaction(run);
+}
+
+/** A status change asked for through the API: dumping is the head brewer's alone (403 for anyone else). */
+export async function requestStatusChange(actor: Actor & Pick<Express.User, 'role'>, batchId: number, input: ChangeStatusInput): Promise<Batch> {
+  if (input.status === 'dumped' && !mayDump(actor.role)) {
+    await findBatch(actor.breweryId, batchId);
+    throw forbidden('Only the head brewer can dump a batch. Ask them, and note what you saw in the log.');
+  }
+  return changeBatchStatus(actor, batchId, input);
 }
 
 /** Puts a batch into a vessel through the API. */

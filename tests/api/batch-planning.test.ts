@@ -79,6 +79,20 @@ describe('planning a batch', () => {
     expect((await other.as.head_brewer.get(`/api/batches/plan-preview?recipeVersionId=${version.id}`)).status).toBe(404);
   });
 
+  it('lets only the head brewer dump a batch (403 for the assistant); other moves stay open to both', async () => {
+    const planned = await t.as.head_brewer.post('/api/batches').send({ recipeVersionId: version.id, brewDate: '2026-12-15' });
+    const id = planned.body.id as number;
+    const refused = await t.as.assistant_brewer.post(`/api/batches/${id}/status`).send({ status: 'dumped', reason: 'Infected' });
+    expect(refused.status).toBe(403);
+    expect(refused.body.error.message).toMatch(/^Only the head brewer can dump a batch/);
+    expect((await t.as.assistant_brewer.post(`/api/batches/${id}/status`).send({ status: 'brewing' })).status).toBe(200);
+    const dumped = await t.as.head_brewer.post(`/api/batches/${id}/status`).send({ status: 'dumped', reason: 'Infected' });
+    expect(dumped.status).toBe(200);
+    expect(dumped.body.status).toBe('dumped');
+    // Another brewery's batch stays a 404, whoever asks.
+    expect((await other.as.assistant_brewer.post(`/api/batches/${id}/status`).send({ status: 'dumped', reason: 'Infected' })).status).toBe(404);
+  });
+
   it('later changes to the recipe never change a planned batch', async () => {
     const planned = await t.as.head_brewer.post('/api/batches').send({ recipeVersionId: version.id, brewDate: '2026-12-10' });
     const before = planned.body.plan;

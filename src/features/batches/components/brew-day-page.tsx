@@ -263,7 +263,7 @@ export function BrewDayPage() {
             </Card>
           )}
           <ActualsCard actuals={b.actuals} system={system} />
-          <StatusCard batchId={id} status={b.status} />
+          <StatusCard batchId={id} status={b.status} role={me.role} />
           {b.signatures.length > 0 && <Signatures signatures={b.signatures} timeZone={timeZone} />}
           {me.role === 'head_brewer' && !signed && <SignOffPanel batchId={id} pendingCount={waitingCount} />}
         </div>

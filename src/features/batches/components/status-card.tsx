@@ -1,16 +1,17 @@
 import { useState } from 'react';
-import { BATCH_STATUS_LABELS, STATUS_TRANSITIONS, type BatchStatus } from '../../../../shared/schemas/batches';
+import { BATCH_STATUS_LABELS, STATUS_TRANSITIONS, mayDump, type BatchStatus } from '../../../../shared/schemas/batches';
 import { Button, Card, TextField } from '../../../components/ui';
 import { ApiError } from '../../../lib/api-client';
 import { useChangeStatus } from '../api/change-status';
 
-/** Moves the batch to its next status, or dumps it with a reason. */
-export function StatusCard({ batchId, status }: { batchId: number; status: BatchStatus }) {
+/** Moves the batch to its next status, or (head brewer only) dumps it with a reason. */
+export function StatusCard({ batchId, status, role }: { batchId: number; status: BatchStatus; role: string }) {
   const change = useChangeStatus(batchId);
   const [reason, setReason] = useState('');
   const [dumping, setDumping] = useState(false);
   const next = STATUS_TRANSITIONS[status].filter((s) => s !== 'dumped');
-  if (!STATUS_TRANSITIONS[status].length) return null;
+  const canDump = STATUS_TRANSITIONS[status].includes('dumped') && mayDump(role);
+  if (!next.length && !canDump) return null;
   const error = change.error instanceof ApiError ? (change.error.fields.reason ?? change.error.message) : undefined;
   return (
     <Card className="p-4">
@@ -21,13 +22,13 @@ export function StatusCard({ batchId, status }: { batchId: number; status: Batch
             Move to {BATCH_STATUS_LABELS[s].toLowerCase()}
           </Button>
         ))}
-        {!dumping && (
+        {canDump && !dumping && (
           <Button variant="quiet" onClick={() => setDumping(true)}>
             Dump…
           </Button>
         )}
       </div>
-      {dumping && (
+      {canDump && dumping && (
         <form
           className="mt-3 space-y-2"
           onSubmit={(e) => {
