@@ -21,17 +21,24 @@ import { useOnline } from './use-online';
 import { useTapGuard } from './use-tap-guard';
 
 interface Done {
+  /** When the step was first done ("Log again" adds entries, never moves this). */
   at: string;
   waiting: boolean;
+  /** How many times it was logged. */
+  times: number;
 }
 
-/** When each step was marked done: on the server, or still waiting on this device. */
-function doneSteps(entries: { kind: string; stepKey: string | null; capturedAt: string }[], waiting: OutboxItem[]): Map<string, Done> {
+/** When each step was first marked done (on the server, or still waiting on this device), and how often it was logged. */
+export function doneSteps(entries: { kind: string; stepKey: string | null; capturedAt: string }[], waiting: OutboxItem[]): Map<string, Done> {
   const done = new Map<string, Done>();
-  for (const e of entries) if (e.kind === 'step' && e.stepKey) done.set(e.stepKey, { at: e.capturedAt, waiting: false });
+  const mark = (key: string, at: string, isWaiting: boolean) => {
+    const before = done.get(key);
+    done.set(key, before ? { ...before, times: before.times + 1 } : { at, waiting: isWaiting, times: 1 });
+  };
+  for (const e of entries) if (e.kind === 'step' && e.stepKey) mark(e.stepKey, e.capturedAt, false);
   for (const i of waiting) {
     const body = i.body as { kind?: string; stepKey?: string };
-    if (i.state === 'waiting' && body.kind === 'step' && body.stepKey && !done.has(body.stepKey)) done.set(body.stepKey, { at: i.capturedAt, waiting: true });
+    if (i.state === 'waiting' && body.kind === 'step' && body.stepKey) mark(body.stepKey, i.capturedAt, true);
   }
   return done;
 }
@@ -69,6 +76,7 @@ export function BrewDayPage() {
   const plan = batch.data?.plan;
   const steps = useMemo(() => (plan ? brewDaySteps(plan) : []), [plan]);
   const additions = useMemo(() => (plan ? boilAdditions(plan) : []), [plan]);
+  const stepAsks = useMemo(() => new Map(steps.map((s) => [s.key, s.asks])), [steps]);
 
   // The server refused a step this screen sent: go back to that step with what was typed, and say which field and why.
   useEffect(() => {
@@ -219,6 +227,7 @@ export function BrewDayPage() {
                       {d && (
                         <span className="shrink-0 text-sm font-semibold tabular-nums">
                           {d.waiting ? 'Waiting' : '✓'} {showTime(d.at, timeZone)}
+                          {d.times > 1 && <span className="ml-1 text-ink-500">×{d.times}</span>}
                         </span>
                       )}
                     </button>
@@ -271,7 +280,7 @@ export function BrewDayPage() {
 
       <Card className="p-4">
         <h2 className="text-lg font-bold">Log</h2>
-        {b.entries.length ? <LogList batchId={id} entries={b.entries} system={system} timeZone={timeZone} /> : <p className="text-ink-500">Nothing logged yet.</p>}
+        {b.entries.length ? <LogList batchId={id} entries={b.entries} system={system} timeZone={timeZone} stepAsks={stepAsks} /> : <p className="text-ink-500">Nothing logged yet.</p>}
       </Card>
     </div>
   );

@@ -1,6 +1,6 @@
 // The batch log as shown: dates on entries not from today (in the brewery's zone).
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { render, screen } from '@testing-library/react';
+import { fireEvent, render, screen } from '@testing-library/react';
 import type { LogEntry } from '../../../../shared/schemas/batch-log';
 import { LogList, entryTime } from './log-list';
 
@@ -45,5 +45,25 @@ describe('log times', () => {
     const shown = screen.getAllByTestId('log-entry').map((li) => li.firstElementChild!.textContent);
     expect(new Set(shown).size).toBe(6);
     expect(shown[0]).toBe('Nov 25, 2026, 12:46 AST');
+  });
+});
+
+describe('entry numbers and corrections', () => {
+  it('shows each entry’s number, so “corrects #1” can be found', () => {
+    const entries = [
+      entry(1, '2026-12-01T16:46:00Z', { kind: 'step', stepKey: 'pitch-yeast', data: { label: 'Pitch yeast' }, correctedByIds: [2] }),
+      entry(2, '2026-12-01T16:50:00Z', { kind: 'correction', correctsEntryId: 1, reason: 'Forgot the temperature', data: { measurements: { tempC: 18 } } }),
+    ];
+    render(<LogList batchId={1} entries={entries} system="metric" timeZone="America/Halifax" />);
+    expect(screen.getAllByTestId('entry-number').map((n) => n.textContent)).toEqual(['#1', '#2']);
+    expect(screen.getByText('corrects #1')).toBeTruthy();
+  });
+
+  it('lets a correction of a step logged without values add the values the step asks for', () => {
+    const stepEntry = entry(1, '2026-12-01T16:46:00Z', { kind: 'step', stepKey: 'pitch-yeast', data: { label: 'Pitch yeast' } });
+    render(<LogList batchId={1} entries={[stepEntry]} system="us" timeZone="America/Halifax" stepAsks={new Map([['pitch-yeast', ['tempC' as const]]])} />);
+    fireEvent.click(screen.getByRole('button', { name: 'Correct entry 1' }));
+    expect(screen.getByLabelText('Temperature (°F)')).toBeTruthy();
+    expect(screen.getByLabelText('Reason')).toBeTruthy();
   });
 });

@@ -36,7 +36,20 @@ export function entryTime(iso: string, timeZone: string, now: Date = new Date())
 }
 
 /** The log as recorded: a corrected entry is struck through beside its correction, with both authors and times. */
-export function LogList({ batchId, entries, system, timeZone }: { batchId: number; entries: LogEntry[]; system: UnitSystem; timeZone: string }) {
+export function LogList({
+  batchId,
+  entries,
+  system,
+  timeZone,
+  stepAsks,
+}: {
+  batchId: number;
+  entries: LogEntry[];
+  system: UnitSystem;
+  timeZone: string;
+  /** What each brew-day step asks for, so a correction of a step logged without values can add them. */
+  stepAsks?: ReadonlyMap<string, MeasureKey[]>;
+}) {
   const [correcting, setCorrecting] = useState<LogEntry | null>(null);
   return (
     <>
@@ -47,6 +60,9 @@ export function LogList({ batchId, entries, system, timeZone }: { batchId: numbe
           return (
             <li key={e.id} className={cx('flex items-start gap-3 py-2', e.kind === 'correction' && 'pl-6')} data-testid="log-entry">
               <span className="w-36 shrink-0 tabular-nums text-ink-500">{entryTime(e.capturedAt, timeZone)}</span>
+              <span className="w-12 shrink-0 font-semibold tabular-nums text-ink-500" data-testid="entry-number">
+                #{e.sequence}
+              </span>
               <div className="flex-1">
                 <p className={cx('font-medium', corrected && 'text-ink-500 line-through')}>
                   {what(e)}
@@ -68,7 +84,15 @@ export function LogList({ batchId, entries, system, timeZone }: { batchId: numbe
           );
         })}
       </ol>
-      {correcting && <CorrectionDialog batchId={batchId} entry={correcting} system={system} onClose={() => setCorrecting(null)} />}
+      {correcting && (
+        <CorrectionDialog
+          batchId={batchId}
+          entry={correcting}
+          system={system}
+          stepAsks={correcting.stepKey ? stepAsks?.get(correcting.stepKey) : undefined}
+          onClose={() => setCorrecting(null)}
+        />
+      )}
     </>
   );
 }
@@ -80,13 +104,27 @@ function refractometerOf(entry: LogEntry): BrixToSg | undefined {
   return (brix) => refractometerSg(brix, d.originalBrix, d.wortCorrection);
 }
 
-function CorrectionDialog({ batchId, entry, system, onClose }: { batchId: number; entry: LogEntry; system: UnitSystem; onClose: () => void }) {
+function CorrectionDialog({
+  batchId,
+  entry,
+  system,
+  stepAsks = [],
+  onClose,
+}: {
+  batchId: number;
+  entry: LogEntry;
+  system: UnitSystem;
+  stepAsks?: MeasureKey[];
+  onClose: () => void;
+}) {
   const brixToSg = refractometerOf(entry);
   const [reason, setReason] = useState('');
   const [typed, setTyped] = useState<Typed>({});
   const [gravity, setGravity] = useState<GravityUnit>(brixToSg ? 'brix' : 'sg');
   const [error, setError] = useState<string | null>(null);
-  const asks = entry.kind === 'reading' ? READING_ASKS : (Object.keys(measuredIn(entry) ?? {}) as MeasureKey[]);
+  // What the entry measured, and what its step asks for: a step logged without values can have them added.
+  const measured = Object.keys(measuredIn(entry) ?? {}) as MeasureKey[];
+  const asks = entry.kind === 'reading' ? READING_ASKS : [...measured, ...stepAsks.filter((k) => !measured.includes(k))];
   const submit = async () => {
     const { measurements, error: bad } = toMeasurements(typed, system, gravity, brixToSg);
     if (bad) return setError(bad);
