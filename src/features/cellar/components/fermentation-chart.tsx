@@ -3,7 +3,7 @@ import { dRestTriggerSg, type FermentationPrediction } from '../../../../shared/
 import { CELLAR_ACTION_LABELS, type ActionView, type CellarPlanView, type ReadingView } from '../../../../shared/schemas/cellar';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
 import { UNITS } from '../../../lib/units';
-import { niceAxis } from '../chart-ticks';
+import { niceAxis } from '../../../lib/chart-ticks';
 
 interface Props {
   readings: ReadingView[];

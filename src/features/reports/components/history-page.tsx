@@ -4,7 +4,7 @@ import { EmptyState, ErrorState, Loading, PageHeader, SelectField, Table, Td, Th
 import { useRecipeList } from '../../recipes/api/list-recipes';
 import { useBatchHistory } from '../api/history';
 // Round, evenly spaced axis ticks; belongs in src/lib once that folder's owner takes it (see the cellar change).
-import { niceAxis } from '../../cellar/chart-ticks';
+import { niceAxis } from '../../../lib/chart-ticks';
 
 const sg = (v: number | null) => (v === null ? '–' : v.toFixed(3));
 const pct = (v: number | null) => (v === null ? '–' : `${(v * 100).toFixed(1)} %`);
