@@ -1,9 +1,9 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes } from 'sequelize';
 import { sequelize } from '../config/database';
 import type { AbvMethod } from '../../shared/brewing';
-import type { Allergen, Glass, ReleaseState } from '../../shared/schemas/taproom';
+import { RELEASE_STATES, type Allergen, type Glass, type ReleaseState } from '../../shared/schemas/taproom';
 
-/** A batch's release to the taproom: the public sheet, and the numbers frozen when it was released. */
+/** A batch's release to the taproom: the public sheet, the numbers frozen when it was released, and when it went off tap. */
 export class Release extends Model<InferAttributes<Release>, InferCreationAttributes<Release>> {
   declare id: CreationOptional<number>;
   declare breweryId: number;
@@ -25,6 +25,9 @@ export class Release extends Model<InferAttributes<Release>, InferCreationAttrib
   declare srm: number | null;
   declare releasedAt: Date | null;
   declare releasedById: number | null;
+  // Optional when created: a release starts on tap or before it, never off tap.
+  declare offTapAt: CreationOptional<Date | null>;
+  declare offTapById: CreationOptional<number | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -34,7 +37,7 @@ Release.init(
     id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
     breweryId: { type: DataTypes.INTEGER, allowNull: false },
     batchId: { type: DataTypes.INTEGER, allowNull: false, unique: true },
-    state: { type: DataTypes.ENUM('draft', 'coming_soon', 'on_tap'), allowNull: false },
+    state: { type: DataTypes.ENUM(...RELEASE_STATES), allowNull: false },
     beerName: { type: DataTypes.STRING(120), allowNull: false },
     style: { type: DataTypes.STRING(80), allowNull: false },
     description: { type: DataTypes.TEXT, allowNull: false },
@@ -51,6 +54,8 @@ Release.init(
     srm: { type: DataTypes.DOUBLE, allowNull: true },
     releasedAt: { type: DataTypes.DATE, allowNull: true },
     releasedById: { type: DataTypes.INTEGER, allowNull: true },
+    offTapAt: { type: DataTypes.DATE, allowNull: true, defaultValue: null },
+    offTapById: { type: DataTypes.INTEGER, allowNull: true, defaultValue: null },
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },

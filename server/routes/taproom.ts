@@ -39,7 +39,7 @@ export const taproomRouter = defineRouter('/api/taproom', [
   },
 ]);
 
-/** The head brewer's release of one batch. */
+/** The head brewer's release of one batch, and taking it off tap when it runs out. */
 export const releaseRouter = defineRouter('/api/batches', [
   {
     method: 'get',
@@ -69,6 +69,28 @@ export const releaseRouter = defineRouter('/api/batches', [
     handler: async (req, res) => {
       const detail = await release.publishRelease(actor(req), Number(req.params.batchId), req.body);
       await recordAudit(req, 'batch.release', { batchId: detail.batch.id, abvPct: detail.numbers.abvPct });
+      res.json(detail);
+    },
+  },
+  {
+    method: 'post',
+    path: '/:batchId/release/off-tap',
+    access: ['head_brewer'],
+    params: batchParams,
+    handler: async (req, res) => {
+      const detail = await release.takeOffTap(actor(req), Number(req.params.batchId));
+      await recordAudit(req, 'batch.off_tap', { batchId: detail.batch.id });
+      res.json(detail);
+    },
+  },
+  {
+    method: 'post',
+    path: '/:batchId/release/back-on-tap',
+    access: ['head_brewer'],
+    params: batchParams,
+    handler: async (req, res) => {
+      const detail = await release.putBackOnTap(actor(req), Number(req.params.batchId));
+      await recordAudit(req, 'batch.back_on_tap', { batchId: detail.batch.id });
       res.json(detail);
     },
   },

@@ -1,6 +1,7 @@
 /**
  * Release to the taproom: the head brewer writes the public sheet, confirms the measured numbers and releases;
  * the batch moves to released. ABV comes from the measured OG (brew-day log) and FG (latest gravity reading in force).
+ * When the beer runs out the head brewer takes it off tap: the release stays, with its sheet and numbers.
  */
 import { Op, type Transaction } from 'sequelize';
 import { sequelize } from '../config/database';
@@ -11,7 +12,7 @@ import { logEntries } from './batch-log';
 import { batchActuals } from '../../shared/batches/brew-day';
 import { abv, ABV_METHOD_SHOWN, type PackageLine } from '../../shared/brewing';
 import { packageName } from '../../shared/schemas/cellar';
-import type { FinalNumbers, PackageSize, PublishReleaseInput, ReleaseDetail, ReleaseSheet } from '../../shared/schemas/taproom';
+import { wasReleased, type FinalNumbers, type PackageSize, type PublishReleaseInput, type ReleaseDetail, type ReleaseSheet } from '../../shared/schemas/taproom';
 
 /** Statuses a batch can be in while its release sheet is written: there is beer in the tank or in packages. */
 const SHEET_STATUSES = ['fermenting', 'conditioning', 'packaged', 'released'];
@@ -88,19 +89,23 @@ function sheetOf(r: Release): ReleaseSheet {
 export async function releaseDetail(actor: Express.User, batchId: number): Promise<ReleaseDetail> {
   const batch = await findBatch(actor.breweryId, batchId);
   const release = await Release.findOne({ where: { batchId: batch.id, breweryId: actor.breweryId } });
-  const releasedBy = release?.releasedById ? await User.findByPk(release.releasedById, { attributes: ['displayName'] }) : null;
+  const peopleIds = [release?.releasedById, release?.offTapById].filter((id) => id != null);
+  const people = peopleIds.length ? await User.findAll({ where: { id: { [Op.in]: peopleIds } }, attributes: ['id', 'displayName'] }) : [];
+  const nameOf = (id: number | null | undefined) => people.find((p) => p.id === id)?.displayName ?? null;
   return {
     batch: { id: batch.id, number: batch.number, beerName: batch.beerName, status: batch.status, style: batch.plan.style ?? '' },
     state: release?.state ?? null,
     sheet: release ? sheetOf(release) : null,
-    numbers: release?.state === 'on_tap' ? frozenNumbers(release, batch) : await finalNumbers(batch),
+    numbers: release && wasReleased(release.state) ? frozenNumbers(release, batch) : await finalNumbers(batch),
     packageSizes: (await packageSizes(actor.breweryId, [batch.id])).get(batch.id)!,
     releasedAt: release?.releasedAt?.toISOString() ?? null,
-    releasedBy: releasedBy?.displayName ?? null,
+    releasedBy: nameOf(release?.releasedById),
+    offTapAt: release?.offTapAt?.toISOString() ?? null,
+    offTapBy: nameOf(release?.offTapById),
   };
 }
 
-/** Saves the release sheet. Before release, `comingSoon` shows the beer to the taproom as coming soon. */
+/** Saves the release sheet. Before release, `comingSoon` shows the beer to the taproom as coming soon; after it, the state stays. */
 export async function saveReleaseSheet(actor: Express.User, batchId: number, sheet: ReleaseSheet): Promise<ReleaseDetail> {
   await sequelize.transaction(async (transaction) => {
     const batch = await findBatch(actor.breweryId, batchId, transaction, true);
@@ -116,7 +121,7 @@ export async function saveReleaseSheet(actor: Express.User, batchId: number, she
     }
     const { comingSoon, ...fields } = sheet;
     const existing = await Release.findOne({ where: { batchId: batch.id }, transaction });
-    const state = existing?.state === 'on_tap' ? 'on_tap' : comingSoon ? 'coming_soon' : 'draft';
+    const state = existing && wasReleased(existing.state) ? existing.state : comingSoon ? 'coming_soon' : 'draft';
     if (existing) await existing.update({ ...fields, state }, { transaction });
     else await Release.create({ ...fields, state, breweryId: actor.breweryId, batchId: batch.id, og: null, fg: null, abvPct: null, abvMethod: null, ibu: null, srm: null, releasedAt: null, releasedById: null }, { transaction });
   });
@@ -135,6 +140,7 @@ export async function publishRelease(actor: Express.User, batchId: number, input
     const release = await Release.findOne({ where: { batchId: batch.id }, transaction });
     if (!release) throw conflict('Write the release sheet (description and serving notes) before releasing.');
     if (release.state === 'on_tap') throw conflict('This beer is already released.');
+    if (release.state === 'off_tap') throw conflict('This beer was released and has been taken off tap: put it back on tap instead.');
     if (batch.status !== 'packaged') throw conflict('Only a packaged batch can be released: log its packaging first.');
     const numbers = await finalNumbers(batch, transaction);
     if (numbers.og === null) throw conflict('The measured OG is not in the brew-day log yet: log it at knockout before releasing.');
@@ -162,6 +168,38 @@ export async function publishRelease(actor: Express.User, batchId: number, input
     await changeBatchStatus(actor, batch.id, { status: 'released' }, transaction);
   });
   return releaseDetail(actor, batchId);
+}
+
+/**
+ * Takes a released beer off tap when it runs out: it leaves the taproom's tap list and the bar screen. The release
+ * keeps its sheet and frozen numbers, and the batch stays released; the tasting notes are not touched.
+ */
+export async function takeOffTap(actor: Express.User, batchId: number): Promise<ReleaseDetail> {
+  await sequelize.transaction(async (transaction) => {
+    const release = await releaseToChange(actor, batchId, transaction);
+    if (release.state === 'off_tap') throw conflict('This beer is already off tap.');
+    if (release.state !== 'on_tap') throw conflict('Only a beer on tap can be taken off tap: release it first.');
+    await release.update({ state: 'off_tap', offTapAt: new Date(), offTapById: actor.id }, { transaction });
+  });
+  return releaseDetail(actor, batchId);
+}
+
+/** Puts a beer taken off tap back on (taken off by mistake, or another keg turned up). */
+export async function putBackOnTap(actor: Express.User, batchId: number): Promise<ReleaseDetail> {
+  await sequelize.transaction(async (transaction) => {
+    const release = await releaseToChange(actor, batchId, transaction);
+    if (release.state !== 'off_tap') throw conflict('Only a beer taken off tap can be put back on.');
+    await release.update({ state: 'on_tap', offTapAt: null, offTapById: null }, { transaction });
+  });
+  return releaseDetail(actor, batchId);
+}
+
+/** The batch's release, its batch row locked so two changes to it run one after the other. */
+async function releaseToChange(actor: Express.User, batchId: number, transaction: Transaction): Promise<Release> {
+  const batch = await findBatch(actor.breweryId, batchId, transaction, true);
+  const release = await Release.findOne({ where: { batchId: batch.id }, transaction });
+  if (!release) throw conflict('This batch has no release sheet yet.');
+  return release;
 }
 
 export interface ReleaseCandidate {

@@ -9,7 +9,10 @@ import { packageSizes } from './release';
 import { tastingSummaries } from './tasting';
 import { strengthOf, type TaproomBeer, type TaproomListQuery } from '../../shared/schemas/taproom';
 
+/** On the tap list: announced or pouring. */
 const SHOWN = { [Op.in]: ['coming_soon', 'on_tap'] };
+/** A briefing sheet still opens once the beer is off tap, as a record of what was poured. */
+const READABLE = { [Op.in]: ['coming_soon', 'on_tap', 'off_tap'] };
 
 async function toBeers(breweryId: number, releases: Release[]): Promise<TaproomBeer[]> {
   const batchIds = releases.map((r) => r.batchId);
@@ -22,10 +25,11 @@ async function toBeers(breweryId: number, releases: Release[]): Promise<TaproomB
   return releases.map((r) => {
     const batch = byId.get(r.batchId)!;
     const planned = batch.plan.computed;
-    const released = r.state === 'on_tap' && r.abvPct !== null;
+    const state = r.state === 'draft' ? 'coming_soon' : r.state;
+    const released = state !== 'coming_soon' && r.abvPct !== null;
     return {
       id: r.id,
-      state: r.state === 'on_tap' ? 'on_tap' : 'coming_soon',
+      state,
       batchNumber: batch.number,
       beerName: r.beerName,
       style: r.style,
@@ -44,6 +48,7 @@ async function toBeers(breweryId: number, releases: Release[]): Promise<TaproomB
         ? { id: r.photoAttachmentId, url: `/api/attachments/${r.photoAttachmentId}/file`, thumbnailUrl: `/api/attachments/${r.photoAttachmentId}/thumbnail` }
         : null,
       releasedAt: r.releasedAt?.toISOString() ?? null,
+      offTapAt: r.offTapAt?.toISOString() ?? null,
     };
   });
 }
@@ -66,9 +71,9 @@ export async function listBeers(actor: Express.User, query: TaproomListQuery): P
   };
 }
 
-/** One announced or released beer; a draft or another brewery's answers 404. */
+/** One announced or released beer, on tap or off tap since; a draft or another brewery's answers 404. */
 export async function beer(actor: Express.User, releaseId: number): Promise<TaproomBeer> {
-  const release = await Release.findOne({ where: { id: releaseId, breweryId: actor.breweryId, state: SHOWN } });
+  const release = await Release.findOne({ where: { id: releaseId, breweryId: actor.breweryId, state: READABLE } });
   if (!release) throw notFound('This beer');
   return (await toBeers(actor.breweryId, [release]))[0]!;
 }

@@ -102,7 +102,14 @@ export type TaproomListQuery = z.infer<typeof taproomListQuery>;
 
 export const idParam = z.coerce.number({ error: 'Must be a number' }).int().positive().max(2147483647);
 
-export type ReleaseState = 'draft' | 'coming_soon' | 'on_tap';
+/**
+ * Where a release stands: a draft sheet, announced as coming soon, on tap, or off tap (poured out: gone from
+ * the tap list and the bar screen, its sheet and numbers kept for the record).
+ */
+export const RELEASE_STATES = ['draft', 'coming_soon', 'on_tap', 'off_tap'] as const;
+export type ReleaseState = (typeof RELEASE_STATES)[number];
+/** Released to the taproom at some point: on tap now, or off tap since (its numbers were frozen at release). */
+export const wasReleased = (state: ReleaseState | null | undefined): state is 'on_tap' | 'off_tap' => state === 'on_tap' || state === 'off_tap';
 
 /** Final numbers: measured where the log has them, planned otherwise (and said so). */
 export interface FinalNumbers {
@@ -142,6 +149,8 @@ export interface TaproomBeer {
   tasting: TastingSummary;
   photo: { id: number; thumbnailUrl: string; url: string } | null;
   releasedAt: string | null;
+  /** When it was taken off tap (the taproom's list no longer shows it; its sheet still opens). */
+  offTapAt: string | null;
 }
 
 /** The head brewer's view of one batch's release. */
@@ -153,6 +162,8 @@ export interface ReleaseDetail {
   packageSizes: PackageSize[];
   releasedAt: string | null;
   releasedBy: string | null;
+  offTapAt: string | null;
+  offTapBy: string | null;
 }
 
 /** The largest file a person may attach (photos and lab sheets). */

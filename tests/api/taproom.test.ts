@@ -203,3 +203,60 @@ describe("the taproom role's access matrix", () => {
     expect(open.map((r) => `${r.method} ${r.path}`)).toEqual([]);
   });
 });
+
+describe('taking a beer off tap', () => {
+  const onTapNames = async () => ((await t.as.taproom_manager.get('/api/taproom/beers')).body.beers as { beerName: string; state: string }[]).filter((b) => b.state === 'on_tap').map((b) => b.beerName);
+
+  it('is the head brewer’s to do: the taproom manager and the assistant get 403, and the beer stays on tap', async () => {
+    for (const role of ['taproom_manager', 'assistant_brewer'] as const) {
+      expect((await t.as[role].post(`/api/batches/${batch.id}/release/off-tap`)).status).toBe(403);
+      expect((await t.as[role].post(`/api/batches/${batch.id}/release/back-on-tap`)).status).toBe(403);
+    }
+    expect(await onTapNames()).toEqual(['Breakwater Pale']);
+  });
+
+  it('takes it off the tap list and the bar screen; its sheet, numbers and tasting notes stay', async () => {
+    await t.as.head_brewer.post(`/api/batches/${batch.id}/tasting-notes`).send({ idempotencyKey: randomUUID(), content: TASTING_CONTENT });
+    const res = await t.as.head_brewer.post(`/api/batches/${batch.id}/release/off-tap`);
+    expect(res.status, JSON.stringify(res.body)).toBe(200);
+    expect(res.body).toMatchObject({ state: 'off_tap', offTapBy: t.users.head_brewer.displayName, releasedBy: t.users.head_brewer.displayName, sheet: { beerName: 'Breakwater Pale' } });
+    expect(Date.now() - Date.parse(res.body.offTapAt)).toBeLessThan(60_000);
+    expect(res.body.numbers.abvPct).toBeCloseTo(abv(1.062, 1.012), 10);
+
+    expect(await onTapNames()).toEqual([]);
+    const list = (await t.as.taproom_manager.get('/api/taproom/beers')).body;
+    expect(list.beers.map((b: { beerName: string }) => b.beerName)).toEqual(['Foghorn Lager']);
+    expect(list.styles).toEqual(['Helles']);
+    expect((await t.as.taproom_manager.get('/api/taproom/beers?strength=strong')).body.beers).toEqual([]);
+
+    // Kept for the record: the briefing sheet still opens, saying so; the batch stays released with its notes.
+    const sheet = await t.as.taproom_manager.get(`/api/taproom/beers/${releaseId}`);
+    expect(sheet.status).toBe(200);
+    expect(sheet.body).toMatchObject({ state: 'off_tap', beerName: 'Breakwater Pale', abvIsPlanned: false, offTapAt: res.body.offTapAt });
+    expect((await t.as.head_brewer.get(`/api/batches/${batch.id}`)).body.status).toBe('released');
+    expect((await t.as.head_brewer.get(`/api/batches/${batch.id}/tasting-notes`)).body).not.toHaveLength(0);
+    const candidates = (await t.as.head_brewer.get('/api/taproom/releases')).body as { batchId: number; state: string }[];
+    expect(candidates.find((c) => c.batchId === batch.id)?.state).toBe('off_tap');
+  });
+
+  it('keeps it off tap when its sheet is saved again, and refuses to release it or take it off twice (409)', async () => {
+    const saved = await t.as.head_brewer.put(`/api/batches/${batch.id}/release`).send({ ...SHEET, comingSoon: true, servingNotes: 'Last keg gone.' });
+    expect(saved.status, JSON.stringify(saved.body)).toBe(200);
+    expect(saved.body.state).toBe('off_tap');
+    expect((await t.as.head_brewer.post(`/api/batches/${batch.id}/release/off-tap`)).status).toBe(409);
+    const publish = await t.as.head_brewer.post(`/api/batches/${batch.id}/release/publish`).send({ confirmedOg: 1.062, confirmedFg: 1.012 });
+    expect(publish.status).toBe(409);
+    expect(publish.body.error.message).toMatch(/off tap/);
+  });
+
+  it('puts it back on tap; a beer not on tap cannot be taken off (409)', async () => {
+    const back = await t.as.head_brewer.post(`/api/batches/${batch.id}/release/back-on-tap`);
+    expect(back.status, JSON.stringify(back.body)).toBe(200);
+    expect(back.body).toMatchObject({ state: 'on_tap', offTapAt: null, offTapBy: null });
+    expect(await onTapNames()).toEqual(['Breakwater Pale']);
+    expect((await t.as.head_brewer.post(`/api/batches/${batch.id}/release/back-on-tap`)).status).toBe(409);
+    expect((await t.as.head_brewer.post(`/api/batches/${conditioning.id}/release/off-tap`)).status).toBe(409);
+    expect((await t.as.head_brewer.post(`/api/batches/${unreleased.id}/release/off-tap`)).status).toBe(409);
+    expect((await other.as.head_brewer.post(`/api/batches/${batch.id}/release/off-tap`)).status).toBe(404);
+  });
+});

@@ -220,3 +220,39 @@ describe('the bar screen as a full-screen view (Chromium, 1024×768)', () => {
     await page.close();
   });
 });
+
+describe('taking a beer off tap (Chromium, 1024×768)', () => {
+  it('the head brewer takes the released beer off tap: it leaves the taproom home and the bar screen', async () => {
+    const page = await brewer.newPage();
+    await page.goto('/releases');
+    const row = page.getByRole('row').filter({ hasText: beerName });
+    await row.getByRole('link', { name: /^Release / }).waitFor();
+    expect(await row.getByRole('cell').nth(3).textContent()).toBe('On tap');
+    await row.getByRole('link', { name: /^Release / }).click();
+    await page.getByRole('button', { name: 'Take off tap…' }).click();
+    await page.getByRole('button', { name: `Take ${beerName} off tap` }).click();
+    await page.getByText(`Off tap, taken off by ${maren.displayName}`).waitFor();
+    await page.getByText('Off tap (kept for the record)').waitFor();
+    await screenshot(page, 'taproom-release-off-tap-1024.png');
+
+    const bar = await taproom.newPage();
+    await signIn(bar, priya.email);
+    const onTap = bar.getByRole('region', { name: 'On tap' });
+    await onTap.getByRole('heading', { level: 3 }).first().waitFor();
+    expect(await onTap.getByRole('heading', { level: 3 }).allTextContents()).not.toContain(beerName);
+    await openBoard(bar);
+    const names = await bar.getByRole('region', { name: /^On tap at / }).getByRole('listitem').allTextContents();
+    expect(names.some((n) => n.includes(beerName))).toBe(false);
+
+    // Taken off by mistake: it goes back on.
+    await page.getByRole('button', { name: 'Put back on tap' }).click();
+    await page.getByText(`On tap, released by ${maren.displayName}`).waitFor();
+    await page.goto('/releases');
+    await row.getByRole('link', { name: /^Release / }).waitFor();
+    expect(await row.getByRole('cell').nth(3).textContent()).toBe('On tap');
+    await bar.goto('/taproom');
+    await onTap.getByRole('heading', { level: 3, name: beerName }).waitFor();
+    await page.close();
+    await bar.close();
+  });
+});

@@ -28,3 +28,12 @@ export function usePublishRelease(batchId: number) {
     onSuccess: invalidate,
   });
 }
+
+/** Takes the beer off tap (it has run out), or puts a beer taken off tap back on. */
+export function useSetOnTap(batchId: number) {
+  const invalidate = useInvalidateAfterRelease();
+  return useMutation({
+    mutationFn: (onTap: boolean) => api.post<ReleaseDetail>(`/api/batches/${batchId}/release/${onTap ? 'back-on-tap' : 'off-tap'}`),
+    onSuccess: invalidate,
+  });
+}

@@ -32,9 +32,13 @@ export function BriefingSheetPage() {
   if (beer.isError) return <ErrorState error={beer.error} onRetry={() => beer.refetch()} />;
   const b = beer.data;
   const tasting = tastingLine(b.tasting);
-  const when = b.releasedAt
-    ? `On tap since ${new Intl.DateTimeFormat('en-GB', { dateStyle: 'long', timeZone: me.brewery.timeZone }).format(new Date(b.releasedAt))}`
-    : 'Coming soon';
+  const date = (iso: string) => new Intl.DateTimeFormat('en-GB', { dateStyle: 'long', timeZone: me.brewery.timeZone }).format(new Date(iso));
+  const when =
+    b.state === 'off_tap'
+      ? `Off tap${b.offTapAt ? ` since ${date(b.offTapAt)}` : ''} (kept for the record)`
+      : b.releasedAt
+        ? `On tap since ${date(b.releasedAt)}`
+        : 'Coming soon';
 
   return (
     <>

@@ -4,24 +4,31 @@ import { useController, useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Button, Card, Caution, Dialog, ErrorState, Loading, PageHeader, SelectField, Stat, TextAreaField, TextField, useToast } from '../../../components/ui';
 import { useCurrentUser } from '../../../app/current-user';
+import { ConfirmButton } from '../../../components/confirm-button';
 import { applyServerErrors } from '../../../lib/forms';
 import { show } from '../../../lib/units';
 import {
   ALLERGENS,
   GLASSES,
   releaseSheetSchema,
+  wasReleased,
   type ReleaseDetail,
   type ReleaseSheet,
   type ReleaseSheetInput,
 } from '../../../../shared/schemas/taproom';
-import { useRelease, usePublishRelease, useSaveReleaseSheet } from '../api/release';
+import { useRelease, usePublishRelease, useSaveReleaseSheet, useSetOnTap } from '../api/release';
 import { useAttachments } from '../api/attachments';
 import { AttachmentsPanel } from './attachments-panel';
 import { ColourSwatch, packagesLine } from './beer-facts';
 
 /** Serving temperatures offered, °C (shown in the brewery's units). Common cellar-to-cool range, no source. */
 const SERVING_TEMPS_C = [2, 4, 6, 8, 10, 12, 14];
-const STATE_LABELS = { draft: 'Draft (not shown to the taproom)', coming_soon: 'Coming soon (shown to the taproom)', on_tap: 'On tap' } as const;
+const STATE_LABELS = {
+  draft: 'Draft (not shown to the taproom)',
+  coming_soon: 'Coming soon (shown to the taproom)',
+  on_tap: 'On tap',
+  off_tap: 'Off tap (kept for the record)',
+} as const;
 const METHOD_LABELS = { balling: "Balling's formula (Hall, 1995)", simple: '(OG − FG) × 131.25', hall: 'Hall’s formula' } as const;
 
 const sg = (v: number | null) => (v === null ? '—' : v.toFixed(3));
@@ -132,7 +139,7 @@ function SheetForm({ batchId, detail }: { batchId: number; detail: ReleaseDetail
           </div>
           {errors.photoAttachmentId && <p className="text-sm text-ember-700">{errors.photoAttachmentId.message}</p>}
         </fieldset>
-        {detail.state !== 'on_tap' && (
+        {!wasReleased(detail.state) && (
           <label className="flex min-h-touch items-center gap-2">
             <input type="checkbox" {...register('comingSoon')} className="h-5 w-5 accent-cellar-700" />
             Show to the taproom as coming soon
@@ -146,17 +153,84 @@ function SheetForm({ batchId, detail }: { batchId: number; detail: ReleaseDetail
   );
 }
 
-function ReleaseNumbers({ batchId, detail, sheetSaved }: { batchId: number; detail: ReleaseDetail; sheetSaved: boolean }) {
+/** " on 2 Dec 2026, 14:05 GMT" in the brewery's time zone, or nothing without a time. */
+function useStamp() {
   const me = useCurrentUser();
+  const format = new Intl.DateTimeFormat('en-GB', {
+    day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit', timeZone: me.brewery.timeZone, timeZoneName: 'short',
+  });
+  return (iso: string | null) => (iso ? ` on ${format.format(new Date(iso))}` : '');
+}
+
+/** A released beer: who released it and when, and taking it off tap when it runs out (or back on). */
+function TapState({ batchId, detail }: { batchId: number; detail: ReleaseDetail }) {
+  const stamp = useStamp();
+  const toast = useToast();
+  const setOnTap = useSetOnTap(batchId);
+  const [problem, setProblem] = useState<string | null>(null);
+  const name = detail.sheet?.beerName ?? detail.batch.beerName;
+  const released = `released by ${detail.releasedBy ?? 'the head brewer'}${stamp(detail.releasedAt)}`;
+  const refused = (error: unknown) => setProblem(error instanceof Error ? error.message : 'That did not go through. Try again.');
+  const alert = problem && (
+    <p role="alert" className="rounded-lg bg-ember-100 p-3 font-medium text-ember-700">
+      {problem}
+    </p>
+  );
+
+  if (detail.state === 'on_tap') {
+    return (
+      <div className="space-y-3">
+        <p className="rounded-lg bg-cellar-100 p-3 font-semibold text-cellar-800">On tap, {released}.</p>
+        <p className="text-sm text-ink-700">
+          When it runs out, take it off tap: it leaves the taproom’s list and the bar screen. Its sheet, numbers and tasting notes are kept.
+        </p>
+        <ConfirmButton
+          ask="Take off tap…"
+          confirm={`Take ${name} off tap`}
+          act={() => setOnTap.mutateAsync(false)}
+          onDone={() => toast(`${name} is off tap`)}
+          onRefused={refused}
+        />
+        {alert}
+      </div>
+    );
+  }
+  return (
+    <div className="space-y-3">
+      <p className="rounded-lg bg-mist-100 p-3 font-semibold text-ink-700">
+        Off tap{detail.offTapBy ? `, taken off by ${detail.offTapBy}` : ''}
+        {stamp(detail.offTapAt)}. It was {released}.
+      </p>
+      <Button
+        variant="secondary"
+        busy={setOnTap.isPending}
+        onClick={async () => {
+          setProblem(null);
+          try {
+            await setOnTap.mutateAsync(true);
+            toast(`${name} is back on tap`);
+          } catch (error) {
+            refused(error);
+          }
+        }}
+      >
+        Put back on tap
+      </Button>
+      {alert}
+    </div>
+  );
+}
+
+function ReleaseNumbers({ batchId, detail, sheetSaved }: { batchId: number; detail: ReleaseDetail; sheetSaved: boolean }) {
   const publish = usePublishRelease(batchId);
   const toast = useToast();
   const [confirming, setConfirming] = useState(false);
   const [problem, setProblem] = useState<string | null>(null);
   const n = detail.numbers;
-  const onTap = detail.state === 'on_tap';
+  const released = wasReleased(detail.state);
   const blockers = [
     !sheetSaved && 'Save the release sheet first.',
-    detail.batch.status !== 'packaged' && !onTap && 'The batch must be packaged first.',
+    detail.batch.status !== 'packaged' && !released && 'The batch must be packaged first.',
     n.og === null && 'The measured OG is not on the brew-day log yet.',
     n.fg === null && 'There is no gravity reading yet.',
   ].filter(Boolean) as string[];
@@ -174,7 +248,7 @@ function ReleaseNumbers({ batchId, detail, sheetSaved }: { batchId: number; deta
 
   return (
     <Card className="space-y-4">
-      <h2 className="text-lg font-bold text-ink-900">{onTap ? 'Released numbers' : 'Final numbers'}</h2>
+      <h2 className="text-lg font-bold text-ink-900">{released ? 'Released numbers' : 'Final numbers'}</h2>
       <div className="grid grid-cols-2 gap-3">
         <Stat label="OG (measured)" value={sg(n.og)} />
         <Stat label="FG (last reading)" value={sg(n.fg)} />
@@ -192,14 +266,8 @@ function ReleaseNumbers({ batchId, detail, sheetSaved }: { batchId: number; deta
         <span className="font-semibold">Packaged: </span>
         {detail.packageSizes.length ? packagesLine(detail.packageSizes) : 'nothing yet'}
       </p>
-      {onTap ? (
-        <p className="rounded-lg bg-cellar-100 p-3 font-semibold text-cellar-800">
-          On tap{detail.releasedBy ? `, released by ${detail.releasedBy}` : ''}
-          {detail.releasedAt
-            ? ` on ${new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit', timeZone: me.brewery.timeZone, timeZoneName: 'short' }).format(new Date(detail.releasedAt))}`
-            : ''}
-          .
-        </p>
+      {released ? (
+        <TapState batchId={batchId} detail={detail} />
       ) : (
         <>
           {blockers.length > 0 && (

@@ -2,8 +2,9 @@ import { EmptyState, ErrorState, LinkButton, Loading, PageHeader, Table, Td, Th 
 import { BATCH_STATUS_LABELS, type BatchStatus } from '../../../../shared/schemas/batches';
 import { useReleases } from '../api/list-releases';
 import { useCurrentUser } from '../../../app/current-user';
+import { wasReleased } from '../../../../shared/schemas/taproom';
 
-const STATE_TEXT = { draft: 'Sheet drafted', coming_soon: 'Shown as coming soon', on_tap: 'On tap' } as const;
+const STATE_TEXT = { draft: 'Sheet drafted', coming_soon: 'Shown as coming soon', on_tap: 'On tap', off_tap: 'Off tap' } as const;
 
 /** The head brewer's list of batches with beer to release, and where each release stands. */
 export function ReleasesPage() {
@@ -49,7 +50,7 @@ export function ReleasesPage() {
                         to={`/batches/${r.batchId}/release`}
                         aria-label={`Release ${r.beerName} (${r.number})`}
                       >
-                        {r.state === 'on_tap' ? 'View release' : 'Prepare release'}
+                        {wasReleased(r.state) ? 'View release' : 'Prepare release'}
                       </LinkButton>
                     )}
                   </span>
