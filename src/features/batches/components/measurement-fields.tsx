@@ -133,7 +133,8 @@ export function MeasurementFields({
         const far = invalid !== key && typedSi !== undefined && want !== undefined && farFromExpected(key, typedSi, want);
         return (
           <div key={key}>
-            <div className="flex items-end justify-between gap-2">
+            {/* As tall as the SG/°P switch, so a field beside the gravity field starts at the same height. */}
+            <div className="flex min-h-[48px] items-end justify-between gap-2">
               <label htmlFor={id} className="text-base font-semibold text-ink-700">
                 {unit ? `${NAMES[key]} (${unit})` : NAMES[key]}
               </label>
