@@ -131,3 +131,66 @@ describe('scaling the seasonal and printing its brew sheet (Chromium)', () => {
     await taproom.close();
   });
 });
+
+describe('the recipe screens on a tablet (Chromium)', () => {
+  let context: BrowserContext;
+  let page: Page;
+  beforeAll(async () => {
+    context = await openBrowser({ width: 768, height: 1024 });
+    page = await context.newPage();
+    await signIn(page, DEMO_PEOPLE[0]!.email);
+  });
+  afterAll(async () => {
+    await context?.close();
+  });
+
+  /** How far each select's chosen text, or each input's value, overflows its box (px); 0 when it fits. */
+  const overflowing = (p: Page) =>
+    p.evaluate(() => {
+      const ctx = document.createElement('canvas').getContext('2d')!;
+      const out: string[] = [];
+      for (const el of Array.from(document.querySelectorAll<HTMLSelectElement | HTMLInputElement>('form select, form input[type="text"], form input:not([type])'))) {
+        if (el.offsetParent === null) continue;
+        const style = getComputedStyle(el);
+        const text = el instanceof HTMLSelectElement ? (el.selectedOptions[0]?.text ?? '') : el.value;
+        // The `font` shorthand can read empty for form controls; build it from its parts.
+        ctx.font = `${style.fontWeight} ${style.fontSize} ${style.fontFamily}`;
+        const room = el.clientWidth - parseFloat(style.paddingLeft) - parseFloat(style.paddingRight);
+        if (ctx.measureText(text).width > room + 1) out.push(text);
+      }
+      return out;
+    });
+
+  it('fits every recipe column on a portrait tablet (768 px)', async () => {
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Recipes' }).click();
+    const table = page.getByRole('table');
+    await expect.poll(() => table.getByRole('columnheader', { name: /Last brewed/ }).count()).toBe(1);
+    const [scroll, client] = await table.evaluate((t) => [t.parentElement!.scrollWidth, t.parentElement!.clientWidth]);
+    expect(scroll).toBeLessThanOrEqual(client);
+    await screenshot(page, 'recipes-list-768.png');
+  });
+
+  it('keeps OG, IBU and the other figures on screen while editing on a portrait tablet', async () => {
+    await page.getByRole('link', { name: 'Breakwater Pale' }).click();
+    await page.getByRole('link', { name: /Edit version/ }).first().click();
+    const bar = page.getByRole('region', { name: 'Numbers while editing' });
+    await expect.poll(() => bar.textContent()).toMatch(/OG1\.0\d\d/);
+    await page.getByRole('heading', { name: 'Water', exact: true }).scrollIntoViewIfNeeded();
+    const box = (await bar.boundingBox())!;
+    expect(box.y).toBeGreaterThan(0);
+    expect(box.y + box.height).toBeLessThanOrEqual(1024);
+    expect(await bar.textContent()).toMatch(/IBU\d+/);
+    await screenshot(page, 'recipe-editor-768-fold.png', { fullPage: false });
+  });
+
+  it('shows whole names in selects and hop varieties at 768 and 1024 px', async () => {
+    expect(await overflowing(page)).toEqual([]);
+    await page.setViewportSize({ width: 1024, height: 768 });
+    expect(await overflowing(page)).toEqual([]);
+    await page.getByRole('heading', { name: 'Hops', exact: true }).scrollIntoViewIfNeeded();
+    await screenshot(page, 'recipe-editor-1024-hops.png', { fullPage: false });
+    await page.setViewportSize({ width: 1440, height: 900 });
+    expect(await overflowing(page)).toEqual([]);
+    await screenshot(page, 'recipe-editor-1440-fold.png', { fullPage: false });
+  });
+});

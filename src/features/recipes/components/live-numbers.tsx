@@ -151,3 +151,39 @@ export function LiveNumbersPanel({ live, system }: { live: LiveNumbers; system: 
     </section>
   );
 }
+
+/**
+ * The big figures in a bar held at the foot of the screen while editing, below the width where the
+ * live panel sits beside the form (on a portrait tablet the panel is thousands of pixels down).
+ */
+export function NumbersBar({ live }: { live: LiveNumbers }) {
+  const c = live.computed;
+  const figures: [string, string][] = [
+    ['OG', c ? c.og.toFixed(3) : '—'],
+    ['FG', c ? c.fg.toFixed(3) : '—'],
+    ['ABV', c ? `${c.abvPct.toFixed(1)} %` : '—'],
+    ['IBU', c ? c.ibu.toFixed(0) : '—'],
+    ['SRM', c ? c.srm.toFixed(0) : '—'],
+  ];
+  const notes = live.warnings.length + (live.problem ? 1 : 0);
+  return (
+    <section aria-label="Numbers while editing" className="sticky bottom-0 z-30 -mx-1 rounded-t-xl bg-cellar-800 px-4 py-2 text-white shadow-lg lg:hidden">
+      <div className="flex items-center gap-4">
+        <dl className="flex flex-1 flex-wrap justify-between gap-x-4">
+          {figures.map(([k, v]) => (
+            <div key={k} className="min-w-16">
+              <dt className="text-xs font-semibold uppercase tracking-wide text-mist-200">{k}</dt>
+              <dd className="flex items-center gap-1 text-xl font-semibold tabular-nums">
+                {k === 'SRM' && c && <span aria-hidden className="inline-block h-4 w-4 rounded-full border border-white/60" style={{ backgroundColor: c.colourHex }} />}
+                {v}
+              </dd>
+            </div>
+          ))}
+        </dl>
+        <a href="#live-numbers" className="flex min-h-touch items-center rounded-lg border border-white/60 px-3 text-sm font-semibold">
+          {notes > 0 ? `${notes} note${notes > 1 ? 's' : ''}` : 'Details'}
+        </a>
+      </div>
+    </section>
+  );
+}

@@ -23,7 +23,7 @@ import type { UnitSystem } from '../../../../shared/schemas/auth';
 import { Button, Card, SelectField, TextAreaField, TextField, cx } from '../../../components/ui';
 import type { EquipmentRow } from '../../library/api/equipment';
 import type { IngredientRow } from '../../library/api/ingredients';
-import { LiveNumbersPanel, useLiveNumbers } from './live-numbers';
+import { LiveNumbersPanel, NumbersBar, useLiveNumbers } from './live-numbers';
 import { showAdjunct } from './scale-view';
 import { UnitField, asNumber } from '../../../components/ui/unit-field';
 import { UNITS, show, showVolume } from '../../../lib/units';
@@ -145,7 +145,7 @@ function GrainBill({ control, register, errors, system, disabled, ogNow, weights
               ? <TextField label="Potential (ppg)" type="number" step="any" {...register(`${p}.potential.ppg` as never, asNumber())} error={errorAt(errors, `${p}.potential.ppg`)} disabled={disabled} />
               : <TextField label="Extract (%)" type="number" step="any" {...register(`${p}.potential.extractPct` as never, asNumber())} error={errorAt(errors, `${p}.potential.extractPct`)} disabled={disabled} />)}
             {w('w-24', <TextField label="Colour (°L)" type="number" step="any" {...register(`${p}.colourLovibond`, asNumber())} error={errorAt(errors, `${p}.colourLovibond`)} disabled={disabled} />)}
-            {w('w-36', (
+            {w('w-44', (
               <SelectField label="Goes in" {...register(`${p}.stage`)} disabled={disabled}>
                 {FERMENTABLE_STAGES.map((s) => (
                   <option key={s} value={s}>{STAGE_LABELS[s]}</option>
@@ -179,7 +179,7 @@ function Hops({ control, register, errors, system, disabled, ibus, solvedWeights
         const use = values[i]?.use;
         return (
           <Row key={f.id} legend={`Hop ${i + 1}`} onRemove={() => hops.remove(i)} disabled={disabled}>
-            {w('min-w-44 flex-1', (
+            {w('min-w-64 flex-1', (
               <TextField
                 label="Variety"
                 list="kw-library-hop"
@@ -194,12 +194,12 @@ function Hops({ control, register, errors, system, disabled, ibus, solvedWeights
               />
             ))}
             {w('w-24', <TextField label="Alpha (%)" type="number" step="any" {...register(`${p}.alphaAcidPct`, asNumber())} error={errorAt(errors, `${p}.alphaAcidPct`)} disabled={disabled} />)}
-            {w('w-28', (
+            {w('w-32', (
               <SelectField label="Form" {...register(`${p}.form`)} disabled={disabled}>
                 {HOP_FORMS.map((x) => <option key={x} value={x}>{x[0]!.toUpperCase() + x.slice(1)}</option>)}
               </SelectField>
             ))}
-            {w('w-32', (
+            {w('w-40', (
               <SelectField label="Use" {...register(`${p}.use`)} disabled={disabled}>
                 {HOP_USES.map((x) => <option key={x} value={x}>{HOP_USE_LABELS[x]}</option>)}
               </SelectField>
@@ -259,7 +259,7 @@ function Mash({ control, register, errors, system, disabled }: Shared) {
             {w('min-w-44 flex-1', <TextField label="Name" {...register(`${p}.name`)} error={errorAt(errors, `${p}.name`)} disabled={disabled} />)}
             {w('w-32', <UnitField control={control} name={`${p}.tempC`} label="Rest" quantity="tempC" system={system} disabled={disabled} />)}
             {w('w-24', <TextField label="Minutes" type="number" step="any" {...register(`${p}.minutes`, asNumber())} error={errorAt(errors, `${p}.minutes`)} disabled={disabled} />)}
-            {i > 0 && w('w-56', (
+            {i > 0 && w('w-72', (
               <SelectField label="Reached by" {...register(`${p}.method`)} disabled={disabled}>
                 {MASH_METHODS.map((x) => <option key={x} value={x}>{METHOD_LABELS[x]}</option>)}
               </SelectField>
@@ -287,7 +287,7 @@ function Salts({ control, register, errors, disabled, vessel }: Shared & { vesse
         const p = `content.water.${vessel}.${i}` as 'content.water.mashSalts.0';
         return (
           <Row key={f.id} legend={`${label.slice(0, -1)} ${i + 1}`} onRemove={() => salts.remove(i)} disabled={disabled}>
-            {w('min-w-56 flex-1', (
+            {w('min-w-80 flex-1', (
               <SelectField label="Salt" {...register(`${p}.salt`)} disabled={disabled}>
                 {SALT_IDS.map((s) => <option key={s} value={s}>{SALT_LABELS[s]}</option>)}
               </SelectField>
@@ -403,12 +403,12 @@ function Additions({ control, register, errors, disabled, kind, amounts, sugar, 
         return (
           <Row key={f.id} legend={`${kind === 'adjuncts' ? 'Adjunct' : 'Spice'} ${i + 1}`} onRemove={() => list.remove(i)} disabled={disabled}>
             {w('min-w-64 flex-1', <TextField label="Name" list={kind === 'adjuncts' ? 'kw-library-adjunct' : undefined} {...register(`${p}.name`)} error={errorAt(errors, `${p}.name`)} disabled={disabled} />)}
-            {w('w-32', (
+            {w('w-36', (
               <SelectField label="Kind" {...register(`${p}.category`)} disabled={disabled}>
                 {ADJUNCT_CATEGORIES.map((x) => <option key={x} value={x}>{x}</option>)}
               </SelectField>
             ))}
-            {w('w-32', (
+            {w('w-40', (
               <SelectField
                 label="Goes in"
                 {...register(`${p}.stage`, {
@@ -643,9 +643,10 @@ export function RecipeEditor({ initial, equipment, library, system, canEdit, not
         <Section title="Notes">
           <TextAreaField label="Notes for the brewer" rows={3} {...register('content.notes')} error={errorAt(formState.errors, 'content.notes')} disabled={disabled} />
         </Section>
+        <NumbersBar live={live} />
       </div>
       <aside className="space-y-3 lg:sticky lg:top-20 lg:w-80 lg:shrink-0">
-        <Card>
+        <Card id="live-numbers">
           <LiveNumbersPanel live={live} system={system} />
         </Card>
         {!canEdit && <p className="rounded-lg bg-mist-100 p-3 text-sm text-ink-700">Read only: the head brewer edits recipes. The brew sheet is one tap away above.</p>}

@@ -17,6 +17,9 @@ import type { RecipeListRow } from '../../../../shared/schemas/recipes';
 
 const col = createColumnHelper<RecipeListRow>();
 
+/** Narrower cell padding below 1024 px, so all nine columns fit a portrait tablet (768 px) without scrolling. */
+const TIGHT = '!px-2 lg:!px-4';
+
 const STATUS_STYLE: Record<string, string> = {
   active: 'bg-cellar-100 text-cellar-800',
   draft: 'bg-sky-100 text-sky-700',
@@ -110,7 +113,7 @@ export function RecipeListPage() {
                   {g.headers.map((h) => {
                     const sorted = h.column.getIsSorted();
                     return (
-                      <Th key={h.id} aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : 'none'}>
+                      <Th key={h.id} className={TIGHT} aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : 'none'}>
                         <button type="button" className="flex min-h-touch items-center gap-1" onClick={h.column.getToggleSortingHandler()}>
                           {flexRender(h.column.columnDef.header, h.getContext())}
                           <span aria-hidden>{sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : ''}</span>
@@ -125,7 +128,7 @@ export function RecipeListPage() {
               {table.getRowModel().rows.map((r) => (
                 <tr key={r.id}>
                   {r.getVisibleCells().map((c) => (
-                    <Td key={c.id} className="whitespace-nowrap py-1">{flexRender(c.column.columnDef.cell, c.getContext())}</Td>
+                    <Td key={c.id} className={`${TIGHT} whitespace-nowrap py-1`}>{flexRender(c.column.columnDef.cell, c.getContext())}</Td>
                   ))}
                 </tr>
               ))}
