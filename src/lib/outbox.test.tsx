@@ -1,5 +1,5 @@
-import { describe, expect, it } from 'vitest';
-import { backoffMs, createOutbox, type OutboxItem, type OutboxStore, type SendResult } from './outbox';
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { backoffMs, createOutbox, sendItem, type OutboxItem, type OutboxStore, type SendResult } from './outbox';
 
 /** The outbox's store kept in memory, standing in for IndexedDB (which jsdom lacks). */
 function memoryStore(): OutboxStore & { items: OutboxItem[] } {
@@ -84,5 +84,16 @@ describe('outbox', () => {
 
   it('backs off exponentially up to a minute', () => {
     expect([1, 2, 3, 7, 20].map(backoffMs)).toEqual([1000, 2000, 4000, 60_000, 60_000]);
+  });
+});
+
+describe('sending one item', () => {
+  afterEach(() => vi.unstubAllGlobals());
+
+  it('keeps the fields a refusal names, so the waiting list says what to fix', async () => {
+    const refusal = { error: { code: 'invalid', message: 'Some fields need attention', fields: { 'measurements.tempC': 'Temperature (°C) must be at most 110' } } };
+    vi.stubGlobal('fetch', async () => new Response(JSON.stringify(refusal), { status: 400, headers: { 'content-type': 'application/json' } }));
+    const item = { url: '/api/batches/1/log', body: {}, label: 'Mash in', group: 'batch:1', idempotencyKey: 'k', capturedAt: new Date().toISOString() } as OutboxItem;
+    expect(await sendItem(item)).toEqual({ kind: 'rejected', message: 'Some fields need attention: Temperature (°C) must be at most 110' });
   });
 });

@@ -79,8 +79,11 @@ export async function sendItem(item: OutboxItem): Promise<SendResult> {
     return { kind: 'retry', message: 'No connection' };
   }
   if (response.ok) return { kind: 'sent' };
-  const data = (await response.json().catch(() => null)) as { error?: { message?: string } } | null;
-  const message = data?.error?.message ?? `The server answered ${response.status}`;
+  const data = (await response.json().catch(() => null)) as { error?: { message?: string; fields?: Record<string, string> } } | null;
+  // A refusal names the fields at fault ("Some fields need attention: Temperature (°C) must be at most 110").
+  const fields = Object.values(data?.error?.fields ?? {});
+  const general = data?.error?.message ?? `The server answered ${response.status}`;
+  const message = fields.length ? `${general}: ${fields.join('; ')}` : general;
   if (response.status === 401) return { kind: 'signed-out' };
   if (response.status >= 500 || response.status === 409 || response.status === 429) return { kind: 'retry', message };
   return { kind: 'rejected', message };
