@@ -51,6 +51,7 @@ function defaults(detail: ReleaseDetail): ReleaseSheetInput {
 
 function SheetForm({ batchId, detail }: { batchId: number; detail: ReleaseDetail }) {
   const me = useCurrentUser();
+  const mayRelease = me.role === 'head_brewer';
   const toast = useToast();
   const save = useSaveReleaseSheet(batchId);
   const photos = useAttachments(batchId).data?.filter((a) => a.kind === 'photo') ?? [];
@@ -76,6 +77,8 @@ function SheetForm({ batchId, detail }: { batchId: number; detail: ReleaseDetail
     <Card>
       <form onSubmit={onSubmit} className="space-y-4" aria-label="Release sheet" noValidate>
         <h2 className="text-lg font-bold text-ink-900">Release sheet</h2>
+        {!mayRelease && <p className="rounded-lg bg-mist-100 p-3 text-ink-700">Read only: a head brewer writes and releases the sheet.</p>}
+        <fieldset disabled={!mayRelease} className="space-y-4">
         {banner && (
           <p role="alert" className="rounded-lg bg-ember-100 p-3 font-medium text-ember-700">
             {banner}
@@ -145,9 +148,12 @@ function SheetForm({ batchId, detail }: { batchId: number; detail: ReleaseDetail
             Show to the taproom as coming soon
           </label>
         )}
-        <Button type="submit" size="lg" busy={save.isPending}>
-          Save release sheet
-        </Button>
+        </fieldset>
+        {mayRelease && (
+          <Button type="submit" size="lg" busy={save.isPending}>
+            Save release sheet
+          </Button>
+        )}
       </form>
     </Card>
   );
@@ -222,6 +228,7 @@ function TapState({ batchId, detail }: { batchId: number; detail: ReleaseDetail 
 }
 
 function ReleaseNumbers({ batchId, detail, sheetSaved }: { batchId: number; detail: ReleaseDetail; sheetSaved: boolean }) {
+  const mayRelease = useCurrentUser().role === 'head_brewer';
   const publish = usePublishRelease(batchId);
   const toast = useToast();
   const [confirming, setConfirming] = useState(false);
@@ -266,7 +273,7 @@ function ReleaseNumbers({ batchId, detail, sheetSaved }: { batchId: number; deta
         <span className="font-semibold">Packaged: </span>
         {detail.packageSizes.length ? packagesLine(detail.packageSizes) : 'nothing yet'}
       </p>
-      {released ? (
+      {!mayRelease ? null : released ? (
         <TapState batchId={batchId} detail={detail} />
       ) : (
         <>
