@@ -22,7 +22,6 @@ export class RecipeVersion extends Model<InferAttributes<RecipeVersion>, InferCr
   declare srm: number;
   declare abvPct: number;
   declare frozenAt: Date | null;
-  declare lastUsedAt: Date | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -55,7 +54,6 @@ RecipeVersion.init(
     srm: number(),
     abvPct: number(),
     frozenAt: { type: DataTypes.DATE, allowNull: true },
-    lastUsedAt: { type: DataTypes.DATE, allowNull: true },
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },

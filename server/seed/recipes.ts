@@ -32,7 +32,6 @@ export async function seedRecipes({ brewery, users, transaction }: DemoContext):
           srm: c.srm,
           abvPct: c.abvPct,
           frozenAt: null,
-          lastUsedAt: null,
         },
         { transaction },
       );

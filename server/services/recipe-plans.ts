@@ -121,10 +121,9 @@ export async function planForBatch(
 
 /**
  * Marks a version as used by a batch: it can no longer be edited in place (saving makes the next
- * version). Idempotent; records the latest use for the recipe list. 404 if not this brewery's.
+ * version). Idempotent. 404 if not this brewery's.
  */
 export async function freezeRecipeVersion(breweryId: number, recipeVersionId: number, transaction?: Transaction): Promise<void> {
   const { version } = await findVersion(breweryId, recipeVersionId, transaction, true);
-  const now = new Date();
-  await version.update({ lastUsedAt: now, ...(version.frozenAt ? {} : { frozenAt: now }) }, { transaction });
+  if (!version.frozenAt) await version.update({ frozenAt: new Date() }, { transaction });
 }

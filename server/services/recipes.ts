@@ -123,7 +123,6 @@ async function writeVersion(actor: Actor, recipe: Recipe, input: SaveVersionInpu
       content,
       ...figures(computed, content),
       frozenAt: null,
-      lastUsedAt: null,
     },
     { transaction },
   );
