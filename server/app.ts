@@ -37,7 +37,8 @@ export function createApp(options: { serveClient?: boolean; logger?: Logger } = 
   app.use(
     pinoHttp({
       logger: options.logger ?? logger,
-      customSuccessMessage: (req, res, responseTime) => `${req.method} ${req.url} ${res.statusCode} ${Math.round(responseTime)} ms`,
+      // The whole path: by the time a response finishes, a mounted router may have cut req.url down to its own part.
+      customSuccessMessage: (req, res, responseTime) => `${req.method} ${(req as express.Request).originalUrl ?? req.url} ${res.statusCode} ${Math.round(responseTime)} ms`,
       genReqId: (_req, res) => {
         const id = randomUUID();
         res.setHeader('x-request-id', id);
