@@ -9,7 +9,7 @@ import { useLogCellarEntry } from '../api/log-cellar-entry';
 import { useVessels } from '../api/vessels';
 
 import { optionalNumber } from './form-values';
-import { useSubmitOnce } from './submit-once';
+import { useSubmitOnce } from '../../../lib/use-submit-once';
 const ACTIONS_HERE = CELLAR_ACTIONS.filter((a) => a !== 'carbonation'); // carbonation is set from its own panel
 
 /** Logs D-rest, cold crash, dry hop, fining or a transfer as a signed entry through the outbox. */

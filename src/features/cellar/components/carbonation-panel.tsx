@@ -6,7 +6,7 @@ import type { UnitSystem } from '../../../../shared/schemas/auth';
 import { UNITS } from '../../../lib/units';
 import { useCarbonation } from '../api/carbonation';
 import { useLogCellarEntry } from '../api/log-cellar-entry';
-import { useSubmitOnce } from './submit-once';
+import { useSubmitOnce } from '../../../lib/use-submit-once';
 import { optionalNumber } from './form-values';
 
 const pressure = (system: UnitSystem, kpa: number) => (system === 'us' ? `${kpaToPsi(kpa).toFixed(1)} psi` : `${kpa.toFixed(0)} kPa`);

@@ -6,7 +6,7 @@ import { KEG_SIZE_IDS, lToUsBbl } from '../../../../shared/brewing';
 import { KEG_SIZE_LABELS, packageName, packagingEntrySchema, type BatchCellarView, type PackagingEntryInput } from '../../../../shared/schemas/cellar';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
 import { useLogCellarEntry } from '../api/log-cellar-entry';
-import { useSubmitOnce } from './submit-once';
+import { useSubmitOnce } from '../../../lib/use-submit-once';
 
 const CONTAINER_SIZES_ML = [355, 473, 500, 330, 750];
 

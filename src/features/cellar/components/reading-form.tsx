@@ -8,7 +8,7 @@ import { UNITS } from '../../../lib/units';
 import { useLogCellarEntry } from '../api/log-cellar-entry';
 
 import { optionalNumber } from './form-values';
-import { useSubmitOnce } from './submit-once';
+import { useSubmitOnce } from '../../../lib/use-submit-once';
 const UNIT_LABEL = { sg: 'SG', plato: '°P', brix: '°Bx' } as const;
 
 /** The last values, so a routine reading is one number and one tap. */

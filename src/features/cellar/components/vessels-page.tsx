@@ -11,7 +11,7 @@ import { showVolume } from '../../../lib/units';
 import { useSaveVessel, useVessels } from '../api/vessels';
 import { useDeleteVessel, useMarkClean } from '../api/vessel-state';
 import { FormBanner } from '../../../components/ui/form-banner';
-import { useSubmitOnce } from './submit-once';
+import { useSubmitOnce } from '../../../lib/use-submit-once';
 import { optionalNumber } from './form-values';
 
 function VesselForm({ vessel, onDone }: { vessel?: VesselView; onDone: () => void }) {
