@@ -68,3 +68,15 @@ export const qtPerLbToLPerKg = (r: number): number => r * L_PER_KG_PER_QT_PER_LB
 export const lPerKgToQtPerLb = (r: number): number => r / L_PER_KG_PER_QT_PER_LB;
 /** Absorption in US gal/lb → L/kg. */
 export const galPerLbToLPerKg = (r: number): number => (r * L_PER_US_GAL) / KG_PER_LB;
+
+/**
+ * A batch or tank volume as a brewer says it: gallons below 2 bbl, barrels above (US); litres below
+ * 200 L, hectolitres above (metric). For screens and for the API's messages alike.
+ */
+export function showVolume(system: 'us' | 'metric', litres: number): string {
+  if (system === 'us') {
+    const bbl = lToUsBbl(litres);
+    return bbl >= 2 ? `${bbl.toFixed(1)} bbl` : `${lToUsGal(litres).toFixed(1)} gal`;
+  }
+  return litres >= 200 ? `${(litres / 100).toFixed(1)} hL` : `${litres.toFixed(1)} L`;
+}

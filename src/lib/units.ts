@@ -2,8 +2,11 @@
  * Display helpers: SI values (as stored) shown in the brewery's unit system.
  * Conversions come from shared/brewing; this file only chooses units and formats.
  */
-import { cToF, fToC, kgToLb, lbToKg, lToUsGal, usGalToL, gToOz, ozToG, lToUsBbl, lPerKgToQtPerLb, qtPerLbToLPerKg, roundForMeasuring, type MeasuredAmount } from '../../shared/brewing';
+import { cToF, fToC, kgToLb, lbToKg, lToUsGal, usGalToL, gToOz, ozToG, lPerKgToQtPerLb, qtPerLbToLPerKg, roundForMeasuring, type MeasuredAmount } from '../../shared/brewing';
 import type { UnitSystem } from '../../shared/schemas/auth';
+
+// A batch or tank volume in words is shared with the server's messages (fermenter size).
+export { showVolume } from '../../shared/brewing';
 
 /** What a stored SI number measures; `lPerKg` is water per grain (mash thickness, grain absorption). */
 export type Quantity = 'weightKg' | 'weightG' | 'tempC' | 'volumeL' | 'lPerKg';
@@ -51,15 +54,6 @@ export function limitInUnits(message: string, system: UnitSystem, quantity: Quan
 export function show(system: UnitSystem, quantity: Quantity, si: number, decimals?: number): string {
   const u = UNITS[system][quantity];
   return `${u.toDisplay(si).toFixed(decimals ?? u.decimals)} ${u.unit}`;
-}
-
-/** A batch volume: gallons below 2 bbl, barrels above (US); litres or hectolitres (metric). */
-export function showVolume(system: UnitSystem, litres: number): string {
-  if (system === 'us') {
-    const bbl = lToUsBbl(litres);
-    return bbl >= 2 ? `${bbl.toFixed(1)} bbl` : `${lToUsGal(litres).toFixed(1)} gal`;
-  }
-  return litres >= 200 ? `${(litres / 100).toFixed(1)} hL` : `${litres.toFixed(1)} L`;
 }
 
 /** A rounded, measurable amount, e.g. "186 lb" or "62 tsp". */

@@ -3,7 +3,6 @@ import { Bar, BarChart, CartesianGrid, Legend, Line, LineChart, ResponsiveContai
 import { EmptyState, ErrorState, Loading, PageHeader, SelectField, Table, Td, Th } from '../../../components/ui';
 import { useRecipeList } from '../../recipes/api/list-recipes';
 import { useBatchHistory } from '../api/history';
-// Round, evenly spaced axis ticks; belongs in src/lib once that folder's owner takes it (see the cellar change).
 import { niceAxis } from '../../../lib/chart-ticks';
 
 const sg = (v: number | null) => (v === null ? '–' : v.toFixed(3));
