@@ -31,5 +31,5 @@ export const up: Migration = async ({ context: qi }) => {
 
 export const down: Migration = async ({ context: qi }) => {
   await qi.sequelize.query('DROP TRIGGER IF EXISTS batch_log_entries_after_insert', { type: QueryTypes.RAW });
-  await qi.removeColumn('batch_log_entries', 'request_hash');
+  await qi.sequelize.query('ALTER TABLE batch_log_entries DROP COLUMN request_hash');
 };

@@ -13,6 +13,6 @@ export const up: Migration = async ({ context: qi }) => {
 };
 
 export const down: Migration = async ({ context: qi }) => {
-  await qi.removeColumn('batches', 'planned_knockout_l');
-  await qi.removeColumn('batches', 'planned_efficiency');
+  await qi.sequelize.query('ALTER TABLE batches DROP COLUMN planned_knockout_l');
+  await qi.sequelize.query('ALTER TABLE batches DROP COLUMN planned_efficiency');
 };

@@ -10,7 +10,10 @@ export const up: Migration = async ({ context: qi }) => {
   await qi.addIndex('gravity_readings', ['reading_entry_id', 'id'], { name: 'gravity_readings_reading_entry' });
 };
 
+// Back to one row per reading: the rows corrections added go (their log entries stay in the signed log),
+// or each corrected reading would count twice once nothing tells the rows apart.
 export const down: Migration = async ({ context: qi }) => {
+  await qi.sequelize.query('DELETE FROM gravity_readings WHERE log_entry_id <> reading_entry_id');
   await qi.removeIndex('gravity_readings', 'gravity_readings_reading_entry');
-  await qi.removeColumn('gravity_readings', 'reading_entry_id');
+  await qi.sequelize.query('ALTER TABLE gravity_readings DROP COLUMN reading_entry_id');
 };

@@ -12,5 +12,5 @@ export const up: Migration = async ({ context: qi }) => {
 export const down: Migration = async ({ context: qi }) => {
   await qi.addIndex('batches', ['brewery_id', 'status', 'updated_at'], { name: 'batches_brewery_status_updated' });
   await qi.removeIndex('batches', 'batches_brewery_status_dumped');
-  await qi.removeColumn('batches', 'dumped_at');
+  await qi.sequelize.query('ALTER TABLE batches DROP COLUMN dumped_at');
 };

@@ -12,5 +12,5 @@ export const down: Migration = async ({ context: qi }) => {
   await qi.sequelize.query("DELETE a FROM alerts a JOIN alerts b ON b.batch_id = a.batch_id AND b.kind = a.kind AND b.id < a.id");
   await qi.addIndex('alerts', ['batch_id', 'kind'], { unique: true, name: 'alerts_batch_kind_unique' });
   await qi.removeIndex('alerts', 'alerts_batch_kind_occasion_unique');
-  await qi.removeColumn('alerts', 'occasion');
+  await qi.sequelize.query('ALTER TABLE alerts DROP COLUMN occasion');
 };
