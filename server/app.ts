@@ -27,6 +27,9 @@ passport.use(
   }),
 );
 
+/** A path as the logs keep it: the secret of a reset or invitation link is never written down. */
+const loggedPath = (path: string) => path.replace(/\/(reset|invites)\/[^/?]+/, '/$1/…');
+
 /** `logger` is where request logs and errors go (default: the process's logger, server/logger.ts). */
 export function createApp(options: { serveClient?: boolean; logger?: Logger } = {}): Express {
   const app = express();
@@ -38,7 +41,7 @@ export function createApp(options: { serveClient?: boolean; logger?: Logger } = 
     pinoHttp({
       logger: options.logger ?? logger,
       // The whole path: by the time a response finishes, a mounted router may have cut req.url down to its own part.
-      customSuccessMessage: (req, res, responseTime) => `${req.method} ${(req as express.Request).originalUrl ?? req.url} ${res.statusCode} ${Math.round(responseTime)} ms`,
+      customSuccessMessage: (req, res, responseTime) => `${req.method} ${loggedPath((req as express.Request).originalUrl ?? req.url ?? '')} ${res.statusCode} ${Math.round(responseTime)} ms`,
       genReqId: (_req, res) => {
         const id = randomUUID();
         res.setHeader('x-request-id', id);
@@ -47,7 +50,7 @@ export function createApp(options: { serveClient?: boolean; logger?: Logger } = 
       autoLogging: env.NODE_ENV !== 'test',
       // What a request line records: never its headers (they carry the session cookie), and cheap to build.
       serializers: {
-        req: (req: { id: string; method: string; url: string; remoteAddress: string }) => ({ id: req.id, method: req.method, url: req.url, remoteAddress: req.remoteAddress }),
+        req: (req: { id: string; method: string; url: string; remoteAddress: string }) => ({ id: req.id, method: req.method, url: loggedPath(req.url), remoteAddress: req.remoteAddress }),
         res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
       },
     }),
