@@ -66,7 +66,8 @@ self.addEventListener('fetch', (event) => {
     // Every page is the same single-page shell.
     event.respondWith(networkFirst(request, SHELL, '/'));
   } else if (url.pathname.startsWith('/api/')) {
-    if (url.pathname === '/api/health' || url.pathname.startsWith('/api/dev/')) return;
+    // Files (photos, lab sheets up to 15 MB) are not kept: only the answers a screen needs to open offline.
+    if (url.pathname === '/api/health' || url.pathname.startsWith('/api/dev/') || url.pathname.startsWith('/api/attachments/')) return;
     event.respondWith(networkFirst(request, API));
   } else {
     event.respondWith(cacheFirst(request));

@@ -1,5 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api, ApiError } from '../../../lib/api-client';
+import { forgetOfflineAnswers } from '../../../lib/service-worker';
 import type { Me } from '../../../../shared/schemas/auth';
 
 export const authKeys = {
@@ -15,7 +16,11 @@ export const meQuery = () =>
       try {
         return await api.get<Me>('/api/auth/me');
       } catch (error) {
-        if (error instanceof ApiError && error.status === 401) return null;
+        if (error instanceof ApiError && error.status === 401) {
+          // Signed out by expiry or by a head brewer: nothing of that person's stays on a shared tablet.
+          await forgetOfflineAnswers();
+          return null;
+        }
         throw error;
       }
     },
