@@ -4,6 +4,7 @@ import { defineRouter, actor } from './define';
 import { BREWING_ROLES } from '../../shared/schemas/roles';
 import { idParam } from '../../shared/schemas/taproom';
 import * as attachments from '../services/attachments';
+import { recordAudit } from '../services/audit';
 
 const batchParams = z.strictObject({ batchId: idParam });
 const attachmentParams = z.strictObject({ attachmentId: idParam });
@@ -51,6 +52,7 @@ export const attachmentsRouter = defineRouter('/api/attachments', [
     params: attachmentParams,
     handler: async (req, res) => {
       await attachments.removeAttachment(actor(req), Number(req.params.attachmentId));
+      await recordAudit(req, 'attachment.remove', { attachmentId: Number(req.params.attachmentId) });
       res.status(204).end();
     },
   },

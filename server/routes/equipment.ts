@@ -3,6 +3,7 @@ import { equipmentSchema, idParam } from '../../shared/schemas/recipes';
 import { BREWING_ROLES } from '../../shared/schemas/roles';
 import { defineRouter, actor } from './define';
 import * as equipment from '../services/equipment';
+import { recordAudit } from '../services/audit';
 
 const params = z.strictObject({ equipmentId: idParam });
 
@@ -41,6 +42,7 @@ export const equipmentRouter = defineRouter('/api/equipment', [
     params,
     handler: async (req, res) => {
       await equipment.deleteEquipment(actor(req).breweryId, Number(req.params.equipmentId));
+      await recordAudit(req, 'equipment.remove', { equipmentId: Number(req.params.equipmentId) });
       res.status(204).end();
     },
   },

@@ -3,6 +3,7 @@ import { idParam, ingredientQuerySchema, ingredientSchema } from '../../shared/s
 import { BREWING_ROLES } from '../../shared/schemas/roles';
 import { defineRouter, actor } from './define';
 import * as ingredients from '../services/ingredients';
+import { recordAudit } from '../services/audit';
 
 const params = z.strictObject({ ingredientId: idParam });
 
@@ -43,6 +44,7 @@ export const ingredientsRouter = defineRouter('/api/ingredients', [
     params,
     handler: async (req, res) => {
       await ingredients.deleteIngredient(actor(req).breweryId, Number(req.params.ingredientId));
+      await recordAudit(req, 'ingredient.remove', { ingredientId: Number(req.params.ingredientId) });
       res.status(204).end();
     },
   },

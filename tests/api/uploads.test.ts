@@ -4,7 +4,7 @@ import { randomUUID } from 'node:crypto';
 import { beforeAll, describe, expect, it } from 'vitest';
 import sharp from 'sharp';
 import { HeadObjectCommand, S3Client } from '@aws-sdk/client-s3';
-import { Attachment } from '../../server/models';
+import { Attachment, AuditEvent } from '../../server/models';
 import { createTestBrewery, type TestBrewery } from './helpers';
 import { plannedBatch } from './batch-fixtures';
 import { SHEET, TASTING_CONTENT } from './taproom-fixtures';
@@ -134,6 +134,8 @@ describe('removing a file', () => {
     expect((await t.as.head_brewer.get(`/api/batches/${batch.id}/attachments`)).body.map((a: { id: number }) => a.id)).not.toContain(res.body.id);
     expect((await t.as.head_brewer.get(`/api/attachments/${res.body.id}/file`)).status).toBe(404);
     await expect(s3().send(new HeadObjectCommand({ Bucket: process.env.S3_BUCKET, Key: row!.storageKey }))).rejects.toMatchObject({ name: 'NotFound' });
+    const audit = await AuditEvent.findOne({ where: { action: 'attachment.remove', userId: t.users.head_brewer.id }, order: [['id', 'DESC']] });
+    expect(audit?.detail).toEqual({ attachmentId: res.body.id });
   });
 
   it("keeps a tasting note's file and the release sheet's photo (409)", async () => {
