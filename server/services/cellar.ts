@@ -21,7 +21,7 @@ import {
   usBblToL,
   type CarbonationSetting,
 } from '../../shared/brewing';
-import { formatGaugePressure, type CarbonationUnits } from '../../shared/brewing/carbonation';
+import { formatGaugePressure, type CarbonationUnits } from '../../shared/brewing';
 import type { WriteMeta } from '../../shared/schemas/batch-log';
 import type { FrozenPlan } from '../../shared/schemas/batches';
 import {

@@ -85,7 +85,9 @@ export {
   residualCo2Volumes,
   primingSugar,
   carbonationSetting,
+  formatGaugePressure,
   type CarbonationSetting,
+  type CarbonationUnits,
   MOLAR_VOLUME_L,
   CO2_G_PER_L_PER_VOLUME,
   CO2_YIELD_G_PER_G,
@@ -107,10 +109,7 @@ export {
   type PracticalEquivalent,
   convertPractical,
   roundForMeasuring,
-  MEASURING_TOLERANCE,
   TYPICAL_SUGAR_PCT,
-  adjunctSugar,
-  type AdjunctSugar,
 } from './adjuncts';
 export { computeRecipe, planWort, resolveGrainBill, hopWeightsForIbuShares, type WortPlan } from './recipe';
 export { scaleRecipe } from './scaling';

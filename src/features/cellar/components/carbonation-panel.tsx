@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { Button, Caution, TextField } from '../../../components/ui';
-import { kpaToPsi } from '../../../../shared/brewing';
+import { formatGaugePressure } from '../../../../shared/brewing';
 import type { CellarPlanView, VesselView } from '../../../../shared/schemas/cellar';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
 import { UNITS } from '../../../lib/units';
@@ -9,7 +9,7 @@ import { useLogCellarEntry } from '../api/log-cellar-entry';
 import { useSubmitOnce } from '../../../lib/use-submit-once';
 import { optionalNumber } from './form-values';
 
-const pressure = (system: UnitSystem, kpa: number) => (system === 'us' ? `${kpaToPsi(kpa).toFixed(1)} psi` : `${kpa.toFixed(0)} kPa`);
+const pressure = (system: UnitSystem, kpa: number) => formatGaugePressure(kpa, system);
 
 /** The head pressure to set for a CO2 target, never above the vessel's rated working pressure. */
 export function CarbonationPanel({ batchId, vessel, plan, unitSystem }: { batchId: number; vessel: VesselView; plan: CellarPlanView; unitSystem: UnitSystem }) {

@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 import { useParams } from 'react-router-dom';
-import { BrewingInputError, headPressureKpa, kpaToPsi, sgFromPoints, gravityPoints, doseUnitLabel, roundForMeasuring } from '../../../../shared/brewing';
+import { BrewingInputError, formatGaugePressure, headPressureKpa, sgFromPoints, gravityPoints, doseUnitLabel, roundForMeasuring } from '../../../../shared/brewing';
 import { SALT_LABELS } from '../../../../shared/schemas/recipes';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
 import { Button, Caution, ErrorState, LinkButton, Loading } from '../../../components/ui';
@@ -51,8 +51,7 @@ function Grid({ head, rows }: { head: string[]; rows: ReactNode[][] }) {
 
 function headPressure(system: UnitSystem, tempC: number, volumes: number): string {
   try {
-    const kpa = headPressureKpa(tempC, volumes);
-    return system === 'us' ? `${kpaToPsi(kpa).toFixed(1)} psi` : `${kpa.toFixed(0)} kPa`;
+    return formatGaugePressure(headPressureKpa(tempC, volumes), system);
   } catch (error) {
     if (error instanceof BrewingInputError) return error.message;
     throw error;
