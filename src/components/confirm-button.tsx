@@ -1,5 +1,6 @@
 import { useState } from 'react';
 import { Button } from './ui';
+import { useSubmitOnce } from '../lib/use-submit-once';
 
 interface Props {
   /** The first tap's label, which only asks: "Remove…", "Block access…". */
@@ -15,7 +16,7 @@ interface Props {
 /** An action that is hard to undo or easy to mis-tap on a tablet: the first tap asks, the second acts, Cancel steps back. */
 export function ConfirmButton({ ask, confirm, act, onDone, onRefused }: Props) {
   const [asking, setAsking] = useState(false);
-  const [busy, setBusy] = useState(false);
+  const { once, busy } = useSubmitOnce();
   if (!asking) {
     return (
       <Button variant="quiet" onClick={() => setAsking(true)}>
@@ -28,18 +29,16 @@ export function ConfirmButton({ ask, confirm, act, onDone, onRefused }: Props) {
       <Button
         variant="danger"
         busy={busy}
-        onClick={async () => {
-          setBusy(true);
+        onClick={once(async () => {
           try {
             await act();
             onDone?.();
           } catch (error) {
             onRefused(error);
           } finally {
-            setBusy(false);
             setAsking(false);
           }
-        }}
+        })}
       >
         {confirm}
       </Button>
