@@ -39,9 +39,9 @@ export interface BrewDayStep {
  * Sparge water temperature when the plan gives none: about 168–170 °F (76–77 °C), hot enough to keep the
  * grain bed fluid without extracting tannins. Common practice, no source.
  */
-export const SPARGE_WATER_C = 77;
+const SPARGE_WATER_C = 77;
 /** Mash out: raise the mash to about 168 °F (76 °C) to stop the enzymes (DOMAIN.md; common practice, no source). */
-export const MASH_OUT_C = 76;
+const MASH_OUT_C = 76;
 /** A mash step at or above this is the mash out. Common practice, no source. */
 const MASH_OUT_FROM_C = 75;
 
@@ -50,7 +50,7 @@ const MASH_OUT_FROM_C = 75;
  * (a warning, never a refusal): 3 °C (about 5 °F), 10 % of a volume, 8 gravity points, 0.3 pH.
  * Common practice, no source: wide enough for a normal brew day, narrow enough to catch a slipped digit.
  */
-export const EXPECTED_TOLERANCE: Record<MeasureKey, { absolute?: number; relative?: number }> = {
+const EXPECTED_TOLERANCE: Record<MeasureKey, { absolute?: number; relative?: number }> = {
   tempC: { absolute: 3 },
   volumeL: { relative: 0.1 },
   gravitySg: { absolute: 0.008 },

@@ -82,7 +82,7 @@ const GRAVITY_MAX = { sg: 1.2, plato: 35, brix: 40 } as const;
  * The message for a gravity outside its unit's range, in that unit, or null. A specific gravity typed
  * as points ("1015", "15" for 1.015) is met with the reading it probably meant.
  */
-export function gravityOutOfRange(gravity: number, unit: GravityUnit): string | null {
+function gravityOutOfRange(gravity: number, unit: GravityUnit): string | null {
   if (unit !== 'sg') return gravity > GRAVITY_MAX[unit] ? `Gravity must be at most ${GRAVITY_MAX[unit]} ${unit === 'plato' ? '°P' : '°Bx'}` : null;
   if (gravity >= 0.98 && gravity <= GRAVITY_MAX.sg) return null;
   const meant = gravity >= 980 && gravity <= 1200 ? gravity / 1000 : null;

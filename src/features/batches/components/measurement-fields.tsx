@@ -29,7 +29,7 @@ export function expectedText(key: MeasureKey, si: number, system: UnitSystem, gr
 }
 
 /** A limit of the shared schema (SI) as the field shows it, e.g. 110 °C as "230 °F" for a US brewery. */
-export function limitText(key: MeasureKey, si: number, system: UnitSystem, gravity: GravityUnit): string {
+function limitText(key: MeasureKey, si: number, system: UnitSystem, gravity: GravityUnit): string {
   if (key === 'gravitySg') return gravity === 'plato' ? `${Number(sgToPlato(si).toFixed(1))} °P` : `${si.toFixed(3)} SG`;
   if (key === 'ph') return String(si);
   const u = UNITS[system][key];
@@ -37,7 +37,7 @@ export function limitText(key: MeasureKey, si: number, system: UnitSystem, gravi
 }
 
 /** The shared schema's limit a measurement (SI) breaks, said in the units the field shows; null when within. */
-export function limitProblem(key: MeasureKey, si: number, system: UnitSystem, gravity: GravityUnit): string | null {
+function limitProblem(key: MeasureKey, si: number, system: UnitSystem, gravity: GravityUnit): string | null {
   const { min, max } = MEASUREMENT_LIMITS[key];
   if (si > max) return `${NAMES[key]} must be at most ${limitText(key, max, system, gravity)}`;
   if (si < min) return `${NAMES[key]} must be at least ${limitText(key, min, system, gravity)}`;
