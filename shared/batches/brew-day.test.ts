@@ -55,6 +55,7 @@ describe('what each step asks for, from the frozen plan', () => {
 
   it('gives each rest its time and infusion water, and a mash out when the recipe has none', () => {
     const s = byKey(plan);
+    // The example recipe's mash: saccharification 60 min, mash out 10 min with 95 °C infusion water (example-recipes.ts).
     expect(s.get('mash-in')!.holdMinutes).toBe(60);
     const out = s.get('mash-rest-2')!;
     expect(out.label).toBe('Mash out');

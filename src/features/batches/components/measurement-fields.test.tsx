@@ -43,7 +43,7 @@ describe('measurement fields', () => {
     const props = { asks: ['tempC' as const], expected: { tempC: 74 }, onChange: () => undefined, system: 'us' as const, gravity: 'sg' as const, onGravityUnit: () => undefined };
     const { rerender } = render(<MeasurementFields {...props} typed={{ tempC: '165.5' }} />);
     expect(screen.queryByText(/Far from the expected/)).toBeNull();
-    // 74 °C = 165.2 °F; 146.5 °F is about 10 °C below, past the 3 °C the screen lets pass without a word (common practice, no source).
+    // 74 °C = 165.2 °F (t/°F = 1.8 t/°C + 32, NIST SP 811 B.9); 146.5 °F is about 10 °C below, past the 3 °C the screen lets pass without a word (common practice, no source).
     rerender(<MeasurementFields {...props} typed={{ tempC: '146.5' }} />);
     expect(screen.getByText(/Far from the expected/).textContent).toBe('Far from the expected 165.2 °F: check it before marking done.');
     expect(toMeasurements({ tempC: '146.5' }, 'us', 'sg').error).toBeUndefined();

@@ -83,7 +83,7 @@ describe('packaging summary', () => {
   const run = { logEntryId: 1, packagedAt: '2026-12-01T10:00:00Z', lines: [{ kind: 'keg' as const, size: 'half_bbl', count: 5 }], packagedL: 293.2, authorName: 'A' };
 
   it('after a part run shows what is packaged so far and what is still in the tank, not losses', () => {
-    // 10.14 bbl knocked out, 2.50 bbl (five ½ bbl kegs) packaged: 7.64 bbl still in the tank.
+    // 1,189.5 L = 10.14 bbl knocked out, 293.2 L = 2.50 bbl packaged: 7.64 bbl still in the tank (1 US bbl = 117.348 L, 27 CFR 25.11).
     render(<PackagingForm batchId={1} packaging={{ runs: [run], knockoutL: 1189.5, packagedL: 293.2, complete: false, notPackagedL: 896.3, lossL: null, lossFraction: null }} unitSystem="us" />);
     const dl = screen.getByLabelText('Packaged volume');
     expect(dl.textContent).toContain('Packaged so far2.50 bbl');
@@ -93,6 +93,7 @@ describe('packaging summary', () => {
 
   it('once the batch is packaged shows the losses', () => {
     render(<PackagingForm batchId={1} packaging={{ runs: [run], knockoutL: 1189.5, packagedL: 1100, complete: true, notPackagedL: 0, lossL: 89.5, lossFraction: 89.5 / 1189.5 }} unitSystem="us" />);
+    // 89.5 L = 0.76 bbl (27 CFR 25.11), 89.5 / 1,189.5 = 7.5 % (arithmetic).
     expect(screen.getByLabelText('Packaged volume').textContent).toContain('Losses0.76 bbl (7.5 %)');
   });
 });

@@ -16,8 +16,8 @@ describe('cellar plan', () => {
     expect(container.firstElementChild!.firstElementChild!.textContent).toMatch(/^Read only: a head brewer changes the plan/);
     const text = screen.getByLabelText('Cellar plan').textContent;
     expect(text).toContain('Planned FG1.012');
-    expect(text).toContain('Primary66.2 °F'); // 19 °C = 66.2 °F
-    expect(text).toContain('starts at 1.015');
+    expect(text).toContain('Primary66.2 °F'); // 19 °C = 66.2 °F (t/°F = 1.8 t/°C + 32, NIST SP 811 B.9)
+    expect(text).toContain('starts at 1.015'); // FG 1.012 + the 3-point D-rest default (common practice, no source)
   });
 
   it('gives the head brewer fields and a save button', () => {

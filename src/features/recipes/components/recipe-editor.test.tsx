@@ -73,7 +73,8 @@ describe('recipe editor', () => {
     fireEvent.blur(thickness);
     expect((thickness as HTMLInputElement).value).toBe('1.5');
 
-    // The schema allows rests up to 80 °C, which is 176 °F.
+    // The schema allows rests up to 80 °C, which is 176 °F (t/°F = 1.8 t/°C + 32, NIST SP 811 B.9);
+    // and mash thickness from 1.5 L/kg, which is 0.72 qt/lb (1 qt = 0.946353 L, 1 lb = 0.45359237 kg, NIST Handbook 44).
     const rest = within(screen.getByRole('group', { name: 'Mash-in rest' })).getByLabelText('Rest (°F)');
     fireEvent.change(rest, { target: { value: '190' } });
     expect(await screen.findByText('Rest temperature must be at most 176 °F')).toBeTruthy();
