@@ -4,6 +4,8 @@ import { useController, useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Button, Card, Caution, Dialog, ErrorState, Loading, PageHeader, SelectField, Stat, TextAreaField, TextField, useToast } from '../../../components/ui';
 import { useCurrentUser } from '../../../app/current-user';
+import { showTime } from '../../../lib/time';
+import { FormBanner } from '../../../components/ui/form-banner';
 import { ConfirmButton } from '../../../components/confirm-button';
 import { applyServerErrors } from '../../../lib/forms';
 import { show } from '../../../lib/units';
@@ -79,11 +81,7 @@ function SheetForm({ batchId, detail }: { batchId: number; detail: ReleaseDetail
         <h2 className="text-lg font-bold text-ink-900">Release sheet</h2>
         {!mayRelease && <p className="rounded-lg bg-mist-100 p-3 text-ink-700">Read only: a head brewer writes and releases the sheet.</p>}
         <fieldset disabled={!mayRelease} className="space-y-4">
-        {banner && (
-          <p role="alert" className="rounded-lg bg-ember-100 p-3 font-medium text-ember-700">
-            {banner}
-          </p>
-        )}
+        <FormBanner message={banner} />
         <div className="grid gap-4 sm:grid-cols-2">
           <TextField label="Beer name" {...register('beerName')} error={errors.beerName?.message} />
           <TextField label="Style" {...register('style')} error={errors.style?.message} />
@@ -159,13 +157,10 @@ function SheetForm({ batchId, detail }: { batchId: number; detail: ReleaseDetail
   );
 }
 
-/** " on 2 Dec 2026, 14:05 GMT" in the brewery's time zone, or nothing without a time. */
+/** " on Dec 2, 2026, 14:05 AST" in the brewery's time zone, or nothing without a time. */
 function useStamp() {
-  const me = useCurrentUser();
-  const format = new Intl.DateTimeFormat('en-GB', {
-    day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit', timeZone: me.brewery.timeZone, timeZoneName: 'short',
-  });
-  return (iso: string | null) => (iso ? ` on ${format.format(new Date(iso))}` : '');
+  const { timeZone } = useCurrentUser().brewery;
+  return (iso: string | null) => (iso ? ` on ${showTime(iso, timeZone, true)}` : '');
 }
 
 /** A released beer: who released it and when, and taking it off tap when it runs out (or back on). */
@@ -177,11 +172,7 @@ function TapState({ batchId, detail }: { batchId: number; detail: ReleaseDetail 
   const name = detail.sheet?.beerName ?? detail.batch.beerName;
   const released = `released by ${detail.releasedBy ?? 'the head brewer'}${stamp(detail.releasedAt)}`;
   const refused = (error: unknown) => setProblem(error instanceof Error ? error.message : 'That did not go through. Try again.');
-  const alert = problem && (
-    <p role="alert" className="rounded-lg bg-ember-100 p-3 font-medium text-ember-700">
-      {problem}
-    </p>
-  );
+  const alert = <FormBanner message={problem} />;
 
   if (detail.state === 'on_tap') {
     return (
@@ -294,11 +285,9 @@ function ReleaseNumbers({ batchId, detail, sheetSaved }: { batchId: number; deta
           OG <strong>{sg(n.og)}</strong>, FG <strong>{sg(n.fg)}</strong>, ABV <strong>{n.abvPct?.toFixed(1)} %</strong>, {n.ibu.toFixed(0)} IBU. The batch
           moves to released and the beer appears on the taproom’s tap list.
         </p>
-        {problem && (
-          <p role="alert" className="mt-3 rounded-lg bg-ember-100 p-3 font-medium text-ember-700">
-            {problem}
-          </p>
-        )}
+        <div className="mt-3">
+          <FormBanner message={problem} />
+        </div>
         <div className="mt-4 flex justify-end gap-2">
           <Button variant="secondary" onClick={() => setConfirming(false)}>
             Not yet
