@@ -93,16 +93,18 @@ export function LiveNumbersPanel({ live, system }: { live: LiveNumbers; system: 
       {live.problem && <p className="rounded-lg bg-sky-100 p-3 text-sm text-sky-700">{live.problem}</p>}
       {live.leftOut && <p className="rounded-lg bg-sky-100 p-3 text-sm text-sky-700">Leaving out {live.leftOut.join(', ')} until {live.leftOut.length > 1 ? 'they are' : 'it is'} filled in.</p>}
       <div className="grid grid-cols-2 gap-2">
-        <Figure label="OG">{c ? c.og.toFixed(3) : '—'}</Figure>
-        <Figure label="FG">{c ? c.fg.toFixed(3) : '—'}</Figure>
-        <Figure label="ABV">{c ? `${c.abvPct.toFixed(1)} %` : '—'}</Figure>
-        <Figure label="IBU">{c ? c.ibu.toFixed(1) : '—'}</Figure>
-        <Figure label="SRM">
-          <span className="flex items-center gap-2">
-            {c && <span aria-hidden className="inline-block h-6 w-6 rounded-full border border-ink-300" style={{ backgroundColor: c.colourHex }} />}
-            {c ? c.srm.toFixed(1) : '—'}
-          </span>
-        </Figure>
+        {bigFigures(c).map(([label, value]) => (
+          <Figure key={label} label={label}>
+            {label === 'SRM' ? (
+              <span className="flex items-center gap-2">
+                {c && <span aria-hidden className="inline-block h-6 w-6 rounded-full border border-ink-300" style={{ backgroundColor: c.colourHex }} />}
+                {value}
+              </span>
+            ) : (
+              value
+            )}
+          </Figure>
+        ))}
         <Figure label="BU:GU">{c ? c.buGu.toFixed(2) : '—'}</Figure>
       </div>
       {c && (
@@ -152,19 +154,24 @@ export function LiveNumbersPanel({ live, system }: { live: LiveNumbers; system: 
   );
 }
 
+/** OG, FG, ABV, IBU and SRM as both the live panel and the editing bar show them (one rounding for both). */
+function bigFigures(c: LiveNumbers['computed']): [string, string][] {
+  return [
+    ['OG', c ? c.og.toFixed(3) : '—'],
+    ['FG', c ? c.fg.toFixed(3) : '—'],
+    ['ABV', c ? `${c.abvPct.toFixed(1)} %` : '—'],
+    ['IBU', c ? c.ibu.toFixed(1) : '—'],
+    ['SRM', c ? c.srm.toFixed(1) : '—'],
+  ];
+}
+
 /**
  * The big figures in a bar held at the foot of the screen while editing, below the width where the
  * live panel sits beside the form (on a portrait tablet the panel is thousands of pixels down).
  */
 export function NumbersBar({ live }: { live: LiveNumbers }) {
   const c = live.computed;
-  const figures: [string, string][] = [
-    ['OG', c ? c.og.toFixed(3) : '—'],
-    ['FG', c ? c.fg.toFixed(3) : '—'],
-    ['ABV', c ? `${c.abvPct.toFixed(1)} %` : '—'],
-    ['IBU', c ? c.ibu.toFixed(0) : '—'],
-    ['SRM', c ? c.srm.toFixed(0) : '—'],
-  ];
+  const figures = bigFigures(c);
   const notes = live.warnings.length + (live.problem ? 1 : 0);
   return (
     <section aria-label="Numbers while editing" className="sticky bottom-0 z-30 -mx-1 rounded-t-xl bg-cellar-800 px-4 py-2 text-white shadow-lg lg:hidden">
