@@ -9,7 +9,9 @@ function serviceWorker(): Plugin {
     name: 'kettlewright-service-worker',
     apply: 'build',
     generateBundle(_options, bundle) {
-      const files = Object.keys(bundle).filter((f) => /\.(js|css)$/.test(f)).map((f) => `/${f}`);
+      const files = Object.keys(bundle)
+        .filter((f) => /\.(js|css)$/.test(f))
+        .map((f) => `/${f}`);
       const source = readFileSync('src/sw.js', 'utf8').replace('self.__PRECACHE__', JSON.stringify(files));
       this.emitFile({ type: 'asset', fileName: 'sw.js', source });
     },

@@ -14,7 +14,13 @@ export interface DatabaseTarget {
 }
 
 /** Splits a mariadb:// URL into the client's options. */
-export function connectionParts(url: string): { host: string; port: string; user: string; password: string; database: string } {
+export function connectionParts(url: string): {
+  host: string;
+  port: string;
+  user: string;
+  password: string;
+  database: string;
+} {
   const u = new URL(url.replace(/^mysql:/, 'mariadb:'));
   return {
     host: u.hostname,
@@ -38,12 +44,18 @@ export async function runClient(
   const c = connectionParts(url);
   const dir = mkdtempSync(path.join(tmpdir(), 'kw-client-'));
   const optionFile = path.join(dir, 'client.cnf');
-  writeFileSync(optionFile, `[client]\nuser=${c.user}\npassword=${c.password}\nhost=${c.host}\nport=${c.port}\nprotocol=TCP\n`, { mode: 0o600 });
+  writeFileSync(
+    optionFile,
+    `[client]\nuser=${c.user}\npassword=${c.password}\nhost=${c.host}\nport=${c.port}\nprotocol=TCP\n`,
+    { mode: 0o600 },
+  );
   const stdin = io.stdinFile ? openSync(io.stdinFile, 'r') : 'ignore';
   const stdout = io.stdoutFile ? openSync(io.stdoutFile, 'w', 0o600) : 'inherit';
   try {
     await new Promise<void>((resolve, reject) => {
-      const child = spawn(program, [`--defaults-extra-file=${optionFile}`, ...args], { stdio: [stdin, stdout, 'pipe'] });
+      const child = spawn(program, [`--defaults-extra-file=${optionFile}`, ...args], {
+        stdio: [stdin, stdout, 'pipe'],
+      });
       let stderr = '';
       child.stderr!.on('data', (d: Buffer) => (stderr += d.toString()));
       child.on('error', reject);

@@ -32,5 +32,7 @@ export function benchScaling(iterations = ITERATIONS): { medianUs: number; itera
 
 if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) {
   const { medianUs, iterations } = benchScaling();
-  console.log(`brewing scaleRecipe pilot → 10 bbl: median ${medianUs.toFixed(1)} µs over ${iterations} iterations (target < 100 µs)`);
+  console.log(
+    `brewing scaleRecipe pilot → 10 bbl: median ${medianUs.toFixed(1)} µs over ${iterations} iterations (target < 100 µs)`,
+  );
 }

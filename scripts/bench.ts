@@ -15,7 +15,11 @@ import { ROOT } from './lib/paths';
 import { stopMariaDb } from './lib/mariadb-instance';
 import { prepareInstance, startApi } from './fault-harness';
 
-const BENCH_DATA = { dataDir: path.join(ROOT, '.data-bench'), port: Number(process.env.KW_BENCH_DB_PORT ?? 3310), database: 'kettlewright_bench' };
+const BENCH_DATA = {
+  dataDir: path.join(ROOT, '.data-bench'),
+  port: Number(process.env.KW_BENCH_DB_PORT ?? 3310),
+  database: 'kettlewright_bench',
+};
 const API_PORT = Number(process.env.KW_BENCH_API_PORT ?? 3191);
 const CEILING_PORT = API_PORT + 1;
 const DURATION_S = Number(process.env.KW_BENCH_SECONDS ?? 10);
@@ -31,8 +35,12 @@ async function serveCeiling(port: number, url: string) {
   const mariadb = await import('mariadb');
   const u = new URL(url);
   const pool = mariadb.createPool({
-    host: u.hostname, port: Number(u.port), user: decodeURIComponent(u.username), password: decodeURIComponent(u.password),
-    database: u.pathname.slice(1), connectionLimit: 10,
+    host: u.hostname,
+    port: Number(u.port),
+    user: decodeURIComponent(u.username),
+    password: decodeURIComponent(u.password),
+    database: u.pathname.slice(1),
+    connectionLimit: 10,
   });
   const app = express();
   app.get('/ceiling/:id', async (req, res) => {
@@ -66,7 +74,12 @@ interface Row {
   ceilingP99: number;
 }
 
-async function load(url: string, opts: { method?: 'GET' | 'POST'; headers?: Record<string, string>; body?: () => string; path: () => string }, seconds: number, connections = CONNECTIONS) {
+async function load(
+  url: string,
+  opts: { method?: 'GET' | 'POST'; headers?: Record<string, string>; body?: () => string; path: () => string },
+  seconds: number,
+  connections = CONNECTIONS,
+) {
   const headers = { ...opts.headers };
   const result = await autocannon({
     url,
@@ -92,10 +105,26 @@ async function load(url: string, opts: { method?: 'GET' | 'POST'; headers?: Reco
   return result;
 }
 
-async function measure(name: string, kind: Row['kind'], url: string, opts: Parameters<typeof load>[1], connections = CONNECTIONS): Promise<Row> {
+async function measure(
+  name: string,
+  kind: Row['kind'],
+  url: string,
+  opts: Parameters<typeof load>[1],
+  connections = CONNECTIONS,
+): Promise<Row> {
   await load(url, opts, WARM_UP_S, connections);
   const r = await load(url, opts, DURATION_S, connections);
-  return { name, kind, rps: r.requests.average, p50: r.latency.p50, p97_5: r.latency.p97_5, p99: r.latency.p99, non2xx: r.non2xx + r.errors, ceilingRps: r.requests.average, ceilingP99: r.latency.p99 };
+  return {
+    name,
+    kind,
+    rps: r.requests.average,
+    p50: r.latency.p50,
+    p97_5: r.latency.p97_5,
+    p99: r.latency.p99,
+    non2xx: r.non2xx + r.errors,
+    ceilingRps: r.requests.average,
+    ceilingP99: r.latency.p99,
+  };
 }
 
 function initialJsGzipKb(): number {
@@ -135,10 +164,16 @@ async function main() {
     console.log(`  ${JSON.stringify(seed.counts)} in ${seed.seconds.toFixed(1)} s`);
   }
 
-  const ceiling = spawn(process.execPath, ['--import', 'tsx', path.join(ROOT, 'scripts/bench.ts'), '--ceiling', String(CEILING_PORT), instance.appUrl], { stdio: ['ignore', 'pipe', 'inherit'] });
+  const ceiling = spawn(
+    process.execPath,
+    ['--import', 'tsx', path.join(ROOT, 'scripts/bench.ts'), '--ceiling', String(CEILING_PORT), instance.appUrl],
+    { stdio: ['ignore', 'pipe', 'inherit'] },
+  );
   let api: Awaited<ReturnType<typeof startApi>> | undefined;
   try {
-    await new Promise<void>((resolve) => createInterface({ input: ceiling.stdout! }).on('line', (l) => l.startsWith('READY') && resolve()));
+    await new Promise<void>((resolve) =>
+      createInterface({ input: ceiling.stdout! }).on('line', (l) => l.startsWith('READY') && resolve()),
+    );
     api = await startApi(env);
     await measureAll(api.url, seed, LARGE_PEOPLE.head_brewer.email, LARGE_PASSWORD);
   } finally {
@@ -164,13 +199,23 @@ async function measureAll(apiUrl: string, seed: LargeSeedShape, email: string, p
   const openBatches = seed.batchIds.slice(-8);
   const { recipeId, versionId } = seed.recipes[0]!;
   let n = 0;
-  const routes: { name: string; kind: Row['kind']; method?: 'GET' | 'POST'; path: () => string; body?: () => string }[] = [
+  const routes: {
+    name: string;
+    kind: Row['kind'];
+    method?: 'GET' | 'POST';
+    path: () => string;
+    body?: () => string;
+  }[] = [
     { name: 'Ceiling: Express + 1 PK SELECT', kind: 'ceiling', path: () => `/ceiling/${seed.breweryId}` },
     // The floor every signed-in route stands on: session, user, one small answer.
     { name: 'GET /api/auth/me (sign-in floor)', kind: 'read', path: () => '/api/auth/me' },
     { name: 'GET /api/batches (list, page 1)', kind: 'read', path: () => '/api/batches' },
     { name: 'GET /api/batches/:id/log (134 entries)', kind: 'read', path: () => `/api/batches/${oldBatch}/log` },
-    { name: 'GET /api/recipes/:id/versions/:v (computed)', kind: 'read', path: () => `/api/recipes/${recipeId}/versions/${versionId}` },
+    {
+      name: 'GET /api/recipes/:id/versions/:v (computed)',
+      kind: 'read',
+      path: () => `/api/recipes/${recipeId}/versions/${versionId}`,
+    },
     {
       name: 'POST /api/batches/:id/log (note, new key)',
       kind: 'write',
@@ -181,9 +226,21 @@ async function measureAll(apiUrl: string, seed: LargeSeedShape, email: string, p
   ];
   routes.push(
     // The seeded history ends in October 2026: the month a brewer files next, and one five years back.
-    { name: 'GET /api/reports/production?month=2026-10', kind: 'report', path: () => '/api/reports/production?month=2026-10' },
-    { name: 'GET /api/reports/production?month=2021-06', kind: 'report', path: () => '/api/reports/production?month=2021-06' },
-    { name: 'GET /api/reports/history?recipeId (60 of 500)', kind: 'report', path: () => `/api/reports/history?recipeId=${recipeId}` },
+    {
+      name: 'GET /api/reports/production?month=2026-10',
+      kind: 'report',
+      path: () => '/api/reports/production?month=2026-10',
+    },
+    {
+      name: 'GET /api/reports/production?month=2021-06',
+      kind: 'report',
+      path: () => '/api/reports/production?month=2021-06',
+    },
+    {
+      name: 'GET /api/reports/history?recipeId (60 of 500)',
+      kind: 'report',
+      path: () => `/api/reports/history?recipeId=${recipeId}`,
+    },
   );
 
   // SQL statements per request, counted in this process through the same app and Sequelize logging hook.
@@ -200,7 +257,14 @@ async function measureAll(apiUrl: string, seed: LargeSeedShape, email: string, p
       method: r.method ?? 'GET',
       headers: {
         ...headers,
-        ...(r.body ? { 'content-type': 'application/json', 'idempotency-key': randomUUID(), 'x-captured-at': new Date().toISOString(), 'x-device-id': 'bench-count' } : {}),
+        ...(r.body
+          ? {
+              'content-type': 'application/json',
+              'idempotency-key': randomUUID(),
+              'x-captured-at': new Date().toISOString(),
+              'x-device-id': 'bench-count',
+            }
+          : {}),
       },
       body: r.body?.(),
     });
@@ -217,7 +281,10 @@ async function measureAll(apiUrl: string, seed: LargeSeedShape, email: string, p
   const [ceilingRoute, ...appRoutes] = routes;
   for (const r of appRoutes) {
     process.stdout.write(`  measuring the ceiling, then ${r.name} ...\n`);
-    const ceilingRow = await measure(ceilingRoute!.name, 'ceiling', `http://127.0.0.1:${CEILING_PORT}`, { headers, path: ceilingRoute!.path });
+    const ceilingRow = await measure(ceilingRoute!.name, 'ceiling', `http://127.0.0.1:${CEILING_PORT}`, {
+      headers,
+      path: ceilingRoute!.path,
+    });
     const row = await measure(r.name, r.kind, apiUrl, { method: r.method, headers, path: r.path, body: r.body });
     rows.push({ ...row, queries: queries[r.name], ceilingRps: ceilingRow.rps, ceilingP99: ceilingRow.p99 });
   }
@@ -253,23 +320,35 @@ async function measureAll(apiUrl: string, seed: LargeSeedShape, email: string, p
   const machine = `${cpus().length} CPU (${cpus()[0]?.model.trim()}), ${(totalmem() / 2 ** 30).toFixed(0)} GB RAM, Node ${process.version}, MariaDB 10.11 (own instance), ${CONNECTIONS} connections, ${DURATION_S} s per route after ${WARM_UP_S} s warm-up, the ceiling measured the same way just before each route`;
   console.log(`\n${machine}\n`);
   console.log(lines.join('\n'));
-  console.log(`\nList and reports at ${STAFF_CONNECTIONS} connections (a brewery's staff at once), ${DURATION_S} s each after ${WARM_UP_S} s warm-up:\n`);
+  console.log(
+    `\nList and reports at ${STAFF_CONNECTIONS} connections (a brewery's staff at once), ${DURATION_S} s each after ${WARM_UP_S} s warm-up:\n`,
+  );
   console.log(
     [
       '| Route | req/s | p50 ms | p97.5 ms | p99 ms | target |',
       '|---|---:|---:|---:|---:|---|',
-      ...staffRows.map((r) => `| ${r.name} | ${r.rps.toFixed(0)} | ${r.p50} | ${r.p97_5} | ${r.p99} | ${r.p97_5 < 100 ? 'ok p97.5<100' : 'MISS p97.5'} |`),
+      ...staffRows.map(
+        (r) =>
+          `| ${r.name} | ${r.rps.toFixed(0)} | ${r.p50} | ${r.p97_5} | ${r.p99} | ${r.p97_5 < 100 ? 'ok p97.5<100' : 'MISS p97.5'} |`,
+      ),
     ].join('\n'),
   );
-  console.log(`\nshared/brewing scaleRecipe pilot → 10 bbl: median ${scaling.medianUs.toFixed(1)} µs over ${scaling.iterations} runs (target < 100 µs)`);
-  console.log(`Initial JavaScript (entry + modulepreloads in dist/index.html): ${jsKb.toFixed(1)} KB gzip (target < 170 KB)`);
+  console.log(
+    `\nshared/brewing scaleRecipe pilot → 10 bbl: median ${scaling.medianUs.toFixed(1)} µs over ${scaling.iterations} runs (target < 100 µs)`,
+  );
+  console.log(
+    `Initial JavaScript (entry + modulepreloads in dist/index.html): ${jsKb.toFixed(1)} KB gzip (target < 170 KB)`,
+  );
 
   const { explainProductionReport } = await import('../server/services/reports');
   console.log(`\nEXPLAIN for the monthly production report's queries (brewery ${seed.breweryId}, 2026-10):`);
   for (const line of await explainProductionReport(seed.breweryId, '2026-10')) console.log(`  ${line}`);
 
   mkdirSync(path.join(ROOT, 'test-results'), { recursive: true });
-  writeFileSync(path.join(ROOT, 'test-results/bench.json'), JSON.stringify({ machine, rows, staffRows, scaling, jsKb, seed: seed.counts }, null, 2));
+  writeFileSync(
+    path.join(ROOT, 'test-results/bench.json'),
+    JSON.stringify({ machine, rows, staffRows, scaling, jsKb, seed: seed.counts }, null, 2),
+  );
 
   await sequelize.close();
 }

@@ -22,7 +22,11 @@ async function main() {
     MAIL_DIR: path.join(APP_DATA.dataDir, 'mail'),
   };
   const children = [
-    spawn('npx', ['tsx', 'watch', '--clear-screen=false', 'scripts/dev-server.ts'], { cwd: ROOT, env, stdio: 'inherit' }),
+    spawn('npx', ['tsx', 'watch', '--clear-screen=false', 'scripts/dev-server.ts'], {
+      cwd: ROOT,
+      env,
+      stdio: 'inherit',
+    }),
     spawn('npx', ['vite', '--host', '127.0.0.1'], { cwd: ROOT, env, stdio: 'inherit' }),
   ];
   const stop = () => children.forEach((c) => c.kill('SIGTERM'));

@@ -69,7 +69,10 @@ async function post(api: string, cookie: string, s: Sent): Promise<void> {
 async function waitForHealth(api: string, timeoutMs = 60_000): Promise<void> {
   const deadline = Date.now() + timeoutMs;
   while (Date.now() < deadline) {
-    const ok = await fetch(`${api}/api/health`).then((r) => r.ok, () => false);
+    const ok = await fetch(`${api}/api/health`).then(
+      (r) => r.ok,
+      () => false,
+    );
     if (ok) return;
     await new Promise((r) => setTimeout(r, 200));
   }
@@ -77,18 +80,37 @@ async function waitForHealth(api: string, timeoutMs = 60_000): Promise<void> {
 }
 
 /** Runs `rounds` crash rounds of `entries` concurrent POSTs each; returns the counts. */
-export async function runCrashFault(options: { entries: number; rounds?: number; log?: (line: string) => void }): Promise<CrashReport> {
+export async function runCrashFault(options: {
+  entries: number;
+  rounds?: number;
+  log?: (line: string) => void;
+}): Promise<CrashReport> {
   const log = options.log ?? console.log;
   const rounds = options.rounds ?? 1;
   const instance = await prepareInstance({ ...FAULT_DATA, fresh: true });
   let api: ApiProcess | undefined;
   const report: CrashReport = {
-    rounds, sent: 0, answered201BeforeRestart: 0, failedDuringOutage: {}, ackedMissing: 0, ackedWithoutAudit: 0,
-    ackedWithoutIdempotency: 0, halfWritten: 0, resent: 0, finalEntries: 0, duplicateKeys: 0, chainsBroken: 0,
+    rounds,
+    sent: 0,
+    answered201BeforeRestart: 0,
+    failedDuringOutage: {},
+    ackedMissing: 0,
+    ackedWithoutAudit: 0,
+    ackedWithoutIdempotency: 0,
+    halfWritten: 0,
+    resent: 0,
+    finalEntries: 0,
+    duplicateKeys: 0,
+    chainsBroken: 0,
   };
   try {
     api = await startApi(apiEnv(instance, API_PORT), { seed: { batches: 20 } });
-    const { emails, password, batchIds, breweryId } = api.ready as { emails: Record<string, string>; password: string; batchIds: number[]; breweryId: number };
+    const { emails, password, batchIds, breweryId } = api.ready as {
+      emails: Record<string, string>;
+      password: string;
+      batchIds: number[];
+      breweryId: number;
+    };
     const cookie = await signIn(api.url, emails.assistant_brewer!, password);
     const all: Sent[] = [];
 
@@ -110,7 +132,8 @@ export async function runCrashFault(options: { entries: number; rounds?: number;
       const inFlight = Promise.all(
         sends.map((s) =>
           post(api!.url, cookie, s).then(() => {
-            if (s.status === 201 && ++answered >= sends.length / 4) killed ??= stopMariaDb(FAULT_DATA.dataDir, 'SIGKILL');
+            if (s.status === 201 && ++answered >= sends.length / 4)
+              killed ??= stopMariaDb(FAULT_DATA.dataDir, 'SIGKILL');
           }),
         ),
       );
@@ -129,12 +152,25 @@ export async function runCrashFault(options: { entries: number; rounds?: number;
 
     // What the database kept for every 201.
     const c = connectionParts(instance.ownerUrl);
-    const conn = await mariadb.createConnection({ host: c.host, port: Number(c.port), user: c.user, password: c.password, database: c.database, bigIntAsNumber: true });
+    const conn = await mariadb.createConnection({
+      host: c.host,
+      port: Number(c.port),
+      user: c.user,
+      password: c.password,
+      database: c.database,
+      bigIntAsNumber: true,
+    });
     try {
       for (const s of all.filter((x) => x.status === 201)) {
-        const [entry] = await conn.query<{ id: number }[]>('SELECT id FROM batch_log_entries WHERE brewery_id = ? AND idempotency_key = ?', [breweryId, s.key]);
+        const [entry] = await conn.query<{ id: number }[]>(
+          'SELECT id FROM batch_log_entries WHERE brewery_id = ? AND idempotency_key = ?',
+          [breweryId, s.key],
+        );
         if (!entry || entry.id !== s.entryId) report.ackedMissing += 1;
-        const [idem] = await conn.query<{ n: number }[]>('SELECT COUNT(*) AS n FROM idempotency_keys WHERE brewery_id = ? AND `key` = ? AND result_id = ?', [breweryId, s.key, s.entryId]);
+        const [idem] = await conn.query<{ n: number }[]>(
+          'SELECT COUNT(*) AS n FROM idempotency_keys WHERE brewery_id = ? AND `key` = ? AND result_id = ?',
+          [breweryId, s.key, s.entryId],
+        );
         if (idem!.n !== 1) report.ackedWithoutIdempotency += 1;
         const [audit] = await conn.query<{ n: number }[]>(
           "SELECT COUNT(*) AS n FROM audit_events WHERE brewery_id = ? AND action = 'batch-log.append' AND JSON_VALUE(detail, '$.entryId') = ?",
@@ -155,7 +191,8 @@ export async function runCrashFault(options: { entries: number; rounds?: number;
       // The outbox's part: send every unanswered request again with its original key.
       const unanswered = all.filter((s) => s.status !== 201);
       report.resent = unanswered.length;
-      for (let i = 0; i < unanswered.length; i += 25) await Promise.all(unanswered.slice(i, i + 25).map((s) => post(api!.url, cookie, s)));
+      for (let i = 0; i < unanswered.length; i += 25)
+        await Promise.all(unanswered.slice(i, i + 25).map((s) => post(api!.url, cookie, s)));
       const stillFailing = unanswered.filter((s) => s.status !== 201).length;
       if (stillFailing) throw new Error(`${stillFailing} requests still failed after MariaDB came back`);
 
@@ -189,7 +226,14 @@ export async function runCrashFault(options: { entries: number; rounds?: number;
 if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) {
   runCrashFault({ entries: numberArg('entries', 200), rounds: numberArg('rounds', 1) }).then(
     (r) => {
-      const ok = r.ackedMissing + r.ackedWithoutAudit + r.ackedWithoutIdempotency + r.halfWritten + r.duplicateKeys + r.chainsBroken === 0 && r.finalEntries === r.sent;
+      const ok =
+        r.ackedMissing +
+          r.ackedWithoutAudit +
+          r.ackedWithoutIdempotency +
+          r.halfWritten +
+          r.duplicateKeys +
+          r.chainsBroken ===
+          0 && r.finalEntries === r.sent;
       console.log(ok ? 'PASS: nothing answered 201 was lost, nothing half-written, every entry exactly once.' : 'FAIL');
       process.exit(ok ? 0 : 1);
     },

@@ -16,7 +16,11 @@ export async function prepareInstance(options: InstanceOptions & { fresh?: boole
 }
 
 /** The environment the API process runs with against `instance`. */
-export function apiEnv(instance: Instance, port: number, overrides: Record<string, string> = {}): Record<string, string> {
+export function apiEnv(
+  instance: Instance,
+  port: number,
+  overrides: Record<string, string> = {},
+): Record<string, string> {
   return {
     NODE_ENV: 'test',
     LOG_LEVEL: 'silent',
@@ -43,10 +47,17 @@ export interface ApiProcess {
  * Runs scripts/fault-server.ts as its own process. With `seed`, the process first creates a brewery, its
  * people and `batches` planned batches, and reports them on its READY line.
  */
-export async function startApi(env: Record<string, string>, options: { seed?: { batches: number } } = {}): Promise<ApiProcess> {
+export async function startApi(
+  env: Record<string, string>,
+  options: { seed?: { batches: number } } = {},
+): Promise<ApiProcess> {
   const args = ['--import', 'tsx', path.join(ROOT, 'scripts/fault-server.ts')];
   if (options.seed) args.push('--seed', String(options.seed.batches));
-  const child = spawn(process.execPath, args, { cwd: ROOT, env: { ...process.env, ...env }, stdio: ['ignore', 'pipe', 'pipe'] });
+  const child = spawn(process.execPath, args, {
+    cwd: ROOT,
+    env: { ...process.env, ...env },
+    stdio: ['ignore', 'pipe', 'pipe'],
+  });
   let stderr = '';
   child.stderr!.on('data', (d: Buffer) => (stderr += d.toString()));
   const ready = await new Promise<Record<string, unknown>>((resolve, reject) => {

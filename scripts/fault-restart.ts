@@ -32,21 +32,34 @@ function memoryStore(): OutboxStore {
   };
 }
 
-export async function runRestartFault(options: { entries: number; restarts: number; log?: (line: string) => void }): Promise<RestartReport> {
+export async function runRestartFault(options: {
+  entries: number;
+  restarts: number;
+  log?: (line: string) => void;
+}): Promise<RestartReport> {
   const log = options.log ?? console.log;
   const instance = await prepareInstance({ ...FAULT_DATA, fresh: true });
   // One environment for every start: the same session secret keeps the tablet signed in across restarts.
   const env = apiEnv(instance, API_PORT);
   let api: ApiProcess | undefined = await startApi(env, { seed: { batches: 1 } });
-  const { emails, password, batchIds, breweryId } = api.ready as { emails: Record<string, string>; password: string; batchIds: number[]; breweryId: number };
+  const { emails, password, batchIds, breweryId } = api.ready as {
+    emails: Record<string, string>;
+    password: string;
+    batchIds: number[];
+    breweryId: number;
+  };
   const base = api.url;
   const cookie = await signIn(base, emails.assistant_brewer!, password);
 
   // The outbox's sendItem runs as in the browser; Node has no cookie jar or localStorage, so lend it both.
   const realFetch = globalThis.fetch;
-  globalThis.fetch = (input, init) => realFetch(input, { ...init, headers: { ...(init?.headers as Record<string, string>), cookie } });
+  globalThis.fetch = (input, init) =>
+    realFetch(input, { ...init, headers: { ...(init?.headers as Record<string, string>), cookie } });
   const memory = new Map<string, string>();
-  (globalThis as { localStorage?: unknown }).localStorage = { getItem: (k: string) => memory.get(k) ?? null, setItem: (k: string, v: string) => void memory.set(k, v) };
+  (globalThis as { localStorage?: unknown }).localStorage = {
+    getItem: (k: string) => memory.get(k) ?? null,
+    setItem: (k: string, v: string) => void memory.set(k, v),
+  };
 
   const report: RestartReport = { enqueued: 0, restarts: 0, retriesSeen: 0, arrived: 0, duplicates: 0, outOfOrder: 0 };
   let sent = 0;
@@ -95,7 +108,14 @@ export async function runRestartFault(options: { entries: number; restarts: numb
     report.enqueued = keys.length;
 
     const c = connectionParts(instance.ownerUrl);
-    const conn = await mariadb.createConnection({ host: c.host, port: Number(c.port), user: c.user, password: c.password, database: c.database, bigIntAsNumber: true });
+    const conn = await mariadb.createConnection({
+      host: c.host,
+      port: Number(c.port),
+      user: c.user,
+      password: c.password,
+      database: c.database,
+      bigIntAsNumber: true,
+    });
     try {
       const rows = await conn.query<{ key: string }[]>(
         'SELECT idempotency_key AS `key` FROM batch_log_entries WHERE brewery_id = ? AND batch_id = ? ORDER BY sequence',

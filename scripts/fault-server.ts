@@ -17,12 +17,22 @@ async function seed(batches: number) {
   const passwordHash = await hashPassword(password);
   const tag = randomBytes(4).toString('hex');
   return sequelize.transaction(async (transaction) => {
-    const brewery = await createBrewery({ name: `Fault brewery ${tag}`, unitSystem: 'us', timeZone: 'UTC' }, transaction);
+    const brewery = await createBrewery(
+      { name: `Fault brewery ${tag}`, unitSystem: 'us', timeZone: 'UTC' },
+      transaction,
+    );
     const emails = {} as Record<Role, string>;
     const ids = {} as Record<Role, number>;
     for (const role of ['head_brewer', 'assistant_brewer', 'taproom_manager'] as Role[]) {
       const user = await User.create(
-        { breweryId: brewery.id, email: `${role}.${tag}@fault.example`, displayName: `${role} ${tag}`, role, passwordHash, disabledAt: null },
+        {
+          breweryId: brewery.id,
+          email: `${role}.${tag}@fault.example`,
+          displayName: `${role} ${tag}`,
+          role,
+          passwordHash,
+          disabledAt: null,
+        },
         { transaction },
       );
       emails[role] = user.email;
@@ -37,7 +47,12 @@ async function seed(batches: number) {
     };
     const batchIds: number[] = [];
     for (let i = 0; i < batches; i++) {
-      const batch = await createBatchFromPlan({ id: ids.head_brewer, breweryId: brewery.id }, plan, { brewDate: '2026-11-30' }, transaction);
+      const batch = await createBatchFromPlan(
+        { id: ids.head_brewer, breweryId: brewery.id },
+        plan,
+        { brewDate: '2026-11-30' },
+        transaction,
+      );
       batchIds.push(batch.id);
     }
     return { breweryId: brewery.id, emails, password, batchIds };

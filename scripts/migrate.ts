@@ -5,7 +5,9 @@ import { migrate } from '../server/migrations/umzug';
 
 const env = z
   .object({
-    MIGRATION_DATABASE_URL: z.string().regex(/^(mariadb|mysql):\/\//, 'MIGRATION_DATABASE_URL must be a mariadb:// URL'),
+    MIGRATION_DATABASE_URL: z
+      .string()
+      .regex(/^(mariadb|mysql):\/\//, 'MIGRATION_DATABASE_URL must be a mariadb:// URL'),
     APP_DB_USER: z.string().min(1, 'APP_DB_USER names the account the app connects with'),
   })
   .safeParse(process.env);

@@ -46,10 +46,16 @@ export async function restoreDatabase(options: {
   replace?: boolean;
 }): Promise<{ database: string; migrationsApplied: string[] }> {
   const { database, file } = options;
-  if (!SAFE_NAME.test(database)) throw new Error(`'${database}' is not a database name Kettlewright uses (letters, digits, _).`);
+  if (!SAFE_NAME.test(database))
+    throw new Error(`'${database}' is not a database name Kettlewright uses (letters, digits, _).`);
   if (!existsSync(file)) throw new Error(`No backup file at ${file}`);
   const c = connectionParts(options.ownerUrl);
-  const conn = await mariadb.createConnection({ host: c.host, port: Number(c.port), user: c.user, password: c.password });
+  const conn = await mariadb.createConnection({
+    host: c.host,
+    port: Number(c.port),
+    user: c.user,
+    password: c.password,
+  });
   try {
     const [row] = await conn.query<{ tables: bigint }[]>(
       'SELECT COUNT(*) AS tables FROM information_schema.TABLES WHERE TABLE_SCHEMA = ?',

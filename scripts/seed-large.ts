@@ -27,7 +27,14 @@ export interface LargeSeed {
   seconds: number;
 }
 
-const RECIPE_NAMES = ['Breakwater Pale', 'Foghorn Stout', 'Tidepool Saison', 'Lantern Amber', 'Gull Rock IPA', 'Slipway Lager'];
+const RECIPE_NAMES = [
+  'Breakwater Pale',
+  'Foghorn Stout',
+  'Tidepool Saison',
+  'Lantern Amber',
+  'Gull Rock IPA',
+  'Slipway Lager',
+];
 
 /** The large brewery when it is already seeded (the benchmark reuses it), else null. */
 export async function findLargeSeed(): Promise<LargeSeed | null> {
@@ -35,8 +42,15 @@ export async function findLargeSeed(): Promise<LargeSeed | null> {
   const head = await User.findOne({ where: { email: LARGE_PEOPLE.head_brewer.email } });
   if (!head) return null;
   const recipes = await Recipe.findAll({ where: { breweryId: head.breweryId }, order: [['id', 'ASC']] });
-  const versions = await RecipeVersion.findAll({ where: { recipeId: recipes.map((r) => r.id) }, order: [['id', 'ASC']] });
-  const batches = await Batch.findAll({ where: { breweryId: head.breweryId }, attributes: ['id'], order: [['id', 'ASC']] });
+  const versions = await RecipeVersion.findAll({
+    where: { recipeId: recipes.map((r) => r.id) },
+    order: [['id', 'ASC']],
+  });
+  const batches = await Batch.findAll({
+    where: { breweryId: head.breweryId },
+    attributes: ['id'],
+    order: [['id', 'ASC']],
+  });
   return {
     breweryId: head.breweryId,
     recipes: recipes.map((r) => ({ recipeId: r.id, versionId: versions.find((v) => v.recipeId === r.id)!.id })),
@@ -47,7 +61,10 @@ export async function findLargeSeed(): Promise<LargeSeed | null> {
 }
 
 /** Seeds the large brewery into the database DATABASE_URL points at (owner URL for the bulk inserts). */
-export async function seedLarge(ownerUrl: string, size = { batches: 3000, readingsPerBatch: 100, brewDayEntriesPerBatch: 33 }): Promise<LargeSeed> {
+export async function seedLarge(
+  ownerUrl: string,
+  size = { batches: 3000, readingsPerBatch: 100, brewDayEntriesPerBatch: 33 },
+): Promise<LargeSeed> {
   const started = Date.now();
   const { User } = await import('../server/models');
   const { createBrewery } = await import('../server/services/auth');
@@ -63,19 +80,43 @@ export async function seedLarge(ownerUrl: string, size = { batches: 3000, readin
   if (existing) throw new Error(`The large brewery is already seeded (brewery ${existing.breweryId}).`);
 
   const passwordHash = await hashPassword(LARGE_PASSWORD);
-  const brewery = await createBrewery({ name: 'Saltmarsh Brewing (ten-year sample)', unitSystem: 'us', timeZone: 'America/Halifax' });
+  const brewery = await createBrewery({
+    name: 'Saltmarsh Brewing (ten-year sample)',
+    unitSystem: 'us',
+    timeZone: 'America/Halifax',
+  });
   const users: Record<string, InstanceType<typeof User>> = {};
   for (const [role, p] of Object.entries(LARGE_PEOPLE)) {
-    users[role] = await User.create({ breweryId: brewery.id, ...p, role: role as 'head_brewer', passwordHash, disabledAt: null });
+    users[role] = await User.create({
+      breweryId: brewery.id,
+      ...p,
+      role: role as 'head_brewer',
+      passwordHash,
+      disabledAt: null,
+    });
   }
-  const head = { id: users.head_brewer!.id, breweryId: brewery.id, role: 'head_brewer' as const, displayName: LARGE_PEOPLE.head_brewer.displayName, email: LARGE_PEOPLE.head_brewer.email };
+  const head = {
+    id: users.head_brewer!.id,
+    breweryId: brewery.id,
+    role: 'head_brewer' as const,
+    displayName: LARGE_PEOPLE.head_brewer.displayName,
+    email: LARGE_PEOPLE.head_brewer.email,
+  };
   // Recipes are written on the pilot kit and brewed on the 10 bbl brewhouse (scaled by the same planning code).
   const pilot = await createEquipment(brewery.id, DEMO_EQUIPMENT.pilot);
   const equipment = await createEquipment(brewery.id, DEMO_EQUIPMENT.big);
   const recipes: LargeSeed['recipes'] = [];
   const plans: unknown[] = [];
   for (const name of RECIPE_NAMES) {
-    const input: CreateRecipeInput = { name, style: 'House beer', description: '', status: 'active', changeNote: 'First version', equipmentProfileId: pilot.id, content: SEASONAL_CONTENT };
+    const input: CreateRecipeInput = {
+      name,
+      style: 'House beer',
+      description: '',
+      status: 'active',
+      changeNote: 'First version',
+      equipmentProfileId: pilot.id,
+      content: SEASONAL_CONTENT,
+    };
     const r = await createRecipe(head, input);
     recipes.push({ recipeId: r.id, versionId: r.versionId });
     plans.push(await planForBatch(brewery.id, { recipeVersionId: r.versionId, equipmentProfileId: equipment.id }));
@@ -83,11 +124,22 @@ export async function seedLarge(ownerUrl: string, size = { batches: 3000, readin
   }
 
   const c = connectionParts(ownerUrl);
-  const conn = await mariadb.createConnection({ host: c.host, port: Number(c.port), user: c.user, password: c.password, database: c.database, bigIntAsNumber: true });
+  const conn = await mariadb.createConnection({
+    host: c.host,
+    port: Number(c.port),
+    user: c.user,
+    password: c.password,
+    database: c.database,
+    bigIntAsNumber: true,
+  });
   const counts = { batches: 0, readings: 0, brewDayEntries: 0, allLogEntries: 0, packagingRuns: 0 };
   try {
-    const [{ nextBatch }] = await conn.query<{ nextBatch: number }[]>('SELECT COALESCE(MAX(id), 0) + 1 AS nextBatch FROM batches');
-    const [{ nextEntry }] = await conn.query<{ nextEntry: number }[]>('SELECT COALESCE(MAX(id), 0) + 1 AS nextEntry FROM batch_log_entries');
+    const [{ nextBatch }] = await conn.query<{ nextBatch: number }[]>(
+      'SELECT COALESCE(MAX(id), 0) + 1 AS nextBatch FROM batches',
+    );
+    const [{ nextEntry }] = await conn.query<{ nextEntry: number }[]>(
+      'SELECT COALESCE(MAX(id), 0) + 1 AS nextEntry FROM batch_log_entries',
+    );
     let batchId = nextBatch;
     let entryId = nextEntry;
     const assistant = users.assistant_brewer!;
@@ -108,16 +160,43 @@ export async function seedLarge(ownerUrl: string, size = { batches: 3000, readin
         const sequence = (perYear.get(year) ?? 0) + 1;
         perYear.set(year, sequence);
         const ri = b % plans.length;
-        const plan = plans[ri] as { recipeName: string; equipment: { batchVolumeL: number }; computed: { og: number; volumes: { knockoutL: number } } };
+        const plan = plans[ri] as {
+          recipeName: string;
+          equipment: { batchVolumeL: number };
+          computed: { og: number; volumes: { knockoutL: number } };
+        };
         const recent = b >= size.batches - 8;
         const dumped = !recent && b % 97 === 13;
-        const status = recent ? (b % 2 ? 'fermenting' : 'conditioning') : dumped ? 'dumped' : b % 5 === 0 ? 'packaged' : 'released';
+        const status = recent
+          ? b % 2
+            ? 'fermenting'
+            : 'conditioning'
+          : dumped
+            ? 'dumped'
+            : b % 5 === 0
+              ? 'packaged'
+              : 'released';
         const id = batchId++;
         batchIds.push(id);
         batchRows.push([
-          id, brewery.id, `${year}-${String(sequence).padStart(3, '0')}`, year, sequence, plan.recipeName, recipes[ri]!.recipeId,
-          recipes[ri]!.versionId, JSON.stringify(plan), plan.equipment.batchVolumeL, plan.computed.og, brewAt.toISOString().slice(0, 10),
-          status, dumped ? 'Infected: sour off-flavour at day 6' : null, dumped ? brewAt : null, head.id, brewAt, brewAt,
+          id,
+          brewery.id,
+          `${year}-${String(sequence).padStart(3, '0')}`,
+          year,
+          sequence,
+          plan.recipeName,
+          recipes[ri]!.recipeId,
+          recipes[ri]!.versionId,
+          JSON.stringify(plan),
+          plan.equipment.batchVolumeL,
+          plan.computed.og,
+          brewAt.toISOString().slice(0, 10),
+          status,
+          dumped ? 'Infected: sour off-flavour at day 6' : null,
+          dumped ? brewAt : null,
+          head.id,
+          brewAt,
+          brewAt,
         ]);
         // The log: brew-day entries (one of them knockout, with OG and volume), then readings, then packaging.
         let prevHash = GENESIS_HASH;
@@ -127,15 +206,48 @@ export async function seedLarge(ownerUrl: string, size = { batches: 3000, readin
         const push = (kind: string, stepKey: string | null, data: Record<string, unknown>, at: Date) => {
           seq += 1;
           const fields = {
-            breweryId: brewery.id, batchId: id, sequence: seq, kind, stepKey, data, correctsEntryId: null, reason: null,
-            authorId: assistant.id, authorRole: 'assistant_brewer' as const, authorName: LARGE_PEOPLE.assistant_brewer.displayName,
-            meaning: 'performed' as const, capturedAt: at, receivedAt: at, deviceId: 'tablet-saltmarsh', late: false, idempotencyKey: randomUUID(),
+            breweryId: brewery.id,
+            batchId: id,
+            sequence: seq,
+            kind,
+            stepKey,
+            data,
+            correctsEntryId: null,
+            reason: null,
+            authorId: assistant.id,
+            authorRole: 'assistant_brewer' as const,
+            authorName: LARGE_PEOPLE.assistant_brewer.displayName,
+            meaning: 'performed' as const,
+            capturedAt: at,
+            receivedAt: at,
+            deviceId: 'tablet-saltmarsh',
+            late: false,
+            idempotencyKey: randomUUID(),
           };
           const hash = entryHash(prevHash, fields);
           const eid = entryId++;
           entryRows.push([
-            eid, brewery.id, id, seq, kind, stepKey, JSON.stringify(data), null, null, assistant.id, 'assistant_brewer', fields.authorName,
-            'performed', at, at, fields.deviceId, 0, fields.idempotencyKey, hash, prevHash, hash,
+            eid,
+            brewery.id,
+            id,
+            seq,
+            kind,
+            stepKey,
+            JSON.stringify(data),
+            null,
+            null,
+            assistant.id,
+            'assistant_brewer',
+            fields.authorName,
+            'performed',
+            at,
+            at,
+            fields.deviceId,
+            0,
+            fields.idempotencyKey,
+            hash,
+            prevHash,
+            hash,
           ]);
           prevHash = hash;
           return eid;
@@ -143,7 +255,12 @@ export async function seedLarge(ownerUrl: string, size = { batches: 3000, readin
         for (let i = 0; i < size.brewDayEntriesPerBatch; i++) {
           const at = new Date(brewAt.getTime() + i * 12 * 60_000);
           if (i === size.brewDayEntriesPerBatch - 1) {
-            push('step', 'knockout-end', { label: 'Knockout end', measurements: { gravitySg: og, volumeL: knockoutL } }, at);
+            push(
+              'step',
+              'knockout-end',
+              { label: 'Knockout end', measurements: { gravitySg: og, volumeL: knockoutL } },
+              at,
+            );
           } else {
             push('note', null, { text: `Brew-day note ${i + 1}`, deviation: false }, at);
           }
@@ -155,7 +272,21 @@ export async function seedLarge(ownerUrl: string, size = { batches: 3000, readin
           const sg = fg + (og - fg) * Math.exp(-i / 18);
           const data = { method: 'probe', gravity: sg, gravityUnit: 'sg', temp: 19, tempUnit: 'c' };
           const eid = push('reading', null, data, at);
-          readingRows.push([brewery.id, id, eid, eid, at, sg, sg, 'sg', 19, null, 'probe', LARGE_PEOPLE.assistant_brewer.displayName, at]);
+          readingRows.push([
+            brewery.id,
+            id,
+            eid,
+            eid,
+            at,
+            sg,
+            sg,
+            'sg',
+            19,
+            null,
+            'probe',
+            LARGE_PEOPLE.assistant_brewer.displayName,
+            at,
+          ]);
           counts.readings += 1;
         }
         if (!recent && !dumped) {

@@ -41,7 +41,8 @@ export function createApp(options: { serveClient?: boolean; logger?: Logger } = 
     pinoHttp({
       logger: options.logger ?? logger,
       // The whole path: by the time a response finishes, a mounted router may have cut req.url down to its own part.
-      customSuccessMessage: (req, res, responseTime) => `${req.method} ${loggedPath((req as express.Request).originalUrl ?? req.url ?? '')} ${res.statusCode} ${Math.round(responseTime)} ms`,
+      customSuccessMessage: (req, res, responseTime) =>
+        `${req.method} ${loggedPath((req as express.Request).originalUrl ?? req.url ?? '')} ${res.statusCode} ${Math.round(responseTime)} ms`,
       genReqId: (_req, res) => {
         const id = randomUUID();
         res.setHeader('x-request-id', id);
@@ -50,7 +51,12 @@ export function createApp(options: { serveClient?: boolean; logger?: Logger } = 
       autoLogging: env.NODE_ENV !== 'test',
       // What a request line records: never its headers (they carry the session cookie), and cheap to build.
       serializers: {
-        req: (req: { id: string; method: string; url: string; remoteAddress: string }) => ({ id: req.id, method: req.method, url: loggedPath(req.url), remoteAddress: req.remoteAddress }),
+        req: (req: { id: string; method: string; url: string; remoteAddress: string }) => ({
+          id: req.id,
+          method: req.method,
+          url: loggedPath(req.url),
+          remoteAddress: req.remoteAddress,
+        }),
         res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
       },
     }),

@@ -9,10 +9,14 @@ import { logger } from './logger';
 const OVERDUE_SWEEP_MS = 15 * 60 * 1000;
 
 /** Starts the API (and the built client) after checking the database keeps committed work through a crash. */
-export async function startServer(options: { serveClient?: boolean } = { serveClient: true }): Promise<import('node:http').Server> {
+export async function startServer(
+  options: { serveClient?: boolean } = { serveClient: true },
+): Promise<import('node:http').Server> {
   const problems = await durabilityProblems(sequelize);
   if (problems.length) {
-    throw new Error(`Kettlewright refuses to run on a database that could lose signed records:\n  ${problems.join('\n  ')}`);
+    throw new Error(
+      `Kettlewright refuses to run on a database that could lose signed records:\n  ${problems.join('\n  ')}`,
+    );
   }
   const app = createApp(options);
   setInterval(() => {

@@ -9,5 +9,8 @@ import { env } from './config/env';
  */
 export const logger: Logger =
   env.NODE_ENV === 'development'
-    ? pino({ level: env.LOG_LEVEL }, pretty({ sync: true, translateTime: 'HH:MM:ss', ignore: 'pid,hostname,req,res,responseTime' }))
+    ? pino(
+        { level: env.LOG_LEVEL },
+        pretty({ sync: true, translateTime: 'HH:MM:ss', ignore: 'pid,hostname,req,res,responseTime' }),
+      )
     : pino({ level: env.LOG_LEVEL });

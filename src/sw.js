@@ -67,7 +67,12 @@ self.addEventListener('fetch', (event) => {
     event.respondWith(networkFirst(request, SHELL, '/'));
   } else if (url.pathname.startsWith('/api/')) {
     // Files (photos, lab sheets up to 15 MB) are not kept: only the answers a screen needs to open offline.
-    if (url.pathname === '/api/health' || url.pathname.startsWith('/api/dev/') || url.pathname.startsWith('/api/attachments/')) return;
+    if (
+      url.pathname === '/api/health' ||
+      url.pathname.startsWith('/api/dev/') ||
+      url.pathname.startsWith('/api/attachments/')
+    )
+      return;
     event.respondWith(networkFirst(request, API));
   } else {
     event.respondWith(cacheFirst(request));

@@ -99,29 +99,37 @@ export async function startMariaDb(options: InstanceOptions): Promise<void> {
   mkdirSync(options.dataDir, { recursive: true });
   if (!existsSync(path.join(dir, 'mysql'))) {
     mkdirSync(dir, { recursive: true });
-    execFileSync('mariadb-install-db', [
-      '--no-defaults',
-      `--datadir=${dir}`,
-      '--auth-root-authentication-method=normal',
-      '--skip-test-db',
-      '--user=root',
-    ], { stdio: 'ignore' });
+    execFileSync(
+      'mariadb-install-db',
+      [
+        '--no-defaults',
+        `--datadir=${dir}`,
+        '--auth-root-authentication-method=normal',
+        '--skip-test-db',
+        '--user=root',
+      ],
+      { stdio: 'ignore' },
+    );
   }
   if (pidAlive(pidFile)) {
     await waitUntilAnswering(socket);
     return;
   }
   const log = openSync(path.join(options.dataDir, 'mariadb.log'), 'a');
-  const child = spawn('mariadbd', [
-    '--no-defaults',
-    `--datadir=${dir}`,
-    `--socket=${socket}`,
-    `--port=${options.port}`,
-    '--bind-address=127.0.0.1',
-    '--user=root',
-    `--pid-file=${pidFile}`,
-    ...DURABLE_FLAGS,
-  ], { detached: true, stdio: ['ignore', log, log] });
+  const child = spawn(
+    'mariadbd',
+    [
+      '--no-defaults',
+      `--datadir=${dir}`,
+      `--socket=${socket}`,
+      `--port=${options.port}`,
+      '--bind-address=127.0.0.1',
+      '--user=root',
+      `--pid-file=${pidFile}`,
+      ...DURABLE_FLAGS,
+    ],
+    { detached: true, stdio: ['ignore', log, log] },
+  );
   child.unref();
   await waitUntilAnswering(socket);
 }

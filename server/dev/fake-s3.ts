@@ -9,14 +9,23 @@ const FAKE_KEY = 'S3RVER';
 export interface FakeS3 {
   port: number;
   /** The S3_* variables that point the app at this server. */
-  env: Record<'S3_ENDPOINT' | 'S3_BUCKET' | 'S3_REGION' | 'S3_ACCESS_KEY_ID' | 'S3_SECRET_ACCESS_KEY' | 'S3_FORCE_PATH_STYLE', string>;
+  env: Record<
+    'S3_ENDPOINT' | 'S3_BUCKET' | 'S3_REGION' | 'S3_ACCESS_KEY_ID' | 'S3_SECRET_ACCESS_KEY' | 'S3_FORCE_PATH_STYLE',
+    string
+  >;
   close(): Promise<void>;
 }
 
 /** Starts the fake store on loopback (port 0: any free port) with the bucket already made. */
 export async function startFakeS3(port: number, directory: string, bucket = 'kettlewright-files'): Promise<FakeS3> {
   mkdirSync(directory, { recursive: true });
-  const server = new S3rver({ address: '127.0.0.1', port, directory, silent: true, configureBuckets: [{ name: bucket }] });
+  const server = new S3rver({
+    address: '127.0.0.1',
+    port,
+    directory,
+    silent: true,
+    configureBuckets: [{ name: bucket }],
+  });
   const address = await server.run();
   return {
     port: address.port,

@@ -1,5 +1,11 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
-import { UniqueConstraintError, ValidationError, ForeignKeyConstraintError, DatabaseError, ConnectionError } from 'sequelize';
+import {
+  UniqueConstraintError,
+  ValidationError,
+  ForeignKeyConstraintError,
+  DatabaseError,
+  ConnectionError,
+} from 'sequelize';
 import { HttpError, notFound } from '../errors';
 import { BrewingInputError } from '../../shared/brewing';
 
@@ -54,7 +60,10 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
     code = 'invalid';
     message = 'Some fields need attention';
     fields = Object.fromEntries(err.errors.map((e) => [e.path ?? '_', e.message]));
-  } else if (err instanceof ConnectionError || (err instanceof DatabaseError && /ECONNREFUSED|ECONNRESET|closed|pool/i.test(String(err.message)))) {
+  } else if (
+    err instanceof ConnectionError ||
+    (err instanceof DatabaseError && /ECONNREFUSED|ECONNRESET|closed|pool/i.test(String(err.message)))
+  ) {
     status = 503;
     code = 'unavailable';
     message = 'The database is not answering. Nothing was saved; try again in a moment.';

@@ -63,7 +63,11 @@ export const up: Migration = async ({ context: qi }) => {
     number: { type: DataTypes.INTEGER, allowNull: false },
     change_note: { type: DataTypes.STRING(300), allowNull: false },
     author_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'users', key: 'id' } },
-    equipment_profile_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'equipment_profiles', key: 'id' } },
+    equipment_profile_id: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'equipment_profiles', key: 'id' },
+    },
     content: { type: DataTypes.JSON, allowNull: false },
     // Denormalised for the list; computed by shared/brewing when the version is saved.
     batch_volume_l: litres,

@@ -58,7 +58,11 @@ export const up: Migration = async ({ context: qi }) => {
     kind: { type: DataTypes.STRING(32), allowNull: false },
     step_key: { type: DataTypes.STRING(64), allowNull: true },
     data: { type: DataTypes.JSON, allowNull: false },
-    corrects_entry_id: { type: DataTypes.BIGINT, allowNull: true, references: { model: 'batch_log_entries', key: 'id' } },
+    corrects_entry_id: {
+      type: DataTypes.BIGINT,
+      allowNull: true,
+      references: { model: 'batch_log_entries', key: 'id' },
+    },
     reason: { type: DataTypes.STRING(500), allowNull: true },
     author_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'users', key: 'id' } },
     author_role: { type: DataTypes.ENUM('head_brewer', 'assistant_brewer', 'taproom_manager'), allowNull: false },

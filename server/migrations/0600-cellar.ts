@@ -3,7 +3,12 @@ import type { Migration } from './umzug';
 
 const brewery = { type: DataTypes.INTEGER, allowNull: false, references: { model: 'breweries', key: 'id' } };
 const batch = { type: DataTypes.INTEGER, allowNull: false, references: { model: 'batches', key: 'id' } };
-const logEntry = { type: DataTypes.BIGINT, allowNull: false, unique: true, references: { model: 'batch_log_entries', key: 'id' } };
+const logEntry = {
+  type: DataTypes.BIGINT,
+  allowNull: false,
+  unique: true,
+  references: { model: 'batch_log_entries', key: 'id' },
+};
 
 export const up: Migration = async ({ context: qi }) => {
   // A projection of reading log entries for charts and the vessel board, written in the entry's transaction.

@@ -14,7 +14,9 @@ export const up: Migration = async ({ context: qi }) => {
     { type: QueryTypes.UPDATE },
   );
   // An entry without a key record cannot be replayed; its own hash stands in so the column can be required.
-  await sequelize.query('UPDATE batch_log_entries SET request_hash = hash WHERE request_hash IS NULL', { type: QueryTypes.UPDATE });
+  await sequelize.query('UPDATE batch_log_entries SET request_hash = hash WHERE request_hash IS NULL', {
+    type: QueryTypes.UPDATE,
+  });
   await qi.changeColumn('batch_log_entries', 'request_hash', { type: DataTypes.CHAR(64), allowNull: false });
   await sequelize.query(
     `CREATE TRIGGER batch_log_entries_after_insert AFTER INSERT ON batch_log_entries FOR EACH ROW

@@ -9,10 +9,30 @@ import type { Migration } from './umzug';
 // - a recipe's batches newest first page through the index instead of sorting every batch of the recipe;
 // - batches dumped in a month are found by when they changed.
 const swaps = [
-  { table: 'batch_log_entries', old: { name: 'log_brewery_step_captured', fields: ['brewery_id', 'step_key', 'captured_at'] }, fields: ['brewery_id', 'step_key', 'captured_at', 'batch_id'], name: 'log_brewery_step_captured_batch' },
-  { table: 'packaging_runs', old: { name: 'packaging_runs_brewery_id_packaged_at', fields: ['brewery_id', 'packaged_at'] }, fields: ['brewery_id', 'packaged_at', 'batch_id', 'log_entry_id'], name: 'packaging_runs_brewery_packaged_batch' },
-  { table: 'packaging_runs', old: { name: 'packaging_runs_batch_id', fields: ['batch_id'] }, fields: ['batch_id', 'packaged_at'], name: 'packaging_runs_batch_packaged' },
-  { table: 'batches', old: { name: 'batches_brewery_id_recipe_id', fields: ['brewery_id', 'recipe_id'] }, fields: ['brewery_id', 'recipe_id', 'brew_date', 'id'], name: 'batches_brewery_recipe_brew_date' },
+  {
+    table: 'batch_log_entries',
+    old: { name: 'log_brewery_step_captured', fields: ['brewery_id', 'step_key', 'captured_at'] },
+    fields: ['brewery_id', 'step_key', 'captured_at', 'batch_id'],
+    name: 'log_brewery_step_captured_batch',
+  },
+  {
+    table: 'packaging_runs',
+    old: { name: 'packaging_runs_brewery_id_packaged_at', fields: ['brewery_id', 'packaged_at'] },
+    fields: ['brewery_id', 'packaged_at', 'batch_id', 'log_entry_id'],
+    name: 'packaging_runs_brewery_packaged_batch',
+  },
+  {
+    table: 'packaging_runs',
+    old: { name: 'packaging_runs_batch_id', fields: ['batch_id'] },
+    fields: ['batch_id', 'packaged_at'],
+    name: 'packaging_runs_batch_packaged',
+  },
+  {
+    table: 'batches',
+    old: { name: 'batches_brewery_id_recipe_id', fields: ['brewery_id', 'recipe_id'] },
+    fields: ['brewery_id', 'recipe_id', 'brew_date', 'id'],
+    name: 'batches_brewery_recipe_brew_date',
+  },
 ];
 
 export const up: Migration = async ({ context: qi }) => {

@@ -11,7 +11,14 @@ const here = path.dirname(fileURLToPath(import.meta.url));
  * Tables whose rows are signed records: the application account may only INSERT and SELECT them,
  * so not even a bug in the app can change or delete what was recorded. Later areas add theirs here.
  */
-export const APPEND_ONLY_TABLES = ['audit_events', 'batch_log_entries', 'idempotency_keys', 'tasting_notes', 'gravity_readings', 'packaging_runs'];
+export const APPEND_ONLY_TABLES = [
+  'audit_events',
+  'batch_log_entries',
+  'idempotency_keys',
+  'tasting_notes',
+  'gravity_readings',
+  'packaging_runs',
+];
 
 /**
  * Runs pending migrations with the owner account, then grants the application account
@@ -52,10 +59,21 @@ async function grantApplicationAccount(sequelize: Sequelize, appUser: string): P
       { replacements: [account, database], type: QueryTypes.SELECT },
     );
     for (const { name } of tables) {
-      const wanted = name === 'schema_migrations' ? [] : APPEND_ONLY_TABLES.includes(name) ? ['SELECT', 'INSERT'] : ['SELECT', 'INSERT', 'UPDATE', 'DELETE'];
-      if (wanted.length) await sequelize.query(`GRANT ${wanted.join(', ')} ON \`${database}\`.\`${name}\` TO ${account}`, { type: QueryTypes.RAW });
+      const wanted =
+        name === 'schema_migrations'
+          ? []
+          : APPEND_ONLY_TABLES.includes(name)
+            ? ['SELECT', 'INSERT']
+            : ['SELECT', 'INSERT', 'UPDATE', 'DELETE'];
+      if (wanted.length)
+        await sequelize.query(`GRANT ${wanted.join(', ')} ON \`${database}\`.\`${name}\` TO ${account}`, {
+          type: QueryTypes.RAW,
+        });
       const extra = held.filter((h) => h.name === name && !wanted.includes(h.privilege)).map((h) => h.privilege);
-      if (extra.length) await sequelize.query(`REVOKE ${extra.join(', ')} ON \`${database}\`.\`${name}\` FROM ${account}`, { type: QueryTypes.RAW });
+      if (extra.length)
+        await sequelize.query(`REVOKE ${extra.join(', ')} ON \`${database}\`.\`${name}\` FROM ${account}`, {
+          type: QueryTypes.RAW,
+        });
     }
   }
 }

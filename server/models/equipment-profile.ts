@@ -2,7 +2,10 @@ import { DataTypes, Model, type CreationOptional, type InferAttributes, type Inf
 import { sequelize } from '../config/database';
 
 /** A brewhouse: volumes, efficiency and losses, as shared/brewing's EquipmentProfile (SI units). */
-export class EquipmentProfile extends Model<InferAttributes<EquipmentProfile>, InferCreationAttributes<EquipmentProfile>> {
+export class EquipmentProfile extends Model<
+  InferAttributes<EquipmentProfile>,
+  InferCreationAttributes<EquipmentProfile>
+> {
   declare id: CreationOptional<number>;
   declare breweryId: number;
   declare name: string;

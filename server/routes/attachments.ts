@@ -13,7 +13,11 @@ const uploadFields = z.strictObject({ tastingNoteId: idParam.optional() });
 
 async function send(req: Request, res: Response, variant: 'file' | 'thumbnail') {
   const file = await attachments.downloadAttachment(actor(req), Number(req.params.attachmentId), variant);
-  res.set({ 'Content-Type': file.contentType, 'Content-Disposition': file.disposition, 'Cache-Control': 'private, max-age=3600' });
+  res.set({
+    'Content-Type': file.contentType,
+    'Content-Disposition': file.disposition,
+    'Cache-Control': 'private, max-age=3600',
+  });
   res.send(file.body);
 }
 
@@ -36,15 +40,29 @@ export const batchAttachmentsRouter = defineRouter('/api/batches', [
     body: uploadFields,
     handler: async (req, res) => {
       const body = req.body as z.infer<typeof uploadFields>;
-      res.status(201).json(await attachments.uploadAttachment(actor(req), Number(req.params.batchId), req.file, body.tastingNoteId));
+      res
+        .status(201)
+        .json(await attachments.uploadAttachment(actor(req), Number(req.params.batchId), req.file, body.tastingNoteId));
     },
   },
 ]);
 
 /** Files are served to the brewery's own people only; the taproom sees photos of announced beers. */
 export const attachmentsRouter = defineRouter('/api/attachments', [
-  { method: 'get', path: '/:attachmentId/file', access: 'signed-in', params: attachmentParams, handler: (req, res) => send(req, res, 'file') },
-  { method: 'get', path: '/:attachmentId/thumbnail', access: 'signed-in', params: attachmentParams, handler: (req, res) => send(req, res, 'thumbnail') },
+  {
+    method: 'get',
+    path: '/:attachmentId/file',
+    access: 'signed-in',
+    params: attachmentParams,
+    handler: (req, res) => send(req, res, 'file'),
+  },
+  {
+    method: 'get',
+    path: '/:attachmentId/thumbnail',
+    access: 'signed-in',
+    params: attachmentParams,
+    handler: (req, res) => send(req, res, 'thumbnail'),
+  },
   {
     method: 'delete',
     path: '/:attachmentId',

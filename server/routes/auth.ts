@@ -110,10 +110,15 @@ export const authRouter = defineRouter('/api/auth', [
     body: resetRequestSchema,
     handler: async (req, res) => {
       const user = await auth.requestPasswordReset(req.body.email, req.log);
-      await recordAudit(req, 'password.reset-request', { email: req.body.email }, {
-        userId: user?.id ?? null,
-        breweryId: user?.breweryId ?? null,
-      });
+      await recordAudit(
+        req,
+        'password.reset-request',
+        { email: req.body.email },
+        {
+          userId: user?.id ?? null,
+          breweryId: user?.breweryId ?? null,
+        },
+      );
       res.status(202).json({ message: 'If this e-mail has an account, a reset link is on its way.' });
     },
   },

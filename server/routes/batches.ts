@@ -1,7 +1,14 @@
 import { z } from 'zod';
 import { defineRouter, actor } from './define';
 import { BREWING_ROLES } from '../../shared/schemas/roles';
-import { batchIdParams, batchListQuery, changeStatusSchema, createBatchSchema, planPreviewQuery, type PlanPreviewQuery } from '../../shared/schemas/batches';
+import {
+  batchIdParams,
+  batchListQuery,
+  changeStatusSchema,
+  createBatchSchema,
+  planPreviewQuery,
+  type PlanPreviewQuery,
+} from '../../shared/schemas/batches';
 import { logEntryInputSchema, signOffSchema } from '../../shared/schemas/batch-log';
 import * as batches from '../services/batches';
 import { batchLogJson, toLogEntry, verifyChain, writeMetaFromHeaders } from '../services/batch-log';
@@ -16,9 +23,13 @@ const id = batchIdParams.shape.id;
 const entryParams = z.strictObject({ id, entryId: id });
 /** Entries are append-only: a change or delete answers 405 (after the usual 404 for another brewery's batch). */
 const refuseChange = async (req: Request) => {
-  const entry = await BatchLogEntry.findOne({ where: { id: Number(req.params.entryId), batchId: Number(req.params.id), breweryId: actor(req).breweryId } });
+  const entry = await BatchLogEntry.findOne({
+    where: { id: Number(req.params.entryId), batchId: Number(req.params.id), breweryId: actor(req).breweryId },
+  });
   if (!entry) throw notFound('This log entry');
-  throw methodNotAllowed('Log entries are never changed or deleted. Add a correction that points at the entry instead.');
+  throw methodNotAllowed(
+    'Log entries are never changed or deleted. Add a correction that points at the entry instead.',
+  );
 };
 
 /** Batches and their logs: the brewing side only (the taproom manager reads released beers elsewhere). */

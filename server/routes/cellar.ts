@@ -88,7 +88,12 @@ export const cellarRouter = defineRouter('/api/cellar', [
     access: BREWING_ROLES,
     query: carbonationQuerySchema,
     handler: async (req, res) => {
-      res.json(await cellar.carbonationFor(actor(req).breweryId, req.query as unknown as z.infer<typeof carbonationQuerySchema>));
+      res.json(
+        await cellar.carbonationFor(
+          actor(req).breweryId,
+          req.query as unknown as z.infer<typeof carbonationQuerySchema>,
+        ),
+      );
     },
   },
   {

@@ -16,7 +16,10 @@ import { notFound } from '../errors';
 
 const recipeParams = z.strictObject({ recipeId: idParam });
 const versionParams = z.strictObject({ recipeId: idParam, versionId: idParam });
-const ids = (req: { params: Record<string, unknown> }) => ({ recipeId: Number(req.params.recipeId), versionId: Number(req.params.versionId) });
+const ids = (req: { params: Record<string, unknown> }) => ({
+  recipeId: Number(req.params.recipeId),
+  versionId: Number(req.params.versionId),
+});
 
 export const recipesRouter = defineRouter('/api/recipes', [
   {
@@ -109,7 +112,12 @@ export const recipesRouter = defineRouter('/api/recipes', [
       if (s.recipe.id !== recipeId) throw notFound('This recipe version');
       res.json({
         recipe: { id: s.recipe.id, name: s.recipe.name, style: s.recipe.style },
-        version: { id: s.version.id, number: s.version.number, frozen: Boolean(s.version.frozenAt), content: s.version.content },
+        version: {
+          id: s.version.id,
+          number: s.version.number,
+          frozen: Boolean(s.version.frozenAt),
+          content: s.version.content,
+        },
         source: { equipmentProfileId: s.sourceEquipmentId, equipment: s.source },
         target: { equipmentProfileId: s.targetEquipmentId, equipment: s.target },
         scaled: s.scaled,

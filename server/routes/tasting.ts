@@ -9,7 +9,8 @@ import * as tasting from '../services/tasting';
 const batchParams = z.strictObject({ batchId: idParam });
 const noteParams = z.strictObject({ batchId: idParam, noteId: idParam });
 /** Notes are append-only: a change or delete answers 405, after the usual 404 for another brewery's note. */
-const appendOnly = (req: Request) => tasting.refuseNoteChange(actor(req), Number(req.params.batchId), Number(req.params.noteId));
+const appendOnly = (req: Request) =>
+  tasting.refuseNoteChange(actor(req), Number(req.params.batchId), Number(req.params.noteId));
 
 export const tastingRouter = defineRouter('/api/batches', [
   {
@@ -32,7 +33,25 @@ export const tastingRouter = defineRouter('/api/batches', [
       res.status(created ? 201 : 200).json(note);
     },
   },
-  { method: 'patch', path: '/:batchId/tasting-notes/:noteId', access: BREWING_ROLES, params: noteParams, handler: appendOnly },
-  { method: 'put', path: '/:batchId/tasting-notes/:noteId', access: BREWING_ROLES, params: noteParams, handler: appendOnly },
-  { method: 'delete', path: '/:batchId/tasting-notes/:noteId', access: BREWING_ROLES, params: noteParams, handler: appendOnly },
+  {
+    method: 'patch',
+    path: '/:batchId/tasting-notes/:noteId',
+    access: BREWING_ROLES,
+    params: noteParams,
+    handler: appendOnly,
+  },
+  {
+    method: 'put',
+    path: '/:batchId/tasting-notes/:noteId',
+    access: BREWING_ROLES,
+    params: noteParams,
+    handler: appendOnly,
+  },
+  {
+    method: 'delete',
+    path: '/:batchId/tasting-notes/:noteId',
+    access: BREWING_ROLES,
+    params: noteParams,
+    handler: appendOnly,
+  },
 ]);

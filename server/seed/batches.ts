@@ -11,7 +11,8 @@ const DAY_MS = 86_400_000;
 export async function seedBatches({ brewery, users, transaction }: DemoContext): Promise<void> {
   const recipes = await Recipe.findAll({ where: { breweryId: brewery.id }, order: [['id', 'ASC']], transaction });
   const head = { id: users.head_brewer.id, breweryId: brewery.id };
-  const latest = async (recipeId: number) => (await RecipeVersion.findOne({ where: { recipeId }, order: [['number', 'DESC']], transaction }))!;
+  const latest = async (recipeId: number) =>
+    (await RecipeVersion.findOne({ where: { recipeId }, order: [['number', 'DESC']], transaction }))!;
 
   // Last week's flagship: brewed, logged step by step on the tablet, now fermenting.
   const flagship = await latest(recipes[0]!.id);
@@ -19,8 +20,18 @@ export async function seedBatches({ brewery, users, transaction }: DemoContext):
   await freezeRecipeVersion(brewery.id, flagship.id, transaction);
   const brewDay = new Date(Date.now() - 6 * DAY_MS);
   brewDay.setUTCHours(11, 0, 0, 0);
-  const brewed = await createBatchFromPlan(head, brewedPlan, { brewDate: brewDay.toISOString().slice(0, 10) }, transaction);
-  const assistant = { id: users.assistant_brewer.id, breweryId: brewery.id, role: users.assistant_brewer.role, displayName: users.assistant_brewer.displayName };
+  const brewed = await createBatchFromPlan(
+    head,
+    brewedPlan,
+    { brewDate: brewDay.toISOString().slice(0, 10) },
+    transaction,
+  );
+  const assistant = {
+    id: users.assistant_brewer.id,
+    breweryId: brewery.id,
+    role: users.assistant_brewer.role,
+    displayName: users.assistant_brewer.displayName,
+  };
   const c = brewedPlan.computed;
   const measured: Record<string, Record<string, number>> = {
     'strike-water': { tempC: c.strikeTempC + 0.4, volumeL: c.volumes.strikeL },
@@ -37,7 +48,11 @@ export async function seedBatches({ brewery, users, transaction }: DemoContext):
       assistant,
       brewed.id,
       { kind: 'step', stepKey: step.key, label: step.label, meaning: 'performed', ...(m ? { measurements: m } : {}) },
-      { idempotencyKey: `demo-${brewed.id}-${step.key}`.padEnd(16, '0'), capturedAt: new Date(brewDay.getTime() + minute * 60_000), deviceId: 'demo-tablet-1' },
+      {
+        idempotencyKey: `demo-${brewed.id}-${step.key}`.padEnd(16, '0'),
+        capturedAt: new Date(brewDay.getTime() + minute * 60_000),
+        deviceId: 'demo-tablet-1',
+      },
       { transaction },
     );
   }
@@ -47,5 +62,10 @@ export async function seedBatches({ brewery, users, transaction }: DemoContext):
   const next = await latest(recipes[1]?.id ?? recipes[0]!.id);
   const nextPlan = await planForBatch(brewery.id, { recipeVersionId: next.id }, transaction);
   await freezeRecipeVersion(brewery.id, next.id, transaction);
-  await createBatchFromPlan(head, nextPlan, { brewDate: new Date(Date.now() + 2 * DAY_MS).toISOString().slice(0, 10) }, transaction);
+  await createBatchFromPlan(
+    head,
+    nextPlan,
+    { brewDate: new Date(Date.now() + 2 * DAY_MS).toISOString().slice(0, 10) },
+    transaction,
+  );
 }

@@ -22,7 +22,15 @@ export async function seedCellar({ brewery, users, transaction }: DemoContext): 
   for (const v of VESSELS) {
     vessels.push(
       await Vessel.create(
-        { breweryId: brewery.id, name: v.name, type: v.type, capacityL: usBblToL(v.bbl), ratedPressureKpa: psiToKpa(v.psi), status: 'clean', currentBatchId: null },
+        {
+          breweryId: brewery.id,
+          name: v.name,
+          type: v.type,
+          capacityL: usBblToL(v.bbl),
+          ratedPressureKpa: psiToKpa(v.psi),
+          status: 'clean',
+          currentBatchId: null,
+        },
         { transaction },
       ),
     );
@@ -30,11 +38,19 @@ export async function seedCellar({ brewery, users, transaction }: DemoContext): 
   const fermenting = await Batch.findOne({ where: { breweryId: brewery.id, status: 'fermenting' }, transaction });
   if (!fermenting) return;
   await assignVessel(brewery.id, fermenting.id, vessels[0]!.id, transaction);
-  const knockout = await BatchLogEntry.findOne({ where: { batchId: fermenting.id, stepKey: 'knockout-end' }, transaction });
+  const knockout = await BatchLogEntry.findOne({
+    where: { batchId: fermenting.id, stepKey: 'knockout-end' },
+    transaction,
+  });
   const start = knockout ? new Date(knockout.capturedAt).getTime() : Date.now() - 6 * 24 * HOUR_MS;
   const og = fermenting.plannedOg - 0.002;
   const fg = fermenting.plan.computed.fg;
-  const assistant = { id: users.assistant_brewer.id, breweryId: brewery.id, role: users.assistant_brewer.role, displayName: users.assistant_brewer.displayName };
+  const assistant = {
+    id: users.assistant_brewer.id,
+    breweryId: brewery.id,
+    role: users.assistant_brewer.role,
+    displayName: users.assistant_brewer.displayName,
+  };
   // A reading about every 24 h, the last one this morning; the curve falls as a slow ale does.
   for (let hours = 2; start + hours * HOUR_MS < Date.now() - 6 * HOUR_MS; hours += 24) {
     const atMs = start + hours * HOUR_MS;
@@ -50,7 +66,11 @@ export async function seedCellar({ brewery, users, transaction }: DemoContext): 
         temp: Number(cToF(18.6 + Math.min(1, days / 3) * 0.8).toFixed(1)),
         tempUnit: 'f',
       },
-      { idempotencyKey: `demo-reading-${fermenting.id}-${hours}`.padEnd(16, '0'), capturedAt: new Date(atMs), deviceId: 'demo-tablet-1' },
+      {
+        idempotencyKey: `demo-reading-${fermenting.id}-${hours}`.padEnd(16, '0'),
+        capturedAt: new Date(atMs),
+        deviceId: 'demo-tablet-1',
+      },
       transaction,
     );
   }

@@ -32,7 +32,10 @@ export async function seedDemo(): Promise<boolean> {
   if (await User.findOne({ where: { email: DEMO_PEOPLE[0]!.email } })) return false;
   const passwordHash = await hashPassword(DEMO_PASSWORD);
   await sequelize.transaction(async (transaction) => {
-    const brewery = await createBrewery({ name: 'Tidewrack Brewing Co.', unitSystem: 'us', timeZone: 'America/Halifax' }, transaction);
+    const brewery = await createBrewery(
+      { name: 'Tidewrack Brewing Co.', unitSystem: 'us', timeZone: 'America/Halifax' },
+      transaction,
+    );
     const users = {} as Record<Role, User>;
     for (const person of DEMO_PEOPLE) {
       users[person.role] = await User.create(

@@ -51,21 +51,47 @@ export const DEMO_EQUIPMENT: Record<'pilot' | 'mid' | 'big', EquipmentInput> = {
 };
 
 /** The harbour town's mains water (invented figures). */
-const HARBOUR_TAP: WaterProfile = { calciumPpm: 18, magnesiumPpm: 4, sodiumPpm: 12, sulfatePpm: 14, chloridePpm: 20, bicarbonatePpm: 45 };
+const HARBOUR_TAP: WaterProfile = {
+  calciumPpm: 18,
+  magnesiumPpm: 4,
+  sodiumPpm: 12,
+  sulfatePpm: 14,
+  chloridePpm: 20,
+  bicarbonatePpm: 45,
+};
 
-const malt = (name: string, ppg: number, colourLovibond: number, weightKg: number) => ({ name, potential: { ppg }, colourLovibond, stage: 'mash' as const, weightKg });
+const malt = (name: string, ppg: number, colourLovibond: number, weightKg: number) => ({
+  name,
+  potential: { ppg },
+  colourLovibond,
+  stage: 'mash' as const,
+  weightKg,
+});
 
 /** The seasonal: roasted quince and golden beet in the boil, a warming spice blend at the end. Written for the pilot kit. */
 export const SEASONAL_CONTENT: RecipeVersionContent = {
   grainBill: {
     mode: 'weight',
-    items: [malt('Pale ale malt', 37, 3, 8), malt('Munich malt', 35, 9, 1.4), malt('Caramel 40', 34, 40, 0.6), malt('Flaked oats', 33, 1, 0.35)],
+    items: [
+      malt('Pale ale malt', 37, 3, 8),
+      malt('Munich malt', 35, 9, 1.4),
+      malt('Caramel 40', 34, 40, 0.6),
+      malt('Flaked oats', 33, 1, 0.35),
+    ],
   },
   hops: [
     { name: 'Earthy English-type hop', alphaAcidPct: 5.5, form: 'pellet', use: 'boil', minutes: 60, weightG: 66 },
     { name: 'Noble-type aroma hop', alphaAcidPct: 4, form: 'pellet', use: 'boil', minutes: 10, weightG: 30 },
   ],
-  yeast: { name: 'English ale yeast', strainType: 'ale', attenuationPct: 72, attenuationLowPct: 68, attenuationHighPct: 75, pitchTempC: 18, pitchRateMillionCellsPerMlPerPlato: 0.75 },
+  yeast: {
+    name: 'English ale yeast',
+    strainType: 'ale',
+    attenuationPct: 72,
+    attenuationLowPct: 68,
+    attenuationHighPct: 75,
+    pitchTempC: 18,
+    pitchRateMillionCellsPerMlPerPlato: 0.75,
+  },
   mash: {
     grainTempC: 17,
     steps: [
@@ -97,7 +123,9 @@ export const SEASONAL_CONTENT: RecipeVersionContent = {
       preparation: [
         { text: 'Weigh quince and golden beet 2 : 1 by weight; scrub the beet.' },
         { text: 'Quarter and core the quince, keep the skin; cut the beet into 2 cm cubes.' },
-        { text: 'Toss with 5 % of their weight in brown sugar; roast at 190 °C (375 °F) for 50–60 min until soft and edged dark.' },
+        {
+          text: 'Toss with 5 % of their weight in brown sugar; roast at 190 °C (375 °F) for 50–60 min until soft and edged dark.',
+        },
         { text: 'Scrape the roasting juices into the bags with the pieces; cool covered if roasting the day before.' },
       ],
     },
@@ -131,12 +159,42 @@ const PALE_V1: RecipeVersionContent = {
   hops: [
     { name: 'Bittering hop, high alpha', alphaAcidPct: 13, form: 'pellet', use: 'boil', minutes: 60, weightG: 900 },
     { name: 'Citrus aroma hop', alphaAcidPct: 10, form: 'pellet', use: 'boil', minutes: 10, weightG: 1400 },
-    { name: 'Citrus aroma hop', alphaAcidPct: 10, form: 'pellet', use: 'whirlpool', minutes: 20, whirlpoolTempC: 85, weightG: 2200 },
+    {
+      name: 'Citrus aroma hop',
+      alphaAcidPct: 10,
+      form: 'pellet',
+      use: 'whirlpool',
+      minutes: 20,
+      whirlpoolTempC: 85,
+      weightG: 2200,
+    },
     { name: 'Citrus aroma hop', alphaAcidPct: 10, form: 'pellet', use: 'dryHop', minutes: 0, weightG: 4500 },
   ],
-  yeast: { name: 'Clean American ale yeast', strainType: 'ale', attenuationPct: 77, attenuationLowPct: 73, attenuationHighPct: 80, pitchTempC: 18, pitchRateMillionCellsPerMlPerPlato: 0.75 },
-  mash: { grainTempC: 18, steps: [{ name: 'Single infusion', tempC: 66, minutes: 60, method: 'infusion' }, { name: 'Mash out', tempC: 76, minutes: 10, method: 'recirculate' }] },
-  water: { mode: 'additions', source: HARBOUR_TAP, mashSalts: [{ salt: 'gypsum', grams: 110 }, { salt: 'calciumChlorideDihydrate', grams: 35 }], spargeSalts: [{ salt: 'gypsum', grams: 60 }] },
+  yeast: {
+    name: 'Clean American ale yeast',
+    strainType: 'ale',
+    attenuationPct: 77,
+    attenuationLowPct: 73,
+    attenuationHighPct: 80,
+    pitchTempC: 18,
+    pitchRateMillionCellsPerMlPerPlato: 0.75,
+  },
+  mash: {
+    grainTempC: 18,
+    steps: [
+      { name: 'Single infusion', tempC: 66, minutes: 60, method: 'infusion' },
+      { name: 'Mash out', tempC: 76, minutes: 10, method: 'recirculate' },
+    ],
+  },
+  water: {
+    mode: 'additions',
+    source: HARBOUR_TAP,
+    mashSalts: [
+      { salt: 'gypsum', grams: 110 },
+      { salt: 'calciumChlorideDihydrate', grams: 35 },
+    ],
+    spargeSalts: [{ salt: 'gypsum', grams: 60 }],
+  },
   adjuncts: [],
   spices: [],
   fermentation: { primaryTempC: 19, crashTempC: 1, co2Volumes: 2.5 },
@@ -166,10 +224,27 @@ const STOUT: RecipeVersionContent = {
       malt('Caramel 120', 33, 120, 5),
     ],
   },
-  hops: [{ name: 'Earthy English-type hop', alphaAcidPct: 5.5, form: 'pellet', use: 'boil', minutes: 60, weightG: 1300 }],
-  yeast: { name: 'English ale yeast', strainType: 'ale', attenuationPct: 70, attenuationLowPct: 67, attenuationHighPct: 74, pitchTempC: 18 },
+  hops: [
+    { name: 'Earthy English-type hop', alphaAcidPct: 5.5, form: 'pellet', use: 'boil', minutes: 60, weightG: 1300 },
+  ],
+  yeast: {
+    name: 'English ale yeast',
+    strainType: 'ale',
+    attenuationPct: 70,
+    attenuationLowPct: 67,
+    attenuationHighPct: 74,
+    pitchTempC: 18,
+  },
   mash: { grainTempC: 17, steps: [{ name: 'Single infusion', tempC: 68, minutes: 60, method: 'infusion' }] },
-  water: { mode: 'additions', source: HARBOUR_TAP, mashSalts: [{ salt: 'calciumChlorideDihydrate', grams: 60 }, { salt: 'chalk', grams: 25 }], spargeSalts: [] },
+  water: {
+    mode: 'additions',
+    source: HARBOUR_TAP,
+    mashSalts: [
+      { salt: 'calciumChlorideDihydrate', grams: 60 },
+      { salt: 'chalk', grams: 25 },
+    ],
+    spargeSalts: [],
+  },
   adjuncts: [],
   spices: [],
   fermentation: { primaryTempC: 19, crashTempC: 2, co2Volumes: 2.1 },
@@ -190,7 +265,15 @@ const LAGER: RecipeVersionContent = {
     { name: 'Noble-type aroma hop', alphaAcidPct: 4, form: 'pellet', use: 'boil', minutes: 60, weightG: 2200 },
     { name: 'Noble-type aroma hop', alphaAcidPct: 4, form: 'pellet', use: 'boil', minutes: 15, weightG: 1200 },
   ],
-  yeast: { name: 'Lager yeast', strainType: 'lager', attenuationPct: 80, attenuationLowPct: 76, attenuationHighPct: 83, pitchTempC: 9, pitchRateMillionCellsPerMlPerPlato: 1.5 },
+  yeast: {
+    name: 'Lager yeast',
+    strainType: 'lager',
+    attenuationPct: 80,
+    attenuationLowPct: 76,
+    attenuationHighPct: 83,
+    pitchTempC: 9,
+    pitchRateMillionCellsPerMlPerPlato: 1.5,
+  },
   mash: {
     grainTempC: 16,
     steps: [
@@ -235,15 +318,29 @@ export const DEMO_RECIPES: DemoRecipe[] = [
       { changeNote: 'Less bittering, more whirlpool hop at a warmer stand', content: PALE_V2 },
     ],
   },
-  { name: 'Lamplighter Oat Stout', style: 'Oatmeal stout', description: 'Dark, smooth, roasty.', status: 'active', equipment: 'mid', versions: [{ changeNote: 'First recipe', content: STOUT }] },
-  { name: 'Slack Water Lager', style: 'Pale lager', description: 'Crisp house lager.', status: 'active', equipment: 'big', versions: [{ changeNote: 'First recipe', content: LAGER }] },
+  {
+    name: 'Lamplighter Oat Stout',
+    style: 'Oatmeal stout',
+    description: 'Dark, smooth, roasty.',
+    status: 'active',
+    equipment: 'mid',
+    versions: [{ changeNote: 'First recipe', content: STOUT }],
+  },
+  {
+    name: 'Slack Water Lager',
+    style: 'Pale lager',
+    description: 'Crisp house lager.',
+    status: 'active',
+    equipment: 'big',
+    versions: [{ changeNote: 'First recipe', content: LAGER }],
+  },
   {
     name: SEASONAL_NAME,
     style: 'Spiced fruit and vegetable amber ale',
-    description: 'Winter seasonal with roasted quince, golden beet and a warming spice blend. Piloted on the 10 gal kit.',
+    description:
+      'Winter seasonal with roasted quince, golden beet and a warming spice blend. Piloted on the 10 gal kit.',
     status: 'draft',
     equipment: 'pilot',
     versions: [{ changeNote: 'Pilot recipe', content: SEASONAL_CONTENT }],
   },
 ];
-

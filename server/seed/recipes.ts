@@ -11,11 +11,17 @@ export async function seedRecipes({ brewery, users, transaction }: DemoContext):
     equipment[key] = await EquipmentProfile.create({ breweryId: brewery.id, ...profile }, { transaction });
   }
   for (const demo of DEMO_RECIPES) {
-    const recipe = await Recipe.create({ breweryId: brewery.id, name: demo.name, style: demo.style, description: demo.description, status: demo.status }, { transaction });
+    const recipe = await Recipe.create(
+      { breweryId: brewery.id, name: demo.name, style: demo.style, description: demo.description, status: demo.status },
+      { transaction },
+    );
     const profile = DEMO_EQUIPMENT[demo.equipment];
     let number = 0;
     for (const v of demo.versions) {
-      const c = computeRecipe(toRecipeInput(demo.name, v.content), equipmentAtVolume(profile, v.content.targets.batchVolumeL));
+      const c = computeRecipe(
+        toRecipeInput(demo.name, v.content),
+        equipmentAtVolume(profile, v.content.targets.batchVolumeL),
+      );
       await RecipeVersion.create(
         {
           breweryId: brewery.id,

@@ -46,7 +46,8 @@ const BEERS: DemoBeer[] = [
     fgOffset: 0.001,
     stage: 'released',
     sheet: {
-      description: 'Our harbour-side session pour: toasty biscuit malt, a gentle earthy bitterness and a clean, dry finish that keeps the next sip coming.',
+      description:
+        'Our harbour-side session pour: toasty biscuit malt, a gentle earthy bitterness and a clean, dry finish that keeps the next sip coming.',
       glass: 'nonic_pint',
       servingTempC: 10,
       servingNotes: 'Pour gently down the side; a slim, tight head.',
@@ -54,8 +55,26 @@ const BEERS: DemoBeer[] = [
       comingSoon: false,
     },
     notes: [
-      { who: 'head_brewer', content: note(4, 'Toasted bread, faint orange marmalade', 'Biscuit malt, earthy hop, dry finish', 'Right where we want it', 'amber') },
-      { who: 'assistant_brewer', content: note(4.5, 'Bread crust and a little honey', 'Malty then dry, soft bitterness', 'Very easy drinking', 'copper') },
+      {
+        who: 'head_brewer',
+        content: note(
+          4,
+          'Toasted bread, faint orange marmalade',
+          'Biscuit malt, earthy hop, dry finish',
+          'Right where we want it',
+          'amber',
+        ),
+      },
+      {
+        who: 'assistant_brewer',
+        content: note(
+          4.5,
+          'Bread crust and a little honey',
+          'Malty then dry, soft bitterness',
+          'Very easy drinking',
+          'copper',
+        ),
+      },
     ],
   },
   {
@@ -65,14 +84,26 @@ const BEERS: DemoBeer[] = [
     fgOffset: -0.001,
     stage: 'released',
     sheet: {
-      description: 'Black as the harbour at night: roasted barley and cocoa up front, oats for a silky body, and a quiet coffee bitterness on the way out.',
+      description:
+        'Black as the harbour at night: roasted barley and cocoa up front, oats for a silky body, and a quiet coffee bitterness on the way out.',
       glass: 'shaker_pint',
       servingTempC: 11,
       servingNotes: 'Serve cellar-cool, not ice-cold; a thick tan head.',
       allergens: ['gluten'],
       comingSoon: false,
     },
-    notes: [{ who: 'head_brewer', content: note(4.5, 'Dark chocolate, roast coffee, a little toffee', 'Roast first, then smooth oats and a dry finish', 'Body is right where we want it', 'near black') }],
+    notes: [
+      {
+        who: 'head_brewer',
+        content: note(
+          4.5,
+          'Dark chocolate, roast coffee, a little toffee',
+          'Roast first, then smooth oats and a dry finish',
+          'Body is right where we want it',
+          'near black',
+        ),
+      },
+    ],
   },
   {
     recipeIndex: 2,
@@ -81,7 +112,8 @@ const BEERS: DemoBeer[] = [
     fgOffset: 0.002,
     stage: 'conditioning',
     sheet: {
-      description: 'A crisp, softly bready pale lager with a floral hop note, lagering now in the bright tank and due on tap soon.',
+      description:
+        'A crisp, softly bready pale lager with a floral hop note, lagering now in the bright tank and due on tap soon.',
       glass: 'stange',
       servingTempC: 4,
       servingNotes: '',
@@ -95,26 +127,50 @@ const BEERS: DemoBeer[] = [
 
 async function brew(ctx: DemoContext, beer: DemoBeer, recipe: Recipe, t: Transaction): Promise<Batch> {
   const { brewery, users } = ctx;
-  const assistant: LogActor = { id: users.assistant_brewer.id, breweryId: brewery.id, role: 'assistant_brewer', displayName: users.assistant_brewer.displayName };
-  const version = (await RecipeVersion.findOne({ where: { recipeId: recipe.id }, order: [['number', 'DESC']], transaction: t }))!;
+  const assistant: LogActor = {
+    id: users.assistant_brewer.id,
+    breweryId: brewery.id,
+    role: 'assistant_brewer',
+    displayName: users.assistant_brewer.displayName,
+  };
+  const version = (await RecipeVersion.findOne({
+    where: { recipeId: recipe.id },
+    order: [['number', 'DESC']],
+    transaction: t,
+  }))!;
   const plan = await planForBatch(brewery.id, { recipeVersionId: version.id }, t);
   await freezeRecipeVersion(brewery.id, version.id, t);
   const brewDay = new Date(Date.now() - beer.brewedDaysAgo * DAY_MS);
   brewDay.setUTCHours(11, 0, 0, 0);
-  const batch = await createBatchFromPlan({ id: users.head_brewer.id, breweryId: brewery.id }, plan, { brewDate: brewDay.toISOString().slice(0, 10) }, t);
+  const batch = await createBatchFromPlan(
+    { id: users.head_brewer.id, breweryId: brewery.id },
+    plan,
+    { brewDate: brewDay.toISOString().slice(0, 10) },
+    t,
+  );
   const c = plan.computed;
   const og = Math.round((c.og + beer.ogOffset) * 1000) / 1000;
   const fg = Math.round((c.fg + beer.fgOffset) * 1000) / 1000;
   const knockoutL = c.volumes.knockoutL * 0.97;
   const at = (minutes: number) => new Date(brewDay.getTime() + minutes * 60_000);
   let n = 0;
-  const meta = (capturedAt: Date) => ({ idempotencyKey: `demo-taproom-${batch.id}-${(n += 1)}`.padEnd(16, '0'), capturedAt, deviceId: 'demo-tablet-1' });
+  const meta = (capturedAt: Date) => ({
+    idempotencyKey: `demo-taproom-${batch.id}-${(n += 1)}`.padEnd(16, '0'),
+    capturedAt,
+    deviceId: 'demo-tablet-1',
+  });
 
   let minute = 0;
   for (const step of brewDaySteps(plan)) {
     minute += step.boilMinute !== undefined ? 5 : 18;
     const measurements = step.key === 'knockout-end' ? { gravitySg: og, volumeL: knockoutL, tempC: 18.5 } : undefined;
-    await appendLogEntry(assistant, batch.id, { kind: 'step', stepKey: step.key, label: step.label, ...(measurements ? { measurements } : {}) }, meta(at(minute)), { transaction: t });
+    await appendLogEntry(
+      assistant,
+      batch.id,
+      { kind: 'step', stepKey: step.key, label: step.label, ...(measurements ? { measurements } : {}) },
+      meta(at(minute)),
+      { transaction: t },
+    );
   }
   await batch.update({ status: 'fermenting' }, { transaction: t });
 
@@ -122,7 +178,13 @@ async function brew(ctx: DemoContext, beer: DemoBeer, recipe: Recipe, t: Transac
   const readings = [og - (og - fg) * 0.45, og - (og - fg) * 0.85, fg + 0.001, fg];
   for (const [i, raw] of readings.entries()) {
     const sg = Math.round(raw * 1000) / 1000;
-    await writeReading(assistant, batch.id, { kind: 'reading', method: 'hydrometer', gravity: sg, gravityUnit: 'sg', temp: 19, tempUnit: 'c' }, meta(at(60 * 24 * (2 + i * 2))), t);
+    await writeReading(
+      assistant,
+      batch.id,
+      { kind: 'reading', method: 'hydrometer', gravity: sg, gravityUnit: 'sg', temp: 19, tempUnit: 'c' },
+      meta(at(60 * 24 * (2 + i * 2))),
+      t,
+    );
   }
   await batch.update({ status: 'conditioning' }, { transaction: t });
   if (beer.stage === 'conditioning') return batch;
@@ -136,7 +198,17 @@ async function brew(ctx: DemoContext, beer: DemoBeer, recipe: Recipe, t: Transac
     transaction: t,
     onInsert: async (entry, tx) => {
       const packagedL = lines.reduce((sum, line) => sum + lineVolumeL(line), 0);
-      await PackagingRun.create({ breweryId: brewery.id, batchId: batch.id, logEntryId: Number(entry.id), packagedAt: m.capturedAt, lines, packagedL }, { transaction: tx });
+      await PackagingRun.create(
+        {
+          breweryId: brewery.id,
+          batchId: batch.id,
+          logEntryId: Number(entry.id),
+          packagedAt: m.capturedAt,
+          lines,
+          packagedL,
+        },
+        { transaction: tx },
+      );
     },
   });
   await batch.update({ status: 'packaged' }, { transaction: t });
@@ -150,7 +222,12 @@ export async function seedTaproom(ctx: DemoContext): Promise<void> {
     const batch = await brew(ctx, beer, recipes[beer.recipeIndex % recipes.length]!, t);
     for (const [i, n] of beer.notes.entries()) {
       const u = users[n.who];
-      await addTastingNote({ id: u.id, breweryId: brewery.id, role: u.role, email: u.email, displayName: u.displayName }, batch.id, { idempotencyKey: `demo-tasting-${batch.id}-${i}`, content: n.content }, t);
+      await addTastingNote(
+        { id: u.id, breweryId: brewery.id, role: u.role, email: u.email, displayName: u.displayName },
+        batch.id,
+        { idempotencyKey: `demo-tasting-${batch.id}-${i}`, content: n.content },
+        t,
+      );
     }
     if (!beer.sheet) continue;
     const { comingSoon, ...sheet } = beer.sheet;

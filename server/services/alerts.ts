@@ -19,7 +19,15 @@ const sg3 = (sg: number) => sg.toFixed(3);
 async function raise(batch: Batch, kind: AlertKind, message: string, occasion = ''): Promise<boolean> {
   let alert: Alert;
   try {
-    alert = await Alert.create({ breweryId: batch.breweryId, batchId: batch.id, kind, occasion, message, emailedAt: null, readAt: null });
+    alert = await Alert.create({
+      breweryId: batch.breweryId,
+      batchId: batch.id,
+      kind,
+      occasion,
+      message,
+      emailedAt: null,
+      readAt: null,
+    });
   } catch (error) {
     if (error instanceof UniqueConstraintError) return false; // already raised: sent once only
     throw error;
@@ -33,7 +41,9 @@ async function raise(batch: Batch, kind: AlertKind, message: string, occasion = 
 
 /** E-mails every head brewer of the brewery, then marks the alert sent. */
 async function emailAlert(alert: Alert, batch: Batch): Promise<void> {
-  const headBrewers = await User.findAll({ where: { breweryId: batch.breweryId, role: 'head_brewer', disabledAt: null } });
+  const headBrewers = await User.findAll({
+    where: { breweryId: batch.breweryId, role: 'head_brewer', disabledAt: null },
+  });
   for (const person of headBrewers) {
     await sendMail({
       to: person.email,
@@ -50,15 +60,37 @@ export async function evaluateReadingAlerts(breweryId: number, batchId: number):
   if (!batch || batch.status !== 'fermenting') return;
   const plan = await cellarPlanFor(batch);
   const trigger = dRestTriggerSg(plan.plannedFg, plan.dRestPoints);
-  const readings = await GravityReading.findAll({ where: { batchId, [Op.and]: [IN_FORCE] }, order: [['takenAt', 'ASC'], ['id', 'ASC']], attributes: ['sg', 'takenAt'] });
+  const readings = await GravityReading.findAll({
+    where: { batchId, [Op.and]: [IN_FORCE] },
+    order: [
+      ['takenAt', 'ASC'],
+      ['id', 'ASC'],
+    ],
+    attributes: ['sg', 'takenAt'],
+  });
   const dRestLogged = await BatchLogEntry.count({ where: { batchId, kind: 'action', stepKey: 'd_rest' } });
 
-  const crossing = readings.findIndex((r, i) => crossesDRestTrigger(i === 0 ? null : readings[i - 1]!.sg, r.sg, trigger));
+  const crossing = readings.findIndex((r, i) =>
+    crossesDRestTrigger(i === 0 ? null : readings[i - 1]!.sg, r.sg, trigger),
+  );
   if (crossing >= 0 && !dRestLogged) {
-    await raise(batch, 'd_rest', `Gravity ${sg3(readings[crossing]!.sg)} reached the D-rest trigger (${sg3(trigger)}): start the D-rest`);
+    await raise(
+      batch,
+      'd_rest',
+      `Gravity ${sg3(readings[crossing]!.sg)} reached the D-rest trigger (${sg3(trigger)}): start the D-rest`,
+    );
   }
-  if (gravityStalled(readings.slice(-3).map((r) => r.sg), trigger)) {
-    await raise(batch, 'stalled', `Gravity has not moved across three readings (${sg3(readings[readings.length - 1]!.sg)}), above the D-rest trigger`);
+  if (
+    gravityStalled(
+      readings.slice(-3).map((r) => r.sg),
+      trigger,
+    )
+  ) {
+    await raise(
+      batch,
+      'stalled',
+      `Gravity has not moved across three readings (${sg3(readings[readings.length - 1]!.sg)}), above the D-rest trigger`,
+    );
   }
 }
 
@@ -68,14 +100,19 @@ export async function evaluateReadingAlerts(breweryId: number, batchId: number):
  */
 export async function sweepOverdueReadings(now = new Date()): Promise<number> {
   // A minute's grace, so an alert whose e-mail is being sent right now is not sent twice.
-  for (const alert of await Alert.findAll({ where: { emailedAt: null, createdAt: { [Op.lt]: new Date(Date.now() - 60_000) } } })) {
+  for (const alert of await Alert.findAll({
+    where: { emailedAt: null, createdAt: { [Op.lt]: new Date(Date.now() - 60_000) } },
+  })) {
     const batch = await Batch.findByPk(alert.batchId);
     if (batch) await emailAlert(alert, batch);
   }
   const batches = await Batch.findAll({ where: { status: 'fermenting' } });
   if (batches.length === 0) return 0;
   const timeByBatch = async (sql: string) => {
-    const rows = await sequelize.query<{ batchId: number; at: Date }>(sql, { type: QueryTypes.SELECT, replacements: { ids: batches.map((b) => b.id) } });
+    const rows = await sequelize.query<{ batchId: number; at: Date }>(sql, {
+      type: QueryTypes.SELECT,
+      replacements: { ids: batches.map((b) => b.id) },
+    });
     return new Map(rows.map((r) => [Number(r.batchId), new Date(r.at)]));
   };
   const [lastReadings, knockouts] = await Promise.all([
@@ -92,7 +129,15 @@ export async function sweepOverdueReadings(now = new Date()): Promise<number> {
     const since = lastReadings.get(batch.id) ?? knockouts.get(batch.id) ?? batch.updatedAt;
     if (readingOverdue(since.getTime(), now.getTime(), plan.readingIntervalHours)) {
       // Once per lapse: the next reading starts a new one.
-      if (await raise(batch, 'overdue', `No gravity reading for over ${plan.readingIntervalHours} hours`, since.toISOString())) raised += 1;
+      if (
+        await raise(
+          batch,
+          'overdue',
+          `No gravity reading for over ${plan.readingIntervalHours} hours`,
+          since.toISOString(),
+        )
+      )
+        raised += 1;
     }
   }
   return raised;
@@ -100,8 +145,18 @@ export async function sweepOverdueReadings(now = new Date()): Promise<number> {
 
 /** The brewery's alerts, newest first (unread first). */
 export async function listAlerts(breweryId: number): Promise<AlertView[]> {
-  const alerts = await Alert.findAll({ where: { breweryId }, order: [['readAt', 'ASC'], ['createdAt', 'DESC']], limit: 100 });
-  const batches = await Batch.findAll({ where: { id: { [Op.in]: [...new Set(alerts.map((a) => a.batchId))] } }, attributes: ['id', 'number', 'beerName'] });
+  const alerts = await Alert.findAll({
+    where: { breweryId },
+    order: [
+      ['readAt', 'ASC'],
+      ['createdAt', 'DESC'],
+    ],
+    limit: 100,
+  });
+  const batches = await Batch.findAll({
+    where: { id: { [Op.in]: [...new Set(alerts.map((a) => a.batchId))] } },
+    attributes: ['id', 'number', 'beerName'],
+  });
   const byId = new Map(batches.map((b) => [b.id, b]));
   return alerts.map((a) => ({
     id: a.id,

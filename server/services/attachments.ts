@@ -28,20 +28,23 @@ const ACCEPTED: Record<string, { kind: AttachmentKind; extension: string }> = {
 const unsupported = () =>
   new HttpError(415, 'unsupported_type', 'Attach a photo (JPEG, PNG or WebP) or a PDF. This file is none of those.');
 
-const parser = multer({ storage: multer.memoryStorage(), limits: { fileSize: UPLOAD_MAX_BYTES, files: 1, fields: 5 } }).single('file');
+const parser = multer({
+  storage: multer.memoryStorage(),
+  limits: { fileSize: UPLOAD_MAX_BYTES, files: 1, fields: 5 },
+}).single('file');
 
 /** Reads one multipart file into memory, refusing anything over the cap with 413 before it is all buffered. */
 export const receiveFile: RequestHandler = (req, res, next) => {
   parser(req, res, (err: unknown) => {
     if (!err) return next();
     if (err instanceof multer.MulterError) {
-      if (err.code === 'LIMIT_FILE_SIZE') return next(tooLarge(`Files can be at most ${UPLOAD_MAX_BYTES / 1024 / 1024} MB.`));
+      if (err.code === 'LIMIT_FILE_SIZE')
+        return next(tooLarge(`Files can be at most ${UPLOAD_MAX_BYTES / 1024 / 1024} MB.`));
       return next(badRequest('Send one file in the field named "file".'));
     }
     next(badRequest('The upload could not be read. Try again.'));
   });
 };
-
 
 export function attachmentView(a: Attachment, uploadedBy: string): AttachmentView {
   return {
@@ -61,7 +64,10 @@ export function attachmentView(a: Attachment, uploadedBy: string): AttachmentVie
 /** A file name fit for a list: no path, no control characters. */
 function cleanName(name: string): string {
   const base = name.split(/[\\/]/).pop() ?? '';
-  const clean = base.replace(/[\u0000-\u001f\u007f]/g, '').trim().slice(0, 200);
+  const clean = base
+    .replace(/[\u0000-\u001f\u007f]/g, '')
+    .trim()
+    .slice(0, 200);
   return clean || 'Untitled';
 }
 
@@ -75,7 +81,9 @@ export async function uploadAttachment(
   if (!file) throw badRequest('Choose a file to attach.', { file: 'Choose a file to attach' });
   if (file.size === 0) throw badRequest('This file is empty.', { file: 'This file is empty' });
   if (tastingNoteId !== undefined) {
-    const note = await TastingNote.findOne({ where: { id: tastingNoteId, batchId: batch.id, breweryId: actor.breweryId } });
+    const note = await TastingNote.findOne({
+      where: { id: tastingNoteId, batchId: batch.id, breweryId: actor.breweryId },
+    });
     if (!note) throw notFound('This tasting note');
   }
   const detected = await fileTypeFromBuffer(file.buffer);
@@ -93,7 +101,10 @@ export async function uploadAttachment(
         .webp({ quality: 80 })
         .toBuffer();
     } catch {
-      throw badRequest('This picture could not be read: it may be damaged or over 100 megapixels. Try exporting it again.', { file: 'Unreadable picture' });
+      throw badRequest(
+        'This picture could not be read: it may be damaged or over 100 megapixels. Try exporting it again.',
+        { file: 'Unreadable picture' },
+      );
     }
     thumbnailKey = key.replace(/\.\w+$/, '.thumb.webp');
   }
@@ -117,7 +128,10 @@ export async function uploadAttachment(
 
 export async function listAttachments(actor: Express.User, batchId: number): Promise<AttachmentView[]> {
   const batch = await findBatch(actor.breweryId, batchId);
-  const rows = await Attachment.findAll({ where: { breweryId: actor.breweryId, batchId: batch.id }, order: [['id', 'ASC']] });
+  const rows = await Attachment.findAll({
+    where: { breweryId: actor.breweryId, batchId: batch.id },
+    order: [['id', 'ASC']],
+  });
   const people = await User.findAll({ where: { id: { [Op.in]: [...new Set(rows.map((r) => r.uploadedById))] } } });
   const names = new Map(people.map((p) => [p.id, p.displayName]));
   return rows.map((r) => attachmentView(r, names.get(r.uploadedById) ?? 'Unknown'));
@@ -145,7 +159,11 @@ export interface FileDownload {
   disposition: string;
 }
 
-export async function downloadAttachment(actor: Express.User, id: number, variant: 'file' | 'thumbnail'): Promise<FileDownload> {
+export async function downloadAttachment(
+  actor: Express.User,
+  id: number,
+  variant: 'file' | 'thumbnail',
+): Promise<FileDownload> {
   const attachment = await readableAttachment(actor, id);
   if (variant === 'thumbnail') {
     if (!attachment.thumbnailKey) throw notFound('A thumbnail of this file');
@@ -154,8 +172,12 @@ export async function downloadAttachment(actor: Express.User, id: number, varian
   const batch = await Batch.findByPk(attachment.batchId, { attributes: ['number'] });
   const extension = ACCEPTED[attachment.contentType]?.extension ?? 'bin';
   // Our own name for the download: the client's name never goes into a header.
-  const filename = `batch-${batch?.number ?? attachment.batchId}-file-${attachment.id}.${extension}`.replace(/[^A-Za-z0-9._-]/g, '-');
-  const disposition = attachment.kind === 'photo' ? `inline; filename="${filename}"` : `attachment; filename="${filename}"`;
+  const filename = `batch-${batch?.number ?? attachment.batchId}-file-${attachment.id}.${extension}`.replace(
+    /[^A-Za-z0-9._-]/g,
+    '-',
+  );
+  const disposition =
+    attachment.kind === 'photo' ? `inline; filename="${filename}"` : `attachment; filename="${filename}"`;
   return { body: await getObject(attachment.storageKey), contentType: attachment.contentType, disposition };
 }
 
@@ -167,7 +189,8 @@ export async function downloadAttachment(actor: Express.User, id: number, varian
 export async function removeAttachment(actor: Express.User, id: number): Promise<void> {
   const attachment = await Attachment.findOne({ where: { id, breweryId: actor.breweryId } });
   if (!attachment) throw notFound('This file');
-  if (attachment.tastingNoteId !== null) throw conflict('This file belongs to a signed tasting note, so it stays with the note.');
+  if (attachment.tastingNoteId !== null)
+    throw conflict('This file belongs to a signed tasting note, so it stays with the note.');
   if (await Release.count({ where: { breweryId: actor.breweryId, photoAttachmentId: attachment.id } })) {
     throw conflict('This photo is on the release sheet: choose another photo there first.');
   }

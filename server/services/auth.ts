@@ -74,7 +74,10 @@ export function me(user: Express.User): Me {
 }
 
 /** A new brewery, with the starter ingredient library every brewery begins with. */
-export async function createBrewery(fields: { name: string; unitSystem: Brewery['unitSystem']; timeZone: string }, transaction?: Transaction): Promise<Brewery> {
+export async function createBrewery(
+  fields: { name: string; unitSystem: Brewery['unitSystem']; timeZone: string },
+  transaction?: Transaction,
+): Promise<Brewery> {
   const brewery = await Brewery.create(fields, { transaction });
   await addStarterIngredients(brewery.id, transaction);
   return brewery;
@@ -84,13 +87,25 @@ export async function createBrewery(fields: { name: string; unitSystem: Brewery[
 export async function signUp(input: SignUpInput): Promise<User> {
   assertStrongPassword(input.password, [input.email, input.displayName, input.breweryName]);
   if (await User.findOne({ where: { email: input.email } })) {
-    throw badRequest('This e-mail already has an account', { email: 'This e-mail already has an account: sign in instead' });
+    throw badRequest('This e-mail already has an account', {
+      email: 'This e-mail already has an account: sign in instead',
+    });
   }
   const passwordHash = await hashPassword(input.password);
   return sequelize.transaction(async (transaction) => {
-    const brewery = await createBrewery({ name: input.breweryName, unitSystem: input.unitSystem, timeZone: input.timeZone }, transaction);
+    const brewery = await createBrewery(
+      { name: input.breweryName, unitSystem: input.unitSystem, timeZone: input.timeZone },
+      transaction,
+    );
     return User.create(
-      { breweryId: brewery.id, email: input.email, displayName: input.displayName, role: 'head_brewer', passwordHash, disabledAt: null },
+      {
+        breweryId: brewery.id,
+        email: input.email,
+        displayName: input.displayName,
+        role: 'head_brewer',
+        passwordHash,
+        disabledAt: null,
+      },
       { transaction },
     );
   });
@@ -105,7 +120,9 @@ export async function changePassword(userId: number, input: ChangePasswordInput,
   const user = await User.findByPk(userId);
   if (!user) throw unauthenticated();
   if (!(await checkPassword(input.currentPassword, user.passwordHash))) {
-    throw wrongPassword(400, 'Your current password is not right', { currentPassword: 'This is not your current password' });
+    throw wrongPassword(400, 'Your current password is not right', {
+      currentPassword: 'This is not your current password',
+    });
   }
   assertStrongPassword(input.newPassword, [user.email, user.displayName], 'newPassword');
   user.passwordHash = await hashPassword(input.newPassword);
@@ -130,7 +147,10 @@ async function issueLink(
 }
 
 /** The head brewer invites a teammate by e-mail with a role. */
-export async function inviteTeammate(inviter: Express.User, input: InviteInput): Promise<{ id: number; email: string }> {
+export async function inviteTeammate(
+  inviter: Express.User,
+  input: InviteInput,
+): Promise<{ id: number; email: string }> {
   if (await User.findOne({ where: { email: input.email } })) {
     throw conflict('This e-mail already has a Kettlewright account');
   }
@@ -192,10 +212,7 @@ export async function acceptInvite(token: string, input: AcceptInviteInput): Pro
   if (await User.findOne({ where: { email: invite.email } })) throw conflict('This e-mail already has an account');
   const passwordHash = await hashPassword(input.password);
   return sequelize.transaction(async (transaction) => {
-    const [used] = await Invite.update(
-      { usedAt: new Date() },
-      { where: { id: invite.id, usedAt: null }, transaction },
-    );
+    const [used] = await Invite.update({ usedAt: new Date() }, { where: { id: invite.id, usedAt: null }, transaction });
     if (used !== 1) throw linkGone('invite');
     return User.create(
       {
@@ -220,18 +237,21 @@ export async function requestPasswordReset(email: string, log: Logger): Promise<
   const user = await User.findOne({ where: { email } });
   if (!user || user.disabledAt) return null;
   const token = await issueLink('reset', { breweryId: user.breweryId, email, role: null, createdById: null });
-  sendMailInBackground({
-    to: email,
-    subject: 'Reset your Kettlewright password',
-    text: [
-      'Someone asked to reset the password of your Kettlewright account.',
-      '',
-      `Choose a new password here (the link works for ${RESET_HOURS} hours, once):`,
-      publicLink(`/reset/${token}`),
-      '',
-      'If it was not you, ignore this message: your password stays as it is.',
-    ].join('\n'),
-  }, log);
+  sendMailInBackground(
+    {
+      to: email,
+      subject: 'Reset your Kettlewright password',
+      text: [
+        'Someone asked to reset the password of your Kettlewright account.',
+        '',
+        `Choose a new password here (the link works for ${RESET_HOURS} hours, once):`,
+        publicLink(`/reset/${token}`),
+        '',
+        'If it was not you, ignore this message: your password stays as it is.',
+      ].join('\n'),
+    },
+    log,
+  );
   return user;
 }
 

@@ -11,7 +11,14 @@ import { Batch, BatchLogEntry, IdempotencyKey } from '../models';
 import { badRequest, conflict, notFound, unprocessable } from '../errors';
 import { fieldMessages } from '../middlewares/validate';
 import { LRUCache } from 'lru-cache';
-import { BREW_DAY_KINDS, writeMetaSchema, type ChainCheck, type LogEntry, type SignatureMeaning, type WriteMeta } from '../../shared/schemas/batch-log';
+import {
+  BREW_DAY_KINDS,
+  writeMetaSchema,
+  type ChainCheck,
+  type LogEntry,
+  type SignatureMeaning,
+  type WriteMeta,
+} from '../../shared/schemas/batch-log';
 import type { Role } from '../../shared/schemas/roles';
 
 export { batchActuals } from '../../shared/batches/brew-day';
@@ -61,8 +68,23 @@ export const sha256 = (text: string) => createHash('sha256').update(text, 'utf8'
 
 type Hashable = Pick<
   BatchLogEntry,
-  | 'breweryId' | 'batchId' | 'sequence' | 'kind' | 'stepKey' | 'data' | 'correctsEntryId' | 'reason' | 'authorId' | 'authorRole'
-  | 'authorName' | 'meaning' | 'capturedAt' | 'receivedAt' | 'deviceId' | 'late' | 'idempotencyKey'
+  | 'breweryId'
+  | 'batchId'
+  | 'sequence'
+  | 'kind'
+  | 'stepKey'
+  | 'data'
+  | 'correctsEntryId'
+  | 'reason'
+  | 'authorId'
+  | 'authorRole'
+  | 'authorName'
+  | 'meaning'
+  | 'capturedAt'
+  | 'receivedAt'
+  | 'deviceId'
+  | 'late'
+  | 'idempotencyKey'
 >;
 
 /** Everything an entry records, in one canonical form (ids as numbers, times as ISO UTC). */
@@ -103,10 +125,22 @@ export function writeMetaFromHeaders(get: (name: string) => string | undefined):
 }
 
 const requestHash = (batchId: number, input: NewLogEntry, meta: WriteMeta) =>
-  sha256(canonicalJson({ scope: 'batch-log', batchId, input, capturedAt: meta.capturedAt.toISOString(), deviceId: meta.deviceId }));
+  sha256(
+    canonicalJson({
+      scope: 'batch-log',
+      batchId,
+      input,
+      capturedAt: meta.capturedAt.toISOString(),
+      deviceId: meta.deviceId,
+    }),
+  );
 
 /** The answer to a write whose idempotency key was used before: its entry, or 422 for a different request. */
-async function replayOf(key: { scope: string; requestHash: string; resultId: number }, expectedHash: string, transaction?: Transaction): Promise<BatchLogEntry> {
+async function replayOf(
+  key: { scope: string; requestHash: string; resultId: number },
+  expectedHash: string,
+  transaction?: Transaction,
+): Promise<BatchLogEntry> {
   if (key.scope !== 'batch-log' || key.requestHash !== expectedHash) {
     throw unprocessable('This idempotency key was already used for a different request. Nothing was saved.');
   }
@@ -115,7 +149,12 @@ async function replayOf(key: { scope: string; requestHash: string; resultId: num
   return entry;
 }
 
-async function findReplay(breweryId: number, batchId: number, input: NewLogEntry, meta: WriteMeta): Promise<BatchLogEntry | null> {
+async function findReplay(
+  breweryId: number,
+  batchId: number,
+  input: NewLogEntry,
+  meta: WriteMeta,
+): Promise<BatchLogEntry | null> {
   const existing = await IdempotencyKey.findOne({ where: { breweryId, key: meta.idempotencyKey } });
   return existing ? replayOf(existing, requestHash(batchId, input, meta)) : null;
 }
@@ -148,7 +187,14 @@ interface AppendState {
  * (batch_id, sequence) index would refuse a fork anyway). READ COMMITTED keeps the read to the rows it finds:
  * no gap locks on the idempotency index, where writers of different batches would otherwise deadlock.
  */
-async function lockForAppend(breweryId: number, batchId: number, key: string | null, correctsEntryId: number | null, checkSigned: boolean, transaction: Transaction) {
+async function lockForAppend(
+  breweryId: number,
+  batchId: number,
+  key: string | null,
+  correctsEntryId: number | null,
+  checkSigned: boolean,
+  transaction: Transaction,
+) {
   const [state] = await sequelize.query<AppendState>(
     `SELECT b.status, h.sequence AS lastSequence, h.hash AS lastHash,
             k.scope AS keyScope, k.request_hash AS keyRequestHash, k.result_id AS keyResultId, t.kind AS targetKind,
@@ -169,12 +215,32 @@ type EntryFields = ReturnType<typeof entryFields>;
 type EntryRow = EntryFields & { requestHash: string; prevHash: string; hash: string };
 
 const INSERT_FIELDS = [
-  'breweryId', 'batchId', 'sequence', 'kind', 'stepKey', 'data', 'correctsEntryId', 'reason', 'authorId', 'authorRole', 'authorName',
-  'meaning', 'capturedAt', 'receivedAt', 'deviceId', 'late', 'idempotencyKey', 'requestHash', 'prevHash', 'hash',
+  'breweryId',
+  'batchId',
+  'sequence',
+  'kind',
+  'stepKey',
+  'data',
+  'correctsEntryId',
+  'reason',
+  'authorId',
+  'authorRole',
+  'authorName',
+  'meaning',
+  'capturedAt',
+  'receivedAt',
+  'deviceId',
+  'late',
+  'idempotencyKey',
+  'requestHash',
+  'prevHash',
+  'hash',
 ] as const;
 /** INSERT of `rows` entries; the table's trigger writes each one's idempotency record and audit row with it. */
 const insertSql = (rows: number) =>
-  `INSERT INTO batch_log_entries (${INSERT_FIELDS.map((f) => f.replace(/[A-Z]/g, (c) => `_${c.toLowerCase()}`)).join(', ')}) VALUES ${Array(rows)
+  `INSERT INTO batch_log_entries (${INSERT_FIELDS.map((f) => f.replace(/[A-Z]/g, (c) => `_${c.toLowerCase()}`)).join(', ')}) VALUES ${Array(
+    rows,
+  )
     .fill(`(${INSERT_FIELDS.map(() => '?').join(', ')})`)
     .join(', ')}`;
 const INSERT_ONE = insertSql(1);
@@ -183,7 +249,14 @@ const insertValues = (row: EntryRow) => INSERT_FIELDS.map((f) => (f === 'data' ?
 const INSERT_CHUNK = 500;
 
 /** An entry's columns as the next entry of its batch's chain (before its hash). */
-function entryFields(actor: LogActor, batchId: number, input: NewLogEntry, meta: WriteMeta, sequence: number, receivedAt: Date) {
+function entryFields(
+  actor: LogActor,
+  batchId: number,
+  input: NewLogEntry,
+  meta: WriteMeta,
+  sequence: number,
+  receivedAt: Date,
+) {
   const { kind, stepKey = null, correctsEntryId = null, reason = null, meaning = 'performed', ...data } = input;
   if (meta.capturedAt.getTime() > receivedAt.getTime() + CLOCK_SKEW_MS) {
     throw unprocessable('The captured time is in the future: check the tablet’s clock. Nothing was saved.');
@@ -209,13 +282,31 @@ function entryFields(actor: LogActor, batchId: number, input: NewLogEntry, meta:
   };
 }
 
-async function append(actor: LogActor, batchId: number, input: NewLogEntry, meta: WriteMeta, options: AppendOptions, transaction: Transaction): Promise<BatchLogEntry> {
+async function append(
+  actor: LogActor,
+  batchId: number,
+  input: NewLogEntry,
+  meta: WriteMeta,
+  options: AppendOptions,
+  transaction: Transaction,
+): Promise<BatchLogEntry> {
   const { kind, correctsEntryId = null } = input;
-  const state = await lockForAppend(actor.breweryId, batchId, meta.idempotencyKey, correctsEntryId, BREW_DAY_KINDS.includes(kind), transaction);
+  const state = await lockForAppend(
+    actor.breweryId,
+    batchId,
+    meta.idempotencyKey,
+    correctsEntryId,
+    BREW_DAY_KINDS.includes(kind),
+    transaction,
+  );
   if (!state) throw notFound('This batch');
   const hashOfRequest = requestHash(batchId, input, meta);
   if (state.keyResultId !== null) {
-    return replayOf({ scope: state.keyScope!, requestHash: state.keyRequestHash!, resultId: Number(state.keyResultId) }, hashOfRequest, transaction);
+    return replayOf(
+      { scope: state.keyScope!, requestHash: state.keyRequestHash!, resultId: Number(state.keyResultId) },
+      hashOfRequest,
+      transaction,
+    );
   }
 
   const fields = entryFields(actor, batchId, input, meta, Number(state.lastSequence ?? 0) + 1, new Date());
@@ -228,10 +319,15 @@ async function append(actor: LogActor, batchId: number, input: NewLogEntry, meta
   const prevHash = state.lastHash ?? GENESIS_HASH;
   const row = { ...fields, requestHash: hashOfRequest, prevHash, hash: entryHash(prevHash, fields) };
   // One statement: the table's trigger writes the idempotency record and the audit row with the entry.
-  const [id] = await sequelize.query(INSERT_ONE, { type: QueryTypes.INSERT, replacements: insertValues(row), transaction });
+  const [id] = await sequelize.query(INSERT_ONE, {
+    type: QueryTypes.INSERT,
+    replacements: insertValues(row),
+    transaction,
+  });
   const entry = BatchLogEntry.build({ id: Number(id), ...row }, { isNewRecord: false });
   // The first brew-day step starts the brew.
-  if (kind === 'step' && state.status === 'planned') await Batch.update({ status: 'brewing' }, { where: { id: batchId }, transaction });
+  if (kind === 'step' && state.status === 'planned')
+    await Batch.update({ status: 'brewing' }, { where: { id: batchId }, transaction });
   await options.onInsert?.(entry, transaction);
   return entry;
 }
@@ -241,10 +337,18 @@ async function append(actor: LogActor, batchId: number, input: NewLogEntry, meta
  * returns the first entry; with a different request answers 422. READ COMMITTED so a writer that waited
  * on the batch lock sees what the one before it committed.
  */
-export async function appendLogEntry(actor: LogActor, batchId: number, input: NewLogEntry, meta: WriteMeta, options: AppendOptions = {}): Promise<BatchLogEntry> {
+export async function appendLogEntry(
+  actor: LogActor,
+  batchId: number,
+  input: NewLogEntry,
+  meta: WriteMeta,
+  options: AppendOptions = {},
+): Promise<BatchLogEntry> {
   if (options.transaction) return append(actor, batchId, input, meta, options, options.transaction);
   try {
-    return await sequelize.transaction({ isolationLevel: Transaction.ISOLATION_LEVELS.READ_COMMITTED }, (t) => append(actor, batchId, input, meta, options, t));
+    return await sequelize.transaction({ isolationLevel: Transaction.ISOLATION_LEVELS.READ_COMMITTED }, (t) =>
+      append(actor, batchId, input, meta, options, t),
+    );
   } catch (error) {
     // The same key raced in on another batch: the unique index kept one; answer as a replay would.
     if (error instanceof UniqueConstraintError) {
@@ -261,14 +365,26 @@ export async function appendLogEntry(actor: LogActor, batchId: number, input: Ne
  * A write whose key was used before for the same request is already in the log and is skipped; for a
  * different request nothing is saved (422). Returns the entries written now.
  */
-export async function appendLogEntries(actor: LogActor, batchId: number, writes: { input: NewLogEntry; meta: WriteMeta }[], transaction: Transaction): Promise<BatchLogEntry[]> {
+export async function appendLogEntries(
+  actor: LogActor,
+  batchId: number,
+  writes: { input: NewLogEntry; meta: WriteMeta }[],
+  transaction: Transaction,
+): Promise<BatchLogEntry[]> {
   if (writes.some((w) => BREW_DAY_KINDS.includes(w.input.kind) || w.input.correctsEntryId != null)) {
-    throw new Error('appendLogEntries takes cellar entries only: brew-day entries and corrections go through appendLogEntry');
+    throw new Error(
+      'appendLogEntries takes cellar entries only: brew-day entries and corrections go through appendLogEntry',
+    );
   }
   const state = await lockForAppend(actor.breweryId, batchId, null, null, false, transaction);
   if (!state) throw notFound('This batch');
   const used = new Map(
-    (await IdempotencyKey.findAll({ where: { breweryId: actor.breweryId, key: writes.map((w) => w.meta.idempotencyKey) }, transaction })).map((k) => [k.key, k]),
+    (
+      await IdempotencyKey.findAll({
+        where: { breweryId: actor.breweryId, key: writes.map((w) => w.meta.idempotencyKey) },
+        transaction,
+      })
+    ).map((k) => [k.key, k]),
   );
   const receivedAt = new Date();
   let sequence = Number(state.lastSequence ?? 0);
@@ -290,12 +406,20 @@ export async function appendLogEntries(actor: LogActor, batchId: number, writes:
   }
   for (let i = 0; i < rows.length; i += INSERT_CHUNK) {
     const chunk = rows.slice(i, i + INSERT_CHUNK);
-    await sequelize.query(insertSql(chunk.length), { type: QueryTypes.INSERT, replacements: chunk.flatMap(insertValues), transaction });
+    await sequelize.query(insertSql(chunk.length), {
+      type: QueryTypes.INSERT,
+      replacements: chunk.flatMap(insertValues),
+      transaction,
+    });
   }
   if (rows.length === 0) return [];
   const ids = await sequelize.query<{ id: number; sequence: number }>(
     'SELECT id, sequence FROM batch_log_entries WHERE batch_id = ? AND sequence BETWEEN ? AND ? ORDER BY sequence',
-    { type: QueryTypes.SELECT, replacements: [batchId, rows[0]!.sequence, rows[rows.length - 1]!.sequence], transaction },
+    {
+      type: QueryTypes.SELECT,
+      replacements: [batchId, rows[0]!.sequence, rows[rows.length - 1]!.sequence],
+      transaction,
+    },
   );
   return rows.map((row, i) => BatchLogEntry.build({ id: Number(ids[i]!.id), ...row }, { isNewRecord: false }));
 }
@@ -313,7 +437,8 @@ export async function verifyChain(batchId: number): Promise<ChainCheck> {
           : e.hash !== entryHash(prevHash, e)
             ? 'its content no longer matches its hash'
             : null;
-    if (problem) return { ok: false, checked: i + 1, firstBad: { entryId: Number(e.id), sequence: Number(e.sequence), problem } };
+    if (problem)
+      return { ok: false, checked: i + 1, firstBad: { entryId: Number(e.id), sequence: Number(e.sequence), problem } };
     prevHash = e.hash;
   }
   return { ok: true, checked: entries.length, firstBad: null };
@@ -322,8 +447,23 @@ export async function verifyChain(batchId: number): Promise<ChainCheck> {
 /** The columns an entry is answered with. */
 type AnsweredFields = Pick<
   BatchLogEntry,
-  | 'id' | 'batchId' | 'sequence' | 'kind' | 'stepKey' | 'data' | 'correctsEntryId' | 'reason' | 'authorId' | 'authorRole'
-  | 'authorName' | 'meaning' | 'capturedAt' | 'receivedAt' | 'deviceId' | 'late' | 'hash'
+  | 'id'
+  | 'batchId'
+  | 'sequence'
+  | 'kind'
+  | 'stepKey'
+  | 'data'
+  | 'correctsEntryId'
+  | 'reason'
+  | 'authorId'
+  | 'authorRole'
+  | 'authorName'
+  | 'meaning'
+  | 'capturedAt'
+  | 'receivedAt'
+  | 'deviceId'
+  | 'late'
+  | 'hash'
 >;
 
 /** An entry as the API answers it. */
@@ -363,7 +503,10 @@ function toLogEntries(rows: AnsweredFields[]): LogEntry[] {
 }
 
 /** A batch's entries in order, each with the corrections that point at it. */
-export async function logEntries(batchId: number, transaction?: Transaction): Promise<{ rows: BatchLogEntry[]; entries: LogEntry[] }> {
+export async function logEntries(
+  batchId: number,
+  transaction?: Transaction,
+): Promise<{ rows: BatchLogEntry[]; entries: LogEntry[] }> {
   const rows = await BatchLogEntry.findAll({ where: { batchId }, order: [['sequence', 'ASC']], transaction });
   return { rows, entries: toLogEntries(rows) };
 }
@@ -386,7 +529,10 @@ const logCache = new LRUCache<number, { sequence: number; hash: string; body: Bu
  * One statement finds the batch within the brewery (404 otherwise) and its head; a second reads the
  * entries only when the cache has no log at that head.
  */
-export async function batchLogJson(breweryId: number, batchId: number): Promise<{ body: Buffer; head: { sequence: number; hash: string } | null }> {
+export async function batchLogJson(
+  breweryId: number,
+  batchId: number,
+): Promise<{ body: Buffer; head: { sequence: number; hash: string } | null }> {
   const [found] = await sequelize.query<{ sequence: number | null; hash: string | null }>(
     `SELECT h.sequence, h.hash FROM batches b ${LOG_HEAD_JOIN} WHERE b.id = :batchId AND b.brewery_id = :breweryId`,
     { type: QueryTypes.SELECT, replacements: { batchId, breweryId } },

@@ -30,18 +30,39 @@ export const BATCH_PAGE_SIZE = 50;
 type Actor = Pick<Express.User, 'id' | 'breweryId'>;
 
 async function audit(actor: Actor, action: string, detail: Record<string, unknown>, transaction?: Transaction) {
-  await AuditEvent.create({ breweryId: actor.breweryId, userId: actor.id, action, detail, ip: null, userAgent: null, requestId: null }, { transaction });
+  await AuditEvent.create(
+    { breweryId: actor.breweryId, userId: actor.id, action, detail, ip: null, userAgent: null, requestId: null },
+    { transaction },
+  );
 }
 
-export async function findBatch(breweryId: number, id: number, transaction?: Transaction, lock = false): Promise<Batch> {
-  const batch = await Batch.findOne({ where: { id, breweryId }, transaction, ...(lock && transaction ? { lock: transaction.LOCK.UPDATE } : {}) });
+export async function findBatch(
+  breweryId: number,
+  id: number,
+  transaction?: Transaction,
+  lock = false,
+): Promise<Batch> {
+  const batch = await Batch.findOne({
+    where: { id, breweryId },
+    transaction,
+    ...(lock && transaction ? { lock: transaction.LOCK.UPDATE } : {}),
+  });
   if (!batch) throw notFound('This batch');
   return batch;
 }
 
 /** The brewery's next batch number for a year: `2026-001`, `2026-002`… */
-async function nextNumber(breweryId: number, year: number, transaction: Transaction): Promise<{ number: string; sequence: number }> {
-  const last = await Batch.findOne({ where: { breweryId, year }, order: [['sequence', 'DESC']], lock: transaction.LOCK.UPDATE, transaction });
+async function nextNumber(
+  breweryId: number,
+  year: number,
+  transaction: Transaction,
+): Promise<{ number: string; sequence: number }> {
+  const last = await Batch.findOne({
+    where: { breweryId, year },
+    order: [['sequence', 'DESC']],
+    lock: transaction.LOCK.UPDATE,
+    transaction,
+  });
   const sequence = (last?.sequence ?? 0) + 1;
   return { number: `${year}-${String(sequence).padStart(3, '0')}`, sequence };
 }
@@ -52,8 +73,17 @@ async function nextNumber(breweryId: number, year: number, transaction: Transact
  * marked as needing cleaning. The unique index on `current_batch_id` settles races. A tank that needs
  * cleaning is accepted: planning days ahead into a tank still to be cleaned is normal.
  */
-export async function assignVessel(breweryId: number, batchId: number, vesselId: number, transaction: Transaction): Promise<Vessel> {
-  const vessel = await Vessel.findOne({ where: { id: vesselId, breweryId }, lock: transaction.LOCK.UPDATE, transaction });
+export async function assignVessel(
+  breweryId: number,
+  batchId: number,
+  vesselId: number,
+  transaction: Transaction,
+): Promise<Vessel> {
+  const vessel = await Vessel.findOne({
+    where: { id: vesselId, breweryId },
+    lock: transaction.LOCK.UPDATE,
+    transaction,
+  });
   if (!vessel) throw notFound('This vessel');
   if (vessel.currentBatchId === batchId) return vessel;
   if (vessel.currentBatchId !== null) {
@@ -74,7 +104,10 @@ export async function assignVessel(breweryId: number, batchId: number, vesselId:
 
 /** Takes a batch out of whatever vessel holds it; the vessel then needs cleaning. */
 export async function releaseVessel(breweryId: number, batchId: number, transaction: Transaction): Promise<void> {
-  await Vessel.update({ currentBatchId: null, status: 'needs_cleaning' }, { where: { breweryId, currentBatchId: batchId }, transaction });
+  await Vessel.update(
+    { currentBatchId: null, status: 'needs_cleaning' },
+    { where: { breweryId, currentBatchId: batchId }, transaction },
+  );
 }
 
 /** Creates a batch from a plan that is already frozen (planning, the demo seed and tests use it). */
@@ -202,7 +235,8 @@ async function knockoutOgs(breweryId: number, heads: Map<number, number>): Promi
     const ordered = entries
       .sort((x, y) => x.sequence - y.sequence)
       .map((e) => {
-        const measurements = typeof e.measurements === 'string' ? (JSON.parse(e.measurements) as Measurements) : e.measurements;
+        const measurements =
+          typeof e.measurements === 'string' ? (JSON.parse(e.measurements) as Measurements) : e.measurements;
         return {
           id: Number(e.id),
           kind: e.kind,
@@ -249,7 +283,15 @@ export async function listBatches(breweryId: number, query: BatchListQuery): Pro
     },
   );
   // Past the last page there is no row to carry the total.
-  const total = rows.length ? Number(rows[0]!.total) : await Batch.count({ where: { breweryId, ...(query.status ? { status: query.status } : {}), ...(query.recipeId ? { recipeId: query.recipeId } : {}) } });
+  const total = rows.length
+    ? Number(rows[0]!.total)
+    : await Batch.count({
+        where: {
+          breweryId,
+          ...(query.status ? { status: query.status } : {}),
+          ...(query.recipeId ? { recipeId: query.recipeId } : {}),
+        },
+      });
 
   const og = new Map<number, number | null>();
   const stale = new Map<number, number>();
@@ -288,7 +330,10 @@ export async function listBatches(breweryId: number, query: BatchListQuery): Pro
 /** One batch with its frozen plan, its log, its signatures (checked) and planned vs actual. */
 export async function batchDetail(breweryId: number, id: number): Promise<BatchDetail> {
   const batch = await findBatch(breweryId, id);
-  const [vessel, { rows, entries }] = await Promise.all([Vessel.findOne({ where: { breweryId, currentBatchId: id } }), logEntries(id)]);
+  const [vessel, { rows, entries }] = await Promise.all([
+    Vessel.findOne({ where: { breweryId, currentBatchId: id } }),
+    logEntries(id),
+  ]);
   const actuals = batchActuals(batch.plan, entries);
   return {
     ...summary(batch, vessel ?? undefined, actuals.og.actual),
@@ -307,16 +352,26 @@ export async function batchDetail(breweryId: number, id: number): Promise<BatchD
  * Moves a batch along planned → brewing → fermenting → conditioning → packaged → released, or to dumped
  * (with a reason, which also empties its vessel). Anything else answers 409. Cellar and taproom call this.
  */
-export async function changeBatchStatus(actor: Actor, batchId: number, input: ChangeStatusInput, transaction?: Transaction): Promise<Batch> {
+export async function changeBatchStatus(
+  actor: Actor,
+  batchId: number,
+  input: ChangeStatusInput,
+  transaction?: Transaction,
+): Promise<Batch> {
   const run = async (t: Transaction) => {
     const batch = await findBatch(actor.breweryId, batchId, t, true);
     if (!canMoveTo(batch.status, input.status)) {
-      throw conflict(`A ${BATCH_STATUS_LABELS[batch.status].toLowerCase()} batch cannot move to ${BATCH_STATUS_LABELS[input.status].toLowerCase()}.`);
+      throw conflict(
+        `A ${BATCH_STATUS_LABELS[batch.status].toLowerCase()} batch cannot move to ${BATCH_STATUS_LABELS[input.status].toLowerCase()}.`,
+      );
     }
     const from = batch.status;
     if (input.status === 'dumped') await releaseVessel(actor.breweryId, batchId, t);
     const dumped = input.status === 'dumped';
-    await batch.update({ status: input.status, dumpedReason: dumped ? input.reason! : null, dumpedAt: dumped ? new Date() : null }, { transaction: t });
+    await batch.update(
+      { status: input.status, dumpedReason: dumped ? input.reason! : null, dumpedAt: dumped ? new Date() : null },
+      { transaction: t },
+    );
     await audit(actor, 'batch.status', { batchId, from, to: input.status }, t);
     return batch;
   };
@@ -324,7 +379,11 @@ export async function changeBatchStatus(actor: Actor, batchId: number, input: Ch
 }
 
 /** A status change asked for through the API: dumping is the head brewer's alone (403 for anyone else). */
-export async function requestStatusChange(actor: Actor & Pick<Express.User, 'role'>, batchId: number, input: ChangeStatusInput): Promise<Batch> {
+export async function requestStatusChange(
+  actor: Actor & Pick<Express.User, 'role'>,
+  batchId: number,
+  input: ChangeStatusInput,
+): Promise<Batch> {
   if (input.status === 'dumped' && !mayDump(actor.role)) {
     await findBatch(actor.breweryId, batchId);
     throw forbidden('Only the head brewer can dump a batch. Ask them, and note what you saw in the log.');

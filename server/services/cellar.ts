@@ -79,18 +79,27 @@ async function uniqueName<T>(name: string, write: () => Promise<T>): Promise<T> 
 }
 
 export async function listVessels(breweryId: number): Promise<VesselView[]> {
-  const vessels = await Vessel.findAll({ where: { breweryId }, order: [['type', 'ASC'], ['name', 'ASC']] });
+  const vessels = await Vessel.findAll({
+    where: { breweryId },
+    order: [
+      ['type', 'ASC'],
+      ['name', 'ASC'],
+    ],
+  });
   return vessels.map(toVesselView);
 }
 
 export async function createVessel(breweryId: number, input: VesselInput): Promise<VesselView> {
-  const vessel = await uniqueName(input.name, () => Vessel.create({ breweryId, ...vesselFields(input), status: 'clean', currentBatchId: null }));
+  const vessel = await uniqueName(input.name, () =>
+    Vessel.create({ breweryId, ...vesselFields(input), status: 'clean', currentBatchId: null }),
+  );
   return toVesselView(vessel);
 }
 
 export async function updateVessel(breweryId: number, id: number, input: VesselInput): Promise<VesselView> {
   const vessel = await findVessel(breweryId, id);
-  if (vessel.currentBatchId !== null && input.type !== vessel.type) throw conflict(`${vessel.name} holds a batch: change its type once it is empty.`);
+  if (vessel.currentBatchId !== null && input.type !== vessel.type)
+    throw conflict(`${vessel.name} holds a batch: change its type once it is empty.`);
   await uniqueName(input.name, () => vessel.update(vesselFields(input)));
   return toVesselView(vessel);
 }
@@ -131,8 +140,13 @@ export async function cellarPlanFor(batch: Batch, transaction?: Transaction): Pr
 }
 
 /** The cellar plans of several batches (the vessel board, the overdue sweep) in one query, by batch id. */
-export async function cellarPlansFor(batches: Batch[], transaction?: Transaction): Promise<Map<number, CellarPlanView>> {
-  const saved = batches.length ? await CellarPlan.findAll({ where: { batchId: { [Op.in]: batches.map((b) => b.id) } }, transaction }) : [];
+export async function cellarPlansFor(
+  batches: Batch[],
+  transaction?: Transaction,
+): Promise<Map<number, CellarPlanView>> {
+  const saved = batches.length
+    ? await CellarPlan.findAll({ where: { batchId: { [Op.in]: batches.map((b) => b.id) } }, transaction })
+    : [];
   const savedByBatch = new Map(saved.map((p) => [p.batchId, p]));
   return new Map(batches.map((batch) => [batch.id, planView(batch, savedByBatch.get(batch.id))]));
 }
@@ -166,7 +180,11 @@ function planView(batch: Batch, saved: CellarPlan | undefined): CellarPlanView {
   };
 }
 
-export async function saveCellarPlan(breweryId: number, batchId: number, input: CellarPlanInput): Promise<CellarPlanView> {
+export async function saveCellarPlan(
+  breweryId: number,
+  batchId: number,
+  input: CellarPlanInput,
+): Promise<CellarPlanView> {
   const batch = await findBatch(breweryId, batchId);
   const fields = {
     plannedFg: input.plannedFg,
@@ -213,9 +231,17 @@ async function vesselOf(breweryId: number, batchId: number, transaction?: Transa
 /** A screen that sends °F shows psi (a US brewery); one that sends °C shows kPa. */
 const screenUnits = (tempUnit: 'c' | 'f'): CarbonationUnits => (tempUnit === 'f' ? 'us' : 'metric');
 
-export async function carbonationFor(breweryId: number, query: CarbonationQuery): Promise<CarbonationSetting & { pressurePsi: number }> {
+export async function carbonationFor(
+  breweryId: number,
+  query: CarbonationQuery,
+): Promise<CarbonationSetting & { pressurePsi: number }> {
   const vessel = await findVessel(breweryId, query.vesselId);
-  const setting = carbonationSetting(toC(query.temp, query.tempUnit), query.co2Volumes, vessel.ratedPressureKpa, screenUnits(query.tempUnit));
+  const setting = carbonationSetting(
+    toC(query.temp, query.tempUnit),
+    query.co2Volumes,
+    vessel.ratedPressureKpa,
+    screenUnits(query.tempUnit),
+  );
   return { ...setting, pressurePsi: kpaToPsi(setting.pressureKpa) };
 }
 
@@ -224,9 +250,15 @@ export async function carbonationFor(breweryId: number, query: CarbonationQuery)
  * holds another batch) and starts conditioning; a carbonation stores the head pressure, refused above
  * the vessel's rating — all in the entry's transaction.
  */
-export async function recordAction(actor: LogActor, batchId: number, input: ActionEntryInput, meta: WriteMeta): Promise<ActionView> {
+export async function recordAction(
+  actor: LogActor,
+  batchId: number,
+  input: ActionEntryInput,
+  meta: WriteMeta,
+): Promise<ActionView> {
   const tempC = input.temp === undefined ? undefined : toC(input.temp, input.tempUnit);
-  const volumeL = input.volume === undefined ? undefined : input.volumeUnit === 'bbl' ? usBblToL(input.volume) : input.volume;
+  const volumeL =
+    input.volume === undefined ? undefined : input.volumeUnit === 'bbl' ? usBblToL(input.volume) : input.volume;
   let pressureKpa = input.pressureKpa;
   if (input.action === 'carbonation') {
     const vessel = await vesselOf(actor.breweryId, batchId);
@@ -234,7 +266,9 @@ export async function recordAction(actor: LogActor, batchId: number, input: Acti
     const units = screenUnits(input.tempUnit);
     const setting = carbonationSetting(tempC!, input.co2Volumes!, vessel.ratedPressureKpa, units);
     if (pressureKpa !== undefined && pressureKpa > vessel.ratedPressureKpa) {
-      throw unprocessable(`${formatGaugePressure(pressureKpa, units)} is above ${vessel.name}'s rated working pressure of ${formatGaugePressure(vessel.ratedPressureKpa, units)}.`);
+      throw unprocessable(
+        `${formatGaugePressure(pressureKpa, units)} is above ${vessel.name}'s rated working pressure of ${formatGaugePressure(vessel.ratedPressureKpa, units)}.`,
+      );
     }
     pressureKpa ??= setting.pressureKpa;
   }
@@ -247,13 +281,18 @@ export async function recordAction(actor: LogActor, batchId: number, input: Acti
       onInsert: async (_e, t) => {
         const batch = await findBatch(actor.breweryId, batchId, t);
         if (!['fermenting', 'conditioning'].includes(batch.status)) {
-          throw conflict(`Batch ${batch.number} is ${batch.status}: cellar work is logged while it ferments or conditions.`);
+          throw conflict(
+            `Batch ${batch.number} is ${batch.status}: cellar work is logged while it ferments or conditions.`,
+          );
         }
         if (input.action === 'transfer') {
           const tank = await findVessel(actor.breweryId, input.toVesselId!, t);
-          if (tank.type !== 'bright_tank') throw unprocessable(`${tank.name} is a fermenter: transfer into a bright tank.`);
-          if (tank.currentBatchId === null && tank.status !== 'clean') throw conflict(`${tank.name} needs cleaning before it is filled.`);
-          if (volumeL! > tank.capacityL) throw unprocessable(`${tank.name} holds ${tank.capacityL.toFixed(0)} L, less than the volume moved.`);
+          if (tank.type !== 'bright_tank')
+            throw unprocessable(`${tank.name} is a fermenter: transfer into a bright tank.`);
+          if (tank.currentBatchId === null && tank.status !== 'clean')
+            throw conflict(`${tank.name} needs cleaning before it is filled.`);
+          if (volumeL! > tank.capacityL)
+            throw unprocessable(`${tank.name} holds ${tank.capacityL.toFixed(0)} L, less than the volume moved.`);
           await assignVessel(actor.breweryId, batchId, tank.id, t);
           if (batch.status === 'fermenting') await changeBatchStatus(actor, batchId, { status: 'conditioning' }, t);
         }
@@ -267,9 +306,23 @@ export async function recordAction(actor: LogActor, batchId: number, input: Acti
 
 /** Measured OG (knockout) when logged, else the plan's. */
 async function originalGravity(batch: Batch, transaction?: Transaction): Promise<{ sg: number; measured: boolean }> {
-  const entries = await BatchLogEntry.findAll({ where: { batchId: batch.id, kind: { [Op.in]: ['step', 'measurement', 'correction'] } }, transaction });
-  const actual = batchActuals(batch.plan, entries.map((e) => ({ id: Number(e.id), kind: e.kind, stepKey: e.stepKey, data: e.data, correctsEntryId: e.correctsEntryId === null ? null : Number(e.correctsEntryId) })));
-  return actual.og.actual !== null ? { sg: actual.og.actual, measured: true } : { sg: batch.plannedOg, measured: false };
+  const entries = await BatchLogEntry.findAll({
+    where: { batchId: batch.id, kind: { [Op.in]: ['step', 'measurement', 'correction'] } },
+    transaction,
+  });
+  const actual = batchActuals(
+    batch.plan,
+    entries.map((e) => ({
+      id: Number(e.id),
+      kind: e.kind,
+      stepKey: e.stepKey,
+      data: e.data,
+      correctsEntryId: e.correctsEntryId === null ? null : Number(e.correctsEntryId),
+    })),
+  );
+  return actual.og.actual !== null
+    ? { sg: actual.og.actual, measured: true }
+    : { sg: batch.plannedOg, measured: false };
 }
 
 export async function batchCellar(breweryId: number, batchId: number): Promise<BatchCellarView> {
@@ -283,7 +336,13 @@ export async function batchCellar(breweryId: number, batchId: number): Promise<B
     packagingSummary(batch),
   ]);
   return {
-    batch: { id: batch.id, number: batch.number, beerName: batch.beerName, status: batch.status, brewDate: batch.brewDate },
+    batch: {
+      id: batch.id,
+      number: batch.number,
+      beerName: batch.beerName,
+      status: batch.status,
+      brewDate: batch.brewDate,
+    },
     vessel: vessel ? toVesselView(vessel) : null,
     plan,
     og,
@@ -295,7 +354,12 @@ export async function batchCellar(breweryId: number, batchId: number): Promise<B
 
 // --------------------------------------------------------------------- board
 
-function nextAction(plan: CellarPlanView, vessel: Vessel, done: Set<string>, points: { atMs: number; sg: number }[]): { label: string; dueAt: string | null } | null {
+function nextAction(
+  plan: CellarPlanView,
+  vessel: Vessel,
+  done: Set<string>,
+  points: { atMs: number; sg: number }[],
+): { label: string; dueAt: string | null } | null {
   const prediction = predictFermentation(points);
   const iso = (ms: number | null | undefined) => (ms === null || ms === undefined ? null : new Date(ms).toISOString());
   if (vessel.type === 'fermenter') {
@@ -312,11 +376,21 @@ function nextAction(plan: CellarPlanView, vessel: Vessel, done: Set<string>, poi
 
 /** Every vessel with what it holds, days in tank, latest reading, what comes next and whether a reading is overdue. */
 export async function vesselBoard(breweryId: number, now = new Date()): Promise<BoardVessel[]> {
-  const vessels = await Vessel.findAll({ where: { breweryId }, order: [['type', 'ASC'], ['name', 'ASC']] });
+  const vessels = await Vessel.findAll({
+    where: { breweryId },
+    order: [
+      ['type', 'ASC'],
+      ['name', 'ASC'],
+    ],
+  });
   const batchIds = vessels.map((v) => v.currentBatchId).filter((id): id is number => id !== null);
   const [batches, readings, entries] = await Promise.all([
     Batch.findAll({ where: { breweryId, id: { [Op.in]: batchIds } } }),
-    GravityReading.findAll({ where: { batchId: { [Op.in]: batchIds }, [Op.and]: [IN_FORCE] }, order: [['takenAt', 'ASC']], attributes: ['batchId', 'takenAt', 'sg', 'tempC'] }),
+    GravityReading.findAll({
+      where: { batchId: { [Op.in]: batchIds }, [Op.and]: [IN_FORCE] },
+      order: [['takenAt', 'ASC']],
+      attributes: ['batchId', 'takenAt', 'sg', 'tempC'],
+    }),
     BatchLogEntry.findAll({
       where: { batchId: { [Op.in]: batchIds }, [Op.or]: [{ kind: 'action' }, { stepKey: 'knockout-end' }] },
       attributes: ['batchId', 'kind', 'stepKey', 'capturedAt'],
@@ -350,8 +424,15 @@ export async function vesselBoard(breweryId: number, now = new Date()): Promise<
         latestSg: latest?.sg ?? null,
         latestTempC: latest?.tempC ?? null,
         latestAt: latest ? new Date(latest.takenAt).toISOString() : null,
-        nextAction: nextAction(plan, vessel, done, own.map((r) => ({ atMs: new Date(r.takenAt).getTime(), sg: r.sg }))),
-        nextReadingDueAt: taking ? new Date(lastAt.getTime() + plan.readingIntervalHours * 3_600_000).toISOString() : null,
+        nextAction: nextAction(
+          plan,
+          vessel,
+          done,
+          own.map((r) => ({ atMs: new Date(r.takenAt).getTime(), sg: r.sg })),
+        ),
+        nextReadingDueAt: taking
+          ? new Date(lastAt.getTime() + plan.readingIntervalHours * 3_600_000).toISOString()
+          : null,
         readingOverdue: taking && readingOverdue(lastAt.getTime(), now.getTime(), plan.readingIntervalHours),
       },
     };

@@ -32,7 +32,9 @@ export async function deleteEquipment(breweryId: number, id: number): Promise<vo
   const row = await findEquipment(breweryId, id);
   const versions = await RecipeVersion.count({ where: { equipmentProfileId: id } });
   if (versions > 0) {
-    throw conflict(`${row.name} is what ${versions === 1 ? 'a recipe version was' : `${versions} recipe versions were`} written for, so it stays. Rename it if it is no longer in use.`);
+    throw conflict(
+      `${row.name} is what ${versions === 1 ? 'a recipe version was' : `${versions} recipe versions were`} written for, so it stays. Rename it if it is no longer in use.`,
+    );
   }
   await row.destroy();
 }

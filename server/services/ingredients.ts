@@ -39,7 +39,13 @@ export async function addStarterIngredients(breweryId: number, transaction?: Tra
 }
 
 export async function listIngredients(breweryId: number, kind?: IngredientKind): Promise<IngredientJson[]> {
-  const rows = await Ingredient.findAll({ where: { breweryId, ...(kind ? { kind } : {}) }, order: [['kind', 'ASC'], ['name', 'ASC']] });
+  const rows = await Ingredient.findAll({
+    where: { breweryId, ...(kind ? { kind } : {}) },
+    order: [
+      ['kind', 'ASC'],
+      ['name', 'ASC'],
+    ],
+  });
   return rows.map(json);
 }
 

@@ -18,10 +18,20 @@ const PACKAGING_DONE = ['packaged', 'released', 'dumped'];
 
 /** Litres into the fermenter at knockout: measured on the brew day, else planned. */
 async function knockoutLitres(batch: Batch, transaction?: Transaction): Promise<number> {
-  const entries = await BatchLogEntry.findAll({ where: { batchId: batch.id }, attributes: ['id', 'kind', 'stepKey', 'data', 'correctsEntryId'], transaction });
+  const entries = await BatchLogEntry.findAll({
+    where: { batchId: batch.id },
+    attributes: ['id', 'kind', 'stepKey', 'data', 'correctsEntryId'],
+    transaction,
+  });
   const actuals = batchActuals(
     batch.plan,
-    entries.map((e) => ({ id: Number(e.id), kind: e.kind, stepKey: e.stepKey, data: e.data, correctsEntryId: e.correctsEntryId === null ? null : Number(e.correctsEntryId) })),
+    entries.map((e) => ({
+      id: Number(e.id),
+      kind: e.kind,
+      stepKey: e.stepKey,
+      data: e.data,
+      correctsEntryId: e.correctsEntryId === null ? null : Number(e.correctsEntryId),
+    })),
   );
   return actuals.knockoutVolumeL.actual ?? actuals.knockoutVolumeL.planned;
 }
@@ -37,10 +47,21 @@ function toRunView(run: PackagingRun, authorName: string): PackagingRunView {
 }
 
 export async function packagingSummary(batch: Batch, transaction?: Transaction): Promise<PackagingSummaryView> {
-  const runs = await PackagingRun.findAll({ where: { batchId: batch.id }, order: [['packagedAt', 'ASC']], transaction });
-  const authors = await BatchLogEntry.findAll({ where: { id: runs.map((r) => r.logEntryId) }, attributes: ['id', 'authorName'], transaction });
+  const runs = await PackagingRun.findAll({
+    where: { batchId: batch.id },
+    order: [['packagedAt', 'ASC']],
+    transaction,
+  });
+  const authors = await BatchLogEntry.findAll({
+    where: { id: runs.map((r) => r.logEntryId) },
+    attributes: ['id', 'authorName'],
+    transaction,
+  });
   const knockoutL = await knockoutLitres(batch, transaction);
-  const totals = packagingTotals(runs.flatMap((r) => r.lines), knockoutL);
+  const totals = packagingTotals(
+    runs.flatMap((r) => r.lines),
+    knockoutL,
+  );
   // Before the last run the difference is beer still in the tank, not a loss.
   const complete = PACKAGING_DONE.includes(batch.status);
   return {
@@ -55,17 +76,33 @@ export async function packagingSummary(batch: Batch, transaction?: Transaction):
 }
 
 /** Records a packaging run; refuses (422) more beer in packages than was knocked out. */
-export async function recordPackaging(actor: LogActor, batchId: number, input: PackagingEntryInput, meta: WriteMeta): Promise<PackagingSummaryView> {
+export async function recordPackaging(
+  actor: LogActor,
+  batchId: number,
+  input: PackagingEntryInput,
+  meta: WriteMeta,
+): Promise<PackagingSummaryView> {
   const lines = input.lines as PackageLine[];
   await appendLogEntry(actor, batchId, { ...input }, meta, {
     onInsert: async (entry, t) => {
       const batch = await findBatch(actor.breweryId, batchId, t);
-      if (!['fermenting', 'conditioning'].includes(batch.status)) throw conflict(`Batch ${batch.number} is ${batch.status}: it cannot be packaged now.`);
+      if (!['fermenting', 'conditioning'].includes(batch.status))
+        throw conflict(`Batch ${batch.number} is ${batch.status}: it cannot be packaged now.`);
       const earlier = await PackagingRun.findAll({ where: { batchId }, transaction: t });
       // Refuses more in packages, all runs together, than went into the fermenter.
       packagingTotals([...earlier.flatMap((r) => r.lines), ...lines], await knockoutLitres(batch, t));
       const packagedL = lines.reduce((sum, line, i) => sum + lineVolumeL(line, `lines.${i}`), 0);
-      await PackagingRun.create({ breweryId: actor.breweryId, batchId, logEntryId: Number(entry.id), packagedAt: meta.capturedAt, lines, packagedL }, { transaction: t });
+      await PackagingRun.create(
+        {
+          breweryId: actor.breweryId,
+          batchId,
+          logEntryId: Number(entry.id),
+          packagedAt: meta.capturedAt,
+          lines,
+          packagedL,
+        },
+        { transaction: t },
+      );
       if (input.final) {
         await releaseVessel(actor.breweryId, batchId, t);
         if (batch.status === 'fermenting') await changeBatchStatus(actor, batchId, { status: 'conditioning' }, t);

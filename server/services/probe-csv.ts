@@ -46,7 +46,10 @@ export interface ParsedProbeCsv {
  * duplicate and skipped.
  */
 export function parseProbeCsv(text: string, options: ProbeImportOptions): ParsedProbeCsv {
-  const parsed = Papa.parse<string[]>(text.replace(/^\uFEFF/, ''), { delimiter: options.delimiter, skipEmptyLines: 'greedy' });
+  const parsed = Papa.parse<string[]>(text.replace(/^\uFEFF/, ''), {
+    delimiter: options.delimiter,
+    skipEmptyLines: 'greedy',
+  });
   const lines = parsed.data;
   const rows: ProbeRow[] = [];
   const seen = new Set<number>();
@@ -60,7 +63,8 @@ export function parseProbeCsv(text: string, options: ProbeImportOptions): Parsed
       row.status = 'error';
       row.error = message;
     };
-    if (cells.length < 3) return fail(`Expected 3 columns (time, gravity, temperature), found ${cells.length}. Check the delimiter.`);
+    if (cells.length < 3)
+      return fail(`Expected 3 columns (time, gravity, temperature), found ${cells.length}. Check the delimiter.`);
     const atMs = parseProbeTime(time, options.timeZone);
     if (atMs === null) return fail(`"${time}" is not a time. Use e.g. 2026-11-03 14:30.`);
     const g = parseNumber(gravity);
@@ -79,7 +83,8 @@ export function parseProbeCsv(text: string, options: ProbeImportOptions): Parsed
       return fail(`${g} is not a specific gravity (0.980–1.200). Is the unit °Plato?`);
     }
     const tempC = options.tempUnit === 'f' ? fToC(t) : t;
-    if (tempC < -5 || tempC > 45) return fail(`${t} °${options.tempUnit.toUpperCase()} is not a fermentation temperature. Is the unit right?`);
+    if (tempC < -5 || tempC > 45)
+      return fail(`${t} °${options.tempUnit.toUpperCase()} is not a fermentation temperature. Is the unit right?`);
     row.takenAt = new Date(atMs).toISOString();
     row.sg = sg;
     row.tempC = tempC;

@@ -53,7 +53,9 @@ export function readingInSi(input: ReadingEntryInput): { sg: number; tempC: numb
 async function readyForReadings(actor: LogActor, batchId: number, transaction: Transaction): Promise<void> {
   const batch = await Batch.findOne({ where: { id: batchId, breweryId: actor.breweryId }, transaction });
   if (!batch || !READING_STATUSES.includes(batch.status)) {
-    throw conflict(`Batch ${batch?.number ?? ''} is ${batch?.status ?? 'not found'}: readings are taken from knockout until packaging.`);
+    throw conflict(
+      `Batch ${batch?.number ?? ''} is ${batch?.status ?? 'not found'}: readings are taken from knockout until packaging.`,
+    );
   }
   if (batch.status === 'brewing') await changeBatchStatus(actor, batchId, { status: 'fermenting' }, transaction);
 }
@@ -94,11 +96,18 @@ export async function writeReading(
     },
   });
   // A replayed key returns the first entry, whose reading was written with it.
-  return reading ?? (await GravityReading.findOne({ where: { logEntryId: entry.id }, transaction, rejectOnEmpty: true }));
+  return (
+    reading ?? (await GravityReading.findOne({ where: { logEntryId: entry.id }, transaction, rejectOnEmpty: true }))
+  );
 }
 
 /** Records one reading (idempotent by the write's key) and raises any alert it triggers. */
-export async function recordReading(actor: LogActor, batchId: number, input: ReadingEntryInput, meta: WriteMeta): Promise<ReadingView> {
+export async function recordReading(
+  actor: LogActor,
+  batchId: number,
+  input: ReadingEntryInput,
+  meta: WriteMeta,
+): Promise<ReadingView> {
   const reading = await writeReading(actor, batchId, input, meta);
   await evaluateReadingAlerts(actor.breweryId, batchId);
   return toReadingView(reading);
@@ -110,7 +119,12 @@ export async function recordReading(actor: LogActor, batchId: number, input: Rea
  * gives replace those in force, the others stay, and the sample keeps the time it was taken. The alerts are
  * checked again against the corrected curve.
  */
-export async function appendBatchLogEntry(actor: LogActor, batchId: number, input: LogEntryInput, meta: WriteMeta): Promise<BatchLogEntry> {
+export async function appendBatchLogEntry(
+  actor: LogActor,
+  batchId: number,
+  input: LogEntryInput,
+  meta: WriteMeta,
+): Promise<BatchLogEntry> {
   if (input.kind !== 'correction') return appendLogEntry(actor, batchId, input, meta);
   let corrected = false;
   const entry = await appendLogEntry(actor, batchId, input, meta, {
@@ -122,7 +136,12 @@ export async function appendBatchLogEntry(actor: LogActor, batchId: number, inpu
   return entry;
 }
 
-async function writeReadingCorrection(actor: LogActor, correction: BatchLogEntry, m: Measurements | undefined, transaction: Transaction): Promise<boolean> {
+async function writeReadingCorrection(
+  actor: LogActor,
+  correction: BatchLogEntry,
+  m: Measurements | undefined,
+  transaction: Transaction,
+): Promise<boolean> {
   if (m?.gravitySg === undefined && m?.tempC === undefined && m?.ph === undefined) return false;
   // The row in force of the reading the corrected entry stands for: found through the entry's own row, or
   // (for a correction that carried no values) through the entries it corrects in turn.
@@ -135,7 +154,13 @@ async function writeReadingCorrection(actor: LogActor, correction: BatchLogEntry
      SELECT g.* FROM gravity_readings g
       WHERE g.reading_entry_id = (SELECT r.reading_entry_id FROM chain JOIN gravity_readings r ON r.log_entry_id = chain.id LIMIT 1)
       ORDER BY g.id DESC LIMIT 1`,
-    { type: QueryTypes.SELECT, model: GravityReading, mapToModel: true, replacements: { target: correction.correctsEntryId, batchId: correction.batchId }, transaction },
+    {
+      type: QueryTypes.SELECT,
+      model: GravityReading,
+      mapToModel: true,
+      replacements: { target: correction.correctsEntryId, batchId: correction.batchId },
+      transaction,
+    },
   );
   if (!current) return false;
   const readingEntryId = Number(current.readingEntryId);
@@ -160,22 +185,35 @@ async function writeReadingCorrection(actor: LogActor, correction: BatchLogEntry
 }
 
 export async function batchReadings(batchId: number): Promise<ReadingView[]> {
-  const rows = await GravityReading.findAll({ where: { batchId, [Op.and]: [IN_FORCE] }, order: [['takenAt', 'ASC'], ['id', 'ASC']] });
+  const rows = await GravityReading.findAll({
+    where: { batchId, [Op.and]: [IN_FORCE] },
+    order: [
+      ['takenAt', 'ASC'],
+      ['id', 'ASC'],
+    ],
+  });
   return rows.map(toReadingView);
 }
 
 /** A per-row key from the import's key: the same file sent twice replays row by row. */
-const rowKey = (key: string, line: number) => `imp-${createHash('sha256').update(`${key}:${line}`).digest('base64url').slice(0, 40)}`;
+const rowKey = (key: string, line: number) =>
+  `imp-${createHash('sha256').update(`${key}:${line}`).digest('base64url').slice(0, 40)}`;
 
 /**
  * Checks a probe export and, given the write's device details, writes its rows in one transaction:
  * any row with an error refuses the whole file (400, nothing written); rows at a time already stored,
  * or repeated in the file, are skipped and counted. Without them (`null`) it only answers the preview.
  */
-export async function importProbeCsv(actor: LogActor, batchId: number, input: ProbeImportInput, meta: WriteMeta | null): Promise<ProbeImportResult> {
+export async function importProbeCsv(
+  actor: LogActor,
+  batchId: number,
+  input: ProbeImportInput,
+  meta: WriteMeta | null,
+): Promise<ProbeImportResult> {
   await findBatch(actor.breweryId, batchId);
   const { rows } = parseProbeCsv(input.csv, input);
-  if (rows.length > MAX_IMPORT_ROWS) throw badRequest(`The file has ${rows.length} rows; import at most ${MAX_IMPORT_ROWS} at a time.`);
+  if (rows.length > MAX_IMPORT_ROWS)
+    throw badRequest(`The file has ${rows.length} rows; import at most ${MAX_IMPORT_ROWS} at a time.`);
   const now = Date.now();
   for (const row of rows) {
     if (row.takenAt && Date.parse(row.takenAt) > now + 5 * 60_000) {
@@ -185,19 +223,33 @@ export async function importProbeCsv(actor: LogActor, batchId: number, input: Pr
   }
   const times = rows.filter((r) => r.status === 'ok').map((r) => new Date(r.takenAt!));
   const stored = times.length
-    ? await GravityReading.findAll({ where: { batchId, breweryId: actor.breweryId, takenAt: { [Op.in]: times } }, attributes: ['takenAt'] })
+    ? await GravityReading.findAll({
+        where: { batchId, breweryId: actor.breweryId, takenAt: { [Op.in]: times } },
+        attributes: ['takenAt'],
+      })
     : [];
   const storedSeconds = new Set(stored.map((r) => Math.floor(new Date(r.takenAt).getTime() / 1000)));
   for (const row of rows) {
     if (row.status === 'ok' && storedSeconds.has(Math.floor(Date.parse(row.takenAt!) / 1000))) row.status = 'duplicate';
   }
   const count = (status: string) => rows.filter((r) => r.status === status).length;
-  const result: ProbeImportResult = { rows, toImport: count('ok'), duplicates: count('duplicate'), errors: count('error'), imported: false };
+  const result: ProbeImportResult = {
+    rows,
+    toImport: count('ok'),
+    duplicates: count('duplicate'),
+    errors: count('error'),
+    imported: false,
+  };
   if (!meta) return result;
 
   if (result.errors > 0) {
-    const fields = Object.fromEntries(rows.filter((r) => r.status === 'error').map((r) => [`line.${r.line}`, r.error!]));
-    throw badRequest(`${result.errors} row${result.errors > 1 ? 's have' : ' has'} errors; nothing was imported. Fix the file and try again.`, fields);
+    const fields = Object.fromEntries(
+      rows.filter((r) => r.status === 'error').map((r) => [`line.${r.line}`, r.error!]),
+    );
+    throw badRequest(
+      `${result.errors} row${result.errors > 1 ? 's have' : ' has'} errors; nothing was imported. Fix the file and try again.`,
+      fields,
+    );
   }
   if (result.toImport === 0) return { ...result, imported: true };
   const writes = rows
@@ -211,13 +263,19 @@ export async function importProbeCsv(actor: LogActor, batchId: number, input: Pr
         temp: Number(row.temp.replace(',', '.')),
         tempUnit: input.tempUnit,
       };
-      return { input: { ...reading, ...readingInSi(reading) }, meta: { ...meta, idempotencyKey: rowKey(meta.idempotencyKey, row.line), capturedAt: new Date(row.takenAt!) } };
+      return {
+        input: { ...reading, ...readingInSi(reading) },
+        meta: { ...meta, idempotencyKey: rowKey(meta.idempotencyKey, row.line), capturedAt: new Date(row.takenAt!) },
+      };
     });
   await sequelize.transaction({ isolationLevel: Transaction.ISOLATION_LEVELS.READ_COMMITTED }, async (transaction) => {
     const entries = await appendLogEntries(actor, batchId, writes, transaction);
     if (entries.length === 0) return;
     await readyForReadings(actor, batchId, transaction);
-    await GravityReading.bulkCreate(entries.map((e) => readingRow(actor, e)), { transaction });
+    await GravityReading.bulkCreate(
+      entries.map((e) => readingRow(actor, e)),
+      { transaction },
+    );
   });
   await evaluateReadingAlerts(actor.breweryId, batchId);
   return { ...result, imported: true };

@@ -3,8 +3,21 @@
  * and batch planning all read it from here. Every number comes from shared/brewing.
  */
 import type { Transaction } from 'sequelize';
-import { scaleRecipe, type ComputedRecipe, type EquipmentProfile, type RecipeInput, type ScaleChange, type ScaledRecipe } from '../../shared/brewing';
-import { equipmentAtVolume, toRecipeInput, type EquipmentInput, type RecipeVersionContent, type ScaleTarget } from '../../shared/schemas/recipes';
+import {
+  scaleRecipe,
+  type ComputedRecipe,
+  type EquipmentProfile,
+  type RecipeInput,
+  type ScaleChange,
+  type ScaledRecipe,
+} from '../../shared/brewing';
+import {
+  equipmentAtVolume,
+  toRecipeInput,
+  type EquipmentInput,
+  type RecipeVersionContent,
+  type ScaleTarget,
+} from '../../shared/schemas/recipes';
 import { EquipmentProfile as EquipmentRow, Recipe, RecipeVersion } from '../models';
 import { notFound } from '../errors';
 
@@ -33,15 +46,27 @@ export async function findEquipment(breweryId: number, id: number, transaction?:
   return row;
 }
 
-export async function findVersion(breweryId: number, id: number, transaction?: Transaction, lock = false): Promise<{ version: RecipeVersion; recipe: Recipe }> {
-  const version = await RecipeVersion.findOne({ where: { id, breweryId }, transaction, ...(lock && transaction ? { lock: transaction.LOCK.UPDATE } : {}) });
+export async function findVersion(
+  breweryId: number,
+  id: number,
+  transaction?: Transaction,
+  lock = false,
+): Promise<{ version: RecipeVersion; recipe: Recipe }> {
+  const version = await RecipeVersion.findOne({
+    where: { id, breweryId },
+    transaction,
+    ...(lock && transaction ? { lock: transaction.LOCK.UPDATE } : {}),
+  });
   const recipe = version && (await Recipe.findOne({ where: { id: version.recipeId, breweryId }, transaction }));
   if (!version || !recipe) throw notFound('This recipe version');
   return { version, recipe };
 }
 
 /** The brewhouse a version was written for, at the version's own batch volume. */
-export async function versionEquipment(version: RecipeVersion, transaction?: Transaction): Promise<{ row: EquipmentRow; equipment: EquipmentProfile }> {
+export async function versionEquipment(
+  version: RecipeVersion,
+  transaction?: Transaction,
+): Promise<{ row: EquipmentRow; equipment: EquipmentProfile }> {
   const row = await findEquipment(version.breweryId, version.equipmentProfileId, transaction);
   return { row, equipment: equipmentAtVolume(equipmentFromRow(row), version.content.targets.batchVolumeL) };
 }
@@ -60,10 +85,18 @@ export interface VersionScale {
  * Scales a version to another profile and/or a typed batch volume. Without a profile the
  * version's own brewhouse is used; without a volume, the profile's (or, with neither, the version's).
  */
-export async function scaleVersion(breweryId: number, recipeVersionId: number, to: Partial<ScaleTarget>, transaction?: Transaction): Promise<VersionScale> {
+export async function scaleVersion(
+  breweryId: number,
+  recipeVersionId: number,
+  to: Partial<ScaleTarget>,
+  transaction?: Transaction,
+): Promise<VersionScale> {
   const { version, recipe } = await findVersion(breweryId, recipeVersionId, transaction);
   const { row: sourceRow, equipment: source } = await versionEquipment(version, transaction);
-  const targetRow = to.equipmentProfileId === undefined ? sourceRow : await findEquipment(breweryId, to.equipmentProfileId, transaction);
+  const targetRow =
+    to.equipmentProfileId === undefined
+      ? sourceRow
+      : await findEquipment(breweryId, to.equipmentProfileId, transaction);
   const base = equipmentFromRow(targetRow);
   const volumeL = to.batchVolumeL ?? (to.equipmentProfileId === undefined ? source.batchVolumeL : base.batchVolumeL);
   const target = equipmentAtVolume(base, volumeL);
@@ -123,7 +156,11 @@ export async function planForBatch(
  * Marks a version as used by a batch: it can no longer be edited in place (saving makes the next
  * version). Idempotent. 404 if not this brewery's.
  */
-export async function freezeRecipeVersion(breweryId: number, recipeVersionId: number, transaction?: Transaction): Promise<void> {
+export async function freezeRecipeVersion(
+  breweryId: number,
+  recipeVersionId: number,
+  transaction?: Transaction,
+): Promise<void> {
   const { version } = await findVersion(breweryId, recipeVersionId, transaction, true);
   if (!version.frozenAt) await version.update({ frozenAt: new Date() }, { transaction });
 }

@@ -61,7 +61,10 @@ async function findRecipe(breweryId: number, id: number, transaction?: Transacti
 
 const iso = (d: Date | string) => new Date(d).toISOString();
 
-type VersionFields = Omit<VersionSummary, 'authorName' | 'createdAt' | 'frozenAt'> & { createdAt: Date | string; frozenAt: Date | string | null };
+type VersionFields = Omit<VersionSummary, 'authorName' | 'createdAt' | 'frozenAt'> & {
+  createdAt: Date | string;
+  frozenAt: Date | string | null;
+};
 
 function versionSummary(v: VersionFields, authorName: string | null | undefined): VersionSummary {
   return {
@@ -82,13 +85,22 @@ function versionSummary(v: VersionFields, authorName: string | null | undefined)
 }
 
 async function summaries(versions: RecipeVersion[]): Promise<VersionSummary[]> {
-  const authors = await User.findAll({ where: { id: [...new Set(versions.map((v) => v.authorId))] }, attributes: ['id', 'displayName'] });
+  const authors = await User.findAll({
+    where: { id: [...new Set(versions.map((v) => v.authorId))] },
+    attributes: ['id', 'displayName'],
+  });
   const byId = new Map(authors.map((a) => [a.id, a.displayName]));
   return versions.map((v) => versionSummary(v, byId.get(v.authorId)));
 }
 
 function recipeJson(recipe: Recipe) {
-  return { id: recipe.id, name: recipe.name, style: recipe.style, description: recipe.description, status: recipe.status };
+  return {
+    id: recipe.id,
+    name: recipe.name,
+    style: recipe.style,
+    description: recipe.description,
+    status: recipe.status,
+  };
 }
 
 export async function getRecipe(breweryId: number, id: number) {
@@ -98,7 +110,13 @@ export async function getRecipe(breweryId: number, id: number) {
 }
 
 /** Every number for a version's content on its brewhouse at its batch volume; hops written as IBU shares get their solved weights. */
-async function compute(breweryId: number, recipeName: string, equipmentProfileId: number, written: RecipeVersionContent, transaction?: Transaction) {
+async function compute(
+  breweryId: number,
+  recipeName: string,
+  equipmentProfileId: number,
+  written: RecipeVersionContent,
+  transaction?: Transaction,
+) {
   const row = await findEquipment(breweryId, equipmentProfileId, transaction);
   const equipment = equipmentAtVolume(equipmentFromRow(row), written.targets.batchVolumeL);
   const content = resolveHopShares(recipeName, written, equipment);
@@ -106,12 +124,31 @@ async function compute(breweryId: number, recipeName: string, equipmentProfileId
 }
 
 function figures(computed: ComputedRecipe, content: RecipeVersionContent) {
-  return { og: computed.og, fg: computed.fg, ibu: computed.ibu, srm: computed.srm, abvPct: computed.abvPct, batchVolumeL: content.targets.batchVolumeL };
+  return {
+    og: computed.og,
+    fg: computed.fg,
+    ibu: computed.ibu,
+    srm: computed.srm,
+    abvPct: computed.abvPct,
+    batchVolumeL: content.targets.batchVolumeL,
+  };
 }
 
-async function writeVersion(actor: Actor, recipe: Recipe, input: SaveVersionInput, transaction: Transaction): Promise<RecipeVersion> {
-  const { content, computed } = await compute(actor.breweryId, recipe.name, input.equipmentProfileId, input.content, transaction);
-  const last = (await RecipeVersion.max<number, RecipeVersion>('number', { where: { recipeId: recipe.id }, transaction })) ?? 0;
+async function writeVersion(
+  actor: Actor,
+  recipe: Recipe,
+  input: SaveVersionInput,
+  transaction: Transaction,
+): Promise<RecipeVersion> {
+  const { content, computed } = await compute(
+    actor.breweryId,
+    recipe.name,
+    input.equipmentProfileId,
+    input.content,
+    transaction,
+  );
+  const last =
+    (await RecipeVersion.max<number, RecipeVersion>('number', { where: { recipeId: recipe.id }, transaction })) ?? 0;
   const version = await RecipeVersion.create(
     {
       breweryId: actor.breweryId,
@@ -134,7 +171,10 @@ async function writeVersion(actor: Actor, recipe: Recipe, input: SaveVersionInpu
 export async function createRecipe(actor: Actor, input: CreateRecipeInput) {
   return sequelize.transaction(async (transaction) => {
     const { name, style, description, status, ...first } = input;
-    const recipe = await Recipe.create({ breweryId: actor.breweryId, name, style, description, status }, { transaction });
+    const recipe = await Recipe.create(
+      { breweryId: actor.breweryId, name, style, description, status },
+      { transaction },
+    );
     const version = await writeVersion(actor, recipe, first, transaction);
     return { ...recipeJson(recipe), versionId: version.id, versionNumber: version.number };
   });
@@ -146,7 +186,13 @@ export async function updateRecipe(breweryId: number, id: number, input: UpdateR
   return recipeJson(recipe);
 }
 
-async function versionOf(breweryId: number, recipeId: number, versionId: number, transaction?: Transaction, lock = false) {
+async function versionOf(
+  breweryId: number,
+  recipeId: number,
+  versionId: number,
+  transaction?: Transaction,
+  lock = false,
+) {
   const found = await findVersion(breweryId, versionId, transaction, lock);
   if (found.recipe.id !== recipeId) throw notFound('This recipe version');
   return found;
@@ -178,7 +224,10 @@ function computedFor(recipeName: string, contentText: string, profile: Equipment
   if (hit) return hit;
   const content = JSON.parse(contentText) as RecipeVersionContent;
   const equipment = equipmentAtVolume(profile, content.targets.batchVolumeL);
-  const value = { content, computed: computeRecipe(toRecipeInput(recipeName, resolveHopShares(recipeName, content, equipment)), equipment) };
+  const value = {
+    content,
+    computed: computeRecipe(toRecipeInput(recipeName, resolveHopShares(recipeName, content, equipment)), equipment),
+  };
   computedCache.set(key, value);
   return value;
 }
@@ -208,7 +257,13 @@ export async function getVersion(breweryId: number, recipeId: number, versionId:
   if (row.name === null) throw notFound('This equipment profile');
   const { content, computed } = computedFor(row.recipeName, row.content, equipmentFromRow(row));
   return {
-    recipe: { id: row.recipeId, name: row.recipeName, style: row.style, description: row.description, status: row.status },
+    recipe: {
+      id: row.recipeId,
+      name: row.recipeName,
+      style: row.style,
+      description: row.description,
+      status: row.status,
+    },
     version: { ...versionSummary({ ...row, batchVolumeL: row.versionBatchVolumeL }, row.authorName), content },
     computed,
   };
@@ -227,10 +282,25 @@ export async function addVersion(actor: Actor, recipeId: number, input: SaveVers
 export async function updateVersion(actor: Actor, recipeId: number, versionId: number, input: SaveVersionInput) {
   return sequelize.transaction(async (transaction) => {
     const { version, recipe } = await versionOf(actor.breweryId, recipeId, versionId, transaction, true);
-    if (version.frozenAt) throw conflict(`Version ${version.number} has been used by a batch and cannot change. Save your edits as the next version.`);
-    const { content, computed } = await compute(actor.breweryId, recipe.name, input.equipmentProfileId, input.content, transaction);
+    if (version.frozenAt)
+      throw conflict(
+        `Version ${version.number} has been used by a batch and cannot change. Save your edits as the next version.`,
+      );
+    const { content, computed } = await compute(
+      actor.breweryId,
+      recipe.name,
+      input.equipmentProfileId,
+      input.content,
+      transaction,
+    );
     await version.update(
-      { changeNote: input.changeNote, equipmentProfileId: input.equipmentProfileId, content, authorId: actor.id, ...figures(computed, content) },
+      {
+        changeNote: input.changeNote,
+        equipmentProfileId: input.equipmentProfileId,
+        content,
+        authorId: actor.id,
+        ...figures(computed, content),
+      },
       { transaction },
     );
     return { id: version.id, number: version.number };
@@ -252,7 +322,12 @@ export async function saveScaledVersion(actor: Actor, recipeId: number, versionI
       ...(water ? { water } : {}),
       targets: { ...old.targets, batchVolumeL: s.target.batchVolumeL },
     };
-    const version = await writeVersion(actor, s.recipe, { changeNote: input.changeNote, equipmentProfileId: s.targetEquipmentId, content }, transaction);
+    const version = await writeVersion(
+      actor,
+      s.recipe,
+      { changeNote: input.changeNote, equipmentProfileId: s.targetEquipmentId, content },
+      transaction,
+    );
     return { id: version.id, number: version.number };
   });
 }
@@ -274,7 +349,9 @@ export function differences(a: unknown, b: unknown): Difference[] {
   flatten(a, '', fa);
   flatten(b, '', fb);
   const paths = [...new Set([...fa.keys(), ...fb.keys()])];
-  return paths.filter((p) => fa.get(p) !== fb.get(p)).map((p) => ({ path: p, a: fa.get(p) ?? null, b: fb.get(p) ?? null }));
+  return paths
+    .filter((p) => fa.get(p) !== fb.get(p))
+    .map((p) => ({ path: p, a: fa.get(p) ?? null, b: fb.get(p) ?? null }));
 }
 
 const round = (x: number, decimals: number) => Number(x.toFixed(decimals));
@@ -283,7 +360,12 @@ const round = (x: number, decimals: number) => Number(x.toFixed(decimals));
 export async function compareVersions(breweryId: number, recipeId: number, a: number, b: number) {
   const [left, right] = await Promise.all([getVersion(breweryId, recipeId, a), getVersion(breweryId, recipeId, b)]);
   const names = new Map(
-    (await EquipmentProfile.findAll({ where: { breweryId, id: [left.version.equipmentProfileId, right.version.equipmentProfileId] }, attributes: ['id', 'name'] })).map((e) => [e.id, e.name]),
+    (
+      await EquipmentProfile.findAll({
+        where: { breweryId, id: [left.version.equipmentProfileId, right.version.equipmentProfileId] },
+        attributes: ['id', 'name'],
+      })
+    ).map((e) => [e.id, e.name]),
   );
   const pick = (v: typeof left) => ({
     equipment: names.get(v.version.equipmentProfileId) ?? null,

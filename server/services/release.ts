@@ -12,7 +12,14 @@ import { logEntries } from './batch-log';
 import { batchActuals } from '../../shared/batches/brew-day';
 import { abv, ABV_METHOD_SHOWN, type PackageLine } from '../../shared/brewing';
 import { packageName } from '../../shared/schemas/cellar';
-import { wasReleased, type FinalNumbers, type PackageSize, type PublishReleaseInput, type ReleaseDetail, type ReleaseSheet } from '../../shared/schemas/taproom';
+import {
+  wasReleased,
+  type FinalNumbers,
+  type PackageSize,
+  type PublishReleaseInput,
+  type ReleaseDetail,
+  type ReleaseSheet,
+} from '../../shared/schemas/taproom';
 
 /** Statuses a batch can be in while its release sheet is written: there is beer in the tank or in packages. */
 const SHEET_STATUSES = ['fermenting', 'conditioning', 'packaged', 'released'];
@@ -23,7 +30,14 @@ const GRAVITY_MATCH = 0.0005;
 export async function finalNumbers(batch: Batch, transaction?: Transaction): Promise<FinalNumbers> {
   const [{ entries }, lastReading] = await Promise.all([
     logEntries(batch.id, transaction),
-    GravityReading.findOne({ where: { batchId: batch.id, [Op.and]: [IN_FORCE] }, order: [['takenAt', 'DESC'], ['id', 'DESC']], transaction }),
+    GravityReading.findOne({
+      where: { batchId: batch.id, [Op.and]: [IN_FORCE] },
+      order: [
+        ['takenAt', 'DESC'],
+        ['id', 'DESC'],
+      ],
+      transaction,
+    }),
   ]);
   const og = batchActuals(batch.plan, entries).og.actual;
   const fg = lastReading?.sg ?? null;
@@ -44,7 +58,10 @@ const lineLabel = (line: PackageLine) => packageName(line.kind, line.kind === 'k
 /** What the batch was packaged into, by size, summed over its packaging runs. */
 export async function packageSizes(breweryId: number, batchIds: number[]): Promise<Map<number, PackageSize[]>> {
   const runs = batchIds.length
-    ? await PackagingRun.findAll({ where: { breweryId, batchId: { [Op.in]: batchIds } }, order: [['packagedAt', 'ASC']] })
+    ? await PackagingRun.findAll({
+        where: { breweryId, batchId: { [Op.in]: batchIds } },
+        order: [['packagedAt', 'ASC']],
+      })
     : [];
   const out = new Map<number, PackageSize[]>(batchIds.map((id) => [id, []]));
   for (const run of runs) {
@@ -90,10 +107,18 @@ export async function releaseDetail(actor: Express.User, batchId: number): Promi
   const batch = await findBatch(actor.breweryId, batchId);
   const release = await Release.findOne({ where: { batchId: batch.id, breweryId: actor.breweryId } });
   const peopleIds = [release?.releasedById, release?.offTapById].filter((id) => id != null);
-  const people = peopleIds.length ? await User.findAll({ where: { id: { [Op.in]: peopleIds } }, attributes: ['id', 'displayName'] }) : [];
+  const people = peopleIds.length
+    ? await User.findAll({ where: { id: { [Op.in]: peopleIds } }, attributes: ['id', 'displayName'] })
+    : [];
   const nameOf = (id: number | null | undefined) => people.find((p) => p.id === id)?.displayName ?? null;
   return {
-    batch: { id: batch.id, number: batch.number, beerName: batch.beerName, status: batch.status, style: batch.plan.style ?? '' },
+    batch: {
+      id: batch.id,
+      number: batch.number,
+      beerName: batch.beerName,
+      status: batch.status,
+      style: batch.plan.style ?? '',
+    },
     state: release?.state ?? null,
     sheet: release ? sheetOf(release) : null,
     numbers: release && wasReleased(release.state) ? frozenNumbers(release, batch) : await finalNumbers(batch),
@@ -106,7 +131,11 @@ export async function releaseDetail(actor: Express.User, batchId: number): Promi
 }
 
 /** Saves the release sheet. Before release, `comingSoon` shows the beer to the taproom as coming soon; after it, the state stays. */
-export async function saveReleaseSheet(actor: Express.User, batchId: number, sheet: ReleaseSheet): Promise<ReleaseDetail> {
+export async function saveReleaseSheet(
+  actor: Express.User,
+  batchId: number,
+  sheet: ReleaseSheet,
+): Promise<ReleaseDetail> {
   await sequelize.transaction(async (transaction) => {
     const batch = await findBatch(actor.breweryId, batchId, transaction, true);
     if (!SHEET_STATUSES.includes(batch.status)) {
@@ -123,7 +152,24 @@ export async function saveReleaseSheet(actor: Express.User, batchId: number, she
     const existing = await Release.findOne({ where: { batchId: batch.id }, transaction });
     const state = existing && wasReleased(existing.state) ? existing.state : comingSoon ? 'coming_soon' : 'draft';
     if (existing) await existing.update({ ...fields, state }, { transaction });
-    else await Release.create({ ...fields, state, breweryId: actor.breweryId, batchId: batch.id, og: null, fg: null, abvPct: null, abvMethod: null, ibu: null, srm: null, releasedAt: null, releasedById: null }, { transaction });
+    else
+      await Release.create(
+        {
+          ...fields,
+          state,
+          breweryId: actor.breweryId,
+          batchId: batch.id,
+          og: null,
+          fg: null,
+          abvPct: null,
+          abvMethod: null,
+          ibu: null,
+          srm: null,
+          releasedAt: null,
+          releasedById: null,
+        },
+        { transaction },
+      );
   });
   return releaseDetail(actor, batchId);
 }
@@ -134,19 +180,32 @@ const gravityText = (sg: number) => sg.toFixed(3);
  * Releases the batch: the head brewer confirms the OG and FG they saw; if the log says otherwise now, 409.
  * ABV is computed here from the logged numbers, frozen on the release with IBU and SRM, and the batch moves to released.
  */
-export async function publishRelease(actor: Express.User, batchId: number, input: PublishReleaseInput): Promise<ReleaseDetail> {
+export async function publishRelease(
+  actor: Express.User,
+  batchId: number,
+  input: PublishReleaseInput,
+): Promise<ReleaseDetail> {
   await sequelize.transaction(async (transaction) => {
     const batch = await findBatch(actor.breweryId, batchId, transaction, true);
     const release = await Release.findOne({ where: { batchId: batch.id }, transaction });
     if (!release) throw conflict('Write the release sheet (description and serving notes) before releasing.');
     if (release.state === 'on_tap') throw conflict('This beer is already released.');
-    if (release.state === 'off_tap') throw conflict('This beer was released and has been taken off tap: put it back on tap instead.');
+    if (release.state === 'off_tap')
+      throw conflict('This beer was released and has been taken off tap: put it back on tap instead.');
     if (batch.status !== 'packaged') throw conflict('Only a packaged batch can be released: log its packaging first.');
     const numbers = await finalNumbers(batch, transaction);
-    if (numbers.og === null) throw conflict('The measured OG is not in the brew-day log yet: log it at knockout before releasing.');
-    if (numbers.fg === null) throw conflict('There is no gravity reading for this batch: log the final gravity before releasing.');
-    if (numbers.abvPct === null) throw conflict(`The last reading (${gravityText(numbers.fg)}) is above the OG (${gravityText(numbers.og)}): check the log.`);
-    if (Math.abs(input.confirmedOg - numbers.og) > GRAVITY_MATCH || Math.abs(input.confirmedFg - numbers.fg) > GRAVITY_MATCH) {
+    if (numbers.og === null)
+      throw conflict('The measured OG is not in the brew-day log yet: log it at knockout before releasing.');
+    if (numbers.fg === null)
+      throw conflict('There is no gravity reading for this batch: log the final gravity before releasing.');
+    if (numbers.abvPct === null)
+      throw conflict(
+        `The last reading (${gravityText(numbers.fg)}) is above the OG (${gravityText(numbers.og)}): check the log.`,
+      );
+    if (
+      Math.abs(input.confirmedOg - numbers.og) > GRAVITY_MATCH ||
+      Math.abs(input.confirmedFg - numbers.fg) > GRAVITY_MATCH
+    ) {
       throw conflict(
         `The log now says OG ${gravityText(numbers.og)} and FG ${gravityText(numbers.fg)}, not what was confirmed. Review the numbers and release again.`,
       );
@@ -214,10 +273,21 @@ export interface ReleaseCandidate {
 export async function releaseCandidates(actor: Express.User): Promise<ReleaseCandidate[]> {
   const batches = await Batch.findAll({
     where: { breweryId: actor.breweryId, status: { [Op.in]: SHEET_STATUSES } },
-    order: [['brewDate', 'DESC'], ['id', 'DESC']],
+    order: [
+      ['brewDate', 'DESC'],
+      ['id', 'DESC'],
+    ],
     attributes: ['id', 'number', 'beerName', 'status'],
   });
-  const releases = await Release.findAll({ where: { breweryId: actor.breweryId, batchId: { [Op.in]: batches.map((b) => b.id) } } });
+  const releases = await Release.findAll({
+    where: { breweryId: actor.breweryId, batchId: { [Op.in]: batches.map((b) => b.id) } },
+  });
   const states = new Map(releases.map((r) => [r.batchId, r.state]));
-  return batches.map((b) => ({ batchId: b.id, number: b.number, beerName: b.beerName, status: b.status, state: states.get(b.id) ?? null }));
+  return batches.map((b) => ({
+    batchId: b.id,
+    number: b.number,
+    beerName: b.beerName,
+    status: b.status,
+    state: states.get(b.id) ?? null,
+  }));
 }

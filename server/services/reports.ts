@@ -9,7 +9,13 @@ import { sequelize } from '../config/database';
 import { notFound } from '../errors';
 import { readingInForce } from '../models';
 import { achievedEfficiency, apparentAttenuation, lineVolumeL, type PackageLine } from '../../shared/brewing';
-import type { BatchHistory, BeerFigures, HistoryRow, PackageFigures, ProductionReport } from '../../shared/schemas/reports';
+import type {
+  BatchHistory,
+  BeerFigures,
+  HistoryRow,
+  PackageFigures,
+  ProductionReport,
+} from '../../shared/schemas/reports';
 import { packageName } from '../../shared/schemas/cellar';
 
 /** The UTC instant of local midnight on the first of `year-month` in `timeZone` (month may be 13 → next year). */
@@ -35,7 +41,8 @@ const measured = (k: string, field: 'volumeL' | 'gravitySg') => `IF(JSON_EXISTS(
 const KNOCKOUT_LITRES = measured('k', 'volumeL');
 
 /** What a batch packaged before the month (alias b), for a batch in a tank at the month's end. */
-const PACKAGED_BEFORE = '(SELECT SUM(p.packaged_l) FROM packaging_runs p WHERE p.batch_id = b.id AND p.packaged_at < :from)';
+const PACKAGED_BEFORE =
+  '(SELECT SUM(p.packaged_l) FROM packaging_runs p WHERE p.batch_id = b.id AND p.packaged_at < :from)';
 
 /**
  * The monthly report in one statement. Each table a statement names costs MariaDB planning time, so it names few:
@@ -93,9 +100,15 @@ function monthBounds(month: string, timeZone: string): { from: Date; to: Date } 
   return { from: monthStartUtc(year, mon, timeZone), to: monthStartUtc(year, mon + 1, timeZone) };
 }
 
-export async function productionReport(brewery: { id: number; timeZone: string }, month: string): Promise<ProductionReport> {
+export async function productionReport(
+  brewery: { id: number; timeZone: string },
+  month: string,
+): Promise<ProductionReport> {
   const { from, to } = monthBounds(month, brewery.timeZone);
-  const rows = await sequelize.query<ProductionRow>(PRODUCTION_SQL, { replacements: { breweryId: brewery.id, from, to }, type: QueryTypes.SELECT });
+  const rows = await sequelize.query<ProductionRow>(PRODUCTION_SQL, {
+    replacements: { breweryId: brewery.id, from, to },
+    type: QueryTypes.SELECT,
+  });
 
   const beers = new Map<string, BeerFigures>();
   const beer = (name: string) => {
@@ -109,13 +122,19 @@ export async function productionReport(brewery: { id: number; timeZone: string }
   for (const r of rows) {
     if (r.why !== 'dumped') continue;
     const first = dumped.get(r.batchId);
-    if (!first || (r.knockoutId !== null && (first.knockoutId === null || Number(r.knockoutId) < Number(first.knockoutId)))) dumped.set(r.batchId, r);
+    if (
+      !first ||
+      (r.knockoutId !== null && (first.knockoutId === null || Number(r.knockoutId) < Number(first.knockoutId)))
+    )
+      dumped.set(r.batchId, r);
   }
 
   // What each batch had packaged by the month's end: its runs in the month, and for a batch in a tank, before it.
   const packagedBefore = new Map<number, number>();
-  const addPackaged = (batchId: number, l: number) => packagedBefore.set(batchId, (packagedBefore.get(batchId) ?? 0) + l);
-  for (const r of new Map(inTank.map((r) => [r.batchId, r])).values()) if (r.packagedL !== null) addPackaged(r.batchId, Number(r.packagedL));
+  const addPackaged = (batchId: number, l: number) =>
+    packagedBefore.set(batchId, (packagedBefore.get(batchId) ?? 0) + l);
+  for (const r of new Map(inTank.map((r) => [r.batchId, r])).values())
+    if (r.packagedL !== null) addPackaged(r.batchId, Number(r.packagedL));
   const packages = new Map<string, PackageFigures>();
   for (const r of rows) {
     if (r.why !== 'packaged') continue;
@@ -133,11 +152,17 @@ export async function productionReport(brewery: { id: number; timeZone: string }
 
   for (const r of rows) if (r.why === 'brewed') beer(r.beerName).brewedL += litres(r);
   // A dumped batch loses what was still in the tank: its knockout volume less anything packaged before.
-  for (const r of dumped.values()) beer(r.beerName).dumpedL += Math.max(0, litres(r) - (packagedBefore.get(r.batchId) ?? 0));
+  for (const r of dumped.values())
+    beer(r.beerName).dumpedL += Math.max(0, litres(r) - (packagedBefore.get(r.batchId) ?? 0));
   for (const r of inTank) beer(r.beerName).inTankL += Math.max(0, litres(r) - (packagedBefore.get(r.batchId) ?? 0));
   const list = [...beers.values()].sort((a, b) => a.beerName.localeCompare(b.beerName));
   const totals = list.reduce(
-    (t, b) => ({ brewedL: t.brewedL + b.brewedL, packagedL: t.packagedL + b.packagedL, dumpedL: t.dumpedL + b.dumpedL, inTankL: t.inTankL + b.inTankL }),
+    (t, b) => ({
+      brewedL: t.brewedL + b.brewedL,
+      packagedL: t.packagedL + b.packagedL,
+      dumpedL: t.dumpedL + b.dumpedL,
+      inTankL: t.inTankL + b.inTankL,
+    }),
     { brewedL: 0, packagedL: 0, dumpedL: 0, inTankL: 0 },
   );
   return {
@@ -146,7 +171,9 @@ export async function productionReport(brewery: { id: number; timeZone: string }
     from: from.toISOString(),
     to: to.toISOString(),
     beers: list,
-    packages: [...packages.values()].sort((a, b) => a.beerName.localeCompare(b.beerName) || a.kind.localeCompare(b.kind) || a.size.localeCompare(b.size)),
+    packages: [...packages.values()].sort(
+      (a, b) => a.beerName.localeCompare(b.beerName) || a.kind.localeCompare(b.kind) || a.size.localeCompare(b.size),
+    ),
     totals,
   };
 }
@@ -157,7 +184,9 @@ export async function explainProductionReport(breweryId: number, month: string):
     replacements: { breweryId, ...monthBounds(month, 'UTC') },
     type: QueryTypes.SELECT,
   });
-  return rows.map((r) => `${r.id} ${r.select_type} ${r.table} type=${r.type} key=${r.key ?? '-'} rows=${r.rows} ${r.Extra ?? ''}`);
+  return rows.map(
+    (r) => `${r.id} ${r.select_type} ${r.table} type=${r.type} key=${r.key ?? '-'} rows=${r.rows} ${r.Extra ?? ''}`,
+  );
 }
 
 /**
@@ -199,7 +228,10 @@ interface HistorySqlRow {
 
 /** The latest `limit` batches of a recipe, planned against actual, newest first. */
 export async function batchHistory(breweryId: number, recipeId: number, limit: number): Promise<BatchHistory> {
-  const found = await sequelize.query<HistorySqlRow>(HISTORY_SQL, { replacements: { breweryId, recipeId, limit }, type: QueryTypes.SELECT });
+  const found = await sequelize.query<HistorySqlRow>(HISTORY_SQL, {
+    replacements: { breweryId, recipeId, limit },
+    type: QueryTypes.SELECT,
+  });
   const recipe = found.find((r) => r.id === null);
   if (!recipe) throw notFound('This recipe');
   const rows: HistoryRow[] = found
@@ -222,36 +254,64 @@ export async function batchHistory(breweryId: number, recipeId: number, limit: n
         plannedEfficiency,
         actualEfficiency:
           og !== null && volumeL !== null
-            ? achievedEfficiency({ plannedEfficiency, plannedOg: b.plannedOg, plannedVolumeL: Number(b.plannedKnockoutL), actualOg: og, actualVolumeL: volumeL })
+            ? achievedEfficiency({
+                plannedEfficiency,
+                plannedOg: b.plannedOg,
+                plannedVolumeL: Number(b.plannedKnockoutL),
+                actualOg: og,
+                actualVolumeL: volumeL,
+              })
             : null,
         apparentAttenuation: og !== null && fg !== null && fg < og ? apparentAttenuation(og, fg) : null,
-        daysBrewToPackage: packagedAt ? Math.floor((packagedAt.getTime() - Date.parse(`${b.brewDate}T00:00:00Z`)) / 86_400_000) : null,
+        daysBrewToPackage: packagedAt
+          ? Math.floor((packagedAt.getTime() - Date.parse(`${b.brewDate}T00:00:00Z`)) / 86_400_000)
+          : null,
       };
     });
   return { recipeId, recipeName: recipe.recipeName!, rows };
 }
 
 /** The monthly report as CSV: one line per beer and a total, in litres, US barrels and hectolitres; then packages. */
-export function productionCsv(report: ProductionReport, convert: { bbl: (l: number) => number; hl: (l: number) => number }): string {
+export function productionCsv(
+  report: ProductionReport,
+  convert: { bbl: (l: number) => number; hl: (l: number) => number },
+): string {
   const cell = (v: string | number) => {
     const s = typeof v === 'number' ? String(Math.round(v * 100) / 100) : v;
     // Quote every text cell, and neutralise leading formula characters for spreadsheets.
     return typeof v === 'number' ? s : `"${(/^[=+\-@\t\r]/.test(s) ? `'${s}` : s).replace(/"/g, '""')}"`;
   };
   const figures = ['brewedL', 'packagedL', 'dumpedL', 'inTankL'] as const;
-  const head = ['Beer', ...figures.flatMap((f) => {
-    const label = { brewedL: 'Brewed', packagedL: 'Packaged', dumpedL: 'Dumped', inTankL: 'In tanks at month end' }[f];
-    return [`${label} (L)`, `${label} (US bbl)`, `${label} (hL)`];
-  })];
-  const line = (name: string, b: Omit<BeerFigures, 'beerName'>) => [cell(name), ...figures.flatMap((f) => [cell(b[f]), cell(convert.bbl(b[f])), cell(convert.hl(b[f]))])].join(',');
+  const head = [
+    'Beer',
+    ...figures.flatMap((f) => {
+      const label = { brewedL: 'Brewed', packagedL: 'Packaged', dumpedL: 'Dumped', inTankL: 'In tanks at month end' }[
+        f
+      ];
+      return [`${label} (L)`, `${label} (US bbl)`, `${label} (hL)`];
+    }),
+  ];
+  const line = (name: string, b: Omit<BeerFigures, 'beerName'>) =>
+    [cell(name), ...figures.flatMap((f) => [cell(b[f]), cell(convert.bbl(b[f])), cell(convert.hl(b[f]))])].join(',');
   const lines = [
-    cell(`Kettlewright monthly production ${report.month} (${report.timeZone}). Official forms differ by country: these figures help prepare them.`),
+    cell(
+      `Kettlewright monthly production ${report.month} (${report.timeZone}). Official forms differ by country: these figures help prepare them.`,
+    ),
     head.map(cell).join(','),
     ...report.beers.map((b) => line(b.beerName, b)),
     line('Total', report.totals),
     '',
     ['Beer', 'Package', 'Count', 'Volume (L)', 'Volume (US bbl)', 'Volume (hL)'].map(cell).join(','),
-    ...report.packages.map((p) => [cell(p.beerName), cell(packageName(p.kind, p.size)), cell(p.count), cell(p.volumeL), cell(convert.bbl(p.volumeL)), cell(convert.hl(p.volumeL))].join(',')),
+    ...report.packages.map((p) =>
+      [
+        cell(p.beerName),
+        cell(packageName(p.kind, p.size)),
+        cell(p.count),
+        cell(p.volumeL),
+        cell(convert.bbl(p.volumeL)),
+        cell(convert.hl(p.volumeL)),
+      ].join(','),
+    ),
   ];
   return `${lines.join('\r\n')}\r\n`;
 }

@@ -41,14 +41,25 @@ export function signaturesOf(batch: Batch, rows: readonly BatchLogEntry[]): Sign
  * The head brewer signs the brew day with the meaning "reviewed". A wrong password answers 400 and,
  * through the route's limiter, counts toward the sign-in throttle. Afterwards brew-day entries are corrections only.
  */
-export async function signOffBrewDay(actor: LogActor, batchId: number, password: string, meta: WriteMeta): Promise<Signature> {
+export async function signOffBrewDay(
+  actor: LogActor,
+  batchId: number,
+  password: string,
+  meta: WriteMeta,
+): Promise<Signature> {
   const user = await User.findOne({ where: { id: actor.id, breweryId: actor.breweryId } });
   if (!user || !(await checkPassword(password, user.passwordHash))) {
-    throw wrongPassword(400, 'Your password is not right. Nothing was signed.', { password: 'This is not your password' });
+    throw wrongPassword(400, 'Your password is not right. Nothing was signed.', {
+      password: 'This is not your password',
+    });
   }
   const brewery = await Brewery.findByPk(actor.breweryId);
   return sequelize.transaction({ isolationLevel: Transaction.ISOLATION_LEVELS.READ_COMMITTED }, async (transaction) => {
-    const batch = await Batch.findOne({ where: { id: batchId, breweryId: actor.breweryId }, lock: transaction.LOCK.UPDATE, transaction });
+    const batch = await Batch.findOne({
+      where: { id: batchId, breweryId: actor.breweryId },
+      lock: transaction.LOCK.UPDATE,
+      transaction,
+    });
     if (!batch) throw notFound('This batch');
     if (await brewDaySigned(batchId, transaction)) throw conflict('This brew day is already signed off.');
     const before = await BatchLogEntry.findAll({ where: { batchId }, order: [['sequence', 'ASC']], transaction });

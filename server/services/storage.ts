@@ -1,6 +1,12 @@
 // Object storage for uploaded files, through the S3 API: the fake server in development and tests,
 // a real object store in production (bucket and endpoint from configuration).
-import { DeleteObjectCommand, GetObjectCommand, PutObjectCommand, S3Client, S3ServiceException } from '@aws-sdk/client-s3';
+import {
+  DeleteObjectCommand,
+  GetObjectCommand,
+  PutObjectCommand,
+  S3Client,
+  S3ServiceException,
+} from '@aws-sdk/client-s3';
 import { env } from '../config/env';
 import { HttpError, notFound } from '../errors';
 

@@ -45,7 +45,11 @@ async function toBeers(breweryId: number, releases: Release[]): Promise<TaproomB
       packageSizes: sizes.get(r.batchId) ?? [],
       tasting: summaries.get(r.batchId)!,
       photo: r.photoAttachmentId
-        ? { id: r.photoAttachmentId, url: `/api/attachments/${r.photoAttachmentId}/file`, thumbnailUrl: `/api/attachments/${r.photoAttachmentId}/thumbnail` }
+        ? {
+            id: r.photoAttachmentId,
+            url: `/api/attachments/${r.photoAttachmentId}/file`,
+            thumbnailUrl: `/api/attachments/${r.photoAttachmentId}/thumbnail`,
+          }
         : null,
       releasedAt: r.releasedAt?.toISOString() ?? null,
       offTapAt: r.offTapAt?.toISOString() ?? null,
@@ -54,16 +58,34 @@ async function toBeers(breweryId: number, releases: Release[]): Promise<TaproomB
 }
 
 /** Beers on tap (newest release first), then coming soon; filtered by words, style and strength. */
-export async function listBeers(actor: Express.User, query: TaproomListQuery): Promise<{ beers: TaproomBeer[]; styles: string[] }> {
+export async function listBeers(
+  actor: Express.User,
+  query: TaproomListQuery,
+): Promise<{ beers: TaproomBeer[]; styles: string[] }> {
   const base = { breweryId: actor.breweryId, state: SHOWN };
   const shownStyles = await Release.findAll({ where: base, attributes: ['style'], group: ['style'] });
   const words = query.q ? `%${query.q.replace(/[\\%_]/g, (c) => `\\${c}`)}%` : null;
   const where: WhereOptions<Release> = {
     ...base,
     ...(query.style ? { style: query.style } : {}),
-    ...(words ? { [Op.or]: [{ beerName: { [Op.like]: words } }, { style: { [Op.like]: words } }, { description: { [Op.like]: words } }] } : {}),
+    ...(words
+      ? {
+          [Op.or]: [
+            { beerName: { [Op.like]: words } },
+            { style: { [Op.like]: words } },
+            { description: { [Op.like]: words } },
+          ],
+        }
+      : {}),
   };
-  const matching = await Release.findAll({ where, order: [['state', 'DESC'], ['releasedAt', 'DESC'], ['id', 'DESC']] });
+  const matching = await Release.findAll({
+    where,
+    order: [
+      ['state', 'DESC'],
+      ['releasedAt', 'DESC'],
+      ['id', 'DESC'],
+    ],
+  });
   const beers = await toBeers(actor.breweryId, matching);
   return {
     beers: query.strength ? beers.filter((b) => strengthOf(b.abvPct) === query.strength) : beers,

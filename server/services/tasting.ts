@@ -9,11 +9,26 @@ import { methodNotAllowed, notFound, unprocessable } from '../errors';
 import { canonicalJson, GENESIS_HASH, sha256 } from './batch-log';
 import { findBatch } from './batches';
 import type { Role } from '../../shared/schemas/roles';
-import type { OffFlavour, TastingNote as TastingNoteView, TastingNoteInput, TastingSummary } from '../../shared/schemas/tasting';
+import type {
+  OffFlavour,
+  TastingNote as TastingNoteView,
+  TastingNoteInput,
+  TastingSummary,
+} from '../../shared/schemas/tasting';
 
 type Hashable = Pick<
   TastingNote,
-  'breweryId' | 'batchId' | 'sequence' | 'content' | 'correctsNoteId' | 'reason' | 'authorId' | 'authorRole' | 'authorName' | 'signedAt' | 'idempotencyKey'
+  | 'breweryId'
+  | 'batchId'
+  | 'sequence'
+  | 'content'
+  | 'correctsNoteId'
+  | 'reason'
+  | 'authorId'
+  | 'authorRole'
+  | 'authorName'
+  | 'signedAt'
+  | 'idempotencyKey'
 >;
 
 /** SHA-256 over the previous note's hash and exactly what this note records and who signed it when. */
@@ -58,9 +73,17 @@ function toView(n: TastingNote, prevHash: string, correctedBy: number[]): Tastin
 type NoteAuthor = Omit<Express.User, 'brewery'>;
 
 /** A batch's notes in order, each with its signature checked against the chain. */
-export async function listTastingNotes(actor: NoteAuthor, batchId: number, transaction?: Transaction): Promise<TastingNoteView[]> {
+export async function listTastingNotes(
+  actor: NoteAuthor,
+  batchId: number,
+  transaction?: Transaction,
+): Promise<TastingNoteView[]> {
   await findBatch(actor.breweryId, batchId, transaction);
-  const rows = await TastingNote.findAll({ where: { batchId, breweryId: actor.breweryId }, order: [['sequence', 'ASC']], transaction });
+  const rows = await TastingNote.findAll({
+    where: { batchId, breweryId: actor.breweryId },
+    order: [['sequence', 'ASC']],
+    transaction,
+  });
   const correctedBy = new Map<number, number[]>();
   for (const r of rows) {
     if (r.correctsNoteId !== null) {
@@ -76,8 +99,16 @@ export async function listTastingNotes(actor: NoteAuthor, batchId: number, trans
   });
 }
 
-async function replayOf(actor: NoteAuthor, batchId: number, input: TastingNoteInput, transaction?: Transaction): Promise<TastingNote | null> {
-  const existing = await TastingNote.findOne({ where: { breweryId: actor.breweryId, idempotencyKey: input.idempotencyKey }, transaction });
+async function replayOf(
+  actor: NoteAuthor,
+  batchId: number,
+  input: TastingNoteInput,
+  transaction?: Transaction,
+): Promise<TastingNote | null> {
+  const existing = await TastingNote.findOne({
+    where: { breweryId: actor.breweryId, idempotencyKey: input.idempotencyKey },
+    transaction,
+  });
   if (!existing) return null;
   const same =
     existing.batchId === batchId &&
@@ -100,7 +131,9 @@ export async function addTastingNote(
     result = await append(actor, batchId, input, transaction);
   } else {
     try {
-      result = await sequelize.transaction({ isolationLevel: Transaction.ISOLATION_LEVELS.READ_COMMITTED }, (t) => append(actor, batchId, input, t));
+      result = await sequelize.transaction({ isolationLevel: Transaction.ISOLATION_LEVELS.READ_COMMITTED }, (t) =>
+        append(actor, batchId, input, t),
+      );
     } catch (error) {
       // The same key raced in from a second send: the unique index kept one; answer as a replay would.
       const replay = error instanceof UniqueConstraintError ? await replayOf(actor, batchId, input) : null;
@@ -123,9 +156,14 @@ async function append(actor: NoteAuthor, batchId: number, input: TastingNoteInpu
   if (input.correctsNoteId) {
     const target = await TastingNote.findOne({ where: { id: input.correctsNoteId, batchId: batch.id }, transaction });
     if (!target) throw unprocessable('The note to correct is not one of this batch’s notes.');
-    if (target.authorId !== actor.id) throw unprocessable('Only the taster who signed a note can correct it; add your own note instead.');
+    if (target.authorId !== actor.id)
+      throw unprocessable('Only the taster who signed a note can correct it; add your own note instead.');
   }
-  const previous = await TastingNote.findOne({ where: { batchId: batch.id }, order: [['sequence', 'DESC']], transaction });
+  const previous = await TastingNote.findOne({
+    where: { batchId: batch.id },
+    order: [['sequence', 'DESC']],
+    transaction,
+  });
   const prevHash = previous?.hash ?? GENESIS_HASH;
   const fields = {
     breweryId: actor.breweryId,
@@ -149,7 +187,9 @@ async function append(actor: NoteAuthor, batchId: number, input: TastingNoteInpu
 export async function refuseNoteChange(actor: Express.User, batchId: number, noteId: number): Promise<never> {
   const note = await TastingNote.findOne({ where: { id: noteId, batchId, breweryId: actor.breweryId } });
   if (!note) throw notFound('This tasting note');
-  throw methodNotAllowed('Signed tasting notes cannot be changed or deleted. Add a correction that points at the note instead.');
+  throw methodNotAllowed(
+    'Signed tasting notes cannot be changed or deleted. Add a correction that points at the note instead.',
+  );
 }
 
 /** What the taproom reads: current notes only (a corrected note counts through its correction). */
@@ -165,7 +205,9 @@ export async function tastingSummaries(breweryId: number, batchIds: number[]): P
     const offFlavours = new Set<OffFlavour>(current.flatMap((r) => r.content.offFlavours));
     out.set(batchId, {
       tasters: new Set(current.map((r) => r.authorId)).size,
-      averageScore: current.length ? Math.round((current.reduce((s, r) => s + r.score, 0) / current.length) * 10) / 10 : null,
+      averageScore: current.length
+        ? Math.round((current.reduce((s, r) => s + r.score, 0) / current.length) * 10) / 10
+        : null,
       aroma: latest?.content.aroma ?? null,
       flavour: latest?.content.flavour ?? null,
       offFlavours: [...offFlavours],

@@ -49,7 +49,10 @@ describe('what each step asks for, from the frozen plan', () => {
     expect(sparge.asks).toEqual(['tempC', 'volumeL']);
     // Sparge water about 170 °F (77 °C): common practice, no source.
     expect(sparge.expected).toEqual({ tempC: 77, volumeL: plan.computed.volumes.spargeL });
-    expect(sparge.additions.map((a) => a.what)).toEqual(['Gypsum (sparge salts)', 'Calcium chloride (dihydrate) (sparge salts)']);
+    expect(sparge.additions.map((a) => a.what)).toEqual([
+      'Gypsum (sparge salts)',
+      'Calcium chloride (dihydrate) (sparge salts)',
+    ]);
     expect(sparge.hot).toBe(true);
   });
 
@@ -64,17 +67,26 @@ describe('what each step asks for, from the frozen plan', () => {
     expect(out.infusion?.volumeL).toBeGreaterThan(0);
     expect(s.has('mash-out')).toBe(false);
 
-    const singleRest: RecipeInput = { ...EXAMPLE_IPA, mash: { ...EXAMPLE_IPA.mash, steps: [EXAMPLE_IPA.mash.steps[0]!] } };
-    const keys = brewDaySteps({ ...plan, recipe: singleRest, computed: computeRecipe(singleRest, PILOT_SYSTEM) }).map((x) => x.key);
+    const singleRest: RecipeInput = {
+      ...EXAMPLE_IPA,
+      mash: { ...EXAMPLE_IPA.mash, steps: [EXAMPLE_IPA.mash.steps[0]!] },
+    };
+    const keys = brewDaySteps({ ...plan, recipe: singleRest, computed: computeRecipe(singleRest, PILOT_SYSTEM) }).map(
+      (x) => x.key,
+    );
     expect(keys.slice(0, 4)).toEqual(['strike-water', 'mash-in', 'mash-out', 'recirculate']);
     // Mash out at about 168 °F (76 °C): DOMAIN.md, common practice.
-    expect(brewDaySteps({ ...plan, recipe: singleRest, computed: computeRecipe(singleRest, PILOT_SYSTEM) })[2]!.expected).toEqual({ tempC: 76 });
+    expect(
+      brewDaySteps({ ...plan, recipe: singleRest, computed: computeRecipe(singleRest, PILOT_SYSTEM) })[2]!.expected,
+    ).toEqual({ tempC: 76 });
   });
 
   it('lists mash adjuncts at mash in, with how they go in', () => {
     const recipe: RecipeInput = {
       ...EXAMPLE_IPA,
-      adjuncts: EXAMPLE_IPA.adjuncts.map((a, i) => (i === 0 ? { ...a, name: 'Roasted squash', category: 'vegetable' as const, stage: 'mash' as const } : a)),
+      adjuncts: EXAMPLE_IPA.adjuncts.map((a, i) =>
+        i === 0 ? { ...a, name: 'Roasted squash', category: 'vegetable' as const, stage: 'mash' as const } : a,
+      ),
     };
     const mashIn = brewDaySteps({ ...withContent, recipe, computed: computeRecipe(recipe, PILOT_SYSTEM) })[1]!;
     expect(mashIn.additions.at(-1)?.what).toBe('Roasted squash (in a mesh bag)');
@@ -84,7 +96,9 @@ describe('what each step asks for, from the frozen plan', () => {
     const s = byKey(withContent);
     // The example's whirlpool hops stand 20 min at 80 °C (example-recipes.ts).
     expect(s.get('whirlpool-start')!).toMatchObject({ expected: { tempC: 80 }, holdMinutes: 20 });
-    expect(s.get('whirlpool-start')!.additions.map((a) => a.what)).toContain('Sweet orange peel (loose, lifted out at knockout)');
+    expect(s.get('whirlpool-start')!.additions.map((a) => a.what)).toContain(
+      'Sweet orange peel (loose, lifted out at knockout)',
+    );
     expect(s.get('knockout-start')!.expected).toEqual({ tempC: 18 });
     expect(s.get('knockout-end')!.expected.tempC).toBe(18);
     expect(s.get('pitch-yeast')!.expected).toEqual({ tempC: 18 });
@@ -96,7 +110,12 @@ describe('what each step asks for, from the frozen plan', () => {
 });
 
 describe('planned vs actual', () => {
-  const entry = (id: number, stepKey: string | null, measurements: object, extra: Partial<EntryLike> = {}): EntryLike => ({
+  const entry = (
+    id: number,
+    stepKey: string | null,
+    measurements: object,
+    extra: Partial<EntryLike> = {},
+  ): EntryLike => ({
     id,
     kind: 'step',
     stepKey,

@@ -77,7 +77,12 @@ function adjunctsAt(plan: FrozenPlan, stage: string): { index: number; addition:
   return plan.computed.adjuncts.flatMap((a, index) => {
     if (a.stage !== stage) return [];
     const how = howAdded(plan, index);
-    return [{ index, addition: { what: how ? `${a.name} (${how})` : a.name, amount: { value: a.amount.value, unit: a.amount.unit } } }];
+    return [
+      {
+        index,
+        addition: { what: how ? `${a.name} (${how})` : a.name, amount: { value: a.amount.value, unit: a.amount.unit } },
+      },
+    ];
   });
 }
 
@@ -86,16 +91,20 @@ export function boilAdditions(plan: FrozenPlan): { minute: number; additions: Ad
   const { computed, equipment, recipe } = plan;
   const byMinute = new Map<number, Addition[]>();
   const add = (minute: number, a: Addition) => byMinute.set(minute, [...(byMinute.get(minute) ?? []), a]);
-  for (const hop of computed.hops) if (hop.use === 'boil') add(hop.minutes, { what: hop.name, amount: grams(hop.weightG) });
+  for (const hop of computed.hops)
+    if (hop.use === 'boil') add(hop.minutes, { what: hop.name, amount: grams(hop.weightG) });
   // Kettle sugars go in at the start of the boil so they dissolve fully (common practice, no source).
-  for (const f of computed.fermentables) if (f.stage === 'kettle') add(equipment.boilMinutes, { what: f.name, amount: { value: f.weightKg, unit: 'kg' } });
+  for (const f of computed.fermentables)
+    if (f.stage === 'kettle') add(equipment.boilMinutes, { what: f.name, amount: { value: f.weightKg, unit: 'kg' } });
   for (const { index, addition } of adjunctsAt(plan, 'boil')) add(recipe.adjuncts[index]?.boilMinutes ?? 0, addition);
   return [...byMinute.entries()].sort((a, b) => b[0] - a[0]).map(([minute, additions]) => ({ minute, additions }));
 }
 
 /** Water salts for the mash or the sparge water, in grams. */
 function salts(plan: FrozenPlan, which: 'mashSalts' | 'spargeSalts'): Addition[] {
-  return (plan.computed.water?.[which] ?? []).filter((s) => s.grams > 0).map((s) => ({ what: SALTS[s.salt]?.name ?? s.salt, amount: grams(s.grams) }));
+  return (plan.computed.water?.[which] ?? [])
+    .filter((s) => s.grams > 0)
+    .map((s) => ({ what: SALTS[s.salt]?.name ?? s.salt, amount: grams(s.grams) }));
 }
 
 /**
@@ -127,7 +136,9 @@ export function brewDaySteps(plan: FrozenPlan): BrewDayStep[] {
     asks: ['tempC', 'ph'],
     expected: { tempC: first?.tempC },
     additions: [
-      ...c.fermentables.filter((f) => f.stage === 'mash').map((f) => ({ what: f.name, amount: { value: f.weightKg, unit: 'kg' as const } })),
+      ...c.fermentables
+        .filter((f) => f.stage === 'mash')
+        .map((f) => ({ what: f.name, amount: { value: f.weightKg, unit: 'kg' as const } })),
       ...adjunctsAt(plan, 'mash').map((a) => a.addition),
     ],
     ...(first ? { holdMinutes: first.minutes } : {}),
@@ -136,11 +147,18 @@ export function brewDaySteps(plan: FrozenPlan): BrewDayStep[] {
   rest.forEach((m, i) =>
     step({
       key: `mash-rest-${i + 2}`,
-      label: m.tempC < MASH_OUT_FROM_C ? `Mash rest: ${m.name}` : /mash.?out/i.test(m.name) ? 'Mash out' : `Mash out: ${m.name}`,
+      label:
+        m.tempC < MASH_OUT_FROM_C
+          ? `Mash rest: ${m.name}`
+          : /mash.?out/i.test(m.name)
+            ? 'Mash out'
+            : `Mash out: ${m.name}`,
       asks: ['tempC'],
       expected: { tempC: m.tempC },
       holdMinutes: m.minutes,
-      ...(m.method === 'infusion' && m.waterAddedL > 0 && m.waterTempC !== undefined ? { infusion: { volumeL: m.waterAddedL, tempC: m.waterTempC } } : {}),
+      ...(m.method === 'infusion' && m.waterAddedL > 0 && m.waterTempC !== undefined
+        ? { infusion: { volumeL: m.waterAddedL, tempC: m.waterTempC } }
+        : {}),
       hot: true,
     }),
   );
@@ -156,8 +174,20 @@ export function brewDaySteps(plan: FrozenPlan): BrewDayStep[] {
     additions: salts(plan, 'spargeSalts').map((a) => ({ ...a, what: `${a.what} (sparge salts)` })),
     hot: true,
   });
-  step({ key: 'sparge-end', label: 'End sparge', asks: ['volumeL', 'gravitySg'], expected: { volumeL: v.preBoilL, gravitySg: c.preBoilGravity }, hot: true });
-  step({ key: 'boil-start', label: 'Start the boil', asks: ['volumeL', 'gravitySg'], expected: { volumeL: v.preBoilL, gravitySg: c.preBoilGravity }, hot: true });
+  step({
+    key: 'sparge-end',
+    label: 'End sparge',
+    asks: ['volumeL', 'gravitySg'],
+    expected: { volumeL: v.preBoilL, gravitySg: c.preBoilGravity },
+    hot: true,
+  });
+  step({
+    key: 'boil-start',
+    label: 'Start the boil',
+    asks: ['volumeL', 'gravitySg'],
+    expected: { volumeL: v.preBoilL, gravitySg: c.preBoilGravity },
+    hot: true,
+  });
   for (const { minute, additions } of boilAdditions(plan)) {
     step({ key: `boil-${minute}`, label: `Boil addition at ${minute} min`, additions, boilMinute: minute, hot: true });
   }
@@ -180,7 +210,12 @@ export function brewDaySteps(plan: FrozenPlan): BrewDayStep[] {
   step({ key: 'whirlpool-end', label: 'End whirlpool and rest', hot: true });
   const pitchTemp = pitchTempC === undefined ? {} : { tempC: pitchTempC };
   step({ key: 'knockout-start', label: 'Start knockout', asks: ['tempC'], expected: pitchTemp, hot: true });
-  step({ key: 'knockout-end', label: 'End knockout', asks: ['volumeL', 'gravitySg', 'tempC'], expected: { volumeL: v.knockoutL, gravitySg: c.og, ...pitchTemp } });
+  step({
+    key: 'knockout-end',
+    label: 'End knockout',
+    asks: ['volumeL', 'gravitySg', 'tempC'],
+    expected: { volumeL: v.knockoutL, gravitySg: c.og, ...pitchTemp },
+  });
   step({ key: 'oxygenate', label: 'Oxygenate the wort', oxygen: true });
   step({
     key: 'pitch-yeast',
@@ -202,7 +237,9 @@ export interface EntryLike {
 }
 
 /** Each entry's measurements after corrections: a correction's measurements replace those of the entry it corrects. */
-export function effectiveMeasurements(entries: readonly EntryLike[]): Map<number, { stepKey: string | null; measurements: Measurements }> {
+export function effectiveMeasurements(
+  entries: readonly EntryLike[],
+): Map<number, { stepKey: string | null; measurements: Measurements }> {
   const out = new Map<number, { stepKey: string | null; measurements: Measurements }>();
   for (const e of entries) {
     const m = e.data.measurements as Measurements | undefined;
@@ -227,8 +264,14 @@ export function batchActuals(plan: FrozenPlan, entries: readonly EntryLike[]): B
   const knockoutL = latest.get('knockout-end')?.volumeL ?? null;
   return {
     mashTempC: { planned: c.mashSteps[0]?.tempC ?? 0, actual: latest.get('mash-in')?.tempC ?? null },
-    preBoilGravity: { planned: c.preBoilGravity, actual: latest.get('boil-start')?.gravitySg ?? latest.get('sparge-end')?.gravitySg ?? null },
-    preBoilVolumeL: { planned: c.volumes.preBoilL, actual: latest.get('boil-start')?.volumeL ?? latest.get('sparge-end')?.volumeL ?? null },
+    preBoilGravity: {
+      planned: c.preBoilGravity,
+      actual: latest.get('boil-start')?.gravitySg ?? latest.get('sparge-end')?.gravitySg ?? null,
+    },
+    preBoilVolumeL: {
+      planned: c.volumes.preBoilL,
+      actual: latest.get('boil-start')?.volumeL ?? latest.get('sparge-end')?.volumeL ?? null,
+    },
     og: { planned: c.og, actual: og },
     knockoutVolumeL: { planned: c.volumes.knockoutL, actual: knockoutL },
     brewhouseEfficiency: {

@@ -1,10 +1,19 @@
 import { describe, expect, it } from 'vitest';
-import { MEASURING_TOLERANCE, convertDoseRule, convertPractical, doseRangeLabel, doseAmount, doseLevelFromAmount, doseRange, roundForMeasuring, scaleDose } from './adjuncts';
+import {
+  MEASURING_TOLERANCE,
+  convertDoseRule,
+  convertPractical,
+  doseRangeLabel,
+  doseAmount,
+  doseLevelFromAmount,
+  doseRange,
+  roundForMeasuring,
+  scaleDose,
+} from './adjuncts';
 import { EXAMPLE_IPA, PILOT_SYSTEM } from './example-recipes';
 import { computeRecipe } from './recipe';
 import { expectInputError } from './test-helpers';
 import { kgToLb, lbToKg, mlToTsp, ozToG, tspToMl, usBblToL, usGalToL } from './units';
-
 
 describe('dose rules', () => {
   it('3–5 lb of fruit per US gal scaled to a 3.5 bbl batch → 325.5–542.5 lb (common practice, no source)', () => {
@@ -82,7 +91,14 @@ describe('practical conversions and rounding', () => {
       for (let exp = -7; exp <= 3; exp += 0.037) {
         const kg = 10 ** exp;
         const m = roundForMeasuring({ value: kg, unit: 'kg' }, system);
-        const backKg = m.unit === 'g' ? m.value / 1000 : m.unit === 'oz' ? ozToG(m.value) / 1000 : m.unit === 'lb' ? lbToKg(m.value) : m.value;
+        const backKg =
+          m.unit === 'g'
+            ? m.value / 1000
+            : m.unit === 'oz'
+              ? ozToG(m.value) / 1000
+              : m.unit === 'lb'
+                ? lbToKg(m.value)
+                : m.value;
         expect(Math.abs(backKg - kg) / kg).toBeLessThanOrEqual(MEASURING_TOLERANCE + 1e-9);
         const ml = 10 ** (exp + 3);
         const v = roundForMeasuring({ value: ml, unit: 'mL' }, system);
@@ -107,7 +123,10 @@ describe('dose units when the basis changes', () => {
     expect(converted.rule.low).toBeCloseTo(374.5, 1);
     expect(converted.rule.high).toBeCloseTo(1497.8, 1);
     // Same absolute amount in the batch either way.
-    expect(doseAmount(converted.rule, converted.level, 50).value).toBeCloseTo(doseAmount({ basis: 'ozPerUsGal', low: 0.5, high: 2 }, 1, 50).value, 10);
+    expect(doseAmount(converted.rule, converted.level, 50).value).toBeCloseTo(
+      doseAmount({ basis: 'ozPerUsGal', low: 0.5, high: 2 }, 1, 50).value,
+      10,
+    );
   });
 
   it('restates a per-volume dose per batch at the batch volume, and refuses weight to volume', () => {
@@ -120,7 +139,19 @@ describe('dose units when the basis changes', () => {
   it('states the unit in the range and in the out-of-range warning', () => {
     expect(doseRangeLabel({ basis: 'gPerHl', low: 0.5, high: 2 })).toBe('0.5–2 g per hL');
     expect(doseRangeLabel({ basis: 'fixedPerBatch', low: 1, high: 3, fixedUnit: 'each' })).toBe('1–3 each per batch');
-    const recipe = { ...EXAMPLE_IPA, adjuncts: [{ name: 'Coriander', category: 'spice' as const, stage: 'boil' as const, boilMinutes: 5, rule: { basis: 'gPerHl' as const, low: 0.5, high: 2 }, level: 5 }] };
+    const recipe = {
+      ...EXAMPLE_IPA,
+      adjuncts: [
+        {
+          name: 'Coriander',
+          category: 'spice' as const,
+          stage: 'boil' as const,
+          boilMinutes: 5,
+          rule: { basis: 'gPerHl' as const, low: 0.5, high: 2 },
+          level: 5,
+        },
+      ],
+    };
     const warning = computeRecipe(recipe, PILOT_SYSTEM).warnings.find((w) => w.code === 'adjunctOutsideRange')!;
     expect(warning.message).toBe('Coriander: the dose of 5 g per hL is outside its 0.5–2 g per hL range.');
   });

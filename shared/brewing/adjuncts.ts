@@ -5,7 +5,16 @@
  */
 import { BrewingInputError, requireNonNegative, requirePositive } from './errors';
 import { potentialPointLitresPerKg } from './gravity';
-import type { AdjunctAddition, AdjunctCategory, Amount, AmountUnit, DoseBasis, DoseRule, MeasuredAmount, MeasuringSystem } from './types';
+import type {
+  AdjunctAddition,
+  AdjunctCategory,
+  Amount,
+  AmountUnit,
+  DoseBasis,
+  DoseRule,
+  MeasuredAmount,
+  MeasuringSystem,
+} from './types';
 import { G_PER_OZ, KG_PER_LB, L_PER_HL, L_PER_US_GAL, ML_PER_US_TSP, mlToTsp } from './units';
 
 interface BasisInfo {
@@ -46,7 +55,13 @@ export function doseRangeLabel(rule: DoseRule): string {
  * `fixedPerBatch`), or undefined when the two measure different things (a weight and a volume,
  * or a count) and no conversion exists.
  */
-export function convertDoseRule(rule: DoseRule, level: number, to: DoseBasis, volumeL: number, fixedUnit?: AmountUnit): { rule: DoseRule; level: number } | undefined {
+export function convertDoseRule(
+  rule: DoseRule,
+  level: number,
+  to: DoseBasis,
+  volumeL: number,
+  fixedUnit?: AmountUnit,
+): { rule: DoseRule; level: number } | undefined {
   validateDoseRule(rule);
   requirePositive(volumeL, 'volumeL', 'Batch volume');
   const fromUnit = rule.basis === 'fixedPerBatch' ? (rule.fixedUnit ?? 'each') : BASES[rule.basis].unit;
@@ -55,7 +70,12 @@ export function convertDoseRule(rule: DoseRule, level: number, to: DoseBasis, vo
   // Absolute amount per rule unit in this batch, before and after.
   const perUnit = (basis: DoseBasis) => (basis === 'fixedPerBatch' ? 1 : BASES[basis].perLitre * volumeL);
   const factor = perUnit(rule.basis) / perUnit(to);
-  const next: DoseRule = { basis: to, low: rule.low * factor, high: rule.high * factor, ...(to === 'fixedPerBatch' ? { fixedUnit: toUnit } : {}) };
+  const next: DoseRule = {
+    basis: to,
+    low: rule.low * factor,
+    high: rule.high * factor,
+    ...(to === 'fixedPerBatch' ? { fixedUnit: toUnit } : {}),
+  };
   return { rule: next, level: level * factor };
 }
 
@@ -66,7 +86,8 @@ export function validateDoseRule(rule: DoseRule, field = 'rule'): void {
   }
   requireNonNegative(rule.low, `${field}.low`, 'Low dose');
   requireNonNegative(rule.high, `${field}.high`, 'High dose');
-  if (rule.high < rule.low) throw new BrewingInputError(`${field}.high`, 'The high dose must not be below the low dose.');
+  if (rule.high < rule.low)
+    throw new BrewingInputError(`${field}.high`, 'The high dose must not be below the low dose.');
 }
 
 /**
@@ -86,7 +107,10 @@ export function doseAmount(rule: DoseRule, level: number, volumeL: number, field
 
 /** The rule's low and high doses as absolute amounts for a batch volume. */
 export function doseRange(rule: DoseRule, volumeL: number): { low: Amount; high: Amount } {
-  return { low: doseAmount(rule, rule.low, volumeL, 'rule.low'), high: doseAmount(rule, rule.high, volumeL, 'rule.high') };
+  return {
+    low: doseAmount(rule, rule.low, volumeL, 'rule.low'),
+    high: doseAmount(rule, rule.high, volumeL, 'rule.high'),
+  };
 }
 
 /** Inverse of {@link doseAmount}: the dose level that an absolute amount represents in a batch volume. */
@@ -95,12 +119,18 @@ export function doseLevelFromAmount(rule: DoseRule, amount: Amount, volumeL: num
   requireNonNegative(amount.value, 'amount.value', 'Amount');
   requirePositive(volumeL, 'volumeL', 'Batch volume');
   const unit = rule.basis === 'fixedPerBatch' ? (rule.fixedUnit ?? 'each') : BASES[rule.basis].unit;
-  if (amount.unit !== unit) throw new BrewingInputError('amount.unit', `This dose is measured in ${unit}, not ${amount.unit}.`);
+  if (amount.unit !== unit)
+    throw new BrewingInputError('amount.unit', `This dose is measured in ${unit}, not ${amount.unit}.`);
   return rule.basis === 'fixedPerBatch' ? amount.value : amount.value / (BASES[rule.basis].perLitre * volumeL);
 }
 
 /** Amount of an adjunct for one volume and for another: proportional to volume, except `fixedPerBatch`. */
-export function scaleDose(rule: DoseRule, level: number, fromVolumeL: number, toVolumeL: number): { from: Amount; to: Amount } {
+export function scaleDose(
+  rule: DoseRule,
+  level: number,
+  fromVolumeL: number,
+  toVolumeL: number,
+): { from: Amount; to: Amount } {
   return { from: doseAmount(rule, level, fromVolumeL), to: doseAmount(rule, level, toVolumeL) };
 }
 
@@ -113,7 +143,8 @@ export function isWithinRange(adjunct: AdjunctAddition): boolean {
 export const TYPICAL_SUGAR_PCT: Readonly<Record<AdjunctCategory, { pct: number; source: string }>> = {
   fruit: {
     pct: 10,
-    source: 'food-composition tables (USDA FoodData Central): fresh fruit about 4–14 g sugars per 100 g (raspberry ≈ 4, apricot ≈ 9, cherry ≈ 13); 10 taken as typical for a purée, from memory',
+    source:
+      'food-composition tables (USDA FoodData Central): fresh fruit about 4–14 g sugars per 100 g (raspberry ≈ 4, apricot ≈ 9, cherry ≈ 13); 10 taken as typical for a purée, from memory',
   },
   honey: { pct: 82, source: 'USDA FoodData Central, honey: about 82 g sugars per 100 g, from memory' },
   sugar: { pct: 100, source: 'refined sugar is sucrose, the 100 % reference of extract' },
@@ -145,10 +176,20 @@ export function adjunctSugar(adjunct: AdjunctAddition, amount: Amount, field = '
   if (adjunct.sugarPct !== undefined && (adjunct.sugarPct < 0 || adjunct.sugarPct > 100)) {
     throw new BrewingInputError(`${field}.sugarPct`, 'Sugar must be between 0 and 100 % of the weight.');
   }
-  const none = (notCounted?: string): AdjunctSugar => ({ sugarPct, sugarKg: 0, pointLitres: 0, ...(notCounted && sugarPct > 0 ? { notCounted } : {}) });
+  const none = (notCounted?: string): AdjunctSugar => ({
+    sugarPct,
+    sugarKg: 0,
+    pointLitres: 0,
+    ...(notCounted && sugarPct > 0 ? { notCounted } : {}),
+  });
   if (sugarPct === 0) return none();
   if (adjunct.stage === 'packaging') return none('added at packaging, so its sugar is not counted toward OG');
-  if (amount.unit !== 'kg') return none(amount.unit === 'mL' ? 'dosed by volume, so its sugar is not counted: dose it by weight to count it' : 'dosed by count, so its sugar is not counted: dose it by weight to count it');
+  if (amount.unit !== 'kg')
+    return none(
+      amount.unit === 'mL'
+        ? 'dosed by volume, so its sugar is not counted: dose it by weight to count it'
+        : 'dosed by count, so its sugar is not counted: dose it by weight to count it',
+    );
   const sugarKg = (amount.value * sugarPct) / 100;
   return { sugarPct, sugarKg, pointLitres: sugarKg * potentialPointLitresPerKg({ extractPct: 100 }) };
 }
@@ -165,7 +206,12 @@ export interface PracticalEquivalent {
 /** Practical equivalents. The spice gram weights are approximate and vary with grind and packing. */
 export const PRACTICAL_EQUIVALENTS: readonly PracticalEquivalent[] = [
   { from: 'tbsp', to: 'tsp', factor: 3, source: 'NIST Handbook 44 Appendix C (1 tbsp = 3 tsp)' },
-  { from: 'cinnamon stick', to: 'tsp ground cinnamon', factor: 0.5, source: 'common practice, no source (a 3 in / 7.5 cm stick)' },
+  {
+    from: 'cinnamon stick',
+    to: 'tsp ground cinnamon',
+    factor: 0.5,
+    source: 'common practice, no source (a 3 in / 7.5 cm stick)',
+  },
   { from: 'vanilla bean', to: 'tsp vanilla extract', factor: 3, source: 'common practice, no source' },
   { from: 'whole nutmeg', to: 'tsp ground nutmeg', factor: 2, source: 'common practice, no source' },
   { from: 'tsp ground cinnamon', to: 'g', factor: 2.6, source: 'household food-composition measures, from memory' },
@@ -228,18 +274,39 @@ const TSP_PER_ML = mlToTsp(1);
  */
 export function roundForMeasuring(amount: Amount, system: MeasuringSystem): MeasuredAmount {
   const value = requireNonNegative(amount.value, 'amount.value', 'Amount');
-  const fineGrams: Step[] = [['g', G_PER_KG, 1], ['g', G_PER_KG, 0.1], ['g', G_PER_KG, 0.01]];
-  const fineMl: Step[] = [['mL', 1, 0.1], ['mL', 1, 0.01]];
-  if (amount.unit === 'each') return roundOnLadder(value, [['each', 1, 0.5], ['each', 1, 0.25], ['each', 1, 0.1]]);
+  const fineGrams: Step[] = [
+    ['g', G_PER_KG, 1],
+    ['g', G_PER_KG, 0.1],
+    ['g', G_PER_KG, 0.01],
+  ];
+  const fineMl: Step[] = [
+    ['mL', 1, 0.1],
+    ['mL', 1, 0.01],
+  ];
+  if (amount.unit === 'each')
+    return roundOnLadder(value, [
+      ['each', 1, 0.5],
+      ['each', 1, 0.25],
+      ['each', 1, 0.1],
+    ]);
   if (amount.unit === 'mL') {
-    if (system === 'us') return roundOnLadder(value, [['tsp', TSP_PER_ML, 0.25], ['tsp', TSP_PER_ML, 0.125], ...fineMl]);
+    if (system === 'us')
+      return roundOnLadder(value, [['tsp', TSP_PER_ML, 0.25], ['tsp', TSP_PER_ML, 0.125], ...fineMl]);
     return roundOnLadder(value, [...(value >= 20 ? [['mL', 1, 5] as const] : []), ['mL', 1, 1.25], ...fineMl]);
   }
   if (system === 'us') {
-    if (value * LB_PER_KG >= 1) return roundOnLadder(value, [['lb', LB_PER_KG, 0.25], ['lb', LB_PER_KG, 0.1]]);
+    if (value * LB_PER_KG >= 1)
+      return roundOnLadder(value, [
+        ['lb', LB_PER_KG, 0.25],
+        ['lb', LB_PER_KG, 0.1],
+      ]);
     return roundOnLadder(value, [['oz', OZ_PER_KG, 0.25], ...fineGrams]);
   }
-  if (value >= 25) return roundOnLadder(value, [['kg', 1, 0.5], ['kg', 1, 0.05]]);
+  if (value >= 25)
+    return roundOnLadder(value, [
+      ['kg', 1, 0.5],
+      ['kg', 1, 0.05],
+    ]);
   if (value >= 1) return roundOnLadder(value, [['kg', 1, 0.05]]);
   if (value * G_PER_KG >= 50) return roundOnLadder(value, [['g', G_PER_KG, 5], ...fineGrams]);
   return roundOnLadder(value, fineGrams);

@@ -42,7 +42,10 @@ describe('IBU', () => {
 
   it('whirlpool: equals a boil addition at 100 °C and falls with temperature (labelled approximation)', () => {
     const whirlpool = { ...hop, use: 'whirlpool' as const, minutes: 20 };
-    expect(ibuForAddition({ ...whirlpool, whirlpoolTempC: 100 }, 1.05, 20)).toBeCloseTo(ibuForAddition({ ...hop, minutes: 20 }, 1.05, 20), 10);
+    expect(ibuForAddition({ ...whirlpool, whirlpoolTempC: 100 }, 1.05, 20)).toBeCloseTo(
+      ibuForAddition({ ...hop, minutes: 20 }, 1.05, 20),
+      10,
+    );
     // Arrhenius with Ea/R = 11858 K (Malowicki & Shellhammer 2005, from memory): 80 °C → ≈ 0.165 of the boiling rate.
     expect(whirlpoolTemperatureFactor(80)).toBeCloseTo(0.165, 3);
     expect(whirlpoolTemperatureFactor(70)).toBeLessThan(whirlpoolTemperatureFactor(80));

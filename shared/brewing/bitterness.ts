@@ -2,7 +2,14 @@
  * Bitterness: Tinseth's utilisation model, its inverse, and a labelled
  * approximation for whirlpool (hop stand) additions.
  */
-import { BrewingInputError, requireAlphaAcid, requireGravity, requireInRange, requireNonNegative, requirePositive } from './errors';
+import {
+  BrewingInputError,
+  requireAlphaAcid,
+  requireGravity,
+  requireInRange,
+  requireNonNegative,
+  requirePositive,
+} from './errors';
 import type { HopAddition, HopSpec } from './types';
 
 /** Tinseth bigness factor, G = boil gravity (SG): 1.65 × 0.000125^(G − 1) (G. Tinseth, "Glenn's Hop Utilization Numbers", 1995–97). */
@@ -90,14 +97,23 @@ export function totalIbu(
  * Inverse of {@link ibuForAddition}: hop weight, g, for a target IBU.
  * Throws when the addition cannot bitter at all (dry hop, 0-minute boil).
  */
-export function hopWeightForIbu(targetIbu: number, hop: HopSpec, boilGravity: number, volumeL: number, field = 'hop'): number {
+export function hopWeightForIbu(
+  targetIbu: number,
+  hop: HopSpec,
+  boilGravity: number,
+  volumeL: number,
+  field = 'hop',
+): number {
   requireNonNegative(targetIbu, 'targetIbu', 'Target IBU');
   requireAlphaAcid(hop.alphaAcidPct, `${field}.alphaAcidPct`);
   requirePositive(volumeL, 'volumeL', 'Volume');
   if (targetIbu === 0) return 0;
   const utilisation = hopUtilisation(hop, boilGravity, field);
   if (utilisation <= 0) {
-    throw new BrewingInputError(`${field}.use`, 'This addition adds no bitterness, so no weight reaches the target IBU.');
+    throw new BrewingInputError(
+      `${field}.use`,
+      'This addition adds no bitterness, so no weight reaches the target IBU.',
+    );
   }
   return (targetIbu * volumeL) / (utilisation * (hop.alphaAcidPct / 100) * 1000);
 }

@@ -1,6 +1,14 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { carbonationSetting, co2VolumesAtPressure, CO2_YIELD_G_PER_G, headPressureKpa, headPressurePsi, primingSugar, residualCo2Volumes } from './carbonation';
+import {
+  carbonationSetting,
+  co2VolumesAtPressure,
+  CO2_YIELD_G_PER_G,
+  headPressureKpa,
+  headPressurePsi,
+  primingSugar,
+  residualCo2Volumes,
+} from './carbonation';
 import { expectInputError } from './test-helpers';
 import { cToF, fToC, gToOz, kpaToPsi, usGalToL } from './units';
 
@@ -23,9 +31,13 @@ describe('head pressure', () => {
 
   it('inverts: pressure → volumes → pressure', () => {
     fc.assert(
-      fc.property(fc.double({ min: 0, max: 10, noNaN: true }), fc.double({ min: 2.0, max: 3.2, noNaN: true }), (tempC, volumes) => {
-        expect(co2VolumesAtPressure(tempC, headPressureKpa(tempC, volumes))).toBeCloseTo(volumes, 8);
-      }),
+      fc.property(
+        fc.double({ min: 0, max: 10, noNaN: true }),
+        fc.double({ min: 2.0, max: 3.2, noNaN: true }),
+        (tempC, volumes) => {
+          expect(co2VolumesAtPressure(tempC, headPressureKpa(tempC, volumes))).toBeCloseTo(volumes, 8);
+        },
+      ),
     );
   });
 
@@ -79,6 +91,8 @@ describe('carbonation setting on a vessel', () => {
       `4.5 volumes at 60 °F needs ${needPsi.toFixed(1)} psi, above this vessel's rated working pressure of 30.0 psi.`,
     );
     expect(() => carbonationSetting(tempC, 4.5, rated, 'us')).not.toThrow(/°C|kPa/);
-    expect(() => carbonationSetting(tempC, 4.5, rated, 'metric')).toThrow(/^4\.5 volumes at 15\.6 °C needs \d+ kPa, above this vessel's rated working pressure of 207 kPa\./);
+    expect(() => carbonationSetting(tempC, 4.5, rated, 'metric')).toThrow(
+      /^4\.5 volumes at 15\.6 °C needs \d+ kPa, above this vessel's rated working pressure of 207 kPa\./,
+    );
   });
 });

@@ -12,8 +12,10 @@ const MAX_TEMP_C = 30;
 /** Highest CO2 level accepted, volumes. */
 const MAX_VOLUMES = 5;
 
-const requireBeerTemp = (tempC: number, field = 'tempC'): number => requireInRange(tempC, field, MIN_TEMP_C, MAX_TEMP_C, 'Beer temperature (°C)');
-const requireVolumes = (volumes: number, field = 'volumes'): number => requireInRange(volumes, field, 0, MAX_VOLUMES, 'CO2 volumes', true);
+const requireBeerTemp = (tempC: number, field = 'tempC'): number =>
+  requireInRange(tempC, field, MIN_TEMP_C, MAX_TEMP_C, 'Beer temperature (°C)');
+const requireVolumes = (volumes: number, field = 'volumes'): number =>
+  requireInRange(volumes, field, 0, MAX_VOLUMES, 'CO2 volumes', true);
 
 /* Regression of the standard brewing carbonation table (equilibrium CO2 in
  * beer vs temperature and gauge pressure), widely circulated among brewers;
@@ -22,7 +24,14 @@ const requireVolumes = (volumes: number, field = 'volumes'): number => requireIn
 const FIT = { c0: -16.6999, t: -0.0101059, t2: 0.00116512, tv: 0.173354, v: 4.24267, v2: -0.0684226 } as const;
 
 function fitPsi(tempF: number, volumes: number): number {
-  return FIT.c0 + FIT.t * tempF + FIT.t2 * tempF * tempF + FIT.tv * tempF * volumes + FIT.v * volumes + FIT.v2 * volumes * volumes;
+  return (
+    FIT.c0 +
+    FIT.t * tempF +
+    FIT.t2 * tempF * tempF +
+    FIT.tv * tempF * volumes +
+    FIT.v * volumes +
+    FIT.v2 * volumes * volumes
+  );
 }
 
 /**
@@ -35,7 +44,10 @@ export function headPressurePsi(tempF: number, volumes: number): number {
   requireVolumes(volumes);
   const psi = fitPsi(tempF, volumes);
   if (psi < 0) {
-    throw new BrewingInputError('volumes', `At this temperature beer holds more than ${volumes} volumes at zero gauge pressure; no head pressure is needed.`);
+    throw new BrewingInputError(
+      'volumes',
+      `At this temperature beer holds more than ${volumes} volumes at zero gauge pressure; no head pressure is needed.`,
+    );
   }
   return psi;
 }
@@ -57,7 +69,7 @@ export function co2VolumesAtPressure(tempC: number, pressureKpaGauge: number): n
   const alpha = FIT.v2;
   const beta = FIT.v + FIT.tv * tempF;
   const gamma = FIT.c0 + FIT.t * tempF + FIT.t2 * tempF * tempF - psi;
-  const root = -2 * gamma / (beta + Math.sqrt(beta * beta - 4 * alpha * gamma));
+  const root = (-2 * gamma) / (beta + Math.sqrt(beta * beta - 4 * alpha * gamma));
   return requireVolumes(root, 'pressureKpa');
 }
 
@@ -105,7 +117,12 @@ export interface PrimingResult {
  * @param targetVolumes CO2 target, volumes
  * @param warmestTempC warmest temperature the beer reached after fermentation, °C
  */
-export function primingSugar(beerVolumeL: number, targetVolumes: number, warmestTempC: number, sugar: PrimingSugar): PrimingResult {
+export function primingSugar(
+  beerVolumeL: number,
+  targetVolumes: number,
+  warmestTempC: number,
+  sugar: PrimingSugar,
+): PrimingResult {
   requirePositive(beerVolumeL, 'beerVolumeL', 'Beer volume');
   requireVolumes(targetVolumes, 'targetVolumes');
   const yieldGPerG = CO2_YIELD_G_PER_G[sugar];
@@ -138,7 +155,12 @@ export function formatGaugePressure(kpa: number, units: CarbonationUnits): strin
  * recommends a pressure the vessel is not rated for. The refusal is worded in
  * `units`, so a US screen reads °F and psi beside its "Rated … psi".
  */
-export function carbonationSetting(tempC: number, volumes: number, ratedKpa: number, units: CarbonationUnits = 'metric'): CarbonationSetting {
+export function carbonationSetting(
+  tempC: number,
+  volumes: number,
+  ratedKpa: number,
+  units: CarbonationUnits = 'metric',
+): CarbonationSetting {
   requirePositive(ratedKpa, 'ratedKpa', "Vessel's rated working pressure (kPa)");
   const pressureKpa = headPressureKpa(tempC, volumes);
   if (pressureKpa > ratedKpa) {

@@ -19,22 +19,37 @@ export interface RecipeTargets {
 export const TARGET_TOLERANCE = { gravityPoints: 2, ibuShare: 0.1, ibuMin: 2, srm: 2 } as const;
 
 /** Warnings for OG, FG, IBU and SRM further from the targets than {@link TARGET_TOLERANCE}. */
-export function targetWarnings(computed: Pick<ComputedRecipe, 'og' | 'fg' | 'ibu' | 'srm'>, targets: RecipeTargets): BrewingWarning[] {
+export function targetWarnings(
+  computed: Pick<ComputedRecipe, 'og' | 'fg' | 'ibu' | 'srm'>,
+  targets: RecipeTargets,
+): BrewingWarning[] {
   const out: BrewingWarning[] = [];
   const gravity = (label: 'OG' | 'FG', value: number, target: number, field: string) => {
     const off = gravityPoints(value) - gravityPoints(target);
     if (Math.abs(off) > TARGET_TOLERANCE.gravityPoints) {
-      out.push({ code: 'offTarget', field, message: `${label} ${value.toFixed(3)} is ${Math.abs(off).toFixed(0)} points ${off > 0 ? 'above' : 'below'} the target ${target.toFixed(3)}.` });
+      out.push({
+        code: 'offTarget',
+        field,
+        message: `${label} ${value.toFixed(3)} is ${Math.abs(off).toFixed(0)} points ${off > 0 ? 'above' : 'below'} the target ${target.toFixed(3)}.`,
+      });
     }
   };
   gravity('OG', computed.og, targets.og, 'targets.og');
   gravity('FG', computed.fg, targets.fg, 'targets.fg');
   const ibuOff = computed.ibu - targets.ibu;
   if (Math.abs(ibuOff) > Math.max(TARGET_TOLERANCE.ibuMin, TARGET_TOLERANCE.ibuShare * targets.ibu)) {
-    out.push({ code: 'offTarget', field: 'targets.ibu', message: `IBU ${computed.ibu.toFixed(0)} is ${ibuOff > 0 ? 'above' : 'below'} the target ${targets.ibu.toFixed(0)}.` });
+    out.push({
+      code: 'offTarget',
+      field: 'targets.ibu',
+      message: `IBU ${computed.ibu.toFixed(0)} is ${ibuOff > 0 ? 'above' : 'below'} the target ${targets.ibu.toFixed(0)}.`,
+    });
   }
   if (Math.abs(computed.srm - targets.srm) > TARGET_TOLERANCE.srm) {
-    out.push({ code: 'offTarget', field: 'targets.srm', message: `SRM ${computed.srm.toFixed(1)} is away from the target ${targets.srm.toFixed(1)}.` });
+    out.push({
+      code: 'offTarget',
+      field: 'targets.srm',
+      message: `SRM ${computed.srm.toFixed(1)} is away from the target ${targets.srm.toFixed(1)}.`,
+    });
   }
   return out;
 }
@@ -67,7 +82,11 @@ export function waterDoseWarnings(water: Pick<ComputedWater, 'mash' | 'sparge'>)
     for (const [ion, ceiling] of Object.entries(ION_CEILINGS_PPM) as [IonKey, number][]) {
       const ppm = water[vessel][ion];
       if (ppm > ceiling) {
-        out.push({ code: 'ionAboveCeiling', field: `water.${vessel}Salts`, message: `${ION_NAMES[ion]} in the ${vessel} water is ${ppm.toFixed(0)} ppm, above about ${ceiling} ppm: check the salt amounts.` });
+        out.push({
+          code: 'ionAboveCeiling',
+          field: `water.${vessel}Salts`,
+          message: `${ION_NAMES[ion]} in the ${vessel} water is ${ppm.toFixed(0)} ppm, above about ${ceiling} ppm: check the salt amounts.`,
+        });
       }
     }
   }

@@ -101,8 +101,27 @@ export const EXAMPLE_IPA: RecipeInput = {
     ],
   },
   adjuncts: [
-    { name: 'Apricot purée', category: 'fruit', stage: 'fermenter', rule: { basis: 'lbPerUsGal', low: 0.5, high: 2 }, level: 1 },
-    { name: 'Coriander seed, crushed', category: 'spice', stage: 'boil', boilMinutes: 5, rule: { basis: 'tspPer5UsGal', low: 0.5, high: 2 }, level: 1 },
-    { name: 'Sweet orange peel', category: 'spice', stage: 'whirlpool', rule: { basis: 'gPerHl', low: 20, high: 60 }, level: 35 },
+    {
+      name: 'Apricot purée',
+      category: 'fruit',
+      stage: 'fermenter',
+      rule: { basis: 'lbPerUsGal', low: 0.5, high: 2 },
+      level: 1,
+    },
+    {
+      name: 'Coriander seed, crushed',
+      category: 'spice',
+      stage: 'boil',
+      boilMinutes: 5,
+      rule: { basis: 'tspPer5UsGal', low: 0.5, high: 2 },
+      level: 1,
+    },
+    {
+      name: 'Sweet orange peel',
+      category: 'spice',
+      stage: 'whirlpool',
+      rule: { basis: 'gPerHl', low: 20, high: 60 },
+      level: 35,
+    },
   ],
 };

@@ -39,16 +39,29 @@ describe('predicting FG from the curve', () => {
 
   it('never predicts an FG above the latest reading, for any falling curve', () => {
     fc.assert(
-      fc.property(fc.double({ min: 1.03, max: 1.1, noNaN: true }), fc.double({ min: 0.1, max: 3, noNaN: true }), fc.integer({ min: 3, max: 10 }), (og, k, n) => {
-        const points = Array.from({ length: n }, (_, d) => ({ atMs: start + d * DAY, sg: 1.01 + (og - 1.01) * Math.exp(-k * d) }));
-        const p = predictFermentation(points);
-        if (p) expect(p.predictedFg).toBeLessThanOrEqual(points[n - 1]!.sg + 1e-9);
-      }),
+      fc.property(
+        fc.double({ min: 1.03, max: 1.1, noNaN: true }),
+        fc.double({ min: 0.1, max: 3, noNaN: true }),
+        fc.integer({ min: 3, max: 10 }),
+        (og, k, n) => {
+          const points = Array.from({ length: n }, (_, d) => ({
+            atMs: start + d * DAY,
+            sg: 1.01 + (og - 1.01) * Math.exp(-k * d),
+          }));
+          const p = predictFermentation(points);
+          if (p) expect(p.predictedFg).toBeLessThanOrEqual(points[n - 1]!.sg + 1e-9);
+        },
+      ),
     );
   });
 
   it('makes no prediction from fewer than three readings or a curve that is not falling', () => {
-    expect(predictFermentation([{ atMs: start, sg: 1.05 }, { atMs: start + DAY, sg: 1.04 }])).toBeNull();
+    expect(
+      predictFermentation([
+        { atMs: start, sg: 1.05 },
+        { atMs: start + DAY, sg: 1.04 },
+      ]),
+    ).toBeNull();
     expect(predictFermentation([0, 1, 2].map((d) => ({ atMs: start + d * DAY, sg: 1.05 })))).toBeNull();
     expect(predictFermentation([0, 1, 2].map((d) => ({ atMs: start + d * DAY, sg: 1.03 + d * 0.005 })))).toBeNull();
     expectInputError(() => predictFermentation([{ atMs: start, sg: 2 }]), 'points.0.sg');

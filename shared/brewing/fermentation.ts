@@ -70,7 +70,11 @@ export function predictFermentation(points: readonly GravityPoint[]): Fermentati
   const last = sgs[sgs.length - 1]!;
   if (sgs[0]! - last < 0.001) return null; // under a point of movement: nothing to extrapolate
 
-  const fitAt = (k: number) => linearFit(days.map((d) => Math.exp(-k * d)), sgs);
+  const fitAt = (k: number) =>
+    linearFit(
+      days.map((d) => Math.exp(-k * d)),
+      sgs,
+    );
   let lo = Math.log(MIN_RATE_PER_DAY);
   let hi = Math.log(MAX_RATE_PER_DAY);
   const golden = (Math.sqrt(5) - 1) / 2;
@@ -140,14 +144,26 @@ export function refractometerWortSg(brix: number, wortCorrection = DEFAULT_WORT_
  * SG = 1 − 0.0044993·Bi + 0.011774·Bf + 0.00027581·Bi² − 0.0012717·Bf² − 0.0000072800·Bi³ + 0.000063293·Bf³
  * (coefficients from memory). Raw readings in, corrected here.
  */
-export function refractometerBeerSg(originalBrix: number, currentBrix: number, wortCorrection = DEFAULT_WORT_CORRECTION): number {
+export function refractometerBeerSg(
+  originalBrix: number,
+  currentBrix: number,
+  wortCorrection = DEFAULT_WORT_CORRECTION,
+): number {
   requireBrix(originalBrix, 'originalBrix');
   requireBrix(currentBrix, 'brix');
-  if (currentBrix > originalBrix) throw new BrewingInputError('brix', 'The current reading cannot be higher than the original reading.');
+  if (currentBrix > originalBrix)
+    throw new BrewingInputError('brix', 'The current reading cannot be higher than the original reading.');
   const wcf = requireWortCorrection(wortCorrection);
   const bi = originalBrix / wcf;
   const bf = currentBrix / wcf;
-  const sg = 1 - 0.0044993 * bi + 0.011774 * bf + 0.00027581 * bi ** 2 - 0.0012717 * bf ** 2 - 0.00000728 * bi ** 3 + 0.000063293 * bf ** 3;
+  const sg =
+    1 -
+    0.0044993 * bi +
+    0.011774 * bf +
+    0.00027581 * bi ** 2 -
+    0.0012717 * bf ** 2 -
+    0.00000728 * bi ** 3 +
+    0.000063293 * bf ** 3;
   return requireGravity(sg, 'brix');
 }
 
@@ -156,7 +172,9 @@ export function refractometerBeerSg(originalBrix: number, currentBrix: number, w
  * alcohol (refractometerWortSg), fermenting beer when there is (refractometerBeerSg).
  */
 export function refractometerSg(brix: number, originalBrix?: number, wortCorrection?: number): number {
-  return originalBrix === undefined ? refractometerWortSg(brix, wortCorrection) : refractometerBeerSg(originalBrix, brix, wortCorrection);
+  return originalBrix === undefined
+    ? refractometerWortSg(brix, wortCorrection)
+    : refractometerBeerSg(originalBrix, brix, wortCorrection);
 }
 
 // ----------------------------------------------------------------- alert rules

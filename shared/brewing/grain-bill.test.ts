@@ -12,7 +12,12 @@ const bill = [
 
 describe('weights for a target OG', () => {
   it('hits the OG (hand-worked: 100 % 37 PPG at 75 % for 1.0555 in 5 gal → 10 lb)', () => {
-    const [kg] = weightsForTargetOg([{ percent: 100, potential: { ppg: 37 }, stage: 'mash' }], 1.0555, 0.75, usGalToL(5));
+    const [kg] = weightsForTargetOg(
+      [{ percent: 100, potential: { ppg: 37 }, stage: 'mash' }],
+      1.0555,
+      0.75,
+      usGalToL(5),
+    );
     expect(kgToLb(kg!)).toBeCloseTo(10, 10);
   });
 

@@ -3,7 +3,14 @@
  * plus a target OG; each brewhouse turns them into weights at its own
  * efficiency and volume.
  */
-import { BrewingInputError, requireEfficiency, requireGravity, requireNonNegative, requirePercentSum, requirePositive } from './errors';
+import {
+  BrewingInputError,
+  requireEfficiency,
+  requireGravity,
+  requireNonNegative,
+  requirePercentSum,
+  requirePositive,
+} from './errors';
 import { potentialPointLitresPerKg, stageEfficiency } from './gravity';
 import type { FermentablePotential, FermentableStage } from './types';
 
@@ -48,7 +55,10 @@ export function weightsForTargetOg(
   });
   if (perKg <= 0) {
     if (pointsNeeded === 0) return items.map(() => 0);
-    throw new BrewingInputError(field, 'None of these fermentables gives any extract, so no weight reaches the target OG.');
+    throw new BrewingInputError(
+      field,
+      'None of these fermentables gives any extract, so no weight reaches the target OG.',
+    );
   }
   const totalKg = pointsNeeded / perKg;
   if (totalKg < 0) throw new BrewingInputError('targetOg', 'Target OG must be at least 1.000 to solve a grain bill.');
@@ -61,6 +71,7 @@ export function percentagesFromWeights(weightsKg: readonly number[], field = 'gr
   weightsKg.forEach((w, i) => {
     total += requireNonNegative(w, `${field}.${i}.weightKg`, 'Weight');
   });
-  if (total <= 0) throw new BrewingInputError(field, 'The grain bill needs at least one fermentable with a weight above zero.');
+  if (total <= 0)
+    throw new BrewingInputError(field, 'The grain bill needs at least one fermentable with a weight above zero.');
   return weightsKg.map((w) => (w / total) * 100);
 }

@@ -108,14 +108,18 @@ describe('attenuation and ABV', () => {
 
   it('ABV ≥ 0 whenever OG ≥ FG, for every method', () => {
     fc.assert(
-      fc.property(fc.double({ min: 0.98, max: 1.2, noNaN: true }), fc.double({ min: 0, max: 1, noNaN: true }), (og, t) => {
-        const fg = 0.98 + (og - 0.98) * t;
-        for (const method of ['simple', 'balling', 'hall'] as const) {
-          const value = abv(og, fg, method);
-          expect(Number.isFinite(value)).toBe(true);
-          expect(value).toBeGreaterThanOrEqual(-1e-9);
-        }
-      }),
+      fc.property(
+        fc.double({ min: 0.98, max: 1.2, noNaN: true }),
+        fc.double({ min: 0, max: 1, noNaN: true }),
+        (og, t) => {
+          const fg = 0.98 + (og - 0.98) * t;
+          for (const method of ['simple', 'balling', 'hall'] as const) {
+            const value = abv(og, fg, method);
+            expect(Number.isFinite(value)).toBe(true);
+            expect(value).toBeGreaterThanOrEqual(-1e-9);
+          }
+        },
+      ),
     );
   });
 

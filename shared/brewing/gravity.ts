@@ -2,7 +2,17 @@
  * Gravity, extract and alcohol. Specific gravity is 20 °C/20 °C as the ASBC
  * tables use; °Plato is g extract per 100 g wort.
  */
-import { BrewingInputError, MAX_SG, MIN_SG, requireEfficiency, requireFinite, requireGravity, requireInRange, requireNonNegative, requirePositive } from './errors';
+import {
+  BrewingInputError,
+  MAX_SG,
+  MIN_SG,
+  requireEfficiency,
+  requireFinite,
+  requireGravity,
+  requireInRange,
+  requireNonNegative,
+  requirePositive,
+} from './errors';
 import type { FermentablePotential, FermentableStage } from './types';
 import { KG_PER_LB, L_PER_US_GAL } from './units';
 
@@ -111,7 +121,11 @@ export interface GravitySource {
  * Gravity points·L each fermentable delivers into the fermenter.
  * Points = kg × potential (pt·L/kg) × efficiency (mash stage only).
  */
-export function pointLitres(items: readonly GravitySource[], brewhouseEfficiency: number, field = 'fermentables'): number[] {
+export function pointLitres(
+  items: readonly GravitySource[],
+  brewhouseEfficiency: number,
+  field = 'fermentables',
+): number[] {
   requireEfficiency(brewhouseEfficiency, 'brewhouseEfficiency', 'Brewhouse efficiency');
   return items.map((item, i) => {
     requireNonNegative(item.weightKg, `${field}.${i}.weightKg`, 'Weight');
@@ -130,12 +144,19 @@ function potentialPointLitres(item: GravitySource, field: string, brewhouseEffic
  * @param volumeL volume into the fermenter, L
  * @returns specific gravity
  */
-export function ogFromFermentables(items: readonly GravitySource[], brewhouseEfficiency: number, volumeL: number): number {
+export function ogFromFermentables(
+  items: readonly GravitySource[],
+  brewhouseEfficiency: number,
+  volumeL: number,
+): number {
   requirePositive(volumeL, 'volumeL', 'Volume');
   const total = pointLitres(items, brewhouseEfficiency).reduce((a, b) => a + b, 0);
   const og = 1 + total / volumeL / 1000;
   if (og > MAX_SG) {
-    throw new BrewingInputError('fermentables', `These fermentables give an OG of ${og.toFixed(3)}, above the 1.200 the formulas cover.`);
+    throw new BrewingInputError(
+      'fermentables',
+      `These fermentables give an OG of ${og.toFixed(3)}, above the 1.200 the formulas cover.`,
+    );
   }
   return og;
 }
@@ -212,4 +233,3 @@ export function realAttenuation(og: number, fg: number): number {
   const oe = platoPolynomial(og);
   return (oe - realExtractPlato(og, fg)) / oe;
 }
-

@@ -42,7 +42,17 @@ export {
   hopWeightForIbu,
   buGu,
 } from './bitterness';
-export { maltColourUnits, moreySrm, srmFromFermentables, srmToEbc, ebcToSrm, srmToRgb, srmToHex, type Rgb, type ColourSource } from './colour';
+export {
+  maltColourUnits,
+  moreySrm,
+  srmFromFermentables,
+  srmToEbc,
+  ebcToSrm,
+  srmToRgb,
+  srmToHex,
+  type Rgb,
+  type ColourSource,
+} from './colour';
 export { ATOMIC_WEIGHTS, MOLAR_MASS, molarMass } from './atomic-weights';
 export { nnls, type NnlsResult } from './nnls';
 export {
@@ -128,6 +138,14 @@ export {
   type GravityPoint,
   type FermentationPrediction,
 } from './fermentation';
-export { KEG_SIZES, KEG_SIZE_IDS, lineVolumeL, packagingTotals, type KegSize, type PackageLine, type PackagingTotals } from './packaging';
+export {
+  KEG_SIZES,
+  KEG_SIZE_IDS,
+  lineVolumeL,
+  packagingTotals,
+  type KegSize,
+  type PackageLine,
+  type PackagingTotals,
+} from './packaging';
 export { achievedEfficiency } from './efficiency';
 export { targetWarnings, waterDoseWarnings, TARGET_TOLERANCE, ION_CEILINGS_PPM, type RecipeTargets } from './checks';

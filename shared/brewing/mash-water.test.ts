@@ -38,8 +38,14 @@ describe('infusions and recirculation', () => {
 
   it('metric infusion to mash out (hand-worked: 5 kg, 15 L, 66 → 76 °C with 95 °C water = 8.97 L)', () => {
     // Wa = (76 − 66)(0.41·5 + 15)/(95 − 76) = 10 × 17.05 / 19.
-    expect(infusionVolumeL({ grainKg: 5, mashWaterL: 15, currentC: 66, targetC: 76, infusionWaterC: 95 })).toBeCloseTo(8.974, 3);
-    expectInputError(() => infusionVolumeL({ grainKg: 5, mashWaterL: 15, currentC: 66, targetC: 76, infusionWaterC: 70 }), 'infusionWaterC');
+    expect(infusionVolumeL({ grainKg: 5, mashWaterL: 15, currentC: 66, targetC: 76, infusionWaterC: 95 })).toBeCloseTo(
+      8.974,
+      3,
+    );
+    expectInputError(
+      () => infusionVolumeL({ grainKg: 5, mashWaterL: 15, currentC: 66, targetC: 76, infusionWaterC: 70 }),
+      'infusionWaterC',
+    );
   });
 
   it('HLT setpoint from coil effectiveness (hand-worked: 64 → 68 °C at ε 0.8 → 69 °C)', () => {
@@ -63,7 +69,10 @@ describe('volume chain', () => {
     const { volumes, warnings } = planVolumes(PILOT_SYSTEM, 9, 3, 5);
     expect(warnings).toEqual([]);
     expect(volumes.strikeL + volumes.infusionL + volumes.spargeL).toBeCloseTo(volumes.totalWaterL, 10);
-    expect(volumes.totalWaterL).toBeCloseTo(volumes.preBoilL + 9 * PILOT_SYSTEM.grainAbsorptionLPerKg + PILOT_SYSTEM.mashTunDeadSpaceL, 10);
+    expect(volumes.totalWaterL).toBeCloseTo(
+      volumes.preBoilL + 9 * PILOT_SYSTEM.grainAbsorptionLPerKg + PILOT_SYSTEM.mashTunDeadSpaceL,
+      10,
+    );
     expect(volumes.mashVolumeL).toBeCloseTo(32 + 9 * GRAIN_DISPLACEMENT_L_PER_KG, 10);
     expect(volumes.packagedL).toBeCloseTo(PILOT_SYSTEM.batchVolumeL - PILOT_SYSTEM.fermenterLossL, 10);
   });
@@ -80,6 +89,9 @@ describe('volume chain', () => {
 
   it('rejects impossible equipment', () => {
     expectInputError(() => planVolumes({ ...PILOT_SYSTEM, batchVolumeL: 0 }, 9, 3), 'equipment.batchVolumeL');
-    expectInputError(() => planVolumes({ ...PILOT_SYSTEM, brewhouseEfficiency: 1.2 }, 9, 3), 'equipment.brewhouseEfficiency');
+    expectInputError(
+      () => planVolumes({ ...PILOT_SYSTEM, brewhouseEfficiency: 1.2 }, 9, 3),
+      'equipment.brewhouseEfficiency',
+    );
   });
 });

@@ -2,7 +2,14 @@
  * Mash and brew-day water: strike temperature and volume, infusions,
  * recirculation, and the volume chain from water to packaged beer.
  */
-import { BrewingInputError, requireEfficiency, requireFinite, requireInRange, requireNonNegative, requirePositive } from './errors';
+import {
+  BrewingInputError,
+  requireEfficiency,
+  requireFinite,
+  requireInRange,
+  requireNonNegative,
+  requirePositive,
+} from './errors';
 import type { BrewingWarning, EquipmentProfile, VolumePlan } from './types';
 import { galPerLbToLPerKg } from './units';
 
@@ -38,7 +45,10 @@ export function strikeTemperatureF(grainTempF: number, targetMashF: number, thic
 
 /** Strike water volume, L = grain kg × thickness L/kg. */
 export function strikeVolumeL(grainKg: number, thicknessLPerKg: number): number {
-  return requireNonNegative(grainKg, 'grainKg', 'Grain weight') * requirePositive(thicknessLPerKg, 'thicknessLPerKg', 'Mash thickness');
+  return (
+    requireNonNegative(grainKg, 'grainKg', 'Grain weight') *
+    requirePositive(thicknessLPerKg, 'thicknessLPerKg', 'Mash thickness')
+  );
 }
 
 /** Water retained by spent grain, L = grain kg × absorption L/kg. */
@@ -51,7 +61,10 @@ export function grainAbsorptionL(grainKg: number, absorptionLPerKg: number): num
 
 /** Mash volume, L: water plus grain displacement ({@link GRAIN_DISPLACEMENT_L_PER_KG}). */
 export function mashVolumeL(grainKg: number, waterL: number): number {
-  return requireNonNegative(grainKg, 'grainKg', 'Grain weight') * GRAIN_DISPLACEMENT_L_PER_KG + requireNonNegative(waterL, 'waterL', 'Water');
+  return (
+    requireNonNegative(grainKg, 'grainKg', 'Grain weight') * GRAIN_DISPLACEMENT_L_PER_KG +
+    requireNonNegative(waterL, 'waterL', 'Water')
+  );
 }
 
 export interface InfusionInput {
@@ -70,7 +83,8 @@ function infusion(coefficient: number, grain: number, water: number, t1: number,
   requireFinite(t2, 'targetC', 'Target temperature');
   requireFinite(tw, 'infusionWaterC', 'Infusion water temperature');
   if (t2 < t1) throw new BrewingInputError('targetC', 'An infusion can only raise the mash temperature.');
-  if (tw <= t2) throw new BrewingInputError('infusionWaterC', 'Infusion water must be hotter than the target temperature.');
+  if (tw <= t2)
+    throw new BrewingInputError('infusionWaterC', 'Infusion water must be hotter than the target temperature.');
   return ((t2 - t1) * (coefficient * grain + water)) / (tw - t2);
 }
 
@@ -83,7 +97,13 @@ export function infusionVolumeL(input: InfusionInput): number {
 }
 
 /** Palmer, How to Brew: Wa = (T2 − T1)(0.2·G + Wm)/(Tw − T2), G lb, Wm and Wa US qt, °F. */
-export function infusionVolumeQt(grainLb: number, mashWaterQt: number, currentF: number, targetF: number, infusionWaterF: number): number {
+export function infusionVolumeQt(
+  grainLb: number,
+  mashWaterQt: number,
+  currentF: number,
+  targetF: number,
+  infusionWaterF: number,
+): number {
   return infusion(0.2, grainLb, mashWaterQt, currentF, targetF, infusionWaterF);
 }
 
@@ -118,7 +138,12 @@ export function preBoilVolumeL(postBoilL: number, boilOffLPerHour: number, boilM
  * and the kettle dead space stays behind hot:
  * post-boil = (into fermenter + trub/chiller) / (1 − shrinkage) + kettle dead space.
  */
-export function postBoilVolumeL(intoFermenterL: number, trubChillerLossL: number, kettleDeadSpaceL: number, shrinkage = COOLING_SHRINKAGE): number {
+export function postBoilVolumeL(
+  intoFermenterL: number,
+  trubChillerLossL: number,
+  kettleDeadSpaceL: number,
+  shrinkage = COOLING_SHRINKAGE,
+): number {
   requirePositive(intoFermenterL, 'batchVolumeL', 'Batch volume');
   requireNonNegative(trubChillerLossL, 'trubChillerLossL', 'Trub and chiller loss');
   requireNonNegative(kettleDeadSpaceL, 'kettleDeadSpaceL', 'Kettle dead space');
@@ -140,8 +165,10 @@ export function validateEquipment(equipment: EquipmentProfile, field = 'equipmen
   requirePositive(equipment.maxMashTunVolumeL, `${field}.maxMashTunVolumeL`, 'Mash tun capacity');
   requirePositive(equipment.maxKettleVolumeL, `${field}.maxKettleVolumeL`, 'Kettle capacity');
   requirePositive(equipment.mashThicknessLPerKg, `${field}.mashThicknessLPerKg`, 'Mash thickness');
-  if (equipment.coolingShrinkage !== undefined) requireInRange(equipment.coolingShrinkage, `${field}.coolingShrinkage`, 0, 0.2, 'Cooling shrinkage');
-  if (equipment.hltCoilEffectiveness !== undefined) requireEfficiency(equipment.hltCoilEffectiveness, `${field}.hltCoilEffectiveness`, 'Coil effectiveness');
+  if (equipment.coolingShrinkage !== undefined)
+    requireInRange(equipment.coolingShrinkage, `${field}.coolingShrinkage`, 0, 0.2, 'Cooling shrinkage');
+  if (equipment.hltCoilEffectiveness !== undefined)
+    requireEfficiency(equipment.hltCoilEffectiveness, `${field}.hltCoilEffectiveness`, 'Coil effectiveness');
   if (equipment.fermenterLossL >= equipment.batchVolumeL) {
     throw new BrewingInputError(`${field}.fermenterLossL`, 'Fermenter loss must be smaller than the batch volume.');
   }

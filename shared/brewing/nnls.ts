@@ -27,7 +27,12 @@ function gradient(a: readonly (readonly number[])[], r: readonly number[], n: nu
  * Normal equations (A_Pᵀ A_P) z = A_Pᵀ b by Gaussian elimination with partial
  * pivoting; a column with a vanishing pivot (dependent on earlier ones) gets 0.
  */
-function solvePassive(a: readonly (readonly number[])[], b: readonly number[], passive: readonly number[], n: number): number[] {
+function solvePassive(
+  a: readonly (readonly number[])[],
+  b: readonly number[],
+  passive: readonly number[],
+  n: number,
+): number[] {
   const k = passive.length;
   const m: number[][] = passive.map((p) => {
     const row = passive.map((q) => a.reduce((s, ai) => s + ai[p]! * ai[q]!, 0));

@@ -19,12 +19,12 @@ export const KEG_SIZE_IDS = Object.keys(KEG_SIZES) as KegSize[];
 
 /** One line of a packaging run. */
 export type PackageLine =
-  | { kind: 'keg'; size: KegSize; count: number }
-  | { kind: 'can' | 'bottle'; sizeMl: number; count: number };
+  { kind: 'keg'; size: KegSize; count: number } | { kind: 'can' | 'bottle'; sizeMl: number; count: number };
 
 /** Beer in one line, L. */
 export function lineVolumeL(line: PackageLine, field = 'line'): number {
-  if (!Number.isInteger(line.count) || line.count < 0) throw new BrewingInputError(`${field}.count`, 'Count must be a whole number, zero or more.');
+  if (!Number.isInteger(line.count) || line.count < 0)
+    throw new BrewingInputError(`${field}.count`, 'Count must be a whole number, zero or more.');
   if (line.kind === 'keg') {
     const litres = KEG_SIZES[line.size];
     if (litres === undefined) throw new BrewingInputError(`${field}.size`, `Unknown keg size "${String(line.size)}".`);
@@ -51,7 +51,10 @@ export function packagingTotals(lines: readonly PackageLine[], knockoutL: number
   const packagedL = lines.reduce((sum, line, i) => sum + lineVolumeL(line, `lines.${i}`), 0);
   requireNonNegative(packagedL, 'lines', 'Packaged volume');
   if (packagedL > knockoutL * 1.001) {
-    throw new BrewingInputError('lines', `These packages hold ${packagedL.toFixed(1)} L, more than the ${knockoutL.toFixed(1)} L knocked out.`);
+    throw new BrewingInputError(
+      'lines',
+      `These packages hold ${packagedL.toFixed(1)} L, more than the ${knockoutL.toFixed(1)} L knocked out.`,
+    );
   }
   const lossL = Math.max(0, knockoutL - packagedL);
   return { packagedL, lossL, lossFraction: lossL / knockoutL };

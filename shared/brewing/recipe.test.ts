@@ -22,10 +22,16 @@ describe('computeRecipe', () => {
   });
 
   it('is internally consistent', () => {
-    expect(result.ibu).toBeCloseTo(result.hops.reduce((s, h) => s + h.ibu, 0), 10);
+    expect(result.ibu).toBeCloseTo(
+      result.hops.reduce((s, h) => s + h.ibu, 0),
+      10,
+    );
     expect(result.fermentables.reduce((s, f) => s + f.percent, 0)).toBeCloseTo(100, 10);
     const adjunctPoints = result.adjuncts.reduce((s, a) => s + a.gravityPoints, 0);
-    expect(result.fermentables.reduce((s, f) => s + f.gravityPoints, 0) + adjunctPoints).toBeCloseTo((result.og - 1) * 1000, 8);
+    expect(result.fermentables.reduce((s, f) => s + f.gravityPoints, 0) + adjunctPoints).toBeCloseTo(
+      (result.og - 1) * 1000,
+      8,
+    );
     expect(result.abvPct).toBe(abv(result.og, result.fg, ABV_METHOD_SHOWN));
     expect(result.fg).toBeCloseTo(1 + (result.og - 1) * 0.22, 10);
     expect(result.preBoilGravity).toBeLessThan(result.postBoilGravity);
@@ -43,7 +49,10 @@ describe('computeRecipe', () => {
       grainBill: {
         mode: 'percent',
         targetOg: 1.06,
-        items: EXAMPLE_IPA.grainBill.items.map(({ ...item }, i) => ({ ...item, percent: [70, 10, 6, 4, 4, 1, 3, 2][i]! })),
+        items: EXAMPLE_IPA.grainBill.items.map(({ ...item }, i) => ({
+          ...item,
+          percent: [70, 10, 6, 4, 4, 1, 3, 2][i]!,
+        })),
       },
     };
     expect(computeRecipe(percent, PILOT_SYSTEM).og).toBeCloseTo(1.06, 10);
@@ -51,7 +60,18 @@ describe('computeRecipe', () => {
 
   it('solves salts for a target water profile', () => {
     const target = { ...SOFT_WATER, calciumPpm: 100, sulfatePpm: 200, chloridePpm: 60 };
-    const r = computeRecipe({ ...EXAMPLE_IPA, water: { mode: 'target', source: SOFT_WATER, target, allowedSalts: ['gypsum', 'calciumChlorideDihydrate', 'epsomSalt'] } }, PILOT_SYSTEM);
+    const r = computeRecipe(
+      {
+        ...EXAMPLE_IPA,
+        water: {
+          mode: 'target',
+          source: SOFT_WATER,
+          target,
+          allowedSalts: ['gypsum', 'calciumChlorideDihydrate', 'epsomSalt'],
+        },
+      },
+      PILOT_SYSTEM,
+    );
     expect(r.water!.residualPpm).toBeDefined();
     expect(Math.abs(r.water!.mash.sulfatePpm - 200)).toBeLessThan(15);
     expect(r.water!.mash.calciumPpm).toBeCloseTo(r.water!.sparge.calciumPpm, 6);
@@ -67,19 +87,37 @@ describe('computeRecipe', () => {
       { ...PILOT_SYSTEM, maxMashTunVolumeL: 30, maxKettleVolumeL: 40 },
     );
     const codes = r.warnings.map((w) => w.code);
-    expect(codes).toEqual(expect.arrayContaining(['mashTunOverfilled', 'kettleOverfilled', 'adjunctOutsideRange', 'hopMinutesExceedBoil']));
+    expect(codes).toEqual(
+      expect.arrayContaining(['mashTunOverfilled', 'kettleOverfilled', 'adjunctOutsideRange', 'hopMinutesExceedBoil']),
+    );
   });
 
   it('throws typed errors for impossible input', () => {
     expectInputError(() => computeRecipe(EXAMPLE_IPA, { ...PILOT_SYSTEM, batchVolumeL: 0 }), 'equipment.batchVolumeL');
-    expectInputError(() => computeRecipe(EXAMPLE_IPA, { ...PILOT_SYSTEM, brewhouseEfficiency: 0 }), 'equipment.brewhouseEfficiency');
+    expectInputError(
+      () => computeRecipe(EXAMPLE_IPA, { ...PILOT_SYSTEM, brewhouseEfficiency: 0 }),
+      'equipment.brewhouseEfficiency',
+    );
     const badHop = { ...EXAMPLE_IPA, hops: [{ ...EXAMPLE_IPA.hops[0]!, alphaAcidPct: 45 }] };
     expectInputError(() => computeRecipe(badHop, PILOT_SYSTEM), 'hops.0.alphaAcidPct');
     const items = EXAMPLE_IPA.grainBill.items.map((item, i) => (i === 0 ? { ...item, weightKg: -1 } : item));
-    expectInputError(() => computeRecipe({ ...EXAMPLE_IPA, grainBill: { mode: 'weight', items } as RecipeInput['grainBill'] }, PILOT_SYSTEM), 'grainBill.items.0.weightKg');
-    const percent: RecipeInput = { ...EXAMPLE_IPA, grainBill: { mode: 'percent', targetOg: 1.05, items: [{ ...EXAMPLE_IPA.grainBill.items[0]!, percent: 90 }] } };
+    expectInputError(
+      () =>
+        computeRecipe(
+          { ...EXAMPLE_IPA, grainBill: { mode: 'weight', items } as RecipeInput['grainBill'] },
+          PILOT_SYSTEM,
+        ),
+      'grainBill.items.0.weightKg',
+    );
+    const percent: RecipeInput = {
+      ...EXAMPLE_IPA,
+      grainBill: { mode: 'percent', targetOg: 1.05, items: [{ ...EXAMPLE_IPA.grainBill.items[0]!, percent: 90 }] },
+    };
     expectInputError(() => computeRecipe(percent, PILOT_SYSTEM), 'grainBill.items');
-    expectInputError(() => computeRecipe({ ...EXAMPLE_IPA, mash: { ...EXAMPLE_IPA.mash, steps: [] } }, PILOT_SYSTEM), 'mash.steps');
+    expectInputError(
+      () => computeRecipe({ ...EXAMPLE_IPA, mash: { ...EXAMPLE_IPA.mash, steps: [] } }, PILOT_SYSTEM),
+      'mash.steps',
+    );
   });
 });
 
@@ -100,7 +138,13 @@ describe('sugar from adjuncts', () => {
   });
 
   it('honey at 1 lb per US gal gives about 38 points, near the 35 ppg brewers use for honey (common practice, no source)', () => {
-    const honey = { name: 'Wildflower honey', category: 'honey' as const, stage: 'fermenter' as const, rule: { basis: 'lbPerUsGal' as const, low: 0.5, high: 2 }, level: 1 };
+    const honey = {
+      name: 'Wildflower honey',
+      category: 'honey' as const,
+      stage: 'fermenter' as const,
+      rule: { basis: 'lbPerUsGal' as const, low: 0.5, high: 2 },
+      level: 1,
+    };
     const r = computeRecipe({ ...EXAMPLE_IPA, adjuncts: [honey] }, PILOT_SYSTEM);
     // 82 % sugar (USDA FoodData Central, honey, from memory) × 46.2 = 37.9.
     expect(r.adjuncts[0]!.gravityPoints).toBeCloseTo(0.82 * SUCROSE_PPG, 6);
@@ -111,8 +155,17 @@ describe('sugar from adjuncts', () => {
   });
 
   it('says why a sugary adjunct dosed by volume or added at packaging is not counted', () => {
-    const byVolume = { name: 'Honey', category: 'honey' as const, stage: 'fermenter' as const, rule: { basis: 'mlPerHl' as const, low: 0, high: 5000 }, level: 1000 };
-    const r = computeRecipe({ ...EXAMPLE_IPA, adjuncts: [byVolume, { ...EXAMPLE_IPA.adjuncts[0]!, stage: 'packaging' }] }, PILOT_SYSTEM);
+    const byVolume = {
+      name: 'Honey',
+      category: 'honey' as const,
+      stage: 'fermenter' as const,
+      rule: { basis: 'mlPerHl' as const, low: 0, high: 5000 },
+      level: 1000,
+    };
+    const r = computeRecipe(
+      { ...EXAMPLE_IPA, adjuncts: [byVolume, { ...EXAMPLE_IPA.adjuncts[0]!, stage: 'packaging' }] },
+      PILOT_SYSTEM,
+    );
     expect(r.og).toBeCloseTo(noAdjuncts.og, 10);
     expect(r.adjuncts[0]!.sugarNotCounted).toMatch(/dosed by volume/);
     expect(r.adjuncts[1]!.sugarNotCounted).toMatch(/packaging/);
@@ -121,7 +174,11 @@ describe('sugar from adjuncts', () => {
   it('a bill written as shares still reaches its target OG with the fruit counted', () => {
     const percent: RecipeInput = {
       ...EXAMPLE_IPA,
-      grainBill: { mode: 'percent', targetOg: 1.06, items: EXAMPLE_IPA.grainBill.items.map((item, i) => ({ ...item, percent: [70, 10, 6, 4, 4, 1, 3, 2][i]! })) },
+      grainBill: {
+        mode: 'percent',
+        targetOg: 1.06,
+        items: EXAMPLE_IPA.grainBill.items.map((item, i) => ({ ...item, percent: [70, 10, 6, 4, 4, 1, 3, 2][i]! })),
+      },
     };
     expect(computeRecipe(percent, PILOT_SYSTEM).og).toBeCloseTo(1.06, 10);
   });

@@ -2,7 +2,15 @@
  * computeRecipe: every live number for a recipe on one equipment profile, for
  * the recipe editor, the API and the brew sheet.
  */
-import { adjunctSugar, doseAmount, doseRange, doseRangeLabel, doseUnitLabel, isWithinRange, roundForMeasuring } from './adjuncts';
+import {
+  adjunctSugar,
+  doseAmount,
+  doseRange,
+  doseRangeLabel,
+  doseUnitLabel,
+  isWithinRange,
+  roundForMeasuring,
+} from './adjuncts';
 import { buGu, ibuForAddition, hopUtilisation, hopWeightForIbu } from './bitterness';
 import { srmFromFermentables, srmToEbc, srmToHex } from './colour';
 import { BrewingInputError, MAX_SG, requireFinite, requireInRange, requireNonNegative } from './errors';
@@ -46,11 +54,21 @@ import { ION_KEYS, chlorideSulfateRatio, residualAlkalinity, solveSaltAdditions,
  * Weighed fermentables for a bill: weights as written, or solved from percentages and target OG.
  * `otherPoints` (gravity points from adjunct sugar) come off the target, so the beer reaches it.
  */
-export function resolveGrainBill(bill: GrainBill, brewhouseEfficiency: number, volumeL: number, otherPoints = 0): WeighedFermentable[] {
-  if (bill.items.length === 0) throw new BrewingInputError('grainBill.items', 'A recipe needs at least one fermentable.');
+export function resolveGrainBill(
+  bill: GrainBill,
+  brewhouseEfficiency: number,
+  volumeL: number,
+  otherPoints = 0,
+): WeighedFermentable[] {
+  if (bill.items.length === 0)
+    throw new BrewingInputError('grainBill.items', 'A recipe needs at least one fermentable.');
   if (bill.mode === 'weight') return bill.items;
   const grainOg = bill.targetOg - otherPoints / 1000;
-  if (grainOg <= 1) throw new BrewingInputError('grainBill.targetOg', `The adjuncts' sugar alone reaches ${bill.targetOg.toFixed(3)}: raise the target OG.`);
+  if (grainOg <= 1)
+    throw new BrewingInputError(
+      'grainBill.targetOg',
+      `The adjuncts' sugar alone reaches ${bill.targetOg.toFixed(3)}: raise the target OG.`,
+    );
   const weights = weightsForTargetOg(bill.items, grainOg, brewhouseEfficiency, volumeL);
   return bill.items.map(({ percent: _percent, ...spec }, i) => ({ ...spec, weightKg: weights[i]! }));
 }
@@ -89,20 +107,43 @@ function planMash(recipe: RecipeInput, equipment: EquipmentProfile, mashGrainKg:
   const strikeTempC = strikeTemperatureC(grainTempC, first.tempC, thicknessLPerKg);
   const strikeL = mashGrainKg * thicknessLPerKg;
   const computed: ComputedMashStep[] = [
-    { name: first.name, tempC: first.tempC, minutes: first.minutes, method: 'strike', waterAddedL: strikeL, waterTempC: strikeTempC },
+    {
+      name: first.name,
+      tempC: first.tempC,
+      minutes: first.minutes,
+      method: 'strike',
+      waterAddedL: strikeL,
+      waterTempC: strikeTempC,
+    },
   ];
   let mashWaterL = strikeL;
   let currentC = first.tempC;
   for (let i = 1; i < steps.length; i++) {
     const step = steps[i]!;
-    const out: ComputedMashStep = { name: step.name, tempC: step.tempC, minutes: step.minutes, method: step.method, waterAddedL: 0 };
+    const out: ComputedMashStep = {
+      name: step.name,
+      tempC: step.tempC,
+      minutes: step.minutes,
+      method: step.method,
+      waterAddedL: 0,
+    };
     if (step.method === 'infusion') {
       const waterC = step.infusionWaterTempC ?? DEFAULT_INFUSION_WATER_C;
-      out.waterAddedL = infusionVolumeL({ grainKg: mashGrainKg, mashWaterL, currentC, targetC: step.tempC, infusionWaterC: waterC });
+      out.waterAddedL = infusionVolumeL({
+        grainKg: mashGrainKg,
+        mashWaterL,
+        currentC,
+        targetC: step.tempC,
+        infusionWaterC: waterC,
+      });
       out.waterTempC = waterC;
       mashWaterL += out.waterAddedL;
     } else if (step.method === 'recirculate') {
-      out.hltTempC = hltTemperatureForRecirculationC(currentC, step.tempC, equipment.hltCoilEffectiveness ?? DEFAULT_HLT_COIL_EFFECTIVENESS);
+      out.hltTempC = hltTemperatureForRecirculationC(
+        currentC,
+        step.tempC,
+        equipment.hltCoilEffectiveness ?? DEFAULT_HLT_COIL_EFFECTIVENESS,
+      );
     }
     computed.push(out);
     currentC = step.tempC;
@@ -115,12 +156,18 @@ export function planWort(recipe: RecipeInput, equipment: EquipmentProfile): Wort
   validateEquipment(equipment);
   const volumeL = equipment.batchVolumeL;
   const efficiency = equipment.brewhouseEfficiency;
-  const adjunctPoints = recipe.adjuncts.map((a, i) => adjunctSugar(a, doseAmount(a.rule, a.level, volumeL, `adjuncts.${i}.level`), `adjuncts.${i}`).pointLitres);
+  const adjunctPoints = recipe.adjuncts.map(
+    (a, i) => adjunctSugar(a, doseAmount(a.rule, a.level, volumeL, `adjuncts.${i}.level`), `adjuncts.${i}`).pointLitres,
+  );
   const adjunctTotal = adjunctPoints.reduce((s, p) => s + p, 0);
   const fermentables = resolveGrainBill(recipe.grainBill, efficiency, volumeL, adjunctTotal / volumeL);
   const points = pointLitres(fermentables, efficiency, 'grainBill.items');
   const og = ogFromFermentables(fermentables, efficiency, volumeL) + adjunctTotal / volumeL / 1000;
-  if (og > MAX_SG) throw new BrewingInputError('adjuncts', `With the adjuncts' sugar the OG would be ${og.toFixed(3)}, above the 1.200 the formulas cover.`);
+  if (og > MAX_SG)
+    throw new BrewingInputError(
+      'adjuncts',
+      `With the adjuncts' sugar the OG would be ${og.toFixed(3)}, above the 1.200 the formulas cover.`,
+    );
   let mashGrainKg = 0;
   let kettlePoints = 0;
   fermentables.forEach((f, i) => {
@@ -181,7 +228,9 @@ function computeWater(recipe: RecipeInput, wort: WortPlan, warnings: BrewingWarn
     mashSalts = solved.mashSalts;
     spargeSalts = solved.spargeSalts;
     residualPpm = solved.residualPpm;
-    const missed = ION_KEYS.filter((ion) => Math.abs(solved.residualPpm[ion]) > Math.max(WATER_MISS_PPM, WATER_MISS_SHARE * plan.target[ion]));
+    const missed = ION_KEYS.filter(
+      (ion) => Math.abs(solved.residualPpm[ion]) > Math.max(WATER_MISS_PPM, WATER_MISS_SHARE * plan.target[ion]),
+    );
     if (missed.length > 0) {
       warnings.push({
         code: 'waterTargetNotReached',
@@ -247,7 +296,11 @@ export function computeRecipe(recipe: RecipeInput, equipment: EquipmentProfile):
   const hops = recipe.hops.map((hop, i) => {
     const field = `hops.${i}`;
     if (hop.use === 'boil' && hop.minutes > equipment.boilMinutes) {
-      warnings.push({ code: 'hopMinutesExceedBoil', field: `${field}.minutes`, message: `${hop.name}: ${hop.minutes} min is longer than the ${equipment.boilMinutes} min boil.` });
+      warnings.push({
+        code: 'hopMinutesExceedBoil',
+        field: `${field}.minutes`,
+        message: `${hop.name}: ${hop.minutes} min is longer than the ${equipment.boilMinutes} min boil.`,
+      });
     }
     const ibu = ibuForAddition(hop, wort.boilGravity, volumeL, field);
     return {
@@ -266,7 +319,14 @@ export function computeRecipe(recipe: RecipeInput, equipment: EquipmentProfile):
   const adjuncts = computeAdjuncts(recipe, volumeL, warnings);
   const ogPlato = sgToPlato(og);
   const rate = recipe.yeast.pitchRateMillionCellsPerMlPerPlato;
-  const yeastCellsBillion = rate === undefined ? undefined : (requireNonNegative(rate, 'yeast.pitchRateMillionCellsPerMlPerPlato', 'Pitch rate') * volumeL * 1000 * ogPlato) / 1000;
+  const yeastCellsBillion =
+    rate === undefined
+      ? undefined
+      : (requireNonNegative(rate, 'yeast.pitchRateMillionCellsPerMlPerPlato', 'Pitch rate') *
+          volumeL *
+          1000 *
+          ogPlato) /
+        1000;
 
   return {
     og,
@@ -311,13 +371,21 @@ export function computeRecipe(recipe: RecipeInput, equipment: EquipmentProfile):
  * equipment (Tinseth, inverted by {@link hopWeightForIbu}); additions without a share keep
  * their weight. Boil gravity does not depend on the hops, so one wort plan serves all.
  */
-export function hopWeightsForIbuShares(recipe: RecipeInput, equipment: EquipmentProfile, targetIbu: number, sharesPct: readonly (number | undefined)[]): HopAddition[] {
+export function hopWeightsForIbuShares(
+  recipe: RecipeInput,
+  equipment: EquipmentProfile,
+  targetIbu: number,
+  sharesPct: readonly (number | undefined)[],
+): HopAddition[] {
   if (sharesPct.every((s) => s === undefined)) return recipe.hops;
   const wort = planWort(recipe, equipment);
   return recipe.hops.map((hop, i) => {
     const share = sharesPct[i];
     if (share === undefined) return hop;
     requireInRange(share, `hops.${i}.ibuSharePct`, 0, 100, 'Share of the target IBU (%)');
-    return { ...hop, weightG: hopWeightForIbu((targetIbu * share) / 100, hop, wort.boilGravity, equipment.batchVolumeL, `hops.${i}`) };
+    return {
+      ...hop,
+      weightG: hopWeightForIbu((targetIbu * share) / 100, hop, wort.boilGravity, equipment.batchVolumeL, `hops.${i}`),
+    };
   });
 }

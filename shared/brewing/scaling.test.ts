@@ -23,7 +23,9 @@ describe('scaleRecipe pilot → 10 bbl', () => {
   });
 
   it('scales adjuncts by their dose rules and dry hops by volume', () => {
-    before.adjuncts.forEach((a, i) => expect(after.adjuncts[i]!.amount.value / a.amount.value).toBeCloseTo(scaled.volumeRatio, 8));
+    before.adjuncts.forEach((a, i) =>
+      expect(after.adjuncts[i]!.amount.value / a.amount.value).toBeCloseTo(scaled.volumeRatio, 8),
+    );
     const dry = scaled.changes.find((c) => c.item.includes('dry hop'))!;
     expect(dry.nonLinear).toBe(false);
   });
@@ -38,8 +40,14 @@ describe('scaleRecipe pilot → 10 bbl', () => {
   });
 
   it('warns when the target brewhouse is too small', () => {
-    const small = scaleRecipe(EXAMPLE_IPA, PILOT_SYSTEM, { ...TEN_BBL_BREWHOUSE, maxMashTunVolumeL: 900, maxKettleVolumeL: 1200 });
-    expect(small.warnings.map((w) => w.code)).toEqual(expect.arrayContaining(['mashTunOverfilled', 'kettleOverfilled']));
+    const small = scaleRecipe(EXAMPLE_IPA, PILOT_SYSTEM, {
+      ...TEN_BBL_BREWHOUSE,
+      maxMashTunVolumeL: 900,
+      maxKettleVolumeL: 1200,
+    });
+    expect(small.warnings.map((w) => w.code)).toEqual(
+      expect.arrayContaining(['mashTunOverfilled', 'kettleOverfilled']),
+    );
   });
 });
 

@@ -33,7 +33,13 @@ function scaleGrainBill(recipe: RecipeInput, before: ComputedRecipe, target: Equ
   return { mode: 'weight', items: bill.items.map((item, i) => ({ ...item, weightKg: weights[i]! })) };
 }
 
-function scaleSalts(salts: readonly SaltAddition[], fromL: number, toL: number, fallbackPerL?: readonly SaltAddition[], fallbackFromL?: number): SaltAddition[] {
+function scaleSalts(
+  salts: readonly SaltAddition[],
+  fromL: number,
+  toL: number,
+  fallbackPerL?: readonly SaltAddition[],
+  fallbackFromL?: number,
+): SaltAddition[] {
   if (toL === 0) return [];
   if (fromL > 0) return salts.map((s) => ({ ...s, grams: (s.grams * toL) / fromL }));
   // No water of this kind before: treat it like the mash water so every litre has the same ppm.
@@ -41,7 +47,12 @@ function scaleSalts(salts: readonly SaltAddition[], fromL: number, toL: number, 
   return fallbackPerL.map((s) => ({ ...s, grams: (s.grams * toL) / fallbackFromL }));
 }
 
-function scaleWater(plan: WaterPlan | undefined, before: ComputedRecipe, mashWaterL: number, spargeL: number): WaterPlan | undefined {
+function scaleWater(
+  plan: WaterPlan | undefined,
+  before: ComputedRecipe,
+  mashWaterL: number,
+  spargeL: number,
+): WaterPlan | undefined {
   if (!plan || plan.mode === 'target') return plan;
   const beforeMashL = before.volumes.strikeL + before.volumes.infusionL;
   return {
@@ -51,7 +62,14 @@ function scaleWater(plan: WaterPlan | undefined, before: ComputedRecipe, mashWat
   };
 }
 
-function change(item: string, unit: ScaleChange['unit'], from: number, to: number, linear: number, reason: string): ScaleChange {
+function change(
+  item: string,
+  unit: ScaleChange['unit'],
+  from: number,
+  to: number,
+  linear: number,
+  reason: string,
+): ScaleChange {
   const nonLinear =
     unit === '°C'
       ? Math.abs(to - linear) > TEMPERATURE_TOLERANCE_C
@@ -88,7 +106,12 @@ function listChanges(
         : 'no bitterness: scaled with batch volume';
     changes.push(change(hopLabel(h), 'g', h.weightG, g.weightG, h.weightG * ratio, reason));
   });
-  const saltChanges = (where: 'mash' | 'sparge', from: readonly SaltAddition[], to: readonly SaltAddition[], volumeNote: string): void => {
+  const saltChanges = (
+    where: 'mash' | 'sparge',
+    from: readonly SaltAddition[],
+    to: readonly SaltAddition[],
+    volumeNote: string,
+  ): void => {
     const ids = new Set([...from.map((s) => s.salt), ...to.map((s) => s.salt)]);
     for (const id of ids) {
       const a = from.filter((s) => s.salt === id).reduce((t, s) => t + s.grams, 0);
@@ -97,19 +120,49 @@ function listChanges(
     }
   };
   if (before.water && after.water) {
-    saltChanges('mash', before.water.mashSalts, after.water.mashSalts, `${(after.volumes.strikeL + after.volumes.infusionL).toFixed(1)} L of mash water`);
-    saltChanges('sparge', before.water.spargeSalts, after.water.spargeSalts, `${after.volumes.spargeL.toFixed(1)} L of sparge water`);
+    saltChanges(
+      'mash',
+      before.water.mashSalts,
+      after.water.mashSalts,
+      `${(after.volumes.strikeL + after.volumes.infusionL).toFixed(1)} L of mash water`,
+    );
+    saltChanges(
+      'sparge',
+      before.water.spargeSalts,
+      after.water.spargeSalts,
+      `${after.volumes.spargeL.toFixed(1)} L of sparge water`,
+    );
   }
   before.adjuncts.forEach((a, i) => {
     const b = after.adjuncts[i]!;
     const fixed = recipe.adjuncts[i]!.rule.basis === 'fixedPerBatch';
-    changes.push(change(`adjunct: ${a.name}`, a.amount.unit, a.amount.value, b.amount.value, a.amount.value * ratio, fixed ? 'fixed per batch' : 'dose per volume of beer'));
+    changes.push(
+      change(
+        `adjunct: ${a.name}`,
+        a.amount.unit,
+        a.amount.value,
+        b.amount.value,
+        a.amount.value * ratio,
+        fixed ? 'fixed per batch' : 'dose per volume of beer',
+      ),
+    );
   });
-  changes.push(change('strike temperature', '°C', before.strikeTempC, after.strikeTempC, before.strikeTempC, `mash thickness ${after.thicknessLPerKg.toFixed(2)} L/kg (was ${before.thicknessLPerKg.toFixed(2)})`));
+  changes.push(
+    change(
+      'strike temperature',
+      '°C',
+      before.strikeTempC,
+      after.strikeTempC,
+      before.strikeTempC,
+      `mash thickness ${after.thicknessLPerKg.toFixed(2)} L/kg (was ${before.thicknessLPerKg.toFixed(2)})`,
+    ),
+  );
   const volumeNote = 'depends on grain weight, boil-off, dead space and losses, not only batch size';
   const v0 = before.volumes;
   const v1 = after.volumes;
-  changes.push(change('strike water', 'L', v0.strikeL, v1.strikeL, v0.strikeL * ratio, 'grain weight × mash thickness'));
+  changes.push(
+    change('strike water', 'L', v0.strikeL, v1.strikeL, v0.strikeL * ratio, 'grain weight × mash thickness'),
+  );
   changes.push(change('sparge water', 'L', v0.spargeL, v1.spargeL, v0.spargeL * ratio, volumeNote));
   changes.push(change('total water', 'L', v0.totalWaterL, v1.totalWaterL, v0.totalWaterL * ratio, volumeNote));
   changes.push(change('pre-boil volume', 'L', v0.preBoilL, v1.preBoilL, v0.preBoilL * ratio, volumeNote));
@@ -134,7 +187,10 @@ export function scaleRecipe(recipe: RecipeInput, source: EquipmentProfile, targe
   const wort = planWort({ ...recipe, grainBill }, target);
   const hops: HopAddition[] = recipe.hops.map((hop, i) => {
     const ibu = before.hops[i]!.ibu;
-    const weightG = ibu > 0 ? hopWeightForIbu(ibu, hop, wort.boilGravity, target.batchVolumeL, `hops.${i}`) : hop.weightG * volumeRatio;
+    const weightG =
+      ibu > 0
+        ? hopWeightForIbu(ibu, hop, wort.boilGravity, target.batchVolumeL, `hops.${i}`)
+        : hop.weightG * volumeRatio;
     return { ...hop, weightG };
   });
   const water = scaleWater(recipe.water, before, wort.mashWaterL, wort.volumes.spargeL);

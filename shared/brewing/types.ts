@@ -47,8 +47,7 @@ export interface SharedFermentable extends FermentableSpec {
  * percentages plus a target OG travel between brewhouses unchanged.
  */
 export type GrainBill =
-  | { mode: 'weight'; items: WeighedFermentable[] }
-  | { mode: 'percent'; targetOg: number; items: SharedFermentable[] };
+  { mode: 'weight'; items: WeighedFermentable[] } | { mode: 'percent'; targetOg: number; items: SharedFermentable[] };
 
 // ------------------------------------------------------------------------ hops
 
@@ -149,14 +148,7 @@ export interface MashPlan {
  * volume into the fermenter. `fixedPerBatch` does not scale with volume.
  */
 export type DoseBasis =
-  | 'lbPerUsGal'
-  | 'ozPerUsGal'
-  | 'kgPerHl'
-  | 'gPerHl'
-  | 'gPerL'
-  | 'tspPer5UsGal'
-  | 'mlPerHl'
-  | 'fixedPerBatch';
+  'lbPerUsGal' | 'ozPerUsGal' | 'kgPerHl' | 'gPerHl' | 'gPerL' | 'tspPer5UsGal' | 'mlPerHl' | 'fixedPerBatch';
 
 /** Unit of an absolute amount (SI for mass and volume, plus a count). */
 export type AmountUnit = 'kg' | 'mL' | 'each';

@@ -40,11 +40,24 @@ describe('salt ion contributions (molar masses from IUPAC standard atomic weight
   });
 });
 
-const source: WaterProfile = { calciumPpm: 20, magnesiumPpm: 5, sodiumPpm: 10, sulfatePpm: 15, chloridePpm: 20, bicarbonatePpm: 60 };
+const source: WaterProfile = {
+  calciumPpm: 20,
+  magnesiumPpm: 5,
+  sodiumPpm: 10,
+  sulfatePpm: 15,
+  chloridePpm: 20,
+  bicarbonatePpm: 60,
+};
 
 describe('profiles', () => {
   it('adds salts to source water separately for mash and sparge', () => {
-    const { mash, sparge, combined } = mashAndSpargeProfiles(source, [{ salt: 'gypsum', grams: 4 }], 20, [{ salt: 'gypsum', grams: 1 }], 10);
+    const { mash, sparge, combined } = mashAndSpargeProfiles(
+      source,
+      [{ salt: 'gypsum', grams: 4 }],
+      20,
+      [{ salt: 'gypsum', grams: 1 }],
+      10,
+    );
     expect(mash.calciumPpm).toBeCloseTo(20 + (232.79 * 4) / 20, 1);
     expect(sparge.calciumPpm).toBeCloseTo(20 + (232.79 * 1) / 10, 1);
     expect(combined.calciumPpm).toBeCloseTo((mash.calciumPpm * 20 + sparge.calciumPpm * 10) / 30, 10);
@@ -77,14 +90,26 @@ describe('residual alkalinity (Kolbach)', () => {
 
 describe('Lawson–Hanson NNLS', () => {
   it('solves a small case with an active bound (hand-worked: x = [0.5, 0])', () => {
-    const r = nnls([[1, 0], [0, 1], [1, 1]], [1, -1, 0]);
+    const r = nnls(
+      [
+        [1, 0],
+        [0, 1],
+        [1, 1],
+      ],
+      [1, -1, 0],
+    );
     expect(r.x[0]).toBeCloseTo(0.5, 10);
     expect(r.x[1]).toBe(0);
     expect(r.residualNorm).toBeCloseTo(Math.sqrt(1.5), 10);
   });
 
   it('recovers an exact non-negative combination', () => {
-    const a = [[2, 0, 1], [0, 1, 1], [1, 1, 0], [3, 0, 0]];
+    const a = [
+      [2, 0, 1],
+      [0, 1, 1],
+      [1, 1, 0],
+      [3, 0, 0],
+    ];
     const x = [0.5, 2, 1];
     const b = a.map((row) => row.reduce((s, v, j) => s + v * x[j]!, 0));
     nnls(a, b).x.forEach((v, j) => expect(v).toBeCloseTo(x[j]!, 8));
@@ -93,8 +118,22 @@ describe('Lawson–Hanson NNLS', () => {
 
 describe('salt solver', () => {
   it('reaches a profile built from allowed salts, with zero residual', () => {
-    const target = waterAfterAdditions(source, [{ salt: 'gypsum', grams: 0.2 }, { salt: 'calciumChlorideDihydrate', grams: 0.1 }, { salt: 'epsomSalt', grams: 0.05 }], 1);
-    const s = solveSaltAdditions({ source, target, mashVolumeL: 30, spargeVolumeL: 15, allowedSalts: ['gypsum', 'calciumChlorideDihydrate', 'epsomSalt', 'tableSalt'] });
+    const target = waterAfterAdditions(
+      source,
+      [
+        { salt: 'gypsum', grams: 0.2 },
+        { salt: 'calciumChlorideDihydrate', grams: 0.1 },
+        { salt: 'epsomSalt', grams: 0.05 },
+      ],
+      1,
+    );
+    const s = solveSaltAdditions({
+      source,
+      target,
+      mashVolumeL: 30,
+      spargeVolumeL: 15,
+      allowedSalts: ['gypsum', 'calciumChlorideDihydrate', 'epsomSalt', 'tableSalt'],
+    });
     expect(s.gramsPerL.gypsum).toBeCloseTo(0.2, 6);
     expect(s.gramsPerL.calciumChlorideDihydrate).toBeCloseTo(0.1, 6);
     expect(s.mashSalts.find((x) => x.salt === 'gypsum')!.grams).toBeCloseTo(6, 4);
@@ -111,23 +150,48 @@ describe('salt solver', () => {
 
   it('copes with collinear salts (both calcium chloride forms allowed)', () => {
     const target = { ...source, calciumPpm: 80, chloridePpm: 120 };
-    const s = solveSaltAdditions({ source, target, mashVolumeL: 10, spargeVolumeL: 5, allowedSalts: ['calciumChlorideDihydrate', 'calciumChlorideAnhydrous'] });
+    const s = solveSaltAdditions({
+      source,
+      target,
+      mashVolumeL: 10,
+      spargeVolumeL: 5,
+      allowedSalts: ['calciumChlorideDihydrate', 'calciumChlorideAnhydrous'],
+    });
     expect(s.residualNorm).toBeLessThan(s.noAdditionResidualNorm);
     for (const v of Object.values(s.gramsPerL)) expect(v).toBeGreaterThanOrEqual(0);
   });
 
   const ppm = fc.double({ min: 0, max: 400, noNaN: true });
-  const profile = fc.record({ calciumPpm: ppm, magnesiumPpm: ppm, sodiumPpm: ppm, sulfatePpm: ppm, chloridePpm: ppm, bicarbonatePpm: ppm });
+  const profile = fc.record({
+    calciumPpm: ppm,
+    magnesiumPpm: ppm,
+    sodiumPpm: ppm,
+    sulfatePpm: ppm,
+    chloridePpm: ppm,
+    bicarbonatePpm: ppm,
+  });
 
   it('never returns a negative amount and never does worse than adding nothing', () => {
     fc.assert(
-      fc.property(profile, profile, fc.subarray(SALT_IDS, { minLength: 0 }), fc.double({ min: 1, max: 2000, noNaN: true }), (src, target, salts, volume) => {
-        const s = solveSaltAdditions({ source: src, target, mashVolumeL: volume, spargeVolumeL: volume / 2, allowedSalts: salts });
-        for (const v of Object.values(s.gramsPerL)) expect(v).toBeGreaterThanOrEqual(0);
-        for (const a of [...s.mashSalts, ...s.spargeSalts]) expect(a.grams).toBeGreaterThanOrEqual(0);
-        expect(s.residualNorm).toBeLessThanOrEqual(s.noAdditionResidualNorm + 1e-9);
-        expect(Number.isFinite(s.residualNorm)).toBe(true);
-      }),
+      fc.property(
+        profile,
+        profile,
+        fc.subarray(SALT_IDS, { minLength: 0 }),
+        fc.double({ min: 1, max: 2000, noNaN: true }),
+        (src, target, salts, volume) => {
+          const s = solveSaltAdditions({
+            source: src,
+            target,
+            mashVolumeL: volume,
+            spargeVolumeL: volume / 2,
+            allowedSalts: salts,
+          });
+          for (const v of Object.values(s.gramsPerL)) expect(v).toBeGreaterThanOrEqual(0);
+          for (const a of [...s.mashSalts, ...s.spargeSalts]) expect(a.grams).toBeGreaterThanOrEqual(0);
+          expect(s.residualNorm).toBeLessThanOrEqual(s.noAdditionResidualNorm + 1e-9);
+          expect(Number.isFinite(s.residualNorm)).toBe(true);
+        },
+      ),
       { numRuns: 300 },
     );
   });
@@ -135,9 +199,21 @@ describe('salt solver', () => {
   it('is at least as good as any single allowed salt alone (a cheap optimality check)', () => {
     fc.assert(
       fc.property(profile, profile, (src, target) => {
-        const s = solveSaltAdditions({ source: src, target, mashVolumeL: 10, spargeVolumeL: 0, allowedSalts: SALT_IDS });
+        const s = solveSaltAdditions({
+          source: src,
+          target,
+          mashVolumeL: 10,
+          spargeVolumeL: 0,
+          allowedSalts: SALT_IDS,
+        });
         for (const salt of SALT_IDS) {
-          const single = solveSaltAdditions({ source: src, target, mashVolumeL: 10, spargeVolumeL: 0, allowedSalts: [salt] });
+          const single = solveSaltAdditions({
+            source: src,
+            target,
+            mashVolumeL: 10,
+            spargeVolumeL: 0,
+            allowedSalts: [salt],
+          });
           expect(s.residualNorm).toBeLessThanOrEqual(single.residualNorm + 1e-6);
         }
       }),
@@ -146,6 +222,16 @@ describe('salt solver', () => {
   });
 
   it('rejects negative target ions', () => {
-    expectInputError(() => solveSaltAdditions({ source, target: { ...source, sodiumPpm: -1 }, mashVolumeL: 1, spargeVolumeL: 1, allowedSalts: ['gypsum'] }), 'target.sodiumPpm');
+    expectInputError(
+      () =>
+        solveSaltAdditions({
+          source,
+          target: { ...source, sodiumPpm: -1 },
+          mashVolumeL: 1,
+          spargeVolumeL: 1,
+          allowedSalts: ['gypsum'],
+        }),
+      'target.sodiumPpm',
+    );
   });
 });

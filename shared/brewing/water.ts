@@ -9,7 +9,14 @@ import { nnls } from './nnls';
 import type { IonKey, SaltAddition, SaltId, WaterProfile } from './types';
 
 /** Ion keys in a fixed order (rows of the solver's matrix). */
-export const ION_KEYS: readonly IonKey[] = ['calciumPpm', 'magnesiumPpm', 'sodiumPpm', 'sulfatePpm', 'chloridePpm', 'bicarbonatePpm'];
+export const ION_KEYS: readonly IonKey[] = [
+  'calciumPpm',
+  'magnesiumPpm',
+  'sodiumPpm',
+  'sulfatePpm',
+  'chloridePpm',
+  'bicarbonatePpm',
+];
 
 /** All-zero profile (distilled or reverse-osmosis water). */
 export const DISTILLED_WATER: WaterProfile = Object.freeze({
@@ -56,12 +63,23 @@ function salt(name: string, formula: string, molarMass: number, ionMoles: Partia
  */
 export const SALTS: Readonly<Record<SaltId, SaltInfo>> = {
   gypsum: salt('Gypsum', 'CaSO4·2H2O', M.calcium + M.sulfate + 2 * M.water, { calciumPpm: 1, sulfatePpm: 1 }),
-  calciumChlorideDihydrate: salt('Calcium chloride (dihydrate)', 'CaCl2·2H2O', M.calcium + 2 * M.chloride + 2 * M.water, {
+  calciumChlorideDihydrate: salt(
+    'Calcium chloride (dihydrate)',
+    'CaCl2·2H2O',
+    M.calcium + 2 * M.chloride + 2 * M.water,
+    {
+      calciumPpm: 1,
+      chloridePpm: 2,
+    },
+  ),
+  calciumChlorideAnhydrous: salt('Calcium chloride (anhydrous)', 'CaCl2', M.calcium + 2 * M.chloride, {
     calciumPpm: 1,
     chloridePpm: 2,
   }),
-  calciumChlorideAnhydrous: salt('Calcium chloride (anhydrous)', 'CaCl2', M.calcium + 2 * M.chloride, { calciumPpm: 1, chloridePpm: 2 }),
-  epsomSalt: salt('Epsom salt', 'MgSO4·7H2O', M.magnesium + M.sulfate + 7 * M.water, { magnesiumPpm: 1, sulfatePpm: 1 }),
+  epsomSalt: salt('Epsom salt', 'MgSO4·7H2O', M.magnesium + M.sulfate + 7 * M.water, {
+    magnesiumPpm: 1,
+    sulfatePpm: 1,
+  }),
   tableSalt: salt('Table salt', 'NaCl', M.sodium + M.chloride, { sodiumPpm: 1, chloridePpm: 1 }),
   bakingSoda: salt('Baking soda', 'NaHCO3', M.sodium + M.bicarbonate, { sodiumPpm: 1, bicarbonatePpm: 1 }),
   chalk: salt('Chalk', 'CaCO3', M.calciumCarbonate, { calciumPpm: 1, bicarbonatePpm: 2 }),

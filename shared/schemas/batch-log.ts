@@ -16,13 +16,25 @@ export const MEANING_LABELS: Record<SignatureMeaning, string> = {
 };
 
 /** Every kind an entry can have, including those only the server writes (sign_off). */
-export const LOG_ENTRY_KINDS = ['step', 'measurement', 'note', 'correction', 'sign_off', 'reading', 'action', 'packaging'] as const;
+export const LOG_ENTRY_KINDS = [
+  'step',
+  'measurement',
+  'note',
+  'correction',
+  'sign_off',
+  'reading',
+  'action',
+  'packaging',
+] as const;
 export type LogEntryKind = (typeof LOG_ENTRY_KINDS)[number];
 /** Brew-day kinds: after the head brewer signs the brew day off, only corrections may follow them. */
 export const BREW_DAY_KINDS: readonly string[] = ['step', 'measurement', 'note'];
 
 const num = (label: string, min: number, max: number) =>
-  z.number({ error: `${label}: enter a number` }).min(min, `${label} must be at least ${min}`).max(max, `${label} must be at most ${max}`);
+  z
+    .number({ error: `${label}: enter a number` })
+    .min(min, `${label} must be at least ${min}`)
+    .max(max, `${label} must be at most ${max}`);
 
 /**
  * What a measurement may be, in SI: the API refuses anything outside, and the tablet checks the same limits
@@ -34,7 +46,8 @@ export const MEASUREMENT_LIMITS = {
   gravitySg: { label: 'Gravity', min: 0.98, max: 1.2 },
   ph: { label: 'pH', min: 2, max: 10 },
 } as const;
-const limited = (key: keyof typeof MEASUREMENT_LIMITS) => num(MEASUREMENT_LIMITS[key].label, MEASUREMENT_LIMITS[key].min, MEASUREMENT_LIMITS[key].max);
+const limited = (key: keyof typeof MEASUREMENT_LIMITS) =>
+  num(MEASUREMENT_LIMITS[key].label, MEASUREMENT_LIMITS[key].min, MEASUREMENT_LIMITS[key].max);
 
 /** Measurements in SI (the screen converts from the brewery's units): °C, L, specific gravity, pH. */
 export const measurementsSchema = z
@@ -47,7 +60,12 @@ export const measurementsSchema = z
   .refine((m) => Object.keys(m).length > 0, 'Enter at least one measurement');
 export type Measurements = z.infer<typeof measurementsSchema>;
 
-const stepKey = z.string().trim().min(1).max(64).regex(/^[a-z0-9-]+$/, 'Step keys are lower-case letters, digits and dashes');
+const stepKey = z
+  .string()
+  .trim()
+  .min(1)
+  .max(64)
+  .regex(/^[a-z0-9-]+$/, 'Step keys are lower-case letters, digits and dashes');
 const noteText = z.string().trim().min(1, 'Write the note').max(2000, 'Use at most 2000 characters');
 const reason = z.string().trim().min(3, 'Say why (at least 3 characters)').max(500, 'Use at most 500 characters');
 const meaning = z.enum(['performed', 'verified'], { error: 'Meaning is performed or verified' }).default('performed');
@@ -88,7 +106,12 @@ export const correctionEntrySchema = z.strictObject({
 });
 
 /** The kinds a device may post. Areas add their schemas here. */
-export const LOG_ENTRY_INPUTS = [stepEntrySchema, measurementEntrySchema, noteEntrySchema, correctionEntrySchema] as const;
+export const LOG_ENTRY_INPUTS = [
+  stepEntrySchema,
+  measurementEntrySchema,
+  noteEntrySchema,
+  correctionEntrySchema,
+] as const;
 export const logEntryInputSchema = z.discriminatedUnion('kind', LOG_ENTRY_INPUTS);
 export type LogEntryInput = z.infer<typeof logEntryInputSchema>;
 
@@ -98,7 +121,9 @@ export type LogEntryInput = z.infer<typeof logEntryInputSchema>;
  */
 export const writeMetaSchema = z.strictObject({
   idempotencyKey: z.string().regex(/^[A-Za-z0-9_-]{16,64}$/, 'Idempotency-Key must be 16–64 letters, digits, - or _'),
-  capturedAt: z.iso.datetime({ offset: true, error: 'X-Captured-At must be an ISO date-time' }).transform((s) => new Date(s)),
+  capturedAt: z.iso
+    .datetime({ offset: true, error: 'X-Captured-At must be an ISO date-time' })
+    .transform((s) => new Date(s)),
   deviceId: z.string().regex(/^[A-Za-z0-9_-]{8,64}$/, 'X-Device-Id must be 8–64 letters, digits, - or _'),
 });
 export type WriteMeta = z.infer<typeof writeMetaSchema>;

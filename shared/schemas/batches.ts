@@ -3,7 +3,15 @@ import type { ComputedRecipe, EquipmentProfile, RecipeInput } from '../brewing';
 import type { ChainCheck, LogEntry, Signature } from './batch-log';
 import type { RecipeVersionContent } from './recipes';
 
-export const BATCH_STATUSES = ['planned', 'brewing', 'fermenting', 'conditioning', 'packaged', 'released', 'dumped'] as const;
+export const BATCH_STATUSES = [
+  'planned',
+  'brewing',
+  'fermenting',
+  'conditioning',
+  'packaged',
+  'released',
+  'dumped',
+] as const;
 export type BatchStatus = (typeof BATCH_STATUSES)[number];
 
 export const BATCH_STATUS_LABELS: Record<BatchStatus, string> = {
@@ -33,7 +41,11 @@ export const canMoveTo = (from: BatchStatus, to: BatchStatus) => STATUS_TRANSITI
 const DUMP_ROLES: readonly string[] = ['head_brewer'];
 export const mayDump = (role: string) => DUMP_ROLES.includes(role);
 
-const id = z.coerce.number({ error: 'Must be a number' }).int('Must be a whole number').positive('Must be positive').max(2147483647);
+const id = z.coerce
+  .number({ error: 'Must be a number' })
+  .int('Must be a whole number')
+  .positive('Must be positive')
+  .max(2147483647);
 export const batchIdParams = z.strictObject({ id });
 
 /** Planning a batch: a recipe version on an equipment profile, or at a typed volume (or both). */
@@ -51,7 +63,11 @@ export const createBatchSchema = z.strictObject({
 export type CreateBatchInput = z.infer<typeof createBatchSchema>;
 
 /** What the planning screen shows before the batch is planned. */
-export const planPreviewQuery = createBatchSchema.pick({ recipeVersionId: true, equipmentProfileId: true, batchVolumeL: true });
+export const planPreviewQuery = createBatchSchema.pick({
+  recipeVersionId: true,
+  equipmentProfileId: true,
+  batchVolumeL: true,
+});
 export type PlanPreviewQuery = z.infer<typeof planPreviewQuery>;
 export interface PlanPreview {
   recipeName: string;
@@ -74,7 +90,10 @@ export const changeStatusSchema = z
     status: z.enum(BATCH_STATUSES, { error: 'Choose a status' }),
     reason: z.string().trim().min(3, 'Say why (at least 3 characters)').max(500).optional(),
   })
-  .refine((v) => v.status !== 'dumped' || Boolean(v.reason), { message: 'Say why the batch was dumped', path: ['reason'] });
+  .refine((v) => v.status !== 'dumped' || Boolean(v.reason), {
+    message: 'Say why the batch was dumped',
+    path: ['reason'],
+  });
 export type ChangeStatusInput = z.infer<typeof changeStatusSchema>;
 
 /**

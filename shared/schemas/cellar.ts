@@ -8,7 +8,10 @@ import { timeZone } from './auth';
  */
 
 const num = (label: string, min: number, max: number) =>
-  z.number({ error: `${label}: enter a number` }).min(min, `${label} must be at least ${min}`).max(max, `${label} must be at most ${max}`);
+  z
+    .number({ error: `${label}: enter a number` })
+    .min(min, `${label} must be at least ${min}`)
+    .max(max, `${label} must be at most ${max}`);
 const note = z.string().trim().max(1000, 'Use at most 1000 characters').optional();
 
 export const TEMP_UNITS = ['c', 'f'] as const;
@@ -83,7 +86,10 @@ const GRAVITY_MAX = { sg: 1.2, plato: 35, brix: 40 } as const;
  * as points ("1015", "15" for 1.015) is met with the reading it probably meant.
  */
 function gravityOutOfRange(gravity: number, unit: GravityUnit): string | null {
-  if (unit !== 'sg') return gravity > GRAVITY_MAX[unit] ? `Gravity must be at most ${GRAVITY_MAX[unit]} ${unit === 'plato' ? '°P' : '°Bx'}` : null;
+  if (unit !== 'sg')
+    return gravity > GRAVITY_MAX[unit]
+      ? `Gravity must be at most ${GRAVITY_MAX[unit]} ${unit === 'plato' ? '°P' : '°Bx'}`
+      : null;
   if (gravity >= 0.98 && gravity <= GRAVITY_MAX.sg) return null;
   const meant = gravity >= 980 && gravity <= 1200 ? gravity / 1000 : null;
   return `A specific gravity is between 0.980 and 1.200${meant === null ? '' : `: did you mean ${meant.toFixed(3)}?`}`;
@@ -110,7 +116,11 @@ export const readingEntrySchema = z
   })
   .superRefine((r, ctx) => {
     if ((r.method === 'refractometer') !== (r.gravityUnit === 'brix')) {
-      ctx.addIssue({ code: 'custom', path: ['gravityUnit'], message: 'A refractometer reads °Brix; a hydrometer or probe reads SG or °P' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['gravityUnit'],
+        message: 'A refractometer reads °Brix; a hydrometer or probe reads SG or °P',
+      });
     }
     const gravityIssue = gravityOutOfRange(r.gravity, r.gravityUnit);
     if (gravityIssue) ctx.addIssue({ code: 'custom', path: ['gravity'], message: gravityIssue });
@@ -201,9 +211,17 @@ export function packageName(kind: (typeof PACKAGE_KINDS)[number], size: string |
   return `${size} mL ${kind}`;
 }
 
-const count = z.number({ error: 'Count: enter a whole number' }).int('Count must be a whole number').min(1, 'Count must be at least 1').max(100_000);
+const count = z
+  .number({ error: 'Count: enter a whole number' })
+  .int('Count must be a whole number')
+  .min(1, 'Count must be at least 1')
+  .max(100_000);
 export const packageLineSchema = z.discriminatedUnion('kind', [
-  z.strictObject({ kind: z.literal('keg'), size: z.enum(KEG_SIZE_IDS as [string, ...string[]], { error: 'Choose a keg size' }), count }),
+  z.strictObject({
+    kind: z.literal('keg'),
+    size: z.enum(KEG_SIZE_IDS as [string, ...string[]], { error: 'Choose a keg size' }),
+    count,
+  }),
   z.strictObject({ kind: z.enum(['can', 'bottle']), sizeMl: num('Container size (mL)', 50, 5000), count }),
 ]);
 export type PackageLineInput = z.infer<typeof packageLineSchema>;

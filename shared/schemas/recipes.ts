@@ -14,9 +14,14 @@ const num = (label: string, min: number, max: number) =>
     .min(min, `${label} must be at least ${min}`)
     .max(max, `${label} must be at most ${max}`);
 
-const name = (label: string, max = 80) => z.string().trim().min(1, `Enter ${label}`).max(max, `Use at most ${max} characters`);
+const name = (label: string, max = 80) =>
+  z.string().trim().min(1, `Enter ${label}`).max(max, `Use at most ${max} characters`);
 
-export const idParam = z.coerce.number({ error: 'Must be a number' }).int('Must be a whole number').positive('Must be positive').max(2147483647);
+export const idParam = z.coerce
+  .number({ error: 'Must be a number' })
+  .int('Must be a whole number')
+  .positive('Must be positive')
+  .max(2147483647);
 
 // ---------------------------------------------------------------- fermentables
 
@@ -37,12 +42,18 @@ const fermentableBase = {
 export const grainBillSchema = z.discriminatedUnion('mode', [
   z.strictObject({
     mode: z.literal('weight'),
-    items: z.array(z.strictObject({ ...fermentableBase, weightKg: num('Weight (kg)', 0.001, 20000) })).min(1, 'Add at least one fermentable').max(40),
+    items: z
+      .array(z.strictObject({ ...fermentableBase, weightKg: num('Weight (kg)', 0.001, 20000) }))
+      .min(1, 'Add at least one fermentable')
+      .max(40),
   }),
   z.strictObject({
     mode: z.literal('percent'),
     targetOg: num('Target OG', 1.001, 1.2),
-    items: z.array(z.strictObject({ ...fermentableBase, percent: num('Share (%)', 0.01, 100) })).min(1, 'Add at least one fermentable').max(40),
+    items: z
+      .array(z.strictObject({ ...fermentableBase, percent: num('Share (%)', 0.01, 100) }))
+      .min(1, 'Add at least one fermentable')
+      .max(40),
   }),
 ]);
 
@@ -74,7 +85,15 @@ export const hopSchema = z
 
 // ----------------------------------------------------------------------- water
 
-export const SALT_IDS = ['gypsum', 'calciumChlorideDihydrate', 'calciumChlorideAnhydrous', 'epsomSalt', 'tableSalt', 'bakingSoda', 'chalk'] as const;
+export const SALT_IDS = [
+  'gypsum',
+  'calciumChlorideDihydrate',
+  'calciumChlorideAnhydrous',
+  'epsomSalt',
+  'tableSalt',
+  'bakingSoda',
+  'chalk',
+] as const;
 
 export const SALT_LABELS: Record<(typeof SALT_IDS)[number], string> = {
   gypsum: 'Gypsum (CaSO₄·2H₂O)',
@@ -136,8 +155,26 @@ export const mashSchema = z.strictObject({
 
 // ----------------------------------------------------------- adjuncts & spices
 
-export const DOSE_BASES = ['lbPerUsGal', 'ozPerUsGal', 'kgPerHl', 'gPerHl', 'gPerL', 'tspPer5UsGal', 'mlPerHl', 'fixedPerBatch'] as const;
-export const ADJUNCT_CATEGORIES = ['fruit', 'vegetable', 'spice', 'herb', 'sugar', 'honey', 'lactose', 'other'] as const;
+export const DOSE_BASES = [
+  'lbPerUsGal',
+  'ozPerUsGal',
+  'kgPerHl',
+  'gPerHl',
+  'gPerL',
+  'tspPer5UsGal',
+  'mlPerHl',
+  'fixedPerBatch',
+] as const;
+export const ADJUNCT_CATEGORIES = [
+  'fruit',
+  'vegetable',
+  'spice',
+  'herb',
+  'sugar',
+  'honey',
+  'lactose',
+  'other',
+] as const;
 export const ADJUNCT_STAGES = ['mash', 'boil', 'whirlpool', 'fermenter', 'packaging'] as const;
 
 const doseRuleSchema = z
@@ -162,7 +199,8 @@ const additionBase = {
   howAdded: z.string().trim().max(200, 'Use at most 200 characters'),
 };
 
-const boilMinuteRequired = (a: { stage: string; boilMinutes?: number | undefined }) => a.stage !== 'boil' || a.boilMinutes !== undefined;
+const boilMinuteRequired = (a: { stage: string; boilMinutes?: number | undefined }) =>
+  a.stage !== 'boil' || a.boilMinutes !== undefined;
 
 /** Only a boil addition has a minute: one left over from before the stage changed is dropped, not saved or printed. */
 function withoutStaleMinute<T extends { stage: string; boilMinutes?: number | undefined }>(a: T): T {
@@ -172,12 +210,17 @@ function withoutStaleMinute<T extends { stage: string; boilMinutes?: number | un
 }
 
 /** A prepared adjunct: the dose rule plus what is done to it before it goes in. */
-export const adjunctSchema = z.strictObject({
-  ...additionBase,
-  preparation: z
-    .array(z.strictObject({ text: z.string().trim().min(1, 'Describe the step').max(300, 'Use at most 300 characters') }))
-    .max(12),
-}).refine(boilMinuteRequired, { path: ['boilMinutes'], message: 'A boil addition needs its minute' }).transform(withoutStaleMinute);
+export const adjunctSchema = z
+  .strictObject({
+    ...additionBase,
+    preparation: z
+      .array(
+        z.strictObject({ text: z.string().trim().min(1, 'Describe the step').max(300, 'Use at most 300 characters') }),
+      )
+      .max(12),
+  })
+  .refine(boilMinuteRequired, { path: ['boilMinutes'], message: 'A boil addition needs its minute' })
+  .transform(withoutStaleMinute);
 
 export const spiceSchema = z
   .strictObject(additionBase)
@@ -198,7 +241,10 @@ export const yeastSchema = z
     pitchTempC: num('Pitch temperature (°C)', 2, 35),
     pitchRateMillionCellsPerMlPerPlato: num('Pitch rate', 0.1, 3).optional(),
   })
-  .refine((y) => y.attenuationHighPct >= y.attenuationLowPct, { path: ['attenuationHighPct'], message: 'High must not be below low' });
+  .refine((y) => y.attenuationHighPct >= y.attenuationLowPct, {
+    path: ['attenuationHighPct'],
+    message: 'High must not be below low',
+  });
 
 export const fermentationSchema = z.strictObject({
   primaryTempC: num('Primary temperature (°C)', 2, 35),
@@ -264,14 +310,22 @@ export type SaveVersionInput = z.infer<typeof saveVersionSchema>;
 /** The target of a scale: another equipment profile, a typed batch volume, both, or neither (the version as written). */
 export const scaleQuerySchema = z.strictObject({
   equipmentProfileId: idParam.optional(),
-  batchVolumeL: z.coerce.number({ error: 'Batch volume: enter a number' }).min(1, 'Batch volume must be at least 1 L').max(20000, 'Batch volume must be at most 20000 L').optional(),
+  batchVolumeL: z.coerce
+    .number({ error: 'Batch volume: enter a number' })
+    .min(1, 'Batch volume must be at least 1 L')
+    .max(20000, 'Batch volume must be at most 20000 L')
+    .optional(),
 });
 export type ScaleTarget = z.infer<typeof scaleQuerySchema>;
 
 export const saveScaledSchema = z.strictObject({
   changeNote: versionBody.changeNote,
   equipmentProfileId: idParam.optional(),
-  batchVolumeL: z.number().min(1, 'Batch volume must be at least 1 L').max(20000, 'Batch volume must be at most 20000 L').optional(),
+  batchVolumeL: z
+    .number()
+    .min(1, 'Batch volume must be at least 1 L')
+    .max(20000, 'Batch volume must be at most 20000 L')
+    .optional(),
 });
 export type SaveScaledInput = z.infer<typeof saveScaledSchema>;
 
@@ -320,7 +374,15 @@ export const ingredientQuerySchema = z.strictObject({ kind: z.enum(INGREDIENT_KI
 
 /** The calculation view of a version: what computeRecipe and scaleRecipe take. */
 export function toRecipeInput(recipeName: string, content: RecipeVersionContent): RecipeInput {
-  const addition = ({ name, category, stage, boilMinutes, rule, level, sugarPct }: SpiceAddition | AdjunctPrep): AdjunctAddition => ({
+  const addition = ({
+    name,
+    category,
+    stage,
+    boilMinutes,
+    rule,
+    level,
+    sugarPct,
+  }: SpiceAddition | AdjunctPrep): AdjunctAddition => ({
     name,
     category,
     stage,
@@ -336,7 +398,9 @@ export function toRecipeInput(recipeName: string, content: RecipeVersionContent)
     yeast: {
       name: content.yeast.name,
       attenuationPct: content.yeast.attenuationPct,
-      ...(content.yeast.pitchRateMillionCellsPerMlPerPlato === undefined ? {} : { pitchRateMillionCellsPerMlPerPlato: content.yeast.pitchRateMillionCellsPerMlPerPlato }),
+      ...(content.yeast.pitchRateMillionCellsPerMlPerPlato === undefined
+        ? {}
+        : { pitchRateMillionCellsPerMlPerPlato: content.yeast.pitchRateMillionCellsPerMlPerPlato }),
     },
     mash: content.mash,
     ...(content.water ? { water: content.water } : {}),
@@ -354,7 +418,11 @@ export function equipmentAtVolume(profile: EquipmentInput, batchVolumeL: number)
  * The content with every hop written as a share of the target IBU given its solved weight on
  * this brewhouse; saved versions store the solved weights so lists, scaling and batches read them.
  */
-export function resolveHopShares(recipeName: string, content: RecipeVersionContent, equipment: EquipmentProfile): RecipeVersionContent {
+export function resolveHopShares(
+  recipeName: string,
+  content: RecipeVersionContent,
+  equipment: EquipmentProfile,
+): RecipeVersionContent {
   const shares = content.hops.map((h) => h.ibuSharePct);
   if (shares.every((s) => s === undefined)) return content;
   const solved = hopWeightsForIbuShares(toRecipeInput(recipeName, content), equipment, content.targets.ibu, shares);

@@ -84,7 +84,10 @@ export type ReleaseSheetInput = z.input<typeof releaseSheetSchema>;
 export type ReleaseSheet = z.infer<typeof releaseSheetSchema>;
 
 const gravity = (label: string) =>
-  z.number({ error: `${label}: enter a number` }).min(0.99, `${label} must be at least 0.990`).max(1.2, `${label} must be at most 1.200`);
+  z
+    .number({ error: `${label}: enter a number` })
+    .min(0.99, `${label} must be at least 0.990`)
+    .max(1.2, `${label} must be at most 1.200`);
 
 /** Releasing confirms the measured numbers the head brewer saw: if the log has changed since, the server refuses. */
 export const publishReleaseSchema = z.strictObject({
@@ -109,7 +112,8 @@ export const idParam = z.coerce.number({ error: 'Must be a number' }).int().posi
 export const RELEASE_STATES = ['draft', 'coming_soon', 'on_tap', 'off_tap'] as const;
 export type ReleaseState = (typeof RELEASE_STATES)[number];
 /** Released to the taproom at some point: on tap now, or off tap since (its numbers were frozen at release). */
-export const wasReleased = (state: ReleaseState | null | undefined): state is 'on_tap' | 'off_tap' => state === 'on_tap' || state === 'off_tap';
+export const wasReleased = (state: ReleaseState | null | undefined): state is 'on_tap' | 'off_tap' =>
+  state === 'on_tap' || state === 'off_tap';
 
 /** Final numbers: measured where the log has them, planned otherwise (and said so). */
 export interface FinalNumbers {

@@ -66,15 +66,28 @@ export const tastingNoteContentSchema = z.strictObject({
 export type TastingNoteContent = z.infer<typeof tastingNoteContentSchema>;
 
 /** What a taster sends. Author and time come from the server: a body naming them is refused. */
-export const tastingNoteInputSchema = z.strictObject({
-  /** Generated on the device: the same key sent twice records one note. */
-  idempotencyKey: z.string().trim().min(8).max(64).regex(/^[A-Za-z0-9_-]+$/, 'Letters, digits, - and _ only'),
-  content: tastingNoteContentSchema,
-  /** A correction points at the note it corrects and says why. */
-  correctsNoteId: z.number().int().positive().optional(),
-  reason: z.string().trim().min(3, 'Say why (at least 3 characters)').max(500).optional(),
-}).refine((v) => !v.correctsNoteId || Boolean(v.reason), { path: ['reason'], message: 'Say why this note corrects the other' })
-  .refine((v) => Boolean(v.correctsNoteId) || !v.reason, { path: ['reason'], message: 'A reason belongs to a correction' });
+export const tastingNoteInputSchema = z
+  .strictObject({
+    /** Generated on the device: the same key sent twice records one note. */
+    idempotencyKey: z
+      .string()
+      .trim()
+      .min(8)
+      .max(64)
+      .regex(/^[A-Za-z0-9_-]+$/, 'Letters, digits, - and _ only'),
+    content: tastingNoteContentSchema,
+    /** A correction points at the note it corrects and says why. */
+    correctsNoteId: z.number().int().positive().optional(),
+    reason: z.string().trim().min(3, 'Say why (at least 3 characters)').max(500).optional(),
+  })
+  .refine((v) => !v.correctsNoteId || Boolean(v.reason), {
+    path: ['reason'],
+    message: 'Say why this note corrects the other',
+  })
+  .refine((v) => Boolean(v.correctsNoteId) || !v.reason, {
+    path: ['reason'],
+    message: 'A reason belongs to a correction',
+  });
 export type TastingNoteInput = z.infer<typeof tastingNoteInputSchema>;
 
 export interface TastingNote {

@@ -17,7 +17,10 @@ class ErrorBoundary extends Component<{ children: ReactNode }, { error: Error | 
       <div role="alert" className="m-6 rounded-xl border-2 border-ember-600 bg-ember-100 p-6 text-ember-700">
         <p className="text-lg font-bold">Kettlewright hit a problem showing this page.</p>
         <p className="mt-1">Anything waiting to be sent is kept on this device. Reload the page to carry on.</p>
-        <button className="mt-4 min-h-touch rounded-lg bg-ember-600 px-4 font-semibold text-white" onClick={() => location.reload()}>
+        <button
+          className="mt-4 min-h-touch rounded-lg bg-ember-600 px-4 font-semibold text-white"
+          onClick={() => location.reload()}
+        >
           Reload
         </button>
       </div>

@@ -11,7 +11,8 @@ describe('page access', () => {
   });
 
   it('the taproom manager may open the taproom screens and not the head brewer’s', () => {
-    const roles = (path: string) => pageRoles([{ handle: undefined }, { handle: signedIn.find((r) => r.path === path)!.handle }]);
+    const roles = (path: string) =>
+      pageRoles([{ handle: undefined }, { handle: signedIn.find((r) => r.path === path)!.handle }]);
     expect(roles('taproom/board')).toContain('taproom_manager');
     expect(roles('team')).toEqual(['head_brewer']);
     expect(roles('batches/:batchId/tasting')).not.toContain('taproom_manager');

@@ -21,7 +21,9 @@ export function OutboxPanel({ group, timeZone }: { group: string; timeZone: stri
               <li key={i.idempotencyKey} className="flex justify-between gap-2 py-1" data-testid="waiting-item">
                 <span>
                   {i.label}
-                  {i.userId !== user?.id && <span className="block text-sm text-ink-500">Sent when {i.authorName} signs in</span>}
+                  {i.userId !== user?.id && (
+                    <span className="block text-sm text-ink-500">Sent when {i.authorName} signs in</span>
+                  )}
                 </span>
                 <span className="tabular-nums text-ink-500">{showTime(i.capturedAt, timeZone)}</span>
               </li>

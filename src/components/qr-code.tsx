@@ -14,7 +14,11 @@ export function QrCode({ path, label, size = 160 }: { path: string; label: strin
   }, [url, size]);
   return (
     <figure className="inline-flex flex-col items-center gap-1 rounded-lg border-2 border-ink-900 bg-white p-2">
-      {src ? <img src={src} width={size} height={size} alt={`QR code: ${label}`} /> : <div style={{ width: size, height: size }} />}
+      {src ? (
+        <img src={src} width={size} height={size} alt={`QR code: ${label}`} />
+      ) : (
+        <div style={{ width: size, height: size }} />
+      )}
       <figcaption className="text-center text-sm font-bold">{label}</figcaption>
     </figure>
   );

@@ -13,7 +13,12 @@ export class ApiError extends Error {
 
 type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
 
-async function request<T>(method: Method, path: string, body?: unknown, headers: Record<string, string> = {}): Promise<T> {
+async function request<T>(
+  method: Method,
+  path: string,
+  body?: unknown,
+  headers: Record<string, string> = {},
+): Promise<T> {
   let response: Response;
   try {
     response = await fetch(path, {
@@ -35,7 +40,8 @@ async function request<T>(method: Method, path: string, body?: unknown, headers:
   if (response.status === 204) return undefined as T;
   const data = await response.json().catch(() => null);
   if (!response.ok) {
-    const error = (data as { error?: { code?: string; message?: string; fields?: Record<string, string> } } | null)?.error;
+    const error = (data as { error?: { code?: string; message?: string; fields?: Record<string, string> } } | null)
+      ?.error;
     throw new ApiError(
       response.status,
       error?.code ?? 'error',
@@ -48,7 +54,8 @@ async function request<T>(method: Method, path: string, body?: unknown, headers:
 
 export const api = {
   get: <T>(path: string) => request<T>('GET', path),
-  post: <T>(path: string, body?: unknown, headers?: Record<string, string>) => request<T>('POST', path, body ?? {}, headers),
+  post: <T>(path: string, body?: unknown, headers?: Record<string, string>) =>
+    request<T>('POST', path, body ?? {}, headers),
   put: <T>(path: string, body?: unknown) => request<T>('PUT', path, body ?? {}),
   patch: <T>(path: string, body?: unknown) => request<T>('PATCH', path, body ?? {}),
   delete: <T>(path: string) => request<T>('DELETE', path),

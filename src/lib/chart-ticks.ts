@@ -13,7 +13,10 @@ const STEPS = [1, 2, 5, 10];
  * Round, evenly spaced ticks covering `values` widened by `pad` on each side, about `target` steps
  * apart (recharts' own ticks on a fixed domain split it evenly, which gave 1.009 / 1.024 / 1.039).
  */
-export function niceAxis(values: readonly (number | null | undefined)[], { pad = 0, target = 5 }: { pad?: number; target?: number } = {}): NiceAxis {
+export function niceAxis(
+  values: readonly (number | null | undefined)[],
+  { pad = 0, target = 5 }: { pad?: number; target?: number } = {},
+): NiceAxis {
   const finite = values.filter((v): v is number => typeof v === 'number' && Number.isFinite(v));
   let low = finite.length ? Math.min(...finite) - pad : 0;
   let high = finite.length ? Math.max(...finite) + pad : 1;

@@ -19,7 +19,8 @@ function scriptedServer(answers: SendResult['kind'][]) {
   const send = async (item: OutboxItem): Promise<SendResult> => {
     received.push({ label: item.label, key: item.idempotencyKey });
     const kind = answers.shift() ?? 'sent';
-    if (kind === 'retry' || kind === 'rejected') return { kind, message: kind === 'rejected' ? 'Temperature must be at most 110' : 'No connection' };
+    if (kind === 'retry' || kind === 'rejected')
+      return { kind, message: kind === 'rejected' ? 'Temperature must be at most 110' : 'No connection' };
     return { kind } as SendResult;
   };
   return { received, send };
@@ -65,14 +66,26 @@ describe('outbox', () => {
     await box.enqueue(write('good'));
     await box.flush();
     expect(store.items).toHaveLength(1);
-    expect(store.items[0]).toMatchObject({ label: 'bad', state: 'rejected', message: 'Temperature must be at most 110' });
+    expect(store.items[0]).toMatchObject({
+      label: 'bad',
+      state: 'rejected',
+      message: 'Temperature must be at most 110',
+    });
     await box.dismiss(store.items[0]!.idempotencyKey);
     expect(store.items).toEqual([]);
   });
 
   it('sends only the signed-in person’s items: another person’s wait for them', async () => {
     const store = memoryStore();
-    const item = (label: string, userId: number): OutboxItem => ({ ...write(label), authorName: 'someone', idempotencyKey: label, capturedAt: '2026-12-01T12:00:00Z', userId, state: 'waiting', attempts: 0 });
+    const item = (label: string, userId: number): OutboxItem => ({
+      ...write(label),
+      authorName: 'someone',
+      idempotencyKey: label,
+      capturedAt: '2026-12-01T12:00:00Z',
+      userId,
+      state: 'waiting',
+      attempts: 0,
+    });
     store.items = [item('by seven', 7), item('by eight', 8)];
     const server = scriptedServer([]);
     const box = createOutbox(store, server.send);
@@ -91,9 +104,29 @@ describe('sending one item', () => {
   afterEach(() => vi.unstubAllGlobals());
 
   it('keeps the fields a refusal names, so the waiting list says what to fix', async () => {
-    const refusal = { error: { code: 'invalid', message: 'Some fields need attention', fields: { 'measurements.tempC': 'Temperature (°C) must be at most 110' } } };
-    vi.stubGlobal('fetch', async () => new Response(JSON.stringify(refusal), { status: 400, headers: { 'content-type': 'application/json' } }));
-    const item = { url: '/api/batches/1/log', body: {}, label: 'Mash in', group: 'batch:1', idempotencyKey: 'k', capturedAt: new Date().toISOString() } as OutboxItem;
-    expect(await sendItem(item)).toEqual({ kind: 'rejected', message: 'Some fields need attention: Temperature (°C) must be at most 110' });
+    const refusal = {
+      error: {
+        code: 'invalid',
+        message: 'Some fields need attention',
+        fields: { 'measurements.tempC': 'Temperature (°C) must be at most 110' },
+      },
+    };
+    vi.stubGlobal(
+      'fetch',
+      async () =>
+        new Response(JSON.stringify(refusal), { status: 400, headers: { 'content-type': 'application/json' } }),
+    );
+    const item = {
+      url: '/api/batches/1/log',
+      body: {},
+      label: 'Mash in',
+      group: 'batch:1',
+      idempotencyKey: 'k',
+      capturedAt: new Date().toISOString(),
+    } as OutboxItem;
+    expect(await sendItem(item)).toEqual({
+      kind: 'rejected',
+      message: 'Some fields need attention: Temperature (°C) must be at most 110',
+    });
   });
 });

@@ -56,7 +56,11 @@ export function deviceId(): string {
   return id;
 }
 
-export type SendResult = { kind: 'sent' } | { kind: 'retry'; message: string } | { kind: 'signed-out' } | { kind: 'rejected'; message: string };
+export type SendResult =
+  | { kind: 'sent' }
+  | { kind: 'retry'; message: string }
+  | { kind: 'signed-out' }
+  | { kind: 'rejected'; message: string };
 
 /** Sends one item the way the server expects signed writes, and sorts the answer into what to do next. */
 export async function sendItem(item: OutboxItem): Promise<SendResult> {
@@ -79,7 +83,9 @@ export async function sendItem(item: OutboxItem): Promise<SendResult> {
     return { kind: 'retry', message: 'No connection' };
   }
   if (response.ok) return { kind: 'sent' };
-  const data = (await response.json().catch(() => null)) as { error?: { message?: string; fields?: Record<string, string> } } | null;
+  const data = (await response.json().catch(() => null)) as {
+    error?: { message?: string; fields?: Record<string, string> };
+  } | null;
   // A refusal names the fields at fault ("Some fields need attention: Temperature (°C) must be at most 110").
   const fields = Object.values(data?.error?.fields ?? {});
   const general = data?.error?.message ?? `The server answered ${response.status}`;
@@ -98,7 +104,10 @@ export interface OutboxSnapshot {
 }
 
 /** One outbox per page: holds the items in memory, mirrors them to the store, and sends them one at a time. */
-export function createOutbox(store: OutboxStore = idbStore, send: (item: OutboxItem) => Promise<SendResult> = sendItem) {
+export function createOutbox(
+  store: OutboxStore = idbStore,
+  send: (item: OutboxItem) => Promise<SendResult> = sendItem,
+) {
   let snapshot: OutboxSnapshot = { items: [], user: null, needsSignIn: false };
   const listeners = new Set<() => void>();
   const sentListeners = new Set<(item: OutboxItem) => void>();
@@ -169,7 +178,9 @@ export function createOutbox(store: OutboxStore = idbStore, send: (item: OutboxI
     load: reload,
     flush,
     /** Keeps a write on the device and tries to send it straight away. */
-    async enqueue(write: Pick<OutboxItem, 'url' | 'body' | 'label' | 'group'> & { capturedAt?: string }): Promise<OutboxItem> {
+    async enqueue(
+      write: Pick<OutboxItem, 'url' | 'body' | 'label' | 'group'> & { capturedAt?: string },
+    ): Promise<OutboxItem> {
       const user = snapshot.user;
       if (!user) throw new Error('The outbox has no signed-in person: call setUser() first');
       const item: OutboxItem = {
@@ -191,7 +202,8 @@ export function createOutbox(store: OutboxStore = idbStore, send: (item: OutboxI
       void flush();
     },
     /** Removes a rejected item the person has read (and re-entered if needed). */
-    dismiss: (idempotencyKey: string) => change((items) => items.filter((i) => i.idempotencyKey !== idempotencyKey || i.state !== 'rejected')),
+    dismiss: (idempotencyKey: string) =>
+      change((items) => items.filter((i) => i.idempotencyKey !== idempotencyKey || i.state !== 'rejected')),
     /** Drops the signed-in person's items (sign-out after they confirmed); other people's stay. */
     discardMine: () => change((items) => items.filter((i) => i.userId !== snapshot.user?.id)),
   };

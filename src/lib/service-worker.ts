@@ -2,7 +2,9 @@
 export function registerServiceWorker(): void {
   if (!import.meta.env.PROD || !('serviceWorker' in navigator)) return;
   window.addEventListener('load', () => {
-    navigator.serviceWorker.register('/sw.js').catch((error: unknown) => console.warn('Offline support is unavailable', error));
+    navigator.serviceWorker
+      .register('/sw.js')
+      .catch((error: unknown) => console.warn('Offline support is unavailable', error));
   });
 }
 

@@ -2,7 +2,20 @@
  * Display helpers: SI values (as stored) shown in the brewery's unit system.
  * Conversions come from shared/brewing; this file only chooses units and formats.
  */
-import { cToF, fToC, kgToLb, lbToKg, lToUsGal, usGalToL, gToOz, ozToG, lPerKgToQtPerLb, qtPerLbToLPerKg, roundForMeasuring, type MeasuredAmount } from '../../shared/brewing';
+import {
+  cToF,
+  fToC,
+  kgToLb,
+  lbToKg,
+  lToUsGal,
+  usGalToL,
+  gToOz,
+  ozToG,
+  lPerKgToQtPerLb,
+  qtPerLbToLPerKg,
+  roundForMeasuring,
+  type MeasuredAmount,
+} from '../../shared/brewing';
 import type { UnitSystem } from '../../shared/schemas/auth';
 
 // A batch or tank volume in words is shared with the server's messages (fermenter size).
@@ -46,7 +59,8 @@ export function limitInUnits(message: string, system: UnitSystem, quantity: Quan
   const si = UNITS.metric[quantity].unit;
   const escaped = si.replace(/[/]/g, '\\/');
   const limit = new RegExp(`^(.+?) \\(${escaped}\\) must be at (most|least) (-?\\d+(?:\\.\\d+)?)$`).exec(message);
-  if (limit) return `${limit[1]} must be at ${limit[2]} ${Number(u.toDisplay(Number(limit[3])).toFixed(u.decimals))} ${u.unit}`;
+  if (limit)
+    return `${limit[1]} must be at ${limit[2]} ${Number(u.toDisplay(Number(limit[3])).toFixed(u.decimals))} ${u.unit}`;
   return message.replace(` (${si}): `, ': ');
 }
 
@@ -76,6 +90,7 @@ export function showGrain(system: UnitSystem, kg: number): string {
 /** Hop and salt weights: oz and g side by side in US breweries (scales are often gram scales). */
 export function showSmallWeight(system: UnitSystem, grams: number): string {
   const m = roundForMeasuring({ value: grams / 1000, unit: 'kg' }, system);
-  if (system === 'us' && m.unit !== 'g') return `${showMeasured(m)} (${grams < 1000 ? grams.toFixed(0) + ' g' : (grams / 1000).toFixed(2) + ' kg'})`;
+  if (system === 'us' && m.unit !== 'g')
+    return `${showMeasured(m)} (${grams < 1000 ? grams.toFixed(0) + ' g' : (grams / 1000).toFixed(2) + ' kg'})`;
   return showMeasured(m);
 }

@@ -57,7 +57,12 @@ describe('sign-in and sign-out', () => {
     const user = await newUser(t);
     const res = await signIn(testApp(), user.email, GOOD_PASSWORD);
     expect(res.status).toBe(200);
-    expect(res.body).toMatchObject({ id: user.id, email: user.email, role: 'assistant_brewer', brewery: { id: t.brewery.id } });
+    expect(res.body).toMatchObject({
+      id: user.id,
+      email: user.email,
+      role: 'assistant_brewer',
+      brewery: { id: t.brewery.id },
+    });
     expect(res.body).not.toHaveProperty('passwordHash');
     const setCookie = sessionSetCookie(res);
     expect(setCookie).toBeDefined();
@@ -101,7 +106,13 @@ describe('sign-in and sign-out', () => {
       userId: null,
       expires,
       data: JSON.stringify({
-        cookie: { originalMaxAge: SESSION_IDLE_MS, expires: expires.toISOString(), httpOnly: true, path: '/', sameSite: 'lax' },
+        cookie: {
+          originalMaxAge: SESSION_IDLE_MS,
+          expires: expires.toISOString(),
+          httpOnly: true,
+          path: '/',
+          sameSite: 'lax',
+        },
       }),
     });
     const signature = createHmac('sha256', env.SESSION_SECRET).update(plantedSid).digest('base64').replace(/=+$/, '');
@@ -161,7 +172,10 @@ describe('sessions are stored in MariaDB', () => {
       const row = (await Session.findByPk(sid))!;
       const data = JSON.parse(row.data!);
       expect(data.signedInAt).toBeGreaterThan(Date.now() - 60_000);
-      await Session.update({ data: JSON.stringify({ ...data, signedInAt: Date.now() - hours * 3_600_000 }) }, { where: { sid } });
+      await Session.update(
+        { data: JSON.stringify({ ...data, signedInAt: Date.now() - hours * 3_600_000 }) },
+        { where: { sid } },
+      );
       return () => Session.update({ data: row.data }, { where: { sid } });
     };
 
@@ -183,7 +197,10 @@ describe('sessions are stored in MariaDB', () => {
       const row = (await Session.findByPk(sid))!;
       const data = JSON.parse(row.data!);
       expect(data.lastSeenAt).toBeGreaterThan(Date.now() - 60_000);
-      await Session.update({ data: JSON.stringify({ ...data, lastSeenAt: Date.now() - hours * 3_600_000 }) }, { where: { sid } });
+      await Session.update(
+        { data: JSON.stringify({ ...data, lastSeenAt: Date.now() - hours * 3_600_000 }) },
+        { where: { sid } },
+      );
     };
     await lastSeenHoursAgo(7);
     expect((await request(testApp()).get('/api/auth/me').set('Cookie', cookieOf(setCookie))).status).toBe(200);
@@ -210,7 +227,9 @@ describe('sign-in is audited', () => {
     const email = `guess.${randomBytes(4).toString('hex')}@test.example`;
     const res = await signIn(fresh, email, 'wrong-password-here');
     expect(res.status).toBe(401);
-    const rows = await AuditEvent.findAll({ where: { action: 'sign-in.failure', requestId: res.headers['x-request-id'] } });
+    const rows = await AuditEvent.findAll({
+      where: { action: 'sign-in.failure', requestId: res.headers['x-request-id'] },
+    });
     expect(rows).toHaveLength(1);
     expect(rows[0].userId).toBeNull();
     expect(rows[0].ip).toMatch(/127\.0\.0\.1|::1/);
@@ -222,11 +241,17 @@ describe('changing a password', () => {
   it('ends the person’s other sessions but keeps the current one; the old password stops working', async () => {
     const user = await newUser(t);
     const here = agent();
-    expect((await here.post('/api/auth/sign-in').send({ email: user.email, password: GOOD_PASSWORD })).status).toBe(200);
+    expect((await here.post('/api/auth/sign-in').send({ email: user.email, password: GOOD_PASSWORD })).status).toBe(
+      200,
+    );
     const elsewhere = agent();
-    expect((await elsewhere.post('/api/auth/sign-in').send({ email: user.email, password: GOOD_PASSWORD })).status).toBe(200);
+    expect(
+      (await elsewhere.post('/api/auth/sign-in').send({ email: user.email, password: GOOD_PASSWORD })).status,
+    ).toBe(200);
 
-    const res = await here.post('/api/auth/password').send({ currentPassword: GOOD_PASSWORD, newPassword: NEW_PASSWORD });
+    const res = await here
+      .post('/api/auth/password')
+      .send({ currentPassword: GOOD_PASSWORD, newPassword: NEW_PASSWORD });
     expect(res.status).toBe(204);
 
     expect((await here.get('/api/auth/me')).status).toBe(200);
@@ -242,7 +267,9 @@ describe('changing a password', () => {
     const user = await newUser(t);
     const here = agent();
     await here.post('/api/auth/sign-in').send({ email: user.email, password: GOOD_PASSWORD });
-    const res = await here.post('/api/auth/password').send({ currentPassword: 'not-my-password', newPassword: NEW_PASSWORD });
+    const res = await here
+      .post('/api/auth/password')
+      .send({ currentPassword: 'not-my-password', newPassword: NEW_PASSWORD });
     expect(res.status).toBe(400);
     expect(res.body.error.fields).toHaveProperty('currentPassword');
     await user.reload();
@@ -254,7 +281,11 @@ describe('password reset by e-mail', () => {
   /** The token of the one reset mail sent to this address (it is sent after the request has answered). */
   async function resetToken(email: string): Promise<string> {
     const mail = await mailCatcher().waitFor((m) => m.to.includes(email) && m.subject.includes('Reset'));
-    expect(mailCatcher().messages().filter((m) => m.to.includes(email))).toHaveLength(1);
+    expect(
+      mailCatcher()
+        .messages()
+        .filter((m) => m.to.includes(email)),
+    ).toHaveLength(1);
     const match = mail.text.match(/\/reset\/([A-Za-z0-9_-]+)/);
     expect(match).not.toBeNull();
     return match![1];
@@ -263,7 +294,9 @@ describe('password reset by e-mail', () => {
   it('request → mail → new password: the old one fails, the new one works, other sessions end, the link works once', async () => {
     const user = await newUser(t);
     const signedIn = agent();
-    expect((await signedIn.post('/api/auth/sign-in').send({ email: user.email, password: GOOD_PASSWORD })).status).toBe(200);
+    expect((await signedIn.post('/api/auth/sign-in').send({ email: user.email, password: GOOD_PASSWORD })).status).toBe(
+      200,
+    );
 
     const asked = await agent().post('/api/auth/reset-request').send({ email: user.email });
     expect(asked.status).toBe(202);
@@ -284,7 +317,9 @@ describe('password reset by e-mail', () => {
     // The page checks the link when it opens and says why it cannot be used, before a password is typed.
     const opened = await agent().get(`/api/auth/reset/${token}`);
     expect(opened.status).toBe(404);
-    expect(opened.body.error.message).toBe('This reset link has been used or has expired. Ask for a new one from the sign-in page.');
+    expect(opened.body.error.message).toBe(
+      'This reset link has been used or has expired. Ask for a new one from the sign-in page.',
+    );
     expect(await AuditEvent.findOne({ where: { action: 'password.reset', userId: user.id } })).not.toBeNull();
   });
 
@@ -308,12 +343,18 @@ describe('password reset by e-mail', () => {
     expect(await Invite.count({ where: { email: stranger } })).toBe(0);
     expect(hashToken(await resetToken(known.email))).toBe(stored[0].tokenHash);
     // The stranger's request was answered first, so a mail for it would have been on its way before the known one's.
-    expect(mailCatcher().messages().filter((m) => m.to.includes(stranger))).toHaveLength(0);
+    expect(
+      mailCatcher()
+        .messages()
+        .filter((m) => m.to.includes(stranger)),
+    ).toHaveLength(0);
   });
 
   it('a reset mail the mail server refuses still answers 202, keeps the link, and is logged as an error', async () => {
     const logged: Array<Record<string, unknown>> = [];
-    const app = createApp({ logger: pino({ level: 'error' }, { write: (line: string) => logged.push(JSON.parse(line)) }) });
+    const app = createApp({
+      logger: pino({ level: 'error' }, { write: (line: string) => logged.push(JSON.parse(line)) }),
+    });
     const user = await newUser(t);
     await user.update({ email: `person.${randomBytes(4).toString('hex')}@${UNDELIVERABLE_DOMAIN}` });
 
@@ -321,13 +362,18 @@ describe('password reset by e-mail', () => {
     expect(res.status).toBe(202);
     expect(await Invite.count({ where: { email: user.email, purpose: 'reset' } })).toBe(1);
     await vi.waitFor(
-      () => expect(logged).toContainEqual(expect.objectContaining({ msg: 'e-mail could not be sent', subject: 'Reset your Kettlewright password' })),
+      () =>
+        expect(logged).toContainEqual(
+          expect.objectContaining({ msg: 'e-mail could not be sent', subject: 'Reset your Kettlewright password' }),
+        ),
       { timeout: 5000 },
     );
   });
 
   it('a made-up reset token answers 404', async () => {
-    const res = await agent().post(`/api/auth/reset/${randomBytes(32).toString('base64url')}`).send({ password: NEW_PASSWORD });
+    const res = await agent()
+      .post(`/api/auth/reset/${randomBytes(32).toString('base64url')}`)
+      .send({ password: NEW_PASSWORD });
     expect(res.status).toBe(404);
   });
 });

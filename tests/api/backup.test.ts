@@ -18,7 +18,12 @@ const dir = mkdtempSync(path.join(tmpdir(), 'kw-backup-'));
 async function withConnection<T>(database: string, fn: (conn: mariadb.Connection) => Promise<T>): Promise<T> {
   const c = connectionParts(urlForDatabase(ownerUrl, database));
   const conn = await mariadb.createConnection({
-    host: c.host, port: Number(c.port), user: c.user, password: c.password, database, bigIntAsNumber: true,
+    host: c.host,
+    port: Number(c.port),
+    user: c.user,
+    password: c.password,
+    database,
+    bigIntAsNumber: true,
   });
   try {
     return await fn(conn);
@@ -37,10 +42,12 @@ interface Fingerprint {
 /** The triggers, row count and CHECKSUM TABLE of every table, and the newest hash of each batch's log. */
 async function fingerprint(database: string): Promise<Fingerprint> {
   return withConnection(database, async (conn) => {
-    const tables = (await conn.query<{ name: string }[]>(
-      'SELECT TABLE_NAME AS name FROM information_schema.TABLES WHERE TABLE_SCHEMA = ? ORDER BY TABLE_NAME',
-      [database],
-    )).map((t) => t.name);
+    const tables = (
+      await conn.query<{ name: string }[]>(
+        'SELECT TABLE_NAME AS name FROM information_schema.TABLES WHERE TABLE_SCHEMA = ? ORDER BY TABLE_NAME',
+        [database],
+      )
+    ).map((t) => t.name);
     const rows: Record<string, number> = {};
     const checksums: Record<string, number> = {};
     for (const table of tables) {
@@ -54,10 +61,12 @@ async function fingerprint(database: string): Promise<Fingerprint> {
       `SELECT e.batch_id AS batchId, e.hash FROM batch_log_entries e
         WHERE e.sequence = (SELECT MAX(x.sequence) FROM batch_log_entries x WHERE x.batch_id = e.batch_id)`,
     );
-    const triggers = (await conn.query<{ name: string }[]>(
-      'SELECT TRIGGER_NAME AS name FROM information_schema.TRIGGERS WHERE TRIGGER_SCHEMA = ? ORDER BY TRIGGER_NAME',
-      [database],
-    )).map((t) => t.name);
+    const triggers = (
+      await conn.query<{ name: string }[]>(
+        'SELECT TRIGGER_NAME AS name FROM information_schema.TRIGGERS WHERE TRIGGER_SCHEMA = ? ORDER BY TRIGGER_NAME',
+        [database],
+      )
+    ).map((t) => t.name);
     return { triggers, rows, checksums, chainHeads: Object.fromEntries(heads.map((h) => [String(h.batchId), h.hash])) };
   });
 }
@@ -73,7 +82,10 @@ describe('backup and restore', () => {
     await t.as.head_brewer.patch('/api/brewery').send({ name: 'Backup Test Brewing — “quoted” ünïcode 🍺' });
     const batch = await plannedBatch({ id: t.users.head_brewer.id, breweryId: t.brewery.id });
     for (const text of ['Mash in at 152 °F', 'Stuck sparge — added rice hulls', 'Knockout, 10.2 bbl']) {
-      const res = await t.as.assistant_brewer.post(`/api/batches/${batch.id}/log`).set(writeHeaders()).send({ kind: 'note', text });
+      const res = await t.as.assistant_brewer
+        .post(`/api/batches/${batch.id}/log`)
+        .set(writeHeaders())
+        .send({ kind: 'note', text });
       expect(res.status).toBe(201);
     }
 

@@ -47,7 +47,10 @@ function toJsonText(value: unknown): string {
 
 /** Deep nesting, written straight as JSON text (building it as objects would overflow the printers' recursion). */
 class Deep extends Raw {
-  constructor(readonly depth: number, readonly asArray: boolean) {
+  constructor(
+    readonly depth: number,
+    readonly asArray: boolean,
+  ) {
     super(asArray ? `${'['.repeat(depth)}1${']'.repeat(depth)}` : `${'{"a":'.repeat(depth)}1${'}'.repeat(depth)}`);
   }
   [fc.toStringMethod](): string {
@@ -57,9 +60,29 @@ class Deep extends Raw {
 
 const hugeString = fc.constantFrom('x'.repeat(100_000), '🍺'.repeat(20_000), 'é'.repeat(300), 'y'.repeat(1_100_000));
 const trickyString = fc.constantFrom(
-  '', ' ', '\u0000', '\uD800', 'a\uDFFFb', '\u202Eevil', 'ﷺ', 'Z͑ͫ̓ͪ̂ͫ̽͏̴̙̤̞͉͚̯̞̠͍', '1e400', 'NaN', 'Infinity', '-1', '0x10',
-  '2026-13-45', '2026-02-30T25:61:00Z', "'; DROP TABLE batches; --", '<script>alert(1)</script>', '../../etc/passwd',
-  '__proto__', 'null', 'true', '{}', '[]',
+  '',
+  ' ',
+  '\u0000',
+  '\uD800',
+  'a\uDFFFb',
+  '\u202Eevil',
+  'ﷺ',
+  'Z͑ͫ̓ͪ̂ͫ̽͏̴̙̤̞͉͚̯̞̠͍',
+  '1e400',
+  'NaN',
+  'Infinity',
+  '-1',
+  '0x10',
+  '2026-13-45',
+  '2026-02-30T25:61:00Z',
+  "'; DROP TABLE batches; --",
+  '<script>alert(1)</script>',
+  '../../etc/passwd',
+  '__proto__',
+  'null',
+  'true',
+  '{}',
+  '[]',
 );
 const number = fc.oneof(
   fc.integer(),
@@ -98,8 +121,10 @@ function fieldNames(schema: z.ZodType | undefined): string[] {
   const walk = (node: unknown, depth: number) => {
     if (!node || typeof node !== 'object' || depth > 3) return;
     const n = node as Record<string, unknown>;
-    if (n.properties && typeof n.properties === 'object' && depth === 0) for (const k of Object.keys(n.properties)) names.add(k);
-    for (const key of ['anyOf', 'oneOf', 'allOf']) if (Array.isArray(n[key])) for (const s of n[key] as unknown[]) walk(s, depth);
+    if (n.properties && typeof n.properties === 'object' && depth === 0)
+      for (const k of Object.keys(n.properties)) names.add(k);
+    for (const key of ['anyOf', 'oneOf', 'allOf'])
+      if (Array.isArray(n[key])) for (const s of n[key] as unknown[]) walk(s, depth);
   };
   walk(json, 0);
   return [...names];
@@ -132,7 +157,9 @@ function bodyArbitrary(route: RouteEntry, validBody: unknown): fc.Arbitrary<unkn
   if (names.length) {
     const field = fc.constantFrom(...names);
     shapes.push(
-      fc.array(fc.tuple(field, nasty), { minLength: 1, maxLength: names.length }).map((pairs) => Object.fromEntries(pairs)),
+      fc
+        .array(fc.tuple(field, nasty), { minLength: 1, maxLength: names.length })
+        .map((pairs) => Object.fromEntries(pairs)),
       fc.tuple(fc.array(fc.tuple(field, nasty), { maxLength: 3 }), unknownKey, nasty).map(([pairs, k, v]) => ({
         ...Object.fromEntries(pairs),
         [k]: v,
@@ -173,7 +200,9 @@ async function dbState(): Promise<DbState> {
     `CHECKSUM TABLE ${checksummed.map((t) => `\`${t}\``).join(', ')}`,
     { type: QueryTypes.SELECT },
   );
-  const [audit] = await sequelize.query<{ id: number | null }>('SELECT MAX(id) AS id FROM audit_events', { type: QueryTypes.SELECT });
+  const [audit] = await sequelize.query<{ id: number | null }>('SELECT MAX(id) AS id FROM audit_events', {
+    type: QueryTypes.SELECT,
+  });
   return {
     counts: Object.fromEntries(counts.map((r) => [r.t, Number(r.n)])),
     checksums: Object.fromEntries(sums.map((r) => [r.Table.split('.').pop()!, Number(r.Checksum)])),
@@ -202,7 +231,9 @@ beforeAll(async () => {
 });
 
 afterAll(() => {
-  const statuses = Object.entries(tally.byStatus).map(([s, n]) => `${s}×${n}`).join(' ');
+  const statuses = Object.entries(tally.byStatus)
+    .map(([s, n]) => `${s}×${n}`)
+    .join(' ');
   console.log(
     `bad input: ${tally.requests} requests over ${writeRoutes.length} write routes — ${tally.refused} refused, ` +
       `${tally.accepted} accepted (valid by chance), ${tally.failed} answered 5xx [${statuses}]`,
@@ -216,68 +247,73 @@ describe('bad input never answers 5xx and a refusal writes nothing', () => {
 
   const perRoute = Math.max(6, Math.ceil(TOTAL_RUNS / Math.max(1, writeRoutes.length)));
 
-  it.each(writeRoutes.map((r) => [routeKey(r), r] as const))('%s', { timeout: 30_000 + perRoute * 400 }, async (key, route) => {
-    const params = pathParams(route.path);
-    const own: Record<string, number> = {};
-    for (const p of params) if (ID_MAKERS[p]) own[p] = await ownId(p);
-    const validBody = VALID_BODIES[key]?.(own);
+  it.each(writeRoutes.map((r) => [routeKey(r), r] as const))(
+    '%s',
+    { timeout: 30_000 + perRoute * 400 },
+    async (key, route) => {
+      const params = pathParams(route.path);
+      const own: Record<string, number> = {};
+      for (const p of params) if (ID_MAKERS[p]) own[p] = await ownId(p);
+      const validBody = VALID_BODIES[key]?.(own);
 
-    const paramArb = fc.record(
-      Object.fromEntries(
-        params.map((p) => [p, own[p] !== undefined ? fc.oneof(fc.constant(String(own[p])), junkParam) : junkParam]),
-      ) as Record<string, fc.Arbitrary<string>>,
-    );
-    const callerArb = fc.constantFrom<Caller>(...ROLES, 'signed-out');
+      const paramArb = fc.record(
+        Object.fromEntries(
+          params.map((p) => [p, own[p] !== undefined ? fc.oneof(fc.constant(String(own[p])), junkParam) : junkParam]),
+        ) as Record<string, fc.Arbitrary<string>>,
+      );
+      const callerArb = fc.constantFrom<Caller>(...ROLES, 'signed-out');
 
-    await fc.assert(
-      fc.asyncProperty(callerArb, paramArb, bodyArbitrary(route, validBody), async (caller, paramValues, body) => {
-        const text = toJsonText(body);
-        let parsed: unknown;
-        let parses = true;
-        try {
-          parsed = JSON.parse(text);
-        } catch {
-          parses = false;
-        }
-        const decodedParams = Object.fromEntries(Object.entries(paramValues).map(([k, v]) => [k, safeDecode(v)]));
-        const inputValid =
-          parses &&
-          text.length < 1_000_000 &&
-          (!route.schemas.params || route.schemas.params.safeParse(decodedParams).success) &&
-          (!route.schemas.body || route.schemas.body.safeParse(parsed).success);
-
-        const before = await dbState();
-        const url = route.path.replace(/:(\w+)/g, (_, n: string) => paramValues[n]!);
-        const res = await callers[caller][route.method](url).set('content-type', 'application/json').send(text);
-        tally.requests += 1;
-        tally.byStatus[res.status] = (tally.byStatus[res.status] ?? 0) + 1;
-
-        const context = `${caller} ${route.method.toUpperCase()} ${url.slice(0, 120)} body ${text.slice(0, 200)} → ${res.status} ${JSON.stringify(res.body).slice(0, 300)}`;
-        if (res.status >= 500) tally.failed += 1;
-        expect(res.status, context).toBeLessThan(500);
-        if (!inputValid) expect(res.status, `invalid input was accepted: ${context}`).toBeGreaterThanOrEqual(400);
-        if (res.status >= 400) {
-          tally.refused += 1;
-          expect(res.body?.error?.message, `a refusal says why: ${context}`).toEqual(expect.any(String));
-          const after = await dbState();
-          const { audit_events: auditBefore, ...countsBefore } = before.counts;
-          const { audit_events: auditAfter, ...countsAfter } = after.counts;
-          expect(countsAfter, `a refused request changed row counts: ${context}`).toEqual(countsBefore);
-          expect(after.checksums, `a refused request changed a table: ${context}`).toEqual(before.checksums);
-          if (auditAfter !== auditBefore) {
-            const added = await sequelize.query<{ action: string }>('SELECT action FROM audit_events WHERE id > ?', {
-              replacements: [before.lastAuditId],
-              type: QueryTypes.SELECT,
-            });
-            for (const { action } of added) expect(REFUSAL_AUDIT_ACTIONS.has(action), `audit '${action}' after ${context}`).toBe(true);
+      await fc.assert(
+        fc.asyncProperty(callerArb, paramArb, bodyArbitrary(route, validBody), async (caller, paramValues, body) => {
+          const text = toJsonText(body);
+          let parsed: unknown;
+          let parses = true;
+          try {
+            parsed = JSON.parse(text);
+          } catch {
+            parses = false;
           }
-        } else {
-          tally.accepted += 1;
-        }
-      }),
-      { numRuns: perRoute, endOnFailure: true },
-    );
-  });
+          const decodedParams = Object.fromEntries(Object.entries(paramValues).map(([k, v]) => [k, safeDecode(v)]));
+          const inputValid =
+            parses &&
+            text.length < 1_000_000 &&
+            (!route.schemas.params || route.schemas.params.safeParse(decodedParams).success) &&
+            (!route.schemas.body || route.schemas.body.safeParse(parsed).success);
+
+          const before = await dbState();
+          const url = route.path.replace(/:(\w+)/g, (_, n: string) => paramValues[n]!);
+          const res = await callers[caller][route.method](url).set('content-type', 'application/json').send(text);
+          tally.requests += 1;
+          tally.byStatus[res.status] = (tally.byStatus[res.status] ?? 0) + 1;
+
+          const context = `${caller} ${route.method.toUpperCase()} ${url.slice(0, 120)} body ${text.slice(0, 200)} → ${res.status} ${JSON.stringify(res.body).slice(0, 300)}`;
+          if (res.status >= 500) tally.failed += 1;
+          expect(res.status, context).toBeLessThan(500);
+          if (!inputValid) expect(res.status, `invalid input was accepted: ${context}`).toBeGreaterThanOrEqual(400);
+          if (res.status >= 400) {
+            tally.refused += 1;
+            expect(res.body?.error?.message, `a refusal says why: ${context}`).toEqual(expect.any(String));
+            const after = await dbState();
+            const { audit_events: auditBefore, ...countsBefore } = before.counts;
+            const { audit_events: auditAfter, ...countsAfter } = after.counts;
+            expect(countsAfter, `a refused request changed row counts: ${context}`).toEqual(countsBefore);
+            expect(after.checksums, `a refused request changed a table: ${context}`).toEqual(before.checksums);
+            if (auditAfter !== auditBefore) {
+              const added = await sequelize.query<{ action: string }>('SELECT action FROM audit_events WHERE id > ?', {
+                replacements: [before.lastAuditId],
+                type: QueryTypes.SELECT,
+              });
+              for (const { action } of added)
+                expect(REFUSAL_AUDIT_ACTIONS.has(action), `audit '${action}' after ${context}`).toBe(true);
+            }
+          } else {
+            tally.accepted += 1;
+          }
+        }),
+        { numRuns: perRoute, endOnFailure: true },
+      );
+    },
+  );
 });
 
 function safeDecode(v: string): string {

@@ -19,14 +19,24 @@ beforeAll(async () => {
   // The demo recipes and brewhouses, written into this test brewery.
   await sequelize.transaction((transaction) => seedRecipes({ brewery: t.brewery, users: t.users, transaction }));
   version = (await RecipeVersion.findOne({ where: { breweryId: t.brewery.id }, order: [['id', 'ASC']] }))!;
-  bigProfile = (await EquipmentProfile.findAll({ where: { breweryId: t.brewery.id }, order: [['batchVolumeL', 'DESC']] }))[0]!;
+  bigProfile = (
+    await EquipmentProfile.findAll({ where: { breweryId: t.brewery.id }, order: [['batchVolumeL', 'DESC']] })
+  )[0]!;
 });
 
 describe('planning a batch', () => {
   it('freezes the scaled plan into the batch and the recipe version, numbered per brewery and year', async () => {
-    const res = await t.as.head_brewer.post('/api/batches').send({ recipeVersionId: version.id, equipmentProfileId: bigProfile.id, brewDate: '2026-12-03' });
+    const res = await t.as.head_brewer
+      .post('/api/batches')
+      .send({ recipeVersionId: version.id, equipmentProfileId: bigProfile.id, brewDate: '2026-12-03' });
     expect(res.status).toBe(201);
-    expect(res.body).toMatchObject({ number: '2026-001', status: 'planned', recipeVersionId: version.id, entries: [], signatures: [] });
+    expect(res.body).toMatchObject({
+      number: '2026-001',
+      status: 'planned',
+      recipeVersionId: version.id,
+      entries: [],
+      signatures: [],
+    });
     // The frozen plan's numbers are shared/brewing's for its own recipe and equipment.
     const { plan } = res.body;
     expect(plan.equipment.batchVolumeL).toBeCloseTo(bigProfile.batchVolumeL, 6);
@@ -34,38 +44,76 @@ describe('planning a batch', () => {
     expect(res.body.plannedOg).toBeCloseTo(plan.computed.og, 12);
     expect((await RecipeVersion.findByPk(version.id))!.frozenAt).not.toBeNull();
 
-    const second = await t.as.head_brewer.post('/api/batches').send({ recipeVersionId: version.id, batchVolumeL: 500, brewDate: '2026-12-09' });
+    const second = await t.as.head_brewer
+      .post('/api/batches')
+      .send({ recipeVersionId: version.id, batchVolumeL: 500, brewDate: '2026-12-09' });
     expect(second.body.number).toBe('2026-002');
     expect(second.body.plan.equipment.batchVolumeL).toBe(500);
-    const nextYear = await t.as.head_brewer.post('/api/batches').send({ recipeVersionId: version.id, batchVolumeL: 500, brewDate: '2027-01-04' });
+    const nextYear = await t.as.head_brewer
+      .post('/api/batches')
+      .send({ recipeVersionId: version.id, batchVolumeL: 500, brewDate: '2027-01-04' });
     expect(nextYear.body.number).toBe('2027-001');
   });
 
   it('puts the batch into the chosen fermenter; a fermenter holding a batch answers 409', async () => {
-    const fv = await Vessel.create({ breweryId: t.brewery.id, name: 'FV-test', type: 'fermenter', capacityL: 1400, ratedPressureKpa: 103, status: 'clean', currentBatchId: null });
-    const first = await t.as.head_brewer.post('/api/batches').send({ recipeVersionId: version.id, brewDate: '2026-12-11', fermenterId: fv.id });
+    const fv = await Vessel.create({
+      breweryId: t.brewery.id,
+      name: 'FV-test',
+      type: 'fermenter',
+      capacityL: 1400,
+      ratedPressureKpa: 103,
+      status: 'clean',
+      currentBatchId: null,
+    });
+    const first = await t.as.head_brewer
+      .post('/api/batches')
+      .send({ recipeVersionId: version.id, brewDate: '2026-12-11', fermenterId: fv.id });
     expect(first.body.vessel).toEqual({ id: fv.id, name: 'FV-test' });
-    const second = await t.as.head_brewer.post('/api/batches').send({ recipeVersionId: version.id, brewDate: '2026-12-12', fermenterId: fv.id });
+    const second = await t.as.head_brewer
+      .post('/api/batches')
+      .send({ recipeVersionId: version.id, brewDate: '2026-12-12', fermenterId: fv.id });
     expect(second.status).toBe(409);
     expect(second.body.error.message).toMatch(/FV-test already holds batch/);
   });
 
   it('refuses a fermenter smaller than the batch, when planning and when assigning (422), and accepts one still to be cleaned', async () => {
     // 1 US bbl = 117.348 L (27 CFR 25.11). The test brewery is a US brewery, as the demo is.
-    const small = await Vessel.create({ breweryId: t.brewery.id, name: 'FV-small', type: 'fermenter', capacityL: usBblToL(3.5), ratedPressureKpa: 103, status: 'clean', currentBatchId: null });
-    const dirty = await Vessel.create({ breweryId: t.brewery.id, name: 'FV-dirty', type: 'fermenter', capacityL: usBblToL(20), ratedPressureKpa: 103, status: 'needs_cleaning', currentBatchId: null });
+    const small = await Vessel.create({
+      breweryId: t.brewery.id,
+      name: 'FV-small',
+      type: 'fermenter',
+      capacityL: usBblToL(3.5),
+      ratedPressureKpa: 103,
+      status: 'clean',
+      currentBatchId: null,
+    });
+    const dirty = await Vessel.create({
+      breweryId: t.brewery.id,
+      name: 'FV-dirty',
+      type: 'fermenter',
+      capacityL: usBblToL(20),
+      ratedPressureKpa: 103,
+      status: 'needs_cleaning',
+      currentBatchId: null,
+    });
     const tenBbl = { recipeVersionId: version.id, batchVolumeL: usBblToL(10), brewDate: '2026-12-14' };
     const refused = await t.as.head_brewer.post('/api/batches').send({ ...tenBbl, fermenterId: small.id });
     expect(refused.status).toBe(422);
-    expect(refused.body.error.message).toMatch(/^FV-small holds (3\.5 bbl|350 L), but this batch runs (10\.0 bbl|11\.7 hL) into the fermenter at knockout\. Choose a larger fermenter\.$/);
+    expect(refused.body.error.message).toMatch(
+      /^FV-small holds (3\.5 bbl|350 L), but this batch runs (10\.0 bbl|11\.7 hL) into the fermenter at knockout\. Choose a larger fermenter\.$/,
+    );
     expect((await Vessel.findByPk(small.id))!.currentBatchId).toBeNull();
 
     const planned = await t.as.head_brewer.post('/api/batches').send(tenBbl);
     expect(planned.status).toBe(201);
-    const assign = await t.as.assistant_brewer.put(`/api/batches/${planned.body.id}/vessel`).send({ vesselId: small.id });
+    const assign = await t.as.assistant_brewer
+      .put(`/api/batches/${planned.body.id}/vessel`)
+      .send({ vesselId: small.id });
     expect(assign.status).toBe(422);
     expect(assign.body.error.message).toMatch(/^FV-small holds/);
-    const intoDirty = await t.as.assistant_brewer.put(`/api/batches/${planned.body.id}/vessel`).send({ vesselId: dirty.id });
+    const intoDirty = await t.as.assistant_brewer
+      .put(`/api/batches/${planned.body.id}/vessel`)
+      .send({ vesselId: dirty.id });
     expect(intoDirty.status).toBe(200);
   });
 
@@ -75,26 +123,43 @@ describe('planning a batch', () => {
     expect(res.body).toMatchObject({ versionNumber: version.number, batchVolumeL: 500, fermenterFillL: 500 });
     expect(res.body.recipeName).toEqual(expect.any(String));
     expect(res.body.equipmentName).toEqual(expect.any(String));
-    expect((await t.as.assistant_brewer.get(`/api/batches/plan-preview?recipeVersionId=${version.id}`)).status).toBe(403);
-    expect((await other.as.head_brewer.get(`/api/batches/plan-preview?recipeVersionId=${version.id}`)).status).toBe(404);
+    expect((await t.as.assistant_brewer.get(`/api/batches/plan-preview?recipeVersionId=${version.id}`)).status).toBe(
+      403,
+    );
+    expect((await other.as.head_brewer.get(`/api/batches/plan-preview?recipeVersionId=${version.id}`)).status).toBe(
+      404,
+    );
   });
 
   it('lets only the head brewer dump a batch (403 for the assistant); other moves stay open to both', async () => {
-    const planned = await t.as.head_brewer.post('/api/batches').send({ recipeVersionId: version.id, brewDate: '2026-12-15' });
+    const planned = await t.as.head_brewer
+      .post('/api/batches')
+      .send({ recipeVersionId: version.id, brewDate: '2026-12-15' });
     const id = planned.body.id as number;
-    const refused = await t.as.assistant_brewer.post(`/api/batches/${id}/status`).send({ status: 'dumped', reason: 'Infected' });
+    const refused = await t.as.assistant_brewer
+      .post(`/api/batches/${id}/status`)
+      .send({ status: 'dumped', reason: 'Infected' });
     expect(refused.status).toBe(403);
     expect(refused.body.error.message).toMatch(/^Only the head brewer can dump a batch/);
-    expect((await t.as.assistant_brewer.post(`/api/batches/${id}/status`).send({ status: 'brewing' })).status).toBe(200);
-    const dumped = await t.as.head_brewer.post(`/api/batches/${id}/status`).send({ status: 'dumped', reason: 'Infected' });
+    expect((await t.as.assistant_brewer.post(`/api/batches/${id}/status`).send({ status: 'brewing' })).status).toBe(
+      200,
+    );
+    const dumped = await t.as.head_brewer
+      .post(`/api/batches/${id}/status`)
+      .send({ status: 'dumped', reason: 'Infected' });
     expect(dumped.status).toBe(200);
     expect(dumped.body.status).toBe('dumped');
     // Another brewery's batch stays a 404, whoever asks.
-    expect((await other.as.assistant_brewer.post(`/api/batches/${id}/status`).send({ status: 'dumped', reason: 'Infected' })).status).toBe(404);
+    expect(
+      (await other.as.assistant_brewer.post(`/api/batches/${id}/status`).send({ status: 'dumped', reason: 'Infected' }))
+        .status,
+    ).toBe(404);
   });
 
   it('later changes to the recipe never change a planned batch', async () => {
-    const planned = await t.as.head_brewer.post('/api/batches').send({ recipeVersionId: version.id, brewDate: '2026-12-10' });
+    const planned = await t.as.head_brewer
+      .post('/api/batches')
+      .send({ recipeVersionId: version.id, brewDate: '2026-12-10' });
     const before = planned.body.plan;
     const content = structuredClone(version.content);
     content.targets.batchVolumeL *= 2;
@@ -104,10 +169,18 @@ describe('planning a batch', () => {
   });
 
   it('refuses another brewery’s recipe version (404) and bad input (400 with field messages)', async () => {
-    expect((await other.as.head_brewer.post('/api/batches').send({ recipeVersionId: version.id, brewDate: '2026-12-03' })).status).toBe(404);
-    const bad = await t.as.head_brewer.post('/api/batches').send({ recipeVersionId: version.id, batchVolumeL: -3, brewDate: 'someday' });
+    expect(
+      (await other.as.head_brewer.post('/api/batches').send({ recipeVersionId: version.id, brewDate: '2026-12-03' }))
+        .status,
+    ).toBe(404);
+    const bad = await t.as.head_brewer
+      .post('/api/batches')
+      .send({ recipeVersionId: version.id, batchVolumeL: -3, brewDate: 'someday' });
     expect(bad.status).toBe(400);
-    expect(bad.body.error.fields).toMatchObject({ batchVolumeL: expect.stringMatching(/at least 1 L/), brewDate: expect.any(String) });
+    expect(bad.body.error.fields).toMatchObject({
+      batchVolumeL: expect.stringMatching(/at least 1 L/),
+      brewDate: expect.any(String),
+    });
   });
 });
 
@@ -117,7 +190,8 @@ describe('the batch list', () => {
     const actor = { id: u.users.head_brewer.id, breweryId: u.brewery.id };
     const older = await plannedBatch(actor, '2026-10-01');
     const newer = await plannedBatch(actor, '2026-10-02');
-    const log = (batchId: number, body: object) => u.as.assistant_brewer.post(`/api/batches/${batchId}/log`).set(writeHeaders()).send(body);
+    const log = (batchId: number, body: object) =>
+      u.as.assistant_brewer.post(`/api/batches/${batchId}/log`).set(writeHeaders()).send(body);
     const listed = async (query = '') => {
       const res = await u.as.assistant_brewer.get(`/api/batches${query}`);
       expect(res.status).toBe(200);
@@ -133,13 +207,24 @@ describe('the batch list', () => {
     ]);
     expect(first.items[0]!.plannedOg).toBe(newer.plannedOg);
 
-    const mashIn = await log(older.id, { kind: 'step', stepKey: 'mash-in', label: 'Mash in', measurements: { tempC: 66 } });
-    const knockout = await log(older.id, { kind: 'step', stepKey: 'knockout-end', label: 'Knockout end', measurements: { gravitySg: 1.061, volumeL: 38 } });
+    const mashIn = await log(older.id, {
+      kind: 'step',
+      stepKey: 'mash-in',
+      label: 'Mash in',
+      measurements: { tempC: 66 },
+    });
+    const knockout = await log(older.id, {
+      kind: 'step',
+      stepKey: 'knockout-end',
+      label: 'Knockout end',
+      measurements: { gravitySg: 1.061, volumeL: 38 },
+    });
     expect(knockout.status).toBe(201);
     expect(await ogOf(older.id)).toBe(1.061);
     expect(await ogOf(newer.id)).toBeNull();
 
-    const correct = (id: number, measurements: object) => log(older.id, { kind: 'correction', correctsEntryId: id, reason: 'Refractometer re-read', measurements });
+    const correct = (id: number, measurements: object) =>
+      log(older.id, { kind: 'correction', correctsEntryId: id, reason: 'Refractometer re-read', measurements });
     expect((await correct(knockout.body.id, { gravitySg: 1.058 })).status).toBe(201);
     expect(await ogOf(older.id)).toBe(1.058);
     // A correction of the volume alone, or of another entry, leaves the OG as corrected.
@@ -149,12 +234,19 @@ describe('the batch list', () => {
     // The batch's own page says the same.
     expect((await u.as.head_brewer.get(`/api/batches/${older.id}`)).body.actuals.og.actual).toBe(1.058);
     // A later knockout reading is the one shown.
-    await log(older.id, { kind: 'measurement', stepKey: 'knockout-end', label: 'Knockout end, re-measured', measurements: { gravitySg: 1.06 } });
+    await log(older.id, {
+      kind: 'measurement',
+      stepKey: 'knockout-end',
+      label: 'Knockout end, re-measured',
+      measurements: { gravitySg: 1.06 },
+    });
     expect(await ogOf(older.id)).toBe(1.06);
 
     expect((await listed('?status=brewing')).items.map((i) => i.id)).toEqual([older.id]);
     expect(await listed('?page=2')).toMatchObject({ items: [], total: 2, page: 2 });
     // Another brewery sees none of them.
-    expect((await other.as.head_brewer.get('/api/batches')).body.items.map((i: { id: number }) => i.id)).not.toContain(older.id);
+    expect((await other.as.head_brewer.get('/api/batches')).body.items.map((i: { id: number }) => i.id)).not.toContain(
+      older.id,
+    );
   });
 });

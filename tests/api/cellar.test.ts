@@ -29,7 +29,10 @@ const reading = (gravity: number, gravityUnit: 'sg' | 'plato' = 'sg') => ({
 });
 
 function postReading(batchId: number, body: object, capturedAt?: Date) {
-  return t.as.assistant_brewer.post(`/api/cellar/batches/${batchId}/readings`).set(writeHeaders({ capturedAt })).send(body);
+  return t.as.assistant_brewer
+    .post(`/api/cellar/batches/${batchId}/readings`)
+    .set(writeHeaders({ capturedAt }))
+    .send(body);
 }
 
 async function cellarView(batchId: number): Promise<BatchCellarView> {
@@ -38,7 +41,9 @@ async function cellarView(batchId: number): Promise<BatchCellarView> {
   return res.body;
 }
 
-async function vessel(body: Partial<{ name: string; type: string; capacity: number; ratedPressure: number }>): Promise<VesselView> {
+async function vessel(
+  body: Partial<{ name: string; type: string; capacity: number; ratedPressure: number }>,
+): Promise<VesselView> {
   const res = await t.as.head_brewer.post('/api/vessels').send({
     name: `Tank ${Math.random().toString(36).slice(2, 7)}`,
     type: 'bright_tank',
@@ -74,7 +79,10 @@ describe('gravity readings', () => {
     expect(b.sg).toBeCloseTo(platoToSg(10), 12);
     expect(b.plato).toBeCloseTo(10, 9);
 
-    const entries = await BatchLogEntry.findAll({ where: { batchId: batch.id, kind: 'reading' }, order: [['sequence', 'ASC']] });
+    const entries = await BatchLogEntry.findAll({
+      where: { batchId: batch.id, kind: 'reading' },
+      order: [['sequence', 'ASC']],
+    });
     expect(entries.map((e) => Number(e.id))).toEqual([a.logEntryId, b.logEntryId]);
     expect(entries[1]!.data).toMatchObject({ gravity: 10, gravityUnit: 'plato', method: 'hydrometer' });
   });
@@ -82,8 +90,14 @@ describe('gravity readings', () => {
   it('answers a repeated send with the first reading, and refuses a reading on a planned batch', async () => {
     const batch = await knockedOutBatch();
     const headers = writeHeaders();
-    const first = await t.as.assistant_brewer.post(`/api/cellar/batches/${batch.id}/readings`).set(headers).send(reading(1.048));
-    const again = await t.as.assistant_brewer.post(`/api/cellar/batches/${batch.id}/readings`).set(headers).send(reading(1.048));
+    const first = await t.as.assistant_brewer
+      .post(`/api/cellar/batches/${batch.id}/readings`)
+      .set(headers)
+      .send(reading(1.048));
+    const again = await t.as.assistant_brewer
+      .post(`/api/cellar/batches/${batch.id}/readings`)
+      .set(headers)
+      .send(reading(1.048));
     expect(again.status).toBe(201);
     expect(again.body.id).toBe(first.body.id);
     expect(await GravityReading.count({ where: { batchId: batch.id } })).toBe(1);
@@ -96,7 +110,12 @@ describe('gravity readings', () => {
 
   it('corrects a refractometer reading for wort and alcohol with the original reading (Terrill 2011 cubic, see shared/brewing)', async () => {
     const batch = await knockedOutBatch();
-    const res = await postReading(batch.id, { ...reading(8.2), method: 'refractometer', gravityUnit: 'brix', originalBrix: 13.5 });
+    const res = await postReading(batch.id, {
+      ...reading(8.2),
+      method: 'refractometer',
+      gravityUnit: 'brix',
+      originalBrix: 13.5,
+    });
     expect(res.status).toBe(201);
     expect(res.body.sg).toBeCloseTo(refractometerBeerSg(13.5, 8.2), 12);
     expect(res.body).toMatchObject({ enteredValue: 8.2, enteredUnit: 'brix', method: 'refractometer' });
@@ -107,14 +126,20 @@ describe('gravity readings', () => {
     const bad = await postReading(batch.id, { ...reading(1.05), method: 'refractometer' });
     expect(bad.status).toBe(400);
     expect(bad.body.error.fields.gravityUnit).toMatch(/°Brix/);
-    const taproom = await t.as.taproom_manager.post(`/api/cellar/batches/${batch.id}/readings`).set(writeHeaders()).send(reading(1.05));
+    const taproom = await t.as.taproom_manager
+      .post(`/api/cellar/batches/${batch.id}/readings`)
+      .set(writeHeaders())
+      .send(reading(1.05));
     expect(taproom.status).toBe(403);
   });
 });
 
 describe('correcting a reading', () => {
   const correct = (batchId: number, body: object) =>
-    t.as.assistant_brewer.post(`/api/batches/${batchId}/log`).set(writeHeaders()).send({ kind: 'correction', meaning: 'performed', ...body });
+    t.as.assistant_brewer
+      .post(`/api/batches/${batchId}/log`)
+      .set(writeHeaders())
+      .send({ kind: 'correction', meaning: 'performed', ...body });
 
   it('replaces the values a correction gives, keeps the rest and the original entry, and the release FG follows', async () => {
     const batch = await knockedOutBatch();
@@ -125,18 +150,36 @@ describe('correcting a reading', () => {
     const typo = await postReading(batch.id, reading(1.1), takenAt); // 1.100 typed for 1.010
     expect(typo.status).toBe(201);
 
-    const first = await correct(batch.id, { correctsEntryId: typo.body.logEntryId, reason: 'Typed 1.100 for 1.010', measurements: { gravitySg: 1.01 } });
+    const first = await correct(batch.id, {
+      correctsEntryId: typo.body.logEntryId,
+      reason: 'Typed 1.100 for 1.010',
+      measurements: { gravitySg: 1.01 },
+    });
     expect(first.status).toBe(201);
     let view = await cellarView(batch.id);
     expect(view.readings.map((r) => r.sg)).toEqual([1.05, 1.02, 1.01]);
-    expect(view.readings[2]).toMatchObject({ sg: 1.01, tempC: 19, corrected: true, logEntryId: first.body.id, takenAt: takenAt.toISOString(), method: 'hydrometer' });
+    expect(view.readings[2]).toMatchObject({
+      sg: 1.01,
+      tempC: 19,
+      corrected: true,
+      logEntryId: first.body.id,
+      takenAt: takenAt.toISOString(),
+      method: 'hydrometer',
+    });
     expect(view.readings[0]!.corrected).toBe(false);
 
     // A second correction (of the correction) changes only the temperature; the corrected gravity stays.
-    const second = await correct(batch.id, { correctsEntryId: first.body.id, reason: 'Thermometer read 20 °C', measurements: { tempC: 20 } });
+    const second = await correct(batch.id, {
+      correctsEntryId: first.body.id,
+      reason: 'Thermometer read 20 °C',
+      measurements: { tempC: 20 },
+    });
     expect(second.status).toBe(201);
     // A correction without values of the first reading is a remark: the reading stands.
-    const remark = await correct(batch.id, { correctsEntryId: view.readings[0]!.logEntryId, reason: 'Sample drawn from the racking arm' });
+    const remark = await correct(batch.id, {
+      correctsEntryId: view.readings[0]!.logEntryId,
+      reason: 'Sample drawn from the racking arm',
+    });
     expect(remark.status).toBe(201);
     view = await cellarView(batch.id);
     expect(view.readings.map((r) => [r.sg, r.tempC])).toEqual([
@@ -145,7 +188,15 @@ describe('correcting a reading', () => {
       [1.01, 20],
     ]);
     // A correction of that remark with a value reaches back to the reading it was about.
-    expect((await correct(batch.id, { correctsEntryId: remark.body.id, reason: 'Re-read from the fermenter', measurements: { gravitySg: 1.049 } })).status).toBe(201);
+    expect(
+      (
+        await correct(batch.id, {
+          correctsEntryId: remark.body.id,
+          reason: 'Re-read from the fermenter',
+          measurements: { gravitySg: 1.049 },
+        })
+      ).status,
+    ).toBe(201);
     expect((await cellarView(batch.id)).readings.map((r) => r.sg)).toEqual([1.049, 1.02, 1.01]);
 
     // Nothing was changed in place: the three readings' entries and first rows are all still there.
@@ -158,22 +209,37 @@ describe('correcting a reading', () => {
 
 describe('importing a logging probe file', () => {
   const options = { delimiter: ',', gravityUnit: 'sg', tempUnit: 'f', timeZone: 'America/Halifax' };
-  const rows = ['time,gravity,temp', '2026-11-20 08:00,1.052,66.0', '2026-11-20 14:00,1.049,66.2', '2026-11-20 20:00,1.045,66.4', '2026-11-21 02:00,1.041,66.5', '2026-11-21 08:00,1.037,66.3'];
+  const rows = [
+    'time,gravity,temp',
+    '2026-11-20 08:00,1.052,66.0',
+    '2026-11-20 14:00,1.049,66.2',
+    '2026-11-20 20:00,1.045,66.4',
+    '2026-11-21 02:00,1.041,66.5',
+    '2026-11-21 08:00,1.037,66.3',
+  ];
 
   it('writes nothing when one row in the middle is malformed, and names the row', async () => {
     const batch = await knockedOutBatch();
     const broken = [...rows.slice(0, 3), '2026-11-20 20:00,1.O45,66.4', ...rows.slice(4)].join('\n');
-    const preview = await t.as.assistant_brewer.post(`/api/cellar/batches/${batch.id}/readings/preview`).send({ ...options, csv: broken });
+    const preview = await t.as.assistant_brewer
+      .post(`/api/cellar/batches/${batch.id}/readings/preview`)
+      .send({ ...options, csv: broken });
     expect(preview.status).toBe(200);
     expect((preview.body as ProbeImportResult).rows.map((r) => r.status)).toEqual(['ok', 'ok', 'error', 'ok', 'ok']);
 
-    const res = await t.as.assistant_brewer.post(`/api/cellar/batches/${batch.id}/readings/import`).set(writeHeaders()).send({ ...options, csv: broken });
+    const res = await t.as.assistant_brewer
+      .post(`/api/cellar/batches/${batch.id}/readings/import`)
+      .set(writeHeaders())
+      .send({ ...options, csv: broken });
     expect(res.status).toBe(400);
     expect(res.body.error.fields).toEqual({ 'line.4': 'Gravity "1.O45" is not a number.' });
     expect(await GravityReading.count({ where: { batchId: batch.id } })).toBe(0);
     expect(await BatchLogEntry.count({ where: { batchId: batch.id, kind: 'reading' } })).toBe(0);
 
-    const fixed = await t.as.assistant_brewer.post(`/api/cellar/batches/${batch.id}/readings/import`).set(writeHeaders()).send({ ...options, csv: rows.join('\n') });
+    const fixed = await t.as.assistant_brewer
+      .post(`/api/cellar/batches/${batch.id}/readings/import`)
+      .set(writeHeaders())
+      .send({ ...options, csv: rows.join('\n') });
     expect(fixed.status).toBe(201);
     expect(fixed.body).toMatchObject({ imported: true, toImport: 5, duplicates: 0, errors: 0 });
     const view = await cellarView(batch.id);
@@ -185,10 +251,16 @@ describe('importing a logging probe file', () => {
 
   it('skips rows at a time already stored or repeated in the file, and counts them', async () => {
     const batch = await knockedOutBatch();
-    const first = await t.as.assistant_brewer.post(`/api/cellar/batches/${batch.id}/readings/import`).set(writeHeaders()).send({ ...options, csv: rows.slice(0, 4).join('\n') });
+    const first = await t.as.assistant_brewer
+      .post(`/api/cellar/batches/${batch.id}/readings/import`)
+      .set(writeHeaders())
+      .send({ ...options, csv: rows.slice(0, 4).join('\n') });
     expect(first.body).toMatchObject({ toImport: 3, duplicates: 0 });
     const overlapping = [rows[0], rows[2], rows[3], rows[4], rows[4], rows[5]].join('\n');
-    const second = await t.as.assistant_brewer.post(`/api/cellar/batches/${batch.id}/readings/import`).set(writeHeaders()).send({ ...options, csv: overlapping });
+    const second = await t.as.assistant_brewer
+      .post(`/api/cellar/batches/${batch.id}/readings/import`)
+      .set(writeHeaders())
+      .send({ ...options, csv: overlapping });
     expect(second.status).toBe(201);
     expect(second.body).toMatchObject({ imported: true, toImport: 2, duplicates: 3, errors: 0 });
     expect(await GravityReading.count({ where: { batchId: batch.id } })).toBe(5);
@@ -200,30 +272,62 @@ describe('importing a long probe file', () => {
     const batch = await knockedOutBatch();
     const start = Date.parse('2026-11-01T00:00:00Z');
     const lines = ['time,gravity,temp'];
-    for (let i = 0; i < 1200; i++) lines.push(`${new Date(start + i * 15 * 60_000).toISOString().slice(0, 16).replace('T', ' ')},${(1.06 - i * 0.00004).toFixed(5)},19.5`);
+    for (let i = 0; i < 1200; i++)
+      lines.push(
+        `${new Date(start + i * 15 * 60_000).toISOString().slice(0, 16).replace('T', ' ')},${(1.06 - i * 0.00004).toFixed(5)},19.5`,
+      );
     const body = { delimiter: ',', gravityUnit: 'sg', tempUnit: 'c', timeZone: 'UTC', csv: lines.join('\n') };
     const headers = writeHeaders();
-    const res = await t.as.assistant_brewer.post(`/api/cellar/batches/${batch.id}/readings/import`).set(headers).send(body);
+    const res = await t.as.assistant_brewer
+      .post(`/api/cellar/batches/${batch.id}/readings/import`)
+      .set(headers)
+      .send(body);
     expect(res.status).toBe(201);
     expect(res.body).toMatchObject({ imported: true, toImport: 1200, duplicates: 0, errors: 0 });
 
-    const entries = await BatchLogEntry.findAll({ where: { batchId: batch.id, kind: 'reading' }, order: [['sequence', 'ASC']] });
+    const entries = await BatchLogEntry.findAll({
+      where: { batchId: batch.id, kind: 'reading' },
+      order: [['sequence', 'ASC']],
+    });
     expect(entries).toHaveLength(1200);
     expect(entries.map((e) => Number(e.sequence))).toEqual(entries.map((_, i) => i + 1));
-    expect((await t.as.head_brewer.get(`/api/batches/${batch.id}/log/verify`)).body).toMatchObject({ ok: true, checked: 1200 });
+    expect((await t.as.head_brewer.get(`/api/batches/${batch.id}/log/verify`)).body).toMatchObject({
+      ok: true,
+      checked: 1200,
+    });
     const ids = entries.map((e) => e.id);
-    expect(await AuditEvent.count({ where: { action: 'batch-log.append', breweryId: t.brewery.id, userId: t.users.assistant_brewer.id, detail: { batchId: batch.id } } })).toBe(1200);
+    expect(
+      await AuditEvent.count({
+        where: {
+          action: 'batch-log.append',
+          breweryId: t.brewery.id,
+          userId: t.users.assistant_brewer.id,
+          detail: { batchId: batch.id },
+        },
+      }),
+    ).toBe(1200);
     expect(await IdempotencyKey.count({ where: { resultId: ids } })).toBe(1200);
     const view = await cellarView(batch.id);
     expect(view.readings).toHaveLength(1200);
-    expect(view.readings[1199]).toMatchObject({ takenAt: new Date(start + 1199 * 15 * 60_000).toISOString(), sg: Number((1.06 - 1199 * 0.00004).toFixed(5)), tempC: 19.5, method: 'probe' });
+    expect(view.readings[1199]).toMatchObject({
+      takenAt: new Date(start + 1199 * 15 * 60_000).toISOString(),
+      sg: Number((1.06 - 1199 * 0.00004).toFixed(5)),
+      tempC: 19.5,
+      method: 'probe',
+    });
     expect(view.batch.status).toBe('fermenting');
 
-    const again = await t.as.assistant_brewer.post(`/api/cellar/batches/${batch.id}/readings/import`).set(headers).send(body);
+    const again = await t.as.assistant_brewer
+      .post(`/api/cellar/batches/${batch.id}/readings/import`)
+      .set(headers)
+      .send(body);
     expect(again.body).toMatchObject({ toImport: 0, duplicates: 1200 });
     // The same key with rows at other times is a different request: nothing more is saved.
     const shifted = lines.map((l, i) => (i === 0 ? l : l.replace('2026-11-', '2026-10-')));
-    const reused = await t.as.assistant_brewer.post(`/api/cellar/batches/${batch.id}/readings/import`).set(headers).send({ ...body, csv: shifted.join('\n') });
+    const reused = await t.as.assistant_brewer
+      .post(`/api/cellar/batches/${batch.id}/readings/import`)
+      .set(headers)
+      .send({ ...body, csv: shifted.join('\n') });
     expect(reused.status).toBe(422);
     expect(await BatchLogEntry.count({ where: { batchId: batch.id } })).toBe(1200);
   });
@@ -265,7 +369,9 @@ describe('vessels', () => {
     const fill = async () => {
       const batch = await knockedOutBatch();
       const tank = await vessel({ type: 'fermenter' });
-      expect((await t.as.head_brewer.put(`/api/batches/${batch.id}/vessel`).send({ vesselId: tank.id })).status).toBe(200);
+      expect((await t.as.head_brewer.put(`/api/batches/${batch.id}/vessel`).send({ vesselId: tank.id })).status).toBe(
+        200,
+      );
       await postReading(batch.id, reading(1.04));
     };
     await fill();
@@ -277,12 +383,23 @@ describe('vessels', () => {
 
   it('stores capacity and rated pressure in SI from bbl and psi, and refuses a duplicate name', async () => {
     const v = await vessel({ name: 'FV-psi', type: 'fermenter', capacity: 10, ratedPressure: 15 } as never);
-    const res = await t.as.head_brewer.post('/api/vessels').send({ name: 'FV-bbl', type: 'fermenter', capacity: 10, capacityUnit: 'bbl', ratedPressure: 15, pressureUnit: 'psi' });
+    const res = await t.as.head_brewer
+      .post('/api/vessels')
+      .send({
+        name: 'FV-bbl',
+        type: 'fermenter',
+        capacity: 10,
+        capacityUnit: 'bbl',
+        ratedPressure: 15,
+        pressureUnit: 'psi',
+      });
     expect(res.status).toBe(201);
     // 1 US beer barrel = 31 US gal (27 CFR 25.11) = 117.347765 L; 1 psi = 6.894757 kPa (NIST SP 811).
     expect(res.body.capacityL).toBeCloseTo(1173.47765, 4);
     expect(res.body.ratedPressureKpa).toBeCloseTo(103.4214, 3);
-    const dup = await t.as.head_brewer.post('/api/vessels').send({ name: v.name, type: 'fermenter', capacity: 1, capacityUnit: 'l', ratedPressure: 1, pressureUnit: 'kpa' });
+    const dup = await t.as.head_brewer
+      .post('/api/vessels')
+      .send({ name: v.name, type: 'fermenter', capacity: 1, capacityUnit: 'l', ratedPressure: 1, pressureUnit: 'kpa' });
     expect(dup.status).toBe(409);
   });
 });
@@ -292,16 +409,24 @@ describe('carbonation', () => {
     const needed = headPressureKpa(2, 2.6);
     const strong = await vessel({ ratedPressure: 200 });
     const weak = await vessel({ ratedPressure: Math.floor(needed) - 5 });
-    const ok = await t.as.assistant_brewer.get('/api/cellar/carbonation').query({ vesselId: strong.id, co2Volumes: 2.6, temp: 2, tempUnit: 'c' });
+    const ok = await t.as.assistant_brewer
+      .get('/api/cellar/carbonation')
+      .query({ vesselId: strong.id, co2Volumes: 2.6, temp: 2, tempUnit: 'c' });
     expect(ok.status).toBe(200);
     expect(ok.body.pressureKpa).toBeCloseTo(needed, 10);
-    const capped = await t.as.assistant_brewer.get('/api/cellar/carbonation').query({ vesselId: weak.id, co2Volumes: 2.6, temp: 2, tempUnit: 'c' });
+    const capped = await t.as.assistant_brewer
+      .get('/api/cellar/carbonation')
+      .query({ vesselId: weak.id, co2Volumes: 2.6, temp: 2, tempUnit: 'c' });
     expect(capped.status).toBe(422);
     expect(capped.body.error.message).toMatch(/above this vessel's rated working pressure/);
     // A US screen (°F) reads the refusal in °F and psi, as its card shows the rating.
-    const cappedUs = await t.as.assistant_brewer.get('/api/cellar/carbonation').query({ vesselId: weak.id, co2Volumes: 2.6, temp: 35.6, tempUnit: 'f' });
+    const cappedUs = await t.as.assistant_brewer
+      .get('/api/cellar/carbonation')
+      .query({ vesselId: weak.id, co2Volumes: 2.6, temp: 35.6, tempUnit: 'f' });
     expect(cappedUs.status).toBe(422);
-    expect(cappedUs.body.error.message).toMatch(/^2\.6 volumes at 35\.6 °F needs \d+\.\d psi, above this vessel's rated working pressure of \d+\.\d psi\./);
+    expect(cappedUs.body.error.message).toMatch(
+      /^2\.6 volumes at 35\.6 °F needs \d+\.\d psi, above this vessel's rated working pressure of \d+\.\d psi\./,
+    );
     expect(cappedUs.body.error.message).not.toMatch(/°C|kPa/);
 
     // Logging a carbonation on a batch in the weak tank is refused the same way; nothing is written.
@@ -325,7 +450,10 @@ describe('packaging', () => {
     await t.as.head_brewer.put(`/api/batches/${batch.id}/vessel`).send({ vesselId: tank.id });
     const knockoutL = (await cellarView(batch.id)).packaging.knockoutL; // planned knockout: no brew-day volume logged
     const run = (lines: object[], final = false) =>
-      t.as.assistant_brewer.post(`/api/cellar/batches/${batch.id}/packaging`).set(writeHeaders()).send({ kind: 'packaging', lines, final });
+      t.as.assistant_brewer
+        .post(`/api/cellar/batches/${batch.id}/packaging`)
+        .set(writeHeaders())
+        .send({ kind: 'packaging', lines, final });
 
     const tooMuch = await run([{ kind: 'keg', size: 'keg_50l', count: Math.ceil(knockoutL / 50) + 1 }]);
     expect(tooMuch.status).toBe(422);
@@ -361,12 +489,43 @@ describe('another brewery', () => {
     const tank = await vessel({});
     const o = other.as.head_brewer;
     expect((await o.get(`/api/cellar/batches/${batch.id}`)).status).toBe(404);
-    expect((await o.post(`/api/cellar/batches/${batch.id}/readings`).set(writeHeaders()).send(reading(1.05))).status).toBe(404);
-    expect((await o.post(`/api/cellar/batches/${batch.id}/readings/preview`).send({ delimiter: ',', gravityUnit: 'sg', tempUnit: 'c', timeZone: 'UTC', csv: 'x' })).status).toBe(404);
-    expect((await o.put(`/api/vessels/${tank.id}`).send({ name: 'Mine', type: 'fermenter', capacity: 1, capacityUnit: 'l', ratedPressure: 1, pressureUnit: 'kpa' })).status).toBe(404);
-    expect((await o.get('/api/cellar/carbonation').query({ vesselId: tank.id, co2Volumes: 2.5, temp: 2, tempUnit: 'c' })).status).toBe(404);
+    expect(
+      (await o.post(`/api/cellar/batches/${batch.id}/readings`).set(writeHeaders()).send(reading(1.05))).status,
+    ).toBe(404);
+    expect(
+      (
+        await o
+          .post(`/api/cellar/batches/${batch.id}/readings/preview`)
+          .send({ delimiter: ',', gravityUnit: 'sg', tempUnit: 'c', timeZone: 'UTC', csv: 'x' })
+      ).status,
+    ).toBe(404);
+    expect(
+      (
+        await o
+          .put(`/api/vessels/${tank.id}`)
+          .send({
+            name: 'Mine',
+            type: 'fermenter',
+            capacity: 1,
+            capacityUnit: 'l',
+            ratedPressure: 1,
+            pressureUnit: 'kpa',
+          })
+      ).status,
+    ).toBe(404);
+    expect(
+      (await o.get('/api/cellar/carbonation').query({ vesselId: tank.id, co2Volumes: 2.5, temp: 2, tempUnit: 'c' }))
+        .status,
+    ).toBe(404);
     expect((await o.get('/api/vessels')).body).toEqual([]);
-    const alert = await Alert.create({ breweryId: t.brewery.id, batchId: batch.id, kind: 'stalled', message: 'test', emailedAt: null, readAt: null });
+    const alert = await Alert.create({
+      breweryId: t.brewery.id,
+      batchId: batch.id,
+      kind: 'stalled',
+      message: 'test',
+      emailedAt: null,
+      readAt: null,
+    });
     expect((await o.post(`/api/cellar/alerts/${alert.id}/read`)).status).toBe(404);
     expect(await GravityReading.count({ where: { batchId: batch.id } })).toBe(0);
   });
@@ -386,7 +545,10 @@ describe('alerts', () => {
       readingIntervalHours: 24,
     });
     expect(plan.status).toBe(200);
-    const mailFor = () => mailCatcher().messages().filter((m) => m.to.includes(t.users.head_brewer.email) && m.subject.includes(batch.number));
+    const mailFor = () =>
+      mailCatcher()
+        .messages()
+        .filter((m) => m.to.includes(t.users.head_brewer.email) && m.subject.includes(batch.number));
     const hour = 3_600_000;
     await postReading(batch.id, reading(1.05), new Date(Date.now() - 3 * hour));
     await postReading(batch.id, reading(1.03), new Date(Date.now() - 2 * hour));
@@ -398,7 +560,9 @@ describe('alerts', () => {
 
     await postReading(batch.id, reading(1.013));
     const alerts = await t.as.head_brewer.get('/api/cellar/alerts');
-    expect(alerts.body.filter((a: { batchId: number }) => a.batchId === batch.id)).toMatchObject([{ kind: 'd_rest', readAt: null }]);
+    expect(alerts.body.filter((a: { batchId: number }) => a.batchId === batch.id)).toMatchObject([
+      { kind: 'd_rest', readAt: null },
+    ]);
     expect(mailFor()).toHaveLength(1);
     expect((await t.as.assistant_brewer.get('/api/cellar/alerts')).status).toBe(403);
   });
@@ -406,7 +570,10 @@ describe('alerts', () => {
   it('raises a "no reading" alert once for a fermenting batch past its reading interval', async () => {
     const batch = await knockedOutBatch();
     await postReading(batch.id, reading(1.05), new Date(Date.now() - 2 * 3_600_000));
-    const mailFor = () => mailCatcher().messages().filter((m) => m.subject.includes(batch.number) && m.subject.includes('No gravity reading'));
+    const mailFor = () =>
+      mailCatcher()
+        .messages()
+        .filter((m) => m.subject.includes(batch.number) && m.subject.includes('No gravity reading'));
     await sweepOverdueReadings(new Date(Date.now() + 20 * 3_600_000)); // 22 h since the reading: not yet
     expect(await Alert.count({ where: { batchId: batch.id, kind: 'overdue' } })).toBe(0);
     await sweepOverdueReadings(new Date(Date.now() + 30 * 3_600_000));
@@ -421,9 +588,16 @@ describe('alerts', () => {
     const knockout = await t.as.assistant_brewer
       .post(`/api/batches/${batch.id}/log`)
       .set(writeHeaders({ capturedAt: new Date(Date.now() - 30 * 3_600_000) }))
-      .send({ kind: 'step', stepKey: 'knockout-end', label: 'End knockout', measurements: { gravitySg: 1.05, volumeL: 40 } });
+      .send({
+        kind: 'step',
+        stepKey: 'knockout-end',
+        label: 'End knockout',
+        measurements: { gravitySg: 1.05, volumeL: 40 },
+      });
     expect(knockout.status).toBe(201);
-    await changeBatchStatus({ id: t.users.head_brewer.id, breweryId: t.brewery.id }, batch.id, { status: 'fermenting' });
+    await changeBatchStatus({ id: t.users.head_brewer.id, breweryId: t.brewery.id }, batch.id, {
+      status: 'fermenting',
+    });
     const overdue = () => Alert.count({ where: { batchId: batch.id, kind: 'overdue' } });
     await sweepOverdueReadings(); // 30 h since knockout, interval 24 h
     expect(await overdue()).toBe(1);

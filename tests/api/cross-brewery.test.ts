@@ -6,7 +6,16 @@ import { routeTable, type RouteEntry } from '../../server/routes/define';
 import type { Role } from '../../shared/schemas/roles';
 import { createTestBrewery, type TestBrewery } from './helpers';
 import { writeHeaders } from './batch-fixtures';
-import { NOT_BREWERY_IDS, VALID_BODIES, VALID_QUERIES, fillPath, idSource, paramKind, pathParams, routeKey } from './route-samples';
+import {
+  NOT_BREWERY_IDS,
+  VALID_BODIES,
+  VALID_QUERIES,
+  fillPath,
+  idSource,
+  paramKind,
+  pathParams,
+  routeKey,
+} from './route-samples';
 
 const idRoutes = routeTable.filter((r) => pathParams(r.path).some((p) => !NOT_BREWERY_IDS.has(p)));
 const unsampled: string[] = [];
@@ -26,7 +35,9 @@ async function call(route: RouteEntry, ids: (param: string) => Promise<number>) 
   const values: Record<string, number> = {};
   for (const p of pathParams(route.path)) values[p] = await ids(paramKind(route.path, p));
   const query = VALID_QUERIES[routeKey(route)];
-  const req = ours.as[callerFor(route)][route.method](`${fillPath(route.path, values)}${query ? `?${query}` : ''}`).set(writeHeaders());
+  const req = ours.as[callerFor(route)]
+    [route.method](`${fillPath(route.path, values)}${query ? `?${query}` : ''}`)
+    .set(writeHeaders());
   const sample = VALID_BODIES[routeKey(route)];
   return route.hasBody ? req.send(sample ? (sample(values) as object) : {}) : req;
 }
@@ -44,7 +55,9 @@ describe('another brewery’s ids answer 404', () => {
   });
 
   it('knows how to make an id of every kind a route names', () => {
-    for (const route of idRoutes) for (const p of pathParams(route.path)) if (!NOT_BREWERY_IDS.has(p)) expect(() => paramKind(route.path, p)).not.toThrow();
+    for (const route of idRoutes)
+      for (const p of pathParams(route.path))
+        if (!NOT_BREWERY_IDS.has(p)) expect(() => paramKind(route.path, p)).not.toThrow();
   });
 
   it.each(idRoutes.map((r) => [routeKey(r), r] as const))('%s', async (key, route) => {
@@ -63,7 +76,10 @@ describe('another brewery’s ids answer 404', () => {
   });
 
   it('lists the write routes still checked without a sample body', () => {
-    if (unsampled.length) console.log(`cross-brewery: ${unsampled.length} write routes answered 400 to an empty body (no sample yet): ${unsampled.join('; ')}`);
+    if (unsampled.length)
+      console.log(
+        `cross-brewery: ${unsampled.length} write routes answered 400 to an empty body (no sample yet): ${unsampled.join('; ')}`,
+      );
     expect(unsampled.length).toBeLessThan(idRoutes.length);
   });
 });

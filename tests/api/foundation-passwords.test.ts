@@ -102,7 +102,9 @@ describe('the same rules wherever a password is set', () => {
 
   it('accepting an invite refuses a short or common password and leaves the invite usable', async () => {
     const email = `weak.${tag()}@test.example`;
-    expect((await t.as.head_brewer.post('/api/team/invites').send({ email, role: 'taproom_manager' })).status).toBe(201);
+    expect((await t.as.head_brewer.post('/api/team/invites').send({ email, role: 'taproom_manager' })).status).toBe(
+      201,
+    );
     const token = mailCatcher()
       .messages()
       .find((m) => m.to.includes(email))!
@@ -111,7 +113,9 @@ describe('the same rules wherever a password is set', () => {
     const short = await agent().post(`/api/auth/invites/${token}`).send({ displayName: 'Weak', password: 'short' });
     expect(short.status).toBe(400);
     expect(short.body.error.fields).toHaveProperty('password');
-    const common = await agent().post(`/api/auth/invites/${token}`).send({ displayName: 'Weak', password: 'password123' });
+    const common = await agent()
+      .post(`/api/auth/invites/${token}`)
+      .send({ displayName: 'Weak', password: 'password123' });
     expect(common.status).toBe(400);
     expect(common.body.error.fields.password).toContain('commonly used password');
 
@@ -129,6 +133,8 @@ describe('the same rules wherever a password is set', () => {
     expect(weak.status).toBe(400);
     expect(weak.body.error.fields).toHaveProperty('password');
     // The refused attempt did not spend the link.
-    expect((await agent().post(`/api/auth/reset/${token}`).send({ password: 'juniper-foghorn-satchel-12' })).status).toBe(204);
+    expect(
+      (await agent().post(`/api/auth/reset/${token}`).send({ password: 'juniper-foghorn-satchel-12' })).status,
+    ).toBe(204);
   });
 });

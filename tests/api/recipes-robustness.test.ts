@@ -32,14 +32,43 @@ const content = fc
   })
   .map((r): RecipeVersionContent => ({
     ...SEASONAL_CONTENT,
-    grainBill: { mode: 'weight', items: [{ name: 'Malt', potential: { ppg: r.ppg }, colourLovibond: 3, stage: 'mash', weightKg: r.weightKg }] },
-    hops: [{ name: 'Hop', alphaAcidPct: r.alphaAcidPct, form: 'pellet', use: 'boil', minutes: r.minutes, weightG: r.weightG, ...(r.ibuSharePct === undefined ? {} : { ibuSharePct: r.ibuSharePct }) }],
-    mash: { grainTempC: r.grainC, ...(r.thickness === undefined ? {} : { thicknessLPerKg: r.thickness }), steps: [{ name: 'Rest', tempC: r.restC, minutes: 60, method: 'infusion' }] },
+    grainBill: {
+      mode: 'weight',
+      items: [{ name: 'Malt', potential: { ppg: r.ppg }, colourLovibond: 3, stage: 'mash', weightKg: r.weightKg }],
+    },
+    hops: [
+      {
+        name: 'Hop',
+        alphaAcidPct: r.alphaAcidPct,
+        form: 'pellet',
+        use: 'boil',
+        minutes: r.minutes,
+        weightG: r.weightG,
+        ...(r.ibuSharePct === undefined ? {} : { ibuSharePct: r.ibuSharePct }),
+      },
+    ],
+    mash: {
+      grainTempC: r.grainC,
+      ...(r.thickness === undefined ? {} : { thicknessLPerKg: r.thickness }),
+      steps: [{ name: 'Rest', tempC: r.restC, minutes: 60, method: 'infusion' }],
+    },
     ...(r.waterMode === 'none'
       ? { water: undefined }
       : r.waterMode === 'additions'
-        ? { water: { ...(SEASONAL_CONTENT.water as Extract<RecipeVersionContent['water'], { mode: 'additions' }>), mashSalts: [{ salt: 'gypsum', grams: r.grams }] } }
-        : { water: { mode: 'target', source: SEASONAL_CONTENT.water!.source, target: { ...SEASONAL_CONTENT.water!.source, sulfatePpm: r.grams % 2000 }, allowedSalts: ['gypsum'] } }),
+        ? {
+            water: {
+              ...(SEASONAL_CONTENT.water as Extract<RecipeVersionContent['water'], { mode: 'additions' }>),
+              mashSalts: [{ salt: 'gypsum', grams: r.grams }],
+            },
+          }
+        : {
+            water: {
+              mode: 'target',
+              source: SEASONAL_CONTENT.water!.source,
+              target: { ...SEASONAL_CONTENT.water!.source, sulfatePpm: r.grams % 2000 },
+              allowedSalts: ['gypsum'],
+            },
+          }),
     adjuncts: [{ ...SEASONAL_CONTENT.adjuncts[0]!, level: r.level }],
     yeast: { ...SEASONAL_CONTENT.yeast, attenuationPct: r.attenuationPct },
     targets: { ...SEASONAL_CONTENT.targets, batchVolumeL: r.batchVolumeL },
@@ -54,12 +83,22 @@ describe('recipe saving under any schema-valid input', () => {
         expect(recipeContentSchema.safeParse(c).success).toBe(true);
         const res = await t.as.head_brewer
           .post('/api/recipes')
-          .send({ name: `Fuzz ${n++}`, style: '', description: '', status: 'draft', changeNote: 'x', equipmentProfileId: equipmentId, content: c });
+          .send({
+            name: `Fuzz ${n++}`,
+            style: '',
+            description: '',
+            status: 'draft',
+            changeNote: 'x',
+            equipmentProfileId: equipmentId,
+            content: c,
+          });
         expect([201, 422], JSON.stringify(res.body)).toContain(res.status);
         seen.add(res.status);
         if (res.status === 422) expect(Object.keys(res.body.error.fields ?? {})).toHaveLength(1);
         if (res.status === 201) {
-          const scale = await t.as.head_brewer.get(`/api/recipes/${res.body.id}/versions/${res.body.versionId}/scale?batchVolumeL=${(c.targets.batchVolumeL * 7).toFixed(3)}`);
+          const scale = await t.as.head_brewer.get(
+            `/api/recipes/${res.body.id}/versions/${res.body.versionId}/scale?batchVolumeL=${(c.targets.batchVolumeL * 7).toFixed(3)}`,
+          );
           expect([200, 400, 422], JSON.stringify(scale.body)).toContain(scale.status);
         }
       }),

@@ -16,7 +16,10 @@ const equipmentIds = {} as Record<keyof typeof DEMO_EQUIPMENT, number>;
 
 async function addEquipment(who: TestBrewery) {
   const ids = {} as Record<keyof typeof DEMO_EQUIPMENT, number>;
-  for (const [key, profile] of Object.entries(DEMO_EQUIPMENT) as [keyof typeof DEMO_EQUIPMENT, (typeof DEMO_EQUIPMENT)['pilot']][]) {
+  for (const [key, profile] of Object.entries(DEMO_EQUIPMENT) as [
+    keyof typeof DEMO_EQUIPMENT,
+    (typeof DEMO_EQUIPMENT)['pilot'],
+  ][]) {
     const res = await who.as.head_brewer.post('/api/equipment').send(profile);
     expect(res.status).toBe(201);
     ids[key] = res.body.id;
@@ -47,7 +50,10 @@ beforeAll(async () => {
 describe('recipes API', () => {
   it('creates a recipe with version 1 and stores the figures shared/brewing computes', async () => {
     const { recipeId, versionId } = await createSeasonal('Created test');
-    const expected = computeRecipe(toRecipeInput('Created test', SEASONAL_CONTENT), equipmentAtVolume(DEMO_EQUIPMENT.pilot, usGalToL(10)));
+    const expected = computeRecipe(
+      toRecipeInput('Created test', SEASONAL_CONTENT),
+      equipmentAtVolume(DEMO_EQUIPMENT.pilot, usGalToL(10)),
+    );
     const list = await t.as.assistant_brewer.get('/api/recipes');
     expect(list.status).toBe(200);
     const row = list.body.find((r: { id: number }) => r.id === recipeId);
@@ -64,7 +70,10 @@ describe('recipes API', () => {
 
   it('edits an unfrozen version in place, then refuses once a batch has used it, and saves the next version instead', async () => {
     const { recipeId, versionId } = await createSeasonal('Freeze test');
-    const edited: RecipeVersionContent = { ...SEASONAL_CONTENT, hops: [{ ...SEASONAL_CONTENT.hops[0]!, weightG: 80 }, SEASONAL_CONTENT.hops[1]!] };
+    const edited: RecipeVersionContent = {
+      ...SEASONAL_CONTENT,
+      hops: [{ ...SEASONAL_CONTENT.hops[0]!, weightG: 80 }, SEASONAL_CONTENT.hops[1]!],
+    };
     const patch = await t.as.head_brewer
       .patch(`/api/recipes/${recipeId}/versions/${versionId}`)
       .send({ changeNote: 'More bittering', equipmentProfileId: equipmentIds.pilot, content: edited });
@@ -85,7 +94,11 @@ describe('recipes API', () => {
 
     const next = await t.as.head_brewer
       .post(`/api/recipes/${recipeId}/versions`)
-      .send({ changeNote: 'Back to the pilot hop rate', equipmentProfileId: equipmentIds.pilot, content: SEASONAL_CONTENT });
+      .send({
+        changeNote: 'Back to the pilot hop rate',
+        equipmentProfileId: equipmentIds.pilot,
+        content: SEASONAL_CONTENT,
+      });
     expect(next.status).toBe(201);
     expect(next.body.number).toBe(2);
     const recipe = await t.as.assistant_brewer.get(`/api/recipes/${recipeId}`);
@@ -101,8 +114,21 @@ describe('recipes API', () => {
   });
 
   it('drops the boil minute of an adjunct that goes in the fermenter, so the brew sheet never times it', async () => {
-    const moved: RecipeVersionContent = { ...SEASONAL_CONTENT, adjuncts: [{ ...SEASONAL_CONTENT.adjuncts[0]!, stage: 'fermenter', boilMinutes: 15 }] };
-    const res = await t.as.head_brewer.post('/api/recipes').send({ name: 'Fermenter fruit', style: '', description: '', status: 'draft', changeNote: 'Fruit to the fermenter', equipmentProfileId: equipmentIds.pilot, content: moved });
+    const moved: RecipeVersionContent = {
+      ...SEASONAL_CONTENT,
+      adjuncts: [{ ...SEASONAL_CONTENT.adjuncts[0]!, stage: 'fermenter', boilMinutes: 15 }],
+    };
+    const res = await t.as.head_brewer
+      .post('/api/recipes')
+      .send({
+        name: 'Fermenter fruit',
+        style: '',
+        description: '',
+        status: 'draft',
+        changeNote: 'Fruit to the fermenter',
+        equipmentProfileId: equipmentIds.pilot,
+        content: moved,
+      });
     expect(res.status, JSON.stringify(res.body)).toBe(201);
     const detail = await t.as.head_brewer.get(`/api/recipes/${res.body.id}/versions/${res.body.versionId}`);
     expect(detail.body.version.content.adjuncts[0].stage).toBe('fermenter');
@@ -112,8 +138,13 @@ describe('recipes API', () => {
 
   it('stores the solved weight of a hop written as a share of the target IBU', async () => {
     const { recipeId, versionId } = await createSeasonal('Share test');
-    const content: RecipeVersionContent = { ...SEASONAL_CONTENT, hops: [{ ...SEASONAL_CONTENT.hops[0]!, ibuSharePct: 75, weightG: 0 }, SEASONAL_CONTENT.hops[1]!] };
-    const res = await t.as.head_brewer.patch(`/api/recipes/${recipeId}/versions/${versionId}`).send({ changeNote: 'Bittering by share', equipmentProfileId: equipmentIds.pilot, content });
+    const content: RecipeVersionContent = {
+      ...SEASONAL_CONTENT,
+      hops: [{ ...SEASONAL_CONTENT.hops[0]!, ibuSharePct: 75, weightG: 0 }, SEASONAL_CONTENT.hops[1]!],
+    };
+    const res = await t.as.head_brewer
+      .patch(`/api/recipes/${recipeId}/versions/${versionId}`)
+      .send({ changeNote: 'Bittering by share', equipmentProfileId: equipmentIds.pilot, content });
     expect(res.status).toBe(200);
     const v = await t.as.head_brewer.get(`/api/recipes/${recipeId}/versions/${versionId}`);
     // 75 % of the 24 IBU target (Tinseth inverted; shared/brewing/hop-shares.test.ts).
@@ -127,31 +158,54 @@ describe('recipes API', () => {
     const profile = { ...DEMO_EQUIPMENT.pilot, name: 'Pilot kit (numbers test)' };
     const equipmentId = (await t.as.head_brewer.post('/api/equipment').send(profile)).body.id as number;
     const created = await t.as.head_brewer.post('/api/recipes').send({
-      name: 'Numbers test', style: 'Spiced amber', description: '', status: 'draft', changeNote: 'Pilot recipe', equipmentProfileId: equipmentId, content: SEASONAL_CONTENT,
+      name: 'Numbers test',
+      style: 'Spiced amber',
+      description: '',
+      status: 'draft',
+      changeNote: 'Pilot recipe',
+      equipmentProfileId: equipmentId,
+      content: SEASONAL_CONTENT,
     });
     const url = `/api/recipes/${created.body.id}/versions/${created.body.versionId}`;
     const expected = (content: RecipeVersionContent, efficiency: number) =>
-      computeRecipe(toRecipeInput('Numbers test', content), equipmentAtVolume({ ...profile, brewhouseEfficiency: efficiency }, usGalToL(10)));
+      computeRecipe(
+        toRecipeInput('Numbers test', content),
+        equipmentAtVolume({ ...profile, brewhouseEfficiency: efficiency }, usGalToL(10)),
+      );
 
     const before = await t.as.head_brewer.get(url);
     expect(before.body.computed.og).toBeCloseTo(expected(SEASONAL_CONTENT, 0.7).og, 12);
     // Asked again: the same answer.
     expect((await t.as.head_brewer.get(url)).body.computed).toEqual(before.body.computed);
 
-    expect((await t.as.head_brewer.put(`/api/equipment/${equipmentId}`).send({ ...profile, brewhouseEfficiency: 0.8 })).status).toBe(200);
+    expect(
+      (await t.as.head_brewer.put(`/api/equipment/${equipmentId}`).send({ ...profile, brewhouseEfficiency: 0.8 }))
+        .status,
+    ).toBe(200);
     const better = await t.as.head_brewer.get(url);
     expect(better.body.computed.og).toBeCloseTo(expected(SEASONAL_CONTENT, 0.8).og, 12);
     expect(better.body.computed.og).toBeGreaterThan(before.body.computed.og);
 
-    const edited: RecipeVersionContent = { ...SEASONAL_CONTENT, hops: [{ ...SEASONAL_CONTENT.hops[0]!, weightG: 90 }, SEASONAL_CONTENT.hops[1]!] };
-    expect((await t.as.head_brewer.patch(url).send({ changeNote: 'More bittering', equipmentProfileId: equipmentId, content: edited })).status).toBe(200);
+    const edited: RecipeVersionContent = {
+      ...SEASONAL_CONTENT,
+      hops: [{ ...SEASONAL_CONTENT.hops[0]!, weightG: 90 }, SEASONAL_CONTENT.hops[1]!],
+    };
+    expect(
+      (
+        await t.as.head_brewer
+          .patch(url)
+          .send({ changeNote: 'More bittering', equipmentProfileId: equipmentId, content: edited })
+      ).status,
+    ).toBe(200);
     const bitterer = await t.as.head_brewer.get(url);
     expect(bitterer.body.computed.ibu).toBeCloseTo(expected(edited, 0.8).ibu, 12);
     expect(bitterer.body.computed.ibu).toBeGreaterThan(better.body.computed.ibu);
 
     // Back to the first profile and content: the first numbers again.
     await t.as.head_brewer.put(`/api/equipment/${equipmentId}`).send(profile);
-    await t.as.head_brewer.patch(url).send({ changeNote: 'Pilot recipe', equipmentProfileId: equipmentId, content: SEASONAL_CONTENT });
+    await t.as.head_brewer
+      .patch(url)
+      .send({ changeNote: 'Pilot recipe', equipmentProfileId: equipmentId, content: SEASONAL_CONTENT });
     expect((await t.as.head_brewer.get(url)).body.computed).toEqual(before.body.computed);
   });
 
@@ -162,16 +216,30 @@ describe('recipes API', () => {
       hops: [{ ...SEASONAL_CONTENT.hops[0]!, weightG: 70 }, SEASONAL_CONTENT.hops[1]!],
       fermentation: { ...SEASONAL_CONTENT.fermentation, crashTempC: 2 },
     };
-    const v2 = (await t.as.head_brewer.post(`/api/recipes/${recipeId}/versions`).send({ changeNote: 'Tweak', equipmentProfileId: equipmentIds.pilot, content: changed })).body.id;
+    const v2 = (
+      await t.as.head_brewer
+        .post(`/api/recipes/${recipeId}/versions`)
+        .send({ changeNote: 'Tweak', equipmentProfileId: equipmentIds.pilot, content: changed })
+    ).body.id;
     const res = await t.as.assistant_brewer.get(`/api/recipes/${recipeId}/compare?a=${v1}&b=${v2}`);
     expect(res.status).toBe(200);
     const paths = res.body.differences.map((d: { path: string }) => d.path);
     expect(paths).toEqual(
-      expect.arrayContaining(['changeNote', 'content.hops.0.weightG', 'content.fermentation.crashTempC', 'computed.ibu', 'computed.buGu']),
+      expect.arrayContaining([
+        'changeNote',
+        'content.hops.0.weightG',
+        'content.fermentation.crashTempC',
+        'computed.ibu',
+        'computed.buGu',
+      ]),
     );
     expect(paths).not.toContain('computed.og');
     expect(paths).toHaveLength(5);
-    expect(res.body.differences.find((d: { path: string }) => d.path === 'content.hops.0.weightG')).toEqual({ path: 'content.hops.0.weightG', a: 66, b: 70 });
+    expect(res.body.differences.find((d: { path: string }) => d.path === 'content.hops.0.weightG')).toEqual({
+      path: 'content.hops.0.weightG',
+      a: 66,
+      b: 70,
+    });
   });
 
   it('answers 400 with a message per field for bad input, and loses nothing', async () => {
@@ -182,7 +250,11 @@ describe('recipes API', () => {
       status: 'brewing',
       changeNote: 'x',
       equipmentProfileId: equipmentIds.pilot,
-      content: { ...SEASONAL_CONTENT, hops: [{ ...SEASONAL_CONTENT.hops[0]!, alphaAcidPct: 45 }], targets: { ...SEASONAL_CONTENT.targets, og: 'high' } },
+      content: {
+        ...SEASONAL_CONTENT,
+        hops: [{ ...SEASONAL_CONTENT.hops[0]!, alphaAcidPct: 45 }],
+        targets: { ...SEASONAL_CONTENT.targets, og: 'high' },
+      },
     };
     const res = await t.as.head_brewer.post('/api/recipes').send(bad);
     expect(res.status).toBe(400);
@@ -196,10 +268,15 @@ describe('recipes API', () => {
       ...bad,
       name: 'Whirlpool',
       status: 'draft',
-      content: { ...SEASONAL_CONTENT, hops: [{ name: 'X', alphaAcidPct: 10, form: 'pellet', use: 'whirlpool', minutes: 20, weightG: 10 }] },
+      content: {
+        ...SEASONAL_CONTENT,
+        hops: [{ name: 'X', alphaAcidPct: 10, form: 'pellet', use: 'whirlpool', minutes: 20, weightG: 10 }],
+      },
     });
     expect(whirlpool.status).toBe(400);
-    expect(whirlpool.body.error.fields['content.hops.0.whirlpoolTempC']).toBe('A whirlpool addition needs its stand temperature');
+    expect(whirlpool.body.error.fields['content.hops.0.whirlpoolTempC']).toBe(
+      'A whirlpool addition needs its stand temperature',
+    );
     const list = await t.as.head_brewer.get('/api/recipes');
     expect(list.body.map((r: { name: string }) => r.name)).not.toContain('Whirlpool');
     const badScale = await t.as.head_brewer.get(`/api/recipes/1/versions/1/scale?batchVolumeL=lots`);
@@ -209,7 +286,9 @@ describe('recipes API', () => {
 
   it("scales the pilot seasonal to 10 bbl with exactly shared/brewing's numbers, and saves it as the next version", async () => {
     const { recipeId, versionId } = await createSeasonal('Scale test');
-    const res = await t.as.assistant_brewer.get(`/api/recipes/${recipeId}/versions/${versionId}/scale?equipmentProfileId=${equipmentIds.big}`);
+    const res = await t.as.assistant_brewer.get(
+      `/api/recipes/${recipeId}/versions/${versionId}/scale?equipmentProfileId=${equipmentIds.big}`,
+    );
     expect(res.status).toBe(200);
     const expected = scaleRecipe(
       toRecipeInput('Scale test', SEASONAL_CONTENT),
@@ -239,8 +318,19 @@ describe('recipes API', () => {
   it('plans a batch from a version: scaled recipe, computed figures, changes and the full content', async () => {
     const { recipeId, versionId } = await createSeasonal('Plan test');
     const plan = await planForBatch(t.brewery.id, { recipeVersionId: versionId, equipmentProfileId: equipmentIds.mid });
-    const expected = scaleRecipe(toRecipeInput('Plan test', SEASONAL_CONTENT), equipmentAtVolume(DEMO_EQUIPMENT.pilot, usGalToL(10)), DEMO_EQUIPMENT.mid);
-    expect(plan).toMatchObject({ recipeId, recipeVersionId: versionId, versionNumber: 1, recipeName: 'Plan test', equipmentProfileId: equipmentIds.mid, equipmentName: 'Harbour 3.5 bbl' });
+    const expected = scaleRecipe(
+      toRecipeInput('Plan test', SEASONAL_CONTENT),
+      equipmentAtVolume(DEMO_EQUIPMENT.pilot, usGalToL(10)),
+      DEMO_EQUIPMENT.mid,
+    );
+    expect(plan).toMatchObject({
+      recipeId,
+      recipeVersionId: versionId,
+      versionNumber: 1,
+      recipeName: 'Plan test',
+      equipmentProfileId: equipmentIds.mid,
+      equipmentName: 'Harbour 3.5 bbl',
+    });
     expect(plan.computed).toEqual(expected.after);
     expect(plan.recipe).toEqual(expected.recipe);
     expect(plan.content).toEqual(SEASONAL_CONTENT);
@@ -248,22 +338,31 @@ describe('recipes API', () => {
     expect(atVolume.equipment.batchVolumeL).toBe(60);
     expect(atVolume.equipmentName).toBe('Pilot kit 10 gal');
     const asWritten = await planForBatch(t.brewery.id, { recipeVersionId: versionId });
-    expect(asWritten.computed.og).toBeCloseTo(computeRecipe(toRecipeInput('Plan test', SEASONAL_CONTENT), equipmentAtVolume(DEMO_EQUIPMENT.pilot, usGalToL(10))).og, 12);
+    expect(asWritten.computed.og).toBeCloseTo(
+      computeRecipe(toRecipeInput('Plan test', SEASONAL_CONTENT), equipmentAtVolume(DEMO_EQUIPMENT.pilot, usGalToL(10)))
+        .og,
+      12,
+    );
     await expect(planForBatch(other.brewery.id, { recipeVersionId: versionId })).rejects.toMatchObject({ status: 404 });
     await expect(freezeRecipeVersion(other.brewery.id, versionId)).rejects.toMatchObject({ status: 404 });
-    await expect(planForBatch(t.brewery.id, { recipeVersionId: versionId, equipmentProfileId: (await addEquipment(other)).big })).rejects.toMatchObject({ status: 404 });
+    await expect(
+      planForBatch(t.brewery.id, { recipeVersionId: versionId, equipmentProfileId: (await addEquipment(other)).big }),
+    ).rejects.toMatchObject({ status: 404 });
   });
 
   it('shows as last brewed the brew date of the latest batch whose brew day started, not the latest planned or dumped-before-brewing one', async () => {
     const { recipeId, versionId } = await createSeasonal('Last brewed test');
-    const lastBrewed = async () => (await t.as.head_brewer.get('/api/recipes')).body.find((r: { id: number }) => r.id === recipeId).lastBrewedAt;
+    const lastBrewed = async () =>
+      (await t.as.head_brewer.get('/api/recipes')).body.find((r: { id: number }) => r.id === recipeId).lastBrewedAt;
     const plan = async (brewDate: string) => {
       const res = await t.as.head_brewer.post('/api/batches').send({ recipeVersionId: versionId, brewDate });
       expect(res.status, JSON.stringify(res.body)).toBe(201);
       return res.body.id as number;
     };
     const move = async (id: number, status: string, reason?: string) => {
-      const res = await t.as.head_brewer.post(`/api/batches/${id}/status`).send({ status, ...(reason ? { reason } : {}) });
+      const res = await t.as.head_brewer
+        .post(`/api/batches/${id}/status`)
+        .send({ status, ...(reason ? { reason } : {}) });
       expect(res.status, JSON.stringify(res.body)).toBe(200);
     };
     const first = await plan('2026-10-05');
@@ -281,7 +380,7 @@ describe('recipes API', () => {
     expect(await lastBrewed()).toBe('2026-11-02');
   });
 
-  it("keeps recipes to the brewery and the brewing roles", async () => {
+  it('keeps recipes to the brewery and the brewing roles', async () => {
     const { recipeId, versionId } = await createSeasonal('Scope test');
     expect((await other.as.head_brewer.get(`/api/recipes/${recipeId}`)).status).toBe(404);
     expect((await other.as.head_brewer.get(`/api/recipes/${recipeId}/versions/${versionId}`)).status).toBe(404);
@@ -297,19 +396,36 @@ describe('recipes API', () => {
   it('gives each brewery the starter ingredient library, marked typical, and its own additions', async () => {
     const res = await t.as.assistant_brewer.get('/api/ingredients?kind=fermentable');
     expect(res.status).toBe(200);
-    expect(res.body.find((i: { name: string }) => i.name === 'Chocolate malt')).toMatchObject({ typical: true, colourLovibond: 350 });
-    const mine = await t.as.head_brewer.post('/api/ingredients').send({ kind: 'hop', name: 'Harbour wild hop', alphaAcidPct: 6.5, notes: 'From the lane behind the brewery' });
+    expect(res.body.find((i: { name: string }) => i.name === 'Chocolate malt')).toMatchObject({
+      typical: true,
+      colourLovibond: 350,
+    });
+    const mine = await t.as.head_brewer
+      .post('/api/ingredients')
+      .send({ kind: 'hop', name: 'Harbour wild hop', alphaAcidPct: 6.5, notes: 'From the lane behind the brewery' });
     expect(mine.status).toBe(201);
     expect(mine.body.typical).toBe(false);
-    expect((await other.as.head_brewer.get('/api/ingredients?kind=hop')).body.map((i: { name: string }) => i.name)).not.toContain('Harbour wild hop');
-    expect((await other.as.head_brewer.put(`/api/ingredients/${mine.body.id}`).send({ kind: 'hop', name: 'Stolen', notes: '' })).status).toBe(404);
+    expect(
+      (await other.as.head_brewer.get('/api/ingredients?kind=hop')).body.map((i: { name: string }) => i.name),
+    ).not.toContain('Harbour wild hop');
+    expect(
+      (
+        await other.as.head_brewer
+          .put(`/api/ingredients/${mine.body.id}`)
+          .send({ kind: 'hop', name: 'Stolen', notes: '' })
+      ).status,
+    ).toBe(404);
   });
 
   it('removes an ingredient, and equipment no recipe version was written for; a profile in use stays (409)', async () => {
-    const added = await t.as.head_brewer.post('/api/ingredients').send({ kind: 'adjunct', name: 'Sea buckthorn', notes: 'Trial, not repeated' });
+    const added = await t.as.head_brewer
+      .post('/api/ingredients')
+      .send({ kind: 'adjunct', name: 'Sea buckthorn', notes: 'Trial, not repeated' });
     expect((await t.as.assistant_brewer.delete(`/api/ingredients/${added.body.id}`)).status).toBe(403);
     expect((await t.as.head_brewer.delete(`/api/ingredients/${added.body.id}`)).status).toBe(204);
-    expect((await t.as.head_brewer.get('/api/ingredients')).body.map((i: { name: string }) => i.name)).not.toContain('Sea buckthorn');
+    expect((await t.as.head_brewer.get('/api/ingredients')).body.map((i: { name: string }) => i.name)).not.toContain(
+      'Sea buckthorn',
+    );
     expect((await t.as.head_brewer.delete(`/api/ingredients/${added.body.id}`)).status).toBe(404);
 
     const spare = await t.as.head_brewer.post('/api/equipment').send({ ...DEMO_EQUIPMENT.pilot, name: 'Typo kit' });
@@ -317,15 +433,23 @@ describe('recipes API', () => {
     const inUse = await t.as.head_brewer.delete(`/api/equipment/${equipmentIds.pilot}`);
     expect(inUse.status).toBe(409);
     expect(inUse.body.error.message).toMatch(/recipe versions? (was|were) written for, so it stays/);
-    expect((await t.as.head_brewer.get('/api/equipment')).body.map((e: { id: number }) => e.id)).toContain(equipmentIds.pilot);
+    expect((await t.as.head_brewer.get('/api/equipment')).body.map((e: { id: number }) => e.id)).toContain(
+      equipmentIds.pilot,
+    );
   });
 
   it('gives a brewery whose library was never opened the starter entries on upgrade, once', async () => {
-    const before = await Brewery.create({ name: 'Made before libraries came with breweries', unitSystem: 'metric', timeZone: 'UTC' });
+    const before = await Brewery.create({
+      name: 'Made before libraries came with breweries',
+      unitSystem: 'metric',
+      timeZone: 'UTC',
+    });
     const upgrade = () => addStarterLibraries({ context: sequelize.getQueryInterface() } as never);
     await upgrade();
     await upgrade();
     expect(await Ingredient.count({ where: { breweryId: before.id } })).toBe(STARTER_INGREDIENTS.length);
-    expect(await Ingredient.count({ where: { breweryId: t.brewery.id, typical: true } })).toBe(STARTER_INGREDIENTS.length);
+    expect(await Ingredient.count({ where: { breweryId: t.brewery.id, typical: true } })).toBe(
+      STARTER_INGREDIENTS.length,
+    );
   });
 });

@@ -15,11 +15,14 @@ let recipeId: number;
 let versionId: number;
 const month = new Date().toISOString().slice(0, 7); // the test brewery's time zone is UTC
 
-const ok = (res: { status: number; body: unknown }, status = 200) => expect(res.status, JSON.stringify(res.body)).toBe(status);
+const ok = (res: { status: number; body: unknown }, status = 200) =>
+  expect(res.status, JSON.stringify(res.body)).toBe(status);
 
 /** A batch of the test recipe, knocked out with the given OG and volume, then fermenting. */
 async function knockedOut(og: number, volumeL: number): Promise<number> {
-  const planned = await t.as.head_brewer.post('/api/batches').send({ recipeVersionId: versionId, brewDate: new Date().toISOString().slice(0, 10) });
+  const planned = await t.as.head_brewer
+    .post('/api/batches')
+    .send({ recipeVersionId: versionId, brewDate: new Date().toISOString().slice(0, 10) });
   ok(planned, 201);
   const id = planned.body.id as number;
   ok(
@@ -45,7 +48,13 @@ beforeAll(async () => {
   const pilot = await t.as.head_brewer.post('/api/equipment').send(DEMO_EQUIPMENT.pilot);
   ok(pilot, 201);
   const recipe = await t.as.head_brewer.post('/api/recipes').send({
-    name: 'Report Amber', style: 'Spiced amber', description: '', status: 'active', changeNote: 'First', equipmentProfileId: pilot.body.id, content: SEASONAL_CONTENT,
+    name: 'Report Amber',
+    style: 'Spiced amber',
+    description: '',
+    status: 'active',
+    changeNote: 'First',
+    equipmentProfileId: pilot.body.id,
+    content: SEASONAL_CONTENT,
   });
   ok(recipe, 201);
   recipeId = recipe.body.id;
@@ -61,12 +70,22 @@ beforeAll(async () => {
     201,
   );
   ok(await t.as.assistant_brewer.post(`/api/batches/${packagedId}/status`).send({ status: 'conditioning' }));
-  ok(await t.as.assistant_brewer.post(`/api/cellar/batches/${packagedId}/packaging`).set(writeHeaders()).send({ kind: 'packaging', lines: [CANS, KEG], final: true }), 201);
+  ok(
+    await t.as.assistant_brewer
+      .post(`/api/cellar/batches/${packagedId}/packaging`)
+      .set(writeHeaders())
+      .send({ kind: 'packaging', lines: [CANS, KEG], final: true }),
+    201,
+  );
   // Still in a tank: 38 L.
   inTankId = await knockedOut(1.05, 38);
   // Dumped: 35 L, nothing packaged.
   dumpedId = await knockedOut(1.052, 35);
-  ok(await t.as.head_brewer.post(`/api/batches/${dumpedId}/status`).send({ status: 'dumped', reason: 'Infected: sour at day 5' }));
+  ok(
+    await t.as.head_brewer
+      .post(`/api/batches/${dumpedId}/status`)
+      .send({ status: 'dumped', reason: 'Infected: sour at day 5' }),
+  );
 });
 
 describe('monthly production', () => {
@@ -83,7 +102,12 @@ describe('monthly production', () => {
     expect(beer.packagedL).toBeCloseTo(packagedL, 9);
     expect(beer.dumpedL).toBeCloseTo(35, 9);
     expect(beer.inTankL).toBeCloseTo(38, 9);
-    expect(report.totals).toEqual({ brewedL: beer.brewedL, packagedL: beer.packagedL, dumpedL: beer.dumpedL, inTankL: beer.inTankL });
+    expect(report.totals).toEqual({
+      brewedL: beer.brewedL,
+      packagedL: beer.packagedL,
+      dumpedL: beer.dumpedL,
+      inTankL: beer.inTankL,
+    });
     expect(report.packages).toEqual([
       { beerName: 'Report Amber', kind: 'can', size: '473', count: 24, volumeL: expect.closeTo(24 * 0.473, 9) },
       { beerName: 'Report Amber', kind: 'keg', size: 'keg_20l', count: 1, volumeL: 20 },
@@ -91,7 +115,9 @@ describe('monthly production', () => {
   });
 
   it('files a dump in the month it happened, whatever later changes the batch row', async () => {
-    await sequelize.query('UPDATE batches SET updated_at = DATE_ADD(UTC_TIMESTAMP(), INTERVAL 62 DAY) WHERE id = ?', { replacements: [dumpedId] });
+    await sequelize.query('UPDATE batches SET updated_at = DATE_ADD(UTC_TIMESTAMP(), INTERVAL 62 DAY) WHERE id = ?', {
+      replacements: [dumpedId],
+    });
     const res = await t.as.head_brewer.get(`/api/reports/production?month=${month}`);
     ok(res);
     expect((res.body as ProductionReport).beers[0]!.dumpedL).toBeCloseTo(35, 9);
@@ -113,7 +139,10 @@ describe('monthly production', () => {
     expect(res.headers['content-disposition']).toContain(`production-${month}.csv`);
     const text = res.text;
     expect(text).toContain('Official forms differ by country');
-    const total = text.split('\r\n').find((l) => l.startsWith('"Total"'))!.split(',');
+    const total = text
+      .split('\r\n')
+      .find((l) => l.startsWith('"Total"'))!
+      .split(',');
     // 27 CFR 25.11: 1 US beer barrel = 31 US gal; NIST HB 44: 1 gal = 3.785411784 L → 113 L = 0.962951 bbl; 1 hL = 100 L.
     expect(Number(total[1])).toBe(113);
     expect(Number(total[2])).toBeCloseTo(113 / (31 * 3.785411784), 2);
@@ -145,18 +174,31 @@ describe('a batch knocked out last month and packaged this month', () => {
     const lastMonthMid = new Date(Date.UTC(now.getUTCFullYear(), now.getUTCMonth() - 1, 15, 12));
     const previous = lastMonthMid.toISOString().slice(0, 7);
     const before = (await t.as.head_brewer.get(`/api/reports/production?month=${previous}`)).body as ProductionReport;
-    const planned = await t.as.head_brewer.post('/api/batches').send({ recipeVersionId: versionId, brewDate: lastMonthMid.toISOString().slice(0, 10) });
+    const planned = await t.as.head_brewer
+      .post('/api/batches')
+      .send({ recipeVersionId: versionId, brewDate: lastMonthMid.toISOString().slice(0, 10) });
     ok(planned, 201);
     const id = planned.body.id as number;
     ok(
       await t.as.assistant_brewer
         .post(`/api/batches/${id}/log`)
         .set(writeHeaders({ capturedAt: lastMonthMid }))
-        .send({ kind: 'step', stepKey: 'knockout-end', label: 'Knockout end', measurements: { gravitySg: 1.054, volumeL: 30 } }),
+        .send({
+          kind: 'step',
+          stepKey: 'knockout-end',
+          label: 'Knockout end',
+          measurements: { gravitySg: 1.054, volumeL: 30 },
+        }),
       201,
     );
     ok(await t.as.assistant_brewer.post(`/api/batches/${id}/status`).send({ status: 'fermenting' }));
-    ok(await t.as.assistant_brewer.post(`/api/cellar/batches/${id}/packaging`).set(writeHeaders()).send({ kind: 'packaging', lines: [KEG], final: true }), 201);
+    ok(
+      await t.as.assistant_brewer
+        .post(`/api/cellar/batches/${id}/packaging`)
+        .set(writeHeaders())
+        .send({ kind: 'packaging', lines: [KEG], final: true }),
+      201,
+    );
 
     const last = (await t.as.head_brewer.get(`/api/reports/production?month=${previous}`)).body as ProductionReport;
     expect(last.totals.brewedL - before.totals.brewedL).toBeCloseTo(30, 9);
@@ -173,7 +215,11 @@ describe('batch history', () => {
     ok(res);
     const history = res.body as BatchHistory;
     expect(history.recipeName).toBe('Report Amber');
-    expect(history.rows.map((r) => r.batchId).filter((id) => [dumpedId, inTankId, packagedId].includes(id))).toEqual([dumpedId, inTankId, packagedId]);
+    expect(history.rows.map((r) => r.batchId).filter((id) => [dumpedId, inTankId, packagedId].includes(id))).toEqual([
+      dumpedId,
+      inTankId,
+      packagedId,
+    ]);
     const row = history.rows.find((r) => r.batchId === packagedId)!;
     expect(row.actualOg).toBe(1.056);
     // Apparent attenuation (OG − FG)/(OG − 1): (1.056 − 1.012)/0.056 = 0.7857 (Palmer, How to Brew, 4th ed.).
@@ -184,7 +230,13 @@ describe('batch history', () => {
     const plan = detail.body.plan ?? detail.body;
     expect(row.plannedOg).toBeCloseTo(plan.computed?.og ?? row.plannedOg, 12);
     expect(row.actualEfficiency).toBeCloseTo(
-      achievedEfficiency({ plannedEfficiency: row.plannedEfficiency, plannedOg: row.plannedOg, plannedVolumeL: plan.computed?.volumes?.knockoutL ?? 0, actualOg: 1.056, actualVolumeL: 40 }),
+      achievedEfficiency({
+        plannedEfficiency: row.plannedEfficiency,
+        plannedOg: row.plannedOg,
+        plannedVolumeL: plan.computed?.volumes?.knockoutL ?? 0,
+        actualOg: 1.056,
+        actualVolumeL: 40,
+      }),
       9,
     );
     expect(history.rows.find((r) => r.batchId === inTankId)!.daysBrewToPackage).toBeNull();
@@ -200,13 +252,21 @@ describe('batch history', () => {
       await t.as.assistant_brewer
         .post(`/api/batches/${inTankId}/log`)
         .set(writeHeaders())
-        .send({ kind: 'correction', correctsEntryId: posted.body.logEntryId, reason: 'Typed 1.100 for 1.010', measurements: { gravitySg: 1.01 } }),
+        .send({
+          kind: 'correction',
+          correctsEntryId: posted.body.logEntryId,
+          reason: 'Typed 1.100 for 1.010',
+          measurements: { gravitySg: 1.01 },
+        }),
       201,
     );
     const res = await t.as.head_brewer.get(`/api/reports/history?recipeId=${recipeId}`);
     ok(res);
     // (1.050 − 1.010)/(1.050 − 1) = 0.8, by the same formula as above.
-    expect((res.body as BatchHistory).rows.find((r) => r.batchId === inTankId)!.apparentAttenuation).toBeCloseTo(0.8, 9);
+    expect((res.body as BatchHistory).rows.find((r) => r.batchId === inTankId)!.apparentAttenuation).toBeCloseTo(
+      0.8,
+      9,
+    );
   });
 
   it('answers 404 for another brewery’s recipe', async () => {
@@ -230,16 +290,35 @@ describe('a corrected knockout', () => {
     const pilot = await c.as.head_brewer.post('/api/equipment').send(DEMO_EQUIPMENT.pilot);
     ok(pilot, 201);
     const recipe = await c.as.head_brewer.post('/api/recipes').send({
-      name: 'Corrected Amber', style: 'Spiced amber', description: '', status: 'active', changeNote: 'First', equipmentProfileId: pilot.body.id, content: SEASONAL_CONTENT,
+      name: 'Corrected Amber',
+      style: 'Spiced amber',
+      description: '',
+      status: 'active',
+      changeNote: 'First',
+      equipmentProfileId: pilot.body.id,
+      content: SEASONAL_CONTENT,
     });
     ok(recipe, 201);
-    const planned = await c.as.head_brewer.post('/api/batches').send({ recipeVersionId: recipe.body.versionId, brewDate: new Date().toISOString().slice(0, 10) });
+    const planned = await c.as.head_brewer
+      .post('/api/batches')
+      .send({ recipeVersionId: recipe.body.versionId, brewDate: new Date().toISOString().slice(0, 10) });
     ok(planned, 201);
     const id = planned.body.id as number;
     const log = (body: object) => c.as.assistant_brewer.post(`/api/batches/${id}/log`).set(writeHeaders()).send(body);
-    const knockout = await log({ kind: 'step', stepKey: 'knockout-end', label: 'Knockout end', measurements: { gravitySg: 1.05, volumeL: 40 } });
+    const knockout = await log({
+      kind: 'step',
+      stepKey: 'knockout-end',
+      label: 'Knockout end',
+      measurements: { gravitySg: 1.05, volumeL: 40 },
+    });
     ok(knockout, 201);
-    const correct = (measurements: object) => log({ kind: 'correction', correctsEntryId: knockout.body.id, reason: 'Read the sight glass again', measurements });
+    const correct = (measurements: object) =>
+      log({
+        kind: 'correction',
+        correctsEntryId: knockout.body.id,
+        reason: 'Read the sight glass again',
+        measurements,
+      });
     ok(await correct({ volumeL: 41 }), 201);
     ok(await correct({ gravitySg: 1.052 }), 201);
     ok(await correct({ volumeL: 42 }), 201);
@@ -247,13 +326,20 @@ describe('a corrected knockout', () => {
     const report = (await c.as.head_brewer.get(`/api/reports/production?month=${month}`)).body as ProductionReport;
     expect(report.totals.brewedL).toBe(42);
     expect(report.totals.inTankL).toBe(42);
-    const history = (await c.as.head_brewer.get(`/api/reports/history?recipeId=${recipe.body.id}`)).body as BatchHistory;
+    const history = (await c.as.head_brewer.get(`/api/reports/history?recipeId=${recipe.body.id}`))
+      .body as BatchHistory;
     const row = history.rows.find((r) => r.batchId === id)!;
     expect(row.actualOg).toBe(1.052);
     const detail = await c.as.head_brewer.get(`/api/batches/${id}`);
     const plan = detail.body.plan ?? detail.body;
     expect(row.actualEfficiency).toBeCloseTo(
-      achievedEfficiency({ plannedEfficiency: row.plannedEfficiency, plannedOg: row.plannedOg, plannedVolumeL: plan.computed?.volumes?.knockoutL ?? 0, actualOg: 1.052, actualVolumeL: 42 }),
+      achievedEfficiency({
+        plannedEfficiency: row.plannedEfficiency,
+        plannedOg: row.plannedOg,
+        plannedVolumeL: plan.computed?.volumes?.knockoutL ?? 0,
+        actualOg: 1.052,
+        actualVolumeL: 42,
+      }),
       9,
     );
   });

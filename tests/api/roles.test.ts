@@ -25,7 +25,8 @@ function sampleParams(t: TestBrewery): Record<string, string> {
 const UNKNOWN_ID = '2147483000';
 
 function concretePath(route: RouteEntry, params: Record<string, string>): string {
-  if (/[*{}]/.test(route.path)) throw new Error(`The matrix cannot fill ${route.path}: teach concretePath() its syntax`);
+  if (/[*{}]/.test(route.path))
+    throw new Error(`The matrix cannot fill ${route.path}: teach concretePath() its syntax`);
   return route.path.replace(/:(\w+)/g, (_, name: string) => params[name] ?? UNKNOWN_ID);
 }
 
@@ -56,7 +57,8 @@ async function signInCookie(caller: Role): Promise<string> {
 async function cookieFor(caller: Caller): Promise<string | undefined> {
   if (caller === 'signed-out') return undefined;
   const current = cookies[caller];
-  if (current && (await request(apps[caller]).get('/api/auth/me').set('Cookie', current)).status === 200) return current;
+  if (current && (await request(apps[caller]).get('/api/auth/me').set('Cookie', current)).status === 200)
+    return current;
   cookies[caller] = await signInCookie(caller);
   return cookies[caller];
 }

@@ -21,7 +21,10 @@ export function paramKind(path: string, param: string): string {
   if (param !== 'id') return param;
   const segment = path.split('/')[path.split('/').indexOf(':id') - 1] ?? '';
   const kind = ID_SEGMENTS[segment];
-  if (!kind) throw new Error(`':id' after '/${segment}' names no known kind: add the segment to ID_SEGMENTS in tests/api/route-samples.ts`);
+  if (!kind)
+    throw new Error(
+      `':id' after '/${segment}' names no known kind: add the segment to ID_SEGMENTS in tests/api/route-samples.ts`,
+    );
   return kind;
 }
 
@@ -38,10 +41,20 @@ function recipeOf(b: TestBrewery) {
     recipes.set(
       b,
       (async () => {
-        const equipment = await ok<{ id: number }>(b.as.head_brewer.post('/api/equipment').send({ ...DEMO_EQUIPMENT.pilot, name: `Pilot ${randomUUID().slice(0, 6)}` }));
+        const equipment = await ok<{ id: number }>(
+          b.as.head_brewer
+            .post('/api/equipment')
+            .send({ ...DEMO_EQUIPMENT.pilot, name: `Pilot ${randomUUID().slice(0, 6)}` }),
+        );
         const recipe = await ok<{ id: number; versionId: number }>(
           b.as.head_brewer.post('/api/recipes').send({
-            name: `Sample ${randomUUID().slice(0, 6)}`, style: 'Amber', description: '', status: 'draft', changeNote: 'First', equipmentProfileId: equipment.id, content: SEASONAL_CONTENT,
+            name: `Sample ${randomUUID().slice(0, 6)}`,
+            style: 'Amber',
+            description: '',
+            status: 'draft',
+            changeNote: 'First',
+            equipmentProfileId: equipment.id,
+            content: SEASONAL_CONTENT,
           }),
         );
         return { recipeId: recipe.id, versionId: recipe.versionId, equipmentId: equipment.id };
@@ -51,7 +64,8 @@ function recipeOf(b: TestBrewery) {
   return recipes.get(b)!;
 }
 
-const batchOf = async (b: TestBrewery) => (await plannedBatch({ id: b.users.head_brewer.id, breweryId: b.brewery.id })).id;
+const batchOf = async (b: TestBrewery) =>
+  (await plannedBatch({ id: b.users.head_brewer.id, breweryId: b.brewery.id })).id;
 
 /** How to get a real row of the kind a path parameter names, inside the given brewery. */
 export const ID_MAKERS: Record<string, Maker> = {
@@ -74,11 +88,25 @@ export const ID_MAKERS: Record<string, Maker> = {
   batchId: batchOf,
   entryId: async (b) => {
     const batchId = await batchOf(b);
-    return (await ok<{ id: number }>(b.as.assistant_brewer.post(`/api/batches/${batchId}/log`).set(writeHeaders()).send(NOTE))).id;
+    return (
+      await ok<{ id: number }>(b.as.assistant_brewer.post(`/api/batches/${batchId}/log`).set(writeHeaders()).send(NOTE))
+    ).id;
   },
-  vesselId: async (b) => (await ok<{ id: number }>(b.as.head_brewer.post('/api/vessels').send({ ...VESSEL, name: `Tank ${randomUUID().slice(0, 6)}` }))).id,
+  vesselId: async (b) =>
+    (
+      await ok<{ id: number }>(
+        b.as.head_brewer.post('/api/vessels').send({ ...VESSEL, name: `Tank ${randomUUID().slice(0, 6)}` }),
+      )
+    ).id,
   alertId: async (b) => {
-    const alert = await Alert.create({ breweryId: b.brewery.id, batchId: await batchOf(b), kind: 'stalled', message: 'Gravity has not moved in three readings', emailedAt: null, readAt: null });
+    const alert = await Alert.create({
+      breweryId: b.brewery.id,
+      batchId: await batchOf(b),
+      kind: 'stalled',
+      message: 'Gravity has not moved in three readings',
+      emailedAt: null,
+      readAt: null,
+    });
     return alert.id;
   },
   // Taproom: a fermenting batch with a signed tasting note, a photo row and a beer on tap.
@@ -132,7 +160,14 @@ export const ID_MAKERS: Record<string, Maker> = {
 
 const INGREDIENT = { kind: 'hop', name: 'Harbour Gold', alphaAcidPct: 9.5, notes: '' };
 const NOTE = { kind: 'note', text: 'Sample note' };
-const VESSEL = { name: 'Tank', type: 'fermenter', capacity: 1200, capacityUnit: 'l', ratedPressure: 200, pressureUnit: 'kpa' };
+const VESSEL = {
+  name: 'Tank',
+  type: 'fermenter',
+  capacity: 1200,
+  capacityUnit: 'l',
+  ratedPressure: 200,
+  pressureUnit: 'kpa',
+};
 
 /** A body each write route with a path id accepts (validated by its own schema in the tests). */
 export const VALID_BODIES: Record<string, (ids: Record<string, number>) => unknown> = {
@@ -144,16 +179,41 @@ export const VALID_BODIES: Record<string, (ids: Record<string, number>) => unkno
   'POST /api/batches/:id/log': () => NOTE,
   'PUT /api/vessels/:vesselId': () => VESSEL,
   'PUT /api/equipment/:equipmentId': () => DEMO_EQUIPMENT.pilot,
-  'POST /api/recipes/:recipeId/versions': () => ({ changeNote: 'Sample', equipmentProfileId: 1, content: SEASONAL_CONTENT }),
-  'PATCH /api/recipes/:recipeId/versions/:versionId': () => ({ changeNote: 'Sample', equipmentProfileId: 1, content: SEASONAL_CONTENT }),
+  'POST /api/recipes/:recipeId/versions': () => ({
+    changeNote: 'Sample',
+    equipmentProfileId: 1,
+    content: SEASONAL_CONTENT,
+  }),
+  'PATCH /api/recipes/:recipeId/versions/:versionId': () => ({
+    changeNote: 'Sample',
+    equipmentProfileId: 1,
+    content: SEASONAL_CONTENT,
+  }),
   'PUT /api/batches/:id/vessel': () => ({ vesselId: 1 }),
   'POST /api/batches/:id/sign-off': () => ({ password: GOOD_PASSWORD }),
   'PUT /api/cellar/batches/:batchId/plan': () => ({
-    plannedFg: 1.012, tempUnit: 'c', primaryTemp: 19, dRestPoints: 3, dRestTemp: 21, crashTemp: 1, co2Volumes: 2.5, readingIntervalHours: 24,
+    plannedFg: 1.012,
+    tempUnit: 'c',
+    primaryTemp: 19,
+    dRestPoints: 3,
+    dRestTemp: 21,
+    crashTemp: 1,
+    co2Volumes: 2.5,
+    readingIntervalHours: 24,
   }),
-  'POST /api/cellar/batches/:batchId/readings': () => ({ kind: 'reading', method: 'hydrometer', gravity: 1.05, gravityUnit: 'sg', temp: 19, tempUnit: 'c' }),
+  'POST /api/cellar/batches/:batchId/readings': () => ({
+    kind: 'reading',
+    method: 'hydrometer',
+    gravity: 1.05,
+    gravityUnit: 'sg',
+    temp: 19,
+    tempUnit: 'c',
+  }),
   'POST /api/cellar/batches/:batchId/actions': () => ({ kind: 'action', action: 'cold_crash', temp: 1, tempUnit: 'c' }),
-  'POST /api/cellar/batches/:batchId/packaging': () => ({ kind: 'packaging', lines: [{ kind: 'can', sizeMl: 473, count: 1 }] }),
+  'POST /api/cellar/batches/:batchId/packaging': () => ({
+    kind: 'packaging',
+    lines: [{ kind: 'can', sizeMl: 473, count: 1 }],
+  }),
   'POST /api/batches/:batchId/tasting-notes': () => ({ idempotencyKey: randomUUID(), content: TASTING_CONTENT }),
   'PUT /api/batches/:batchId/release': () => SHEET,
   'POST /api/batches/:batchId/release/publish': () => ({ confirmedOg: 1.05, confirmedFg: 1.01 }),
@@ -172,7 +232,8 @@ export function idSource(b: TestBrewery) {
   const cache = new Map<string, Promise<number>>();
   return async (param: string): Promise<number> => {
     const make = ID_MAKERS[param];
-    if (!make) throw new Error(`No way to make an id for ':${param}': add it to ID_MAKERS in tests/api/route-samples.ts`);
+    if (!make)
+      throw new Error(`No way to make an id for ':${param}': add it to ID_MAKERS in tests/api/route-samples.ts`);
     if (!cache.has(param)) cache.set(param, make(b));
     return cache.get(param)!;
   };

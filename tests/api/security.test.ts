@@ -24,7 +24,10 @@ describe('sign-in rate limit', () => {
       ['no e-mail', () => client.post('/api/auth/sign-in').send({ password: GOOD_PASSWORD })],
       ['no password', () => client.post('/api/auth/sign-in').send({ email })],
       ['no body', () => client.post('/api/auth/sign-in')],
-      ['an unknown field', () => client.post('/api/auth/sign-in').send({ email, password: GOOD_PASSWORD, remember: true })],
+      [
+        'an unknown field',
+        () => client.post('/api/auth/sign-in').send({ email, password: GOOD_PASSWORD, remember: true }),
+      ],
       ['a number for the e-mail', () => client.post('/api/auth/sign-in').send({ email: 42, password: GOOD_PASSWORD })],
       ['an empty password', () => client.post('/api/auth/sign-in').send({ email, password: '' })],
       ['a reset request without an e-mail', () => client.post('/api/auth/reset-request').send({})],
@@ -61,9 +64,21 @@ describe('sign-in rate limit', () => {
     const email = t.users.taproom_manager.email;
     expect((await client.post('/api/auth/sign-in').send({ email, password: GOOD_PASSWORD })).status).toBe(200);
     for (let i = 1; i <= 5; i++) {
-      expect((await client.post('/api/auth/password').send({ currentPassword: `guess-${i}`, newPassword: 'Tidal-brine-copper-88' })).status).toBe(400);
+      expect(
+        (
+          await client
+            .post('/api/auth/password')
+            .send({ currentPassword: `guess-${i}`, newPassword: 'Tidal-brine-copper-88' })
+        ).status,
+      ).toBe(400);
     }
-    expect((await client.post('/api/auth/password').send({ currentPassword: 'guess-6', newPassword: 'Tidal-brine-copper-88' })).status).toBe(429);
+    expect(
+      (
+        await client
+          .post('/api/auth/password')
+          .send({ currentPassword: 'guess-6', newPassword: 'Tidal-brine-copper-88' })
+      ).status,
+    ).toBe(429);
   });
 
   it('each app keeps its own count: a client blocked by one app signs in on a freshly created one', async () => {
@@ -71,19 +86,28 @@ describe('sign-in rate limit', () => {
     const email = t.users.taproom_manager.email;
     for (let i = 1; i <= 5; i++) await blocked.post('/api/auth/sign-in').send({ email, password: `miss-${i}` });
     expect((await blocked.post('/api/auth/sign-in').send({ email, password: GOOD_PASSWORD })).status).toBe(429);
-    expect((await agent(createApp()).post('/api/auth/sign-in').send({ email, password: GOOD_PASSWORD })).status).toBe(200);
+    expect((await agent(createApp()).post('/api/auth/sign-in').send({ email, password: GOOD_PASSWORD })).status).toBe(
+      200,
+    );
   });
 });
 
 describe('forged cross-site writes are refused', () => {
   async function nothingWritten(email: string) {
     expect(await Invite.count({ where: { email } })).toBe(0);
-    expect(mailCatcher().messages().filter((m) => m.to.includes(email))).toHaveLength(0);
+    expect(
+      mailCatcher()
+        .messages()
+        .filter((m) => m.to.includes(email)),
+    ).toHaveLength(0);
   }
 
   it('without the x-kettlewright header → 403 and nothing is written', async () => {
     const email = `forged.${tag()}@test.example`;
-    const res = await t.as.head_brewer.post('/api/team/invites').unset('x-kettlewright').send({ email, role: 'head_brewer' });
+    const res = await t.as.head_brewer
+      .post('/api/team/invites')
+      .unset('x-kettlewright')
+      .send({ email, role: 'head_brewer' });
     expect(res.status).toBe(403);
     expect(res.body.error.code).toBe('forbidden');
     await nothingWritten(email);
@@ -101,7 +125,10 @@ describe('forged cross-site writes are refused', () => {
 
   it('a forged role change is refused and the teammate keeps their role', async () => {
     const target = t.users.assistant_brewer;
-    const noHeader = await t.as.head_brewer.patch(`/api/team/${target.id}`).unset('x-kettlewright').send({ role: 'head_brewer' });
+    const noHeader = await t.as.head_brewer
+      .patch(`/api/team/${target.id}`)
+      .unset('x-kettlewright')
+      .send({ role: 'head_brewer' });
     const evil = await t.as.head_brewer
       .patch(`/api/team/${target.id}`)
       .set('Origin', 'https://evil.example')
@@ -319,11 +346,15 @@ describe('audit_events is append-only for the application account', () => {
   });
 
   it('TRUNCATE is denied by the database', async () => {
-    await expect(sequelize.query('TRUNCATE TABLE audit_events', { type: QueryTypes.RAW })).rejects.toThrow(/command denied/i);
+    await expect(sequelize.query('TRUNCATE TABLE audit_events', { type: QueryTypes.RAW })).rejects.toThrow(
+      /command denied/i,
+    );
   });
 
   it('through the model as well, and the row is unchanged afterwards', async () => {
-    await expect(AuditEvent.update({ action: 'tampered' }, { where: { id: row.id } })).rejects.toThrow(/UPDATE command denied/i);
+    await expect(AuditEvent.update({ action: 'tampered' }, { where: { id: row.id } })).rejects.toThrow(
+      /UPDATE command denied/i,
+    );
     await expect(AuditEvent.destroy({ where: { id: row.id } })).rejects.toThrow(/DELETE command denied/i);
     const again = await AuditEvent.findByPk(row.id);
     expect(again!.action).toBe('test.append-only');
@@ -341,7 +372,10 @@ describe('audit_events is append-only for the application account', () => {
 
 describe('migrations re-grant the application account without a gap', () => {
   it('a stray privilege is revoked and the account keeps its own, while it goes on reading', async () => {
-    const owner = new Sequelize(process.env.KW_OWNER_DATABASE_URL!.replace(/^mysql:/, 'mariadb:'), { dialect: 'mariadb', logging: false });
+    const owner = new Sequelize(process.env.KW_OWNER_DATABASE_URL!.replace(/^mysql:/, 'mariadb:'), {
+      dialect: 'mariadb',
+      logging: false,
+    });
     const appUser = decodeURIComponent(new URL(process.env.DATABASE_URL!).username);
     const privileges = async () =>
       (
@@ -359,7 +393,8 @@ describe('migrations re-grant the application account without a gap', () => {
       let reading = true;
       const reads = (async () => {
         let n = 0;
-        while (reading) n += (await sequelize.query('SELECT COUNT(*) AS n FROM sessions', { type: QueryTypes.SELECT })).length;
+        while (reading)
+          n += (await sequelize.query('SELECT COUNT(*) AS n FROM sessions', { type: QueryTypes.SELECT })).length;
         return n;
       })();
       await migrate(process.env.KW_OWNER_DATABASE_URL!, appUser);

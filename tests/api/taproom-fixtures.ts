@@ -27,7 +27,12 @@ export async function brewedBatch(t: TestBrewery, options: BrewedOptions): Promi
     await as
       .post(`/api/batches/${batch.id}/log`)
       .set(writeHeaders())
-      .send({ kind: 'step', stepKey: 'knockout-end', label: 'Knockout end', measurements: { gravitySg: options.og, volumeL: 45 } }),
+      .send({
+        kind: 'step',
+        stepKey: 'knockout-end',
+        label: 'Knockout end',
+        measurements: { gravitySg: options.og, volumeL: 45 },
+      }),
     201,
   );
   await ok(await as.post(`/api/batches/${batch.id}/status`).send({ status: 'fermenting' }), 200);
@@ -46,7 +51,14 @@ export async function brewedBatch(t: TestBrewery, options: BrewedOptions): Promi
       await as
         .post(`/api/cellar/batches/${batch.id}/packaging`)
         .set(writeHeaders())
-        .send({ kind: 'packaging', lines: [{ kind: 'keg', size: 'sixth_bbl', count: 2 }, { kind: 'can', sizeMl: 473, count: 12 }], final: true }),
+        .send({
+          kind: 'packaging',
+          lines: [
+            { kind: 'keg', size: 'sixth_bbl', count: 2 },
+            { kind: 'can', sizeMl: 473, count: 12 },
+          ],
+          final: true,
+        }),
       201,
     );
   }

@@ -31,11 +31,22 @@ beforeAll(async () => {
   await t.as.assistant_brewer.post(`/api/batches/${conditioning.id}/status`).send({ status: 'conditioning' });
   unreleased = await brewedBatch(t, { og: 1.07, readings: [1.04] });
 
-  const jpeg = await sharp({ create: { width: 800, height: 600, channels: 3, background: '#c98a2b' } }).jpeg().toBuffer();
-  photoId = (await t.as.head_brewer.post(`/api/batches/${batch.id}/attachments`).attach('file', jpeg, 'pour.jpg')).body.id;
-  labSheetId = (await t.as.head_brewer.post(`/api/batches/${batch.id}/attachments`).attach('file', Buffer.from('%PDF-1.4\n%%EOF\n'), 'lab.pdf')).body.id;
-  await t.as.head_brewer.put(`/api/batches/${unreleased.id}/release`).send({ ...SHEET, beerName: 'Secret Porter', style: 'Porter' });
-  await t.as.head_brewer.put(`/api/batches/${conditioning.id}/release`).send({ ...SHEET, beerName: 'Foghorn Lager', style: 'Helles', comingSoon: true });
+  const jpeg = await sharp({ create: { width: 800, height: 600, channels: 3, background: '#c98a2b' } })
+    .jpeg()
+    .toBuffer();
+  photoId = (await t.as.head_brewer.post(`/api/batches/${batch.id}/attachments`).attach('file', jpeg, 'pour.jpg')).body
+    .id;
+  labSheetId = (
+    await t.as.head_brewer
+      .post(`/api/batches/${batch.id}/attachments`)
+      .attach('file', Buffer.from('%PDF-1.4\n%%EOF\n'), 'lab.pdf')
+  ).body.id;
+  await t.as.head_brewer
+    .put(`/api/batches/${unreleased.id}/release`)
+    .send({ ...SHEET, beerName: 'Secret Porter', style: 'Porter' });
+  await t.as.head_brewer
+    .put(`/api/batches/${conditioning.id}/release`)
+    .send({ ...SHEET, beerName: 'Foghorn Lager', style: 'Helles', comingSoon: true });
   await t.as.head_brewer
     .post(`/api/batches/${conditioning.id}/tasting-notes`)
     .send({ idempotencyKey: randomUUID(), content: { ...TASTING_CONTENT, aroma: 'Bread crust', score: 4.5 } });
@@ -59,41 +70,61 @@ describe('releasing a batch', () => {
   });
 
   it('refuses to release before the sheet is written, and refuses numbers that differ from the log', async () => {
-    const early = await t.as.head_brewer.post(`/api/batches/${batch.id}/release/publish`).send({ confirmedOg: 1.062, confirmedFg: 1.012 });
+    const early = await t.as.head_brewer
+      .post(`/api/batches/${batch.id}/release/publish`)
+      .send({ confirmedOg: 1.062, confirmedFg: 1.012 });
     expect(early.status).toBe(409);
     expect(early.body.error.message).toMatch(/release sheet/);
 
-    const saved = await t.as.head_brewer.put(`/api/batches/${batch.id}/release`).send({ ...SHEET, photoAttachmentId: photoId });
+    const saved = await t.as.head_brewer
+      .put(`/api/batches/${batch.id}/release`)
+      .send({ ...SHEET, photoAttachmentId: photoId });
     expect(saved.status, JSON.stringify(saved.body)).toBe(200);
     expect(saved.body.state).toBe('draft');
 
     // Confirming the second-to-last reading: the log has moved on since.
-    const stale = await t.as.head_brewer.post(`/api/batches/${batch.id}/release/publish`).send({ confirmedOg: 1.062, confirmedFg: 1.014 });
+    const stale = await t.as.head_brewer
+      .post(`/api/batches/${batch.id}/release/publish`)
+      .send({ confirmedOg: 1.062, confirmedFg: 1.014 });
     expect(stale.status).toBe(409);
     expect(stale.body.error.message).toContain('FG 1.012');
   });
 
   it('refuses a lab sheet as the beer’s photo, and a batch that is not packaged yet', async () => {
-    const pdf = await t.as.head_brewer.put(`/api/batches/${batch.id}/release`).send({ ...SHEET, photoAttachmentId: labSheetId });
+    const pdf = await t.as.head_brewer
+      .put(`/api/batches/${batch.id}/release`)
+      .send({ ...SHEET, photoAttachmentId: labSheetId });
     expect(pdf.status).toBe(422);
-    const notPackaged = await t.as.head_brewer.post(`/api/batches/${conditioning.id}/release/publish`).send({ confirmedOg: 1.048, confirmedFg: 1.01 });
+    const notPackaged = await t.as.head_brewer
+      .post(`/api/batches/${conditioning.id}/release/publish`)
+      .send({ confirmedOg: 1.048, confirmedFg: 1.01 });
     expect(notPackaged.status).toBe(409);
     expect(notPackaged.body.error.message).toMatch(/packaged/);
   });
 
   it('releases: freezes the numbers, puts the beer on tap and moves the batch to released', async () => {
-    const res = await t.as.head_brewer.post(`/api/batches/${batch.id}/release/publish`).send({ confirmedOg: 1.062, confirmedFg: 1.012 });
+    const res = await t.as.head_brewer
+      .post(`/api/batches/${batch.id}/release/publish`)
+      .send({ confirmedOg: 1.062, confirmedFg: 1.012 });
     expect(res.status, JSON.stringify(res.body)).toBe(200);
     expect(res.body).toMatchObject({ state: 'on_tap', releasedBy: t.users.head_brewer.displayName });
     expect(res.body.numbers.abvPct).toBeCloseTo(abv(1.062, 1.012), 10);
     expect((await t.as.head_brewer.get(`/api/batches/${batch.id}`)).body.status).toBe('released');
-    const again = await t.as.head_brewer.post(`/api/batches/${batch.id}/release/publish`).send({ confirmedOg: 1.062, confirmedFg: 1.012 });
+    const again = await t.as.head_brewer
+      .post(`/api/batches/${batch.id}/release/publish`)
+      .send({ confirmedOg: 1.062, confirmedFg: 1.012 });
     expect(again.status).toBe(409);
   });
 
   it('lets only the head brewer write or release (the assistant gets 403)', async () => {
     expect((await t.as.assistant_brewer.put(`/api/batches/${batch.id}/release`).send(SHEET)).status).toBe(403);
-    expect((await t.as.assistant_brewer.post(`/api/batches/${batch.id}/release/publish`).send({ confirmedOg: 1.062, confirmedFg: 1.012 })).status).toBe(403);
+    expect(
+      (
+        await t.as.assistant_brewer
+          .post(`/api/batches/${batch.id}/release/publish`)
+          .send({ confirmedOg: 1.062, confirmedFg: 1.012 })
+      ).status,
+    ).toBe(403);
   });
 });
 
@@ -111,11 +142,18 @@ describe("the taproom manager's home", () => {
       glass: 'nonic_pint',
       servingTempC: 5,
       allergens: ['gluten'],
-      packageSizes: [{ label: '⅙ bbl keg', count: 2 }, { label: '473 mL can', count: 12 }],
+      packageSizes: [
+        { label: '⅙ bbl keg', count: 2 },
+        { label: '473 mL can', count: 12 },
+      ],
       photo: { id: photoId },
     });
     expect(onTap.abvPct).toBeCloseTo(abv(1.062, 1.012), 10);
-    expect(soon).toMatchObject({ state: 'coming_soon', abvIsPlanned: true, tasting: { tasters: 1, averageScore: 4.5, aroma: 'Bread crust' } });
+    expect(soon).toMatchObject({
+      state: 'coming_soon',
+      abvIsPlanned: true,
+      tasting: { tasters: 1, averageScore: 4.5, aroma: 'Bread crust' },
+    });
     // Public facts only: nothing from the brewing records rides along.
     expect(Object.keys(onTap)).not.toEqual(expect.arrayContaining(['plan']));
     expect(JSON.stringify(res.body)).not.toContain('Secret Porter');
@@ -123,7 +161,10 @@ describe("the taproom manager's home", () => {
   });
 
   it('searches by words and filters by style and strength', async () => {
-    const q = async (query: string) => (await t.as.taproom_manager.get(`/api/taproom/beers?${query}`)).body.beers.map((b: { beerName: string }) => b.beerName);
+    const q = async (query: string) =>
+      (await t.as.taproom_manager.get(`/api/taproom/beers?${query}`)).body.beers.map(
+        (b: { beerName: string }) => b.beerName,
+      );
     expect(await q('q=foghorn')).toEqual(['Foghorn Lager']);
     expect(await q('q=piney')).toEqual(['Breakwater Pale', 'Foghorn Lager']); // both sheets share the test description
     expect(await q('style=Helles')).toEqual(['Foghorn Lager']);
@@ -138,8 +179,19 @@ describe("the taproom manager's home", () => {
       const b = await plannedBatch({ id: other.users.head_brewer.id, breweryId: other.brewery.id });
       const { comingSoon: _, ...sheet } = SHEET;
       await Release.create({
-        ...sheet, beerName, breweryId: other.brewery.id, batchId: b.id, state: 'on_tap', og: 1.05, fg: 1.01, abvPct, abvMethod: 'balling',
-        ibu: 30, srm: 5, releasedAt: new Date(), releasedById: other.users.head_brewer.id,
+        ...sheet,
+        beerName,
+        breweryId: other.brewery.id,
+        batchId: b.id,
+        state: 'on_tap',
+        og: 1.05,
+        fg: 1.01,
+        abvPct,
+        abvMethod: 'balling',
+        ibu: 30,
+        srm: 5,
+        releasedAt: new Date(),
+        releasedById: other.users.head_brewer.id,
       });
     };
     await onTapAt('Shown 4.5', 4.4999); // shown as 4.5 %
@@ -147,7 +199,13 @@ describe("the taproom manager's home", () => {
     await onTapAt('Shown 6.5', 6.4951);
     await onTapAt('Shown 6.4', 6.449);
     const q = async (strength: string) =>
-      ((await other.as.taproom_manager.get(`/api/taproom/beers?strength=${strength}`)).body.beers as { beerName: string }[]).map((b) => b.beerName).sort();
+      (
+        (await other.as.taproom_manager.get(`/api/taproom/beers?strength=${strength}`)).body.beers as {
+          beerName: string;
+        }[]
+      )
+        .map((b) => b.beerName)
+        .sort();
     expect(await q('session')).toEqual(['Shown 4.4']);
     expect(await q('standard')).toEqual(['Shown 4.5', 'Shown 6.4']);
     expect(await q('strong')).toEqual(['Shown 6.5']);
@@ -199,13 +257,18 @@ describe("the taproom role's access matrix", () => {
   it('is refused by every recipe, batch, cellar and vessel route, as declared', () => {
     const brewingSide = routeTable.filter((r) => /^\/api\/(recipes|batches|cellar|vessels)(\/|$)/.test(r.path));
     expect(brewingSide.length).toBeGreaterThan(20);
-    const open = brewingSide.filter((r) => r.access === 'public' || r.access === 'signed-in' || r.access.includes('taproom_manager'));
+    const open = brewingSide.filter(
+      (r) => r.access === 'public' || r.access === 'signed-in' || r.access.includes('taproom_manager'),
+    );
     expect(open.map((r) => `${r.method} ${r.path}`)).toEqual([]);
   });
 });
 
 describe('taking a beer off tap', () => {
-  const onTapNames = async () => ((await t.as.taproom_manager.get('/api/taproom/beers')).body.beers as { beerName: string; state: string }[]).filter((b) => b.state === 'on_tap').map((b) => b.beerName);
+  const onTapNames = async () =>
+    ((await t.as.taproom_manager.get('/api/taproom/beers')).body.beers as { beerName: string; state: string }[])
+      .filter((b) => b.state === 'on_tap')
+      .map((b) => b.beerName);
 
   it('is the head brewer’s to do: the taproom manager and the assistant get 403, and the beer stays on tap', async () => {
     for (const role of ['taproom_manager', 'assistant_brewer'] as const) {
@@ -216,10 +279,17 @@ describe('taking a beer off tap', () => {
   });
 
   it('takes it off the tap list and the bar screen; its sheet, numbers and tasting notes stay', async () => {
-    await t.as.head_brewer.post(`/api/batches/${batch.id}/tasting-notes`).send({ idempotencyKey: randomUUID(), content: TASTING_CONTENT });
+    await t.as.head_brewer
+      .post(`/api/batches/${batch.id}/tasting-notes`)
+      .send({ idempotencyKey: randomUUID(), content: TASTING_CONTENT });
     const res = await t.as.head_brewer.post(`/api/batches/${batch.id}/release/off-tap`);
     expect(res.status, JSON.stringify(res.body)).toBe(200);
-    expect(res.body).toMatchObject({ state: 'off_tap', offTapBy: t.users.head_brewer.displayName, releasedBy: t.users.head_brewer.displayName, sheet: { beerName: 'Breakwater Pale' } });
+    expect(res.body).toMatchObject({
+      state: 'off_tap',
+      offTapBy: t.users.head_brewer.displayName,
+      releasedBy: t.users.head_brewer.displayName,
+      sheet: { beerName: 'Breakwater Pale' },
+    });
     expect(Date.now() - Date.parse(res.body.offTapAt)).toBeLessThan(60_000);
     expect(res.body.numbers.abvPct).toBeCloseTo(abv(1.062, 1.012), 10);
 
@@ -232,19 +302,31 @@ describe('taking a beer off tap', () => {
     // Kept for the record: the briefing sheet still opens, saying so; the batch stays released with its notes.
     const sheet = await t.as.taproom_manager.get(`/api/taproom/beers/${releaseId}`);
     expect(sheet.status).toBe(200);
-    expect(sheet.body).toMatchObject({ state: 'off_tap', beerName: 'Breakwater Pale', abvIsPlanned: false, offTapAt: res.body.offTapAt });
+    expect(sheet.body).toMatchObject({
+      state: 'off_tap',
+      beerName: 'Breakwater Pale',
+      abvIsPlanned: false,
+      offTapAt: res.body.offTapAt,
+    });
     expect((await t.as.head_brewer.get(`/api/batches/${batch.id}`)).body.status).toBe('released');
     expect((await t.as.head_brewer.get(`/api/batches/${batch.id}/tasting-notes`)).body).not.toHaveLength(0);
-    const candidates = (await t.as.head_brewer.get('/api/taproom/releases')).body as { batchId: number; state: string }[];
+    const candidates = (await t.as.head_brewer.get('/api/taproom/releases')).body as {
+      batchId: number;
+      state: string;
+    }[];
     expect(candidates.find((c) => c.batchId === batch.id)?.state).toBe('off_tap');
   });
 
   it('keeps it off tap when its sheet is saved again, and refuses to release it or take it off twice (409)', async () => {
-    const saved = await t.as.head_brewer.put(`/api/batches/${batch.id}/release`).send({ ...SHEET, comingSoon: true, servingNotes: 'Last keg gone.' });
+    const saved = await t.as.head_brewer
+      .put(`/api/batches/${batch.id}/release`)
+      .send({ ...SHEET, comingSoon: true, servingNotes: 'Last keg gone.' });
     expect(saved.status, JSON.stringify(saved.body)).toBe(200);
     expect(saved.body.state).toBe('off_tap');
     expect((await t.as.head_brewer.post(`/api/batches/${batch.id}/release/off-tap`)).status).toBe(409);
-    const publish = await t.as.head_brewer.post(`/api/batches/${batch.id}/release/publish`).send({ confirmedOg: 1.062, confirmedFg: 1.012 });
+    const publish = await t.as.head_brewer
+      .post(`/api/batches/${batch.id}/release/publish`)
+      .send({ confirmedOg: 1.062, confirmedFg: 1.012 });
     expect(publish.status).toBe(409);
     expect(publish.body.error.message).toMatch(/off tap/);
   });

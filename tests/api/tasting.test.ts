@@ -13,10 +13,17 @@ import type { Batch } from '../../server/models';
 let t: TestBrewery;
 let other: TestBrewery;
 let batch: Batch;
-const owner = new Sequelize(process.env.KW_OWNER_DATABASE_URL!.replace(/^mysql:/, 'mariadb:'), { dialect: 'mariadb', logging: false });
+const owner = new Sequelize(process.env.KW_OWNER_DATABASE_URL!.replace(/^mysql:/, 'mariadb:'), {
+  dialect: 'mariadb',
+  logging: false,
+});
 
 const content = (overrides: Record<string, unknown> = {}) => ({ ...TASTING_CONTENT, ...overrides });
-const note = (overrides: Record<string, unknown> = {}) => ({ idempotencyKey: randomUUID(), content: content(), ...overrides });
+const note = (overrides: Record<string, unknown> = {}) => ({
+  idempotencyKey: randomUUID(),
+  content: content(),
+  ...overrides,
+});
 
 beforeAll(async () => {
   t = await createTestBrewery();
@@ -31,7 +38,9 @@ describe('a signed tasting note', () => {
   let first: { id: number; signature: { contentHash: string } };
 
   it('is signed by its author from the session, with the server’s time', async () => {
-    const res = await t.as.assistant_brewer.post(`/api/batches/${batch.id}/tasting-notes`).send(note({ content: content({ offFlavours: ['diacetyl'] }) }));
+    const res = await t.as.assistant_brewer
+      .post(`/api/batches/${batch.id}/tasting-notes`)
+      .send(note({ content: content({ offFlavours: ['diacetyl'] }) }));
     expect(res.status, JSON.stringify(res.body)).toBe(201);
     expect(res.body.signature).toMatchObject({
       authorId: t.users.assistant_brewer.id,
@@ -47,8 +56,14 @@ describe('a signed tasting note', () => {
   });
 
   it('refuses a body that names an author or a signing time', async () => {
-    for (const extra of [{ authorId: t.users.head_brewer.id }, { signedAt: new Date().toISOString() }, { authorName: 'Someone else' }]) {
-      const res = await t.as.assistant_brewer.post(`/api/batches/${batch.id}/tasting-notes`).send({ ...note(), ...extra });
+    for (const extra of [
+      { authorId: t.users.head_brewer.id },
+      { signedAt: new Date().toISOString() },
+      { authorName: 'Someone else' },
+    ]) {
+      const res = await t.as.assistant_brewer
+        .post(`/api/batches/${batch.id}/tasting-notes`)
+        .send({ ...note(), ...extra });
       expect(res.status).toBe(400);
       expect(res.body.error.fields._).toMatch(/Unknown field/);
     }
@@ -63,14 +78,18 @@ describe('a signed tasting note', () => {
       [{ appearance: { colour: 'gold', clarity: 'murky-ish', head: 'good' } }, 'content.appearance.clarity'],
     ];
     for (const [bad, field] of cases) {
-      const res = await t.as.head_brewer.post(`/api/batches/${batch.id}/tasting-notes`).send(note({ content: content(bad) }));
+      const res = await t.as.head_brewer
+        .post(`/api/batches/${batch.id}/tasting-notes`)
+        .send(note({ content: content(bad) }));
       expect(res.status).toBe(400);
       expect(Object.keys(res.body.error.fields)).toContain(field);
     }
   });
 
   it('cannot be changed or deleted through the API (405)', async () => {
-    const patch = await t.as.assistant_brewer.patch(`/api/batches/${batch.id}/tasting-notes/${first.id}`).send({ score: 5 });
+    const patch = await t.as.assistant_brewer
+      .patch(`/api/batches/${batch.id}/tasting-notes/${first.id}`)
+      .send({ score: 5 });
     expect(patch.status).toBe(405);
     const del = await t.as.head_brewer.delete(`/api/batches/${batch.id}/tasting-notes/${first.id}`);
     expect(del.status).toBe(405);
@@ -78,15 +97,22 @@ describe('a signed tasting note', () => {
   });
 
   it('cannot be changed or deleted by the application’s own database account', async () => {
-    await expect(sequelize.query('UPDATE tasting_notes SET score = 5 WHERE id = ?', { replacements: [first.id], type: QueryTypes.UPDATE })).rejects.toThrow(
-      /command denied/i,
-    );
-    await expect(sequelize.query('DELETE FROM tasting_notes WHERE id = ?', { replacements: [first.id], type: QueryTypes.DELETE })).rejects.toThrow(/command denied/i);
+    await expect(
+      sequelize.query('UPDATE tasting_notes SET score = 5 WHERE id = ?', {
+        replacements: [first.id],
+        type: QueryTypes.UPDATE,
+      }),
+    ).rejects.toThrow(/command denied/i);
+    await expect(
+      sequelize.query('DELETE FROM tasting_notes WHERE id = ?', { replacements: [first.id], type: QueryTypes.DELETE }),
+    ).rejects.toThrow(/command denied/i);
     expect(Number((await TastingNote.findByPk(first.id))!.score)).toBe(4);
   });
 
   it('is corrected by a new note from the same taster that points at it and says why', async () => {
-    const noReason = await t.as.assistant_brewer.post(`/api/batches/${batch.id}/tasting-notes`).send(note({ correctsNoteId: first.id }));
+    const noReason = await t.as.assistant_brewer
+      .post(`/api/batches/${batch.id}/tasting-notes`)
+      .send(note({ correctsNoteId: first.id }));
     expect(noReason.status).toBe(400);
     expect(noReason.body.error.fields.reason).toMatch(/Say why/);
 
@@ -97,31 +123,53 @@ describe('a signed tasting note', () => {
 
     const fix = await t.as.assistant_brewer
       .post(`/api/batches/${batch.id}/tasting-notes`)
-      .send(note({ content: content({ score: 4.5 }), correctsNoteId: first.id, reason: 'Diacetyl was gone after the sample warmed' }));
+      .send(
+        note({
+          content: content({ score: 4.5 }),
+          correctsNoteId: first.id,
+          reason: 'Diacetyl was gone after the sample warmed',
+        }),
+      );
     expect(fix.status).toBe(201);
     expect(fix.body).toMatchObject({ correctsNoteId: first.id, reason: 'Diacetyl was gone after the sample warmed' });
 
-    const list = (await t.as.head_brewer.get(`/api/batches/${batch.id}/tasting-notes`)).body as { id: number; correctedBy: number[]; content: { score: number } }[];
+    const list = (await t.as.head_brewer.get(`/api/batches/${batch.id}/tasting-notes`)).body as {
+      id: number;
+      correctedBy: number[];
+      content: { score: number };
+    }[];
     const original = list.find((n) => n.id === first.id)!;
     expect(original.content.score).toBe(4);
     expect(original.correctedBy).toEqual([fix.body.id]);
   });
 
   it('records several tasters on one batch, each under their own name', async () => {
-    const res = await t.as.head_brewer.post(`/api/batches/${batch.id}/tasting-notes`).send(note({ content: content({ score: 3.5 }) }));
+    const res = await t.as.head_brewer
+      .post(`/api/batches/${batch.id}/tasting-notes`)
+      .send(note({ content: content({ score: 3.5 }) }));
     expect(res.status).toBe(201);
-    const list = (await t.as.assistant_brewer.get(`/api/batches/${batch.id}/tasting-notes`)).body as { signature: { authorName: string; valid: boolean } }[];
-    expect(new Set(list.map((n) => n.signature.authorName))).toEqual(new Set([t.users.assistant_brewer.displayName, t.users.head_brewer.displayName]));
+    const list = (await t.as.assistant_brewer.get(`/api/batches/${batch.id}/tasting-notes`)).body as {
+      signature: { authorName: string; valid: boolean };
+    }[];
+    expect(new Set(list.map((n) => n.signature.authorName))).toEqual(
+      new Set([t.users.assistant_brewer.displayName, t.users.head_brewer.displayName]),
+    );
     expect(list.every((n) => n.signature.valid)).toBe(true);
   });
 
   it('shows a note as invalid when its row is altered in the database', async () => {
     const victim = (await TastingNote.findOne({ where: { batchId: batch.id }, order: [['sequence', 'ASC']] }))!;
-    await owner.query(`UPDATE tasting_notes SET content = JSON_SET(content, '$.aroma', 'Nothing wrong here') WHERE id = ?`, {
-      replacements: [victim.id],
-      type: QueryTypes.UPDATE,
-    });
-    const list = (await t.as.head_brewer.get(`/api/batches/${batch.id}/tasting-notes`)).body as { id: number; signature: { valid: boolean } }[];
+    await owner.query(
+      `UPDATE tasting_notes SET content = JSON_SET(content, '$.aroma', 'Nothing wrong here') WHERE id = ?`,
+      {
+        replacements: [victim.id],
+        type: QueryTypes.UPDATE,
+      },
+    );
+    const list = (await t.as.head_brewer.get(`/api/batches/${batch.id}/tasting-notes`)).body as {
+      id: number;
+      signature: { valid: boolean };
+    }[];
     expect(list.find((n) => n.id === Number(victim.id))!.signature.valid).toBe(false);
     expect(list.filter((n) => n.id !== Number(victim.id)).every((n) => n.signature.valid)).toBe(true);
   });
@@ -145,7 +193,9 @@ describe('sending the same note twice', () => {
   it('refuses the same key with a different note (422)', async () => {
     const body = note();
     expect((await t.as.head_brewer.post(`/api/batches/${batch.id}/tasting-notes`).send(body)).status).toBe(201);
-    const res = await t.as.head_brewer.post(`/api/batches/${batch.id}/tasting-notes`).send({ ...body, content: content({ score: 2 }) });
+    const res = await t.as.head_brewer
+      .post(`/api/batches/${batch.id}/tasting-notes`)
+      .send({ ...body, content: content({ score: 2 }) });
     expect(res.status).toBe(422);
   });
 });

@@ -30,7 +30,11 @@ let other: { brewery: Brewery; user: User };
 beforeAll(async () => {
   a = await createTestBrewery();
   // Brewery B needs a person, not a session: created directly.
-  const brewery = await createBrewery({ name: `Other brewery ${tag()}`, unitSystem: 'metric', timeZone: 'Europe/Berlin' });
+  const brewery = await createBrewery({
+    name: `Other brewery ${tag()}`,
+    unitSystem: 'metric',
+    timeZone: 'Europe/Berlin',
+  });
   const user = await User.create({
     breweryId: brewery.id,
     email: `other.${tag()}@test.example`,
@@ -97,14 +101,23 @@ describe('inviting a teammate by e-mail', () => {
     expect(described.body).toEqual({ email, breweryName: a.brewery.name, role: 'assistant_brewer' });
 
     const newcomer = agent();
-    const accepted = await newcomer.post(`/api/auth/invites/${token}`).send({ displayName: 'New Brewer', password: GOOD_PASSWORD });
+    const accepted = await newcomer
+      .post(`/api/auth/invites/${token}`)
+      .send({ displayName: 'New Brewer', password: GOOD_PASSWORD });
     expect(accepted.status).toBe(201);
-    expect(accepted.body).toMatchObject({ email, displayName: 'New Brewer', role: 'assistant_brewer', brewery: { id: a.brewery.id } });
+    expect(accepted.body).toMatchObject({
+      email,
+      displayName: 'New Brewer',
+      role: 'assistant_brewer',
+      brewery: { id: a.brewery.id },
+    });
     const me = await newcomer.get('/api/auth/me');
     expect(me.status).toBe(200);
     expect(me.body).toMatchObject({ email, role: 'assistant_brewer', brewery: { id: a.brewery.id } });
 
-    const twice = await agent().post(`/api/auth/invites/${token}`).send({ displayName: 'Someone Else', password: GOOD_PASSWORD });
+    const twice = await agent()
+      .post(`/api/auth/invites/${token}`)
+      .send({ displayName: 'Someone Else', password: GOOD_PASSWORD });
     expect(twice.status).toBe(404);
     expect((await agent().get(`/api/auth/invites/${token}`)).status).toBe(404);
     expect(await User.count({ where: { email } })).toBe(1);
@@ -137,7 +150,9 @@ describe('inviting a teammate by e-mail', () => {
       .text.match(/\/join\/([A-Za-z0-9_-]+)/)![1];
     await Invite.update({ expiresAt: new Date(Date.now() - 1000) }, { where: { id: sent.body.id } });
     expect((await agent().get(`/api/auth/invites/${token}`)).status).toBe(404);
-    expect((await agent().post(`/api/auth/invites/${token}`).send({ displayName: 'Late', password: GOOD_PASSWORD })).status).toBe(404);
+    expect(
+      (await agent().post(`/api/auth/invites/${token}`).send({ displayName: 'Late', password: GOOD_PASSWORD })).status,
+    ).toBe(404);
     expect(await User.count({ where: { email } })).toBe(0);
   });
 });
@@ -154,11 +169,17 @@ describe('changing a teammate’s access and role', () => {
     // The rows go at once, before the person's next request could notice the account is disabled.
     expect(await Session.count({ where: { userId: user.id } })).toBe(0);
     expect((await as.get('/api/auth/me')).status).toBe(401);
-    expect((await agent().post('/api/auth/sign-in').send({ email: user.email, password: GOOD_PASSWORD })).status).toBe(401);
-    expect(await AuditEvent.findOne({ where: { action: 'access.change', userId: a.users.head_brewer.id } })).not.toBeNull();
+    expect((await agent().post('/api/auth/sign-in').send({ email: user.email, password: GOOD_PASSWORD })).status).toBe(
+      401,
+    );
+    expect(
+      await AuditEvent.findOne({ where: { action: 'access.change', userId: a.users.head_brewer.id } }),
+    ).not.toBeNull();
 
     expect((await a.as.head_brewer.patch(`/api/team/${user.id}`).send({ disabled: false })).status).toBe(200);
-    expect((await agent().post('/api/auth/sign-in').send({ email: user.email, password: GOOD_PASSWORD })).status).toBe(200);
+    expect((await agent().post('/api/auth/sign-in').send({ email: user.email, password: GOOD_PASSWORD })).status).toBe(
+      200,
+    );
   });
 
   it('a role change is saved and audited as role.change by the head brewer, naming the person and the new role', async () => {
@@ -168,7 +189,9 @@ describe('changing a teammate’s access and role', () => {
     await user.reload();
     expect(user.role).toBe('taproom_manager');
 
-    const rows = await AuditEvent.findAll({ where: { action: 'role.change', userId: a.users.head_brewer.id, breweryId: a.brewery.id } });
+    const rows = await AuditEvent.findAll({
+      where: { action: 'role.change', userId: a.users.head_brewer.id, breweryId: a.brewery.id },
+    });
     const details = rows.map((e) => e.detail);
     expect(details).toContainEqual({ userId: user.id, role: 'taproom_manager' });
     const row = rows[details.findIndex((d) => d?.userId === user.id)];

@@ -28,7 +28,9 @@ const photo = () =>
     .jpeg({ quality: 85 })
     .toBuffer();
 // The smallest well-formed PDF header and trailer; the type is read from the leading "%PDF-" bytes.
-const PDF = Buffer.from('%PDF-1.4\n1 0 obj<</Type/Catalog/Pages 2 0 R>>endobj\n2 0 obj<</Type/Pages/Kids[]/Count 0>>endobj\ntrailer<</Root 1 0 R>>\n%%EOF\n');
+const PDF = Buffer.from(
+  '%PDF-1.4\n1 0 obj<</Type/Catalog/Pages 2 0 R>>endobj\n2 0 obj<</Type/Pages/Kids[]/Count 0>>endobj\ntrailer<</Root 1 0 R>>\n%%EOF\n',
+);
 
 beforeAll(async () => {
   t = await createTestBrewery();
@@ -47,7 +49,12 @@ describe('uploading to a batch', () => {
       .post(`/api/batches/${batch.id}/attachments`)
       .attach('file', jpeg, { filename: 'krausen day 3.jpg', contentType: 'image/jpeg' });
     expect(res.status, JSON.stringify(res.body)).toBe(201);
-    expect(res.body).toMatchObject({ kind: 'photo', contentType: 'image/jpeg', byteSize: jpeg.length, displayName: 'krausen day 3.jpg' });
+    expect(res.body).toMatchObject({
+      kind: 'photo',
+      contentType: 'image/jpeg',
+      byteSize: jpeg.length,
+      displayName: 'krausen day 3.jpg',
+    });
     photoId = res.body.id;
 
     const row = await Attachment.findByPk(photoId);
@@ -72,7 +79,10 @@ describe('uploading to a batch', () => {
     const res = await t.as.head_brewer.get(`/api/batches/${batch.id}/attachments`);
     expect(res.status).toBe(200);
     expect(res.body.map((a: { id: number }) => a.id)).toEqual([photoId, sheetId]);
-    expect(res.body[0]).toMatchObject({ uploadedBy: t.users.assistant_brewer.displayName, url: `/api/attachments/${photoId}/file` });
+    expect(res.body[0]).toMatchObject({
+      uploadedBy: t.users.assistant_brewer.displayName,
+      url: `/api/attachments/${photoId}/file`,
+    });
   });
 
   it('serves the photo inline with its type, and the thumbnail no larger than 480 px', async () => {
@@ -104,7 +114,9 @@ describe('attaching to a tasting note', () => {
   it("attaches a lab sheet to one of the batch's notes, and refuses a note of another batch", async () => {
     const fermenting = await plannedBatch({ id: t.users.head_brewer.id, breweryId: t.brewery.id });
     await fermenting.update({ status: 'fermenting' });
-    const note = await t.as.head_brewer.post(`/api/batches/${fermenting.id}/tasting-notes`).send({ idempotencyKey: randomUUID(), content: TASTING_CONTENT });
+    const note = await t.as.head_brewer
+      .post(`/api/batches/${fermenting.id}/tasting-notes`)
+      .send({ idempotencyKey: randomUUID(), content: TASTING_CONTENT });
     expect(note.status).toBe(201);
     const res = await t.as.head_brewer
       .post(`/api/batches/${fermenting.id}/attachments`)
@@ -122,7 +134,9 @@ describe('attaching to a tasting note', () => {
 
 describe('removing a file', () => {
   const upload = (batchId: number, as = t.as.assistant_brewer) =>
-    as.post(`/api/batches/${batchId}/attachments`).attach('file', PDF, { filename: 'wrong batch.pdf', contentType: 'application/pdf' });
+    as
+      .post(`/api/batches/${batchId}/attachments`)
+      .attach('file', PDF, { filename: 'wrong batch.pdf', contentType: 'application/pdf' });
 
   it('lets the head brewer remove a wrong file: its row and its stored object go', async () => {
     const res = await upload(batch.id);
@@ -131,17 +145,26 @@ describe('removing a file', () => {
     expect((await t.as.assistant_brewer.delete(`/api/attachments/${res.body.id}`)).status).toBe(403);
     expect((await other.as.head_brewer.delete(`/api/attachments/${res.body.id}`)).status).toBe(404);
     expect((await t.as.head_brewer.delete(`/api/attachments/${res.body.id}`)).status).toBe(204);
-    expect((await t.as.head_brewer.get(`/api/batches/${batch.id}/attachments`)).body.map((a: { id: number }) => a.id)).not.toContain(res.body.id);
+    expect(
+      (await t.as.head_brewer.get(`/api/batches/${batch.id}/attachments`)).body.map((a: { id: number }) => a.id),
+    ).not.toContain(res.body.id);
     expect((await t.as.head_brewer.get(`/api/attachments/${res.body.id}/file`)).status).toBe(404);
-    await expect(s3().send(new HeadObjectCommand({ Bucket: process.env.S3_BUCKET, Key: row!.storageKey }))).rejects.toMatchObject({ name: 'NotFound' });
-    const audit = await AuditEvent.findOne({ where: { action: 'attachment.remove', userId: t.users.head_brewer.id }, order: [['id', 'DESC']] });
+    await expect(
+      s3().send(new HeadObjectCommand({ Bucket: process.env.S3_BUCKET, Key: row!.storageKey })),
+    ).rejects.toMatchObject({ name: 'NotFound' });
+    const audit = await AuditEvent.findOne({
+      where: { action: 'attachment.remove', userId: t.users.head_brewer.id },
+      order: [['id', 'DESC']],
+    });
     expect(audit?.detail).toEqual({ attachmentId: res.body.id });
   });
 
   it("keeps a tasting note's file and the release sheet's photo (409)", async () => {
     const fermenting = await plannedBatch({ id: t.users.head_brewer.id, breweryId: t.brewery.id });
     await fermenting.update({ status: 'fermenting' });
-    const note = await t.as.head_brewer.post(`/api/batches/${fermenting.id}/tasting-notes`).send({ idempotencyKey: randomUUID(), content: TASTING_CONTENT });
+    const note = await t.as.head_brewer
+      .post(`/api/batches/${fermenting.id}/tasting-notes`)
+      .send({ idempotencyKey: randomUUID(), content: TASTING_CONTENT });
     const onNote = await t.as.head_brewer
       .post(`/api/batches/${fermenting.id}/attachments`)
       .field('tastingNoteId', String(note.body.id))
@@ -153,7 +176,13 @@ describe('removing a file', () => {
     const shot = await t.as.head_brewer
       .post(`/api/batches/${fermenting.id}/attachments`)
       .attach('file', await photo(), { filename: 'glass.jpg', contentType: 'image/jpeg' });
-    expect((await t.as.head_brewer.put(`/api/batches/${fermenting.id}/release`).send({ ...SHEET, photoAttachmentId: shot.body.id })).status).toBe(200);
+    expect(
+      (
+        await t.as.head_brewer
+          .put(`/api/batches/${fermenting.id}/release`)
+          .send({ ...SHEET, photoAttachmentId: shot.body.id })
+      ).status,
+    ).toBe(200);
     const onSheet = await t.as.head_brewer.delete(`/api/attachments/${shot.body.id}`);
     expect(onSheet.status).toBe(409);
     expect(onSheet.body.error.message).toMatch(/release sheet/);
@@ -165,7 +194,9 @@ describe('refusing uploads', () => {
   it('answers 413 to a file over 15 MB, and stores nothing', async () => {
     const before = await Attachment.count({ where: { batchId: batch.id } });
     const big = Buffer.alloc(15 * 1024 * 1024 + 1, 0xff);
-    const res = await t.as.head_brewer.post(`/api/batches/${batch.id}/attachments`).attach('file', big, { filename: 'huge.jpg', contentType: 'image/jpeg' });
+    const res = await t.as.head_brewer
+      .post(`/api/batches/${batch.id}/attachments`)
+      .attach('file', big, { filename: 'huge.jpg', contentType: 'image/jpeg' });
     expect(res.status).toBe(413);
     expect(res.body.error.message).toMatch(/at most 15 MB/);
     expect(await Attachment.count({ where: { batchId: batch.id } })).toBe(before);
@@ -173,14 +204,20 @@ describe('refusing uploads', () => {
 
   it('refuses an HTML file named .png: the type comes from the bytes', async () => {
     const html = Buffer.from('<!doctype html><html><body><script>alert(document.cookie)</script></body></html>');
-    const res = await t.as.head_brewer.post(`/api/batches/${batch.id}/attachments`).attach('file', html, { filename: 'photo.png', contentType: 'image/png' });
+    const res = await t.as.head_brewer
+      .post(`/api/batches/${batch.id}/attachments`)
+      .attach('file', html, { filename: 'photo.png', contentType: 'image/png' });
     expect(res.status).toBe(415);
     expect(res.body.error.message).toMatch(/JPEG, PNG or WebP\) or a PDF/);
   });
 
   it('refuses a type outside the list even when the bytes are honest (a GIF)', async () => {
-    const gif = await sharp({ create: { width: 4, height: 4, channels: 3, background: '#000' } }).gif().toBuffer();
-    const res = await t.as.head_brewer.post(`/api/batches/${batch.id}/attachments`).attach('file', gif, { filename: 'a.gif', contentType: 'image/gif' });
+    const gif = await sharp({ create: { width: 4, height: 4, channels: 3, background: '#000' } })
+      .gif()
+      .toBuffer();
+    const res = await t.as.head_brewer
+      .post(`/api/batches/${batch.id}/attachments`)
+      .attach('file', gif, { filename: 'a.gif', contentType: 'image/gif' });
     expect(res.status).toBe(415);
   });
 
@@ -197,7 +234,9 @@ describe('refusing uploads', () => {
 
   it('refuses a damaged picture whose first bytes look right', async () => {
     const broken = Buffer.concat([(await photo()).subarray(0, 200)]);
-    const res = await t.as.head_brewer.post(`/api/batches/${batch.id}/attachments`).attach('file', broken, { filename: 'cut.jpg', contentType: 'image/jpeg' });
+    const res = await t.as.head_brewer
+      .post(`/api/batches/${batch.id}/attachments`)
+      .attach('file', broken, { filename: 'cut.jpg', contentType: 'image/jpeg' });
     expect(res.status).toBe(400);
     expect(res.body.error.message).toMatch(/could not be read/);
   });
@@ -213,7 +252,9 @@ describe('who may fetch files', () => {
     expect((await other.as.head_brewer.get(`/api/attachments/${id}/file`)).status).toBe(404);
     expect((await other.as.head_brewer.get(`/api/attachments/${id}/thumbnail`)).status).toBe(404);
     expect((await other.as.head_brewer.get(`/api/batches/${batch.id}/attachments`)).status).toBe(404);
-    const upload = await other.as.head_brewer.post(`/api/batches/${batch.id}/attachments`).attach('file', await photo(), 'x.jpg');
+    const upload = await other.as.head_brewer
+      .post(`/api/batches/${batch.id}/attachments`)
+      .attach('file', await photo(), 'x.jpg');
     expect(upload.status).toBe(404);
   });
 
@@ -225,6 +266,8 @@ describe('who may fetch files', () => {
   it('keeps batch files from the taproom until the photo is on an announced beer', async () => {
     expect((await t.as.taproom_manager.get(`/api/batches/${batch.id}/attachments`)).status).toBe(403);
     expect((await t.as.taproom_manager.get(`/api/attachments/${id}/file`)).status).toBe(404);
-    expect((await t.as.taproom_manager.post(`/api/batches/${batch.id}/attachments`).attach('file', PDF, 'x.pdf')).status).toBe(403);
+    expect(
+      (await t.as.taproom_manager.post(`/api/batches/${batch.id}/attachments`).attach('file', PDF, 'x.pdf')).status,
+    ).toBe(403);
   });
 });

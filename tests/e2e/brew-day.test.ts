@@ -30,7 +30,8 @@ function outboxCapturedTimes(page: Page): Promise<string[]> {
 async function logStep(page: Page, step: string, values: Record<string, string>) {
   await page.getByRole('button', { name: new RegExp(`^\\d+\\.\\s*${step}`) }).click();
   await eventually(() => page.getByTestId('current-step').textContent()).toBe(step);
-  for (const [label, value] of Object.entries(values)) await page.getByLabel(new RegExp(`^${label}( \\(|$)`)).fill(value);
+  for (const [label, value] of Object.entries(values))
+    await page.getByLabel(new RegExp(`^${label}( \\(|$)`)).fill(value);
   await page.getByRole('button', { name: 'Done', exact: true }).click();
 }
 
@@ -51,11 +52,16 @@ describe('brew day offline (Chromium, 1024×768)', () => {
   it('the head brewer plans a batch from a recipe version; the plan is frozen into it', async () => {
     const page = await head.newPage();
     await signIn(page, maren.email);
-    const recipes = (await (await page.request.get('/api/recipes')).json()) as { name: string; latestVersionId: number }[];
+    const recipes = (await (await page.request.get('/api/recipes')).json()) as {
+      name: string;
+      latestVersionId: number;
+    }[];
     const flagship = recipes[0]!;
     await page.goto(`/batches/new?recipeVersionId=${flagship.latestVersionId}`);
     // Says what is being planned, and lists each empty fermenter with its size.
-    await eventually(() => page.getByText(new RegExp(`^${flagship.name} v\\d+ on .+, \\d+\\.\\d (bbl|gal)$`)).count()).toBe(1);
+    await eventually(() =>
+      page.getByText(new RegExp(`^${flagship.name} v\\d+ on .+, \\d+\\.\\d (bbl|gal)$`)).count(),
+    ).toBe(1);
     expect(await page.locator('option', { hasText: 'FV-4' }).textContent()).toMatch(/^FV-4 · 3\.5 bbl/);
     await screenshot(page, 'plan-batch-1024.png');
     await page.getByRole('button', { name: 'Plan the batch' }).click();
@@ -103,7 +109,11 @@ describe('brew day offline (Chromium, 1024×768)', () => {
     await tablet.setOffline(false);
     await eventually(() => page.getByTestId('waiting-count').count()).toBe(0);
 
-    const log = (await (await page.request.get(`/api/batches/${batchId}/log`)).json()) as { stepKey: string; capturedAt: string; authorName: string }[];
+    const log = (await (await page.request.get(`/api/batches/${batchId}/log`)).json()) as {
+      stepKey: string;
+      capturedAt: string;
+      authorName: string;
+    }[];
     expect(log).toHaveLength(5);
     expect(log.map((e) => e.stepKey)).toEqual(['strike-water', 'mash-in', 'sparge-start', 'sparge-end', 'boil-start']);
     expect(log.map((e) => e.capturedAt)).toEqual(captured);
@@ -114,7 +124,10 @@ describe('brew day offline (Chromium, 1024×768)', () => {
 
   it('a fat-finger temperature is refused on the tablet in °F with the value kept, and a double tap logs one entry', async () => {
     const page = tablet.pages().at(-1)!;
-    const logged = async () => ((await (await page.request.get(`/api/batches/${batchId}/log`)).json()) as { stepKey: string }[]).map((e) => e.stepKey);
+    const logged = async () =>
+      ((await (await page.request.get(`/api/batches/${batchId}/log`)).json()) as { stepKey: string }[]).map(
+        (e) => e.stepKey,
+      );
     const before = await logged();
     await page.getByRole('button', { name: /^\d+\.\s*Heat strike water/ }).click();
     await eventually(() => page.getByTestId('current-step').textContent()).toBe('Heat strike water');
@@ -124,7 +137,9 @@ describe('brew day offline (Chromium, 1024×768)', () => {
     await eventually(() => page.getByText(/^Far from the expected/).count()).toBe(1);
     await page.getByRole('button', { name: 'Log again', exact: true }).click();
     // The shared schema's 110 °C limit, said in the °F the field shows.
-    await eventually(() => page.getByRole('alert').filter({ hasText: 'Temperature must be at most 230 °F' }).count()).toBe(1);
+    await eventually(() =>
+      page.getByRole('alert').filter({ hasText: 'Temperature must be at most 230 °F' }).count(),
+    ).toBe(1);
     expect(await page.getByTestId('current-step').textContent()).toBe('Heat strike water');
     expect(await temperature.inputValue()).toBe('1674');
     expect(await temperature.getAttribute('aria-invalid')).toBe('true');

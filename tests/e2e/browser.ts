@@ -37,6 +37,10 @@ export async function signIn(page: Page, email: string, password = DEMO_PASSWORD
 }
 
 /** Saves a screenshot into test-results/screenshots for a person to look at (the whole page unless told otherwise). */
-export function screenshot(page: Page, name: string, options: { fullPage: boolean } = { fullPage: true }): Promise<Buffer> {
+export function screenshot(
+  page: Page,
+  name: string,
+  options: { fullPage: boolean } = { fullPage: true },
+): Promise<Buffer> {
   return page.screenshot({ path: path.join(SCREENSHOT_DIR, name), ...options });
 }

@@ -8,22 +8,42 @@ const write = { 'x-kettlewright': '1' };
 /** The head brewer plans a batch into an empty fermenter and starts its brew day, through the API. */
 async function fermentingBatch(page: Page): Promise<{ id: number; number: string; vessel: string; vesselId: number }> {
   const recipes = (await (await page.request.get('/api/recipes')).json()) as { latestVersionId: number }[];
-  const vessels = (await (await page.request.get('/api/vessels')).json()) as { id: number; name: string; type: string; status: string; currentBatchId: number | null }[];
+  const vessels = (await (await page.request.get('/api/vessels')).json()) as {
+    id: number;
+    name: string;
+    type: string;
+    status: string;
+    currentBatchId: number | null;
+  }[];
   let fermenter = vessels.find((v) => v.type === 'fermenter' && v.status === 'clean' && v.currentBatchId === null);
   if (!fermenter) {
     const made = await page.request.post('/api/vessels', {
       headers: write,
-      data: { name: `FV-${Date.now() % 100000}`, type: 'fermenter', capacity: 10, capacityUnit: 'bbl', ratedPressure: 15, pressureUnit: 'psi' },
+      data: {
+        name: `FV-${Date.now() % 100000}`,
+        type: 'fermenter',
+        capacity: 10,
+        capacityUnit: 'bbl',
+        ratedPressure: 15,
+        pressureUnit: 'psi',
+      },
     });
     fermenter = await made.json();
   }
   const planned = await page.request.post('/api/batches', {
     headers: write,
-    data: { recipeVersionId: recipes[0]!.latestVersionId, brewDate: new Date().toISOString().slice(0, 10), fermenterId: fermenter!.id },
+    data: {
+      recipeVersionId: recipes[0]!.latestVersionId,
+      brewDate: new Date().toISOString().slice(0, 10),
+      fermenterId: fermenter!.id,
+    },
   });
   expect(planned.status()).toBe(201);
   const batch = (await planned.json()) as { id: number; number: string };
-  const brewing = await page.request.post(`/api/batches/${batch.id}/status`, { headers: write, data: { status: 'brewing' } });
+  const brewing = await page.request.post(`/api/batches/${batch.id}/status`, {
+    headers: write,
+    data: { status: 'brewing' },
+  });
   expect(brewing.status()).toBe(200);
   return { ...batch, vessel: fermenter!.name, vesselId: fermenter!.id };
 }
@@ -53,11 +73,13 @@ describe('cellar readings on the tablet (Chromium, 1024×768)', () => {
 
     const points = page.locator('[data-testid="gravity-point"]');
     const form = page.getByRole('form', { name: 'Log a reading' });
-    for (const [i, [gravity, temp]] of ([
-      ['1.052', '66'],
-      ['1.031', '67'],
-      ['1.021', '67.5'],
-    ] as const).entries()) {
+    for (const [i, [gravity, temp]] of (
+      [
+        ['1.052', '66'],
+        ['1.031', '67'],
+        ['1.021', '67.5'],
+      ] as const
+    ).entries()) {
       await form.getByLabel('Gravity (SG)').fill(gravity);
       await form.getByLabel('Temperature (°F)').fill(temp);
       await form.getByRole('button', { name: 'Save reading' }).click();
@@ -85,13 +107,21 @@ describe('cellar readings on the tablet (Chromium, 1024×768)', () => {
     await page.goBack();
     await page.getByRole('link', { name: 'Correct a reading' }).click();
     await page.waitForURL(`**/batches/${batch.id}/record`);
-    await page.getByTestId('log-entry').filter({ hasText: '1.021' }).getByRole('button', { name: /Correct entry/ }).click();
+    await page
+      .getByTestId('log-entry')
+      .filter({ hasText: '1.021' })
+      .getByRole('button', { name: /Correct entry/ })
+      .click();
     const dialog = page.getByRole('dialog', { name: /Correct entry/ });
     await dialog.getByLabel('Gravity (SG)').fill('1.019');
     await dialog.getByLabel('Reason').fill('Read the hydrometer at the meniscus top; it is 1.019');
     await screenshot(page, 'cellar-reading-correction-1024.png', { fullPage: false });
     await dialog.getByRole('button', { name: 'Save correction' }).click();
-    await expect.poll(() => page.getByTestId('log-entry').filter({ hasText: 'Correction: Read the hydrometer' }).count(), { timeout: 15_000 }).toBe(1);
+    await expect
+      .poll(() => page.getByTestId('log-entry').filter({ hasText: 'Correction: Read the hydrometer' }).count(), {
+        timeout: 15_000,
+      })
+      .toBe(1);
     // Back inside the app (no reload): the cellar page shows the correction, not what it had before.
     await page.goBack();
     await page.waitForURL(`**/cellar/batches/${batch.id}`);
@@ -107,7 +137,9 @@ describe('cellar readings on the tablet (Chromium, 1024×768)', () => {
     await page.goto('/cellar/vessels');
     await page.getByRole('link', { name: 'Print labels' }).click();
     const labels = page.getByRole('region', { name: 'Labels' }).getByRole('figure');
-    await expect.poll(() => labels.count()).toBe(await page.evaluate(async () => ((await (await fetch('/api/vessels')).json()) as unknown[]).length));
+    await expect
+      .poll(() => labels.count())
+      .toBe(await page.evaluate(async () => ((await (await fetch('/api/vessels')).json()) as unknown[]).length));
     await expect.poll(() => labels.filter({ hasText: batch.vessel }).getByRole('img').count()).toBe(1);
     await screenshot(page, 'cellar-vessel-labels-1024.png', { fullPage: false });
     await page.goto('/cellar');
@@ -152,11 +184,15 @@ describe('cellar readings on the tablet (Chromium, 1024×768)', () => {
       // Give a second write every chance to land before counting.
       await expect.poll(() => page.locator('[aria-label="Waiting to send"]').count(), { timeout: 15_000 }).toBe(0);
       await page.waitForTimeout(1000);
-      const view = (await (await page.request.get(`/api/cellar/batches/${batch.id}`)).json()) as { readings: { sg: number }[] };
+      const view = (await (await page.request.get(`/api/cellar/batches/${batch.id}`)).json()) as {
+        readings: { sg: number }[];
+      };
       expect(view.readings.map((r) => r.sg)).toEqual([1.05]);
 
       // The assistant reads the cellar plan as text.
-      await expect.poll(() => page.getByTestId('plan-read-only').textContent()).toMatch(/^Read only: a head brewer changes the plan/);
+      await expect
+        .poll(() => page.getByTestId('plan-read-only').textContent())
+        .toMatch(/^Read only: a head brewer changes the plan/);
       await page.goto('/cellar');
       await page.getByRole('article', { name: 'FV-1' }).click();
       await page.getByRole('heading', { name: 'Fermentation curve' }).scrollIntoViewIfNeeded();

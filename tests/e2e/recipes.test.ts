@@ -32,18 +32,28 @@ describe('scaling the seasonal and printing its brew sheet (Chromium)', () => {
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Recipes' }).click();
     await page.getByRole('link', { name: SEASONAL_NAME }).click();
     await page.getByRole('link', { name: /Edit version 1/ }).click();
-    await expect.poll(() => page.getByRole('group', { name: 'IBU' }).textContent()).toContain(expected.before.ibu.toFixed(1));
+    await expect
+      .poll(() => page.getByRole('group', { name: 'IBU' }).textContent())
+      .toContain(expected.before.ibu.toFixed(1));
     await screenshot(page, 'recipe-editor-1024.png');
   });
 
   it('scales it from the pilot to the 10 bbl profile: adjunct and spice per volume, IBU on target', async () => {
     await page.getByRole('link', { name: 'Scale' }).first().click();
     await page.getByLabel('Scale to').selectOption({ label: 'Main brewhouse 10 bbl (10.0 bbl)' });
-    await expect.poll(() => page.getByRole('table', { name: 'Original and scaled' }).getByRole('columnheader').nth(2).textContent()).toBe('Main brewhouse 10 bbl');
-    expect(await page.getByRole('group', { name: 'Scaled IBU' }).textContent()).toContain(expected.after.ibu.toFixed(1));
+    await expect
+      .poll(() =>
+        page.getByRole('table', { name: 'Original and scaled' }).getByRole('columnheader').nth(2).textContent(),
+      )
+      .toBe('Main brewhouse 10 bbl');
+    expect(await page.getByRole('group', { name: 'Scaled IBU' }).textContent()).toContain(
+      expected.after.ibu.toFixed(1),
+    );
     // Same IBU as the pilot (scaleRecipe re-solves each hop for its IBU; the seeded target is 24).
     expect(expected.after.ibu).toBeCloseTo(expected.before.ibu, 6);
-    expect(await page.getByRole('group', { name: 'Original IBU' }).textContent()).toContain(expected.before.ibu.toFixed(1));
+    expect(await page.getByRole('group', { name: 'Original IBU' }).textContent()).toContain(
+      expected.before.ibu.toFixed(1),
+    );
 
     const table = page.getByRole('table', { name: 'Original and scaled' });
     // 0.6 lb per US gal: 6 lb in 10 gal, 186 lb in 310 gal (10 bbl × 31 gal, DOMAIN.md).
@@ -55,7 +65,9 @@ describe('scaling the seasonal and printing its brew sheet (Chromium)', () => {
     expect(await spice.textContent()).toContain('2 tsp');
     expect(await spice.textContent()).toContain('62 tsp');
     // The hops do not scale in proportion: the page says so.
-    expect(await table.getByRole('row', { name: /Earthy English-type hop/ }).textContent()).toContain('Not in proportion');
+    expect(await table.getByRole('row', { name: /Earthy English-type hop/ }).textContent()).toContain(
+      'Not in proportion',
+    );
     await screenshot(page, 'recipe-scale-1024.png');
   });
 
@@ -81,7 +93,9 @@ describe('scaling the seasonal and printing its brew sheet (Chromium)', () => {
     for (const h of after.hops) expect(flat).toContain(showSmallWeight('us', h.weightG));
     expect(flat).toContain('Pale ale malt');
     expect(showGrain('us', after.fermentables[0]!.weightKg)).toMatch(/sack/);
-    expect(flat).toContain(showMeasured(roundForMeasuring({ value: after.mashGrainKg, unit: 'kg' }, 'us')).split(' ')[1]!);
+    expect(flat).toContain(
+      showMeasured(roundForMeasuring({ value: after.mashGrainKg, unit: 'kg' }, 'us')).split(' ')[1]!,
+    );
     expect(flat).toMatch(/Hot liquids/);
     expect(flat).toMatch(/Sign-off/);
     expect(flat).toMatch(/Diacetyl rest: when gravity reaches/);
@@ -106,7 +120,10 @@ describe('scaling the seasonal and printing its brew sheet (Chromium)', () => {
 
   it('keeps an equipment profile recipes were written for, and removes a library entry', async () => {
     await page.goto('/library');
-    await page.getByRole('row', { name: /Pilot kit 10 gal/ }).getByRole('button', { name: 'Edit' }).click();
+    await page
+      .getByRole('row', { name: /Pilot kit 10 gal/ })
+      .getByRole('button', { name: 'Edit' })
+      .click();
     const dialog = page.getByRole('dialog', { name: 'Edit equipment' });
     await expect.poll(() => dialog.getByLabel('Mash thickness (qt/lb)').inputValue()).toMatch(/^\d\.\d+$/);
     await dialog.getByRole('button', { name: 'Remove…' }).click();
@@ -149,7 +166,11 @@ describe('the recipe screens on a tablet (Chromium)', () => {
     p.evaluate(() => {
       const ctx = document.createElement('canvas').getContext('2d')!;
       const out: string[] = [];
-      for (const el of Array.from(document.querySelectorAll<HTMLSelectElement | HTMLInputElement>('form select, form input[type="text"], form input:not([type])'))) {
+      for (const el of Array.from(
+        document.querySelectorAll<HTMLSelectElement | HTMLInputElement>(
+          'form select, form input[type="text"], form input:not([type])',
+        ),
+      )) {
         if (el.offsetParent === null) continue;
         const style = getComputedStyle(el);
         const text = el instanceof HTMLSelectElement ? (el.selectedOptions[0]?.text ?? '') : el.value;
@@ -172,7 +193,10 @@ describe('the recipe screens on a tablet (Chromium)', () => {
 
   it('keeps OG, IBU and the other figures on screen while editing on a portrait tablet', async () => {
     await page.getByRole('link', { name: 'Breakwater Pale' }).click();
-    await page.getByRole('link', { name: /Edit version/ }).first().click();
+    await page
+      .getByRole('link', { name: /Edit version/ })
+      .first()
+      .click();
     const bar = page.getByRole('region', { name: 'Numbers while editing' });
     await expect.poll(() => bar.textContent()).toMatch(/OG1\.0\d\d/);
     await page.getByRole('heading', { name: 'Water', exact: true }).scrollIntoViewIfNeeded();

@@ -47,12 +47,18 @@ describe('reports (Chromium, 1024×768)', () => {
     const select = page.getByLabel('Recipe');
     await expect.poll(() => select.locator('option').count()).toBeGreaterThan(1);
     // Pick the first recipe the demo brewery has brewed.
-    const values = await select.locator('option').evaluateAll((options) => options.map((o) => (o as HTMLOptionElement).value).filter(Boolean));
+    const values = await select
+      .locator('option')
+      .evaluateAll((options) => options.map((o) => (o as HTMLOptionElement).value).filter(Boolean));
     let found = false;
     for (const value of values) {
       await select.selectOption(value);
       const rows = page.locator('tbody tr');
-      await expect.poll(async () => (await rows.count()) > 0 || (await page.getByText('No batches of this recipe yet').count()) > 0).toBe(true);
+      await expect
+        .poll(
+          async () => (await rows.count()) > 0 || (await page.getByText('No batches of this recipe yet').count()) > 0,
+        )
+        .toBe(true);
       if ((await rows.count()) > 0) {
         found = true;
         break;
@@ -66,7 +72,9 @@ describe('reports (Chromium, 1024×768)', () => {
   it('refuses the production figures to the taproom manager', async () => {
     const page = await taproom.newPage();
     await signIn(page, priya.email);
-    expect(await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Production' }).count()).toBe(0);
+    expect(await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Production' }).count()).toBe(
+      0,
+    );
     await page.goto('/reports/production');
     await expect.poll(() => page.getByText('Not open to your role').count(), { timeout: 15_000 }).toBe(1);
     expect(await page.getByRole('link', { name: 'Download CSV' }).count()).toBe(0);

@@ -12,7 +12,7 @@ function distinctColours(png: Buffer): number {
   const colourType = png[25];
   const channels = colourType === 6 ? 4 : 3;
   const chunks: Buffer[] = [];
-  for (let offset = 8; offset < png.length; ) {
+  for (let offset = 8; offset < png.length;) {
     const length = png.readUInt32BE(offset);
     const type = png.toString('ascii', offset + 4, offset + 8);
     if (type === 'IDAT') chunks.push(png.subarray(offset + 8, offset + 8 + length));
@@ -40,7 +40,9 @@ describe('signing in (Chromium)', () => {
   it('the head brewer signs in and lands on the home screen', async () => {
     const page = await context.newPage();
     await signIn(page, DEMO_PEOPLE[0]!.email);
-    await expect.poll(() => page.getByRole('heading', { level: 1 }).textContent()).toMatch(/Good (morning|afternoon|evening), Maren/);
+    await expect
+      .poll(() => page.getByRole('heading', { level: 1 }).textContent())
+      .toMatch(/Good (morning|afternoon|evening), Maren/);
     await expect.poll(() => page.getByRole('navigation', { name: 'Main' }).textContent()).toContain('Team');
     const file = path.join(SCREENSHOT_DIR, 'home-head-brewer-1024.png');
     await page.screenshot({ path: file, fullPage: true });
@@ -68,8 +70,13 @@ describe('signing in (Chromium)', () => {
     expect(await row.getByRole('button', { name: `Block ${assistant.displayName}` }).count()).toBe(1);
     await row.getByRole('button', { name: 'Cancel' }).click();
     expect(await row.getByRole('button', { name: 'Block access…' }).count()).toBe(1);
-    const team = await page.evaluate(() => fetch('/api/team', { headers: { 'x-kettlewright': '1' } }).then((r) => r.json()));
-    expect(team.members.find((m: { email: string }) => m.email === assistant.email)).toMatchObject({ role: 'assistant_brewer', disabled: false });
+    const team = await page.evaluate(() =>
+      fetch('/api/team', { headers: { 'x-kettlewright': '1' } }).then((r) => r.json()),
+    );
+    expect(team.members.find((m: { email: string }) => m.email === assistant.email)).toMatchObject({
+      role: 'assistant_brewer',
+      disabled: false,
+    });
   });
 
   it('the taproom manager who types a brewing address is told it is not for their role, with no form to fill', async () => {

@@ -9,12 +9,12 @@ import { abv } from '../../shared/brewing';
 
 const maren = DEMO_PEOPLE.find((p) => p.role === 'head_brewer')!;
 const priya = DEMO_PEOPLE.find((p) => p.role === 'taproom_manager')!;
-const DESCRIPTION = 'Roasted quince and golden beet over a soft wheat base: orchard fruit on the nose, a dry, gently earthy finish.';
+const DESCRIPTION =
+  'Roasted quince and golden beet over a soft wheat base: orchard fruit on the nose, a dry, gently earthy finish.';
 
 let brewer: BrowserContext;
 let taproom: BrowserContext;
 let beerName: string;
-
 
 beforeAll(async () => {
   brewer = await openBrowser();
@@ -39,10 +39,18 @@ describe('releasing a beer to the taproom (Chromium, 1024×768)', () => {
     await page.getByRole('heading', { level: 1, name: `Release ${beerName}` }).waitFor();
 
     const photo = await sharp({ create: { width: 1200, height: 900, channels: 3, background: '#c47f2c' } })
-      .composite([{ input: Buffer.from('<svg width="1200" height="900"><rect x="420" y="150" width="360" height="620" rx="40" fill="#f3e3b5"/></svg>') }])
+      .composite([
+        {
+          input: Buffer.from(
+            '<svg width="1200" height="900"><rect x="420" y="150" width="360" height="620" rx="40" fill="#f3e3b5"/></svg>',
+          ),
+        },
+      ])
       .jpeg()
       .toBuffer();
-    await page.getByLabel('Add a photo or lab sheet').setInputFiles({ name: 'low-tide-pour.jpg', mimeType: 'image/jpeg', buffer: photo });
+    await page
+      .getByLabel('Add a photo or lab sheet')
+      .setInputFiles({ name: 'low-tide-pour.jpg', mimeType: 'image/jpeg', buffer: photo });
     await page.getByRole('radio', { name: 'low-tide-pour.jpg' }).check();
 
     await page.getByLabel('Taproom description').fill(DESCRIPTION);
@@ -51,7 +59,8 @@ describe('releasing a beer to the taproom (Chromium, 1024×768)', () => {
     await page.getByText('Draft (not shown to the taproom)').waitFor();
 
     // The ABV on screen is the one shared/brewing computes from the logged OG and FG shown beside it.
-    const stat = async (label: string) => (await page.getByText(label, { exact: true }).locator('..').textContent())!.slice(label.length);
+    const stat = async (label: string) =>
+      (await page.getByText(label, { exact: true }).locator('..').textContent())!.slice(label.length);
     const og = Number(await stat('OG (measured)'));
     const fg = Number(await stat('FG (last reading)'));
     expect(og).toBeGreaterThan(fg);
@@ -90,7 +99,13 @@ describe('releasing a beer to the taproom (Chromium, 1024×768)', () => {
     await expect.poll(() => sheet.textContent()).toContain(DESCRIPTION);
     await expect.poll(() => sheet.textContent()).toContain('Tulip glass, leave room for the aroma.');
     await expect.poll(() => sheet.textContent()).toMatch(/On tap since/);
-    await expect.poll(() => sheet.getByRole('img', { name: `${beerName} in the glass` }).evaluate((el: HTMLImageElement) => el.complete && el.naturalWidth > 0)).toBe(true);
+    await expect
+      .poll(() =>
+        sheet
+          .getByRole('img', { name: `${beerName} in the glass` })
+          .evaluate((el: HTMLImageElement) => el.complete && el.naturalWidth > 0),
+      )
+      .toBe(true);
     await screenshot(page, 'taproom-briefing-1024.png');
     // As printed: the app's menu and the page's buttons stay off the paper.
     await page.emulateMedia({ media: 'print' });
@@ -108,7 +123,10 @@ describe('releasing a beer to the taproom (Chromium, 1024×768)', () => {
     try {
       const page = await desktop.newPage();
       await signIn(page, priya.email);
-      await page.getByRole('region', { name: 'On tap' }).getByRole('heading', { name: beerName, exact: true }).waitFor();
+      await page
+        .getByRole('region', { name: 'On tap' })
+        .getByRole('heading', { name: beerName, exact: true })
+        .waitFor();
       await screenshot(page, 'taproom-home-desktop.png');
       await page.getByRole('link', { name: 'Bar screen' }).click();
       await page.getByRole('heading', { level: 1, name: /^On tap at / }).waitFor();
@@ -123,12 +141,17 @@ describe('releasing a beer to the taproom (Chromium, 1024×768)', () => {
 /** Whether an element's content runs past its own box (a cut-off name, a number spilling out of its frame). */
 const overflows = (l: Locator) => l.evaluate((el) => el.scrollWidth > el.clientWidth + 1);
 /** How many lines of text an element takes. */
-const lines = (l: Locator) => l.evaluate((el) => Math.round(el.getBoundingClientRect().height / parseFloat(getComputedStyle(el).lineHeight)));
+const lines = (l: Locator) =>
+  l.evaluate((el) => Math.round(el.getBoundingClientRect().height / parseFloat(getComputedStyle(el).lineHeight)));
 
 async function openBoard(page: Page) {
   await page.getByRole('link', { name: 'Bar screen' }).click();
   await page.getByRole('heading', { level: 1, name: /^On tap at / }).waitFor();
-  await page.getByRole('region', { name: /^On tap at / }).getByRole('listitem').first().waitFor();
+  await page
+    .getByRole('region', { name: /^On tap at / })
+    .getByRole('listitem')
+    .first()
+    .waitFor();
 }
 
 describe('the bar screen and the briefing sheet on a phone (Chromium, 390×844)', () => {
@@ -148,7 +171,7 @@ describe('the bar screen and the briefing sheet on a phone (Chromium, 390×844)'
         const [name, detail] = await row.locator('p').all();
         const abv = row.getByText(/ %$/);
         expect(await overflows(name!)).toBe(false);
-        expect(await lines(detail!), await detail!.textContent() ?? '').toBeLessThanOrEqual(2);
+        expect(await lines(detail!), (await detail!.textContent()) ?? '').toBeLessThanOrEqual(2);
         const n = (await name!.boundingBox())!;
         const a = (await abv.boundingBox())!;
         expect(a.y >= n.y + n.height || a.x >= n.x + n.width, 'the ABV overlaps the name').toBe(true);
@@ -171,7 +194,10 @@ describe('the bar screen and the briefing sheet on a phone (Chromium, 390×844)'
       await signIn(page, priya.email);
       await page.getByRole('region', { name: 'On tap' }).getByRole('heading', { level: 3 }).first().waitFor();
       // The batch number stays on one line on the tap card ("Batch 2026-" / "003" before).
-      const batch = page.getByRole('region', { name: 'On tap' }).getByText(/^Batch \d/).first();
+      const batch = page
+        .getByRole('region', { name: 'On tap' })
+        .getByText(/^Batch \d/)
+        .first();
       expect(await lines(batch)).toBe(1);
       await screenshot(page, 'taproom-home-390.png');
       await page.getByRole('link', { name: 'Staff briefing sheet' }).first().click();
@@ -206,7 +232,12 @@ describe('the bar screen as a full-screen view (Chromium, 1024×768)', () => {
     }
     const close = board.getByRole('button', { name: 'Close' });
     await page.keyboard.press('Shift+Tab');
-    expect(await close.evaluate((el) => el === document.activeElement && el.matches(':focus-visible') && getComputedStyle(el).outlineStyle !== 'none')).toBe(true);
+    expect(
+      await close.evaluate(
+        (el) =>
+          el === document.activeElement && el.matches(':focus-visible') && getComputedStyle(el).outlineStyle !== 'none',
+      ),
+    ).toBe(true);
     await screenshot(page, 'taproom-bar-screen-focus-1024.png', { fullPage: false });
     await page.keyboard.press('Escape');
     await page.waitForURL((url) => url.pathname === '/taproom' && url.search === '?q=a');
@@ -241,7 +272,10 @@ describe('taking a beer off tap (Chromium, 1024×768)', () => {
     await onTap.getByRole('heading', { level: 3 }).first().waitFor();
     expect(await onTap.getByRole('heading', { level: 3 }).allTextContents()).not.toContain(beerName);
     await openBoard(bar);
-    const names = await bar.getByRole('region', { name: /^On tap at / }).getByRole('listitem').allTextContents();
+    const names = await bar
+      .getByRole('region', { name: /^On tap at / })
+      .getByRole('listitem')
+      .allTextContents();
     expect(names.some((n) => n.includes(beerName))).toBe(false);
 
     // Taken off by mistake: it goes back on.

@@ -17,7 +17,12 @@ export function AppLayout() {
   useRefreshOnDelivery();
 
   if (me.isPending) return <Loading label="Opening Kettlewright" />;
-  if (me.isError) return <div className="p-6"><ErrorState error={me.error} onRetry={() => me.refetch()} /></div>;
+  if (me.isError)
+    return (
+      <div className="p-6">
+        <ErrorState error={me.error} onRetry={() => me.refetch()} />
+      </div>
+    );
   if (!me.data) return <Navigate to="/sign-in" replace state={{ from: location.pathname }} />;
   const user = me.data;
 

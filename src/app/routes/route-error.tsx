@@ -2,7 +2,8 @@ import { Link, useRouteError } from 'react-router-dom';
 import { Button, EmptyState } from '../../components/ui';
 
 /** A screen whose code could not be fetched: the connection dropped before this tablet kept it. */
-const isFetchFailure = (error: unknown) => error instanceof TypeError && /dynamically imported module|module script failed|Failed to fetch/i.test(error.message);
+const isFetchFailure = (error: unknown) =>
+  error instanceof TypeError && /dynamically imported module|module script failed|Failed to fetch/i.test(error.message);
 
 /** In place of a screen that failed to open: what happened in plain words, a way to try again and a way home. */
 export function RouteError() {

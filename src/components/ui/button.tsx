@@ -6,7 +6,8 @@ export type Size = 'md' | 'lg' | 'xl';
 
 const variants: Record<Variant, string> = {
   primary: 'bg-cellar-800 text-white hover:bg-cellar-700 active:bg-cellar-900 disabled:bg-ink-300',
-  secondary: 'bg-white text-cellar-800 border-2 border-cellar-800 hover:bg-cellar-100 disabled:text-ink-300 disabled:border-ink-300',
+  secondary:
+    'bg-white text-cellar-800 border-2 border-cellar-800 hover:bg-cellar-100 disabled:text-ink-300 disabled:border-ink-300',
   quiet: 'bg-transparent text-cellar-700 hover:bg-mist-100 disabled:text-ink-300',
   danger: 'bg-ember-600 text-white hover:bg-ember-700 disabled:bg-ink-300',
   onDark: 'bg-transparent text-white border-2 border-white/80 hover:bg-cellar-700',
@@ -19,7 +20,11 @@ const sizes: Record<Size, string> = {
 };
 
 /** The look of a button, for anything that should look like one (a link that is a step in the work). */
-export function buttonClass({ variant = 'primary', size = 'md', className }: { variant?: Variant; size?: Size; className?: string } = {}): string {
+export function buttonClass({
+  variant = 'primary',
+  size = 'md',
+  className,
+}: { variant?: Variant; size?: Size; className?: string } = {}): string {
   return cx(
     'inline-flex min-w-touch items-center justify-center gap-2 rounded-lg font-semibold transition-colors disabled:cursor-not-allowed',
     variants[variant],
@@ -47,7 +52,9 @@ export const Button = forwardRef<HTMLButtonElement, ButtonProps>(function Button
       className={buttonClass({ variant, size, className })}
       {...rest}
     >
-      {busy && <span className="h-4 w-4 animate-spin rounded-full border-2 border-current border-t-transparent" aria-hidden />}
+      {busy && (
+        <span className="h-4 w-4 animate-spin rounded-full border-2 border-current border-t-transparent" aria-hidden />
+      )}
       {children}
     </button>
   );

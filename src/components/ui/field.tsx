@@ -1,4 +1,11 @@
-import { forwardRef, useId, type InputHTMLAttributes, type ReactNode, type SelectHTMLAttributes, type TextareaHTMLAttributes } from 'react';
+import {
+  forwardRef,
+  useId,
+  type InputHTMLAttributes,
+  type ReactNode,
+  type SelectHTMLAttributes,
+  type TextareaHTMLAttributes,
+} from 'react';
 import { cx } from './cx';
 
 // The field being typed in wears a brass ring as wide as the focus outline elsewhere; a field that cannot be
@@ -41,40 +48,44 @@ interface Common {
   error?: string;
 }
 
-export const TextField = forwardRef<HTMLInputElement, Common & InputHTMLAttributes<HTMLInputElement>>(function TextField(
-  { label, hint, error, className, id, ...rest },
-  ref,
-) {
-  const auto = useId();
-  const fieldId = id ?? auto;
-  return (
-    <FieldShell id={fieldId} label={label} hint={hint} error={error}>
-      <input
-        ref={ref}
-        id={fieldId}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={error ? `${fieldId}-error` : hint ? `${fieldId}-hint` : undefined}
-        className={cx(control, className)}
-        {...rest}
-      />
-    </FieldShell>
-  );
-});
+export const TextField = forwardRef<HTMLInputElement, Common & InputHTMLAttributes<HTMLInputElement>>(
+  function TextField({ label, hint, error, className, id, ...rest }, ref) {
+    const auto = useId();
+    const fieldId = id ?? auto;
+    return (
+      <FieldShell id={fieldId} label={label} hint={hint} error={error}>
+        <input
+          ref={ref}
+          id={fieldId}
+          aria-invalid={error ? true : undefined}
+          aria-describedby={error ? `${fieldId}-error` : hint ? `${fieldId}-hint` : undefined}
+          className={cx(control, className)}
+          {...rest}
+        />
+      </FieldShell>
+    );
+  },
+);
 
-export const SelectField = forwardRef<HTMLSelectElement, Common & SelectHTMLAttributes<HTMLSelectElement>>(function SelectField(
-  { label, hint, error, className, id, children, ...rest },
-  ref,
-) {
-  const auto = useId();
-  const fieldId = id ?? auto;
-  return (
-    <FieldShell id={fieldId} label={label} hint={hint} error={error}>
-      <select ref={ref} id={fieldId} aria-invalid={error ? true : undefined} className={cx(control, 'pr-8', className)} {...rest}>
-        {children}
-      </select>
-    </FieldShell>
-  );
-});
+export const SelectField = forwardRef<HTMLSelectElement, Common & SelectHTMLAttributes<HTMLSelectElement>>(
+  function SelectField({ label, hint, error, className, id, children, ...rest }, ref) {
+    const auto = useId();
+    const fieldId = id ?? auto;
+    return (
+      <FieldShell id={fieldId} label={label} hint={hint} error={error}>
+        <select
+          ref={ref}
+          id={fieldId}
+          aria-invalid={error ? true : undefined}
+          className={cx(control, 'pr-8', className)}
+          {...rest}
+        >
+          {children}
+        </select>
+      </FieldShell>
+    );
+  },
+);
 
 export const TextAreaField = forwardRef<HTMLTextAreaElement, Common & TextareaHTMLAttributes<HTMLTextAreaElement>>(
   function TextAreaField({ label, hint, error, className, id, ...rest }, ref) {

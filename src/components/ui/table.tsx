@@ -10,7 +10,12 @@ export function Table({ className, ...rest }: HTMLAttributes<HTMLTableElement>) 
 }
 
 export function Th({ className, ...rest }: ThHTMLAttributes<HTMLTableCellElement>) {
-  return <th className={cx('border-b-2 border-mist-200 bg-mist-100 px-4 py-3 text-sm font-semibold text-ink-700', className)} {...rest} />;
+  return (
+    <th
+      className={cx('border-b-2 border-mist-200 bg-mist-100 px-4 py-3 text-sm font-semibold text-ink-700', className)}
+      {...rest}
+    />
+  );
 }
 
 export function Td({ className, ...rest }: TdHTMLAttributes<HTMLTableCellElement>) {

@@ -1,6 +1,5 @@
 /** Every IANA time zone the browser knows, for a <select>. */
-const zones: string[] =
-  typeof Intl.supportedValuesOf === 'function' ? Intl.supportedValuesOf('timeZone') : ['UTC'];
+const zones: string[] = typeof Intl.supportedValuesOf === 'function' ? Intl.supportedValuesOf('timeZone') : ['UTC'];
 
 export function TimeZoneOptions() {
   return (

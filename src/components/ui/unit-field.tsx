@@ -19,13 +19,24 @@ interface Props<T extends FieldValues> {
  * A number stored in SI, typed and shown in the brewery's units (lb, oz, °F, gal, qt/lb or kg, g, °C, L, L/kg);
  * its limit messages are restated in those units too.
  */
-export function UnitField<T extends FieldValues>({ control, name, label, quantity, system, optional, disabled, hint }: Props<T>) {
+export function UnitField<T extends FieldValues>({
+  control,
+  name,
+  label,
+  quantity,
+  system,
+  optional,
+  disabled,
+  hint,
+}: Props<T>) {
   const { field, fieldState } = useController({ control, name });
   const u = UNITS[system][quantity];
   // While the person types, keep their text (e.g. "12.") rather than re-formatting it under the cursor.
   const [text, setText] = useState<string | null>(null);
   const value = field.value as unknown;
-  const shown = text ?? (typeof value === 'number' && Number.isFinite(value) ? String(Number(u.toDisplay(value).toFixed(u.decimals))) : '');
+  const shown =
+    text ??
+    (typeof value === 'number' && Number.isFinite(value) ? String(Number(u.toDisplay(value).toFixed(u.decimals))) : '');
   return (
     <TextField
       label={`${label} (${u.unit})`}
@@ -39,7 +50,9 @@ export function UnitField<T extends FieldValues>({ control, name, label, quantit
         const raw = e.target.value;
         setText(raw);
         const n = Number(raw.replace(',', '.'));
-        field.onChange(raw.trim() === '' ? (optional ? undefined : Number.NaN) : Number.isFinite(n) ? u.fromDisplay(n) : Number.NaN);
+        field.onChange(
+          raw.trim() === '' ? (optional ? undefined : Number.NaN) : Number.isFinite(n) ? u.fromDisplay(n) : Number.NaN,
+        );
       }}
       onBlur={() => {
         setText(null);
@@ -52,5 +65,10 @@ export function UnitField<T extends FieldValues>({ control, name, label, quantit
 
 /** Parses a plain number input for react-hook-form: empty becomes undefined (optional fields) or NaN (required ones, so zod says "enter a number"). */
 export const asNumber = (optional = false) => ({
-  setValueAs: (v: unknown) => (v === '' || v === null || v === undefined ? (optional ? undefined : Number.NaN) : Number(String(v).replace(',', '.'))),
+  setValueAs: (v: unknown) =>
+    v === '' || v === null || v === undefined
+      ? optional
+        ? undefined
+        : Number.NaN
+      : Number(String(v).replace(',', '.')),
 });

@@ -11,11 +11,17 @@ export const inviteQuery = (token: string) =>
 export const useInvite = (token: string) => useQuery(inviteQuery(token));
 
 export const useRequestReset = () =>
-  useMutation({ mutationFn: (input: ResetRequestInput) => api.post<{ message: string }>('/api/auth/reset-request', input) });
+  useMutation({
+    mutationFn: (input: ResetRequestInput) => api.post<{ message: string }>('/api/auth/reset-request', input),
+  });
 
 /** Whether a reset link can still be used (404 with the reason when it cannot). */
 export const useResetLink = (token: string) =>
-  useQuery({ queryKey: [...authKeys.all, 'reset', token] as const, queryFn: () => api.get<void>(`/api/auth/reset/${token}`), retry: false });
+  useQuery({
+    queryKey: [...authKeys.all, 'reset', token] as const,
+    queryFn: () => api.get<void>(`/api/auth/reset/${token}`),
+    retry: false,
+  });
 
 export const useResetPassword = (token: string) =>
   useMutation({ mutationFn: (input: ResetPasswordInput) => api.post<void>(`/api/auth/reset/${token}`, input) });

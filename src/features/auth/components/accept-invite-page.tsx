@@ -44,7 +44,12 @@ export function AcceptInvitePage() {
             <strong>{invite.data.email}</strong>.
           </p>
           <FormBanner message={banner} />
-          <TextField label="Your name" autoComplete="name" {...register('displayName')} error={formState.errors.displayName?.message} />
+          <TextField
+            label="Your name"
+            autoComplete="name"
+            {...register('displayName')}
+            error={formState.errors.displayName?.message}
+          />
           <TextField
             label="Choose a password"
             type="password"

@@ -37,7 +37,13 @@ export function ForgotPasswordPage() {
       ) : (
         <form onSubmit={onSubmit} className="space-y-4" noValidate>
           <FormBanner message={banner} />
-          <TextField label="E-mail" type="email" autoComplete="username" {...register('email')} error={formState.errors.email?.message} />
+          <TextField
+            label="E-mail"
+            type="email"
+            autoComplete="username"
+            {...register('email')}
+            error={formState.errors.email?.message}
+          />
           <Button type="submit" size="lg" className="w-full" busy={request.isPending}>
             Send a reset link
           </Button>

@@ -31,7 +31,13 @@ export function SignInPage() {
     <AuthFrame title="Sign in">
       <form onSubmit={onSubmit} className="space-y-4" noValidate>
         <FormBanner message={banner} />
-        <TextField label="E-mail" type="email" autoComplete="username" {...register('email')} error={formState.errors.email?.message} />
+        <TextField
+          label="E-mail"
+          type="email"
+          autoComplete="username"
+          {...register('email')}
+          error={formState.errors.email?.message}
+        />
         <TextField
           label="Password"
           type="password"

@@ -7,7 +7,11 @@ export const batchListQuery = (query: Partial<BatchListQuery>) =>
   queryOptions({
     queryKey: batchKeys.list(query),
     queryFn: () => {
-      const params = new URLSearchParams(Object.entries(query).filter(([, v]) => v !== undefined).map(([k, v]) => [k, String(v)]));
+      const params = new URLSearchParams(
+        Object.entries(query)
+          .filter(([, v]) => v !== undefined)
+          .map(([k, v]) => [k, String(v)]),
+      );
       return api.get<BatchList>(`/api/batches${params.size ? `?${params}` : ''}`);
     },
     placeholderData: keepPreviousData,

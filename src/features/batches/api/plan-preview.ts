@@ -8,7 +8,11 @@ export const planPreviewQuery = (query: Partial<PlanPreviewQuery>) =>
   queryOptions({
     queryKey: [...batchKeys.all, 'plan-preview', query] as const,
     queryFn: () => {
-      const params = new URLSearchParams(Object.entries(query).filter(([, v]) => v !== undefined).map(([k, v]) => [k, String(v)]));
+      const params = new URLSearchParams(
+        Object.entries(query)
+          .filter(([, v]) => v !== undefined)
+          .map(([k, v]) => [k, String(v)]),
+      );
       return api.get<PlanPreview>(`/api/batches/plan-preview?${params}`);
     },
     enabled: query.recipeVersionId !== undefined,

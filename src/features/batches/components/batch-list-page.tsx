@@ -1,7 +1,17 @@
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
 import { BATCH_STATUSES, BATCH_STATUS_LABELS, type BatchStatus } from '../../../../shared/schemas/batches';
-import { Button, EmptyState, ErrorState, Loading, PageHeader, SelectField, Table, Td, Th } from '../../../components/ui';
+import {
+  Button,
+  EmptyState,
+  ErrorState,
+  Loading,
+  PageHeader,
+  SelectField,
+  Table,
+  Td,
+  Th,
+} from '../../../components/ui';
 import { useBatchList } from '../api/list-batches';
 import { showSg } from './format';
 
@@ -17,7 +27,14 @@ export function BatchListPage() {
       <PageHeader title="Batches" subtitle="Plan a batch from a recipe version's scale screen." />
       <div className="flex flex-wrap gap-4">
         <div className="w-56">
-          <SelectField label="Status" value={status} onChange={(e) => { setStatus(e.target.value as BatchStatus | ''); setPage(1); }}>
+          <SelectField
+            label="Status"
+            value={status}
+            onChange={(e) => {
+              setStatus(e.target.value as BatchStatus | '');
+              setPage(1);
+            }}
+          >
             <option value="">Any status</option>
             {BATCH_STATUSES.map((s) => (
               <option key={s} value={s}>
@@ -27,7 +44,14 @@ export function BatchListPage() {
           </SelectField>
         </div>
         <div className="w-56">
-          <SelectField label="Recipe" value={recipeId} onChange={(e) => { setRecipeId(e.target.value ? Number(e.target.value) : ''); setPage(1); }}>
+          <SelectField
+            label="Recipe"
+            value={recipeId}
+            onChange={(e) => {
+              setRecipeId(e.target.value ? Number(e.target.value) : '');
+              setPage(1);
+            }}
+          >
             <option value="">Any recipe</option>
             {[...recipes].map(([rid, name]) => (
               <option key={rid} value={rid}>
@@ -61,7 +85,10 @@ export function BatchListPage() {
               {list.data.items.map((b) => (
                 <tr key={b.id}>
                   <Td>
-                    <Link to={`/batches/${b.id}`} className="flex min-h-touch items-center font-semibold text-cellar-700 underline">
+                    <Link
+                      to={`/batches/${b.id}`}
+                      className="flex min-h-touch items-center font-semibold text-cellar-700 underline"
+                    >
                       {b.number}
                     </Link>
                   </Td>
@@ -83,7 +110,11 @@ export function BatchListPage() {
               <span>
                 Page {page} of {Math.ceil(list.data.total / list.data.pageSize)}
               </span>
-              <Button variant="secondary" disabled={page * list.data.pageSize >= list.data.total} onClick={() => setPage(page + 1)}>
+              <Button
+                variant="secondary"
+                disabled={page * list.data.pageSize >= list.data.total}
+                onClick={() => setPage(page + 1)}
+              >
                 Older
               </Button>
             </div>

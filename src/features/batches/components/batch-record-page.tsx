@@ -31,7 +31,8 @@ export function BatchRecordPage() {
             {b.plan.versionNumber !== undefined && ` · recipe version ${b.plan.versionNumber}`}
           </p>
           <p className="tabular-nums">
-            Planned OG {showSg(computed.og)} · FG {showSg(computed.fg)} · {computed.ibu.toFixed(0)} IBU · into fermenter {show(system, 'volumeL', computed.volumes.intoFermenterL)}
+            Planned OG {showSg(computed.og)} · FG {showSg(computed.fg)} · {computed.ibu.toFixed(0)} IBU · into fermenter{' '}
+            {show(system, 'volumeL', computed.volumes.intoFermenterL)}
           </p>
           <p className="text-sm text-ink-500">Times in {me.brewery.timeZone}.</p>
         </div>
@@ -45,7 +46,11 @@ export function BatchRecordPage() {
       </section>
       <section>
         <h2 className="text-xl font-bold">Brew-day steps planned</h2>
-        <p>{brewDaySteps(b.plan).map((s) => s.label).join(' → ')}</p>
+        <p>
+          {brewDaySteps(b.plan)
+            .map((s) => s.label)
+            .join(' → ')}
+        </p>
       </section>
       <ActualsCard actuals={b.actuals} system={system} />
       <section>
@@ -54,7 +59,11 @@ export function BatchRecordPage() {
       </section>
       <section>
         <h2 className="text-xl font-bold">Signatures</h2>
-        {b.signatures.length ? <Signatures signatures={b.signatures} timeZone={me.brewery.timeZone} /> : <p>Not signed yet.</p>}
+        {b.signatures.length ? (
+          <Signatures signatures={b.signatures} timeZone={me.brewery.timeZone} />
+        ) : (
+          <p>Not signed yet.</p>
+        )}
       </section>
     </article>
   );

@@ -8,7 +8,13 @@ const additions = [
   { minute: 60, additions: [{ what: 'Magnum', amount: { value: 450, unit: 'g' as const } }] },
   { minute: 15, additions: [{ what: 'Cascade', amount: { value: 900, unit: 'g' as const } }] },
 ];
-const props = { boilStartedAt: new Date(START).toISOString(), boilMinutes: 60, additions, system: 'metric' as const, timeZone: 'America/Halifax' };
+const props = {
+  boilStartedAt: new Date(START).toISOString(),
+  boilMinutes: 60,
+  additions,
+  system: 'metric' as const,
+  timeZone: 'America/Halifax',
+};
 
 beforeEach(() => {
   vi.useFakeTimers();

@@ -57,7 +57,8 @@ export function BoilTimer({
       <section className="rounded-xl bg-cellar-100 p-4 text-ink-900 shadow-sm" aria-label="Boil timer">
         <h2 className="text-lg font-bold">Boil timer</h2>
         <p className="mt-1 text-lg" data-testid="boil-ended">
-          Boil ended {showTime(boilEndedAt, timeZone)} after <span className="font-semibold tabular-nums">{clock((Date.parse(boilEndedAt) - started) / 1000)}</span>
+          Boil ended {showTime(boilEndedAt, timeZone)} after{' '}
+          <span className="font-semibold tabular-nums">{clock((Date.parse(boilEndedAt) - started) / 1000)}</span>
         </p>
       </section>
     );
@@ -92,7 +93,9 @@ export function BoilTimer({
           ) : (
             <p className="mt-3 text-3xl font-bold" data-testid="boil-add-now">
               Add now: {next.minute} min addition
-              {dueIn < -60 && <span className="block text-lg font-semibold text-brass-400">due {clock(-dueIn)} ago</span>}
+              {dueIn < -60 && (
+                <span className="block text-lg font-semibold text-brass-400">due {clock(-dueIn)} ago</span>
+              )}
             </p>
           )}
           <AdditionList additions={next.additions} system={system} className="mt-2 text-lg" />

@@ -10,8 +10,23 @@ describe('done steps', () => {
       { kind: 'step', stepKey: 'pitch-yeast', capturedAt: '2026-12-01T16:10:00Z' },
     ];
     const waiting = [
-      { idempotencyKey: 'k', url: '', body: { kind: 'step', stepKey: 'pitch-yeast' }, capturedAt: '2026-12-01T16:20:00Z', label: '', group: '', userId: 1, authorName: '', state: 'waiting' as const, attempts: 0 },
+      {
+        idempotencyKey: 'k',
+        url: '',
+        body: { kind: 'step', stepKey: 'pitch-yeast' },
+        capturedAt: '2026-12-01T16:20:00Z',
+        label: '',
+        group: '',
+        userId: 1,
+        authorName: '',
+        state: 'waiting' as const,
+        attempts: 0,
+      },
     ];
-    expect(doneSteps(entries, waiting).get('pitch-yeast')).toEqual({ at: '2026-12-01T16:00:00Z', waiting: false, times: 3 });
+    expect(doneSteps(entries, waiting).get('pitch-yeast')).toEqual({
+      at: '2026-12-01T16:00:00Z',
+      waiting: false,
+      times: 3,
+    });
   });
 });

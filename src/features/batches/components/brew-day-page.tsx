@@ -29,7 +29,10 @@ interface Done {
 }
 
 /** When each step was first marked done (on the server, or still waiting on this device), and how often it was logged. */
-export function doneSteps(entries: { kind: string; stepKey: string | null; capturedAt: string }[], waiting: OutboxItem[]): Map<string, Done> {
+export function doneSteps(
+  entries: { kind: string; stepKey: string | null; capturedAt: string }[],
+  waiting: OutboxItem[],
+): Map<string, Done> {
   const done = new Map<string, Done>();
   const mark = (key: string, at: string, isWaiting: boolean) => {
     const before = done.get(key);
@@ -114,7 +117,13 @@ export function BrewDayPage() {
     setInvalid(undefined);
     const item = await logEntry(
       id,
-      { kind: 'step', stepKey: step.key, label: step.label, meaning: 'performed', ...(measurements ? { measurements } : {}) },
+      {
+        kind: 'step',
+        stepKey: step.key,
+        label: step.label,
+        meaning: 'performed',
+        ...(measurements ? { measurements } : {}),
+      },
       measurements ? `${step.label} · ${showMeasurements(system, measurements)}` : step.label,
     );
     sent.current.set(item.idempotencyKey, { stepKey: step.key, typed, gravity });
@@ -145,7 +154,13 @@ export function BrewDayPage() {
           )}
         </div>
         <div className="flex items-center gap-2">
-          <span className={cx('rounded-full px-3 py-1 font-semibold', online ? 'bg-cellar-100 text-cellar-800' : 'bg-brass-400 text-ink-900')} role="status">
+          <span
+            className={cx(
+              'rounded-full px-3 py-1 font-semibold',
+              online ? 'bg-cellar-100 text-cellar-800' : 'bg-brass-400 text-ink-900',
+            )}
+            role="status"
+          >
             {online ? 'Online' : 'Offline: entries kept on this tablet'}
           </span>
           <LinkButton to={`/batches/${id}/record`}>Record and QR labels</LinkButton>
@@ -187,7 +202,12 @@ export function BrewDayPage() {
                   {error}
                 </p>
               )}
-              <Button size="xl" className="mt-5 w-full text-2xl" busy={guard.pending} onClick={() => void markDone(current)}>
+              <Button
+                size="xl"
+                className="mt-5 w-full text-2xl"
+                busy={guard.pending}
+                onClick={() => void markDone(current)}
+              >
                 {done.has(current.key) ? 'Log again' : 'Done'}
               </Button>
             </Card>
@@ -217,7 +237,11 @@ export function BrewDayPage() {
                       aria-current={current?.key === s.key ? 'step' : undefined}
                       className={cx(
                         'flex min-h-[56px] w-full items-center justify-between gap-2 rounded-lg border-2 px-3 text-left',
-                        current?.key === s.key ? 'border-brass-500 bg-brass-100' : d ? 'border-cellar-600 bg-cellar-100' : 'border-mist-300 bg-white',
+                        current?.key === s.key
+                          ? 'border-brass-500 bg-brass-100'
+                          : d
+                            ? 'border-cellar-600 bg-cellar-100'
+                            : 'border-mist-300 bg-white',
                       )}
                     >
                       <span>
@@ -245,16 +269,28 @@ export function BrewDayPage() {
             boilEndedAt={boilEnd(steps, done)}
             boilMinutes={b.plan.equipment.boilMinutes}
             additions={additions}
-            loggedMinutes={new Set(steps.filter((s) => s.boilMinute !== undefined && done.has(s.key)).map((s) => s.boilMinute!))}
+            loggedMinutes={
+              new Set(steps.filter((s) => s.boilMinute !== undefined && done.has(s.key)).map((s) => s.boilMinute!))
+            }
             system={system}
             timeZone={timeZone}
           />
           {!signed && (
             <Card className="p-4">
               <h2 className="text-lg font-bold">Note or deviation</h2>
-              <TextAreaField label="What happened" value={note} onChange={(e) => setNote(e.target.value)} placeholder="Stuck sparge, added rice hulls" />
+              <TextAreaField
+                label="What happened"
+                value={note}
+                onChange={(e) => setNote(e.target.value)}
+                placeholder="Stuck sparge, added rice hulls"
+              />
               <label className="mt-2 flex min-h-touch items-center gap-3 text-base">
-                <input type="checkbox" className="h-6 w-6" checked={deviation} onChange={(e) => setDeviation(e.target.checked)} />
+                <input
+                  type="checkbox"
+                  className="h-6 w-6"
+                  checked={deviation}
+                  onChange={(e) => setDeviation(e.target.checked)}
+                />
                 This is a deviation from the plan
               </label>
               <Button
@@ -262,7 +298,11 @@ export function BrewDayPage() {
                 size="lg"
                 disabled={!note.trim()}
                 onClick={() => {
-                  void logEntry(id, { kind: 'note', text: note.trim(), deviation, meaning: 'performed' }, `${deviation ? 'Deviation' : 'Note'}: ${note.trim().slice(0, 40)}`);
+                  void logEntry(
+                    id,
+                    { kind: 'note', text: note.trim(), deviation, meaning: 'performed' },
+                    `${deviation ? 'Deviation' : 'Note'}: ${note.trim().slice(0, 40)}`,
+                  );
                   setNote('');
                   setDeviation(false);
                 }}
@@ -280,7 +320,11 @@ export function BrewDayPage() {
 
       <Card className="p-4">
         <h2 className="text-lg font-bold">Log</h2>
-        {b.entries.length ? <LogList batchId={id} entries={b.entries} system={system} timeZone={timeZone} stepAsks={stepAsks} /> : <p className="text-ink-500">Nothing logged yet.</p>}
+        {b.entries.length ? (
+          <LogList batchId={id} entries={b.entries} system={system} timeZone={timeZone} stepAsks={stepAsks} />
+        ) : (
+          <p className="text-ink-500">Nothing logged yet.</p>
+        )}
       </Card>
     </div>
   );

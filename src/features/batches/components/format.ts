@@ -12,7 +12,10 @@ export function showAddition(system: UnitSystem, a: Addition): string {
 export const showSg = (sg: number) => sg.toFixed(3);
 
 /** Measurements as a short line, in the brewery's units. */
-export function showMeasurements(system: UnitSystem, m: { tempC?: number; volumeL?: number; gravitySg?: number; ph?: number }): string {
+export function showMeasurements(
+  system: UnitSystem,
+  m: { tempC?: number; volumeL?: number; gravitySg?: number; ph?: number },
+): string {
   return [
     m.tempC !== undefined && show(system, 'tempC', m.tempC),
     m.volumeL !== undefined && show(system, 'volumeL', m.volumeL),
@@ -30,5 +33,7 @@ export function todayIn(timeZone: string, now: Date = new Date()): string {
 
 /** The calendar date (YYYY-MM-DD) of an instant in the brewery's time zone. */
 export function dateIn(iso: string, timeZone: string): string {
-  return new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }).format(new Date(iso));
+  return new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }).format(
+    new Date(iso),
+  );
 }

@@ -51,8 +51,18 @@ describe('log times', () => {
 describe('entry numbers and corrections', () => {
   it('shows each entry’s number, so “corrects #1” can be found', () => {
     const entries = [
-      entry(1, '2026-12-01T16:46:00Z', { kind: 'step', stepKey: 'pitch-yeast', data: { label: 'Pitch yeast' }, correctedByIds: [2] }),
-      entry(2, '2026-12-01T16:50:00Z', { kind: 'correction', correctsEntryId: 1, reason: 'Forgot the temperature', data: { measurements: { tempC: 18 } } }),
+      entry(1, '2026-12-01T16:46:00Z', {
+        kind: 'step',
+        stepKey: 'pitch-yeast',
+        data: { label: 'Pitch yeast' },
+        correctedByIds: [2],
+      }),
+      entry(2, '2026-12-01T16:50:00Z', {
+        kind: 'correction',
+        correctsEntryId: 1,
+        reason: 'Forgot the temperature',
+        data: { measurements: { tempC: 18 } },
+      }),
     ];
     render(<LogList batchId={1} entries={entries} system="metric" timeZone="America/Halifax" />);
     expect(screen.getAllByTestId('entry-number').map((n) => n.textContent)).toEqual(['#1', '#2']);
@@ -60,8 +70,20 @@ describe('entry numbers and corrections', () => {
   });
 
   it('lets a correction of a step logged without values add the values the step asks for', () => {
-    const stepEntry = entry(1, '2026-12-01T16:46:00Z', { kind: 'step', stepKey: 'pitch-yeast', data: { label: 'Pitch yeast' } });
-    render(<LogList batchId={1} entries={[stepEntry]} system="us" timeZone="America/Halifax" stepAsks={new Map([['pitch-yeast', ['tempC' as const]]])} />);
+    const stepEntry = entry(1, '2026-12-01T16:46:00Z', {
+      kind: 'step',
+      stepKey: 'pitch-yeast',
+      data: { label: 'Pitch yeast' },
+    });
+    render(
+      <LogList
+        batchId={1}
+        entries={[stepEntry]}
+        system="us"
+        timeZone="America/Halifax"
+        stepAsks={new Map([['pitch-yeast', ['tempC' as const]]])}
+      />,
+    );
     fireEvent.click(screen.getByRole('button', { name: 'Correct entry 1' }));
     expect(screen.getByLabelText('Temperature (°F)')).toBeTruthy();
     expect(screen.getByLabelText('Reason')).toBeTruthy();

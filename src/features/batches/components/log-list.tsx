@@ -23,7 +23,11 @@ function what(e: LogEntry): string {
 function measuredIn(e: LogEntry): Measurements | undefined {
   if (e.kind !== 'reading') return e.data.measurements as Measurements | undefined;
   const d = e.data as { sg: number; tempC: number | null; ph?: number };
-  return { gravitySg: d.sg, ...(d.tempC === null ? {} : { tempC: d.tempC }), ...(d.ph === undefined ? {} : { ph: d.ph }) };
+  return {
+    gravitySg: d.sg,
+    ...(d.tempC === null ? {} : { tempC: d.tempC }),
+    ...(d.ph === undefined ? {} : { ph: d.ph }),
+  };
 }
 
 /** Entries a person may correct; a reading's correction may give a new gravity, temperature or pH. */
@@ -58,7 +62,11 @@ export function LogList({
           const m = measuredIn(e);
           const corrected = e.correctedByIds.length > 0;
           return (
-            <li key={e.id} className={cx('flex items-start gap-3 py-2', e.kind === 'correction' && 'pl-6')} data-testid="log-entry">
+            <li
+              key={e.id}
+              className={cx('flex items-start gap-3 py-2', e.kind === 'correction' && 'pl-6')}
+              data-testid="log-entry"
+            >
               <span className="w-36 shrink-0 tabular-nums text-ink-500">{entryTime(e.capturedAt, timeZone)}</span>
               <span className="w-12 shrink-0 font-semibold tabular-nums text-ink-500" data-testid="entry-number">
                 #{e.sequence}
@@ -67,16 +75,28 @@ export function LogList({
                 <p className={cx('font-medium', corrected && 'text-ink-500 line-through')}>
                   {what(e)}
                   {m && <span className="ml-2 tabular-nums">{showMeasurements(system, m)}</span>}
-                  {e.kind === 'note' || !e.data.note ? null : <span className="ml-2 text-ink-500">“{String(e.data.note)}”</span>}
+                  {e.kind === 'note' || !e.data.note ? null : (
+                    <span className="ml-2 text-ink-500">“{String(e.data.note)}”</span>
+                  )}
                 </p>
                 <p className="text-sm text-ink-500">
-                  {e.authorName} · {ROLE_LABELS[e.authorRole as Role] ?? e.authorRole} · received {entryTime(e.receivedAt, timeZone)}
-                  {e.late && <span className="ml-2 rounded bg-brass-100 px-1 font-semibold text-ink-900">Late entry</span>}
-                  {e.correctsEntryId && <span className="ml-2">corrects #{entries.find((x) => x.id === e.correctsEntryId)?.sequence}</span>}
+                  {e.authorName} · {ROLE_LABELS[e.authorRole as Role] ?? e.authorRole} · received{' '}
+                  {entryTime(e.receivedAt, timeZone)}
+                  {e.late && (
+                    <span className="ml-2 rounded bg-brass-100 px-1 font-semibold text-ink-900">Late entry</span>
+                  )}
+                  {e.correctsEntryId && (
+                    <span className="ml-2">corrects #{entries.find((x) => x.id === e.correctsEntryId)?.sequence}</span>
+                  )}
                 </p>
               </div>
               {CORRECTABLE.includes(e.kind) && (
-                <Button variant="quiet" className="no-print" onClick={() => setCorrecting(e)} aria-label={`Correct entry ${e.sequence}`}>
+                <Button
+                  variant="quiet"
+                  className="no-print"
+                  onClick={() => setCorrecting(e)}
+                  aria-label={`Correct entry ${e.sequence}`}
+                >
                   Correct
                 </Button>
               )}
@@ -124,20 +144,47 @@ function CorrectionDialog({
   const [error, setError] = useState<string | null>(null);
   // What the entry measured, and what its step asks for: a step logged without values can have them added.
   const measured = Object.keys(measuredIn(entry) ?? {}) as MeasureKey[];
-  const asks = entry.kind === 'reading' ? READING_ASKS : [...measured, ...stepAsks.filter((k) => !measured.includes(k))];
+  const asks =
+    entry.kind === 'reading' ? READING_ASKS : [...measured, ...stepAsks.filter((k) => !measured.includes(k))];
   const submit = async () => {
     const { measurements, error: bad } = toMeasurements(typed, system, gravity, brixToSg);
     if (bad) return setError(bad);
     if (reason.trim().length < 3) return setError('Say why (at least 3 characters)');
-    await logEntry(batchId, { kind: 'correction', correctsEntryId: entry.id, reason: reason.trim(), meaning: 'performed', ...(measurements ? { measurements } : {}) }, `Correction of #${entry.sequence}`);
+    await logEntry(
+      batchId,
+      {
+        kind: 'correction',
+        correctsEntryId: entry.id,
+        reason: reason.trim(),
+        meaning: 'performed',
+        ...(measurements ? { measurements } : {}),
+      },
+      `Correction of #${entry.sequence}`,
+    );
     onClose();
   };
   return (
     <Dialog open onClose={onClose} title={`Correct entry #${entry.sequence}`}>
       <p className="mb-3 text-ink-500">The original stays in the log, struck through, beside your correction.</p>
-      {asks.length > 0 && <MeasurementFields asks={asks} expected={{}} typed={typed} onChange={setTyped} system={system} gravity={gravity} onGravityUnit={setGravity} brix={brixToSg !== undefined} />}
+      {asks.length > 0 && (
+        <MeasurementFields
+          asks={asks}
+          expected={{}}
+          typed={typed}
+          onChange={setTyped}
+          system={system}
+          gravity={gravity}
+          onGravityUnit={setGravity}
+          brix={brixToSg !== undefined}
+        />
+      )}
       <div className="mt-3">
-        <TextAreaField label="Reason" value={reason} onChange={(e) => setReason(e.target.value)} error={error ?? undefined} />
+        <TextAreaField
+          label="Reason"
+          value={reason}
+          onChange={(e) => setReason(e.target.value)}
+          error={error ?? undefined}
+        />
       </div>
       <div className="mt-4 flex justify-end gap-2">
         <Button variant="secondary" onClick={onClose}>

@@ -30,7 +30,8 @@ export function expectedText(key: MeasureKey, si: number, system: UnitSystem, gr
 
 /** A limit of the shared schema (SI) as the field shows it, e.g. 110 °C as "230 °F" for a US brewery. */
 function limitText(key: MeasureKey, si: number, system: UnitSystem, gravity: GravityUnit): string {
-  if (key === 'gravitySg') return gravity === 'plato' ? `${Number(sgToPlato(si).toFixed(1))} °P` : `${si.toFixed(3)} SG`;
+  if (key === 'gravitySg')
+    return gravity === 'plato' ? `${Number(sgToPlato(si).toFixed(1))} °P` : `${si.toFixed(3)} SG`;
   if (key === 'ph') return String(si);
   const u = UNITS[system][key];
   return `${Number(u.toDisplay(si).toFixed(1))} ${u.unit}`;
@@ -63,7 +64,12 @@ export function toMeasurements(
   return converted;
 }
 
-function convert(typed: Typed, system: UnitSystem, gravity: GravityUnit, brixToSg?: BrixToSg): { measurements?: Measurements; error?: string; field?: MeasureKey } {
+function convert(
+  typed: Typed,
+  system: UnitSystem,
+  gravity: GravityUnit,
+  brixToSg?: BrixToSg,
+): { measurements?: Measurements; error?: string; field?: MeasureKey } {
   const out: Measurements = {};
   for (const [key, text] of Object.entries(typed) as [MeasureKey, string | undefined][]) {
     if (!text?.trim()) continue;
@@ -72,12 +78,16 @@ function convert(typed: Typed, system: UnitSystem, gravity: GravityUnit, brixToS
     if (key === 'tempC') out.tempC = Number(UNITS[system].tempC.fromDisplay(n).toFixed(2));
     else if (key === 'volumeL') out.volumeL = Number(UNITS[system].volumeL.fromDisplay(n).toFixed(2));
     else if (key === 'gravitySg') {
-      if (gravity !== 'sg' && (n < 0 || n > 40)) return { error: `Gravity: ${gravity === 'plato' ? '°P' : '°Bx'} is between 0 and 40`, field: key };
+      if (gravity !== 'sg' && (n < 0 || n > 40))
+        return { error: `Gravity: ${gravity === 'plato' ? '°P' : '°Bx'} is between 0 and 40`, field: key };
       if (gravity === 'brix' && !brixToSg) return { error: 'Gravity: enter SG or °P', field: key };
       try {
         out.gravitySg = Number((gravity === 'sg' ? n : gravity === 'plato' ? platoToSg(n) : brixToSg!(n)).toFixed(4));
       } catch (error) {
-        return { error: `Gravity: ${error instanceof Error ? error.message : 'not a reading this converts'}`, field: key };
+        return {
+          error: `Gravity: ${error instanceof Error ? error.message : 'not a reading this converts'}`,
+          field: key,
+        };
       }
     } else out.ph = n;
   }
@@ -88,7 +98,11 @@ function convert(typed: Typed, system: UnitSystem, gravity: GravityUnit, brixToS
  * Why the server refused an entry, naming the field and its limit in the units shown when a measurement is out of
  * range (the outbox keeps only the server's general message); otherwise the server's own message.
  */
-export function refusalOf(item: { body: unknown; message?: string }, system: UnitSystem, gravity: GravityUnit): { message: string; field?: MeasureKey } {
+export function refusalOf(
+  item: { body: unknown; message?: string },
+  system: UnitSystem,
+  gravity: GravityUnit,
+): { message: string; field?: MeasureKey } {
   const m = ((item.body ?? {}) as { measurements?: Measurements }).measurements ?? {};
   for (const [key, si] of Object.entries(m) as [MeasureKey, number][]) {
     if (!(key in NAMES) || typeof si !== 'number') continue;
@@ -129,8 +143,10 @@ export function MeasurementFields({
         const want = expected[key];
         const unit = unitOf(key, system, gravity);
         // A value far from the plan is allowed (the brewer measured it), but worth a second look before it is kept.
-        const typedSi = want === undefined ? undefined : convert({ [key]: typed[key] }, system, gravity).measurements?.[key];
-        const far = invalid !== key && typedSi !== undefined && want !== undefined && farFromExpected(key, typedSi, want);
+        const typedSi =
+          want === undefined ? undefined : convert({ [key]: typed[key] }, system, gravity).measurements?.[key];
+        const far =
+          invalid !== key && typedSi !== undefined && want !== undefined && farFromExpected(key, typedSi, want);
         return (
           <div key={key}>
             {/* As tall as the SG/°P switch, so a field beside the gravity field starts at the same height. */}
@@ -139,14 +155,21 @@ export function MeasurementFields({
                 {unit ? `${NAMES[key]} (${unit})` : NAMES[key]}
               </label>
               {key === 'gravitySg' && (
-                <div role="group" aria-label="Gravity unit" className="flex overflow-hidden rounded-lg border-2 border-cellar-700">
+                <div
+                  role="group"
+                  aria-label="Gravity unit"
+                  className="flex overflow-hidden rounded-lg border-2 border-cellar-700"
+                >
                   {(brix ? (['sg', 'plato', 'brix'] as const) : (['sg', 'plato'] as const)).map((u) => (
                     <button
                       key={u}
                       type="button"
                       aria-pressed={gravity === u}
                       onClick={() => onGravityUnit(u)}
-                      className={cx('min-h-touch min-w-touch px-3 font-semibold', gravity === u ? 'bg-cellar-700 text-white' : 'bg-white text-cellar-800')}
+                      className={cx(
+                        'min-h-touch min-w-touch px-3 font-semibold',
+                        gravity === u ? 'bg-cellar-700 text-white' : 'bg-white text-cellar-800',
+                      )}
                     >
                       {{ sg: 'SG', plato: '°P', brix: '°Bx' }[u]}
                     </button>
@@ -169,7 +192,10 @@ export function MeasurementFields({
             />
             {want !== undefined && (
               <p className="mt-1 text-base text-ink-500">
-                Expected <span className="font-semibold tabular-nums text-ink-900">{expectedText(key, want, system, gravity)}</span>
+                Expected{' '}
+                <span className="font-semibold tabular-nums text-ink-900">
+                  {expectedText(key, want, system, gravity)}
+                </span>
               </p>
             )}
             {far && (

@@ -39,11 +39,18 @@ export function NewBatchPage() {
     },
   });
   const system = me.brewery.unitSystem;
-  const preview = usePlanPreview({ recipeVersionId: num('recipeVersionId'), equipmentProfileId: num('equipmentProfileId'), batchVolumeL: num('batchVolumeL') });
+  const preview = usePlanPreview({
+    recipeVersionId: num('recipeVersionId'),
+    equipmentProfileId: num('equipmentProfileId'),
+    batchVolumeL: num('batchVolumeL'),
+  });
   const fill = preview.data?.fermenterFillL;
   return (
     <div className="max-w-xl space-y-4">
-      <PageHeader title="Plan a batch" subtitle={planned(system, preview.data, preview.isPending && params.has('recipeVersionId'))} />
+      <PageHeader
+        title="Plan a batch"
+        subtitle={planned(system, preview.data, preview.isPending && params.has('recipeVersionId'))}
+      />
       <Card className="p-5">
         <form
           className="space-y-4"
@@ -54,8 +61,15 @@ export function NewBatchPage() {
             }),
           )}
         >
-          {!params.get('recipeVersionId') && <p className="text-ember-700">Open a recipe version and choose “Plan a batch” from its scale screen.</p>}
-          <TextField label="Brew date" type="date" {...form.register('brewDate')} error={form.formState.errors.brewDate?.message} />
+          {!params.get('recipeVersionId') && (
+            <p className="text-ember-700">Open a recipe version and choose “Plan a batch” from its scale screen.</p>
+          )}
+          <TextField
+            label="Brew date"
+            type="date"
+            {...form.register('brewDate')}
+            error={form.formState.errors.brewDate?.message}
+          />
           <SelectField
             label="Fermenter"
             hint="Empty fermenters, largest first, with their size; one marked “needs cleaning” must be cleaned before knockout. You can assign one later."
@@ -77,7 +91,9 @@ export function NewBatchPage() {
           {Object.entries(form.formState.errors)
             .filter(([k]) => k !== 'brewDate' && k !== 'fermenterId')
             .map(([k, e]) => (
-              <p key={k} className="text-ember-700">{e?.message as string}</p>
+              <p key={k} className="text-ember-700">
+                {e?.message as string}
+              </p>
             ))}
           <FormBanner message={banner} />
           <Button type="submit" size="lg" busy={plan.isPending}>
@@ -91,6 +107,7 @@ export function NewBatchPage() {
 
 /** What is being planned, in words: "Breakwater Pale v3 on Main brewhouse, 10.0 bbl". */
 function planned(system: UnitSystem, preview: PlanPreview | undefined, loading: boolean): string {
-  if (preview) return `${preview.recipeName} v${preview.versionNumber} on ${preview.equipmentName}, ${showVolume(system, preview.batchVolumeL)}`;
+  if (preview)
+    return `${preview.recipeName} v${preview.versionNumber} on ${preview.equipmentName}, ${showVolume(system, preview.batchVolumeL)}`;
   return loading ? 'Reading the recipe version…' : 'Choose a recipe version first';
 }

@@ -19,7 +19,9 @@ export function OutboxBanner() {
   return (
     <div role="alert" className="no-print bg-brass-400 px-4 py-3 text-ink-900">
       <div className="mx-auto flex max-w-7xl flex-wrap items-center justify-between gap-3">
-        <p className="font-semibold">Your session ended. {waiting} entries are kept on this tablet and will be sent once you sign in again.</p>
+        <p className="font-semibold">
+          Your session ended. {waiting} entries are kept on this tablet and will be sent once you sign in again.
+        </p>
         <Button onClick={() => navigate('/sign-in', { state: { from: location.pathname } })}>Sign in again</Button>
       </div>
     </div>
@@ -45,8 +47,8 @@ export function SignOutButton({ onSignedOut }: { onSignedOut: () => void }) {
       </Button>
       <Dialog open={asking} onClose={() => setAsking(false)} title="Entries are still waiting to be sent">
         <p>
-          {waiting} {waiting === 1 ? 'entry has' : 'entries have'} not reached Kettlewright yet. Stay signed in until the connection returns and they are sent.
-          Signing out now discards them from this tablet.
+          {waiting} {waiting === 1 ? 'entry has' : 'entries have'} not reached Kettlewright yet. Stay signed in until
+          the connection returns and they are sent. Signing out now discards them from this tablet.
         </p>
         <div className="mt-4 flex flex-wrap justify-end gap-2">
           <Button variant="danger" onClick={() => void leave(true)}>

@@ -12,13 +12,19 @@ export function Signatures({ signatures, timeZone }: { signatures: Signature[]; 
   return (
     <ul className="space-y-2">
       {signatures.map((s) => (
-        <li key={s.entryId} className={s.valid ? 'rounded-lg bg-cellar-100 p-3' : 'rounded-lg bg-ember-100 p-3 text-ember-700'} data-testid="signature">
+        <li
+          key={s.entryId}
+          className={s.valid ? 'rounded-lg bg-cellar-100 p-3' : 'rounded-lg bg-ember-100 p-3 text-ember-700'}
+          data-testid="signature"
+        >
           <p className="font-semibold">
             {MEANING_LABELS[s.meaning]} {s.signerName}
           </p>
           <p className="tabular-nums">{showTime(s.signedAt, timeZone, true)}</p>
           <p className="text-sm">
-            {s.valid ? 'Signature valid: the record is as signed.' : 'Signature invalid: the record has changed since it was signed.'}
+            {s.valid
+              ? 'Signature valid: the record is as signed.'
+              : 'Signature invalid: the record has changed since it was signed.'}
           </p>
           <p className="break-all font-mono text-xs text-ink-500">SHA-256 {s.contentSha256}</p>
         </li>
@@ -32,8 +38,13 @@ export function SignOffPanel({ batchId, pendingCount }: { batchId: number; pendi
   const [password, setPassword] = useState('');
   const signOff = useSignOff(batchId);
   const online = useOnline();
-  const error = signOff.error instanceof ApiError ? (signOff.error.fields.password ?? signOff.error.message) : undefined;
-  const blocked = !online ? 'Signing needs the network: wait for the connection.' : pendingCount > 0 ? 'Wait until every entry on this tablet has been sent.' : null;
+  const error =
+    signOff.error instanceof ApiError ? (signOff.error.fields.password ?? signOff.error.message) : undefined;
+  const blocked = !online
+    ? 'Signing needs the network: wait for the connection.'
+    : pendingCount > 0
+      ? 'Wait until every entry on this tablet has been sent.'
+      : null;
   return (
     <Card className="p-4">
       <h2 className="text-lg font-bold">Sign off the brew day</h2>
@@ -45,7 +56,14 @@ export function SignOffPanel({ batchId, pendingCount }: { batchId: number; pendi
           signOff.mutate({ password }, { onSuccess: () => setPassword('') });
         }}
       >
-        <TextField label="Your password" type="password" autoComplete="current-password" value={password} onChange={(e) => setPassword(e.target.value)} error={error} />
+        <TextField
+          label="Your password"
+          type="password"
+          autoComplete="current-password"
+          value={password}
+          onChange={(e) => setPassword(e.target.value)}
+          error={error}
+        />
         {blocked && <p className="font-medium text-ember-700">{blocked}</p>}
         <Button type="submit" size="lg" busy={signOff.isPending} disabled={Boolean(blocked) || !password}>
           Sign as reviewed

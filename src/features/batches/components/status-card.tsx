@@ -36,13 +36,22 @@ export function StatusCard({ batchId, status, role }: { batchId: number; status:
             change.mutate({ status: 'dumped', reason }, { onSuccess: () => setDumping(false) });
           }}
         >
-          <TextField label="Why is it dumped?" value={reason} onChange={(e) => setReason(e.target.value)} error={error} />
+          <TextField
+            label="Why is it dumped?"
+            value={reason}
+            onChange={(e) => setReason(e.target.value)}
+            error={error}
+          />
           <Button type="submit" variant="danger" busy={change.isPending}>
             Dump the batch
           </Button>
         </form>
       )}
-      {!dumping && error && <p role="alert" className="mt-2 text-ember-700">{error}</p>}
+      {!dumping && error && (
+        <p role="alert" className="mt-2 text-ember-700">
+          {error}
+        </p>
+      )}
     </Card>
   );
 }

@@ -5,7 +5,15 @@ import { show } from '../../../lib/units';
 import { showAddition } from './format';
 
 /** What goes in, amount first. */
-export function AdditionList({ additions, system, className }: { additions: Addition[]; system: UnitSystem; className?: string }) {
+export function AdditionList({
+  additions,
+  system,
+  className,
+}: {
+  additions: Addition[];
+  system: UnitSystem;
+  className?: string;
+}) {
   return (
     <ul className={cx('space-y-1', className)}>
       {additions.map((a, i) => (
@@ -21,13 +29,15 @@ export function AdditionList({ additions, system, className }: { additions: Addi
 export function StepDetails({ step, system }: { step: BrewDayStep; system: UnitSystem }) {
   return (
     <>
-      {step.additions.length > 0 && <AdditionList additions={step.additions} system={system} className="mt-3 text-xl" />}
+      {step.additions.length > 0 && (
+        <AdditionList additions={step.additions} system={system} className="mt-3 text-xl" />
+      )}
       {(step.holdMinutes !== undefined || step.infusion || step.pitchCellsBillion !== undefined) && (
         <ul className="mt-3 space-y-1 text-xl" data-testid="step-plan">
           {step.infusion && (
             <li>
-              Add <span className="font-bold tabular-nums">{show(system, 'volumeL', step.infusion.volumeL)}</span> of water at{' '}
-              <span className="font-bold tabular-nums">{show(system, 'tempC', step.infusion.tempC)}</span>
+              Add <span className="font-bold tabular-nums">{show(system, 'volumeL', step.infusion.volumeL)}</span> of
+              water at <span className="font-bold tabular-nums">{show(system, 'tempC', step.infusion.tempC)}</span>
             </li>
           )}
           {step.holdMinutes !== undefined && (
@@ -43,7 +53,8 @@ export function StepDetails({ step, system }: { step: BrewDayStep; system: UnitS
           )}
           {step.pitchCellsBillion !== undefined && (
             <li>
-              Pitch about <span className="font-bold tabular-nums">{Math.round(step.pitchCellsBillion)} billion</span> cells
+              Pitch about <span className="font-bold tabular-nums">{Math.round(step.pitchCellsBillion)} billion</span>{' '}
+              cells
             </li>
           )}
         </ul>
@@ -51,15 +62,17 @@ export function StepDetails({ step, system }: { step: BrewDayStep; system: UnitS
       {step.hot && (
         <div className="mt-3">
           <Caution title="Hot liquid">
-            Near-boiling wort and water scald: wear gloves and eye protection, check hose clamps before pumping, and follow your local codes and licensed practice.
+            Near-boiling wort and water scald: wear gloves and eye protection, check hose clamps before pumping, and
+            follow your local codes and licensed practice.
           </Caution>
         </div>
       )}
       {step.oxygen && (
         <div className="mt-3">
           <Caution title="Compressed oxygen">
-            The cylinder is under high pressure and oxygen makes things burn fiercely: keep oil, grease and flames away, chain the cylinder upright, use a
-            regulator made for oxygen, open the valve slowly, close it when done, and follow your local codes and licensed practice.
+            The cylinder is under high pressure and oxygen makes things burn fiercely: keep oil, grease and flames away,
+            chain the cylinder upright, use a regulator made for oxygen, open the valve slowly, close it when done, and
+            follow your local codes and licensed practice.
           </Caution>
         </div>
       )}

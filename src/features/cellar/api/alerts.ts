@@ -3,7 +3,12 @@ import { api } from '../../../lib/api-client';
 import type { AlertView } from '../../../../shared/schemas/cellar';
 import { cellarKeys } from './keys';
 
-export const alertsQuery = () => queryOptions({ queryKey: cellarKeys.alerts(), queryFn: () => api.get<AlertView[]>('/api/cellar/alerts'), refetchInterval: 60_000 });
+export const alertsQuery = () =>
+  queryOptions({
+    queryKey: cellarKeys.alerts(),
+    queryFn: () => api.get<AlertView[]>('/api/cellar/alerts'),
+    refetchInterval: 60_000,
+  });
 export const useAlerts = (enabled: boolean) => useQuery({ ...alertsQuery(), enabled });
 
 export function useMarkAlertRead() {

@@ -12,8 +12,15 @@ export interface CarbonationAnswer {
 export const carbonationQuery = (query: CarbonationQuery) =>
   queryOptions({
     queryKey: cellarKeys.carbonation(query),
-    queryFn: () => api.get<CarbonationAnswer>(`/api/cellar/carbonation?${new URLSearchParams(Object.entries(query).map(([k, v]) => [k, String(v)]))}`),
+    queryFn: () =>
+      api.get<CarbonationAnswer>(
+        `/api/cellar/carbonation?${new URLSearchParams(Object.entries(query).map(([k, v]) => [k, String(v)]))}`,
+      ),
     retry: false,
   });
 
-export const useCarbonation = (query: CarbonationQuery | null) => useQuery({ ...carbonationQuery(query ?? { vesselId: 0, co2Volumes: 0, temp: 0, tempUnit: 'c' }), enabled: query !== null });
+export const useCarbonation = (query: CarbonationQuery | null) =>
+  useQuery({
+    ...carbonationQuery(query ?? { vesselId: 0, co2Volumes: 0, temp: 0, tempUnit: 'c' }),
+    enabled: query !== null,
+  });

@@ -13,5 +13,10 @@ export const cellarGroup = (batchId: number) => `cellar:${batchId}`;
  */
 export function useLogCellarEntry(batchId: number) {
   return (entry: CellarEntry, label: string) =>
-    outbox().enqueue({ url: `/api/cellar/batches/${batchId}/${PATHS[entry.kind]}`, body: entry, label, group: cellarGroup(batchId) });
+    outbox().enqueue({
+      url: `/api/cellar/batches/${batchId}/${PATHS[entry.kind]}`,
+      body: entry,
+      label,
+      group: cellarGroup(batchId),
+    });
 }

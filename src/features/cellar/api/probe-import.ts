@@ -7,7 +7,8 @@ import { cellarKeys } from './keys';
 /** Checks every row of a probe file against the batch; writes nothing. */
 export function usePreviewImport(batchId: number) {
   return useMutation({
-    mutationFn: (input: ProbeImportInput) => api.post<ProbeImportResult>(`/api/cellar/batches/${batchId}/readings/preview`, input),
+    mutationFn: (input: ProbeImportInput) =>
+      api.post<ProbeImportResult>(`/api/cellar/batches/${batchId}/readings/preview`, input),
   });
 }
 

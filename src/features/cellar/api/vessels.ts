@@ -3,7 +3,8 @@ import { api } from '../../../lib/api-client';
 import type { VesselInput, VesselView } from '../../../../shared/schemas/cellar';
 import { cellarKeys } from './keys';
 
-export const vesselsQuery = () => queryOptions({ queryKey: cellarKeys.vessels(), queryFn: () => api.get<VesselView[]>('/api/vessels') });
+export const vesselsQuery = () =>
+  queryOptions({ queryKey: cellarKeys.vessels(), queryFn: () => api.get<VesselView[]>('/api/vessels') });
 export const useVessels = () => useQuery(vesselsQuery());
 
 /** Creates a vessel, or saves an existing one when `id` is given. */

@@ -11,11 +11,20 @@ export function AlertsPanel() {
   return (
     <section aria-label="Cellar alerts" className="space-y-2">
       {unread.map((a) => (
-        <div key={a.id} role="alert" className="flex flex-wrap items-center justify-between gap-3 rounded-xl border-l-8 border-brass-500 bg-brass-100 p-4">
+        <div
+          key={a.id}
+          role="alert"
+          className="flex flex-wrap items-center justify-between gap-3 rounded-xl border-l-8 border-brass-500 bg-brass-100 p-4"
+        >
           <p className="text-lg">
-            <Link className="font-bold underline" to={`/cellar/batches/${a.batchId}`}>{a.beerName} · {a.batchNumber}</Link>: {a.message}
+            <Link className="font-bold underline" to={`/cellar/batches/${a.batchId}`}>
+              {a.beerName} · {a.batchNumber}
+            </Link>
+            : {a.message}
           </p>
-          <Button variant="secondary" onClick={() => markRead.mutate(a.id)}>Seen</Button>
+          <Button variant="secondary" onClick={() => markRead.mutate(a.id)}>
+            Seen
+          </Button>
         </div>
       ))}
     </section>

@@ -41,8 +41,16 @@ export function BatchCellarPage() {
   const system = me.brewery.unitSystem;
   const tz = me.brewery.timeZone;
   const latest = data.readings[data.readings.length - 1];
-  const attenuation = latest && latest.sg <= data.og.sg && data.og.sg > 1 ? apparentAttenuation(data.og.sg, latest.sg) : null;
-  const dateTime = new Intl.DateTimeFormat('en-US', { timeZone: tz, month: 'short', day: 'numeric', hour: '2-digit', minute: '2-digit', hourCycle: 'h23' });
+  const attenuation =
+    latest && latest.sg <= data.og.sg && data.og.sg > 1 ? apparentAttenuation(data.og.sg, latest.sg) : null;
+  const dateTime = new Intl.DateTimeFormat('en-US', {
+    timeZone: tz,
+    month: 'short',
+    day: 'numeric',
+    hour: '2-digit',
+    minute: '2-digit',
+    hourCycle: 'h23',
+  });
   const date = new Intl.DateTimeFormat('en-US', { timeZone: tz, weekday: 'short', month: 'short', day: 'numeric' });
   const active = ['brewing', 'fermenting', 'conditioning'].includes(data.batch.status);
 
@@ -51,18 +59,31 @@ export function BatchCellarPage() {
       <PageHeader
         title={`${data.batch.beerName} · ${data.batch.number}`}
         subtitle={`${data.batch.status[0]!.toUpperCase()}${data.batch.status.slice(1)}${data.vessel ? ` in ${data.vessel.name}` : ''} · brewed ${data.batch.brewDate}`}
-        actions={<LinkButton variant="quiet" to="/cellar">Vessel board</LinkButton>}
+        actions={
+          <LinkButton variant="quiet" to="/cellar">
+            Vessel board
+          </LinkButton>
+        }
       />
       <div className="grid grid-cols-2 gap-3 md:grid-cols-4">
         <Stat label={data.og.measured ? 'OG (measured)' : 'OG (planned)'} value={data.og.sg.toFixed(3)} />
         <Stat label="Latest gravity" value={latest ? latest.sg.toFixed(3) : '—'} />
-        <Stat label="Apparent attenuation so far" value={attenuation === null ? '—' : (attenuation * 100).toFixed(0)} unit={attenuation === null ? undefined : '%'} />
-        <div className="rounded-lg border-2 border-dashed border-brass-500 bg-brass-100 px-4 py-3" data-testid="prediction">
+        <Stat
+          label="Apparent attenuation so far"
+          value={attenuation === null ? '—' : (attenuation * 100).toFixed(0)}
+          unit={attenuation === null ? undefined : '%'}
+        />
+        <div
+          className="rounded-lg border-2 border-dashed border-brass-500 bg-brass-100 px-4 py-3"
+          data-testid="prediction"
+        >
           <div className="text-xs font-semibold uppercase tracking-wide text-ink-700">Prediction from the curve</div>
           {prediction ? (
             <PredictionNote prediction={prediction} latestSg={latest?.sg ?? null} nowMs={Date.now()} date={date} />
           ) : (
-            <div className="text-sm text-ink-700">Not enough of a curve yet: it needs three falling readings over some hours.</div>
+            <div className="text-sm text-ink-700">
+              Not enough of a curve yet: it needs three falling readings over some hours.
+            </div>
           )}
         </div>
       </div>
@@ -70,7 +91,14 @@ export function BatchCellarPage() {
       <div className="grid gap-6 lg:grid-cols-[3fr_2fr]">
         <Section title="Fermentation curve">
           {data.readings.length ? (
-            <FermentationChart readings={data.readings} actions={data.actions} plan={data.plan} prediction={prediction} unitSystem={system} timeZone={tz} />
+            <FermentationChart
+              readings={data.readings}
+              actions={data.actions}
+              plan={data.plan}
+              prediction={prediction}
+              unitSystem={system}
+              timeZone={tz}
+            />
           ) : (
             <p className="text-ink-500">No readings yet. The first one starts the curve.</p>
           )}
@@ -84,7 +112,10 @@ export function BatchCellarPage() {
       <Section title="Readings and cellar work">
         {data.readings.length > 0 && (
           <p className="mb-2 flex flex-wrap items-center gap-x-3 text-sm text-ink-500">
-            <span>A reading typed wrong is corrected in the batch record; the original stays in the log beside the correction.</span>
+            <span>
+              A reading typed wrong is corrected in the batch record; the original stays in the log beside the
+              correction.
+            </span>
             <LinkButton variant="quiet" className="underline" to={`/batches/${batchId}/record`}>
               Correct a reading
             </LinkButton>

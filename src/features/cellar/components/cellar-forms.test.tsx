@@ -4,14 +4,40 @@ import { act, fireEvent, render, screen, waitFor } from '@testing-library/react'
 import type { CellarPlanView } from '../../../../shared/schemas/cellar';
 
 const log = vi.fn<(entry: unknown, label: string) => Promise<void>>();
-vi.mock('../api/log-cellar-entry', () => ({ useLogCellarEntry: () => log, cellarGroup: (id: number) => `cellar:${id}` }));
-vi.mock('../api/vessels', () => ({ useVessels: () => ({ data: [{ id: 7, name: 'BT-1', type: 'bright_tank', capacityL: 1000, ratedPressureKpa: 207, status: 'clean', currentBatchId: null }] }) }));
+vi.mock('../api/log-cellar-entry', () => ({
+  useLogCellarEntry: () => log,
+  cellarGroup: (id: number) => `cellar:${id}`,
+}));
+vi.mock('../api/vessels', () => ({
+  useVessels: () => ({
+    data: [
+      {
+        id: 7,
+        name: 'BT-1',
+        type: 'bright_tank',
+        capacityL: 1000,
+        ratedPressureKpa: 207,
+        status: 'clean',
+        currentBatchId: null,
+      },
+    ],
+  }),
+}));
 
 const { ReadingForm } = await import('./reading-form');
 const { ActionForm } = await import('./action-form');
 const { PackagingForm } = await import('./packaging-form');
 
-const plan: CellarPlanView = { saved: true, plannedFg: 1.012, primaryTempC: 19, dRestPoints: 3, dRestTempC: 21, crashTempC: 1, co2Volumes: 2.5, readingIntervalHours: 24 };
+const plan: CellarPlanView = {
+  saved: true,
+  plannedFg: 1.012,
+  primaryTempC: 19,
+  dRestPoints: 3,
+  dRestTempC: 21,
+  crashTempC: 1,
+  co2Volumes: 2.5,
+  readingIntervalHours: 24,
+};
 
 /** A log that stays pending until released: the first tap is still being handled when the second lands. */
 function slowLog() {
@@ -71,7 +97,21 @@ describe('cellar forms take one tap at a time', () => {
 
   it('a double tap on Log packaging run writes one run', async () => {
     const release = slowLog();
-    render(<PackagingForm batchId={1} packaging={{ runs: [], knockoutL: 1173, packagedL: 0, complete: false, notPackagedL: 1173, lossL: null, lossFraction: null }} unitSystem="us" />);
+    render(
+      <PackagingForm
+        batchId={1}
+        packaging={{
+          runs: [],
+          knockoutL: 1173,
+          packagedL: 0,
+          complete: false,
+          notPackagedL: 1173,
+          lossL: null,
+          lossFraction: null,
+        }}
+        unitSystem="us"
+      />,
+    );
     doubleTap(screen.getByRole('form', { name: 'Log a packaging run' }));
     await waitFor(() => expect(log).toHaveBeenCalledTimes(1));
     await release();
@@ -80,11 +120,31 @@ describe('cellar forms take one tap at a time', () => {
 });
 
 describe('packaging summary', () => {
-  const run = { logEntryId: 1, packagedAt: '2026-12-01T10:00:00Z', lines: [{ kind: 'keg' as const, size: 'half_bbl', count: 5 }], packagedL: 293.2, authorName: 'A' };
+  const run = {
+    logEntryId: 1,
+    packagedAt: '2026-12-01T10:00:00Z',
+    lines: [{ kind: 'keg' as const, size: 'half_bbl', count: 5 }],
+    packagedL: 293.2,
+    authorName: 'A',
+  };
 
   it('after a part run shows what is packaged so far and what is still in the tank, not losses', () => {
     // 1,189.5 L = 10.14 bbl knocked out, 293.2 L = 2.50 bbl packaged: 7.64 bbl still in the tank (1 US bbl = 117.348 L, 27 CFR 25.11).
-    render(<PackagingForm batchId={1} packaging={{ runs: [run], knockoutL: 1189.5, packagedL: 293.2, complete: false, notPackagedL: 896.3, lossL: null, lossFraction: null }} unitSystem="us" />);
+    render(
+      <PackagingForm
+        batchId={1}
+        packaging={{
+          runs: [run],
+          knockoutL: 1189.5,
+          packagedL: 293.2,
+          complete: false,
+          notPackagedL: 896.3,
+          lossL: null,
+          lossFraction: null,
+        }}
+        unitSystem="us"
+      />,
+    );
     const dl = screen.getByLabelText('Packaged volume');
     expect(dl.textContent).toContain('Packaged so far2.50 bbl');
     expect(dl.textContent).toContain('Still in the tank7.64 bbl');
@@ -92,7 +152,21 @@ describe('packaging summary', () => {
   });
 
   it('once the batch is packaged shows the losses', () => {
-    render(<PackagingForm batchId={1} packaging={{ runs: [run], knockoutL: 1189.5, packagedL: 1100, complete: true, notPackagedL: 0, lossL: 89.5, lossFraction: 89.5 / 1189.5 }} unitSystem="us" />);
+    render(
+      <PackagingForm
+        batchId={1}
+        packaging={{
+          runs: [run],
+          knockoutL: 1189.5,
+          packagedL: 1100,
+          complete: true,
+          notPackagedL: 0,
+          lossL: 89.5,
+          lossFraction: 89.5 / 1189.5,
+        }}
+        unitSystem="us"
+      />,
+    );
     // 89.5 L = 0.76 bbl (27 CFR 25.11), 89.5 / 1,189.5 = 7.5 % (arithmetic).
     expect(screen.getByLabelText('Packaged volume').textContent).toContain('Losses0.76 bbl (7.5 %)');
   });

@@ -3,7 +3,13 @@ import { useFieldArray, useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Button, SelectField, TextField } from '../../../components/ui';
 import { KEG_SIZE_IDS, lToUsBbl } from '../../../../shared/brewing';
-import { KEG_SIZE_LABELS, packageName, packagingEntrySchema, type BatchCellarView, type PackagingEntryInput } from '../../../../shared/schemas/cellar';
+import {
+  KEG_SIZE_LABELS,
+  packageName,
+  packagingEntrySchema,
+  type BatchCellarView,
+  type PackagingEntryInput,
+} from '../../../../shared/schemas/cellar';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
 import { useLogCellarEntry } from '../api/log-cellar-entry';
 import { useSubmitOnce } from '../../../lib/use-submit-once';
@@ -11,7 +17,8 @@ import { useSubmitOnce } from '../../../lib/use-submit-once';
 const CONTAINER_SIZES_ML = [355, 473, 500, 330, 750];
 
 /** Packaging volumes in one unit side by side: bbl (US) or L (metric). */
-const volume = (system: UnitSystem, litres: number) => (system === 'us' ? `${lToUsBbl(litres).toFixed(2)} bbl` : `${litres.toFixed(0)} L`);
+const volume = (system: UnitSystem, litres: number) =>
+  system === 'us' ? `${lToUsBbl(litres).toFixed(2)} bbl` : `${litres.toFixed(0)} L`;
 
 function SummaryItem({ term, value }: { term: string; value: string }) {
   return (
@@ -23,37 +30,66 @@ function SummaryItem({ term, value }: { term: string; value: string }) {
 }
 
 /** Packaging runs, what is packaged so far and what is still in the tank; losses once the batch is packaged. */
-export function PackagingForm({ batchId, packaging, unitSystem }: { batchId: number; packaging: BatchCellarView['packaging']; unitSystem: UnitSystem }) {
+export function PackagingForm({
+  batchId,
+  packaging,
+  unitSystem,
+}: {
+  batchId: number;
+  packaging: BatchCellarView['packaging'];
+  unitSystem: UnitSystem;
+}) {
   const log = useLogCellarEntry(batchId);
   const [saved, setSaved] = useState<string>();
   const { register, control, handleSubmit, watch, reset, formState, getValues } = useForm<PackagingEntryInput>({
     resolver: zodResolver(packagingEntrySchema),
-    defaultValues: { kind: 'packaging', lines: [{ kind: 'keg', size: unitSystem === 'us' ? 'half_bbl' : 'keg_50l', count: 1 }], final: false },
+    defaultValues: {
+      kind: 'packaging',
+      lines: [{ kind: 'keg', size: unitSystem === 'us' ? 'half_bbl' : 'keg_50l', count: 1 }],
+      final: false,
+    },
   });
   const lines = useFieldArray({ control, name: 'lines' });
   const kinds = watch('lines');
 
   const { once, busy } = useSubmitOnce();
-  const onSubmit = once(handleSubmit(async (values) => {
-    const label = `Packaging · ${values.lines.map((l) => `${l.count} × ${packageName(l.kind, l.kind === 'keg' ? l.size : l.sizeMl)}`).join(', ')}`;
-    await log(values, label);
-    setSaved(label);
-    reset();
-  }));
+  const onSubmit = once(
+    handleSubmit(async (values) => {
+      const label = `Packaging · ${values.lines.map((l) => `${l.count} × ${packageName(l.kind, l.kind === 'keg' ? l.size : l.sizeMl)}`).join(', ')}`;
+      await log(values, label);
+      setSaved(label);
+      reset();
+    }),
+  );
 
   return (
     <div className="space-y-4">
       <dl className="grid grid-cols-3 gap-3 text-center" aria-label="Packaged volume">
         <SummaryItem term="Knockout" value={volume(unitSystem, packaging.knockoutL)} />
-        <SummaryItem term={packaging.complete ? 'Packaged' : 'Packaged so far'} value={volume(unitSystem, packaging.packagedL)} />
+        <SummaryItem
+          term={packaging.complete ? 'Packaged' : 'Packaged so far'}
+          value={volume(unitSystem, packaging.packagedL)}
+        />
         {packaging.complete ? (
-          <SummaryItem term="Losses" value={packaging.lossL === null || packaging.lossFraction === null ? '—' : `${volume(unitSystem, packaging.lossL)} (${(packaging.lossFraction * 100).toFixed(1)} %)`} />
+          <SummaryItem
+            term="Losses"
+            value={
+              packaging.lossL === null || packaging.lossFraction === null
+                ? '—'
+                : `${volume(unitSystem, packaging.lossL)} (${(packaging.lossFraction * 100).toFixed(1)} %)`
+            }
+          />
         ) : (
           // Not a loss yet: until the last run, what is not in packages is still in the tank.
-          <SummaryItem term="Still in the tank" value={packaging.runs.length ? volume(unitSystem, packaging.notPackagedL) : '—'} />
+          <SummaryItem
+            term="Still in the tank"
+            value={packaging.runs.length ? volume(unitSystem, packaging.notPackagedL) : '—'}
+          />
         )}
       </dl>
-      {!packaging.complete && packaging.runs.length > 0 && <p className="text-sm text-ink-500">Losses are counted once the last run is logged.</p>}
+      {!packaging.complete && packaging.runs.length > 0 && (
+        <p className="text-sm text-ink-500">Losses are counted once the last run is logged.</p>
+      )}
       <form onSubmit={onSubmit} noValidate aria-label="Log a packaging run" className="space-y-3">
         {lines.fields.map((field, i) => (
           <div key={field.id} className="grid grid-cols-[8rem_1fr_7rem_auto] items-end gap-2">
@@ -63,7 +99,12 @@ export function PackagingForm({ batchId, packaging, unitSystem }: { batchId: num
                 // Keg lines carry a keg size, can and bottle lines a size in mL: swap the whole line.
                 onChange: (e) => {
                   const count = getValues(`lines.${i}.count`);
-                  lines.update(i, e.target.value === 'keg' ? { kind: 'keg', size: 'half_bbl', count } : { kind: e.target.value, sizeMl: 355, count });
+                  lines.update(
+                    i,
+                    e.target.value === 'keg'
+                      ? { kind: 'keg', size: 'half_bbl', count }
+                      : { kind: e.target.value, sizeMl: 355, count },
+                  );
                 },
               })}
             >
@@ -73,25 +114,53 @@ export function PackagingForm({ batchId, packaging, unitSystem }: { batchId: num
             </SelectField>
             {kinds[i]?.kind === 'keg' ? (
               <SelectField label="Size" {...register(`lines.${i}.size` as const)}>
-                {KEG_SIZE_IDS.map((s) => <option key={s} value={s}>{KEG_SIZE_LABELS[s]}</option>)}
+                {KEG_SIZE_IDS.map((s) => (
+                  <option key={s} value={s}>
+                    {KEG_SIZE_LABELS[s]}
+                  </option>
+                ))}
               </SelectField>
             ) : (
               <SelectField label="Size" {...register(`lines.${i}.sizeMl` as const, { valueAsNumber: true })}>
-                {CONTAINER_SIZES_ML.map((ml) => <option key={ml} value={ml}>{ml} mL</option>)}
+                {CONTAINER_SIZES_ML.map((ml) => (
+                  <option key={ml} value={ml}>
+                    {ml} mL
+                  </option>
+                ))}
               </SelectField>
             )}
-            <TextField label="Count" inputMode="numeric" {...register(`lines.${i}.count`, { valueAsNumber: true })} error={formState.errors.lines?.[i]?.count?.message} />
-            <Button variant="quiet" onClick={() => lines.remove(i)} disabled={lines.fields.length === 1} aria-label={`Remove line ${i + 1}`}>✕</Button>
+            <TextField
+              label="Count"
+              inputMode="numeric"
+              {...register(`lines.${i}.count`, { valueAsNumber: true })}
+              error={formState.errors.lines?.[i]?.count?.message}
+            />
+            <Button
+              variant="quiet"
+              onClick={() => lines.remove(i)}
+              disabled={lines.fields.length === 1}
+              aria-label={`Remove line ${i + 1}`}
+            >
+              ✕
+            </Button>
           </div>
         ))}
         {formState.errors.lines?.message && <p className="text-sm text-ember-700">{formState.errors.lines.message}</p>}
-        <Button variant="secondary" onClick={() => lines.append({ kind: 'can', sizeMl: 355, count: 24 })}>Add a line</Button>
+        <Button variant="secondary" onClick={() => lines.append({ kind: 'can', sizeMl: 355, count: 24 })}>
+          Add a line
+        </Button>
         <label className="flex min-h-touch items-center gap-3 text-base">
           <input type="checkbox" className="h-6 w-6" {...register('final')} />
           Last run: the tank is empty and the batch is packaged
         </label>
-        <Button type="submit" size="lg" className="w-full" busy={busy}>Log packaging run</Button>
-        {saved && <p role="status" className="text-sm text-ink-700">Saved on this tablet: {saved}.</p>}
+        <Button type="submit" size="lg" className="w-full" busy={busy}>
+          Log packaging run
+        </Button>
+        {saved && (
+          <p role="status" className="text-sm text-ink-700">
+            Saved on this tablet: {saved}.
+          </p>
+        )}
       </form>
     </div>
   );

@@ -6,14 +6,25 @@ import type { CellarPlanView } from '../../../../shared/schemas/cellar';
 vi.mock('../api/plan', () => ({ useSavePlan: () => ({ mutateAsync: vi.fn(), isPending: false }) }));
 const { PlanForm } = await import('./plan-form');
 
-const plan: CellarPlanView = { saved: true, plannedFg: 1.012, primaryTempC: 19, dRestPoints: 3, dRestTempC: 21, crashTempC: 1, co2Volumes: 2.5, readingIntervalHours: 24 };
+const plan: CellarPlanView = {
+  saved: true,
+  plannedFg: 1.012,
+  primaryTempC: 19,
+  dRestPoints: 3,
+  dRestTempC: 21,
+  crashTempC: 1,
+  co2Volumes: 2.5,
+  readingIntervalHours: 24,
+};
 
 describe('cellar plan', () => {
   it('shows the assistant the plan as text, with the read-only note first and no fields', () => {
     const { container } = render(<PlanForm batchId={1} plan={plan} unitSystem="us" canEdit={false} />);
     expect(container.querySelectorAll('input')).toHaveLength(0);
     expect(screen.queryByRole('button')).toBeNull();
-    expect(container.firstElementChild!.firstElementChild!.textContent).toMatch(/^Read only: a head brewer changes the plan/);
+    expect(container.firstElementChild!.firstElementChild!.textContent).toMatch(
+      /^Read only: a head brewer changes the plan/,
+    );
     const text = screen.getByLabelText('Cellar plan').textContent;
     expect(text).toContain('Planned FG1.012');
     expect(text).toContain('Primary66.2 °F'); // 19 °C = 66.2 °F (t/°F = 1.8 t/°C + 32, NIST SP 811 B.9)

@@ -26,7 +26,10 @@ function PlanText({ plan, unitSystem }: PlanProps) {
   const t = (c: number) => `${temp.toDisplay(c).toFixed(1)} ${temp.unit}`;
   const items: [string, string][] = [
     ['Planned FG', plan.plannedFg.toFixed(3)],
-    ['D-rest trigger', `${plan.dRestPoints} points above FG (starts at ${dRestTriggerSg(plan.plannedFg, plan.dRestPoints).toFixed(3)})`],
+    [
+      'D-rest trigger',
+      `${plan.dRestPoints} points above FG (starts at ${dRestTriggerSg(plan.plannedFg, plan.dRestPoints).toFixed(3)})`,
+    ],
     ['Primary', t(plan.primaryTempC)],
     ['D-rest', t(plan.dRestTempC)],
     ['Crash', t(plan.crashTempC)],
@@ -36,7 +39,9 @@ function PlanText({ plan, unitSystem }: PlanProps) {
   return (
     <div className="space-y-3">
       <p className="rounded-lg bg-mist-100 px-3 py-2 text-sm text-ink-700" data-testid="plan-read-only">
-        Read only: a head brewer changes the plan.{!plan.saved && " It comes from the batch's recipe plan, with defaults where the recipe gives none (common practice)."}
+        Read only: a head brewer changes the plan.
+        {!plan.saved &&
+          " It comes from the batch's recipe plan, with defaults where the recipe gives none (common practice)."}
       </p>
       <dl className="grid grid-cols-2 gap-x-4 gap-y-3 md:grid-cols-4" aria-label="Cellar plan">
         {items.map(([term, value]) => (
@@ -72,7 +77,10 @@ function PlanEditor({ batchId, plan, unitSystem }: PlanProps) {
   const e = formState.errors;
   const num = { setValueAs: optionalNumber } as const;
   const [fg, points] = watch(['plannedFg', 'dRestPoints']);
-  const trigger = Number.isFinite(fg) && Number.isFinite(points) && points >= 0 && points <= 20 && fg >= 0.98 && fg <= 1.2 ? dRestTriggerSg(fg, points) : null;
+  const trigger =
+    Number.isFinite(fg) && Number.isFinite(points) && points >= 0 && points <= 20 && fg >= 0.98 && fg <= 1.2
+      ? dRestTriggerSg(fg, points)
+      : null;
   const onSubmit = handleSubmit(async (values) => {
     setBanner(undefined);
     try {
@@ -84,18 +92,60 @@ function PlanEditor({ batchId, plan, unitSystem }: PlanProps) {
   });
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-3">
-      {!plan.saved && <p className="text-sm text-ink-500">From the batch's recipe plan; defaults where the recipe gives none (common practice).</p>}
+      {!plan.saved && (
+        <p className="text-sm text-ink-500">
+          From the batch's recipe plan; defaults where the recipe gives none (common practice).
+        </p>
+      )}
       <FormBanner message={banner} />
       <fieldset className="grid grid-cols-2 gap-3 md:grid-cols-4">
-        <TextField label="Planned FG" inputMode="decimal" {...register('plannedFg', num)} error={e.plannedFg?.message} />
-        <TextField label="D-rest trigger (points above FG)" inputMode="decimal" hint={trigger ? `Starts at ${trigger.toFixed(3)}` : undefined} {...register('dRestPoints', num)} error={e.dRestPoints?.message} />
-        <TextField label={`Primary (${temp.unit})`} inputMode="decimal" {...register('primaryTemp', num)} error={e.primaryTemp?.message} />
-        <TextField label={`D-rest (${temp.unit})`} inputMode="decimal" {...register('dRestTemp', num)} error={e.dRestTemp?.message} />
-        <TextField label={`Crash (${temp.unit})`} inputMode="decimal" {...register('crashTemp', num)} error={e.crashTemp?.message} />
-        <TextField label="Target CO₂ (volumes)" inputMode="decimal" {...register('co2Volumes', num)} error={e.co2Volumes?.message} />
-        <TextField label="Reading due every (hours)" inputMode="decimal" {...register('readingIntervalHours', num)} error={e.readingIntervalHours?.message} />
+        <TextField
+          label="Planned FG"
+          inputMode="decimal"
+          {...register('plannedFg', num)}
+          error={e.plannedFg?.message}
+        />
+        <TextField
+          label="D-rest trigger (points above FG)"
+          inputMode="decimal"
+          hint={trigger ? `Starts at ${trigger.toFixed(3)}` : undefined}
+          {...register('dRestPoints', num)}
+          error={e.dRestPoints?.message}
+        />
+        <TextField
+          label={`Primary (${temp.unit})`}
+          inputMode="decimal"
+          {...register('primaryTemp', num)}
+          error={e.primaryTemp?.message}
+        />
+        <TextField
+          label={`D-rest (${temp.unit})`}
+          inputMode="decimal"
+          {...register('dRestTemp', num)}
+          error={e.dRestTemp?.message}
+        />
+        <TextField
+          label={`Crash (${temp.unit})`}
+          inputMode="decimal"
+          {...register('crashTemp', num)}
+          error={e.crashTemp?.message}
+        />
+        <TextField
+          label="Target CO₂ (volumes)"
+          inputMode="decimal"
+          {...register('co2Volumes', num)}
+          error={e.co2Volumes?.message}
+        />
+        <TextField
+          label="Reading due every (hours)"
+          inputMode="decimal"
+          {...register('readingIntervalHours', num)}
+          error={e.readingIntervalHours?.message}
+        />
       </fieldset>
-      <Button type="submit" busy={save.isPending}>Save cellar plan</Button>
+      <Button type="submit" busy={save.isPending}>
+        Save cellar plan
+      </Button>
     </form>
   );
 }

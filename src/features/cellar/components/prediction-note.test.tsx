@@ -4,7 +4,12 @@ import { render } from '@testing-library/react';
 import type { FermentationPrediction } from '../../../../shared/brewing';
 import { PredictionNote } from './prediction-note';
 
-const date = new Intl.DateTimeFormat('en-US', { timeZone: 'America/Chicago', weekday: 'short', month: 'short', day: 'numeric' });
+const date = new Intl.DateTimeFormat('en-US', {
+  timeZone: 'America/Chicago',
+  weekday: 'short',
+  month: 'short',
+  day: 'numeric',
+});
 const now = Date.parse('2026-12-02T15:00:00Z');
 const prediction = (predictedAt: string): FermentationPrediction => ({
   predictedFg: 1.012,
@@ -13,7 +18,8 @@ const prediction = (predictedAt: string): FermentationPrediction => ({
   at: () => 1.012,
   reaches: () => null,
 });
-const text = (p: FermentationPrediction, latestSg: number | null) => render(<PredictionNote prediction={p} latestSg={latestSg} nowMs={now} date={date} />).container.textContent;
+const text = (p: FermentationPrediction, latestSg: number | null) =>
+  render(<PredictionNote prediction={p} latestSg={latestSg} nowMs={now} date={date} />).container.textContent;
 
 describe('prediction from the curve', () => {
   it('gives the date while it is ahead', () => {

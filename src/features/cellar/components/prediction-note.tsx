@@ -7,7 +7,17 @@ const THERE_SG = 0.001;
  * What the curve predicts, worded for when it is read: a date ahead while it still is; once that
  * date has passed, either that the batch got there or that it is overdue for the predicted gravity.
  */
-export function PredictionNote({ prediction, latestSg, nowMs, date }: { prediction: FermentationPrediction; latestSg: number | null; nowMs: number; date: Intl.DateTimeFormat }) {
+export function PredictionNote({
+  prediction,
+  latestSg,
+  nowMs,
+  date,
+}: {
+  prediction: FermentationPrediction;
+  latestSg: number | null;
+  nowMs: number;
+  date: Intl.DateTimeFormat;
+}) {
   const fg = prediction.predictedFg.toFixed(3);
   if (prediction.predictedAtMs > nowMs) {
     return (
@@ -25,7 +35,8 @@ export function PredictionNote({ prediction, latestSg, nowMs, date }: { predicti
       <div className="text-lg font-semibold text-ember-700">Overdue for FG ≈ {fg}</div>
       <div className="text-sm text-ink-700">
         Expected by {date.format(prediction.predictedAtMs)}
-        {days >= 1 ? `, ${days} day${days === 1 ? '' : 's'} ago` : ''}. Take a reading; if it has not moved, check the yeast and temperature.
+        {days >= 1 ? `, ${days} day${days === 1 ? '' : 's'} ago` : ''}. Take a reading; if it has not moved, check the
+        yeast and temperature.
       </div>
     </div>
   );

@@ -2,7 +2,13 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Button, SelectField, TextField, cx } from '../../../components/ui';
-import { READING_METHOD_LABELS, READING_METHODS, readingEntrySchema, type ReadingEntryInput, type ReadingView } from '../../../../shared/schemas/cellar';
+import {
+  READING_METHOD_LABELS,
+  READING_METHODS,
+  readingEntrySchema,
+  type ReadingEntryInput,
+  type ReadingView,
+} from '../../../../shared/schemas/cellar';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
 import { UNITS } from '../../../lib/units';
 import { useLogCellarEntry } from '../api/log-cellar-entry';
@@ -12,7 +18,11 @@ import { useSubmitOnce } from '../../../lib/use-submit-once';
 const UNIT_LABEL = { sg: 'SG', plato: '°P', brix: '°Bx' } as const;
 
 /** The last values, so a routine reading is one number and one tap. */
-function defaults(last: ReadingView | undefined, unitSystem: UnitSystem, firstBrix: number | undefined): Partial<ReadingEntryInput> {
+function defaults(
+  last: ReadingView | undefined,
+  unitSystem: UnitSystem,
+  firstBrix: number | undefined,
+): Partial<ReadingEntryInput> {
   const tempUnit = unitSystem === 'us' ? 'f' : 'c';
   const method = last?.method ?? 'hydrometer';
   return {
@@ -20,13 +30,24 @@ function defaults(last: ReadingView | undefined, unitSystem: UnitSystem, firstBr
     method,
     gravityUnit: last?.enteredUnit ?? 'sg',
     tempUnit,
-    temp: last?.tempC === null || last?.tempC === undefined ? undefined : Number(UNITS[unitSystem].tempC.toDisplay(last.tempC).toFixed(1)),
+    temp:
+      last?.tempC === null || last?.tempC === undefined
+        ? undefined
+        : Number(UNITS[unitSystem].tempC.toDisplay(last.tempC).toFixed(1)),
     originalBrix: method === 'refractometer' ? firstBrix : undefined,
   };
 }
 
 /** One-thumb gravity entry for the tablet: big numerals, last values prefilled, sent through the outbox. */
-export function ReadingForm({ batchId, readings, unitSystem }: { batchId: number; readings: ReadingView[]; unitSystem: UnitSystem }) {
+export function ReadingForm({
+  batchId,
+  readings,
+  unitSystem,
+}: {
+  batchId: number;
+  readings: ReadingView[];
+  unitSystem: UnitSystem;
+}) {
   const log = useLogCellarEntry(batchId);
   const [saved, setSaved] = useState<string>();
   const last = readings[readings.length - 1];
@@ -41,12 +62,14 @@ export function ReadingForm({ batchId, readings, unitSystem }: { batchId: number
   const errors = formState.errors;
   const { once, busy } = useSubmitOnce();
 
-  const onSubmit = once(handleSubmit(async (values) => {
-    const label = `Reading ${values.gravity} ${UNIT_LABEL[values.gravityUnit]}${values.temp !== undefined ? ` · ${values.temp} ${tempUnit}` : ''}`;
-    await log(values, label);
-    setSaved(label);
-    reset({ ...values, gravity: undefined as unknown as number, ph: undefined, note: undefined });
-  }));
+  const onSubmit = once(
+    handleSubmit(async (values) => {
+      const label = `Reading ${values.gravity} ${UNIT_LABEL[values.gravityUnit]}${values.temp !== undefined ? ` · ${values.temp} ${tempUnit}` : ''}`;
+      await log(values, label);
+      setSaved(label);
+      reset({ ...values, gravity: undefined as unknown as number, ph: undefined, note: undefined });
+    }),
+  );
 
   return (
     <form onSubmit={onSubmit} noValidate aria-label="Log a reading" className="space-y-4">
@@ -80,12 +103,17 @@ export function ReadingForm({ batchId, readings, unitSystem }: { batchId: number
           inputMode="decimal"
           autoComplete="off"
           className="min-h-[72px] text-reading tabular-nums"
-          placeholder={gravityUnit === 'sg' ? last ? last.sg.toFixed(3) : '1.050' : '12.0'}
+          placeholder={gravityUnit === 'sg' ? (last ? last.sg.toFixed(3) : '1.050') : '12.0'}
           {...register('gravity', { setValueAs: optionalNumber })}
           error={errors.gravity?.message}
         />
         {method !== 'refractometer' && (
-          <SelectField label="Unit" className="min-h-[72px] text-lg" {...register('gravityUnit')} error={errors.gravityUnit?.message}>
+          <SelectField
+            label="Unit"
+            className="min-h-[72px] text-lg"
+            {...register('gravityUnit')}
+            error={errors.gravityUnit?.message}
+          >
             <option value="sg">SG</option>
             <option value="plato">°P</option>
           </SelectField>
@@ -108,10 +136,22 @@ export function ReadingForm({ batchId, readings, unitSystem }: { batchId: number
           {...register('temp', { setValueAs: optionalNumber })}
           error={errors.temp?.message}
         />
-        <TextField label="pH (optional)" inputMode="decimal" className="min-h-[56px] text-2xl tabular-nums" {...register('ph', { setValueAs: optionalNumber })} error={errors.ph?.message} />
+        <TextField
+          label="pH (optional)"
+          inputMode="decimal"
+          className="min-h-[56px] text-2xl tabular-nums"
+          {...register('ph', { setValueAs: optionalNumber })}
+          error={errors.ph?.message}
+        />
       </div>
-      <TextField label="Note (optional)" {...register('note', { setValueAs: (v: string) => (v ? v : undefined) })} error={errors.note?.message} />
-      {errors.gravityUnit && method === 'refractometer' && <p className="text-sm text-ember-700">{errors.gravityUnit.message}</p>}
+      <TextField
+        label="Note (optional)"
+        {...register('note', { setValueAs: (v: string) => (v ? v : undefined) })}
+        error={errors.note?.message}
+      />
+      {errors.gravityUnit && method === 'refractometer' && (
+        <p className="text-sm text-ember-700">{errors.gravityUnit.message}</p>
+      )}
       <Button type="submit" size="xl" className="w-full" busy={busy}>
         Save reading
       </Button>

@@ -30,7 +30,11 @@ function VesselTile({ v, now, asked }: { v: BoardVessel; now: number; asked: boo
       className={cx(
         'flex h-full flex-col rounded-2xl border-4 p-5',
         asked && 'ring-4 ring-brass-400 ring-offset-2',
-        b?.readingOverdue ? 'border-ember-600 bg-cellar-900 text-white' : b ? 'border-cellar-700 bg-cellar-900 text-white' : 'border-mist-300 bg-white text-ink-700',
+        b?.readingOverdue
+          ? 'border-ember-600 bg-cellar-900 text-white'
+          : b
+            ? 'border-cellar-700 bg-cellar-900 text-white'
+            : 'border-mist-300 bg-white text-ink-700',
       )}
     >
       <header className="flex items-baseline justify-between gap-2">
@@ -44,15 +48,21 @@ function VesselTile({ v, now, asked }: { v: BoardVessel; now: number; asked: boo
           <p className="mt-1 text-xl font-semibold text-brass-400">
             {b.beerName} <span className="text-mist-200">· {b.number}</span>
           </p>
-          <p className="text-mist-200">Day {Math.max(1, Math.floor((now - Date.parse(b.inSince)) / DAY) + 1)} in tank · {b.status}</p>
+          <p className="text-mist-200">
+            Day {Math.max(1, Math.floor((now - Date.parse(b.inSince)) / DAY) + 1)} in tank · {b.status}
+          </p>
           <div className="mt-3 flex items-end gap-6">
             <div>
               <div className="text-xs font-semibold uppercase text-mist-200">Gravity</div>
-              <div className="text-6xl font-bold tabular-nums" data-testid="board-gravity">{b.latestSg === null ? '—' : b.latestSg.toFixed(3)}</div>
+              <div className="text-6xl font-bold tabular-nums" data-testid="board-gravity">
+                {b.latestSg === null ? '—' : b.latestSg.toFixed(3)}
+              </div>
             </div>
             <div>
               <div className="text-xs font-semibold uppercase text-mist-200">Temp</div>
-              <div className="text-4xl font-semibold tabular-nums">{b.latestTempC === null ? '—' : show(system, 'tempC', b.latestTempC, 0)}</div>
+              <div className="text-4xl font-semibold tabular-nums">
+                {b.latestTempC === null ? '—' : show(system, 'tempC', b.latestTempC, 0)}
+              </div>
             </div>
           </div>
           {b.latestAt && <p className="mt-1 text-sm text-mist-200">Read {relative(b.latestAt, now)}</p>}
@@ -61,14 +71,22 @@ function VesselTile({ v, now, asked }: { v: BoardVessel; now: number; asked: boo
               <p className="text-lg">
                 Next: <strong>{b.nextAction.label}</strong>
                 {b.nextAction.dueAt && (
-                  <span className="text-mist-200"> · {Date.parse(b.nextAction.dueAt) <= now ? 'due now' : `predicted ${relative(b.nextAction.dueAt, now)}`}</span>
+                  <span className="text-mist-200">
+                    {' '}
+                    ·{' '}
+                    {Date.parse(b.nextAction.dueAt) <= now
+                      ? 'due now'
+                      : `predicted ${relative(b.nextAction.dueAt, now)}`}
+                  </span>
                 )}
               </p>
             )}
             {b.readingOverdue ? (
               <p className="mt-2 rounded-lg bg-ember-600 px-3 py-2 text-lg font-bold text-white">Reading overdue</p>
             ) : (
-              b.nextReadingDueAt && <p className="text-sm text-mist-200">Next reading {relative(b.nextReadingDueAt, now)}</p>
+              b.nextReadingDueAt && (
+                <p className="text-sm text-mist-200">Next reading {relative(b.nextReadingDueAt, now)}</p>
+              )
             )}
           </div>
         </>
@@ -78,7 +96,10 @@ function VesselTile({ v, now, asked }: { v: BoardVessel; now: number; asked: boo
     </article>
   );
   return b ? (
-    <Link to={`/cellar/batches/${b.id}`} className="block rounded-2xl focus:outline-none focus:ring-4 focus:ring-brass-400">
+    <Link
+      to={`/cellar/batches/${b.id}`}
+      className="block rounded-2xl focus:outline-none focus:ring-4 focus:ring-brass-400"
+    >
       {body}
     </Link>
   ) : (

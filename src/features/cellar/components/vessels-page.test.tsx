@@ -4,10 +4,26 @@ import { act, fireEvent, render, screen, within } from '@testing-library/react';
 import type { VesselView } from '../../../../shared/schemas/cellar';
 
 const markClean = vi.fn<(id: number) => Promise<void>>();
-const tank: VesselView = { id: 3, name: 'FV-2', type: 'fermenter', capacityL: 1173, ratedPressureKpa: 103, status: 'needs_cleaning', currentBatchId: null };
-vi.mock('../api/vessels', () => ({ useVessels: () => ({ data: [tank], isPending: false, error: null }), useSaveVessel: () => ({}) }));
-vi.mock('../api/vessel-state', () => ({ useMarkClean: () => ({ mutateAsync: markClean }), useDeleteVessel: () => ({}) }));
-vi.mock('../../../app/current-user', () => ({ useCurrentUser: () => ({ role: 'assistant_brewer', brewery: { unitSystem: 'us', timeZone: 'America/Chicago' } }) }));
+const tank: VesselView = {
+  id: 3,
+  name: 'FV-2',
+  type: 'fermenter',
+  capacityL: 1173,
+  ratedPressureKpa: 103,
+  status: 'needs_cleaning',
+  currentBatchId: null,
+};
+vi.mock('../api/vessels', () => ({
+  useVessels: () => ({ data: [tank], isPending: false, error: null }),
+  useSaveVessel: () => ({}),
+}));
+vi.mock('../api/vessel-state', () => ({
+  useMarkClean: () => ({ mutateAsync: markClean }),
+  useDeleteVessel: () => ({}),
+}));
+vi.mock('../../../app/current-user', () => ({
+  useCurrentUser: () => ({ role: 'assistant_brewer', brewery: { unitSystem: 'us', timeZone: 'America/Chicago' } }),
+}));
 vi.mock('react-router-dom', () => ({ Link: (p: { children: unknown }) => p.children }));
 
 const { VesselsPage } = await import('./vessels-page');

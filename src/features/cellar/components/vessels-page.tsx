@@ -1,7 +1,22 @@
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { Button, Caution, Dialog, EmptyState, ErrorState, LinkButton, Loading, PageHeader, SelectField, Table, Td, TextField, Th, useToast } from '../../../components/ui';
+import {
+  Button,
+  Caution,
+  Dialog,
+  EmptyState,
+  ErrorState,
+  LinkButton,
+  Loading,
+  PageHeader,
+  SelectField,
+  Table,
+  Td,
+  TextField,
+  Th,
+  useToast,
+} from '../../../components/ui';
 import { kpaToPsi, lToUsBbl } from '../../../../shared/brewing';
 import { vesselInputSchema, type VesselInput, type VesselView } from '../../../../shared/schemas/cellar';
 import { VESSEL_STATUS_LABELS, VESSEL_TYPE_LABELS } from '../labels';
@@ -27,7 +42,9 @@ function VesselForm({ vessel, onDone }: { vessel?: VesselView; onDone: () => voi
       type: vessel?.type ?? 'fermenter',
       capacity: vessel ? Number((us ? lToUsBbl(vessel.capacityL) : vessel.capacityL).toFixed(2)) : undefined,
       capacityUnit: us ? 'bbl' : 'l',
-      ratedPressure: vessel ? Number((us ? kpaToPsi(vessel.ratedPressureKpa) : vessel.ratedPressureKpa).toFixed(1)) : undefined,
+      ratedPressure: vessel
+        ? Number((us ? kpaToPsi(vessel.ratedPressureKpa) : vessel.ratedPressureKpa).toFixed(1))
+        : undefined,
       pressureUnit: us ? 'psi' : 'kpa',
     },
   });
@@ -51,20 +68,35 @@ function VesselForm({ vessel, onDone }: { vessel?: VesselView; onDone: () => voi
         <option value="bright_tank">Bright tank</option>
       </SelectField>
       <div className="grid grid-cols-[1fr_6rem] gap-3">
-        <TextField label="Capacity" inputMode="decimal" {...register('capacity', { setValueAs: optionalNumber })} error={e.capacity?.message} />
+        <TextField
+          label="Capacity"
+          inputMode="decimal"
+          {...register('capacity', { setValueAs: optionalNumber })}
+          error={e.capacity?.message}
+        />
         <SelectField label="Unit" {...register('capacityUnit')}>
           <option value="bbl">bbl</option>
           <option value="l">L</option>
         </SelectField>
-        <TextField label="Rated working pressure (gauge)" hint="From the vessel's nameplate." inputMode="decimal" {...register('ratedPressure', { setValueAs: optionalNumber })} error={e.ratedPressure?.message} />
+        <TextField
+          label="Rated working pressure (gauge)"
+          hint="From the vessel's nameplate."
+          inputMode="decimal"
+          {...register('ratedPressure', { setValueAs: optionalNumber })}
+          error={e.ratedPressure?.message}
+        />
         <SelectField label="Unit" {...register('pressureUnit')}>
           <option value="psi">psi</option>
           <option value="kpa">kPa</option>
         </SelectField>
       </div>
       <div className="flex gap-2">
-        <Button type="submit" busy={save.isPending}>{vessel ? 'Save vessel' : 'Add vessel'}</Button>
-        <Button variant="quiet" onClick={onDone}>Cancel</Button>
+        <Button type="submit" busy={save.isPending}>
+          {vessel ? 'Save vessel' : 'Add vessel'}
+        </Button>
+        <Button variant="quiet" onClick={onDone}>
+          Cancel
+        </Button>
       </div>
     </form>
   );
@@ -78,12 +110,14 @@ function CleaningCaution() {
         <li>Wear eye and face protection, chemical-resistant gloves and sleeves.</li>
         <li>Add concentrated chemical to water, never water to the concentrate: it can boil and spatter.</li>
         <li>
-          Vent and purge CO₂ from a closed tank before caustic goes in: caustic absorbs CO₂, and the vacuum can collapse the
-          tank. Keep the tank open to air while it is cleaned.
+          Vent and purge CO₂ from a closed tank before caustic goes in: caustic absorbs CO₂, and the vacuum can collapse
+          the tank. Keep the tank open to air while it is cleaned.
         </li>
         <li>Never mix caustic and acid, or either with chlorine-based sanitiser.</li>
       </ul>
-      <p className="mt-2">Follow your chemical supplier&apos;s safety data sheet, your local rules and licensed practice.</p>
+      <p className="mt-2">
+        Follow your chemical supplier&apos;s safety data sheet, your local rules and licensed practice.
+      </p>
     </Caution>
   );
 }
@@ -132,7 +166,11 @@ export function VesselsPage() {
   const us = me.brewery.unitSystem === 'us';
   if (isPending) return <Loading label="Loading vessels" />;
   if (error) return <ErrorState error={error} onRetry={() => void refetch()} />;
-  const act = (p: Promise<unknown>, done: string) => p.then(() => toast(done), (err: Error) => toast(err.message));
+  const act = (p: Promise<unknown>, done: string) =>
+    p.then(
+      () => toast(done),
+      (err: Error) => toast(err.message),
+    );
   return (
     <div>
       <PageHeader
@@ -150,7 +188,16 @@ export function VesselsPage() {
       ) : (
         <Table>
           <thead>
-            <tr><Th>Name</Th><Th>Type</Th><Th>Capacity</Th><Th>Rated pressure</Th><Th>State</Th><Th><span className="sr-only">Actions</span></Th></tr>
+            <tr>
+              <Th>Name</Th>
+              <Th>Type</Th>
+              <Th>Capacity</Th>
+              <Th>Rated pressure</Th>
+              <Th>State</Th>
+              <Th>
+                <span className="sr-only">Actions</span>
+              </Th>
+            </tr>
           </thead>
           <tbody>
             {data.map((v) => (
@@ -158,13 +205,30 @@ export function VesselsPage() {
                 <Td className="font-semibold">{v.name}</Td>
                 <Td>{VESSEL_TYPE_LABELS[v.type]}</Td>
                 <Td>{showVolume(me.brewery.unitSystem, v.capacityL)}</Td>
-                <Td>{us ? `${kpaToPsi(v.ratedPressureKpa).toFixed(0)} psi` : `${v.ratedPressureKpa.toFixed(0)} kPa`}</Td>
+                <Td>
+                  {us ? `${kpaToPsi(v.ratedPressureKpa).toFixed(0)} psi` : `${v.ratedPressureKpa.toFixed(0)} kPa`}
+                </Td>
                 <Td>{VESSEL_STATUS_LABELS[v.status]}</Td>
                 <Td className="space-x-2 whitespace-nowrap text-right">
-                  {v.status === 'needs_cleaning' && <Button variant="secondary" onClick={() => setCleaning(v)}>Mark clean</Button>}
-                  {isHead && <Button variant="quiet" onClick={() => setEditing(v)}>Edit</Button>}
+                  {v.status === 'needs_cleaning' && (
+                    <Button variant="secondary" onClick={() => setCleaning(v)}>
+                      Mark clean
+                    </Button>
+                  )}
+                  {isHead && (
+                    <Button variant="quiet" onClick={() => setEditing(v)}>
+                      Edit
+                    </Button>
+                  )}
                   {isHead && v.currentBatchId === null && (
-                    <Button variant="quiet" onClick={() => window.confirm(`Remove ${v.name}?`) && act(remove.mutateAsync(v.id), `${v.name} removed`)}>Remove</Button>
+                    <Button
+                      variant="quiet"
+                      onClick={() =>
+                        window.confirm(`Remove ${v.name}?`) && act(remove.mutateAsync(v.id), `${v.name} removed`)
+                      }
+                    >
+                      Remove
+                    </Button>
                   )}
                 </Td>
               </tr>
@@ -172,8 +236,18 @@ export function VesselsPage() {
           </tbody>
         </Table>
       )}
-      <Dialog open={editing !== null} onClose={() => setEditing(null)} title={editing === 'new' ? 'Add a vessel' : `Edit ${editing?.name ?? ''}`}>
-        {editing !== null && <VesselForm key={editing === 'new' ? 'new' : editing.id} vessel={editing === 'new' ? undefined : editing} onDone={() => setEditing(null)} />}
+      <Dialog
+        open={editing !== null}
+        onClose={() => setEditing(null)}
+        title={editing === 'new' ? 'Add a vessel' : `Edit ${editing?.name ?? ''}`}
+      >
+        {editing !== null && (
+          <VesselForm
+            key={editing === 'new' ? 'new' : editing.id}
+            vessel={editing === 'new' ? undefined : editing}
+            onDone={() => setEditing(null)}
+          />
+        )}
       </Dialog>
       <Dialog open={cleaning !== null} onClose={() => setCleaning(null)} title={`Clean ${cleaning?.name ?? ''}`}>
         {cleaning !== null && <CleanVessel key={cleaning.id} vessel={cleaning} onDone={() => setCleaning(null)} />}

@@ -11,7 +11,9 @@ function greeting(hour: number): string {
 }
 
 // The taproom manager's home is the tap list, loaded in its own chunk.
-const TaproomHome = lazy(() => import('../../taproom/components/taproom-home').then((m) => ({ default: m.TaproomHome })));
+const TaproomHome = lazy(() =>
+  import('../../taproom/components/taproom-home').then((m) => ({ default: m.TaproomHome })),
+);
 
 export function HomePage() {
   const me = useCurrentUser();
@@ -22,7 +24,11 @@ export function HomePage() {
       </Suspense>
     );
   }
-  const hour = Number(new Intl.DateTimeFormat('en-US', { hour: 'numeric', hourCycle: 'h23', timeZone: me.brewery.timeZone }).format(new Date()));
+  const hour = Number(
+    new Intl.DateTimeFormat('en-US', { hour: 'numeric', hourCycle: 'h23', timeZone: me.brewery.timeZone }).format(
+      new Date(),
+    ),
+  );
   const places = navFor(me.role).filter((item) => item.to !== '/');
   return (
     <>

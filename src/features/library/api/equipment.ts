@@ -7,14 +7,17 @@ export type EquipmentRow = EquipmentProfile & { id: number };
 
 export const equipmentKeys = { all: ['equipment'] as const };
 
-export const equipmentQuery = () => queryOptions({ queryKey: equipmentKeys.all, queryFn: () => api.get<EquipmentRow[]>('/api/equipment') });
+export const equipmentQuery = () =>
+  queryOptions({ queryKey: equipmentKeys.all, queryFn: () => api.get<EquipmentRow[]>('/api/equipment') });
 export const useEquipment = () => useQuery(equipmentQuery());
 
 export function useSaveEquipment() {
   const client = useQueryClient();
   return useMutation({
     mutationFn: ({ id, input }: { id?: number; input: EquipmentInput }) =>
-      id === undefined ? api.post<EquipmentRow>('/api/equipment', input) : api.put<EquipmentRow>(`/api/equipment/${id}`, input),
+      id === undefined
+        ? api.post<EquipmentRow>('/api/equipment', input)
+        : api.put<EquipmentRow>(`/api/equipment/${id}`, input),
     onSuccess: () => client.invalidateQueries({ queryKey: equipmentKeys.all }),
   });
 }

@@ -16,14 +16,17 @@ export interface IngredientRow {
 
 export const ingredientKeys = { all: ['ingredients'] as const };
 
-export const ingredientsQuery = () => queryOptions({ queryKey: ingredientKeys.all, queryFn: () => api.get<IngredientRow[]>('/api/ingredients') });
+export const ingredientsQuery = () =>
+  queryOptions({ queryKey: ingredientKeys.all, queryFn: () => api.get<IngredientRow[]>('/api/ingredients') });
 export const useIngredients = () => useQuery(ingredientsQuery());
 
 export function useSaveIngredient() {
   const client = useQueryClient();
   return useMutation({
     mutationFn: ({ id, input }: { id?: number; input: IngredientInput }) =>
-      id === undefined ? api.post<IngredientRow>('/api/ingredients', input) : api.put<IngredientRow>(`/api/ingredients/${id}`, input),
+      id === undefined
+        ? api.post<IngredientRow>('/api/ingredients', input)
+        : api.put<IngredientRow>(`/api/ingredients/${id}`, input),
     onSuccess: () => client.invalidateQueries({ queryKey: ingredientKeys.all }),
   });
 }

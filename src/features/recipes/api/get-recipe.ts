@@ -13,5 +13,8 @@ export interface RecipeDetail {
 }
 
 export const recipeQuery = (recipeId: number) =>
-  queryOptions({ queryKey: recipeKeys.detail(recipeId), queryFn: () => api.get<RecipeDetail>(`/api/recipes/${recipeId}`) });
+  queryOptions({
+    queryKey: recipeKeys.detail(recipeId),
+    queryFn: () => api.get<RecipeDetail>(`/api/recipes/${recipeId}`),
+  });
 export const useRecipe = (recipeId: number) => useQuery(recipeQuery(recipeId));

@@ -3,5 +3,6 @@ import { api } from '../../../lib/api-client';
 import type { RecipeListRow } from '../../../../shared/schemas/recipes';
 import { recipeKeys } from './keys';
 
-export const recipeListQuery = () => queryOptions({ queryKey: recipeKeys.list(), queryFn: () => api.get<RecipeListRow[]>('/api/recipes') });
+export const recipeListQuery = () =>
+  queryOptions({ queryKey: recipeKeys.list(), queryFn: () => api.get<RecipeListRow[]>('/api/recipes') });
 export const useRecipeList = () => useQuery(recipeListQuery());

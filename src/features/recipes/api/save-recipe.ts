@@ -1,6 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import type { CreateRecipeInput, SaveScaledInput, SaveVersionInput, UpdateRecipeInput } from '../../../../shared/schemas/recipes';
+import type {
+  CreateRecipeInput,
+  SaveScaledInput,
+  SaveVersionInput,
+  UpdateRecipeInput,
+} from '../../../../shared/schemas/recipes';
 import { recipeKeys } from './keys';
 
 /** Every recipe write invalidates the whole recipes prefix: list figures, details and versions all move together. */
@@ -10,17 +15,32 @@ function useRecipeMutation<I, O>(fn: (input: I) => Promise<O>) {
 }
 
 export const useCreateRecipe = () =>
-  useRecipeMutation((input: CreateRecipeInput) => api.post<{ id: number; versionId: number; versionNumber: number }>('/api/recipes', input));
+  useRecipeMutation((input: CreateRecipeInput) =>
+    api.post<{ id: number; versionId: number; versionNumber: number }>('/api/recipes', input),
+  );
 
 export const useUpdateRecipe = () =>
-  useRecipeMutation(({ recipeId, ...input }: UpdateRecipeInput & { recipeId: number }) => api.patch(`/api/recipes/${recipeId}`, input));
+  useRecipeMutation(({ recipeId, ...input }: UpdateRecipeInput & { recipeId: number }) =>
+    api.patch(`/api/recipes/${recipeId}`, input),
+  );
 
 /** In place (unfrozen versions) or as the next version. */
 export const useSaveVersion = () =>
-  useRecipeMutation(({ recipeId, versionId, asNew, input }: { recipeId: number; versionId: number; asNew: boolean; input: SaveVersionInput }) =>
-    asNew
-      ? api.post<{ id: number; number: number }>(`/api/recipes/${recipeId}/versions`, input)
-      : api.patch<{ id: number; number: number }>(`/api/recipes/${recipeId}/versions/${versionId}`, input),
+  useRecipeMutation(
+    ({
+      recipeId,
+      versionId,
+      asNew,
+      input,
+    }: {
+      recipeId: number;
+      versionId: number;
+      asNew: boolean;
+      input: SaveVersionInput;
+    }) =>
+      asNew
+        ? api.post<{ id: number; number: number }>(`/api/recipes/${recipeId}/versions`, input)
+        : api.patch<{ id: number; number: number }>(`/api/recipes/${recipeId}/versions/${versionId}`, input),
   );
 
 export const useSaveScaled = () =>

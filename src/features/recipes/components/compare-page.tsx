@@ -23,12 +23,20 @@ const SECTION_NAMES: Record<string, string> = {
 
 function label(path: string, side: VersionDetail): string {
   const parts = path.split('.');
-  if (parts[0] === 'computed') return `Computed ${parts[1] === 'abvPct' ? 'ABV' : parts[1] === 'buGu' ? 'BU:GU' : parts[1] === 'strikeTempC' ? 'strike temperature' : parts[1]!.toUpperCase()}`;
+  if (parts[0] === 'computed')
+    return `Computed ${parts[1] === 'abvPct' ? 'ABV' : parts[1] === 'buGu' ? 'BU:GU' : parts[1] === 'strikeTempC' ? 'strike temperature' : parts[1]!.toUpperCase()}`;
   if (parts[0] !== 'content') return parts[0] === 'changeNote' ? 'Change note' : 'Equipment';
   const [, section, ...rest] = parts;
   const words = rest
     .filter((p) => p !== 'items')
-    .map((p) => (/^\d+$/.test(p) ? `#${Number(p) + 1}` : p.replace(/(Kg|Pct|[GCL])$/, '').replace(/([A-Z])/g, ' $1').toLowerCase()));
+    .map((p) =>
+      /^\d+$/.test(p)
+        ? `#${Number(p) + 1}`
+        : p
+            .replace(/(Kg|Pct|[GCL])$/, '')
+            .replace(/([A-Z])/g, ' $1')
+            .toLowerCase(),
+    );
   // Name the line (e.g. the hop's variety) so "hops #1 weight g" reads as "Hop #1 (Earthy…) weight g".
   const content = side.version.content as unknown as Record<string, unknown>;
   const nested = section === 'grainBill' && rest[0] === 'items';
@@ -75,13 +83,19 @@ export function ComparePage() {
       <PageHeader
         title={`${recipe.name}: version ${left.version.number} and ${right.version.number}`}
         subtitle={`${differences.length} difference${differences.length === 1 ? '' : 's'}`}
-        actions={<LinkButton variant="quiet" className="underline" to={`/recipes/${recipeId}`}>All versions</LinkButton>}
+        actions={
+          <LinkButton variant="quiet" className="underline" to={`/recipes/${recipeId}`}>
+            All versions
+          </LinkButton>
+        }
       />
       <div className="mb-4 grid gap-4 md:grid-cols-2">
         {[left, right].map((v) => (
           <Card key={v.version.id}>
             <h2 className="text-lg font-bold">Version {v.version.number}</h2>
-            <p className="text-ink-500">{v.version.changeNote} — {v.version.authorName}, {new Date(v.version.createdAt).toLocaleDateString()}</p>
+            <p className="text-ink-500">
+              {v.version.changeNote} — {v.version.authorName}, {new Date(v.version.createdAt).toLocaleDateString()}
+            </p>
             <dl className="mt-3 grid grid-cols-5 gap-2 text-center">
               {figures(v).map(([k, x]) => (
                 <div key={k} className="rounded bg-mist-100 p-2">
@@ -105,8 +119,14 @@ export function ComparePage() {
           {differences.map((d) => (
             <tr key={d.path}>
               <Td className="font-medium">{label(d.path, d.b === null ? left : right)}</Td>
-              <Td className={cx(d.a === null ? 'text-ink-300' : 'bg-ember-100 text-ember-700 line-through decoration-1')}>{fmt(d.path, d.a, system)}</Td>
-              <Td className={cx(d.b === null ? 'text-ink-300' : 'bg-cellar-100 font-semibold text-cellar-800')}>{fmt(d.path, d.b, system)}</Td>
+              <Td
+                className={cx(d.a === null ? 'text-ink-300' : 'bg-ember-100 text-ember-700 line-through decoration-1')}
+              >
+                {fmt(d.path, d.a, system)}
+              </Td>
+              <Td className={cx(d.b === null ? 'text-ink-300' : 'bg-cellar-100 font-semibold text-cellar-800')}>
+                {fmt(d.path, d.b, system)}
+              </Td>
             </tr>
           ))}
         </tbody>

@@ -13,7 +13,9 @@ import { RecipeEditor } from './recipe-editor';
 import { NEW_RECIPE } from './new-recipe';
 
 const failure = (error: unknown) =>
-  error instanceof ApiError ? { fieldErrors: error.fields, message: error.message } : { message: 'Something went wrong. Nothing was lost: try again.' };
+  error instanceof ApiError
+    ? { fieldErrors: error.fields, message: error.message }
+    : { message: 'Something went wrong. Nothing was lost: try again.' };
 
 /** Opens a version in the editor. A version a batch has used is frozen: saving it makes the next version. */
 export function EditorPage() {
@@ -44,7 +46,12 @@ export function EditorPage() {
       if (name !== r.name || style !== r.style || description !== r.description || status !== r.status) {
         await updateRecipe.mutateAsync({ recipeId, name, style, description, status });
       }
-      const saved = await save.mutateAsync({ recipeId, versionId, asNew: asNew || frozen, input: { changeNote, equipmentProfileId, content } });
+      const saved = await save.mutateAsync({
+        recipeId,
+        versionId,
+        asNew: asNew || frozen,
+        input: { changeNote, equipmentProfileId, content },
+      });
       toast(`Saved version ${saved.number}`);
       if (saved.id !== versionId) navigate(`/recipes/${recipeId}/versions/${saved.id}`);
     } catch (error) {
@@ -59,20 +66,44 @@ export function EditorPage() {
         subtitle={`${v.changeNote} — ${v.authorName}, ${new Date(v.createdAt).toLocaleDateString()}`}
         actions={
           <>
-            <LinkButton variant="quiet" className="underline" to={`/recipes/${recipeId}`}>All versions</LinkButton>
-            <LinkButton variant="quiet" className="underline" to={`/recipes/${recipeId}/versions/${versionId}/scale`}>Scale</LinkButton>
-            <LinkButton variant="quiet" className="underline" to={`/recipes/${recipeId}/versions/${versionId}/brew-sheet`}>Brew sheet</LinkButton>
+            <LinkButton variant="quiet" className="underline" to={`/recipes/${recipeId}`}>
+              All versions
+            </LinkButton>
+            <LinkButton variant="quiet" className="underline" to={`/recipes/${recipeId}/versions/${versionId}/scale`}>
+              Scale
+            </LinkButton>
+            <LinkButton
+              variant="quiet"
+              className="underline"
+              to={`/recipes/${recipeId}/versions/${versionId}/brew-sheet`}
+            >
+              Brew sheet
+            </LinkButton>
           </>
         }
       />
       <RecipeEditor
         key={v.id}
-        initial={{ name: r.name, style: r.style, description: r.description, status: r.status, changeNote: frozen ? '' : v.changeNote, equipmentProfileId: v.equipmentProfileId, content: v.content }}
+        initial={{
+          name: r.name,
+          style: r.style,
+          description: r.description,
+          status: r.status,
+          changeNote: frozen ? '' : v.changeNote,
+          equipmentProfileId: v.equipmentProfileId,
+          content: v.content,
+        }}
         equipment={equipment.data}
         library={library.data ?? []}
         system={me.brewery.unitSystem}
         canEdit={canEdit}
-        notice={frozen ? <Caution title="This version has been brewed">A batch used it, so it stays as it was. Saving makes version {next}.</Caution> : undefined}
+        notice={
+          frozen ? (
+            <Caution title="This version has been brewed">
+              A batch used it, so it stays as it was. Saving makes version {next}.
+            </Caution>
+          ) : undefined
+        }
         saveLabel={frozen ? `Save as version ${next}` : `Save version ${v.number}`}
         saveAsNewLabel={frozen ? undefined : `Save as version ${next}`}
         onSave={onSave}
@@ -92,7 +123,14 @@ export function NewRecipePage() {
   const first = equipment.data[0];
   if (!first) {
     return (
-      <EmptyState title="Add your brewhouse first" action={<LinkButton variant="primary" to="/library">Add equipment</LinkButton>}>
+      <EmptyState
+        title="Add your brewhouse first"
+        action={
+          <LinkButton variant="primary" to="/library">
+            Add equipment
+          </LinkButton>
+        }
+      >
         A recipe is written for a brewhouse: its efficiency and losses turn the recipe into weights and volumes.
       </EmptyState>
     );
@@ -101,7 +139,14 @@ export function NewRecipePage() {
     <>
       <PageHeader title="New recipe" />
       <RecipeEditor
-        initial={{ ...NEW_RECIPE, equipmentProfileId: first.id, content: { ...NEW_RECIPE.content, targets: { ...NEW_RECIPE.content.targets, batchVolumeL: first.batchVolumeL } } }}
+        initial={{
+          ...NEW_RECIPE,
+          equipmentProfileId: first.id,
+          content: {
+            ...NEW_RECIPE.content,
+            targets: { ...NEW_RECIPE.content.targets, batchVolumeL: first.batchVolumeL },
+          },
+        }}
         equipment={equipment.data}
         library={library.data ?? []}
         system={me.brewery.unitSystem}

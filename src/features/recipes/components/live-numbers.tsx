@@ -9,7 +9,15 @@ import {
   type ComputedRecipe,
   type EquipmentProfile,
 } from '../../../../shared/brewing';
-import { adjunctSchema, equipmentAtVolume, recipeContentSchema, spiceSchema, resolveHopShares, toRecipeInput, type RecipeVersionContent } from '../../../../shared/schemas/recipes';
+import {
+  adjunctSchema,
+  equipmentAtVolume,
+  recipeContentSchema,
+  spiceSchema,
+  resolveHopShares,
+  toRecipeInput,
+  type RecipeVersionContent,
+} from '../../../../shared/schemas/recipes';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
 import { show, showVolume } from '../../../lib/units';
 import { cx } from '../../../components/ui';
@@ -33,7 +41,11 @@ interface RowsIn {
  * The content without adjunct and spice rows that are not complete yet (a row just added has no
  * name), so the rest of the recipe still has numbers; `slots` maps each form row to its computed row.
  */
-function withoutIncompleteRows(content: unknown): { content: unknown; slots: (number | undefined)[]; leftOut: string[] } {
+function withoutIncompleteRows(content: unknown): {
+  content: unknown;
+  slots: (number | undefined)[];
+  leftOut: string[];
+} {
   const rows = (content ?? {}) as RowsIn;
   const slots: (number | undefined)[] = [];
   const leftOut: string[] = [];
@@ -55,15 +67,25 @@ export function useLiveNumbers(name: string, content: unknown, equipment: Equipm
   const json = JSON.stringify(content);
   return useMemo(() => {
     const none = () => undefined;
-    if (!equipment) return { problem: 'Choose the equipment this recipe is written for.', warnings: [], adjunctAt: none };
+    if (!equipment)
+      return { problem: 'Choose the equipment this recipe is written for.', warnings: [], adjunctAt: none };
     const { content: complete, slots, leftOut } = withoutIncompleteRows(JSON.parse(json));
     const parsed = recipeContentSchema.safeParse(complete);
-    if (!parsed.success) return { problem: 'Some fields need attention; the numbers update once they are filled in.', warnings: [], adjunctAt: none };
+    if (!parsed.success)
+      return {
+        problem: 'Some fields need attention; the numbers update once they are filled in.',
+        warnings: [],
+        adjunctAt: none,
+      };
     try {
       const atVolume = equipmentAtVolume(equipment, parsed.data.targets.batchVolumeL);
       const c: RecipeVersionContent = resolveHopShares(name || 'Recipe', parsed.data, atVolume);
       const computed = computeRecipe(toRecipeInput(name || 'Recipe', c), atVolume);
-      const warnings = [...computed.warnings, ...targetWarnings(computed, c.targets), ...(computed.water ? waterDoseWarnings(computed.water) : [])];
+      const warnings = [
+        ...computed.warnings,
+        ...targetWarnings(computed, c.targets),
+        ...(computed.water ? waterDoseWarnings(computed.water) : []),
+      ];
       const adjunctAt = (i: number) => {
         const slot = slots[i];
         return slot === undefined ? undefined : computed.adjuncts[slot];
@@ -91,13 +113,23 @@ export function LiveNumbersPanel({ live, system }: { live: LiveNumbers; system: 
   return (
     <section aria-label="Live numbers" className="space-y-3">
       {live.problem && <p className="rounded-lg bg-sky-100 p-3 text-sm text-sky-700">{live.problem}</p>}
-      {live.leftOut && <p className="rounded-lg bg-sky-100 p-3 text-sm text-sky-700">Leaving out {live.leftOut.join(', ')} until {live.leftOut.length > 1 ? 'they are' : 'it is'} filled in.</p>}
+      {live.leftOut && (
+        <p className="rounded-lg bg-sky-100 p-3 text-sm text-sky-700">
+          Leaving out {live.leftOut.join(', ')} until {live.leftOut.length > 1 ? 'they are' : 'it is'} filled in.
+        </p>
+      )}
       <div className="grid grid-cols-2 gap-2">
         {bigFigures(c).map(([label, value]) => (
           <Figure key={label} label={label}>
             {label === 'SRM' ? (
               <span className="flex items-center gap-2">
-                {c && <span aria-hidden className="inline-block h-6 w-6 rounded-full border border-ink-300" style={{ backgroundColor: c.colourHex }} />}
+                {c && (
+                  <span
+                    aria-hidden
+                    className="inline-block h-6 w-6 rounded-full border border-ink-300"
+                    style={{ backgroundColor: c.colourHex }}
+                  />
+                )}
                 {value}
               </span>
             ) : (
@@ -126,17 +158,23 @@ export function LiveNumbersPanel({ live, system }: { live: LiveNumbers; system: 
           {c.water && (
             <>
               <dt className="text-ink-500">Cl : SO₄</dt>
-              <dd className="text-right tabular-nums">{c.water.chlorideSulfateRatio === null ? '—' : c.water.chlorideSulfateRatio.toFixed(2)}</dd>
+              <dd className="text-right tabular-nums">
+                {c.water.chlorideSulfateRatio === null ? '—' : c.water.chlorideSulfateRatio.toFixed(2)}
+              </dd>
               <dt className="text-ink-500">Mash Ca / Mg / Na</dt>
               <dd className="text-right tabular-nums">
-                {c.water.mash.calciumPpm.toFixed(0)} / {c.water.mash.magnesiumPpm.toFixed(0)} / {c.water.mash.sodiumPpm.toFixed(0)} ppm
+                {c.water.mash.calciumPpm.toFixed(0)} / {c.water.mash.magnesiumPpm.toFixed(0)} /{' '}
+                {c.water.mash.sodiumPpm.toFixed(0)} ppm
               </dd>
               <dt className="text-ink-500">Mash SO₄ / Cl / HCO₃</dt>
               <dd className="text-right tabular-nums">
-                {c.water.mash.sulfatePpm.toFixed(0)} / {c.water.mash.chloridePpm.toFixed(0)} / {c.water.mash.bicarbonatePpm.toFixed(0)} ppm
+                {c.water.mash.sulfatePpm.toFixed(0)} / {c.water.mash.chloridePpm.toFixed(0)} /{' '}
+                {c.water.mash.bicarbonatePpm.toFixed(0)} ppm
               </dd>
               <dt className="text-ink-500">Residual alkalinity</dt>
-              <dd className="text-right tabular-nums">{c.water.residualAlkalinity.asCaCO3Ppm.toFixed(0)} ppm as CaCO₃</dd>
+              <dd className="text-right tabular-nums">
+                {c.water.residualAlkalinity.asCaCO3Ppm.toFixed(0)} ppm as CaCO₃
+              </dd>
             </>
           )}
         </dl>
@@ -174,20 +212,32 @@ export function NumbersBar({ live }: { live: LiveNumbers }) {
   const figures = bigFigures(c);
   const notes = live.warnings.length + (live.problem ? 1 : 0);
   return (
-    <section aria-label="Numbers while editing" className="sticky bottom-0 z-30 -mx-1 rounded-t-xl bg-cellar-800 px-4 py-2 text-white shadow-lg lg:hidden">
+    <section
+      aria-label="Numbers while editing"
+      className="sticky bottom-0 z-30 -mx-1 rounded-t-xl bg-cellar-800 px-4 py-2 text-white shadow-lg lg:hidden"
+    >
       <div className="flex items-center gap-4">
         <dl className="flex flex-1 flex-wrap justify-between gap-x-4">
           {figures.map(([k, v]) => (
             <div key={k} className="min-w-16">
               <dt className="text-xs font-semibold uppercase tracking-wide text-mist-200">{k}</dt>
               <dd className="flex items-center gap-1 text-xl font-semibold tabular-nums">
-                {k === 'SRM' && c && <span aria-hidden className="inline-block h-4 w-4 rounded-full border border-white/60" style={{ backgroundColor: c.colourHex }} />}
+                {k === 'SRM' && c && (
+                  <span
+                    aria-hidden
+                    className="inline-block h-4 w-4 rounded-full border border-white/60"
+                    style={{ backgroundColor: c.colourHex }}
+                  />
+                )}
                 {v}
               </dd>
             </div>
           ))}
         </dl>
-        <a href="#live-numbers" className="flex min-h-touch items-center rounded-lg border border-white/60 px-3 text-sm font-semibold">
+        <a
+          href="#live-numbers"
+          className="flex min-h-touch items-center rounded-lg border border-white/60 px-3 text-sm font-semibold"
+        >
           {notes > 0 ? `${notes} note${notes > 1 ? 's' : ''}` : 'Details'}
         </a>
       </div>

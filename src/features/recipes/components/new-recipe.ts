@@ -8,9 +8,20 @@ export const NEW_RECIPE: Omit<CreateRecipeInput, 'equipmentProfileId'> = {
   status: 'draft',
   changeNote: 'First draft',
   content: {
-    grainBill: { mode: 'percent', targetOg: 1.05, items: [{ name: 'Pale ale malt', potential: { ppg: 37 }, colourLovibond: 3, stage: 'mash', percent: 100 }] },
+    grainBill: {
+      mode: 'percent',
+      targetOg: 1.05,
+      items: [{ name: 'Pale ale malt', potential: { ppg: 37 }, colourLovibond: 3, stage: 'mash', percent: 100 }],
+    },
     hops: [{ name: 'Bittering hop', alphaAcidPct: 10, form: 'pellet', use: 'boil', minutes: 60, weightG: 28 }],
-    yeast: { name: 'Clean ale yeast', strainType: 'ale', attenuationPct: 75, attenuationLowPct: 72, attenuationHighPct: 78, pitchTempC: 18 },
+    yeast: {
+      name: 'Clean ale yeast',
+      strainType: 'ale',
+      attenuationPct: 75,
+      attenuationLowPct: 72,
+      attenuationHighPct: 78,
+      pitchTempC: 18,
+    },
     mash: { grainTempC: 18, steps: [{ name: 'Single infusion', tempC: 66, minutes: 60, method: 'infusion' }] },
     adjuncts: [],
     spices: [],

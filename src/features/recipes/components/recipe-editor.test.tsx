@@ -11,9 +11,29 @@ const pilot = { id: 1, ...DEMO_EQUIPMENT.pilot };
 function renderEditor() {
   render(
     <RecipeEditor
-      initial={{ name: SEASONAL_NAME, style: 'Amber', description: '', status: 'draft', changeNote: 'Pilot', equipmentProfileId: 1, content: SEASONAL_CONTENT }}
+      initial={{
+        name: SEASONAL_NAME,
+        style: 'Amber',
+        description: '',
+        status: 'draft',
+        changeNote: 'Pilot',
+        equipmentProfileId: 1,
+        content: SEASONAL_CONTENT,
+      }}
       equipment={[pilot]}
-      library={[{ id: 9, kind: 'hop', name: 'Harbour wild hop', alphaAcidPct: 8, ppg: null, colourLovibond: null, attenuationPct: null, notes: '', typical: false }]}
+      library={[
+        {
+          id: 9,
+          kind: 'hop',
+          name: 'Harbour wild hop',
+          alphaAcidPct: 8,
+          ppg: null,
+          colourLovibond: null,
+          attenuationPct: null,
+          notes: '',
+          typical: false,
+        },
+      ]}
       system="us"
       canEdit
       saveLabel="Save"
@@ -27,7 +47,10 @@ const ibuOnScreen = () => within(screen.getByRole('group', { name: 'IBU' })).get
 describe('recipe editor', () => {
   it("updates the IBU when a hop's weight changes", () => {
     renderEditor();
-    const before = computeRecipe(toRecipeInput(SEASONAL_NAME, SEASONAL_CONTENT), equipmentAtVolume(pilot, SEASONAL_CONTENT.targets.batchVolumeL));
+    const before = computeRecipe(
+      toRecipeInput(SEASONAL_NAME, SEASONAL_CONTENT),
+      equipmentAtVolume(pilot, SEASONAL_CONTENT.targets.batchVolumeL),
+    );
     expect(ibuOnScreen()).toBe(before.ibu.toFixed(1));
 
     // The brewery works in US units: the bittering hop's weight is typed in ounces.
@@ -35,10 +58,15 @@ describe('recipe editor', () => {
     fireEvent.change(weight, { target: { value: '4' } });
 
     const hops = SEASONAL_CONTENT.hops.map((h, i) => (i === 0 ? { ...h, weightG: ozToG(4) } : h));
-    const after = computeRecipe(toRecipeInput(SEASONAL_NAME, { ...SEASONAL_CONTENT, hops }), equipmentAtVolume(pilot, SEASONAL_CONTENT.targets.batchVolumeL));
+    const after = computeRecipe(
+      toRecipeInput(SEASONAL_NAME, { ...SEASONAL_CONTENT, hops }),
+      equipmentAtVolume(pilot, SEASONAL_CONTENT.targets.batchVolumeL),
+    );
     expect(after.ibu).toBeGreaterThan(before.ibu + 5);
     expect(ibuOnScreen()).toBe(after.ibu.toFixed(1));
-    expect(within(screen.getByRole('group', { name: 'Hop 1' })).getByLabelText('Hop 1 IBU').textContent).toBe(`${after.hops[0]!.ibu.toFixed(1)} IBU`);
+    expect(within(screen.getByRole('group', { name: 'Hop 1' })).getByLabelText('Hop 1 IBU').textContent).toBe(
+      `${after.hops[0]!.ibu.toFixed(1)} IBU`,
+    );
   });
 
   it("fills a hop's alpha acid from the library when its name is picked", () => {
@@ -60,7 +88,9 @@ describe('recipe editor', () => {
 
   it('shows a message instead of stale numbers while a field is empty', () => {
     renderEditor();
-    fireEvent.change(within(screen.getByRole('group', { name: 'Hop 1' })).getByLabelText('Weight (oz)'), { target: { value: '' } });
+    fireEvent.change(within(screen.getByRole('group', { name: 'Hop 1' })).getByLabelText('Weight (oz)'), {
+      target: { value: '' },
+    });
     expect(within(screen.getByRole('group', { name: 'IBU' })).getByText('—')).toBeTruthy();
     expect(screen.getByText(/Some fields need attention/)).toBeTruthy();
   });
@@ -96,11 +126,16 @@ describe('recipe editor', () => {
   it("counts a fruit adjunct's sugar toward OG and ABV, and drops it when its sugar is set to 0", () => {
     renderEditor();
     const ogOnScreen = () => within(screen.getByRole('group', { name: 'OG' })).getByText(/^1\.\d{3}$/).textContent;
-    const withFruit = computeRecipe(toRecipeInput(SEASONAL_NAME, SEASONAL_CONTENT), equipmentAtVolume(pilot, SEASONAL_CONTENT.targets.batchVolumeL));
+    const withFruit = computeRecipe(
+      toRecipeInput(SEASONAL_NAME, SEASONAL_CONTENT),
+      equipmentAtVolume(pilot, SEASONAL_CONTENT.targets.batchVolumeL),
+    );
     expect(ogOnScreen()).toBe(withFruit.og.toFixed(3));
     // Roasted quince at 0.6 lb per US gal, 10 % sugar (typical fruit, from memory) × 46.2 ppg sucrose = 2.8 points.
     const adjunct = within(screen.getByRole('group', { name: 'Adjunct 1' }));
-    expect(adjunct.getByLabelText('Prepared adjuncts 1 sugar').textContent).toBe('10 % sugar adds 2.8 points to the OG');
+    expect(adjunct.getByLabelText('Prepared adjuncts 1 sugar').textContent).toBe(
+      '10 % sugar adds 2.8 points to the OG',
+    );
     fireEvent.change(adjunct.getByLabelText('Sugar (% of weight)'), { target: { value: '0' } });
     expect(Number(ogOnScreen())).toBeCloseTo(withFruit.og - 0.0028, 3);
   });

@@ -10,7 +10,18 @@ import {
   type SortingState,
 } from '@tanstack/react-table';
 import { srmToHex } from '../../../../shared/brewing';
-import { EmptyState, ErrorState, LinkButton, Loading, PageHeader, SelectField, Table, Td, TextField, Th } from '../../../components/ui';
+import {
+  EmptyState,
+  ErrorState,
+  LinkButton,
+  Loading,
+  PageHeader,
+  SelectField,
+  Table,
+  Td,
+  TextField,
+  Th,
+} from '../../../components/ui';
 import { useCurrentUser } from '../../../app/current-user';
 import { useRecipeList } from '../api/list-recipes';
 import type { RecipeListRow } from '../../../../shared/schemas/recipes';
@@ -30,7 +41,10 @@ const columns = [
   col.accessor('name', {
     header: 'Name',
     cell: (c) => (
-      <Link to={`/recipes/${c.row.original.id}`} className="flex min-h-touch items-center whitespace-normal font-semibold text-cellar-700 underline-offset-2 hover:underline">
+      <Link
+        to={`/recipes/${c.row.original.id}`}
+        className="flex min-h-touch items-center whitespace-normal font-semibold text-cellar-700 underline-offset-2 hover:underline"
+      >
         {c.getValue()}
       </Link>
     ),
@@ -43,7 +57,11 @@ const columns = [
     header: 'SRM',
     cell: (c) => (
       <span className="flex items-center gap-2">
-        <span aria-hidden className="inline-block h-5 w-5 rounded-full border border-ink-300" style={{ backgroundColor: srmToHex(c.getValue()) }} />
+        <span
+          aria-hidden
+          className="inline-block h-5 w-5 rounded-full border border-ink-300"
+          style={{ backgroundColor: srmToHex(c.getValue()) }}
+        />
         {c.getValue().toFixed(0)}
       </span>
     ),
@@ -52,7 +70,11 @@ const columns = [
   col.accessor('status', {
     header: 'Status',
     filterFn: 'equals',
-    cell: (c) => <span className={`rounded-full px-2 py-1 text-sm font-semibold ${STATUS_STYLE[c.getValue()]}`}>{c.getValue()}</span>,
+    cell: (c) => (
+      <span className={`rounded-full px-2 py-1 text-sm font-semibold ${STATUS_STYLE[c.getValue()]}`}>
+        {c.getValue()}
+      </span>
+    ),
   }),
   col.accessor('lastBrewedAt', {
     header: 'Last brewed',
@@ -85,7 +107,13 @@ export function RecipeListPage() {
       <PageHeader
         title="Recipes"
         subtitle="Every beer, its latest version and how it was last brewed."
-        actions={me.role === 'head_brewer' && <LinkButton variant="primary" to="/recipes/new">New recipe</LinkButton>}
+        actions={
+          me.role === 'head_brewer' && (
+            <LinkButton variant="primary" to="/recipes/new">
+              New recipe
+            </LinkButton>
+          )
+        }
       />
       {recipes.isPending ? (
         <Loading label="Loading recipes" />
@@ -96,7 +124,9 @@ export function RecipeListPage() {
       ) : (
         <>
           <div className="mb-4 flex flex-wrap gap-3">
-            <div className="w-72"><TextField label="Find by name or style" value={search} onChange={(e) => setSearch(e.target.value)} /></div>
+            <div className="w-72">
+              <TextField label="Find by name or style" value={search} onChange={(e) => setSearch(e.target.value)} />
+            </div>
             <div className="w-48">
               <SelectField label="Status" value={status} onChange={(e) => setStatus(e.target.value)}>
                 <option value="">All</option>
@@ -113,8 +143,16 @@ export function RecipeListPage() {
                   {g.headers.map((h) => {
                     const sorted = h.column.getIsSorted();
                     return (
-                      <Th key={h.id} className={TIGHT} aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : 'none'}>
-                        <button type="button" className="flex min-h-touch items-center gap-1" onClick={h.column.getToggleSortingHandler()}>
+                      <Th
+                        key={h.id}
+                        className={TIGHT}
+                        aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : 'none'}
+                      >
+                        <button
+                          type="button"
+                          className="flex min-h-touch items-center gap-1"
+                          onClick={h.column.getToggleSortingHandler()}
+                        >
                           {flexRender(h.column.columnDef.header, h.getContext())}
                           <span aria-hidden>{sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : ''}</span>
                         </button>
@@ -128,7 +166,9 @@ export function RecipeListPage() {
               {table.getRowModel().rows.map((r) => (
                 <tr key={r.id}>
                   {r.getVisibleCells().map((c) => (
-                    <Td key={c.id} className={`${TIGHT} whitespace-nowrap py-1`}>{flexRender(c.column.columnDef.cell, c.getContext())}</Td>
+                    <Td key={c.id} className={`${TIGHT} whitespace-nowrap py-1`}>
+                      {flexRender(c.column.columnDef.cell, c.getContext())}
+                    </Td>
                   ))}
                 </tr>
               ))}

@@ -22,7 +22,9 @@ export function RecipePage() {
   const latest = r.versions[0]!;
   const equipmentName = (id: number) => equipment.data?.find((e) => e.id === id)?.name ?? '…';
   const toggle = (id: number) => setPicked((p) => (p.includes(id) ? p.filter((x) => x !== id) : [...p.slice(-1), id]));
-  const [a, b] = [...picked].sort((x, y) => (r.versions.find((v) => v.id === x)!.number - r.versions.find((v) => v.id === y)!.number));
+  const [a, b] = [...picked].sort(
+    (x, y) => r.versions.find((v) => v.id === x)!.number - r.versions.find((v) => v.id === y)!.number,
+  );
 
   return (
     <>
@@ -31,16 +33,29 @@ export function RecipePage() {
         subtitle={`${r.style} · ${r.status} · ${r.description}`}
         actions={
           <>
-            <LinkButton variant={me.role === 'head_brewer' ? 'primary' : 'secondary'} to={`/recipes/${r.id}/versions/${latest.id}`}>{me.role === 'head_brewer' ? `Edit version ${latest.number}` : `Open version ${latest.number}`}</LinkButton>
-            <LinkButton variant="secondary" to={`/recipes/${r.id}/versions/${latest.id}/scale`}>Scale</LinkButton>
-            <LinkButton variant="secondary" to={`/recipes/${r.id}/versions/${latest.id}/brew-sheet`}>Brew sheet</LinkButton>
+            <LinkButton
+              variant={me.role === 'head_brewer' ? 'primary' : 'secondary'}
+              to={`/recipes/${r.id}/versions/${latest.id}`}
+            >
+              {me.role === 'head_brewer' ? `Edit version ${latest.number}` : `Open version ${latest.number}`}
+            </LinkButton>
+            <LinkButton variant="secondary" to={`/recipes/${r.id}/versions/${latest.id}/scale`}>
+              Scale
+            </LinkButton>
+            <LinkButton variant="secondary" to={`/recipes/${r.id}/versions/${latest.id}/brew-sheet`}>
+              Brew sheet
+            </LinkButton>
           </>
         }
       />
       <Card className="space-y-3">
         <div className="flex flex-wrap items-center justify-between gap-2">
           <h2 className="text-xl font-bold">Versions</h2>
-          <Button variant="secondary" disabled={!a || !b} onClick={() => navigate(`/recipes/${r.id}/compare?a=${a}&b=${b}`)}>
+          <Button
+            variant="secondary"
+            disabled={!a || !b}
+            onClick={() => navigate(`/recipes/${r.id}/compare?a=${a}&b=${b}`)}
+          >
             Compare the two ticked
           </Button>
         </div>
@@ -63,21 +78,42 @@ export function RecipePage() {
             {r.versions.map((v) => (
               <tr key={v.id}>
                 <Td>
-                  <input type="checkbox" className="h-6 w-6" aria-label={`Compare version ${v.number}`} checked={picked.includes(v.id)} onChange={() => toggle(v.id)} />
+                  <input
+                    type="checkbox"
+                    className="h-6 w-6"
+                    aria-label={`Compare version ${v.number}`}
+                    checked={picked.includes(v.id)}
+                    onChange={() => toggle(v.id)}
+                  />
                 </Td>
                 <Td>
-                  <Link to={`/recipes/${r.id}/versions/${v.id}`} className="font-semibold text-cellar-700 underline">v{v.number}</Link>
-                  {v.frozenAt && <span className="ml-2 rounded-full bg-mist-200 px-2 text-xs font-semibold text-ink-700" title="Used by a batch: changes make a new version">brewed</span>}
+                  <Link to={`/recipes/${r.id}/versions/${v.id}`} className="font-semibold text-cellar-700 underline">
+                    v{v.number}
+                  </Link>
+                  {v.frozenAt && (
+                    <span
+                      className="ml-2 rounded-full bg-mist-200 px-2 text-xs font-semibold text-ink-700"
+                      title="Used by a batch: changes make a new version"
+                    >
+                      brewed
+                    </span>
+                  )}
                 </Td>
                 <Td>{v.changeNote}</Td>
                 <Td>{v.authorName}</Td>
                 <Td>{new Date(v.createdAt).toLocaleDateString()}</Td>
-                <Td>{equipmentName(v.equipmentProfileId)} · {showVolume(me.brewery.unitSystem, v.batchVolumeL)}</Td>
+                <Td>
+                  {equipmentName(v.equipmentProfileId)} · {showVolume(me.brewery.unitSystem, v.batchVolumeL)}
+                </Td>
                 <Td>{v.og.toFixed(3)}</Td>
                 <Td>{v.ibu.toFixed(0)}</Td>
                 <Td>
                   <span className="flex items-center gap-2">
-                    <span aria-hidden className="inline-block h-4 w-4 rounded-full border border-ink-300" style={{ backgroundColor: srmToHex(v.srm) }} />
+                    <span
+                      aria-hidden
+                      className="inline-block h-4 w-4 rounded-full border border-ink-300"
+                      style={{ backgroundColor: srmToHex(v.srm) }}
+                    />
                     {v.srm.toFixed(0)}
                   </span>
                 </Td>

@@ -1,6 +1,17 @@
 import { useState } from 'react';
 import { useNavigate, useParams, useSearchParams } from 'react-router-dom';
-import { Button, Card, Dialog, ErrorState, LinkButton, Loading, PageHeader, SelectField, TextField, useToast } from '../../../components/ui';
+import {
+  Button,
+  Card,
+  Dialog,
+  ErrorState,
+  LinkButton,
+  Loading,
+  PageHeader,
+  SelectField,
+  TextField,
+  useToast,
+} from '../../../components/ui';
 import { useCurrentUser } from '../../../app/current-user';
 import { ApiError } from '../../../lib/api-client';
 import { UNITS, showVolume } from '../../../lib/units';
@@ -70,8 +81,14 @@ export function ScalePage() {
   if (scale.isError) return <ErrorState error={scale.error} onRetry={() => scale.refetch()} />;
   if (equipment.isError) return <ErrorState error={equipment.error} onRetry={() => equipment.refetch()} />;
   const data = scale.data;
-  const search = scaleSearch({ equipmentProfileId: data.target.equipmentProfileId, batchVolumeL: data.target.equipment.batchVolumeL });
-  const planSearch = new URLSearchParams({ recipeVersionId: String(versionId), equipmentProfileId: String(data.target.equipmentProfileId) });
+  const search = scaleSearch({
+    equipmentProfileId: data.target.equipmentProfileId,
+    batchVolumeL: data.target.equipment.batchVolumeL,
+  });
+  const planSearch = new URLSearchParams({
+    recipeVersionId: String(versionId),
+    equipmentProfileId: String(data.target.equipmentProfileId),
+  });
   if (target.batchVolumeL !== undefined) planSearch.set('batchVolumeL', String(Number(target.batchVolumeL.toFixed(3))));
 
   const applyVolume = () => {
@@ -87,7 +104,11 @@ export function ScalePage() {
       const saved = await saveScaled.mutateAsync({
         recipeId,
         versionId,
-        input: { changeNote: note, equipmentProfileId: data.target.equipmentProfileId, batchVolumeL: data.target.equipment.batchVolumeL },
+        input: {
+          changeNote: note,
+          equipmentProfileId: data.target.equipmentProfileId,
+          batchVolumeL: data.target.equipment.batchVolumeL,
+        },
       });
       setSaving(false);
       toast(`Saved as version ${saved.number}`);
@@ -104,18 +125,36 @@ export function ScalePage() {
         subtitle="Weights are re-solved for the same OG, IBU and water ppm on the new brewhouse; adjuncts and spices follow their dose per volume."
         actions={
           <>
-            <LinkButton variant="quiet" className="underline" to={`/recipes/${recipeId}/versions/${versionId}`}>Back to the recipe</LinkButton>
-            <LinkButton variant="secondary" to={`/recipes/${recipeId}/versions/${versionId}/brew-sheet?${search}`}>Brew sheet</LinkButton>
-            {me.role === 'head_brewer' && <Button variant="secondary" onClick={() => setSaving(true)}>Save as new version</Button>}
-            {me.role === 'head_brewer' && <LinkButton variant="primary" to={`/batches/new?${planSearch.toString()}`}>Plan a batch</LinkButton>}
+            <LinkButton variant="quiet" className="underline" to={`/recipes/${recipeId}/versions/${versionId}`}>
+              Back to the recipe
+            </LinkButton>
+            <LinkButton variant="secondary" to={`/recipes/${recipeId}/versions/${versionId}/brew-sheet?${search}`}>
+              Brew sheet
+            </LinkButton>
+            {me.role === 'head_brewer' && (
+              <Button variant="secondary" onClick={() => setSaving(true)}>
+                Save as new version
+              </Button>
+            )}
+            {me.role === 'head_brewer' && (
+              <LinkButton variant="primary" to={`/batches/new?${planSearch.toString()}`}>
+                Plan a batch
+              </LinkButton>
+            )}
           </>
         }
       />
       <Card className="mb-4 flex flex-wrap items-end gap-3">
         <div className="min-w-80 flex-1">
-          <SelectField label="Scale to" value={data.target.equipmentProfileId} onChange={(e) => setTarget({ equipmentProfileId: Number(e.target.value) })}>
+          <SelectField
+            label="Scale to"
+            value={data.target.equipmentProfileId}
+            onChange={(e) => setTarget({ equipmentProfileId: Number(e.target.value) })}
+          >
             {equipment.data.map((e) => (
-              <option key={e.id} value={e.id}>{e.name} ({showVolume(system, e.batchVolumeL)})</option>
+              <option key={e.id} value={e.id}>
+                {e.name} ({showVolume(system, e.batchVolumeL)})
+              </option>
             ))}
           </SelectField>
         </div>
@@ -131,8 +170,14 @@ export function ScalePage() {
             error={volumeError}
           />
         </div>
-        <Button variant="secondary" onClick={applyVolume}>Use this volume</Button>
-        {scale.isFetching && <span role="status" className="pb-3 text-ink-500">Recalculating…</span>}
+        <Button variant="secondary" onClick={applyVolume}>
+          Use this volume
+        </Button>
+        {scale.isFetching && (
+          <span role="status" className="pb-3 text-ink-500">
+            Recalculating…
+          </span>
+        )}
       </Card>
       <div className="mb-4 grid gap-4 md:grid-cols-2">
         <Summary title="Original" data={data} side="before" />
@@ -141,18 +186,30 @@ export function ScalePage() {
       {data.scaled.warnings.length > 0 && (
         <ul aria-label="Warnings" className="mb-4 space-y-1">
           {data.scaled.warnings.map((w, i) => (
-            <li key={i} className="rounded-lg border-l-4 border-ember-600 bg-ember-100 px-3 py-2 font-medium text-ember-700">{w.message}</li>
+            <li
+              key={i}
+              className="rounded-lg border-l-4 border-ember-600 bg-ember-100 px-3 py-2 font-medium text-ember-700"
+            >
+              {w.message}
+            </li>
           ))}
         </ul>
       )}
       <ScaleTable data={data} system={system} />
       <Dialog open={saving} onClose={() => setSaving(false)} title="Save the scaled recipe as a new version">
         <div className="space-y-3">
-          <p>The new version is written for {data.target.equipment.name} at {showVolume(system, data.target.equipment.batchVolumeL)}.</p>
+          <p>
+            The new version is written for {data.target.equipment.name} at{' '}
+            {showVolume(system, data.target.equipment.batchVolumeL)}.
+          </p>
           <TextField label="What changed" value={note} onChange={(e) => setNote(e.target.value)} error={saveError} />
           <div className="flex justify-end gap-2">
-            <Button variant="quiet" onClick={() => setSaving(false)}>Cancel</Button>
-            <Button busy={saveScaled.isPending} onClick={save}>Save version</Button>
+            <Button variant="quiet" onClick={() => setSaving(false)}>
+              Cancel
+            </Button>
+            <Button busy={saveScaled.isPending} onClick={save}>
+              Save version
+            </Button>
           </div>
         </div>
       </Dialog>

@@ -30,7 +30,9 @@ function NotInProportion({ change, reason }: { change: ScaleChange; reason?: str
   if (!change.nonLinear) return <span className="text-ink-500">in proportion</span>;
   return (
     <span>
-      <span className="mr-1 rounded bg-brass-100 px-1.5 py-0.5 text-xs font-bold uppercase text-ink-900">Not in proportion</span>
+      <span className="mr-1 rounded bg-brass-100 px-1.5 py-0.5 text-xs font-bold uppercase text-ink-900">
+        Not in proportion
+      </span>
       <span className="text-sm text-ink-700">{reason ?? change.reason}</span>
     </span>
   );
@@ -66,7 +68,9 @@ export function ScaleTable({ data, system }: { data: ScaleResult; system: UnitSy
       <Td className="font-medium">{what}</Td>
       <Td>{from}</Td>
       <Td className="text-lg font-semibold">{to}</Td>
-      <Td><NotInProportion change={c} reason={reason} /></Td>
+      <Td>
+        <NotInProportion change={c} reason={reason} />
+      </Td>
     </tr>
   );
   return (
@@ -81,7 +85,9 @@ export function ScaleTable({ data, system }: { data: ScaleResult; system: UnitSy
       </thead>
       <tbody>
         <Group title="Fermentables">
-          {byPrefix('fermentable: ').map((c, i) => row(`f${i}`, c.item.slice(13), c, amount(c, c.from, system), amount(c, c.to, system)))}
+          {byPrefix('fermentable: ').map((c, i) =>
+            row(`f${i}`, c.item.slice(13), c, amount(c, c.from, system), amount(c, c.to, system)),
+          )}
         </Group>
         <Group title="Hops">
           {byPrefix('hop: ').map((c, i) =>
@@ -101,8 +107,17 @@ export function ScaleTable({ data, system }: { data: ScaleResult; system: UnitSy
           <Group title="Water salts">
             {[...byPrefix('mash salt: '), ...byPrefix('sparge salt: ')].map((c, i) => {
               const v = scaled.after.volumes;
-              const water = c.item.startsWith('mash') ? `${show(system, 'volumeL', v.strikeL + v.infusionL)} of mash water` : `${show(system, 'volumeL', v.spargeL)} of sparge water`;
-              return row(`s${i}`, saltName(c.item), c, `${c.from.toFixed(1)} g`, `${c.to.toFixed(1)} g`, `same ppm in ${water}`);
+              const water = c.item.startsWith('mash')
+                ? `${show(system, 'volumeL', v.strikeL + v.infusionL)} of mash water`
+                : `${show(system, 'volumeL', v.spargeL)} of sparge water`;
+              return row(
+                `s${i}`,
+                saltName(c.item),
+                c,
+                `${c.from.toFixed(1)} g`,
+                `${c.to.toFixed(1)} g`,
+                `same ppm in ${water}`,
+              );
             })}
           </Group>
         )}

@@ -8,4 +8,5 @@ export const historyQuery = (recipeId: number) =>
     queryKey: reportKeys.history(recipeId),
     queryFn: () => api.get<BatchHistory>(`/api/reports/history?recipeId=${recipeId}`),
   });
-export const useBatchHistory = (recipeId: number | null) => useQuery({ ...historyQuery(recipeId ?? 0), enabled: recipeId !== null });
+export const useBatchHistory = (recipeId: number | null) =>
+  useQuery({ ...historyQuery(recipeId ?? 0), enabled: recipeId !== null });

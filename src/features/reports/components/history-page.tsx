@@ -1,5 +1,16 @@
 import { useState } from 'react';
-import { Bar, BarChart, CartesianGrid, Legend, Line, LineChart, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
+import {
+  Bar,
+  BarChart,
+  CartesianGrid,
+  Legend,
+  Line,
+  LineChart,
+  ResponsiveContainer,
+  Tooltip,
+  XAxis,
+  YAxis,
+} from 'recharts';
 import { EmptyState, ErrorState, Loading, PageHeader, SelectField, Table, Td, Th } from '../../../components/ui';
 import { useRecipeList } from '../../recipes/api/list-recipes';
 import { useBatchHistory } from '../api/history';
@@ -22,13 +33,23 @@ export function HistoryPage() {
     attenuation: r.apparentAttenuation === null ? null : r.apparentAttenuation * 100,
     days: r.daysBrewToPackage,
   }));
-  const ogAxis = niceAxis(points.flatMap((p) => [p.plannedOg, p.actualOg]), { pad: 0.002, target: 4 });
-  const percentAxis = niceAxis(points.flatMap((p) => [p.efficiency, p.attenuation]), { pad: 1, target: 4 });
+  const ogAxis = niceAxis(
+    points.flatMap((p) => [p.plannedOg, p.actualOg]),
+    { pad: 0.002, target: 4 },
+  );
+  const percentAxis = niceAxis(
+    points.flatMap((p) => [p.efficiency, p.attenuation]),
+    { pad: 1, target: 4 },
+  );
   return (
     <div className="space-y-5">
       <PageHeader title="Batch history" subtitle="Is the beer staying the same? Compare every batch of a recipe." />
       <div className="w-72">
-        <SelectField label="Recipe" value={recipeId ?? ''} onChange={(e) => setRecipeId(e.target.value ? Number(e.target.value) : null)}>
+        <SelectField
+          label="Recipe"
+          value={recipeId ?? ''}
+          onChange={(e) => setRecipeId(e.target.value ? Number(e.target.value) : null)}
+        >
           <option value="">Choose a recipe</option>
           {(recipes.data ?? []).map((r) => (
             <option key={r.id} value={r.id}>
@@ -54,25 +75,71 @@ export function HistoryPage() {
                 <LineChart data={points}>
                   <CartesianGrid stroke="#e5e7eb" />
                   <XAxis dataKey="number" tick={{ fontSize: 12 }} />
-                  <YAxis type="number" domain={ogAxis.domain} ticks={ogAxis.ticks} interval={0} tickFormatter={(v: number) => v.toFixed(3)} width={56} />
+                  <YAxis
+                    type="number"
+                    domain={ogAxis.domain}
+                    ticks={ogAxis.ticks}
+                    interval={0}
+                    tickFormatter={(v: number) => v.toFixed(3)}
+                    width={56}
+                  />
                   <Tooltip formatter={(v) => (typeof v === 'number' ? v.toFixed(3) : String(v))} />
                   <Legend />
-                  <Line type="stepAfter" dataKey="plannedOg" name="Planned OG" stroke="#64748b" strokeWidth={2} strokeDasharray="6 4" isAnimationActive={false} />
-                  <Line type="linear" dataKey="actualOg" name="Measured OG" stroke="#2f6b4f" strokeWidth={3} connectNulls isAnimationActive={false} />
+                  <Line
+                    type="stepAfter"
+                    dataKey="plannedOg"
+                    name="Planned OG"
+                    stroke="#64748b"
+                    strokeWidth={2}
+                    strokeDasharray="6 4"
+                    isAnimationActive={false}
+                  />
+                  <Line
+                    type="linear"
+                    dataKey="actualOg"
+                    name="Measured OG"
+                    stroke="#2f6b4f"
+                    strokeWidth={3}
+                    connectNulls
+                    isAnimationActive={false}
+                  />
                 </LineChart>
               </ResponsiveContainer>
             </figure>
             <figure className="h-72 rounded-xl border border-mist-200 bg-white p-3">
-              <figcaption className="px-2 text-sm font-semibold text-ink-700">Brewhouse efficiency and apparent attenuation (%)</figcaption>
+              <figcaption className="px-2 text-sm font-semibold text-ink-700">
+                Brewhouse efficiency and apparent attenuation (%)
+              </figcaption>
               <ResponsiveContainer width="100%" height="90%">
                 <LineChart data={points}>
                   <CartesianGrid stroke="#e5e7eb" />
                   <XAxis dataKey="number" tick={{ fontSize: 12 }} />
-                  <YAxis type="number" domain={percentAxis.domain} ticks={percentAxis.ticks} interval={0} tickFormatter={(v: number) => v.toFixed(percentAxis.decimals)} width={40} />
+                  <YAxis
+                    type="number"
+                    domain={percentAxis.domain}
+                    ticks={percentAxis.ticks}
+                    interval={0}
+                    tickFormatter={(v: number) => v.toFixed(percentAxis.decimals)}
+                    width={40}
+                  />
                   <Tooltip formatter={(v) => (typeof v === 'number' ? `${v.toFixed(1)} %` : String(v))} />
                   <Legend />
-                  <Line dataKey="efficiency" name="Efficiency" stroke="#b7791f" strokeWidth={3} connectNulls isAnimationActive={false} />
-                  <Line dataKey="attenuation" name="Attenuation" stroke="#2563eb" strokeWidth={3} connectNulls isAnimationActive={false} />
+                  <Line
+                    dataKey="efficiency"
+                    name="Efficiency"
+                    stroke="#b7791f"
+                    strokeWidth={3}
+                    connectNulls
+                    isAnimationActive={false}
+                  />
+                  <Line
+                    dataKey="attenuation"
+                    name="Attenuation"
+                    stroke="#2563eb"
+                    strokeWidth={3}
+                    connectNulls
+                    isAnimationActive={false}
+                  />
                 </LineChart>
               </ResponsiveContainer>
             </figure>

@@ -2,7 +2,19 @@ import { useState } from 'react';
 import { lToHl, lToUsBbl } from '../../../../shared/brewing';
 import { packageName } from '../../../../shared/schemas/cellar';
 import type { BeerFigures } from '../../../../shared/schemas/reports';
-import { Button, buttonClass, Card, EmptyState, ErrorState, Loading, PageHeader, Table, Td, TextField, Th } from '../../../components/ui';
+import {
+  Button,
+  buttonClass,
+  Card,
+  EmptyState,
+  ErrorState,
+  Loading,
+  PageHeader,
+  Table,
+  Td,
+  TextField,
+  Th,
+} from '../../../components/ui';
 import { productionCsvUrl, useProductionReport } from '../api/production';
 import { useCurrentUser } from '../../../app/current-user';
 
@@ -15,7 +27,6 @@ const FIGURES = [
 
 const bbl = (l: number) => lToUsBbl(l).toFixed(2);
 const hl = (l: number) => lToHl(l).toFixed(2);
-
 
 function lastMonth(): string {
   const d = new Date();
@@ -64,7 +75,13 @@ export function ProductionPage() {
         them; they are not a filing. Check every figure against your own records before you submit anything.
       </Card>
       <div className="w-56 print:hidden">
-        <TextField label="Month" type="month" value={month} max={new Date().toISOString().slice(0, 7)} onChange={(e) => e.target.value && setMonth(e.target.value)} />
+        <TextField
+          label="Month"
+          type="month"
+          value={month}
+          max={new Date().toISOString().slice(0, 7)}
+          onChange={(e) => e.target.value && setMonth(e.target.value)}
+        />
       </div>
       {report.isPending ? (
         <Loading label="Adding up the month" />
@@ -75,7 +92,8 @@ export function ProductionPage() {
       ) : (
         <>
           <p className="text-sm text-ink-500">
-            {month}, in the brewery's time zone ({report.data.timeZone}). US barrels of 31 gallons; hectolitres below each figure.
+            {month}, in the brewery's time zone ({report.data.timeZone}). US barrels of 31 gallons; hectolitres below
+            each figure.
           </p>
           <Table>
             <thead>

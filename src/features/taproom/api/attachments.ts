@@ -4,7 +4,10 @@ import type { AttachmentView } from '../../../../shared/schemas/taproom';
 import { taproomKeys } from './keys';
 
 export const attachmentsQuery = (batchId: number) =>
-  queryOptions({ queryKey: taproomKeys.attachments(batchId), queryFn: () => api.get<AttachmentView[]>(`/api/batches/${batchId}/attachments`) });
+  queryOptions({
+    queryKey: taproomKeys.attachments(batchId),
+    queryFn: () => api.get<AttachmentView[]>(`/api/batches/${batchId}/attachments`),
+  });
 export const useAttachments = (batchId: number) => useQuery(attachmentsQuery(batchId));
 
 export function useUploadAttachment(batchId: number) {

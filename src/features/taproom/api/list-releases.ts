@@ -11,5 +11,9 @@ export interface ReleaseCandidate {
   state: ReleaseState | null;
 }
 
-export const releasesQuery = () => queryOptions({ queryKey: taproomKeys.releases(), queryFn: () => api.get<ReleaseCandidate[]>('/api/taproom/releases') });
+export const releasesQuery = () =>
+  queryOptions({
+    queryKey: taproomKeys.releases(),
+    queryFn: () => api.get<ReleaseCandidate[]>('/api/taproom/releases'),
+  });
 export const useReleases = () => useQuery(releasesQuery());

@@ -4,13 +4,20 @@ import type { PublishReleaseInput, ReleaseDetail, ReleaseSheet } from '../../../
 import { taproomKeys } from './keys';
 
 export const releaseQuery = (batchId: number) =>
-  queryOptions({ queryKey: taproomKeys.release(batchId), queryFn: () => api.get<ReleaseDetail>(`/api/batches/${batchId}/release`) });
+  queryOptions({
+    queryKey: taproomKeys.release(batchId),
+    queryFn: () => api.get<ReleaseDetail>(`/api/batches/${batchId}/release`),
+  });
 export const useRelease = (batchId: number) => useQuery(releaseQuery(batchId));
 
 /** Saving or releasing changes what the taproom and the batch screens show: refresh both. */
 function useInvalidateAfterRelease() {
   const client = useQueryClient();
-  return () => Promise.all([client.invalidateQueries({ queryKey: taproomKeys.all }), client.invalidateQueries({ queryKey: ['batches'] })]);
+  return () =>
+    Promise.all([
+      client.invalidateQueries({ queryKey: taproomKeys.all }),
+      client.invalidateQueries({ queryKey: ['batches'] }),
+    ]);
 }
 
 export function useSaveReleaseSheet(batchId: number) {
@@ -24,7 +31,8 @@ export function useSaveReleaseSheet(batchId: number) {
 export function usePublishRelease(batchId: number) {
   const invalidate = useInvalidateAfterRelease();
   return useMutation({
-    mutationFn: (input: PublishReleaseInput) => api.post<ReleaseDetail>(`/api/batches/${batchId}/release/publish`, input),
+    mutationFn: (input: PublishReleaseInput) =>
+      api.post<ReleaseDetail>(`/api/batches/${batchId}/release/publish`, input),
     onSuccess: invalidate,
   });
 }
@@ -33,7 +41,8 @@ export function usePublishRelease(batchId: number) {
 export function useSetOnTap(batchId: number) {
   const invalidate = useInvalidateAfterRelease();
   return useMutation({
-    mutationFn: (onTap: boolean) => api.post<ReleaseDetail>(`/api/batches/${batchId}/release/${onTap ? 'back-on-tap' : 'off-tap'}`),
+    mutationFn: (onTap: boolean) =>
+      api.post<ReleaseDetail>(`/api/batches/${batchId}/release/${onTap ? 'back-on-tap' : 'off-tap'}`),
     onSuccess: invalidate,
   });
 }

@@ -6,7 +6,8 @@ import { useAttachments, useRemoveAttachment, useUploadAttachment } from '../api
 import { useCurrentUser } from '../../../app/current-user';
 import { ConfirmButton } from '../../../components/confirm-button';
 
-const sizeText = (bytes: number) => (bytes >= 1024 * 1024 ? `${(bytes / 1024 / 1024).toFixed(1)} MB` : `${Math.max(1, Math.round(bytes / 1024))} KB`);
+const sizeText = (bytes: number) =>
+  bytes >= 1024 * 1024 ? `${(bytes / 1024 / 1024).toFixed(1)} MB` : `${Math.max(1, Math.round(bytes / 1024))} KB`;
 
 /** Photos and lab sheets on a batch: add one, see them all, open each; the head brewer removes a wrong one. */
 export function AttachmentsPanel({ batchId }: { batchId: number }) {
@@ -69,7 +70,9 @@ export function AttachmentsPanel({ batchId }: { batchId: number }) {
                 {f.thumbnailUrl ? (
                   <img src={f.thumbnailUrl} alt={f.displayName} className="h-24 w-full rounded object-cover" />
                 ) : (
-                  <span className="flex h-24 items-center justify-center rounded bg-mist-100 font-semibold text-ink-700">PDF</span>
+                  <span className="flex h-24 items-center justify-center rounded bg-mist-100 font-semibold text-ink-700">
+                    PDF
+                  </span>
                 )}
                 <span className="mt-1 block truncate font-medium text-cellar-700">{f.displayName}</span>
               </a>
@@ -81,7 +84,9 @@ export function AttachmentsPanel({ batchId }: { batchId: number }) {
                   ask="Remove…"
                   confirm="Remove this file"
                   act={() => remove.mutateAsync(f.id)}
-                  onRefused={(error) => setProblem(error instanceof ApiError ? error.message : 'The file could not be removed. Try again.')}
+                  onRefused={(error) =>
+                    setProblem(error instanceof ApiError ? error.message : 'The file could not be removed. Try again.')
+                  }
                 />
               )}
             </li>

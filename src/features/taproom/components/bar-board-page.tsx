@@ -31,7 +31,11 @@ export function BarBoardPage() {
   return (
     <FullScreenView label={title} onLeave={leave} className="bg-cellar-900 p-4 text-white sm:p-8">
       <header className="mb-6 flex items-start justify-between gap-4 sm:mb-8">
-        <h1 ref={heading} tabIndex={-1} className="min-w-0 break-words text-3xl font-bold leading-tight outline-none sm:text-4xl lg:text-5xl">
+        <h1
+          ref={heading}
+          tabIndex={-1}
+          className="min-w-0 break-words text-3xl font-bold leading-tight outline-none sm:text-4xl lg:text-5xl"
+        >
           {title}
         </h1>
         <Button variant="onDark" className="no-print shrink-0" onClick={leave} aria-keyshortcuts="Escape">
@@ -53,7 +57,9 @@ export function BarBoardPage() {
                 </span>
                 <div className="min-w-0 flex-1 sm:flex sm:items-center sm:gap-6">
                   <div className="min-w-0 sm:flex-1">
-                    <p className="break-words text-3xl font-bold leading-tight sm:text-4xl lg:text-5xl 2xl:text-6xl">{b.beerName}</p>
+                    <p className="break-words text-3xl font-bold leading-tight sm:text-4xl lg:text-5xl 2xl:text-6xl">
+                      {b.beerName}
+                    </p>
                     <p className="mt-1 text-lg text-cellar-100 sm:text-xl lg:text-2xl">
                       {b.style}
                       {servingParts(b, me.brewery.unitSystem).map((part) => (
@@ -65,7 +71,9 @@ export function BarBoardPage() {
                     </p>
                   </div>
                   <div className="mt-2 flex items-baseline gap-3 whitespace-nowrap sm:mt-0 sm:block sm:text-right">
-                    <p className="text-4xl font-bold tabular-nums text-brass-400 sm:text-5xl lg:text-6xl 2xl:text-7xl">{abvText(b)}</p>
+                    <p className="text-4xl font-bold tabular-nums text-brass-400 sm:text-5xl lg:text-6xl 2xl:text-7xl">
+                      {abvText(b)}
+                    </p>
                     <p className="text-lg text-cellar-100 sm:text-xl lg:text-2xl">{b.ibu.toFixed(0)} IBU</p>
                   </div>
                 </div>

@@ -3,7 +3,15 @@ import { Button, Caution, ErrorState, LinkButton, Loading, PageHeader, cx } from
 import { useCurrentUser } from '../../../app/current-user';
 import { srmToEbc } from '../../../../shared/brewing';
 import { useBeer } from '../api/get-beer';
-import { ColourSwatch, abvText, allergensLine, offFlavoursLine, packagesLine, servingLine, tastingLine } from './beer-facts';
+import {
+  ColourSwatch,
+  abvText,
+  allergensLine,
+  offFlavoursLine,
+  packagesLine,
+  servingLine,
+  tastingLine,
+} from './beer-facts';
 
 function Fact({ label, className, children }: { label: string; className?: string; children: React.ReactNode }) {
   return (
@@ -32,7 +40,8 @@ export function BriefingSheetPage() {
   if (beer.isError) return <ErrorState error={beer.error} onRetry={() => beer.refetch()} />;
   const b = beer.data;
   const tasting = tastingLine(b.tasting);
-  const date = (iso: string) => new Intl.DateTimeFormat('en-GB', { dateStyle: 'long', timeZone: me.brewery.timeZone }).format(new Date(iso));
+  const date = (iso: string) =>
+    new Intl.DateTimeFormat('en-GB', { dateStyle: 'long', timeZone: me.brewery.timeZone }).format(new Date(iso));
   const when =
     b.state === 'off_tap'
       ? `Off tap${b.offTapAt ? ` since ${date(b.offTapAt)}` : ''} (kept for the record)`
@@ -54,7 +63,10 @@ export function BriefingSheetPage() {
           </>
         }
       />
-      <article aria-label={`Briefing: ${b.beerName}`} className="mx-auto max-w-4xl space-y-6 rounded-xl bg-white p-4 shadow-sm sm:p-6 print:max-w-none print:p-0 print:shadow-none">
+      <article
+        aria-label={`Briefing: ${b.beerName}`}
+        className="mx-auto max-w-4xl space-y-6 rounded-xl bg-white p-4 shadow-sm sm:p-6 print:max-w-none print:p-0 print:shadow-none"
+      >
         <header className="flex flex-wrap items-start justify-between gap-4 border-b-2 border-ink-900 pb-4">
           <div className="min-w-0">
             <h2 className="break-words text-4xl font-bold text-ink-900">{b.beerName}</h2>
@@ -63,7 +75,13 @@ export function BriefingSheetPage() {
               <span className="whitespace-nowrap">Batch {b.batchNumber}</span> · {when} · {me.brewery.name}
             </p>
           </div>
-          {b.photo && <img src={b.photo.thumbnailUrl} alt={`${b.beerName} in the glass`} className="h-40 w-40 rounded-lg object-cover" />}
+          {b.photo && (
+            <img
+              src={b.photo.thumbnailUrl}
+              alt={`${b.beerName} in the glass`}
+              className="h-40 w-40 rounded-lg object-cover"
+            />
+          )}
         </header>
 
         {/* Two across on a phone, the colour (swatch and EBC) below on its own row; three across from a tablet and on paper. */}
@@ -96,7 +114,9 @@ export function BriefingSheetPage() {
                 <p>{tasting}</p>
                 {b.tasting.aroma && <p className="mt-1">Aroma: {b.tasting.aroma}</p>}
                 {b.tasting.flavour && <p className="mt-1">Flavour: {b.tasting.flavour}</p>}
-                {b.tasting.offFlavours.length > 0 && <p className="mt-1">Noted by tasters: {offFlavoursLine(b.tasting)}</p>}
+                {b.tasting.offFlavours.length > 0 && (
+                  <p className="mt-1">Noted by tasters: {offFlavoursLine(b.tasting)}</p>
+                )}
               </>
             ) : (
               <p>No tasting notes yet.</p>
@@ -108,8 +128,9 @@ export function BriefingSheetPage() {
         </div>
 
         <Caution title="Serving alcohol">
-          Check ID and refuse service to anyone who is intoxicated, as your licence and local law require. Allergen information comes from the
-          brewery’s records: for a guest with a severe allergy, confirm with the head brewer before recommending a beer.
+          Check ID and refuse service to anyone who is intoxicated, as your licence and local law require. Allergen
+          information comes from the brewery’s records: for a guest with a severe allergy, confirm with the head brewer
+          before recommending a beer.
         </Caution>
       </article>
     </>

@@ -22,7 +22,11 @@ describe('FullScreenView', () => {
   it('leaves something already inert as it was', () => {
     const asleep = document.body.appendChild(document.createElement('div'));
     asleep.setAttribute('inert', '');
-    const { unmount } = render(<FullScreenView label="On tap" onLeave={() => undefined}>board</FullScreenView>);
+    const { unmount } = render(
+      <FullScreenView label="On tap" onLeave={() => undefined}>
+        board
+      </FullScreenView>,
+    );
     unmount();
     expect(asleep.hasAttribute('inert')).toBe(true);
     asleep.remove();
@@ -30,7 +34,11 @@ describe('FullScreenView', () => {
 
   it('calls onLeave on Escape, and not on other keys', () => {
     const onLeave = vi.fn();
-    render(<FullScreenView label="On tap" onLeave={onLeave}>board</FullScreenView>);
+    render(
+      <FullScreenView label="On tap" onLeave={onLeave}>
+        board
+      </FullScreenView>,
+    );
     fireEvent.keyDown(document, { key: 'Enter' });
     expect(onLeave).not.toHaveBeenCalled();
     fireEvent.keyDown(document, { key: 'Escape' });

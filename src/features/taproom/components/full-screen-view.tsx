@@ -7,7 +7,17 @@ import { cx } from '../../../components/ui';
  * and everything else on the page is made inert while it is open: Tab, a screen reader and a stray tap stay
  * inside it instead of reaching the menu hidden underneath (Sign out among it). Escape calls `onLeave`.
  */
-export function FullScreenView({ label, onLeave, className, children }: { label: string; onLeave: () => void; className?: string; children: ReactNode }) {
+export function FullScreenView({
+  label,
+  onLeave,
+  className,
+  children,
+}: {
+  label: string;
+  onLeave: () => void;
+  className?: string;
+  children: ReactNode;
+}) {
   const [host] = useState(() => document.createElement('div'));
 
   useLayoutEffect(() => {
@@ -33,7 +43,11 @@ export function FullScreenView({ label, onLeave, className, children }: { label:
   }, []);
 
   return createPortal(
-    <div role="region" aria-label={label} className={cx('fixed inset-0 z-50 overflow-auto overscroll-contain', className)}>
+    <div
+      role="region"
+      aria-label={label}
+      className={cx('fixed inset-0 z-50 overflow-auto overscroll-contain', className)}
+    >
       {children}
     </div>,
     host,

@@ -2,7 +2,20 @@ import { useState } from 'react';
 import { useParams } from 'react-router-dom';
 import { useController, useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { Button, Card, Caution, Dialog, ErrorState, Loading, PageHeader, SelectField, Stat, TextAreaField, TextField, useToast } from '../../../components/ui';
+import {
+  Button,
+  Card,
+  Caution,
+  Dialog,
+  ErrorState,
+  Loading,
+  PageHeader,
+  SelectField,
+  Stat,
+  TextAreaField,
+  TextField,
+  useToast,
+} from '../../../components/ui';
 import { useCurrentUser } from '../../../app/current-user';
 import { showTime } from '../../../lib/time';
 import { FormBanner } from '../../../components/ui/form-banner';
@@ -31,7 +44,11 @@ const STATE_LABELS = {
   on_tap: 'On tap',
   off_tap: 'Off tap (kept for the record)',
 } as const;
-const METHOD_LABELS = { balling: "Balling's formula (Hall, 1995)", simple: '(OG − FG) × 131.25', hall: 'Hall’s formula' } as const;
+const METHOD_LABELS = {
+  balling: "Balling's formula (Hall, 1995)",
+  simple: '(OG − FG) × 131.25',
+  hall: 'Hall’s formula',
+} as const;
 
 const sg = (v: number | null) => (v === null ? '—' : v.toFixed(3));
 
@@ -58,7 +75,10 @@ function SheetForm({ batchId, detail }: { batchId: number; detail: ReleaseDetail
   const save = useSaveReleaseSheet(batchId);
   const photos = useAttachments(batchId).data?.filter((a) => a.kind === 'photo') ?? [];
   const [banner, setBanner] = useState<string | null>(null);
-  const form = useForm<ReleaseSheetInput, unknown, ReleaseSheet>({ resolver: zodResolver(releaseSheetSchema), defaultValues: defaults(detail) });
+  const form = useForm<ReleaseSheetInput, unknown, ReleaseSheet>({
+    resolver: zodResolver(releaseSheetSchema),
+    defaultValues: defaults(detail),
+  });
   const { register, handleSubmit, formState, setError, reset, control } = form;
   // Radio values are strings; the sheet holds the attachment's id (or null), so the group is controlled.
   const photo = useController({ control, name: 'photoAttachmentId' });
@@ -79,73 +99,90 @@ function SheetForm({ batchId, detail }: { batchId: number; detail: ReleaseDetail
     <Card>
       <form onSubmit={onSubmit} className="space-y-4" aria-label="Release sheet" noValidate>
         <h2 className="text-lg font-bold text-ink-900">Release sheet</h2>
-        {!mayRelease && <p className="rounded-lg bg-mist-100 p-3 text-ink-700">Read only: a head brewer writes and releases the sheet.</p>}
-        <fieldset disabled={!mayRelease} className="space-y-4">
-        <FormBanner message={banner} />
-        <div className="grid gap-4 sm:grid-cols-2">
-          <TextField label="Beer name" {...register('beerName')} error={errors.beerName?.message} />
-          <TextField label="Style" {...register('style')} error={errors.style?.message} />
-        </div>
-        <TextAreaField
-          label="Taproom description"
-          hint="Public-facing: guests and staff read this."
-          rows={5}
-          {...register('description')}
-          error={errors.description?.message}
-        />
-        <div className="grid gap-4 sm:grid-cols-2">
-          <SelectField label="Glass" {...register('glass')} error={errors.glass?.message}>
-            {Object.entries(GLASSES).map(([id, label]) => (
-              <option key={id} value={id}>
-                {label}
-              </option>
-            ))}
-          </SelectField>
-          <SelectField label="Serving temperature" {...register('servingTempC', { setValueAs: Number })} error={errors.servingTempC?.message}>
-            {SERVING_TEMPS_C.map((c) => (
-              <option key={c} value={c}>
-                {show(me.brewery.unitSystem, 'tempC', c, 0)}
-              </option>
-            ))}
-          </SelectField>
-        </div>
-        <TextField label="Serving notes" placeholder="e.g. pour with a finger of head" {...register('servingNotes')} error={errors.servingNotes?.message} />
-        <fieldset>
-          <legend className="text-sm font-semibold text-ink-700">Allergens</legend>
-          <div className="mt-1 grid grid-cols-2 gap-1 sm:grid-cols-3">
-            {Object.entries(ALLERGENS).map(([id, label]) => (
-              <label key={id} className="flex min-h-touch items-center gap-2">
-                <input type="checkbox" value={id} {...register('allergens')} className="h-5 w-5 accent-cellar-700" />
-                {label}
-              </label>
-            ))}
-          </div>
-          {errors.allergens && <p className="text-sm text-ember-700">{errors.allergens.message}</p>}
-        </fieldset>
-        <fieldset>
-          <legend className="text-sm font-semibold text-ink-700">Photo for the taproom</legend>
-          <div className="mt-1 flex flex-wrap gap-3">
-            {[null, ...photos].map((p) => (
-              <label key={p?.id ?? 'none'} className="flex min-h-touch items-center gap-2">
-                <input
-                  type="radio"
-                  name={photo.field.name}
-                  checked={photo.field.value === (p?.id ?? null)}
-                  onChange={() => photo.field.onChange(p?.id ?? null)}
-                  className="h-5 w-5"
-                />
-                {p ? <img src={p.thumbnailUrl ?? p.url} alt={p.displayName} className="h-12 w-12 rounded object-cover" /> : 'No photo'}
-              </label>
-            ))}
-          </div>
-          {errors.photoAttachmentId && <p className="text-sm text-ember-700">{errors.photoAttachmentId.message}</p>}
-        </fieldset>
-        {!wasReleased(detail.state) && (
-          <label className="flex min-h-touch items-center gap-2">
-            <input type="checkbox" {...register('comingSoon')} className="h-5 w-5 accent-cellar-700" />
-            Show to the taproom as coming soon
-          </label>
+        {!mayRelease && (
+          <p className="rounded-lg bg-mist-100 p-3 text-ink-700">
+            Read only: a head brewer writes and releases the sheet.
+          </p>
         )}
+        <fieldset disabled={!mayRelease} className="space-y-4">
+          <FormBanner message={banner} />
+          <div className="grid gap-4 sm:grid-cols-2">
+            <TextField label="Beer name" {...register('beerName')} error={errors.beerName?.message} />
+            <TextField label="Style" {...register('style')} error={errors.style?.message} />
+          </div>
+          <TextAreaField
+            label="Taproom description"
+            hint="Public-facing: guests and staff read this."
+            rows={5}
+            {...register('description')}
+            error={errors.description?.message}
+          />
+          <div className="grid gap-4 sm:grid-cols-2">
+            <SelectField label="Glass" {...register('glass')} error={errors.glass?.message}>
+              {Object.entries(GLASSES).map(([id, label]) => (
+                <option key={id} value={id}>
+                  {label}
+                </option>
+              ))}
+            </SelectField>
+            <SelectField
+              label="Serving temperature"
+              {...register('servingTempC', { setValueAs: Number })}
+              error={errors.servingTempC?.message}
+            >
+              {SERVING_TEMPS_C.map((c) => (
+                <option key={c} value={c}>
+                  {show(me.brewery.unitSystem, 'tempC', c, 0)}
+                </option>
+              ))}
+            </SelectField>
+          </div>
+          <TextField
+            label="Serving notes"
+            placeholder="e.g. pour with a finger of head"
+            {...register('servingNotes')}
+            error={errors.servingNotes?.message}
+          />
+          <fieldset>
+            <legend className="text-sm font-semibold text-ink-700">Allergens</legend>
+            <div className="mt-1 grid grid-cols-2 gap-1 sm:grid-cols-3">
+              {Object.entries(ALLERGENS).map(([id, label]) => (
+                <label key={id} className="flex min-h-touch items-center gap-2">
+                  <input type="checkbox" value={id} {...register('allergens')} className="h-5 w-5 accent-cellar-700" />
+                  {label}
+                </label>
+              ))}
+            </div>
+            {errors.allergens && <p className="text-sm text-ember-700">{errors.allergens.message}</p>}
+          </fieldset>
+          <fieldset>
+            <legend className="text-sm font-semibold text-ink-700">Photo for the taproom</legend>
+            <div className="mt-1 flex flex-wrap gap-3">
+              {[null, ...photos].map((p) => (
+                <label key={p?.id ?? 'none'} className="flex min-h-touch items-center gap-2">
+                  <input
+                    type="radio"
+                    name={photo.field.name}
+                    checked={photo.field.value === (p?.id ?? null)}
+                    onChange={() => photo.field.onChange(p?.id ?? null)}
+                    className="h-5 w-5"
+                  />
+                  {p ? (
+                    <img src={p.thumbnailUrl ?? p.url} alt={p.displayName} className="h-12 w-12 rounded object-cover" />
+                  ) : (
+                    'No photo'
+                  )}
+                </label>
+              ))}
+            </div>
+            {errors.photoAttachmentId && <p className="text-sm text-ember-700">{errors.photoAttachmentId.message}</p>}
+          </fieldset>
+          {!wasReleased(detail.state) && (
+            <label className="flex min-h-touch items-center gap-2">
+              <input type="checkbox" {...register('comingSoon')} className="h-5 w-5 accent-cellar-700" />
+              Show to the taproom as coming soon
+            </label>
+          )}
         </fieldset>
         {mayRelease && (
           <Button type="submit" size="lg" busy={save.isPending}>
@@ -171,7 +208,8 @@ function TapState({ batchId, detail }: { batchId: number; detail: ReleaseDetail 
   const [problem, setProblem] = useState<string | null>(null);
   const name = detail.sheet?.beerName ?? detail.batch.beerName;
   const released = `released by ${detail.releasedBy ?? 'the head brewer'}${stamp(detail.releasedAt)}`;
-  const refused = (error: unknown) => setProblem(error instanceof Error ? error.message : 'That did not go through. Try again.');
+  const refused = (error: unknown) =>
+    setProblem(error instanceof Error ? error.message : 'That did not go through. Try again.');
   const alert = <FormBanner message={problem} />;
 
   if (detail.state === 'on_tap') {
@@ -179,7 +217,8 @@ function TapState({ batchId, detail }: { batchId: number; detail: ReleaseDetail 
       <div className="space-y-3">
         <p className="rounded-lg bg-cellar-100 p-3 font-semibold text-cellar-800">On tap, {released}.</p>
         <p className="text-sm text-ink-700">
-          When it runs out, take it off tap: it leaves the taproom’s list and the bar screen. Its sheet, numbers and tasting notes are kept.
+          When it runs out, take it off tap: it leaves the taproom’s list and the bar screen. Its sheet, numbers and
+          tasting notes are kept.
         </p>
         <ConfirmButton
           ask="Take off tap…"
@@ -218,7 +257,15 @@ function TapState({ batchId, detail }: { batchId: number; detail: ReleaseDetail 
   );
 }
 
-function ReleaseNumbers({ batchId, detail, sheetSaved }: { batchId: number; detail: ReleaseDetail; sheetSaved: boolean }) {
+function ReleaseNumbers({
+  batchId,
+  detail,
+  sheetSaved,
+}: {
+  batchId: number;
+  detail: ReleaseDetail;
+  sheetSaved: boolean;
+}) {
   const mayRelease = useCurrentUser().role === 'head_brewer';
   const publish = usePublishRelease(batchId);
   const toast = useToast();
@@ -282,8 +329,8 @@ function ReleaseNumbers({ batchId, detail, sheetSaved }: { batchId: number; deta
       )}
       <Dialog open={confirming} onClose={() => setConfirming(false)} title="Confirm the final numbers">
         <p className="text-ink-700">
-          OG <strong>{sg(n.og)}</strong>, FG <strong>{sg(n.fg)}</strong>, ABV <strong>{n.abvPct?.toFixed(1)} %</strong>, {n.ibu.toFixed(0)} IBU. The batch
-          moves to released and the beer appears on the taproom’s tap list.
+          OG <strong>{sg(n.og)}</strong>, FG <strong>{sg(n.fg)}</strong>, ABV <strong>{n.abvPct?.toFixed(1)} %</strong>,{' '}
+          {n.ibu.toFixed(0)} IBU. The batch moves to released and the beer appears on the taproom’s tap list.
         </p>
         <div className="mt-3">
           <FormBanner message={problem} />
@@ -298,7 +345,8 @@ function ReleaseNumbers({ batchId, detail, sheetSaved }: { batchId: number; deta
         </div>
       </Dialog>
       <Caution title="Alcohol content on labels">
-        The ABV here is computed from your logged gravities. Labelling rules and tolerances differ by country; check yours before printing labels.
+        The ABV here is computed from your logged gravities. Labelling rules and tolerances differ by country; check
+        yours before printing labels.
       </Caution>
     </Card>
   );

@@ -4,7 +4,12 @@ import { useReleases } from '../api/list-releases';
 import { useCurrentUser } from '../../../app/current-user';
 import { wasReleased } from '../../../../shared/schemas/taproom';
 
-const STATE_TEXT = { draft: 'Sheet drafted', coming_soon: 'Shown as coming soon', on_tap: 'On tap', off_tap: 'Off tap' } as const;
+const STATE_TEXT = {
+  draft: 'Sheet drafted',
+  coming_soon: 'Shown as coming soon',
+  on_tap: 'On tap',
+  off_tap: 'Off tap',
+} as const;
 
 /** The head brewer's list of batches with beer to release, and where each release stands. */
 export function ReleasesPage() {
@@ -12,7 +17,10 @@ export function ReleasesPage() {
   const releases = useReleases();
   return (
     <>
-      <PageHeader title="Tasting and release" subtitle="Taste each beer, write its taproom sheet, and release it once it is packaged." />
+      <PageHeader
+        title="Tasting and release"
+        subtitle="Taste each beer, write its taproom sheet, and release it once it is packaged."
+      />
       {releases.isPending ? (
         <Loading label="Loading batches" />
       ) : releases.isError ? (

@@ -14,7 +14,13 @@ function BeerCard({ beer }: { beer: TaproomBeer }) {
   const tasting = tastingLine(beer.tasting);
   return (
     <Card className="flex flex-col gap-3" aria-label={beer.beerName}>
-      {beer.photo && <img src={beer.photo.thumbnailUrl} alt={`${beer.beerName} in the glass`} className="-mx-5 -mt-5 h-40 w-[calc(100%+2.5rem)] max-w-none rounded-t-xl object-cover" />}
+      {beer.photo && (
+        <img
+          src={beer.photo.thumbnailUrl}
+          alt={`${beer.beerName} in the glass`}
+          className="-mx-5 -mt-5 h-40 w-[calc(100%+2.5rem)] max-w-none rounded-t-xl object-cover"
+        />
+      )}
       <div className="flex items-start gap-4">
         <div className="min-w-0 flex-1">
           <h3 className="text-xl font-bold text-ink-900">{beer.beerName}</h3>
@@ -26,7 +32,9 @@ function BeerCard({ beer }: { beer: TaproomBeer }) {
       </div>
       <dl className="grid grid-cols-2 gap-2">
         <div className="rounded-lg bg-mist-100 px-3 py-2">
-          <dt className="text-xs font-semibold uppercase tracking-wide text-ink-500">ABV{beer.abvIsPlanned ? ' (planned)' : ''}</dt>
+          <dt className="text-xs font-semibold uppercase tracking-wide text-ink-500">
+            ABV{beer.abvIsPlanned ? ' (planned)' : ''}
+          </dt>
           <dd className="whitespace-nowrap text-3xl font-semibold tabular-nums text-ink-900">{abvText(beer)}</dd>
         </div>
         <div className="rounded-lg bg-mist-100 px-3 py-2">
@@ -99,7 +107,11 @@ export function TaproomHome() {
   const style = params.get('style') ?? '';
   const strength = (params.get('strength') ?? '') as Strength | '';
   const deferredQ = useDeferredValue(q.trim());
-  const query: TaproomListQuery = { q: deferredQ || undefined, style: style || undefined, strength: strength || undefined };
+  const query: TaproomListQuery = {
+    q: deferredQ || undefined,
+    style: style || undefined,
+    strength: strength || undefined,
+  };
   const beers = useBeers(query);
 
   const setParam = (name: string, value: string) =>
@@ -132,7 +144,13 @@ export function TaproomHome() {
         }
       />
       <form role="search" className="mb-6 grid gap-3 sm:grid-cols-3" onSubmit={(e) => e.preventDefault()}>
-        <TextField label="Search beers" type="search" value={q} placeholder="Name, style or description" onChange={(e) => setParam('q', e.target.value)} />
+        <TextField
+          label="Search beers"
+          type="search"
+          value={q}
+          placeholder="Name, style or description"
+          onChange={(e) => setParam('q', e.target.value)}
+        />
         <SelectField label="Style" value={style} onChange={(e) => setParam('style', e.target.value)}>
           <option value="">All styles</option>
           {beers.data?.styles.map((s) => (
@@ -156,8 +174,16 @@ export function TaproomHome() {
         <ErrorState error={beers.error} onRetry={() => beers.refetch()} />
       ) : (
         <>
-          <Shelf title="On tap" beers={beers.data.beers.filter((b) => b.state === 'on_tap')} empty={q || style || strength ? 'Nothing on tap matches' : 'Nothing released yet'} />
-          <Shelf title="Coming soon" beers={beers.data.beers.filter((b) => b.state === 'coming_soon')} empty="Nothing announced yet" />
+          <Shelf
+            title="On tap"
+            beers={beers.data.beers.filter((b) => b.state === 'on_tap')}
+            empty={q || style || strength ? 'Nothing on tap matches' : 'Nothing released yet'}
+          />
+          <Shelf
+            title="Coming soon"
+            beers={beers.data.beers.filter((b) => b.state === 'coming_soon')}
+            empty="Nothing announced yet"
+          />
         </>
       )}
     </>

@@ -8,7 +8,10 @@ export const tastingKeys = {
 };
 
 export const tastingNotesQuery = (batchId: number) =>
-  queryOptions({ queryKey: tastingKeys.batch(batchId), queryFn: () => api.get<TastingNote[]>(`/api/batches/${batchId}/tasting-notes`) });
+  queryOptions({
+    queryKey: tastingKeys.batch(batchId),
+    queryFn: () => api.get<TastingNote[]>(`/api/batches/${batchId}/tasting-notes`),
+  });
 export const useTastingNotes = (batchId: number) => useQuery(tastingNotesQuery(batchId));
 
 export function useAddTastingNote(batchId: number) {
@@ -16,6 +19,10 @@ export function useAddTastingNote(batchId: number) {
   return useMutation({
     mutationFn: (input: TastingNoteInput) => api.post<TastingNote>(`/api/batches/${batchId}/tasting-notes`, input),
     // The taproom's tasting summary changes too.
-    onSuccess: () => Promise.all([client.invalidateQueries({ queryKey: tastingKeys.batch(batchId) }), client.invalidateQueries({ queryKey: ['taproom'] })]),
+    onSuccess: () =>
+      Promise.all([
+        client.invalidateQueries({ queryKey: tastingKeys.batch(batchId) }),
+        client.invalidateQueries({ queryKey: ['taproom'] }),
+      ]),
   });
 }

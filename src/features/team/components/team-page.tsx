@@ -3,7 +3,19 @@ import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { inviteSchema, type InviteInput } from '../../../../shared/schemas/auth';
 import { ROLES, ROLE_LABELS, type Role } from '../../../../shared/schemas/roles';
-import { Button, Card, ErrorState, Loading, PageHeader, SelectField, Table, Td, TextField, Th, useToast } from '../../../components/ui';
+import {
+  Button,
+  Card,
+  ErrorState,
+  Loading,
+  PageHeader,
+  SelectField,
+  Table,
+  Td,
+  TextField,
+  Th,
+  useToast,
+} from '../../../components/ui';
 import { applyServerErrors } from '../../../lib/forms';
 import { useInviteTeammate, useTeam, useUpdateMember, type Team } from '../api/team';
 import { FormBanner } from '../../../components/ui/form-banner';
@@ -50,7 +62,13 @@ function InviteForm() {
 }
 
 /** A teammate's role: choosing another one asks before it takes effect (it changes what they may open at once). */
-function RoleChoice({ member, onChange }: { member: Team['members'][number]; onChange: (role: Role) => Promise<void> }) {
+function RoleChoice({
+  member,
+  onChange,
+}: {
+  member: Team['members'][number];
+  onChange: (role: Role) => Promise<void>;
+}) {
   const [role, setRole] = useState<Role>(member.role);
   return (
     <span className="inline-flex flex-wrap items-center gap-2">
@@ -123,26 +141,32 @@ export function TeamPage() {
                         {m.id === me.id ? (
                           ROLE_LABELS[m.role]
                         ) : (
-                          <RoleChoice member={m} onChange={(role) => change(m.id, { role }, `${m.displayName} is now ${ROLE_LABELS[role].toLowerCase()}`)} />
+                          <RoleChoice
+                            member={m}
+                            onChange={(role) =>
+                              change(m.id, { role }, `${m.displayName} is now ${ROLE_LABELS[role].toLowerCase()}`)
+                            }
+                          />
                         )}
                       </Td>
                       <Td>
                         {m.id === me.id ? (
                           'You'
+                        ) : m.disabled ? (
+                          <Button
+                            variant="secondary"
+                            onClick={() => change(m.id, { disabled: false }, `${m.displayName} can sign in again`)}
+                          >
+                            Restore access
+                          </Button>
                         ) : (
-                          m.disabled ? (
-                            <Button variant="secondary" onClick={() => change(m.id, { disabled: false }, `${m.displayName} can sign in again`)}>
-                              Restore access
-                            </Button>
-                          ) : (
-                            <ConfirmButton
-                              ask="Block access…"
-                              confirm={`Block ${m.displayName}`}
-                              act={() => update.mutateAsync({ id: m.id, disabled: true })}
-                              onDone={() => toast(`${m.displayName} is signed out and blocked`)}
-                              onRefused={refused}
-                            />
-                          )
+                          <ConfirmButton
+                            ask="Block access…"
+                            confirm={`Block ${m.displayName}`}
+                            act={() => update.mutateAsync({ id: m.id, disabled: true })}
+                            onDone={() => toast(`${m.displayName} is signed out and blocked`)}
+                            onRefused={refused}
+                          />
                         )}
                       </Td>
                     </tr>
