@@ -86,7 +86,7 @@ export async function sendItem(item: OutboxItem): Promise<SendResult> {
   const data = (await response.json().catch(() => null)) as {
     error?: { message?: string; fields?: Record<string, string> };
   } | null;
-  // A refusal names the fields at fault ("Some fields need attention: Temperature (°C) must be at most 110").
+  // A refusal names the fields at fault ("Some fields need attention: Temperature must be at most 230 °F").
   const fields = Object.values(data?.error?.fields ?? {});
   const general = data?.error?.message ?? `The server answered ${response.status}`;
   const message = fields.length ? `${general}: ${fields.join('; ')}` : general;

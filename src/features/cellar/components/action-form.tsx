@@ -11,7 +11,7 @@ import {
   type VesselView,
 } from '../../../../shared/schemas/cellar';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
-import { UNITS } from '../../../lib/units';
+import { displayUnit } from '../../../lib/units';
 import { useLogCellarEntry } from '../api/log-cellar-entry';
 import { useVessels } from '../api/vessels';
 
@@ -32,7 +32,7 @@ export function ActionForm({
   const log = useLogCellarEntry(batchId);
   const vessels = useVessels();
   const [saved, setSaved] = useState<string>();
-  const temp = UNITS[unitSystem].tempC;
+  const temp = displayUnit('temperature', unitSystem);
   const planTemp = { d_rest: plan.dRestTempC, cold_crash: plan.crashTempC } as Record<string, number>;
   const { register, handleSubmit, watch, setValue, reset, formState } = useForm<ActionEntryInput>({
     resolver: zodResolver(actionEntrySchema),
@@ -41,7 +41,7 @@ export function ActionForm({
       action: 'd_rest',
       tempUnit: unitSystem === 'us' ? 'f' : 'c',
       volumeUnit: unitSystem === 'us' ? 'bbl' : 'l',
-      temp: Number(temp.toDisplay(plan.dRestTempC).toFixed(1)),
+      temp: Number(temp.fromSi(plan.dRestTempC).toFixed(1)),
     },
   });
   const action = watch('action');
@@ -67,7 +67,7 @@ export function ActionForm({
         {...register('action', {
           onChange: (e) => {
             const t = planTemp[e.target.value as string];
-            setValue('temp', t === undefined ? undefined : Number(temp.toDisplay(t).toFixed(1)));
+            setValue('temp', t === undefined ? undefined : Number(temp.fromSi(t).toFixed(1)));
           },
         })}
       >

@@ -10,7 +10,7 @@ import {
   type ReadingView,
 } from '../../../../shared/schemas/cellar';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
-import { UNITS } from '../../../lib/units';
+import { displayUnit } from '../../../lib/units';
 import { useLogCellarEntry } from '../api/log-cellar-entry';
 
 import { optionalNumber } from './form-values';
@@ -33,7 +33,7 @@ function defaults(
     temp:
       last?.tempC === null || last?.tempC === undefined
         ? undefined
-        : Number(UNITS[unitSystem].tempC.toDisplay(last.tempC).toFixed(1)),
+        : Number(displayUnit('temperature', unitSystem).fromSi(last.tempC).toFixed(1)),
     originalBrix: method === 'refractometer' ? firstBrix : undefined,
   };
 }
@@ -58,7 +58,7 @@ export function ReadingForm({
   });
   const method = watch('method');
   const gravityUnit = watch('gravityUnit');
-  const tempUnit = UNITS[unitSystem].tempC.unit;
+  const tempUnit = displayUnit('temperature', unitSystem).unit;
   const errors = formState.errors;
   const { once, busy } = useSubmitOnce();
 
