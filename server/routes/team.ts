@@ -10,7 +10,7 @@ export const teamRouter = defineRouter('/api/team', [
   {
     method: 'get',
     path: '/',
-    access: ['head_brewer'],
+    access: 'team.manage',
     handler: async (req, res) => {
       res.json(await auth.teamMembers(actor(req).breweryId));
     },
@@ -18,7 +18,7 @@ export const teamRouter = defineRouter('/api/team', [
   {
     method: 'post',
     path: '/invites',
-    access: ['head_brewer'],
+    access: 'team.manage',
     body: inviteSchema,
     handler: async (req, res) => {
       const invite = await auth.inviteTeammate(actor(req), req.body);
@@ -29,7 +29,7 @@ export const teamRouter = defineRouter('/api/team', [
   {
     method: 'patch',
     path: '/:userId',
-    access: ['head_brewer'],
+    access: 'team.manage',
     params: userParams,
     body: updateMemberSchema,
     handler: async (req, res) => {
@@ -44,7 +44,7 @@ export const breweryRouter = defineRouter('/api/brewery', [
   {
     method: 'get',
     path: '/',
-    access: 'signed-in',
+    access: 'brewery.read',
     handler: async (req, res) => {
       res.json(actor(req).brewery);
     },
@@ -52,7 +52,7 @@ export const breweryRouter = defineRouter('/api/brewery', [
   {
     method: 'patch',
     path: '/',
-    access: ['head_brewer'],
+    access: 'brewery.edit',
     body: brewerySettingsSchema,
     handler: async (req, res) => {
       const brewery = await auth.updateBrewery(actor(req).breweryId, req.body);
