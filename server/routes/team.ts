@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { idParam, inviteSchema, updateMemberSchema, brewerySettingsSchema } from '../../shared/schemas/auth';
 import { defineRouter, actor } from './define';
 import * as auth from '../services/auth';
-import { recordAudit } from '../services/audit';
+import { recordAudit, withAudit } from '../services/audit';
 
 const userParams = z.strictObject({ userId: idParam });
 
@@ -55,8 +55,9 @@ export const breweryRouter = defineRouter('/api/brewery', [
     access: 'brewery.edit',
     body: brewerySettingsSchema,
     handler: async (req, res) => {
-      const brewery = await auth.updateBrewery(actor(req).breweryId, req.body);
-      await recordAudit(req, 'brewery.settings', req.body);
+      const brewery = await withAudit(req, 'brewery.settings', req.body, (t) =>
+        auth.updateBrewery(actor(req).breweryId, req.body, t),
+      );
       res.json({ id: brewery.id, name: brewery.name, unitSystem: brewery.unitSystem, timeZone: brewery.timeZone });
     },
   },
