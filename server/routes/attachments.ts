@@ -1,6 +1,5 @@
 import type { Response } from 'express';
 import { defineRouter } from './define';
-import { BREWING_ROLES } from '../../shared/schemas/roles';
 import { attachmentRoutes, batchAttachmentRoutes } from '../../shared/contract/attachments';
 import * as attachments from '../services/attachments';
 import { recordAudit } from '../services/audit';
@@ -22,13 +21,13 @@ async function send(
 
 export const batchAttachmentsRouter = defineRouter('/api/batches', batchAttachmentRoutes, {
   list: {
-    access: BREWING_ROLES,
+    access: 'file.read',
     handler: async ({ user, params, res }) => {
       res.json(await attachments.listAttachments(user, params.batchId));
     },
   },
   upload: {
-    access: BREWING_ROLES,
+    access: 'file.upload',
     before: [attachments.receiveFile],
     handler: async ({ user, params, body, req, res }) => {
       res.status(201).json(await attachments.uploadAttachment(user, params.batchId, req.file, body.tastingNoteId));
@@ -39,15 +38,15 @@ export const batchAttachmentsRouter = defineRouter('/api/batches', batchAttachme
 /** Files are served to the brewery's own people only; the taproom sees photos of announced beers. */
 export const attachmentsRouter = defineRouter('/api/attachments', attachmentRoutes, {
   file: {
-    access: 'signed-in',
+    access: 'file.readShown',
     handler: ({ user, params, res }) => send(user, params.attachmentId, res, 'file'),
   },
   thumbnail: {
-    access: 'signed-in',
+    access: 'file.readShown',
     handler: ({ user, params, res }) => send(user, params.attachmentId, res, 'thumbnail'),
   },
   remove: {
-    access: ['head_brewer'],
+    access: 'file.remove',
     handler: async ({ user, params, req, res }) => {
       await attachments.removeAttachment(user, params.attachmentId);
       await recordAudit(req, 'attachment.remove', { attachmentId: params.attachmentId });

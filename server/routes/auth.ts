@@ -29,7 +29,7 @@ function authenticateLocal(req: Request, res: Response): Promise<Express.User | 
 
 export const authRouter = defineRouter('/api/auth', authRoutes, {
   signIn: {
-    access: 'public',
+    access: 'account.signIn',
     before: [signInLimiter],
     handler: async ({ body, req, res }) => {
       const user = await authenticateLocal(req, res);
@@ -43,7 +43,7 @@ export const authRouter = defineRouter('/api/auth', authRoutes, {
     },
   },
   signUp: {
-    access: 'public',
+    access: 'account.signUp',
     handler: async ({ body, req, res }) => {
       const user = await auth.signUp(body);
       const signedIn = await auth.sessionUser(user.id);
@@ -54,7 +54,7 @@ export const authRouter = defineRouter('/api/auth', authRoutes, {
     },
   },
   signOut: {
-    access: 'public',
+    access: 'account.signOut',
     handler: async ({ req, res }) => {
       if (req.user) await recordAudit(req, 'sign-out');
       await new Promise<void>((resolve) => req.logout(() => resolve()));
@@ -63,13 +63,13 @@ export const authRouter = defineRouter('/api/auth', authRoutes, {
     },
   },
   me: {
-    access: 'signed-in',
+    access: 'account.read',
     handler: async ({ user, res }) => {
       res.json(auth.me(user));
     },
   },
   changePassword: {
-    access: 'signed-in',
+    access: 'account.changePassword',
     // A stolen session must not be a way to guess the password without limit.
     before: [signInLimiter],
     handler: async ({ user, body, req, res }) => {
@@ -79,7 +79,7 @@ export const authRouter = defineRouter('/api/auth', authRoutes, {
     },
   },
   requestReset: {
-    access: 'public',
+    access: 'account.resetPassword',
     before: [signInLimiter],
     handler: async ({ body, req, res }) => {
       const user = await auth.requestPasswordReset(body.email, req.log);
@@ -96,14 +96,14 @@ export const authRouter = defineRouter('/api/auth', authRoutes, {
     },
   },
   checkReset: {
-    access: 'public',
+    access: 'account.resetPassword',
     handler: async ({ params, res }) => {
       await auth.checkResetLink(params.token);
       res.status(204).end();
     },
   },
   resetPassword: {
-    access: 'public',
+    access: 'account.resetPassword',
     handler: async ({ params, body, req, res }) => {
       const user = await auth.resetPassword(params.token, body.password);
       await recordAudit(req, 'password.reset', null, { userId: user.id, breweryId: user.breweryId });
@@ -111,13 +111,13 @@ export const authRouter = defineRouter('/api/auth', authRoutes, {
     },
   },
   describeInvite: {
-    access: 'public',
+    access: 'account.acceptInvite',
     handler: async ({ params, res }) => {
       res.json(await auth.describeInvite(params.token));
     },
   },
   acceptInvite: {
-    access: 'public',
+    access: 'account.acceptInvite',
     handler: async ({ params, body, req, res }) => {
       const user = await auth.acceptInvite(params.token, body);
       const signedIn = await auth.sessionUser(user.id);

@@ -1,6 +1,5 @@
 import type { Response } from 'express';
 import { defineRouter, type HandlerContext } from './define';
-import { BREWING_ROLES } from '../../shared/schemas/roles';
 import { batchRoutes } from '../../shared/contract/batches';
 import * as batches from '../services/batches';
 import { batchLogJson, refuseEntryChange, toLogEntry, verifyChain, writeMetaFromHeaders } from '../services/batch-log';
@@ -16,46 +15,46 @@ const refuseChange = ({ user, params }: Pick<EntryChange, 'user' | 'params'>) =>
 /** Batches and their logs: the brewing side only (the taproom manager reads released beers elsewhere). */
 export const batchesRouter = defineRouter('/api/batches', batchRoutes, {
   list: {
-    access: BREWING_ROLES,
+    access: 'batch.read',
     handler: async ({ user, query, res }) => {
       res.json(await batches.listBatches(user.breweryId, query));
     },
   },
   plan: {
-    access: ['head_brewer'],
+    access: 'batch.plan',
     handler: async ({ user, body, res }) => {
       const batch = await batches.planBatch(user, body);
       res.status(201).json(await batches.batchDetail(batch.breweryId, batch.id));
     },
   },
   planPreview: {
-    access: ['head_brewer'],
+    access: 'batch.plan',
     handler: async ({ user, query, res }) => {
       res.json(await batches.previewPlan(user.breweryId, query));
     },
   },
   get: {
-    access: BREWING_ROLES,
+    access: 'batch.read',
     handler: async ({ user, params, res }) => {
       res.json(await batches.batchDetail(user.breweryId, params.id));
     },
   },
   changeStatus: {
-    access: BREWING_ROLES,
+    access: 'batch.changeStatus',
     handler: async ({ user, params, body, res }) => {
       await batches.requestStatusChange(user, params.id, body);
       res.json(await batches.batchDetail(user.breweryId, params.id));
     },
   },
   moveToVessel: {
-    access: BREWING_ROLES,
+    access: 'batch.moveToVessel',
     handler: async ({ user, params, body, res }) => {
       const vessel = await batches.moveToVessel(user, params.id, body.vesselId);
       res.json({ id: vessel.id, name: vessel.name, currentBatchId: vessel.currentBatchId });
     },
   },
   log: {
-    access: BREWING_ROLES,
+    access: 'batch.read',
     handler: async ({ user, params, res }) => {
       const { body, head } = await batchLogJson(user.breweryId, params.id);
       // The head names the whole log (entries are append-only), so it tags the answer without hashing 60 KB of JSON.
@@ -66,25 +65,25 @@ export const batchesRouter = defineRouter('/api/batches', batchRoutes, {
     },
   },
   appendLog: {
-    access: BREWING_ROLES,
+    access: 'batch.logEntry',
     handler: async ({ user, params, body, req, res }) => {
       const meta = writeMetaFromHeaders((name) => req.get(name));
       const entry = await appendBatchLogEntry(user, params.id, body, meta);
       res.status(201).json(toLogEntry(entry));
     },
   },
-  patchEntry: { access: BREWING_ROLES, handler: refuseChange },
-  putEntry: { access: BREWING_ROLES, handler: refuseChange },
-  deleteEntry: { access: BREWING_ROLES, handler: refuseChange },
+  patchEntry: { access: 'batch.logEntry', handler: refuseChange },
+  putEntry: { access: 'batch.logEntry', handler: refuseChange },
+  deleteEntry: { access: 'batch.logEntry', handler: refuseChange },
   verifyLog: {
-    access: BREWING_ROLES,
+    access: 'batch.read',
     handler: async ({ user, params, res }) => {
       await batches.findBatch(user.breweryId, params.id);
       res.json(await verifyChain(params.id));
     },
   },
   signOff: {
-    access: ['head_brewer'],
+    access: 'batch.signOff',
     before: [signInLimiter],
     handler: async ({ user, params, body, req, res }) => {
       const meta = writeMetaFromHeaders((name) => req.get(name));

@@ -1,5 +1,4 @@
 import type { Request } from 'express';
-import { BREWING_ROLES } from '../../shared/schemas/roles';
 import { cellarRoutes, vesselRoutes } from '../../shared/contract/cellar';
 import { defineRouter } from './define';
 import * as cellar from '../services/cellar';
@@ -12,31 +11,31 @@ const meta = (req: Request) => writeMetaFromHeaders((name) => req.get(name));
 
 export const vesselsRouter = defineRouter('/api/vessels', vesselRoutes, {
   list: {
-    access: BREWING_ROLES,
+    access: 'vessel.read',
     handler: async ({ user, res }) => {
       res.json(await cellar.listVessels(user.breweryId));
     },
   },
   create: {
-    access: ['head_brewer'],
+    access: 'vessel.edit',
     handler: async ({ user, body, res }) => {
       res.status(201).json(await cellar.createVessel(user.breweryId, body));
     },
   },
   update: {
-    access: ['head_brewer'],
+    access: 'vessel.edit',
     handler: async ({ user, params, body, res }) => {
       res.json(await cellar.updateVessel(user.breweryId, params.vesselId, body));
     },
   },
   markClean: {
-    access: BREWING_ROLES,
+    access: 'vessel.clean',
     handler: async ({ user, params, res }) => {
       res.json(await cellar.markVesselClean(user.breweryId, params.vesselId));
     },
   },
   remove: {
-    access: ['head_brewer'],
+    access: 'vessel.edit',
     handler: async ({ user, params, res }) => {
       await cellar.deleteVessel(user.breweryId, params.vesselId);
       res.status(204).end();
@@ -46,67 +45,67 @@ export const vesselsRouter = defineRouter('/api/vessels', vesselRoutes, {
 
 export const cellarRouter = defineRouter('/api/cellar', cellarRoutes, {
   board: {
-    access: BREWING_ROLES,
+    access: 'cellar.read',
     handler: async ({ user, res }) => {
       res.json(await cellar.vesselBoard(user.breweryId));
     },
   },
   carbonation: {
-    access: BREWING_ROLES,
+    access: 'cellar.read',
     handler: async ({ user, query, res }) => {
       res.json(await cellar.carbonationFor(user.breweryId, query));
     },
   },
   batch: {
-    access: BREWING_ROLES,
+    access: 'cellar.read',
     handler: async ({ user, params, res }) => {
       res.json(await cellar.batchCellar(user.breweryId, params.batchId));
     },
   },
   savePlan: {
-    access: ['head_brewer'],
+    access: 'cellar.plan',
     handler: async ({ user, params, body, res }) => {
       res.json(await cellar.saveCellarPlan(user.breweryId, params.batchId, body));
     },
   },
   recordReading: {
-    access: BREWING_ROLES,
+    access: 'cellar.logReading',
     handler: async ({ user, params, body, req, res }) => {
       res.status(201).json(await recordReading(user, params.batchId, body, meta(req)));
     },
   },
   previewImport: {
-    access: BREWING_ROLES,
+    access: 'cellar.logReading',
     handler: async ({ user, params, body, res }) => {
       res.json(await importProbeCsv(user, params.batchId, body, null));
     },
   },
   importReadings: {
-    access: BREWING_ROLES,
+    access: 'cellar.logReading',
     handler: async ({ user, params, body, req, res }) => {
       res.status(201).json(await importProbeCsv(user, params.batchId, body, meta(req)));
     },
   },
   recordAction: {
-    access: BREWING_ROLES,
+    access: 'cellar.logAction',
     handler: async ({ user, params, body, req, res }) => {
       res.status(201).json(await cellar.recordAction(user, params.batchId, body, meta(req)));
     },
   },
   recordPackaging: {
-    access: BREWING_ROLES,
+    access: 'cellar.logPackaging',
     handler: async ({ user, params, body, req, res }) => {
       res.status(201).json(await recordPackaging(user, params.batchId, body, meta(req)));
     },
   },
   alerts: {
-    access: ['head_brewer'],
+    access: 'cellar.alerts',
     handler: async ({ user, res }) => {
       res.json(await listAlerts(user.breweryId));
     },
   },
   markAlertRead: {
-    access: ['head_brewer'],
+    access: 'cellar.alerts',
     handler: async ({ user, params, res }) => {
       await markAlertRead(user.breweryId, params.alertId);
       res.status(204).end();

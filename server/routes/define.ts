@@ -1,7 +1,8 @@
 import { Router, type Request, type RequestHandler, type Response } from 'express';
 import type { z } from 'zod';
 import type { BodyOut, Method, ParamsOut, QueryOut, ResponseOf, RouteContract } from '../../shared/contract/route';
-import { authorise, type Access } from '../middlewares/authorise';
+import { authorise } from '../middlewares/authorise';
+import type { Action } from '../../shared/policy';
 import { validate } from '../middlewares/validate';
 
 /** What a handler receives: the validated parts, the signed-in person and the raw request and response. */
@@ -17,7 +18,8 @@ export interface HandlerContext<C extends RouteContract> {
 }
 
 export interface RouteImplementation<C extends RouteContract> {
-  access: Access;
+  /** The policy action the route performs (shared/policy.ts decides who may). */
+  access: Action;
   /** Extra middleware between authorisation and validation (e.g. a rate limiter or an upload parser). */
   before?: RequestHandler[];
   handler: (ctx: HandlerContext<C>) => unknown;
@@ -26,7 +28,7 @@ export interface RouteImplementation<C extends RouteContract> {
 export interface RouteEntry {
   method: Method;
   path: string;
-  access: Access;
+  access: Action;
   hasBody: boolean;
   /** The route's validators, so the bad-input test can tell a refused request from an accepted one. */
   schemas: { params?: z.ZodType; query?: z.ZodType; body?: z.ZodType };

@@ -1,30 +1,29 @@
 import { ingredientRoutes } from '../../shared/contract/recipes';
-import { BREWING_ROLES } from '../../shared/schemas/roles';
 import { defineRouter } from './define';
 import * as ingredients from '../services/ingredients';
 import { recordAudit } from '../services/audit';
 
 export const ingredientsRouter = defineRouter('/api/ingredients', ingredientRoutes, {
   list: {
-    access: BREWING_ROLES,
+    access: 'ingredient.read',
     handler: async ({ user, query, res }) => {
       res.json(await ingredients.listIngredients(user.breweryId, query.kind));
     },
   },
   create: {
-    access: ['head_brewer'],
+    access: 'ingredient.edit',
     handler: async ({ user, body, res }) => {
       res.status(201).json(await ingredients.createIngredient(user.breweryId, body));
     },
   },
   update: {
-    access: ['head_brewer'],
+    access: 'ingredient.edit',
     handler: async ({ user, params, body, res }) => {
       res.json(await ingredients.updateIngredient(user.breweryId, params.ingredientId, body));
     },
   },
   remove: {
-    access: ['head_brewer'],
+    access: 'ingredient.edit',
     handler: async ({ user, params, req, res }) => {
       await ingredients.deleteIngredient(user.breweryId, params.ingredientId);
       await recordAudit(req, 'ingredient.remove', { ingredientId: params.ingredientId });

@@ -1,5 +1,4 @@
 import { recipeRoutes } from '../../shared/contract/recipes';
-import { BREWING_ROLES } from '../../shared/schemas/roles';
 import { defineRouter } from './define';
 import * as recipes from '../services/recipes';
 import { scaleVersion } from '../services/recipe-plans';
@@ -7,55 +6,55 @@ import { notFound } from '../errors';
 
 export const recipesRouter = defineRouter('/api/recipes', recipeRoutes, {
   list: {
-    access: BREWING_ROLES,
+    access: 'recipe.read',
     handler: async ({ user, res }) => {
       res.json(await recipes.listRecipes(user.breweryId));
     },
   },
   create: {
-    access: ['head_brewer'],
+    access: 'recipe.edit',
     handler: async ({ user, body, res }) => {
       res.status(201).json(await recipes.createRecipe(user, body));
     },
   },
   get: {
-    access: BREWING_ROLES,
+    access: 'recipe.read',
     handler: async ({ user, params, res }) => {
       res.json(await recipes.getRecipe(user.breweryId, params.recipeId));
     },
   },
   update: {
-    access: ['head_brewer'],
+    access: 'recipe.edit',
     handler: async ({ user, params, body, res }) => {
       res.json(await recipes.updateRecipe(user.breweryId, params.recipeId, body));
     },
   },
   addVersion: {
-    access: ['head_brewer'],
+    access: 'recipe.edit',
     handler: async ({ user, params, body, res }) => {
       res.status(201).json(await recipes.addVersion(user, params.recipeId, body));
     },
   },
   compare: {
-    access: BREWING_ROLES,
+    access: 'recipe.read',
     handler: async ({ user, params, query, res }) => {
       res.json(await recipes.compareVersions(user.breweryId, params.recipeId, query.a, query.b));
     },
   },
   getVersion: {
-    access: BREWING_ROLES,
+    access: 'recipe.read',
     handler: async ({ user, params, res }) => {
       res.json(await recipes.getVersion(user.breweryId, params.recipeId, params.versionId));
     },
   },
   updateVersion: {
-    access: ['head_brewer'],
+    access: 'recipe.edit',
     handler: async ({ user, params, body, res }) => {
       res.json(await recipes.updateVersion(user, params.recipeId, params.versionId, body));
     },
   },
   scale: {
-    access: BREWING_ROLES,
+    access: 'recipe.read',
     handler: async ({ user, params, query, res }) => {
       const s = await scaleVersion(user.breweryId, params.versionId, query);
       if (s.recipe.id !== params.recipeId) throw notFound('This recipe version');
@@ -74,7 +73,7 @@ export const recipesRouter = defineRouter('/api/recipes', recipeRoutes, {
     },
   },
   saveScaled: {
-    access: ['head_brewer'],
+    access: 'recipe.edit',
     handler: async ({ user, params, body, res }) => {
       res.status(201).json(await recipes.saveScaledVersion(user, params.recipeId, params.versionId, body));
     },

@@ -1,19 +1,18 @@
 import { defineRouter } from './define';
 import { reportRoutes } from '../../shared/contract/reports';
-import { BREWING_ROLES } from '../../shared/schemas/roles';
 import { lToHl, lToUsBbl } from '../../shared/brewing';
 import * as reports from '../services/reports';
 
 // The head brewer files the production figures; the assistant may read a recipe's batch history.
 export const reportsRouter = defineRouter('/api/reports', reportRoutes, {
   production: {
-    access: ['head_brewer'],
+    access: 'report.production.read',
     handler: async ({ user, query, res }) => {
       res.json(await reports.productionReport(user.brewery, query.month));
     },
   },
   productionCsv: {
-    access: ['head_brewer'],
+    access: 'report.production.read',
     handler: async ({ user, query, res }) => {
       const report = await reports.productionReport(user.brewery, query.month);
       res
@@ -23,7 +22,7 @@ export const reportsRouter = defineRouter('/api/reports', reportRoutes, {
     },
   },
   history: {
-    access: BREWING_ROLES,
+    access: 'report.history.read',
     handler: async ({ user, query, res }) => {
       res.json(await reports.batchHistory(user.breweryId, query.recipeId, query.limit));
     },

@@ -1,5 +1,4 @@
 import { defineRouter } from './define';
-import { BREWING_ROLES } from '../../shared/schemas/roles';
 import { releaseRoutes, taproomRoutes } from '../../shared/contract/taproom';
 import * as taproom from '../services/taproom';
 import * as release from '../services/release';
@@ -8,19 +7,19 @@ import { recordAudit } from '../services/audit';
 /** What every role reads, the taproom manager included: announced and released beers only. */
 export const taproomRouter = defineRouter('/api/taproom', taproomRoutes, {
   beers: {
-    access: 'signed-in',
+    access: 'taproom.read',
     handler: async ({ user, query, res }) => {
       res.json(await taproom.listBeers(user, query));
     },
   },
   beer: {
-    access: 'signed-in',
+    access: 'taproom.read',
     handler: async ({ user, params, res }) => {
       res.json(await taproom.beer(user, params.beerId));
     },
   },
   releases: {
-    access: BREWING_ROLES,
+    access: 'release.read',
     handler: async ({ user, res }) => {
       res.json(await release.releaseCandidates(user));
     },
@@ -30,19 +29,19 @@ export const taproomRouter = defineRouter('/api/taproom', taproomRoutes, {
 /** The head brewer's release of one batch, and taking it off tap when it runs out. */
 export const releaseRouter = defineRouter('/api/batches', releaseRoutes, {
   get: {
-    access: BREWING_ROLES,
+    access: 'release.read',
     handler: async ({ user, params, res }) => {
       res.json(await release.releaseDetail(user, params.batchId));
     },
   },
   saveSheet: {
-    access: ['head_brewer'],
+    access: 'release.manage',
     handler: async ({ user, params, body, res }) => {
       res.json(await release.saveReleaseSheet(user, params.batchId, body));
     },
   },
   publish: {
-    access: ['head_brewer'],
+    access: 'release.manage',
     handler: async ({ user, params, body, req, res }) => {
       const detail = await release.publishRelease(user, params.batchId, body);
       await recordAudit(req, 'batch.release', { batchId: detail.batch.id, abvPct: detail.numbers.abvPct });
@@ -50,7 +49,7 @@ export const releaseRouter = defineRouter('/api/batches', releaseRoutes, {
     },
   },
   offTap: {
-    access: ['head_brewer'],
+    access: 'release.manage',
     handler: async ({ user, params, req, res }) => {
       const detail = await release.takeOffTap(user, params.batchId);
       await recordAudit(req, 'batch.off_tap', { batchId: detail.batch.id });
@@ -58,7 +57,7 @@ export const releaseRouter = defineRouter('/api/batches', releaseRoutes, {
     },
   },
   backOnTap: {
-    access: ['head_brewer'],
+    access: 'release.manage',
     handler: async ({ user, params, req, res }) => {
       const detail = await release.putBackOnTap(user, params.batchId);
       await recordAudit(req, 'batch.back_on_tap', { batchId: detail.batch.id });

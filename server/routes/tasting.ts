@@ -1,5 +1,4 @@
 import { defineRouter, type HandlerContext } from './define';
-import { BREWING_ROLES } from '../../shared/schemas/roles';
 import { tastingRoutes } from '../../shared/contract/tasting';
 import * as tasting from '../services/tasting';
 
@@ -10,19 +9,19 @@ const appendOnly = ({ user, params }: Pick<NoteChange, 'user' | 'params'>) =>
 
 export const tastingRouter = defineRouter('/api/batches', tastingRoutes, {
   list: {
-    access: BREWING_ROLES,
+    access: 'tasting.read',
     handler: async ({ user, params, res }) => {
       res.json(await tasting.listTastingNotes(user, params.batchId));
     },
   },
   add: {
-    access: BREWING_ROLES,
+    access: 'tasting.write',
     handler: async ({ user, params, body, res }) => {
       const { note, created } = await tasting.addTastingNote(user, params.batchId, body);
       res.status(created ? 201 : 200).json(note);
     },
   },
-  patchNote: { access: BREWING_ROLES, handler: appendOnly },
-  putNote: { access: BREWING_ROLES, handler: appendOnly },
-  deleteNote: { access: BREWING_ROLES, handler: appendOnly },
+  patchNote: { access: 'tasting.write', handler: appendOnly },
+  putNote: { access: 'tasting.write', handler: appendOnly },
+  deleteNote: { access: 'tasting.write', handler: appendOnly },
 });

@@ -1,17 +1,17 @@
 import { breweryRoutes, teamRoutes } from '../../shared/contract/auth';
 import { defineRouter } from './define';
 import * as auth from '../services/auth';
-import { recordAudit } from '../services/audit';
+import { recordAudit, withAudit } from '../services/audit';
 
 export const teamRouter = defineRouter('/api/team', teamRoutes, {
   list: {
-    access: ['head_brewer'],
+    access: 'team.manage',
     handler: async ({ user, res }) => {
       res.json(await auth.teamMembers(user.breweryId));
     },
   },
   invite: {
-    access: ['head_brewer'],
+    access: 'team.manage',
     handler: async ({ user, body, req, res }) => {
       const invite = await auth.inviteTeammate(user, body);
       await recordAudit(req, 'invite.send', { email: body.email, role: body.role });
@@ -19,7 +19,7 @@ export const teamRouter = defineRouter('/api/team', teamRoutes, {
     },
   },
   updateMember: {
-    access: ['head_brewer'],
+    access: 'team.manage',
     handler: async ({ user, params, body, req, res }) => {
       const member = await auth.updateMember(user, params.userId, body);
       await recordAudit(req, body.role ? 'role.change' : 'access.change', { userId: member.id, ...body });
@@ -30,16 +30,17 @@ export const teamRouter = defineRouter('/api/team', teamRoutes, {
 
 export const breweryRouter = defineRouter('/api/brewery', breweryRoutes, {
   get: {
-    access: 'signed-in',
+    access: 'brewery.read',
     handler: async ({ user, res }) => {
       res.json(user.brewery);
     },
   },
   update: {
-    access: ['head_brewer'],
+    access: 'brewery.edit',
     handler: async ({ user, body, req, res }) => {
-      const brewery = await auth.updateBrewery(user.breweryId, body);
-      await recordAudit(req, 'brewery.settings', body);
+      const brewery = await withAudit(req, 'brewery.settings', body, (t) =>
+        auth.updateBrewery(user.breweryId, body, t),
+      );
       res.json({ id: brewery.id, name: brewery.name, unitSystem: brewery.unitSystem, timeZone: brewery.timeZone });
     },
   },
