@@ -1,7 +1,6 @@
 import { z } from 'zod';
 import type { Request, Response } from 'express';
 import { defineRouter, actor } from './define';
-import { BREWING_ROLES } from '../../shared/schemas/roles';
 import { idParam } from '../../shared/schemas/taproom';
 import * as attachments from '../services/attachments';
 import { recordAudit } from '../services/audit';
@@ -25,7 +24,7 @@ export const batchAttachmentsRouter = defineRouter('/api/batches', [
   {
     method: 'get',
     path: '/:batchId/attachments',
-    access: BREWING_ROLES,
+    access: 'file.read',
     params: batchParams,
     handler: async (req, res) => {
       res.json(await attachments.listAttachments(actor(req), Number(req.params.batchId)));
@@ -34,7 +33,7 @@ export const batchAttachmentsRouter = defineRouter('/api/batches', [
   {
     method: 'post',
     path: '/:batchId/attachments',
-    access: BREWING_ROLES,
+    access: 'file.upload',
     params: batchParams,
     before: [attachments.receiveFile],
     body: uploadFields,
@@ -52,21 +51,21 @@ export const attachmentsRouter = defineRouter('/api/attachments', [
   {
     method: 'get',
     path: '/:attachmentId/file',
-    access: 'signed-in',
+    access: 'file.readShown',
     params: attachmentParams,
     handler: (req, res) => send(req, res, 'file'),
   },
   {
     method: 'get',
     path: '/:attachmentId/thumbnail',
-    access: 'signed-in',
+    access: 'file.readShown',
     params: attachmentParams,
     handler: (req, res) => send(req, res, 'thumbnail'),
   },
   {
     method: 'delete',
     path: '/:attachmentId',
-    access: ['head_brewer'],
+    access: 'file.remove',
     params: attachmentParams,
     handler: async (req, res) => {
       await attachments.removeAttachment(actor(req), Number(req.params.attachmentId));

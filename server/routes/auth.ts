@@ -42,7 +42,7 @@ export const authRouter = defineRouter('/api/auth', [
   {
     method: 'post',
     path: '/sign-in',
-    access: 'public',
+    access: 'account.signIn',
     before: [signInLimiter],
     body: signInSchema,
     handler: async (req, res) => {
@@ -59,7 +59,7 @@ export const authRouter = defineRouter('/api/auth', [
   {
     method: 'post',
     path: '/sign-up',
-    access: 'public',
+    access: 'account.signUp',
     body: signUpSchema,
     handler: async (req, res) => {
       const user = await auth.signUp(req.body);
@@ -73,7 +73,7 @@ export const authRouter = defineRouter('/api/auth', [
   {
     method: 'post',
     path: '/sign-out',
-    access: 'public',
+    access: 'account.signOut',
     handler: async (req, res) => {
       if (req.user) await recordAudit(req, 'sign-out');
       await new Promise<void>((resolve) => req.logout(() => resolve()));
@@ -84,7 +84,7 @@ export const authRouter = defineRouter('/api/auth', [
   {
     method: 'get',
     path: '/me',
-    access: 'signed-in',
+    access: 'account.read',
     handler: async (req, res) => {
       res.json(auth.me(actor(req)));
     },
@@ -92,7 +92,7 @@ export const authRouter = defineRouter('/api/auth', [
   {
     method: 'post',
     path: '/password',
-    access: 'signed-in',
+    access: 'account.changePassword',
     body: changePasswordSchema,
     // A stolen session must not be a way to guess the password without limit.
     before: [signInLimiter],
@@ -105,7 +105,7 @@ export const authRouter = defineRouter('/api/auth', [
   {
     method: 'post',
     path: '/reset-request',
-    access: 'public',
+    access: 'account.resetPassword',
     before: [signInLimiter],
     body: resetRequestSchema,
     handler: async (req, res) => {
@@ -125,7 +125,7 @@ export const authRouter = defineRouter('/api/auth', [
   {
     method: 'get',
     path: '/reset/:token',
-    access: 'public',
+    access: 'account.resetPassword',
     params: tokenParams,
     handler: async (req, res) => {
       await auth.checkResetLink(req.params.token as string);
@@ -135,7 +135,7 @@ export const authRouter = defineRouter('/api/auth', [
   {
     method: 'post',
     path: '/reset/:token',
-    access: 'public',
+    access: 'account.resetPassword',
     params: tokenParams,
     body: resetPasswordSchema,
     handler: async (req, res) => {
@@ -147,7 +147,7 @@ export const authRouter = defineRouter('/api/auth', [
   {
     method: 'get',
     path: '/invites/:token',
-    access: 'public',
+    access: 'account.acceptInvite',
     params: tokenParams,
     handler: async (req, res) => {
       res.json(await auth.describeInvite(req.params.token as string));
@@ -156,7 +156,7 @@ export const authRouter = defineRouter('/api/auth', [
   {
     method: 'post',
     path: '/invites/:token',
-    access: 'public',
+    access: 'account.acceptInvite',
     params: tokenParams,
     body: acceptInviteSchema,
     handler: async (req, res) => {

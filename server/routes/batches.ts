@@ -1,6 +1,5 @@
 import { z } from 'zod';
 import { defineRouter, actor } from './define';
-import { BREWING_ROLES } from '../../shared/schemas/roles';
 import {
   batchIdParams,
   batchListQuery,
@@ -37,7 +36,7 @@ export const batchesRouter = defineRouter('/api/batches', [
   {
     method: 'get',
     path: '/',
-    access: BREWING_ROLES,
+    access: 'batch.read',
     query: batchListQuery,
     handler: async (req, res) => {
       res.json(await batches.listBatches(actor(req).breweryId, req.query as unknown as z.infer<typeof batchListQuery>));
@@ -46,7 +45,7 @@ export const batchesRouter = defineRouter('/api/batches', [
   {
     method: 'post',
     path: '/',
-    access: ['head_brewer'],
+    access: 'batch.plan',
     body: createBatchSchema,
     handler: async (req, res) => {
       const batch = await batches.planBatch(actor(req), req.body);
@@ -56,7 +55,7 @@ export const batchesRouter = defineRouter('/api/batches', [
   {
     method: 'get',
     path: '/plan-preview',
-    access: ['head_brewer'],
+    access: 'batch.plan',
     query: planPreviewQuery,
     handler: async (req, res) => {
       res.json(await batches.previewPlan(actor(req).breweryId, req.query as unknown as PlanPreviewQuery));
@@ -65,7 +64,7 @@ export const batchesRouter = defineRouter('/api/batches', [
   {
     method: 'get',
     path: '/:id',
-    access: BREWING_ROLES,
+    access: 'batch.read',
     params: batchIdParams,
     handler: async (req, res) => {
       res.json(await batches.batchDetail(actor(req).breweryId, Number(req.params.id)));
@@ -74,7 +73,7 @@ export const batchesRouter = defineRouter('/api/batches', [
   {
     method: 'post',
     path: '/:id/status',
-    access: BREWING_ROLES,
+    access: 'batch.changeStatus',
     params: batchIdParams,
     body: changeStatusSchema,
     handler: async (req, res) => {
@@ -85,7 +84,7 @@ export const batchesRouter = defineRouter('/api/batches', [
   {
     method: 'put',
     path: '/:id/vessel',
-    access: BREWING_ROLES,
+    access: 'batch.moveToVessel',
     params: batchIdParams,
     body: z.strictObject({ vesselId: id }),
     handler: async (req, res) => {
@@ -96,7 +95,7 @@ export const batchesRouter = defineRouter('/api/batches', [
   {
     method: 'get',
     path: '/:id/log',
-    access: BREWING_ROLES,
+    access: 'batch.read',
     params: batchIdParams,
     handler: async (req, res) => {
       const { body, head } = await batchLogJson(actor(req).breweryId, Number(req.params.id));
@@ -108,7 +107,7 @@ export const batchesRouter = defineRouter('/api/batches', [
   {
     method: 'post',
     path: '/:id/log',
-    access: BREWING_ROLES,
+    access: 'batch.logEntry',
     params: batchIdParams,
     body: logEntryInputSchema,
     handler: async (req, res) => {
@@ -117,13 +116,13 @@ export const batchesRouter = defineRouter('/api/batches', [
       res.status(201).json(toLogEntry(entry));
     },
   },
-  { method: 'patch', path: '/:id/log/:entryId', access: BREWING_ROLES, params: entryParams, handler: refuseChange },
-  { method: 'put', path: '/:id/log/:entryId', access: BREWING_ROLES, params: entryParams, handler: refuseChange },
-  { method: 'delete', path: '/:id/log/:entryId', access: BREWING_ROLES, params: entryParams, handler: refuseChange },
+  { method: 'patch', path: '/:id/log/:entryId', access: 'batch.logEntry', params: entryParams, handler: refuseChange },
+  { method: 'put', path: '/:id/log/:entryId', access: 'batch.logEntry', params: entryParams, handler: refuseChange },
+  { method: 'delete', path: '/:id/log/:entryId', access: 'batch.logEntry', params: entryParams, handler: refuseChange },
   {
     method: 'get',
     path: '/:id/log/verify',
-    access: BREWING_ROLES,
+    access: 'batch.read',
     params: batchIdParams,
     handler: async (req, res) => {
       await batches.findBatch(actor(req).breweryId, Number(req.params.id));
@@ -133,7 +132,7 @@ export const batchesRouter = defineRouter('/api/batches', [
   {
     method: 'post',
     path: '/:id/sign-off',
-    access: ['head_brewer'],
+    access: 'batch.signOff',
     before: [signInLimiter],
     params: batchIdParams,
     body: signOffSchema,

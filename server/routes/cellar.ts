@@ -1,6 +1,5 @@
 import { z } from 'zod';
 import { idParam } from '../../shared/schemas/auth';
-import { BREWING_ROLES } from '../../shared/schemas/roles';
 import {
   actionEntrySchema,
   carbonationQuerySchema,
@@ -28,7 +27,7 @@ export const vesselsRouter = defineRouter('/api/vessels', [
   {
     method: 'get',
     path: '/',
-    access: BREWING_ROLES,
+    access: 'vessel.read',
     handler: async (req, res) => {
       res.json(await cellar.listVessels(actor(req).breweryId));
     },
@@ -36,7 +35,7 @@ export const vesselsRouter = defineRouter('/api/vessels', [
   {
     method: 'post',
     path: '/',
-    access: ['head_brewer'],
+    access: 'vessel.edit',
     body: vesselInputSchema,
     handler: async (req, res) => {
       res.status(201).json(await cellar.createVessel(actor(req).breweryId, req.body));
@@ -45,7 +44,7 @@ export const vesselsRouter = defineRouter('/api/vessels', [
   {
     method: 'put',
     path: '/:vesselId',
-    access: ['head_brewer'],
+    access: 'vessel.edit',
     params: vesselParams,
     body: vesselInputSchema,
     handler: async (req, res) => {
@@ -55,7 +54,7 @@ export const vesselsRouter = defineRouter('/api/vessels', [
   {
     method: 'post',
     path: '/:vesselId/clean',
-    access: BREWING_ROLES,
+    access: 'vessel.clean',
     params: vesselParams,
     handler: async (req, res) => {
       res.json(await cellar.markVesselClean(actor(req).breweryId, vesselId(req)));
@@ -64,7 +63,7 @@ export const vesselsRouter = defineRouter('/api/vessels', [
   {
     method: 'delete',
     path: '/:vesselId',
-    access: ['head_brewer'],
+    access: 'vessel.edit',
     params: vesselParams,
     handler: async (req, res) => {
       await cellar.deleteVessel(actor(req).breweryId, vesselId(req));
@@ -77,7 +76,7 @@ export const cellarRouter = defineRouter('/api/cellar', [
   {
     method: 'get',
     path: '/board',
-    access: BREWING_ROLES,
+    access: 'cellar.read',
     handler: async (req, res) => {
       res.json(await cellar.vesselBoard(actor(req).breweryId));
     },
@@ -85,7 +84,7 @@ export const cellarRouter = defineRouter('/api/cellar', [
   {
     method: 'get',
     path: '/carbonation',
-    access: BREWING_ROLES,
+    access: 'cellar.read',
     query: carbonationQuerySchema,
     handler: async (req, res) => {
       res.json(
@@ -99,7 +98,7 @@ export const cellarRouter = defineRouter('/api/cellar', [
   {
     method: 'get',
     path: '/batches/:batchId',
-    access: BREWING_ROLES,
+    access: 'cellar.read',
     params: batchParams,
     handler: async (req, res) => {
       res.json(await cellar.batchCellar(actor(req).breweryId, batchId(req)));
@@ -108,7 +107,7 @@ export const cellarRouter = defineRouter('/api/cellar', [
   {
     method: 'put',
     path: '/batches/:batchId/plan',
-    access: ['head_brewer'],
+    access: 'cellar.plan',
     params: batchParams,
     body: cellarPlanSchema,
     handler: async (req, res) => {
@@ -118,7 +117,7 @@ export const cellarRouter = defineRouter('/api/cellar', [
   {
     method: 'post',
     path: '/batches/:batchId/readings',
-    access: BREWING_ROLES,
+    access: 'cellar.logReading',
     params: batchParams,
     body: readingEntrySchema,
     handler: async (req, res) => {
@@ -128,7 +127,7 @@ export const cellarRouter = defineRouter('/api/cellar', [
   {
     method: 'post',
     path: '/batches/:batchId/readings/preview',
-    access: BREWING_ROLES,
+    access: 'cellar.logReading',
     params: batchParams,
     body: probeImportSchema,
     handler: async (req, res) => {
@@ -138,7 +137,7 @@ export const cellarRouter = defineRouter('/api/cellar', [
   {
     method: 'post',
     path: '/batches/:batchId/readings/import',
-    access: BREWING_ROLES,
+    access: 'cellar.logReading',
     params: batchParams,
     body: probeImportSchema,
     handler: async (req, res) => {
@@ -148,7 +147,7 @@ export const cellarRouter = defineRouter('/api/cellar', [
   {
     method: 'post',
     path: '/batches/:batchId/actions',
-    access: BREWING_ROLES,
+    access: 'cellar.logAction',
     params: batchParams,
     body: actionEntrySchema,
     handler: async (req, res) => {
@@ -158,7 +157,7 @@ export const cellarRouter = defineRouter('/api/cellar', [
   {
     method: 'post',
     path: '/batches/:batchId/packaging',
-    access: BREWING_ROLES,
+    access: 'cellar.logPackaging',
     params: batchParams,
     body: packagingEntrySchema,
     handler: async (req, res) => {
@@ -168,7 +167,7 @@ export const cellarRouter = defineRouter('/api/cellar', [
   {
     method: 'get',
     path: '/alerts',
-    access: ['head_brewer'],
+    access: 'cellar.alerts',
     handler: async (req, res) => {
       res.json(await listAlerts(actor(req).breweryId));
     },
@@ -176,7 +175,7 @@ export const cellarRouter = defineRouter('/api/cellar', [
   {
     method: 'post',
     path: '/alerts/:alertId/read',
-    access: ['head_brewer'],
+    access: 'cellar.alerts',
     params: alertParams,
     handler: async (req, res) => {
       await markAlertRead(actor(req).breweryId, Number(req.params.alertId));

@@ -1,6 +1,7 @@
 import { Router, type Request, type Response } from 'express';
 import type { z } from 'zod';
-import { authorise, type Access } from '../middlewares/authorise';
+import { authorise } from '../middlewares/authorise';
+import type { Action } from '../../shared/policy';
 import { validate } from '../middlewares/validate';
 import type { RequestHandler } from 'express';
 
@@ -10,7 +11,8 @@ export interface RouteDef {
   method: Method;
   /** Path relative to the router's base, Express syntax (e.g. '/:id'). */
   path: string;
-  access: Access;
+  /** The policy action the route performs (shared/policy.ts decides who may). */
+  access: Action;
   params?: z.ZodType;
   query?: z.ZodType;
   body?: z.ZodType;
@@ -22,7 +24,7 @@ export interface RouteDef {
 export interface RouteEntry {
   method: Method;
   path: string;
-  access: Access;
+  access: Action;
   hasBody: boolean;
   /** The route's validators, so the bad-input test can tell a refused request from an accepted one. */
   schemas: { params?: z.ZodType; query?: z.ZodType; body?: z.ZodType };

@@ -1,6 +1,5 @@
 import { z } from 'zod';
 import { equipmentSchema, idParam } from '../../shared/schemas/recipes';
-import { BREWING_ROLES } from '../../shared/schemas/roles';
 import { defineRouter, actor } from './define';
 import * as equipment from '../services/equipment';
 import { recordAudit } from '../services/audit';
@@ -11,7 +10,7 @@ export const equipmentRouter = defineRouter('/api/equipment', [
   {
     method: 'get',
     path: '/',
-    access: BREWING_ROLES,
+    access: 'equipment.read',
     handler: async (req, res) => {
       res.json(await equipment.listEquipment(actor(req).breweryId));
     },
@@ -19,7 +18,7 @@ export const equipmentRouter = defineRouter('/api/equipment', [
   {
     method: 'post',
     path: '/',
-    access: ['head_brewer'],
+    access: 'equipment.edit',
     body: equipmentSchema,
     handler: async (req, res) => {
       res.status(201).json(await equipment.createEquipment(actor(req).breweryId, req.body));
@@ -28,7 +27,7 @@ export const equipmentRouter = defineRouter('/api/equipment', [
   {
     method: 'put',
     path: '/:equipmentId',
-    access: ['head_brewer'],
+    access: 'equipment.edit',
     params,
     body: equipmentSchema,
     handler: async (req, res) => {
@@ -38,7 +37,7 @@ export const equipmentRouter = defineRouter('/api/equipment', [
   {
     method: 'delete',
     path: '/:equipmentId',
-    access: ['head_brewer'],
+    access: 'equipment.edit',
     params,
     handler: async (req, res) => {
       await equipment.deleteEquipment(actor(req).breweryId, Number(req.params.equipmentId));

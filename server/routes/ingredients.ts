@@ -1,6 +1,5 @@
 import { z } from 'zod';
 import { idParam, ingredientQuerySchema, ingredientSchema } from '../../shared/schemas/recipes';
-import { BREWING_ROLES } from '../../shared/schemas/roles';
 import { defineRouter, actor } from './define';
 import * as ingredients from '../services/ingredients';
 import { recordAudit } from '../services/audit';
@@ -11,7 +10,7 @@ export const ingredientsRouter = defineRouter('/api/ingredients', [
   {
     method: 'get',
     path: '/',
-    access: BREWING_ROLES,
+    access: 'ingredient.read',
     query: ingredientQuerySchema,
     handler: async (req, res) => {
       const { kind } = req.query as z.infer<typeof ingredientQuerySchema>;
@@ -21,7 +20,7 @@ export const ingredientsRouter = defineRouter('/api/ingredients', [
   {
     method: 'post',
     path: '/',
-    access: ['head_brewer'],
+    access: 'ingredient.edit',
     body: ingredientSchema,
     handler: async (req, res) => {
       res.status(201).json(await ingredients.createIngredient(actor(req).breweryId, req.body));
@@ -30,7 +29,7 @@ export const ingredientsRouter = defineRouter('/api/ingredients', [
   {
     method: 'put',
     path: '/:ingredientId',
-    access: ['head_brewer'],
+    access: 'ingredient.edit',
     params,
     body: ingredientSchema,
     handler: async (req, res) => {
@@ -40,7 +39,7 @@ export const ingredientsRouter = defineRouter('/api/ingredients', [
   {
     method: 'delete',
     path: '/:ingredientId',
-    access: ['head_brewer'],
+    access: 'ingredient.edit',
     params,
     handler: async (req, res) => {
       await ingredients.deleteIngredient(actor(req).breweryId, Number(req.params.ingredientId));

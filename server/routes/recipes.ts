@@ -8,7 +8,6 @@ import {
   scaleQuerySchema,
   updateRecipeSchema,
 } from '../../shared/schemas/recipes';
-import { BREWING_ROLES } from '../../shared/schemas/roles';
 import { defineRouter, actor } from './define';
 import * as recipes from '../services/recipes';
 import { scaleVersion } from '../services/recipe-plans';
@@ -25,7 +24,7 @@ export const recipesRouter = defineRouter('/api/recipes', [
   {
     method: 'get',
     path: '/',
-    access: BREWING_ROLES,
+    access: 'recipe.read',
     handler: async (req, res) => {
       res.json(await recipes.listRecipes(actor(req).breweryId));
     },
@@ -33,7 +32,7 @@ export const recipesRouter = defineRouter('/api/recipes', [
   {
     method: 'post',
     path: '/',
-    access: ['head_brewer'],
+    access: 'recipe.edit',
     body: createRecipeSchema,
     handler: async (req, res) => {
       res.status(201).json(await recipes.createRecipe(actor(req), req.body));
@@ -42,7 +41,7 @@ export const recipesRouter = defineRouter('/api/recipes', [
   {
     method: 'get',
     path: '/:recipeId',
-    access: BREWING_ROLES,
+    access: 'recipe.read',
     params: recipeParams,
     handler: async (req, res) => {
       res.json(await recipes.getRecipe(actor(req).breweryId, ids(req).recipeId));
@@ -51,7 +50,7 @@ export const recipesRouter = defineRouter('/api/recipes', [
   {
     method: 'patch',
     path: '/:recipeId',
-    access: ['head_brewer'],
+    access: 'recipe.edit',
     params: recipeParams,
     body: updateRecipeSchema,
     handler: async (req, res) => {
@@ -61,7 +60,7 @@ export const recipesRouter = defineRouter('/api/recipes', [
   {
     method: 'post',
     path: '/:recipeId/versions',
-    access: ['head_brewer'],
+    access: 'recipe.edit',
     params: recipeParams,
     body: saveVersionSchema,
     handler: async (req, res) => {
@@ -71,7 +70,7 @@ export const recipesRouter = defineRouter('/api/recipes', [
   {
     method: 'get',
     path: '/:recipeId/compare',
-    access: BREWING_ROLES,
+    access: 'recipe.read',
     params: recipeParams,
     query: compareQuerySchema,
     handler: async (req, res) => {
@@ -82,7 +81,7 @@ export const recipesRouter = defineRouter('/api/recipes', [
   {
     method: 'get',
     path: '/:recipeId/versions/:versionId',
-    access: BREWING_ROLES,
+    access: 'recipe.read',
     params: versionParams,
     handler: async (req, res) => {
       const { recipeId, versionId } = ids(req);
@@ -92,7 +91,7 @@ export const recipesRouter = defineRouter('/api/recipes', [
   {
     method: 'patch',
     path: '/:recipeId/versions/:versionId',
-    access: ['head_brewer'],
+    access: 'recipe.edit',
     params: versionParams,
     body: saveVersionSchema,
     handler: async (req, res) => {
@@ -103,7 +102,7 @@ export const recipesRouter = defineRouter('/api/recipes', [
   {
     method: 'get',
     path: '/:recipeId/versions/:versionId/scale',
-    access: BREWING_ROLES,
+    access: 'recipe.read',
     params: versionParams,
     query: scaleQuerySchema,
     handler: async (req, res) => {
@@ -127,7 +126,7 @@ export const recipesRouter = defineRouter('/api/recipes', [
   {
     method: 'post',
     path: '/:recipeId/versions/:versionId/scaled',
-    access: ['head_brewer'],
+    access: 'recipe.edit',
     params: versionParams,
     body: saveScaledSchema,
     handler: async (req, res) => {

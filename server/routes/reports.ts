@@ -1,7 +1,6 @@
 import type { z } from 'zod';
 import { defineRouter, actor } from './define';
 import { historyQuery, productionQuery } from '../../shared/schemas/reports';
-import { BREWING_ROLES } from '../../shared/schemas/roles';
 import { lToHl, lToUsBbl } from '../../shared/brewing';
 import * as reports from '../services/reports';
 
@@ -10,7 +9,7 @@ export const reportsRouter = defineRouter('/api/reports', [
   {
     method: 'get',
     path: '/production',
-    access: ['head_brewer'],
+    access: 'report.production.read',
     query: productionQuery,
     handler: async (req, res) => {
       const { month } = req.query as unknown as z.infer<typeof productionQuery>;
@@ -20,7 +19,7 @@ export const reportsRouter = defineRouter('/api/reports', [
   {
     method: 'get',
     path: '/production/csv',
-    access: ['head_brewer'],
+    access: 'report.production.read',
     query: productionQuery,
     handler: async (req, res) => {
       const { month } = req.query as unknown as z.infer<typeof productionQuery>;
@@ -34,7 +33,7 @@ export const reportsRouter = defineRouter('/api/reports', [
   {
     method: 'get',
     path: '/history',
-    access: BREWING_ROLES,
+    access: 'report.history.read',
     query: historyQuery,
     handler: async (req, res) => {
       const { recipeId, limit } = req.query as unknown as z.infer<typeof historyQuery>;

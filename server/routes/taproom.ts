@@ -1,6 +1,5 @@
 import { z } from 'zod';
 import { defineRouter, actor } from './define';
-import { BREWING_ROLES } from '../../shared/schemas/roles';
 import { idParam, publishReleaseSchema, releaseSheetSchema, taproomListQuery } from '../../shared/schemas/taproom';
 import * as taproom from '../services/taproom';
 import * as release from '../services/release';
@@ -14,7 +13,7 @@ export const taproomRouter = defineRouter('/api/taproom', [
   {
     method: 'get',
     path: '/beers',
-    access: 'signed-in',
+    access: 'taproom.read',
     query: taproomListQuery,
     handler: async (req, res) => {
       res.json(await taproom.listBeers(actor(req), req.query as z.infer<typeof taproomListQuery>));
@@ -23,7 +22,7 @@ export const taproomRouter = defineRouter('/api/taproom', [
   {
     method: 'get',
     path: '/beers/:beerId',
-    access: 'signed-in',
+    access: 'taproom.read',
     params: beerParams,
     handler: async (req, res) => {
       res.json(await taproom.beer(actor(req), Number(req.params.beerId)));
@@ -32,7 +31,7 @@ export const taproomRouter = defineRouter('/api/taproom', [
   {
     method: 'get',
     path: '/releases',
-    access: BREWING_ROLES,
+    access: 'release.read',
     handler: async (req, res) => {
       res.json(await release.releaseCandidates(actor(req)));
     },
@@ -44,7 +43,7 @@ export const releaseRouter = defineRouter('/api/batches', [
   {
     method: 'get',
     path: '/:batchId/release',
-    access: BREWING_ROLES,
+    access: 'release.read',
     params: batchParams,
     handler: async (req, res) => {
       res.json(await release.releaseDetail(actor(req), Number(req.params.batchId)));
@@ -53,7 +52,7 @@ export const releaseRouter = defineRouter('/api/batches', [
   {
     method: 'put',
     path: '/:batchId/release',
-    access: ['head_brewer'],
+    access: 'release.manage',
     params: batchParams,
     body: releaseSheetSchema,
     handler: async (req, res) => {
@@ -63,7 +62,7 @@ export const releaseRouter = defineRouter('/api/batches', [
   {
     method: 'post',
     path: '/:batchId/release/publish',
-    access: ['head_brewer'],
+    access: 'release.manage',
     params: batchParams,
     body: publishReleaseSchema,
     handler: async (req, res) => {
@@ -75,7 +74,7 @@ export const releaseRouter = defineRouter('/api/batches', [
   {
     method: 'post',
     path: '/:batchId/release/off-tap',
-    access: ['head_brewer'],
+    access: 'release.manage',
     params: batchParams,
     handler: async (req, res) => {
       const detail = await release.takeOffTap(actor(req), Number(req.params.batchId));
@@ -86,7 +85,7 @@ export const releaseRouter = defineRouter('/api/batches', [
   {
     method: 'post',
     path: '/:batchId/release/back-on-tap',
-    access: ['head_brewer'],
+    access: 'release.manage',
     params: batchParams,
     handler: async (req, res) => {
       const detail = await release.putBackOnTap(actor(req), Number(req.params.batchId));

@@ -1,7 +1,6 @@
 import { z } from 'zod';
 import { defineRouter, actor } from './define';
 import type { Request } from 'express';
-import { BREWING_ROLES } from '../../shared/schemas/roles';
 import { idParam } from '../../shared/schemas/taproom';
 import { tastingNoteInputSchema } from '../../shared/schemas/tasting';
 import * as tasting from '../services/tasting';
@@ -16,7 +15,7 @@ export const tastingRouter = defineRouter('/api/batches', [
   {
     method: 'get',
     path: '/:batchId/tasting-notes',
-    access: BREWING_ROLES,
+    access: 'tasting.read',
     params: batchParams,
     handler: async (req, res) => {
       res.json(await tasting.listTastingNotes(actor(req), Number(req.params.batchId)));
@@ -25,7 +24,7 @@ export const tastingRouter = defineRouter('/api/batches', [
   {
     method: 'post',
     path: '/:batchId/tasting-notes',
-    access: BREWING_ROLES,
+    access: 'tasting.write',
     params: batchParams,
     body: tastingNoteInputSchema,
     handler: async (req, res) => {
@@ -36,21 +35,21 @@ export const tastingRouter = defineRouter('/api/batches', [
   {
     method: 'patch',
     path: '/:batchId/tasting-notes/:noteId',
-    access: BREWING_ROLES,
+    access: 'tasting.write',
     params: noteParams,
     handler: appendOnly,
   },
   {
     method: 'put',
     path: '/:batchId/tasting-notes/:noteId',
-    access: BREWING_ROLES,
+    access: 'tasting.write',
     params: noteParams,
     handler: appendOnly,
   },
   {
     method: 'delete',
     path: '/:batchId/tasting-notes/:noteId',
-    access: BREWING_ROLES,
+    access: 'tasting.write',
     params: noteParams,
     handler: appendOnly,
   },

@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { idParam, inviteSchema, updateMemberSchema, brewerySettingsSchema } from '../../shared/schemas/auth';
 import { defineRouter, actor } from './define';
 import * as auth from '../services/auth';
-import { recordAudit } from '../services/audit';
+import { recordAudit, withAudit } from '../services/audit';
 
 const userParams = z.strictObject({ userId: idParam });
 
@@ -10,7 +10,7 @@ export const teamRouter = defineRouter('/api/team', [
   {
     method: 'get',
     path: '/',
-    access: ['head_brewer'],
+    access: 'team.manage',
     handler: async (req, res) => {
       res.json(await auth.teamMembers(actor(req).breweryId));
     },
@@ -18,7 +18,7 @@ export const teamRouter = defineRouter('/api/team', [
   {
     method: 'post',
     path: '/invites',
-    access: ['head_brewer'],
+    access: 'team.manage',
     body: inviteSchema,
     handler: async (req, res) => {
       const invite = await auth.inviteTeammate(actor(req), req.body);
@@ -29,7 +29,7 @@ export const teamRouter = defineRouter('/api/team', [
   {
     method: 'patch',
     path: '/:userId',
-    access: ['head_brewer'],
+    access: 'team.manage',
     params: userParams,
     body: updateMemberSchema,
     handler: async (req, res) => {
@@ -44,7 +44,7 @@ export const breweryRouter = defineRouter('/api/brewery', [
   {
     method: 'get',
     path: '/',
-    access: 'signed-in',
+    access: 'brewery.read',
     handler: async (req, res) => {
       res.json(actor(req).brewery);
     },
@@ -52,11 +52,12 @@ export const breweryRouter = defineRouter('/api/brewery', [
   {
     method: 'patch',
     path: '/',
-    access: ['head_brewer'],
+    access: 'brewery.edit',
     body: brewerySettingsSchema,
     handler: async (req, res) => {
-      const brewery = await auth.updateBrewery(actor(req).breweryId, req.body);
-      await recordAudit(req, 'brewery.settings', req.body);
+      const brewery = await withAudit(req, 'brewery.settings', req.body, (t) =>
+        auth.updateBrewery(actor(req).breweryId, req.body, t),
+      );
       res.json({ id: brewery.id, name: brewery.name, unitSystem: brewery.unitSystem, timeZone: brewery.timeZone });
     },
   },

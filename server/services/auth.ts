@@ -301,8 +301,12 @@ export async function updateMember(head: Express.User, userId: number, input: Up
   return user;
 }
 
-export async function updateBrewery(breweryId: number, input: BrewerySettingsInput): Promise<Brewery> {
-  const brewery = await Brewery.findByPk(breweryId);
+export async function updateBrewery(
+  breweryId: number,
+  input: BrewerySettingsInput,
+  transaction?: Transaction,
+): Promise<Brewery> {
+  const brewery = await Brewery.findByPk(breweryId, { transaction });
   if (!brewery) throw notFound('Brewery');
-  return brewery.update(input);
+  return brewery.update(input, { transaction });
 }
