@@ -41,13 +41,14 @@ export const routeTable: RouteEntry[] = [];
  * Builds the router mounted at `base` for a group of contracts, in the one shape every route takes:
  * authorise → validate → thin handler. Every contract in the group must have its implementation.
  */
-export function defineRouter<G extends Record<string, RouteContract>>(
+export function defineRouter<G extends { [K in keyof G]: RouteContract }>(
   base: string,
   contracts: G,
   implementations: { [K in keyof G]: RouteImplementation<G[K]> },
 ): Router {
   const router = Router();
-  for (const [name, contract] of Object.entries(contracts)) {
+  for (const name in contracts) {
+    const contract: RouteContract = contracts[name];
     const def: RouteImplementation<RouteContract> = implementations[name];
     if (!contract.path.startsWith(base)) throw new Error(`${contract.path} is not under ${base}`);
     const path = contract.path.slice(base.length) || '/';
