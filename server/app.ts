@@ -15,6 +15,7 @@ import { sessionMiddleware, sessionTimeouts } from './middlewares/session';
 import { sameOrigin } from './middlewares/same-origin';
 import { useSignInLimiter } from './middlewares/rate-limit';
 import { errorHandler, notFoundHandler } from './middlewares/error-handler';
+import { wellFormedText } from './middlewares/validate';
 import { apiRouters } from './routes';
 import { devMailRouter } from './dev/mail-page';
 import { logger } from './logger';
@@ -83,6 +84,7 @@ export function createApp(options: { serveClient?: boolean; logger?: Logger } = 
   });
 
   app.use(express.json({ limit: '1mb' }));
+  app.use('/api', wellFormedText);
   app.use(sessionMiddleware());
   app.use(passport.initialize());
   app.use(passport.session());

@@ -43,3 +43,64 @@ export function validate(part: Part, schema: z.ZodType): RequestHandler {
     next();
   };
 }
+
+/** A UTF-16 surrogate without its pair: no text, and MariaDB's utf8mb4 columns cannot hold it. */
+const LONE_SURROGATE = /[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/;
+
+interface Place {
+  value: unknown;
+  key?: string;
+  parent?: Place;
+}
+const pathOf = (place: Place | undefined): string => {
+  const keys: string[] = [];
+  for (let p = place; p?.key !== undefined; p = p.parent) keys.unshift(p.key);
+  return keys.length ? keys.join('.') : '_';
+};
+
+/** The path of the first key or string inside a parsed JSON body that holds a lone surrogate ('_' for the body itself). */
+function malformedTextAt(body: unknown): string | null {
+  // Iterative, each place linked to its parent: a body may nest thousands of levels deep.
+  const stack: Place[] = [{ value: body }];
+  while (stack.length) {
+    const place = stack.pop()!;
+    const { value } = place;
+    if (typeof value === 'string') {
+      if (LONE_SURROGATE.test(value)) return pathOf(place);
+    } else if (Array.isArray(value)) {
+      value.forEach((v, i) => stack.push({ value: v, key: String(i), parent: place }));
+    } else if (value && typeof value === 'object') {
+      for (const [key, v] of Object.entries(value)) {
+        if (LONE_SURROGATE.test(key)) return pathOf(place);
+        stack.push({ value: v, key, parent: place });
+      }
+    }
+  }
+  return null;
+}
+
+/** Whether an address's percent-escapes spell UTF-8 (a surrogate encoded in one does not). */
+function decodes(url: string): boolean {
+  try {
+    decodeURIComponent(url.replace(/\+/g, ' '));
+    return true;
+  } catch {
+    return false;
+  }
+}
+
+/**
+ * Refuses, before any route runs, input that is not text: an address (path or query) whose escapes are not
+ * UTF-8, or a JSON body with a lone surrogate in a key or a string. Such text would reach the database mangled
+ * or fail there after other writes, so every API request passes here once.
+ */
+export const wellFormedText: RequestHandler = (req, _res, next) => {
+  if (!decodes(req.originalUrl)) return next(badRequest('The address is not valid'));
+  const at = malformedTextAt(req.body);
+  if (at !== null) {
+    return next(
+      badRequest('Some fields need attention', { [at]: 'This text holds a character that is not valid: retype it' }),
+    );
+  }
+  next();
+};

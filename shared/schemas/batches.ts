@@ -38,10 +38,6 @@ export const STATUS_TRANSITIONS: Record<BatchStatus, readonly BatchStatus[]> = {
 
 export const canMoveTo = (from: BatchStatus, to: BatchStatus) => STATUS_TRANSITIONS[from].includes(to);
 
-/** Dumping is final and writes off the beer: only the head brewer, who is responsible for the batch, may do it. */
-const DUMP_ROLES: readonly string[] = ['head_brewer'];
-export const mayDump = (role: string) => DUMP_ROLES.includes(role);
-
 const id = z.coerce
   .number({ error: 'Must be a number' })
   .int('Must be a whole number')

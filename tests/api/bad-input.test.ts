@@ -10,7 +10,7 @@ import { sequelize } from '../../server/config/database';
 import { routeTable, type RouteEntry } from '../../server/routes/define';
 import { ROLES } from '../../shared/schemas/roles';
 import { agent, createTestBrewery, type Agent, type TestBrewery } from './helpers';
-import { ID_MAKERS, VALID_BODIES, idSource, pathParams, routeKey } from './route-samples';
+import { ID_MAKERS, VALID_BODIES, VALID_QUERIES, fillPath, idSource, pathParams, routeKey } from './route-samples';
 
 const TOTAL_RUNS = Number(process.env.KW_BAD_INPUT_RUNS ?? 400);
 /** Audit records a refusal is meant to leave behind (who tried what); anything else is a write. */
@@ -314,6 +314,69 @@ describe('bad input never answers 5xx and a refusal writes nothing', () => {
       );
     },
   );
+});
+
+/** A lone surrogate as JSON text and as an address would carry it (its UTF-8-style escape, which is not UTF-8). */
+const LONE = { json: '\\ud800', url: '%ED%A0%80' };
+const BROKEN_TEXT = 'This text holds a character that is not valid: retype it';
+/** Valid bodies of routes without a path id (the brewery's settings answered 500 after saving them). */
+const MORE_BODIES: Record<string, unknown> = {
+  'PATCH /api/brewery': { name: 'Harbour Works', unitSystem: 'us', timeZone: 'UTC' },
+};
+
+/** The body as JSON text with a lone surrogate at the end of every string (one added when it has none). */
+function withLoneSurrogates(body: unknown): string {
+  const mark = '\u0001';
+  let text = JSON.stringify(body, (_k, v: unknown) => (typeof v === 'string' ? `${v}${mark}` : v));
+  if (!text.includes('\\u0001')) text = JSON.stringify({ ...(body as object), name: mark });
+  return text.replace(/\\u0001/g, LONE.json);
+}
+
+describe('a lone surrogate is refused on every route and changes nothing', () => {
+  it('in a body, a query and a path', { timeout: 120_000 }, async () => {
+    const caller = t.as.head_brewer;
+    const samples = new Map<RouteEntry, { own: Record<string, string | number>; query: string; body: unknown }>();
+    for (const route of routeTable) {
+      const own: Record<string, string | number> = {};
+      // A link's secret is no row of the brewery: any well-formed one will do.
+      for (const p of pathParams(route.path)) own[p] = ID_MAKERS[p] ? await ownId(p) : 'sample-link-secret';
+      const key = routeKey(route);
+      samples.set(route, {
+        own,
+        query: VALID_QUERIES[key] ? `?${VALID_QUERIES[key]}` : '',
+        body: VALID_BODIES[key]?.(own as Record<string, number>) ?? MORE_BODIES[key] ?? { name: 'Harbour' },
+      });
+    }
+    const before = await dbState();
+    for (const route of routeTable) {
+      const { own, query, body } = samples.get(route)!;
+      const url = fillPath(route.path, own);
+      const send = (address: string, text: string) =>
+        caller[route.method](address).set('content-type', 'application/json').send(text);
+      const context = (where: string, res: { status: number; body: unknown }) =>
+        `${where}: ${route.method.toUpperCase()} ${route.path} → ${res.status} ${JSON.stringify(res.body).slice(0, 200)}`;
+
+      const inBody = await send(`${url}${query}`, withLoneSurrogates(body));
+      expect(inBody.status, context('body', inBody)).toBe(400);
+      expect(Object.values(inBody.body.error.fields ?? {}), context('body', inBody)).toEqual([BROKEN_TEXT]);
+
+      const inQuery = await send(`${url}${query ? `${query}&` : '?'}q=${LONE.url}`, JSON.stringify(body));
+      expect(inQuery.status, context('query', inQuery)).toBe(400);
+      expect(inQuery.body.error.message, context('query', inQuery)).toBe('The address is not valid');
+
+      // The first path id replaced (or, on a route without one, a segment added).
+      const [first] = pathParams(route.path);
+      const brokenPath = first
+        ? route.path.replace(/:(\w+)/g, (_, name: string) => (name === first ? LONE.url : String(own[name])))
+        : `${url}/${LONE.url}`;
+      const inPath = await send(`${brokenPath}${query}`, JSON.stringify(body));
+      expect(inPath.status, context('path', inPath)).toBe(400);
+      expect(inPath.body.error.message, context('path', inPath)).toBe('The address is not valid');
+    }
+    const after = await dbState();
+    expect(after.counts).toEqual(before.counts);
+    expect(after.checksums).toEqual(before.checksums);
+  });
 });
 
 function safeDecode(v: string): string {

@@ -27,8 +27,9 @@ import { applyServerErrors } from '../../../lib/forms';
 import { show, showVolume } from '../../../lib/units';
 import { quantityResolver } from '../../../lib/quantity-resolver';
 import { QuantityField, asNumber } from '../../../components/ui/quantity-field';
-import { useEquipment, useRemoveEquipment, useSaveEquipment, type EquipmentRow } from '../api/equipment';
-import { useIngredients, useRemoveIngredient, useSaveIngredient, type IngredientRow } from '../api/ingredients';
+import { useEquipment, useRemoveEquipment, useSaveEquipment } from '../api/equipment';
+import { useIngredients, useRemoveIngredient, useSaveIngredient } from '../api/ingredients';
+import type { EquipmentRow, IngredientRow } from '../../../../shared/contract/recipes';
 import { FormBanner } from '../../../components/ui/form-banner';
 import { ConfirmButton } from '../../../components/confirm-button';
 

@@ -18,7 +18,8 @@ import { displayUnit, showVolume } from '../../../lib/units';
 import { batchVolumeField, issueMessage } from '../../../../shared/quantities/field';
 import { useEquipment } from '../../library/api/equipment';
 import { useSaveScaled } from '../api/save-recipe';
-import { scaleSearch, useScale, type ScaleResult, type ScaleTarget } from '../api/scale-version';
+import { scaleSearch, useScale, type ScaleTarget } from '../api/scale-version';
+import type { ScaleResult } from '../../../../shared/contract/recipes';
 import { ScaleTable } from './scale-view';
 
 /** The scale target from the address, so a scale can be linked, reloaded and printed. */
