@@ -1,3 +1,5 @@
+import { amountsMessage, type Amount, type AmountsMessage } from '../shared/quantities';
+
 /** An error the client caused or may see: mapped to a status code and a plain message. */
 export class HttpError extends Error {
   constructor(
@@ -5,6 +7,8 @@ export class HttpError extends Error {
     readonly code: string,
     message: string,
     readonly fields?: Record<string, string>,
+    /** The message with its amounts as data: the error handler words it in the person's units. */
+    readonly worded?: AmountsMessage,
   ) {
     super(message);
     this.name = 'HttpError';
@@ -25,4 +29,9 @@ export const notFound = (what = 'This item') => new HttpError(404, 'not_found', 
 export const methodNotAllowed = (message: string) => new HttpError(405, 'method_not_allowed', message);
 export const conflict = (message: string) => new HttpError(409, 'conflict', message);
 export const unprocessable = (message: string) => new HttpError(422, 'unprocessable', message);
+/** A 422 whose `{name}` slots are amounts in SI, worded in the signed-in brewery's units when answered. */
+export function unprocessableAmounts(text: string, amounts: Record<string, Amount>): HttpError {
+  const { message, worded } = amountsMessage(text, amounts);
+  return new HttpError(422, 'unprocessable', message, undefined, worded);
+}
 export const tooLarge = (message: string) => new HttpError(413, 'too_large', message);

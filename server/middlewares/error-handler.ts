@@ -8,6 +8,7 @@ import {
 } from 'sequelize';
 import { HttpError, notFound } from '../errors';
 import { BrewingInputError } from '../../shared/brewing';
+import { wordAmounts } from '../../shared/quantities';
 
 interface BodyParserError {
   type?: string;
@@ -22,14 +23,17 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   let fields: Record<string, string> | undefined;
   const parserError = err as BodyParserError;
 
+  // A message whose amounts travel as data is worded in the signed-in brewery's units.
+  const system = req.user?.brewery.unitSystem ?? 'metric';
   if (err instanceof HttpError) {
     ({ status, code, message, fields } = err);
+    if (err.worded) message = wordAmounts(err.worded, system);
   } else if (err instanceof BrewingInputError) {
     // Well-formed input that brewing cannot produce (e.g. percentages that do not add up).
     status = 422;
     code = 'impossible';
-    message = err.message;
-    fields = { [err.field]: err.message };
+    message = err.worded ? wordAmounts(err.worded, system) : err.message;
+    fields = { [err.field]: message };
   } else if (parserError.type === 'entity.parse.failed') {
     status = 400;
     code = 'invalid_json';

@@ -3,7 +3,7 @@
 import { Batch, BatchLogEntry, Vessel } from '../models';
 import { assignVessel } from '../services/batches';
 import { writeReading } from '../services/readings';
-import { cToF, psiToKpa, usBblToL } from '../../shared/brewing';
+import { psiToKpa, usBblToL } from '../../shared/brewing';
 import type { DemoContext } from './demo';
 
 const VESSELS = [
@@ -61,10 +61,8 @@ export async function seedCellar({ brewery, users, transaction }: DemoContext): 
       {
         kind: 'reading',
         method: 'hydrometer',
-        gravity: Number((fg + (og - fg) * Math.exp(-0.33 * days)).toFixed(3)),
-        gravityUnit: 'sg',
-        temp: Number(cToF(18.6 + Math.min(1, days / 3) * 0.8).toFixed(1)),
-        tempUnit: 'f',
+        sg: Number((fg + (og - fg) * Math.exp(-0.33 * days)).toFixed(3)),
+        tempC: Number((18.6 + Math.min(1, days / 3) * 0.8).toFixed(2)),
       },
       {
         idempotencyKey: `demo-reading-${fermenting.id}-${hours}`.padEnd(16, '0'),

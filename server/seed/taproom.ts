@@ -181,7 +181,7 @@ async function brew(ctx: DemoContext, beer: DemoBeer, recipe: Recipe, t: Transac
     await writeReading(
       assistant,
       batch.id,
-      { kind: 'reading', method: 'hydrometer', gravity: sg, gravityUnit: 'sg', temp: 19, tempUnit: 'c' },
+      { kind: 'reading', method: 'hydrometer', sg, tempC: 19 },
       meta(at(60 * 24 * (2 + i * 2))),
       t,
     );

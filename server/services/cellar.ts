@@ -4,7 +4,7 @@
  */
 import { Op, Transaction, UniqueConstraintError } from 'sequelize';
 import { Batch, BatchLogEntry, CellarPlan, GravityReading, IN_FORCE, Vessel } from '../models';
-import { conflict, notFound, unprocessable } from '../errors';
+import { conflict, notFound, unprocessable, unprocessableAmounts } from '../errors';
 import { appendLogEntry, type LogActor } from './batch-log';
 import { assignVessel, changeBatchStatus, findBatch } from './batches';
 import { batchReadings } from './readings';
@@ -13,15 +13,11 @@ import { batchActuals } from '../../shared/batches/brew-day';
 import {
   carbonationSetting,
   dRestTriggerSg,
-  fToC,
   kpaToPsi,
   predictFermentation,
-  psiToKpa,
   readingOverdue,
-  usBblToL,
   type CarbonationSetting,
 } from '../../shared/brewing';
-import { formatGaugePressure, type CarbonationUnits } from '../../shared/brewing';
 import type { WriteMeta } from '../../shared/schemas/batch-log';
 import type { FrozenPlan } from '../../shared/schemas/batches';
 import {
@@ -33,12 +29,9 @@ import {
   type CellarAction,
   type CellarPlanInput,
   type CellarPlanView,
-  type TempUnit,
   type VesselInput,
   type VesselView,
 } from '../../shared/schemas/cellar';
-
-const toC = (value: number, unit: TempUnit) => (unit === 'f' ? fToC(value) : value);
 
 // ------------------------------------------------------------------- vessels
 
@@ -58,8 +51,8 @@ function vesselFields(input: VesselInput) {
   return {
     name: input.name,
     type: input.type,
-    capacityL: input.capacityUnit === 'bbl' ? usBblToL(input.capacity) : input.capacity,
-    ratedPressureKpa: input.pressureUnit === 'psi' ? psiToKpa(input.ratedPressure) : input.ratedPressure,
+    capacityL: input.capacityL,
+    ratedPressureKpa: input.ratedPressureKpa,
   };
 }
 
@@ -188,10 +181,10 @@ export async function saveCellarPlan(
   const batch = await findBatch(breweryId, batchId);
   const fields = {
     plannedFg: input.plannedFg,
-    primaryTempC: toC(input.primaryTemp, input.tempUnit),
+    primaryTempC: input.primaryTempC,
     dRestPoints: input.dRestPoints,
-    dRestTempC: toC(input.dRestTemp, input.tempUnit),
-    crashTempC: toC(input.crashTemp, input.tempUnit),
+    dRestTempC: input.dRestTempC,
+    crashTempC: input.crashTempC,
     co2Volumes: input.co2Volumes,
     readingIntervalHours: input.readingIntervalHours,
   };
@@ -228,20 +221,12 @@ async function vesselOf(breweryId: number, batchId: number, transaction?: Transa
 }
 
 /** The head pressure for a target on a vessel; refused (422) above the vessel's rated working pressure. */
-/** A screen that sends °F shows psi (a US brewery); one that sends °C shows kPa. */
-const screenUnits = (tempUnit: 'c' | 'f'): CarbonationUnits => (tempUnit === 'f' ? 'us' : 'metric');
-
 export async function carbonationFor(
   breweryId: number,
   query: CarbonationQuery,
 ): Promise<CarbonationSetting & { pressurePsi: number }> {
   const vessel = await findVessel(breweryId, query.vesselId);
-  const setting = carbonationSetting(
-    toC(query.temp, query.tempUnit),
-    query.co2Volumes,
-    vessel.ratedPressureKpa,
-    screenUnits(query.tempUnit),
-  );
+  const setting = carbonationSetting(query.tempC, query.co2Volumes, vessel.ratedPressureKpa);
   return { ...setting, pressurePsi: kpaToPsi(setting.pressureKpa) };
 }
 
@@ -256,26 +241,23 @@ export async function recordAction(
   input: ActionEntryInput,
   meta: WriteMeta,
 ): Promise<ActionView> {
-  const tempC = 'temp' in input ? toC(input.temp, input.tempUnit) : undefined;
-  const volumeL =
-    input.action !== 'transfer' ? undefined : input.volumeUnit === 'bbl' ? usBblToL(input.volume) : input.volume;
   let pressureKpa: number | undefined;
   if (input.action === 'carbonation') {
     const vessel = await vesselOf(actor.breweryId, batchId);
     if (!vessel) throw conflict('This batch is in no vessel: a head pressure is set on the vessel that holds it.');
-    const units = screenUnits(input.tempUnit);
-    const setting = carbonationSetting(tempC!, input.co2Volumes, vessel.ratedPressureKpa, units);
+    const setting = carbonationSetting(input.tempC, input.co2Volumes, vessel.ratedPressureKpa);
     if (input.pressureKpa !== undefined && input.pressureKpa > vessel.ratedPressureKpa) {
-      throw unprocessable(
-        `${formatGaugePressure(input.pressureKpa, units)} is above ${vessel.name}'s rated working pressure of ${formatGaugePressure(vessel.ratedPressureKpa, units)}.`,
-      );
+      throw unprocessableAmounts(`{pressure} is above ${vessel.name}'s rated working pressure of {rated}.`, {
+        pressure: { quantity: 'pressure', si: input.pressureKpa },
+        rated: { quantity: 'pressure', si: vessel.ratedPressureKpa },
+      });
     }
     pressureKpa = input.pressureKpa ?? setting.pressureKpa;
   }
   const entry = await appendLogEntry(
     actor,
     batchId,
-    { ...input, stepKey: input.action, tempC, volumeL, pressureKpa },
+    { ...input, stepKey: input.action, ...(pressureKpa === undefined ? {} : { pressureKpa }) },
     meta,
     {
       onInsert: async (_e, t) => {
@@ -291,8 +273,11 @@ export async function recordAction(
             throw unprocessable(`${tank.name} is a fermenter: transfer into a bright tank.`);
           if (tank.currentBatchId === null && tank.status !== 'clean')
             throw conflict(`${tank.name} needs cleaning before it is filled.`);
-          if (volumeL! > tank.capacityL)
-            throw unprocessable(`${tank.name} holds ${tank.capacityL.toFixed(0)} L, less than the volume moved.`);
+          if (input.volumeL > tank.capacityL)
+            throw unprocessableAmounts(`${tank.name} holds {capacity}, less than the {moved} moved.`, {
+              capacity: { quantity: 'volume', si: tank.capacityL },
+              moved: { quantity: 'volume', si: input.volumeL },
+            });
           await assignVessel(actor.breweryId, batchId, tank.id, t);
           if (batch.status === 'fermenting') await changeBatchStatus(actor, batchId, { status: 'conditioning' }, t);
         }

@@ -5,8 +5,10 @@
  */
 import Papa from 'papaparse';
 import { fromZonedTime } from 'date-fns-tz';
-import { BrewingInputError, fToC, MAX_SG, MIN_SG, platoToSg } from '../../shared/brewing';
-import type { ProbeImportOptions, ProbeRow } from '../../shared/schemas/cellar';
+import { BrewingInputError, MAX_SG, MIN_SG, platoToSg } from '../../shared/brewing';
+import { displayUnit } from '../../shared/quantities';
+import { issueMessage } from '../../shared/quantities/field';
+import { readingEntrySchema, type ProbeImportOptions, type ProbeRow } from '../../shared/schemas/cellar';
 
 /** Most rows one import accepts (a 15-minute probe over seven weeks). */
 export const MAX_IMPORT_ROWS = 5000;
@@ -80,11 +82,14 @@ export function parseProbeCsv(text: string, options: ProbeImportOptions): Parsed
         throw error;
       }
     } else if (g < MIN_SG || g > MAX_SG) {
-      return fail(`${g} is not a specific gravity (0.980–1.200). Is the unit °Plato?`);
+      return fail(`${g} is not a specific gravity (${MIN_SG.toFixed(3)}–${MAX_SG.toFixed(3)}). Is the unit °Plato?`);
     }
-    const tempC = options.tempUnit === 'f' ? fToC(t) : t;
-    if (tempC < -5 || tempC > 45)
-      return fail(`${t} °${options.tempUnit.toUpperCase()} is not a fermentation temperature. Is the unit right?`);
+    // The file's own temperature unit words the limit: a °F file is a US probe's.
+    const fileSystem = options.tempUnit === 'f' ? 'us' : 'metric';
+    const tempC = displayUnit('temperature', fileSystem).toSi(t);
+    const tempCheck = readingEntrySchema.shape.tempC.safeParse(tempC);
+    if (!tempCheck.success)
+      return fail(`${issueMessage(tempCheck.error.issues[0]!, fileSystem)} for a reading. Is the unit right?`);
     row.takenAt = new Date(atMs).toISOString();
     row.sg = sg;
     row.tempC = tempC;

@@ -13,7 +13,7 @@ import type { LogEntryInput, Measurements } from '../../shared/schemas/batch-log
 import { changeBatchStatus, findBatch } from './batches';
 import { parseProbeCsv, MAX_IMPORT_ROWS } from './probe-csv';
 import { evaluateReadingAlerts } from './alerts';
-import { fToC, platoToSg, refractometerSg, sgToPlato } from '../../shared/brewing';
+import { refractometerSg, sgToPlato } from '../../shared/brewing';
 import type { WriteMeta } from '../../shared/schemas/batch-log';
 import type { ProbeImportInput, ProbeImportResult, ReadingEntryInput, ReadingView } from '../../shared/schemas/cellar';
 
@@ -37,16 +37,9 @@ export function toReadingView(r: GravityReading): ReadingView {
   };
 }
 
-/** SG and °C from what was entered (refractometer readings corrected for wort and, once fermenting, alcohol). */
-export function readingInSi(input: ReadingEntryInput): { sg: number; tempC: number | null } {
-  const sg =
-    input.gravityUnit === 'brix'
-      ? refractometerSg(input.gravity, input.originalBrix, input.wortCorrection)
-      : input.gravityUnit === 'plato'
-        ? platoToSg(input.gravity, 'gravity')
-        : input.gravity;
-  const tempC = input.temp === undefined ? null : input.tempUnit === 'f' ? fToC(input.temp) : input.temp;
-  return { sg, tempC };
+/** The reading's SG: a refractometer's °Brix corrected for wort and, once fermenting, alcohol. */
+export function readingSg(input: ReadingEntryInput): number {
+  return input.brix === undefined ? input.sg! : refractometerSg(input.brix, input.originalBrix, input.wortCorrection);
 }
 
 /** The first reading of a knocked-out batch starts its fermentation. */
@@ -62,7 +55,7 @@ async function readyForReadings(actor: LogActor, batchId: number, transaction: T
 
 /** A reading's projected row, from its log entry (which holds what was entered and the values in SI). */
 function readingRow(actor: LogActor, entry: BatchLogEntry) {
-  const d = entry.data as Omit<ReadingEntryInput, 'kind'> & { sg: number; tempC: number | null };
+  const d = entry.data as Omit<ReadingEntryInput, 'kind'> & { sg: number };
   return {
     breweryId: actor.breweryId,
     batchId: Number(entry.batchId),
@@ -70,9 +63,9 @@ function readingRow(actor: LogActor, entry: BatchLogEntry) {
     readingEntryId: Number(entry.id),
     takenAt: entry.capturedAt,
     sg: d.sg,
-    enteredValue: d.gravity,
-    enteredUnit: d.gravityUnit,
-    tempC: d.tempC,
+    enteredValue: d.brix ?? d.sg,
+    enteredUnit: d.brix === undefined ? ('sg' as const) : ('brix' as const),
+    tempC: d.tempC ?? null,
     ph: d.ph ?? null,
     method: d.method,
     authorName: actor.displayName,
@@ -88,7 +81,7 @@ export async function writeReading(
   transaction?: Transaction,
 ): Promise<GravityReading> {
   let reading: GravityReading | null = null;
-  const entry = await appendLogEntry(actor, batchId, { ...input, ...readingInSi(input) }, meta, {
+  const entry = await appendLogEntry(actor, batchId, { ...input, sg: readingSg(input) }, meta, {
     transaction,
     onInsert: async (e, t) => {
       await readyForReadings(actor, batchId, t);
@@ -255,16 +248,9 @@ export async function importProbeCsv(
   const writes = rows
     .filter((row) => row.status === 'ok')
     .map((row) => {
-      const reading: ReadingEntryInput = {
-        kind: 'reading',
-        method: 'probe',
-        gravity: input.gravityUnit === 'plato' ? Number(row.gravity.replace(',', '.')) : row.sg!,
-        gravityUnit: input.gravityUnit,
-        temp: Number(row.temp.replace(',', '.')),
-        tempUnit: input.tempUnit,
-      };
+      const reading: ReadingEntryInput = { kind: 'reading', method: 'probe', sg: row.sg!, tempC: row.tempC! };
       return {
-        input: { ...reading, ...readingInSi(reading) },
+        input: reading,
         meta: { ...meta, idempotencyKey: rowKey(meta.idempotencyKey, row.line), capturedAt: new Date(row.takenAt!) },
       };
     });

@@ -3,12 +3,12 @@
  * priming sugar. "Volumes" = litres of CO2 (at 0 °C, 1 atm) per litre of beer.
  */
 import { MOLAR_MASS } from './atomic-weights';
-import { BrewingInputError, requireInRange, requirePositive } from './errors';
-import { cToF, kpaToPsi, psiToKpa } from '../quantities/convert';
+import { BrewingInputError, requireInRange, requireNonNegative, requirePositive } from './errors';
+import { cToF, kpaToPsi, psiToKpa, showQuantity, type UnitSystem } from '../quantities';
 
-/** Temperatures the carbonation fits are used over, °C (about 28–86 °F). */
-const MIN_TEMP_C = -2;
-const MAX_TEMP_C = 30;
+/** Temperatures the carbonation fits are used over, °C (about 28–86 °F): the API's limits for a beer temperature. */
+export const CARBONATION_TEMP_C = { min: -2, max: 30 } as const;
+const { min: MIN_TEMP_C, max: MAX_TEMP_C } = CARBONATION_TEMP_C;
 /** Highest CO2 level accepted, volumes. */
 const MAX_VOLUMES = 5;
 
@@ -141,33 +141,29 @@ export interface CarbonationSetting {
   ratedKpa: number;
 }
 
-/** The units a refusal is written in: those of the screen that asked (°F and psi, or °C and kPa). */
-export type CarbonationUnits = 'us' | 'metric';
-
-/** "30.0 psi" or "207 kPa": as the carbonation card shows a pressure. */
-export function formatGaugePressure(kpa: number, units: CarbonationUnits): string {
-  return units === 'us' ? `${kpaToPsi(kpa).toFixed(1)} psi` : `${kpa.toFixed(0)} kPa`;
+/** "30.0 psi" or "207 kPa": a gauge pressure in the brewery's units. */
+export function formatGaugePressure(kpa: number, system: UnitSystem): string {
+  return showQuantity('pressure', system, kpa);
 }
 
 /**
  * The head pressure for `volumes` of CO2 at `tempC` (see {@link headPressureKpa}),
- * refused when it is above the vessel's rated working pressure: the app never
- * recommends a pressure the vessel is not rated for. The refusal is worded in
- * `units`, so a US screen reads °F and psi beside its "Rated … psi".
+ * refused when it is above the vessel's rated working pressure (an unpressurised
+ * vessel is rated 0): the app never recommends a pressure the vessel is not rated
+ * for. The refusal carries its amounts, so a US screen reads °F and psi.
  */
-export function carbonationSetting(
-  tempC: number,
-  volumes: number,
-  ratedKpa: number,
-  units: CarbonationUnits = 'metric',
-): CarbonationSetting {
-  requirePositive(ratedKpa, 'ratedKpa', "Vessel's rated working pressure (kPa)");
+export function carbonationSetting(tempC: number, volumes: number, ratedKpa: number): CarbonationSetting {
+  requireNonNegative(ratedKpa, 'ratedKpa', "Vessel's rated working pressure");
   const pressureKpa = headPressureKpa(tempC, volumes);
   if (pressureKpa > ratedKpa) {
-    const temp = units === 'us' ? `${Number(cToF(tempC).toFixed(1))} °F` : `${Number(tempC.toFixed(1))} °C`;
-    throw new BrewingInputError(
+    throw BrewingInputError.withAmounts(
       'volumes',
-      `${volumes} volumes at ${temp} needs ${formatGaugePressure(pressureKpa, units)}, above this vessel's rated working pressure of ${formatGaugePressure(ratedKpa, units)}. Chill the beer further or choose a lower target.`,
+      `${volumes} volumes at {temp} needs {pressure}, above this vessel's rated working pressure of {rated}. Chill the beer further or choose a lower target.`,
+      {
+        temp: { quantity: 'temperature', si: tempC },
+        pressure: { quantity: 'pressure', si: pressureKpa },
+        rated: { quantity: 'pressure', si: ratedKpa },
+      },
     );
   }
   return { pressureKpa, ratedKpa };

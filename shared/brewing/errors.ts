@@ -3,16 +3,25 @@
  * offending field, and the UI can put the message beside that field. Functions
  * here throw rather than return NaN, Infinity or a silently clamped value.
  */
-import { QUANTITIES } from '../quantities';
+import { QUANTITIES, amountsMessage, type Amount, type AmountsMessage } from '../quantities';
 
 export class BrewingInputError extends Error {
   /** Dotted path of the offending input, e.g. `grainBill.items.2.weightKg`. */
   readonly field: string;
+  /** The message with its amounts as data, for a reader who words it in their own units. */
+  readonly worded?: AmountsMessage;
 
-  constructor(field: string, message: string) {
+  constructor(field: string, message: string, worded?: AmountsMessage) {
     super(message);
     this.name = 'BrewingInputError';
     this.field = field;
+    this.worded = worded;
+  }
+
+  /** A refusal whose amounts are worded in the reader's units (see shared/quantities `amountsMessage`). */
+  static withAmounts(field: string, text: string, amounts: Record<string, Amount>): BrewingInputError {
+    const { message, worded } = amountsMessage(text, amounts);
+    return new BrewingInputError(field, message, worded);
   }
 }
 

@@ -97,7 +97,7 @@ export {
   carbonationSetting,
   formatGaugePressure,
   type CarbonationSetting,
-  type CarbonationUnits,
+  CARBONATION_TEMP_C,
   MOLAR_VOLUME_L,
   CO2_G_PER_L_PER_VOLUME,
   CO2_YIELD_G_PER_G,

@@ -12,6 +12,7 @@ import {
 } from './errors';
 import type { BrewingWarning, EquipmentProfile, VolumePlan } from './types';
 import { galPerLbToLPerKg } from '../quantities/convert';
+import { amountsMessage } from '../quantities';
 
 /** Volume lost when wort cools from boiling (thermal contraction of water, ≈ 4 %; common practice). */
 export const COOLING_SHRINKAGE = 0.04;
@@ -205,7 +206,10 @@ export function planVolumes(
     warnings.push({
       code: 'strikeExceedsTotalWater',
       field: 'mash.thicknessLPerKg',
-      message: `Mash water exceeds the total water needed by ${(-spargeL).toFixed(1)} L: no sparge, and the pre-boil volume will run over plan. Use a thicker mash.`,
+      ...amountsMessage(
+        'Mash water exceeds the total water needed by {excess}: no sparge, and the pre-boil volume will run over plan. Use a thicker mash.',
+        { excess: { quantity: 'volume', si: -spargeL } },
+      ),
     });
     spargeL = 0;
   }
@@ -214,14 +218,20 @@ export function planVolumes(
     warnings.push({
       code: 'mashTunOverfilled',
       field: 'equipment.maxMashTunVolumeL',
-      message: `The mash needs ${fullestMashL.toFixed(1)} L but the mash tun holds ${equipment.maxMashTunVolumeL.toFixed(1)} L.`,
+      ...amountsMessage('The mash needs {mash} but the mash tun holds {tun}.', {
+        mash: { quantity: 'volume', si: fullestMashL },
+        tun: { quantity: 'volume', si: equipment.maxMashTunVolumeL },
+      }),
     });
   }
   if (preBoilL > equipment.maxKettleVolumeL) {
     warnings.push({
       code: 'kettleOverfilled',
       field: 'equipment.maxKettleVolumeL',
-      message: `The pre-boil volume is ${preBoilL.toFixed(1)} L but the kettle holds ${equipment.maxKettleVolumeL.toFixed(1)} L.`,
+      ...amountsMessage('The pre-boil volume is {preBoil} but the kettle holds {kettle}.', {
+        preBoil: { quantity: 'volume', si: preBoilL },
+        kettle: { quantity: 'volume', si: equipment.maxKettleVolumeL },
+      }),
     });
   }
   return {

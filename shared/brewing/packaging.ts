@@ -51,9 +51,13 @@ export function packagingTotals(lines: readonly PackageLine[], knockoutL: number
   const packagedL = lines.reduce((sum, line, i) => sum + lineVolumeL(line, `lines.${i}`), 0);
   requireNonNegative(packagedL, 'lines', 'Packaged volume');
   if (packagedL > knockoutL * 1.001) {
-    throw new BrewingInputError(
+    throw BrewingInputError.withAmounts(
       'lines',
-      `These packages hold ${packagedL.toFixed(1)} L, more than the ${knockoutL.toFixed(1)} L knocked out.`,
+      'These packages hold {packaged}, more than the {knockout} knocked out.',
+      {
+        packaged: { quantity: 'volume', si: packagedL },
+        knockout: { quantity: 'volume', si: knockoutL },
+      },
     );
   }
   const lossL = Math.max(0, knockoutL - packagedL);

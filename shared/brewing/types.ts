@@ -1,3 +1,4 @@
+import type { AmountsMessage } from '../quantities';
 /**
  * Shared types for recipes, equipment and computed results. All quantities are
  * SI unless the name says otherwise: kg, g, L, mL, °C, kPa, minutes. Gravities
@@ -261,7 +262,10 @@ export type WarningCode =
 
 export interface BrewingWarning {
   code: WarningCode;
+  /** The metric wording; a screen words `worded` in its brewery's units when it is there. */
   message: string;
+  /** The sentence with its amounts as data (see shared/quantities `wordAmounts`). */
+  worded?: AmountsMessage;
   field?: string;
 }
 

@@ -20,6 +20,8 @@ interface FieldOptions {
   /** Narrower SI limits for this field; never wider than the quantity's. */
   min?: number;
   max?: number;
+  /** The message when the field is left out ("Enter the volume moved"); default "… enter a number". */
+  missing?: string;
 }
 
 /** The check a quantity field runs: the value within the quantity's limits or the field's narrower ones. */
@@ -37,19 +39,21 @@ function withinLimits(id: QuantityId, opts: FieldOptions) {
     const refusal: LimitRefusal = { quantity: id, bound, si: bound === 'min' ? min : max, label };
     ctx.addIssue({ code: 'custom', message: limitMessage(refusal, 'metric'), params: refusal, input: value });
   };
-  return { label, check };
+  const error = (issue: { input?: unknown }) =>
+    issue.input === undefined && opts.missing ? opts.missing : `${label}: enter a number`;
+  return { error, check };
 }
 
 /** A number of `id` in SI, within the quantity's limits or the field's narrower ones. */
 export function quantityField(id: QuantityId, opts: FieldOptions = {}) {
-  const { label, check } = withinLimits(id, opts);
-  return z.number({ error: `${label}: enter a number` }).superRefine(check);
+  const { error, check } = withinLimits(id, opts);
+  return z.number({ error }).superRefine(check);
 }
 
 /** The same field read from a query string ("12.5" becomes 12.5). */
 export function quantityQueryField(id: QuantityId, opts: FieldOptions = {}) {
-  const { label, check } = withinLimits(id, opts);
-  return z.coerce.number({ error: `${label}: enter a number` }).superRefine(check);
+  const { error, check } = withinLimits(id, opts);
+  return z.coerce.number({ error }).superRefine(check);
 }
 
 /** The limit a zod issue refuses, when it is one of a quantity field's. */

@@ -222,3 +222,43 @@ export function limitRefusalOf(params: unknown): LimitRefusal | null {
     ? (p as LimitRefusal)
     : null;
 }
+
+/** An amount in SI and what it measures. */
+export interface Amount {
+  quantity: QuantityId;
+  si: number;
+}
+
+/**
+ * A sentence the product writes (a warning, a refusal) with its amounts kept as data: each `{name}` slot in
+ * `text` is filled with `amounts[name]` in the reader's units, so one message reads "52.5 L" to a metric
+ * brewery and "13.9 gal" to a US one.
+ */
+export interface AmountsMessage {
+  text: string;
+  amounts: Record<string, Amount>;
+}
+
+/** An amount as a sentence says it: a volume as a brewer says it (gal or bbl, L or hL), others in the first unit. */
+export function showAmount(amount: Amount, system: UnitSystem): string {
+  return amount.quantity === 'volume'
+    ? showVolume(system, amount.si)
+    : showQuantity(amount.quantity, system, amount.si);
+}
+
+/** The sentence in `system`'s units. */
+export function wordAmounts(message: AmountsMessage, system: UnitSystem): string {
+  return message.text.replace(/\{(\w+)\}/g, (slot, name: string) => {
+    const amount = message.amounts[name];
+    return amount ? showAmount(amount, system) : slot;
+  });
+}
+
+/** Builds a message with its amounts; `message` is the metric wording for a reader with no unit system. */
+export function amountsMessage(
+  text: string,
+  amounts: Record<string, Amount>,
+): { message: string; worded: AmountsMessage } {
+  const worded = { text, amounts };
+  return { message: wordAmounts(worded, 'metric'), worded };
+}

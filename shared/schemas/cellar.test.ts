@@ -1,29 +1,31 @@
-// Gravity readings are checked against the limits of the unit they were typed in.
+// Gravity readings come in SG (a hydrometer or probe) or °Brix (a refractometer), in the quantities table's limits.
 import { describe, expect, it } from 'vitest';
 import { readingEntrySchema } from './cellar';
+import { issueMessage } from '../quantities/field';
 
-const reading = (
-  gravity: number,
-  gravityUnit: 'sg' | 'plato' | 'brix',
-  method: 'hydrometer' | 'refractometer' = 'hydrometer',
-) => readingEntrySchema.safeParse({ kind: 'reading', method, gravity, gravityUnit, tempUnit: 'f' });
-const gravityMessage = (r: ReturnType<typeof reading>) =>
-  r.success ? null : r.error.issues.find((i) => i.path[0] === 'gravity')?.message;
+const reading = (body: object) => readingEntrySchema.safeParse({ kind: 'reading', ...body });
+const messageAt = (r: ReturnType<typeof reading>, field: string, system: 'us' | 'metric' = 'metric') => {
+  const issue = r.success ? undefined : r.error.issues.find((i) => i.path[0] === field);
+  return issue && issueMessage(issue, system);
+};
 
 describe('reading gravity limits', () => {
-  it('gives the SG range, and the reading probably meant, for a gravity typed as points in SG', () => {
-    expect(gravityMessage(reading(1015, 'sg'))).toBe(
-      'A specific gravity is between 0.980 and 1.200: did you mean 1.015?',
-    );
-    expect(gravityMessage(reading(1.3, 'sg'))).toBe('A specific gravity is between 0.980 and 1.200');
-    expect(gravityMessage(reading(50, 'sg'))).toBe('A specific gravity is between 0.980 and 1.200');
-    expect(reading(1.015, 'sg').success).toBe(true);
+  it('keeps a specific gravity within 0.980–1.200, said the same in either system', () => {
+    expect(messageAt(reading({ method: 'hydrometer', sg: 1.3 }), 'sg')).toBe('Gravity must be at most 1.200 SG');
+    expect(messageAt(reading({ method: 'hydrometer', sg: 1015 }), 'sg', 'us')).toBe('Gravity must be at most 1.200 SG');
+    expect(reading({ method: 'hydrometer', sg: 1.015 }).success).toBe(true);
   });
 
-  it('gives the °P and °Bx limits in their own units', () => {
-    expect(gravityMessage(reading(36, 'plato'))).toBe('Gravity must be at most 35 °P');
-    expect(reading(12, 'plato').success).toBe(true);
-    expect(gravityMessage(reading(41, 'brix', 'refractometer'))).toBe('Gravity must be at most 40 °Bx');
-    expect(reading(8.2, 'brix', 'refractometer').success).toBe(true);
+  it('takes °Brix from a refractometer only, and SG from the other instruments only', () => {
+    expect(reading({ method: 'refractometer', brix: 8.2, originalBrix: 13.5 }).success).toBe(true);
+    expect(messageAt(reading({ method: 'refractometer', brix: 41 }), 'brix')).toBe('Gravity must be at most 40 °Bx');
+    expect(messageAt(reading({ method: 'refractometer', sg: 1.05 }), 'sg')).toMatch(/°Brix/);
+    expect(messageAt(reading({ method: 'hydrometer', brix: 8 }), 'brix')).toMatch(/specific gravity/);
+  });
+
+  it('words a cellar temperature limit in °F for a US brewery (45 °C = 113 °F, NIST SP 811 §B.9)', () => {
+    expect(messageAt(reading({ method: 'hydrometer', sg: 1.02, tempC: 60 }), 'tempC', 'us')).toBe(
+      'Temperature must be at most 113 °F',
+    );
   });
 });

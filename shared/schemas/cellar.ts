@@ -1,25 +1,22 @@
 import { z } from 'zod';
 import { KEG_SIZE_IDS } from '../brewing/packaging';
+import { CARBONATION_TEMP_C } from '../brewing/carbonation';
 import { timeZone } from './auth';
+import { quantityField, quantityQueryField } from '../quantities/field';
 
 /**
  * The cellar: vessels, gravity readings, logged cellar actions, packaging, the cellar plan and
- * probe imports. Forms send values in the unit the person chose beside them; the server stores SI.
+ * probe imports. The API takes SI only (°C, L, kPa gauge, specific gravity); forms convert at the edge.
+ * A probe file is the exception: its options say which units the file itself is written in.
  */
 
-const num = (label: string, min: number, max: number) =>
-  z
-    .number({ error: `${label}: enter a number` })
-    .min(min, `${label} must be at least ${min}`)
-    .max(max, `${label} must be at most ${max}`);
 const note = z.string().trim().max(1000, 'Use at most 1000 characters').optional();
 
-export const TEMP_UNITS = ['c', 'f'] as const;
-export type TempUnit = (typeof TEMP_UNITS)[number];
-const tempUnit = z.enum(TEMP_UNITS, { error: 'Choose °C or °F' });
-/** Temperatures a cellar sees, in either unit (−10 °C … 45 °C ≈ 14 °F … 113 °F). */
-const TEMP_LIMITS = [-10, 113] as const;
-const temp = num('Temperature', ...TEMP_LIMITS);
+/** Temperatures a cellar sees: −10 °C to 45 °C. */
+const CELLAR_MAX_C = 45;
+const cellarTemp = (label = 'Temperature', missing?: string) =>
+  quantityField('temperature', { label, max: CELLAR_MAX_C, missing });
+const co2Volumes = (missing?: string) => quantityField('co2Volumes', { label: 'CO2 volumes', missing });
 
 // ------------------------------------------------------------------- vessels
 
@@ -31,10 +28,9 @@ export type VesselStatus = (typeof VESSEL_STATUSES)[number];
 export const vesselInputSchema = z.strictObject({
   name: z.string().trim().min(1, 'Name the vessel').max(60, 'Use at most 60 characters'),
   type: z.enum(VESSEL_TYPES, { error: 'Choose fermenter or bright tank' }),
-  capacity: num('Capacity', 0.1, 100_000),
-  capacityUnit: z.enum(['l', 'bbl'], { error: 'Choose L or bbl' }),
-  ratedPressure: num('Rated working pressure', 0.1, 1000),
-  pressureUnit: z.enum(['kpa', 'psi'], { error: 'Choose kPa or psi' }),
+  capacityL: quantityField('volume', { label: 'Capacity', min: 0.1, max: 100_000 }),
+  /** 0 for an unpressurised vessel. */
+  ratedPressureKpa: quantityField('pressure', { label: 'Rated working pressure' }),
 });
 export type VesselInput = z.infer<typeof vesselInputSchema>;
 
@@ -79,58 +75,39 @@ export const READING_METHOD_LABELS: Record<ReadingMethod, string> = {
 export const GRAVITY_UNITS = ['sg', 'plato', 'brix'] as const;
 export type GravityUnit = (typeof GRAVITY_UNITS)[number];
 
-/** Highest reading accepted per unit: SG 1.200 ≈ 43 °P; a wort above 35 °P or 40 °Bx is a typing slip. */
-const GRAVITY_MAX = { sg: 1.2, plato: 35, brix: 40 } as const;
-
 /**
- * The message for a gravity outside its unit's range, in that unit, or null. A specific gravity typed
- * as points ("1015", "15" for 1.015) is met with the reading it probably meant.
- */
-function gravityOutOfRange(gravity: number, unit: GravityUnit): string | null {
-  if (unit !== 'sg')
-    return gravity > GRAVITY_MAX[unit]
-      ? `Gravity must be at most ${GRAVITY_MAX[unit]} ${unit === 'plato' ? '°P' : '°Bx'}`
-      : null;
-  if (gravity >= 0.98 && gravity <= GRAVITY_MAX.sg) return null;
-  const meant = gravity >= 980 && gravity <= 1200 ? gravity / 1000 : null;
-  return `A specific gravity is between 0.980 and 1.200${meant === null ? '' : `: did you mean ${meant.toFixed(3)}?`}`;
-}
-
-/**
- * One gravity reading. A hydrometer or probe reads SG or °Plato; a refractometer reads °Brix,
- * corrected for wort (and, once fermenting, for alcohol using the original reading).
+ * One gravity reading. A hydrometer or probe reads a specific gravity (`sg`; a form typed in °P converts it);
+ * a refractometer reads °Brix (`brix`), corrected for wort and, once fermenting, for alcohol using the
+ * original reading.
  */
 export const readingEntrySchema = z
   .strictObject({
     kind: z.literal('reading'),
     method: z.enum(READING_METHODS, { error: 'Choose how it was measured' }),
-    /** Its range depends on `gravityUnit`: checked below, so the message gives the limit of the unit in use. */
-    gravity: z.number({ error: 'Gravity: enter a number' }).min(0, 'Gravity must be at least 0'),
-    gravityUnit: z.enum(GRAVITY_UNITS, { error: 'Choose SG, °P or °Bx' }),
+    sg: quantityField('gravity').optional(),
+    brix: quantityField('brix', { label: 'Gravity' }).optional(),
     /** Refractometer only: the reading at knockout, °Brix, for the alcohol correction. */
-    originalBrix: num('Original reading', 0, 40).optional(),
-    wortCorrection: num('Wort correction factor', 0.9, 1.2).optional(),
-    temp: temp.optional(),
-    tempUnit,
-    ph: num('pH', 2, 10).optional(),
+    originalBrix: quantityField('brix', { label: 'Original reading' }).optional(),
+    wortCorrection: z
+      .number({ error: 'Wort correction factor: enter a number' })
+      .min(0.9, 'Wort correction factor must be at least 0.9')
+      .max(1.2, 'Wort correction factor must be at most 1.2')
+      .optional(),
+    tempC: cellarTemp().optional(),
+    ph: quantityField('ph').optional(),
     note,
   })
   .superRefine((r, ctx) => {
-    if ((r.method === 'refractometer') !== (r.gravityUnit === 'brix')) {
+    const refractometer = r.method === 'refractometer';
+    const [needed, other] = refractometer ? (['brix', 'sg'] as const) : (['sg', 'brix'] as const);
+    if (r[needed] === undefined) ctx.addIssue({ code: 'custom', path: [needed], message: 'Gravity: enter a number' });
+    if (r[other] !== undefined) {
       ctx.addIssue({
         code: 'custom',
-        path: ['gravityUnit'],
-        message: 'A refractometer reads °Brix; a hydrometer or probe reads SG or °P',
+        path: [other],
+        message: 'A refractometer reads °Brix; a hydrometer or probe reads a specific gravity',
       });
     }
-    if (r.method !== 'refractometer') {
-      for (const field of ['originalBrix', 'wortCorrection'] as const) {
-        if (r[field] !== undefined)
-          ctx.addIssue({ code: 'custom', path: [field], message: 'Only a refractometer reading takes this' });
-      }
-    }
-    const gravityIssue = gravityOutOfRange(r.gravity, r.gravityUnit);
-    if (gravityIssue) ctx.addIssue({ code: 'custom', path: ['gravity'], message: gravityIssue });
   });
 export type ReadingEntryInput = z.infer<typeof readingEntrySchema>;
 
@@ -165,19 +142,13 @@ export const CELLAR_ACTION_LABELS: Record<CellarAction, string> = {
   carbonation: 'Carbonation set',
 };
 
-/** A number the kind needs: "Enter …" when left empty, "… enter a number" when it is not one. */
-const needed = (label: string, missing: string, min: number, max: number) =>
-  z
-    .number({ error: (issue) => (issue.input === undefined ? missing : `${label}: enter a number`) })
-    .min(min, `${label} must be at least ${min}`)
-    .max(max, `${label} must be at most ${max}`);
 /** What went in: hop variety and weight, fining agent and dose. */
 const detail = z
   .string({ error: 'Say what went in and how much' })
   .trim()
   .min(1, 'Say what went in and how much')
   .max(200, 'Use at most 200 characters');
-const setTemp = { temp: needed('Temperature', 'Enter the set temperature', ...TEMP_LIMITS), tempUnit };
+const setTemp = { tempC: cellarTemp('Temperature', 'Enter the set temperature') };
 
 /**
  * The fields each cellar action takes, and only those: an entry is signed with exactly what belongs to
@@ -191,9 +162,8 @@ const ACTION_FIELDS = {
   transfer: {
     kind: z.literal('action'),
     action: z.literal('transfer'),
-    /** The volume moved, in `volumeUnit`, and the bright tank it went to. */
-    volume: needed('Volume', 'Enter the volume moved', 0.1, 100_000),
-    volumeUnit: z.enum(['l', 'bbl'], { error: 'Choose L or bbl' }),
+    /** The volume moved and the bright tank it went to. */
+    volumeL: quantityField('volume', { min: 0.1, max: 100_000, missing: 'Enter the volume moved' }),
     toVesselId: z.number({ error: 'Choose the bright tank' }).int().positive('Choose the bright tank'),
     note,
   },
@@ -201,10 +171,13 @@ const ACTION_FIELDS = {
     kind: z.literal('action'),
     action: z.literal('carbonation'),
     /** Target CO2 volumes at the beer's temperature, and the head pressure set, kPa gauge. */
-    co2Volumes: needed('CO2 volumes', 'Enter the target CO2 volumes', 0.5, 5),
-    temp: needed('Temperature', 'Enter the beer temperature', ...TEMP_LIMITS),
-    tempUnit,
-    pressureKpa: num('Head pressure', 0, 1000).optional(),
+    co2Volumes: co2Volumes('Enter the target CO2 volumes'),
+    tempC: quantityField('temperature', {
+      label: 'Beer temperature',
+      ...CARBONATION_TEMP_C,
+      missing: 'Enter the beer temperature',
+    }),
+    pressureKpa: quantityField('pressure', { label: 'Head pressure' }).optional(),
     note,
   },
 } as const;
@@ -262,7 +235,11 @@ export const packageLineSchema = z.discriminatedUnion('kind', [
     size: z.enum(KEG_SIZE_IDS as [string, ...string[]], { error: 'Choose a keg size' }),
     count,
   }),
-  z.strictObject({ kind: z.enum(['can', 'bottle']), sizeMl: num('Container size (mL)', 50, 5000), count }),
+  z.strictObject({
+    kind: z.enum(['can', 'bottle']),
+    sizeMl: quantityField('smallVolume', { label: 'Container size' }),
+    count,
+  }),
 ]);
 export type PackageLineInput = z.infer<typeof packageLineSchema>;
 
@@ -279,16 +256,15 @@ export type PackagingEntryInput = z.infer<typeof packagingEntrySchema>;
 
 /** The batch's cellar plan, from the recipe's fermentation plan, adjusted by the head brewer. */
 export const cellarPlanSchema = z.strictObject({
-  plannedFg: num('Planned FG', 0.98, 1.2),
-  tempUnit,
-  primaryTemp: temp,
+  plannedFg: quantityField('gravity', { label: 'Planned FG' }),
+  primaryTempC: cellarTemp('Primary temperature'),
   /** D-rest starts when gravity is within this many points of planned FG. */
-  dRestPoints: num('D-rest trigger (points)', 0, 20),
-  dRestTemp: temp,
-  crashTemp: temp,
-  co2Volumes: num('CO2 volumes', 0.5, 5),
+  dRestPoints: quantityField('gravityPoints', { label: 'D-rest trigger', max: 20 }),
+  dRestTempC: cellarTemp('D-rest temperature'),
+  crashTempC: cellarTemp('Crash temperature'),
+  co2Volumes: co2Volumes(),
   /** A reading is overdue after this many hours without one. */
-  readingIntervalHours: num('Reading interval (hours)', 1, 24 * 14),
+  readingIntervalHours: quantityField('hours', { label: 'Reading interval', min: 1 }),
 });
 export type CellarPlanInput = z.infer<typeof cellarPlanSchema>;
 
@@ -308,9 +284,8 @@ export interface CellarPlanView {
 
 export const carbonationQuerySchema = z.strictObject({
   vesselId: z.coerce.number().int().positive(),
-  co2Volumes: z.coerce.number().min(0.5, 'CO2 volumes must be at least 0.5').max(5, 'CO2 volumes must be at most 5'),
-  temp: z.coerce.number().min(-10).max(113),
-  tempUnit,
+  co2Volumes: quantityQueryField('co2Volumes', { label: 'CO2 volumes' }),
+  tempC: quantityQueryField('temperature', { label: 'Beer temperature', ...CARBONATION_TEMP_C }),
 });
 export type CarbonationQuery = z.infer<typeof carbonationQuerySchema>;
 
@@ -319,8 +294,9 @@ export type CarbonationQuery = z.infer<typeof carbonationQuerySchema>;
 export const PROBE_DELIMITERS = [',', ';', '\t'] as const;
 export const probeImportOptionsSchema = z.strictObject({
   delimiter: z.enum(PROBE_DELIMITERS, { error: 'Choose comma, semicolon or tab' }),
+  /** The units the file is written in. */
   gravityUnit: z.enum(['sg', 'plato'], { error: 'Choose SG or °P' }),
-  tempUnit,
+  tempUnit: z.enum(['c', 'f'], { error: 'Choose °C or °F' }),
   timeZone,
 });
 export type ProbeImportOptions = z.infer<typeof probeImportOptionsSchema>;

@@ -19,14 +19,7 @@ async function knockedOutBatch() {
   return batch;
 }
 
-const reading = (gravity: number, gravityUnit: 'sg' | 'plato' = 'sg') => ({
-  kind: 'reading',
-  method: 'hydrometer',
-  gravity,
-  gravityUnit,
-  temp: 19,
-  tempUnit: 'c',
-});
+const reading = (sg: number) => ({ kind: 'reading', method: 'hydrometer', sg, tempC: 19 });
 
 function postReading(batchId: number, body: object, capturedAt?: Date) {
   return t.as.assistant_brewer
@@ -42,15 +35,13 @@ async function cellarView(batchId: number): Promise<BatchCellarView> {
 }
 
 async function vessel(
-  body: Partial<{ name: string; type: string; capacity: number; ratedPressure: number }>,
+  body: Partial<{ name: string; type: string; capacityL: number; ratedPressureKpa: number }>,
 ): Promise<VesselView> {
   const res = await t.as.head_brewer.post('/api/vessels').send({
     name: `Tank ${Math.random().toString(36).slice(2, 7)}`,
     type: 'bright_tank',
-    capacity: 1200,
-    capacityUnit: 'l',
-    ratedPressure: 200,
-    pressureUnit: 'kpa',
+    capacityL: 1200,
+    ratedPressureKpa: 200,
     ...body,
   });
   expect(res.status).toBe(201);
@@ -62,11 +53,11 @@ beforeAll(async () => {
 });
 
 describe('gravity readings', () => {
-  it('stores readings entered in SG and in °P as SG and returns both consistently, each as a signed log entry', async () => {
+  it('stores readings in SG (a °P reading converted by the form) and returns both scales, each as a signed log entry', async () => {
     const batch = await knockedOutBatch();
     const sg = await postReading(batch.id, reading(1.05), new Date(Date.now() - 60_000));
     expect(sg.status).toBe(201);
-    const plato = await postReading(batch.id, reading(10, 'plato'));
+    const plato = await postReading(batch.id, reading(platoToSg(10)));
     expect(plato.status).toBe(201);
 
     const view = await cellarView(batch.id);
@@ -75,7 +66,7 @@ describe('gravity readings', () => {
     // SG ↔ °P by the ASBC polynomial (shared/brewing gravity.ts, tested there against the ASBC table).
     expect(a).toMatchObject({ sg: 1.05, enteredValue: 1.05, enteredUnit: 'sg', method: 'hydrometer', tempC: 19 });
     expect(a.plato).toBeCloseTo(sgToPlato(1.05), 10);
-    expect(b).toMatchObject({ enteredValue: 10, enteredUnit: 'plato' });
+    expect(b).toMatchObject({ enteredUnit: 'sg' });
     expect(b.sg).toBeCloseTo(platoToSg(10), 12);
     expect(b.plato).toBeCloseTo(10, 9);
 
@@ -84,7 +75,7 @@ describe('gravity readings', () => {
       order: [['sequence', 'ASC']],
     });
     expect(entries.map((e) => Number(e.id))).toEqual([a.logEntryId, b.logEntryId]);
-    expect(entries[1]!.data).toMatchObject({ gravity: 10, gravityUnit: 'plato', method: 'hydrometer' });
+    expect(entries[1]!.data).toMatchObject({ sg: platoToSg(10), method: 'hydrometer' });
   });
 
   it('answers a repeated send with the first reading, and refuses a reading on a planned batch', async () => {
@@ -111,10 +102,11 @@ describe('gravity readings', () => {
   it('corrects a refractometer reading for wort and alcohol with the original reading (Terrill 2011 cubic, see shared/brewing)', async () => {
     const batch = await knockedOutBatch();
     const res = await postReading(batch.id, {
-      ...reading(8.2),
+      kind: 'reading',
       method: 'refractometer',
-      gravityUnit: 'brix',
+      brix: 8.2,
       originalBrix: 13.5,
+      tempC: 19,
     });
     expect(res.status).toBe(201);
     expect(res.body.sg).toBeCloseTo(refractometerBeerSg(13.5, 8.2), 12);
@@ -125,7 +117,7 @@ describe('gravity readings', () => {
     const batch = await knockedOutBatch();
     const bad = await postReading(batch.id, { ...reading(1.05), method: 'refractometer' });
     expect(bad.status).toBe(400);
-    expect(bad.body.error.fields.gravityUnit).toMatch(/°Brix/);
+    expect(bad.body.error.fields.sg).toMatch(/°Brix/);
     const taproom = await t.as.taproom_manager
       .post(`/api/cellar/batches/${batch.id}/readings`)
       .set(writeHeaders())
@@ -347,7 +339,7 @@ describe('cellar actions carry only their own fields', () => {
       note: 'Second charge, purged with CO2',
     });
     expect(dryHop.status).toBe(201);
-    const crash = await postAction(batch.id, { kind: 'action', action: 'cold_crash', temp: 1, tempUnit: 'c' });
+    const crash = await postAction(batch.id, { kind: 'action', action: 'cold_crash', tempC: 1 });
     expect(crash.status).toBe(201);
     expect(crash.body).toMatchObject({ action: 'cold_crash', tempC: 1, detail: null, note: null });
 
@@ -368,8 +360,7 @@ describe('cellar actions carry only their own fields', () => {
     const stray = await postAction(batch.id, {
       kind: 'action',
       action: 'cold_crash',
-      temp: 1,
-      tempUnit: 'c',
+      tempC: 1,
       detail: 'Citra 4 kg',
     });
     expect(stray.status).toBe(400);
@@ -380,11 +371,10 @@ describe('cellar actions carry only their own fields', () => {
       kind: 'action',
       action: 'dry_hop',
       detail: 'Citra 4 kg',
-      temp: 18,
-      tempUnit: 'c',
+      tempC: 18,
     });
     expect(hopTemp.status).toBe(400);
-    expect(Object.values(hopTemp.body.error.fields)).toEqual(['Unknown fields: temp, tempUnit']);
+    expect(Object.values(hopTemp.body.error.fields)).toEqual(['Unknown field: tempC']);
     // What a kind needs is still asked for by name.
     const bare = await postAction(batch.id, { kind: 'action', action: 'dry_hop' });
     expect(bare.status).toBe(400);
@@ -406,7 +396,7 @@ describe('vessels', () => {
       t.as.assistant_brewer
         .post(`/api/cellar/batches/${batchId}/actions`)
         .set(writeHeaders())
-        .send({ kind: 'action', action: 'transfer', volume: 700, volumeUnit: 'l', toVesselId: tank.id });
+        .send({ kind: 'action', action: 'transfer', volumeL: 700, toVesselId: tank.id });
     expect((await transfer(a.id)).status).toBe(201);
     const second = await transfer(b.id);
     expect(second.status).toBe(409);
@@ -443,51 +433,48 @@ describe('vessels', () => {
     expect(await statements()).toBe(withOne);
   });
 
-  it('stores capacity and rated pressure in SI from bbl and psi, and refuses a duplicate name', async () => {
-    const v = await vessel({ name: 'FV-psi', type: 'fermenter', capacity: 10, ratedPressure: 15 } as never);
-    const res = await t.as.head_brewer.post('/api/vessels').send({
-      name: 'FV-bbl',
-      type: 'fermenter',
-      capacity: 10,
-      capacityUnit: 'bbl',
-      ratedPressure: 15,
-      pressureUnit: 'psi',
-    });
-    expect(res.status).toBe(201);
-    // 1 US beer barrel = 31 US gal (27 CFR 25.11) = 117.347765 L; 1 psi = 6.894757 kPa (NIST SP 811).
-    expect(res.body.capacityL).toBeCloseTo(1173.47765, 4);
-    expect(res.body.ratedPressureKpa).toBeCloseTo(103.4214, 3);
+  it('takes capacity and rated pressure in SI, an unpressurised vessel at 0, and refuses a duplicate name', async () => {
+    const v = await vessel({ name: 'FV-pilot', type: 'fermenter', capacityL: 26.5, ratedPressureKpa: 0 });
+    expect(v).toMatchObject({ capacityL: 26.5, ratedPressureKpa: 0 });
     const dup = await t.as.head_brewer
       .post('/api/vessels')
-      .send({ name: v.name, type: 'fermenter', capacity: 1, capacityUnit: 'l', ratedPressure: 1, pressureUnit: 'kpa' });
+      .send({ name: v.name, type: 'fermenter', capacityL: 1, ratedPressureKpa: 1 });
     expect(dup.status).toBe(409);
+  });
+
+  it('words a US brewery’s vessel refusals in gallons and psi, never litres or kPa', async () => {
+    const res = await t.as.head_brewer
+      .post('/api/vessels')
+      .send({ name: 'FV-tiny', type: 'fermenter', capacityL: 0.01, ratedPressureKpa: 5000 });
+    expect(res.status).toBe(400);
+    // 0.1 L = 0.026 gal (NIST Handbook 44), stated as the 0.1 gal the field accepts; 1000 kPa = 145.04 psi (NIST SP 811).
+    expect(res.body.error.fields).toEqual({
+      capacityL: 'Capacity must be at least 0.1 gal',
+      ratedPressureKpa: 'Rated working pressure must be at most 145 psi',
+    });
+    expect(JSON.stringify(res.body)).not.toMatch(/\d (L|kPa|kg|°C)\b/);
   });
 });
 
 describe('carbonation', () => {
   it('recommends the head pressure only up to the vessel rating', async () => {
     const needed = headPressureKpa(2, 2.6);
-    const strong = await vessel({ ratedPressure: 200 });
-    const weak = await vessel({ ratedPressure: Math.floor(needed) - 5 });
+    const strong = await vessel({ ratedPressureKpa: 200 });
+    const weak = await vessel({ ratedPressureKpa: Math.floor(needed) - 5 });
     const ok = await t.as.assistant_brewer
       .get('/api/cellar/carbonation')
-      .query({ vesselId: strong.id, co2Volumes: 2.6, temp: 2, tempUnit: 'c' });
+      .query({ vesselId: strong.id, co2Volumes: 2.6, tempC: 2 });
     expect(ok.status).toBe(200);
     expect(ok.body.pressureKpa).toBeCloseTo(needed, 10);
     const capped = await t.as.assistant_brewer
       .get('/api/cellar/carbonation')
-      .query({ vesselId: weak.id, co2Volumes: 2.6, temp: 2, tempUnit: 'c' });
+      .query({ vesselId: weak.id, co2Volumes: 2.6, tempC: 2 });
     expect(capped.status).toBe(422);
-    expect(capped.body.error.message).toMatch(/above this vessel's rated working pressure/);
-    // A US screen (°F) reads the refusal in °F and psi, as its card shows the rating.
-    const cappedUs = await t.as.assistant_brewer
-      .get('/api/cellar/carbonation')
-      .query({ vesselId: weak.id, co2Volumes: 2.6, temp: 35.6, tempUnit: 'f' });
-    expect(cappedUs.status).toBe(422);
-    expect(cappedUs.body.error.message).toMatch(
+    // The brewery is a US one: it reads the refusal in °F and psi (2 °C = 35.6 °F, NIST SP 811 §B.9).
+    expect(capped.body.error.message).toMatch(
       /^2\.6 volumes at 35\.6 °F needs \d+\.\d psi, above this vessel's rated working pressure of \d+\.\d psi\./,
     );
-    expect(cappedUs.body.error.message).not.toMatch(/°C|kPa/);
+    expect(capped.body.error.message).not.toMatch(/°C|kPa/);
 
     // Logging a carbonation on a batch in the weak tank is refused the same way; nothing is written.
     const batch = await knockedOutBatch();
@@ -496,7 +483,7 @@ describe('carbonation', () => {
     const logged = await t.as.assistant_brewer
       .post(`/api/cellar/batches/${batch.id}/actions`)
       .set(writeHeaders())
-      .send({ kind: 'action', action: 'carbonation', co2Volumes: 2.6, temp: 2, tempUnit: 'c' });
+      .send({ kind: 'action', action: 'carbonation', co2Volumes: 2.6, tempC: 2 });
     expect(logged.status).toBe(422);
     expect(await BatchLogEntry.count({ where: { batchId: batch.id, kind: 'action' } })).toBe(0);
   });
@@ -564,16 +551,13 @@ describe('another brewery', () => {
         await o.put(`/api/vessels/${tank.id}`).send({
           name: 'Mine',
           type: 'fermenter',
-          capacity: 1,
-          capacityUnit: 'l',
-          ratedPressure: 1,
-          pressureUnit: 'kpa',
+          capacityL: 1,
+          ratedPressureKpa: 1,
         })
       ).status,
     ).toBe(404);
     expect(
-      (await o.get('/api/cellar/carbonation').query({ vesselId: tank.id, co2Volumes: 2.5, temp: 2, tempUnit: 'c' }))
-        .status,
+      (await o.get('/api/cellar/carbonation').query({ vesselId: tank.id, co2Volumes: 2.5, tempC: 2 })).status,
     ).toBe(404);
     expect((await o.get('/api/vessels')).body).toEqual([]);
     const alert = await Alert.create({
@@ -594,11 +578,10 @@ describe('alerts', () => {
     const batch = await knockedOutBatch();
     const plan = await t.as.head_brewer.put(`/api/cellar/batches/${batch.id}/plan`).send({
       plannedFg: 1.012,
-      tempUnit: 'c',
-      primaryTemp: 19,
+      primaryTempC: 19,
       dRestPoints: 3,
-      dRestTemp: 21,
-      crashTemp: 1,
+      dRestTempC: 21,
+      crashTempC: 1,
       co2Volumes: 2.5,
       readingIntervalHours: 24,
     });

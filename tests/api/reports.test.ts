@@ -66,7 +66,7 @@ beforeAll(async () => {
     await t.as.assistant_brewer
       .post(`/api/cellar/batches/${packagedId}/readings`)
       .set(writeHeaders())
-      .send({ kind: 'reading', method: 'hydrometer', gravity: 1.012, gravityUnit: 'sg', temp: 18, tempUnit: 'c' }),
+      .send({ kind: 'reading', method: 'hydrometer', sg: 1.012, tempC: 18 }),
     201,
   );
   ok(await t.as.assistant_brewer.post(`/api/batches/${packagedId}/status`).send({ status: 'conditioning' }));
@@ -246,7 +246,7 @@ describe('batch history', () => {
     const posted = await t.as.assistant_brewer
       .post(`/api/cellar/batches/${inTankId}/readings`)
       .set(writeHeaders())
-      .send({ kind: 'reading', method: 'hydrometer', gravity: 1.1, gravityUnit: 'sg', temp: 18, tempUnit: 'c' });
+      .send({ kind: 'reading', method: 'hydrometer', sg: 1.1, tempC: 18 });
     ok(posted, 201);
     ok(
       await t.as.assistant_brewer

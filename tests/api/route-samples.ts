@@ -163,10 +163,8 @@ const NOTE = { kind: 'note', text: 'Sample note' };
 const VESSEL = {
   name: 'Tank',
   type: 'fermenter',
-  capacity: 1200,
-  capacityUnit: 'l',
-  ratedPressure: 200,
-  pressureUnit: 'kpa',
+  capacityL: 1200,
+  ratedPressureKpa: 200,
 };
 
 /** A body each write route with a path id accepts (validated by its own schema in the tests). */
@@ -193,23 +191,20 @@ export const VALID_BODIES: Record<string, (ids: Record<string, number>) => unkno
   'POST /api/batches/:id/sign-off': () => ({ password: GOOD_PASSWORD }),
   'PUT /api/cellar/batches/:batchId/plan': () => ({
     plannedFg: 1.012,
-    tempUnit: 'c',
-    primaryTemp: 19,
+    primaryTempC: 19,
     dRestPoints: 3,
-    dRestTemp: 21,
-    crashTemp: 1,
+    dRestTempC: 21,
+    crashTempC: 1,
     co2Volumes: 2.5,
     readingIntervalHours: 24,
   }),
   'POST /api/cellar/batches/:batchId/readings': () => ({
     kind: 'reading',
     method: 'hydrometer',
-    gravity: 1.05,
-    gravityUnit: 'sg',
-    temp: 19,
-    tempUnit: 'c',
+    sg: 1.05,
+    tempC: 19,
   }),
-  'POST /api/cellar/batches/:batchId/actions': () => ({ kind: 'action', action: 'cold_crash', temp: 1, tempUnit: 'c' }),
+  'POST /api/cellar/batches/:batchId/actions': () => ({ kind: 'action', action: 'cold_crash', tempC: 1 }),
   'POST /api/cellar/batches/:batchId/packaging': () => ({
     kind: 'packaging',
     lines: [{ kind: 'can', sizeMl: 473, count: 1 }],

@@ -41,7 +41,7 @@ export async function brewedBatch(t: TestBrewery, options: BrewedOptions): Promi
       await as
         .post(`/api/cellar/batches/${batch.id}/readings`)
         .set(writeHeaders({ capturedAt: new Date(Date.now() - (options.readings.length - i) * 60_000) }))
-        .send({ kind: 'reading', method: 'hydrometer', gravity: sg, gravityUnit: 'sg', tempUnit: 'c' }),
+        .send({ kind: 'reading', method: 'hydrometer', sg }),
       201,
     );
   }

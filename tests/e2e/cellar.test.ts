@@ -26,10 +26,9 @@ async function fermentingBatch(page: Page): Promise<{ id: number; number: string
       data: {
         name: `FV-${Date.now() % 100000}`,
         type: 'fermenter',
-        capacity: 40,
-        capacityUnit: 'bbl',
-        ratedPressure: 15,
-        pressureUnit: 'psi',
+        // 40 bbl and 15 psi, sent in SI: 27 CFR 25.11 (1 bbl = 117.347765 L), NIST SP 811 (1 psi = 6.894757 kPa).
+        capacityL: 40 * 117.347765304,
+        ratedPressureKpa: 15 * 6.894757,
       },
     });
     fermenter = await made.json();

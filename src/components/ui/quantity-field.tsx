@@ -15,6 +15,7 @@ interface Props<T extends FieldValues> {
   disabled?: boolean;
   hint?: ReactNode;
   className?: string;
+  placeholder?: string;
 }
 
 /**
@@ -32,15 +33,20 @@ export function QuantityField<T extends FieldValues>({
   disabled,
   hint,
   className,
+  placeholder,
 }: Props<T>) {
   const { field, fieldState } = useController({ control, name });
   const u = unit ?? displayUnit(quantity, system);
-  // While the person types, keep their text (e.g. "12.") rather than re-formatting it under the cursor.
-  const [text, setText] = useState<string | null>(null);
+  // While the person types, keep their text (e.g. "12.") rather than re-formatting it under the cursor; once the
+  // form changes the value itself (a reset after an entry is kept, a tapped suggestion), show that value instead.
+  const [typed, setTyped] = useState<{ raw: string; value: unknown } | null>(null);
   const value = field.value as unknown;
   const shown =
-    text ??
-    (typeof value === 'number' && Number.isFinite(value) ? String(Number(u.fromSi(value).toFixed(u.decimals))) : '');
+    typed && Object.is(typed.value, value)
+      ? typed.raw
+      : typeof value === 'number' && Number.isFinite(value)
+        ? String(Number(u.fromSi(value).toFixed(u.decimals)))
+        : '';
   const error = fieldState.error;
   const inUnit = error?.types?.[u.unit];
   return (
@@ -52,18 +58,19 @@ export function QuantityField<T extends FieldValues>({
       disabled={disabled}
       hint={hint}
       className={className}
+      placeholder={placeholder}
       name={field.name}
       ref={field.ref}
       onChange={(e) => {
         const raw = e.target.value;
-        setText(raw);
         const n = Number(raw.replace(',', '.'));
-        field.onChange(
-          raw.trim() === '' ? (optional ? undefined : Number.NaN) : Number.isFinite(n) ? u.toSi(n) : Number.NaN,
-        );
+        const next =
+          raw.trim() === '' ? (optional ? undefined : Number.NaN) : Number.isFinite(n) ? u.toSi(n) : Number.NaN;
+        setTyped({ raw, value: next });
+        field.onChange(next);
       }}
       onBlur={() => {
-        setText(null);
+        setTyped(null);
         field.onBlur();
       }}
       error={typeof inUnit === 'string' ? inUnit : error?.message}

@@ -119,8 +119,9 @@ export function LogList({
 
 /** For a refractometer reading: its °Brix to SG with the same wort and alcohol corrections (shared/brewing). */
 function refractometerOf(entry: LogEntry): BrixToSg | undefined {
-  const d = entry.data as { gravityUnit?: string; originalBrix?: number; wortCorrection?: number };
-  if (entry.kind !== 'reading' || d.gravityUnit !== 'brix') return undefined;
+  // A reading holds `brix`; one signed before the API took SI only says so with `gravityUnit: 'brix'`.
+  const d = entry.data as { brix?: number; gravityUnit?: string; originalBrix?: number; wortCorrection?: number };
+  if (entry.kind !== 'reading' || (d.brix === undefined && d.gravityUnit !== 'brix')) return undefined;
   return (brix) => refractometerSg(brix, d.originalBrix, d.wortCorrection);
 }
 

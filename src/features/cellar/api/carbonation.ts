@@ -16,6 +16,6 @@ export const carbonationQuery = (query: CarbonationQuery) =>
 
 export const useCarbonation = (query: CarbonationQuery | null) =>
   useQuery({
-    ...carbonationQuery(query ?? { vesselId: 0, co2Volumes: 0, temp: 0, tempUnit: 'c' }),
+    ...carbonationQuery(query ?? { vesselId: 0, co2Volumes: 0, tempC: 0 }),
     enabled: query !== null,
   });

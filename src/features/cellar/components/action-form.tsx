@@ -1,6 +1,5 @@
 import { useState } from 'react';
 import { useForm, type Resolver } from 'react-hook-form';
-import { zodResolver } from '@hookform/resolvers/zod';
 import { Button, SelectField, SuggestionChip, TextField } from '../../../components/ui';
 import {
   actionEntrySchema,
@@ -10,11 +9,13 @@ import {
   type ActionEntryInput,
   type CellarAction,
   type CellarPlanView,
-  type TempUnit,
   type VesselView,
 } from '../../../../shared/schemas/cellar';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
-import { displayUnit } from '../../../lib/units';
+import { show } from '../../../lib/units';
+import { QUANTITIES } from '../../../../shared/quantities';
+import { QuantityField } from '../../../components/ui/quantity-field';
+import { quantityResolver } from '../../../lib/quantity-resolver';
 import { useLogCellarEntry } from '../api/log-cellar-entry';
 import { useVessels } from '../api/vessels';
 import { useSubmitOnce } from '../../../lib/use-submit-once';
@@ -26,17 +27,12 @@ const ACTIONS_HERE = CELLAR_ACTIONS.filter((a) => a !== 'carbonation'); // carbo
 interface ActionDraft {
   kind: 'action';
   action: CellarAction | '';
-  temp?: number;
-  tempUnit: TempUnit;
+  tempC?: number;
   detail?: string;
-  volume?: number;
-  volumeUnit: 'l' | 'bbl';
+  volumeL?: number;
   toVesselId?: number;
   note?: string;
 }
-
-// The draft is flat; the shared schema is per kind and refuses what another kind takes.
-const entryResolver = zodResolver(actionEntrySchema) as unknown as Resolver<ActionDraft, unknown, ActionEntryInput>;
 
 /** Logs D-rest, cold crash, dry hop, fining or a transfer as a signed entry through the outbox; empty again once kept. */
 export function ActionForm({
@@ -51,18 +47,22 @@ export function ActionForm({
   const log = useLogCellarEntry(batchId);
   const vessels = useVessels();
   const [saved, setSaved] = useState<string>();
-  const temp = displayUnit('temperature', unitSystem);
-  const { register, handleSubmit, watch, setValue, reset, formState } = useForm<ActionDraft, unknown, ActionEntryInput>(
-    {
-      resolver: (draft, context, options) => entryResolver(onlyActionFields(draft) as ActionDraft, context, options),
-      defaultValues: {
-        kind: 'action',
-        action: '',
-        tempUnit: unitSystem === 'us' ? 'f' : 'c',
-        volumeUnit: unitSystem === 'us' ? 'bbl' : 'l',
-      },
-    },
-  );
+  // The draft is flat; the shared schema is per kind and refuses what another kind takes.
+  const entryResolver = quantityResolver(actionEntrySchema, unitSystem) as unknown as Resolver<
+    ActionDraft,
+    unknown,
+    ActionEntryInput
+  >;
+  // A transfer is said in barrels (US) or hectolitres (metric), as a tank's contents are.
+  const volumeUnit = QUANTITIES.volume.units[unitSystem][1];
+  const { control, register, handleSubmit, watch, setValue, reset, formState } = useForm<
+    ActionDraft,
+    unknown,
+    ActionEntryInput
+  >({
+    resolver: (draft, context, options) => entryResolver(onlyActionFields(draft) as ActionDraft, context, options),
+    defaultValues: { kind: 'action', action: '' },
+  });
   const action = watch('action');
   const errors = formState.errors;
   const planTempC = action === 'd_rest' ? plan.dRestTempC : action === 'cold_crash' ? plan.crashTempC : undefined;
@@ -92,19 +92,18 @@ export function ActionForm({
       </SelectField>
       {(action === 'd_rest' || action === 'cold_crash') && (
         <div className="space-y-2">
-          <TextField
-            label={`Set temperature (${temp.unit})`}
-            inputMode="decimal"
+          <QuantityField
+            control={control}
+            name="tempC"
+            label="Set temperature"
+            quantity="temperature"
+            system={unitSystem}
+            optional
             className="text-2xl"
-            {...register('temp', { setValueAs: optionalNumber })}
-            error={errors.temp?.message}
           />
           {planTempC !== undefined && (
-            <SuggestionChip
-              label="Plan"
-              onPick={() => setValue('temp', Number(temp.fromSi(planTempC).toFixed(1)), { shouldValidate: true })}
-            >
-              {temp.fromSi(planTempC).toFixed(1)} {temp.unit}
+            <SuggestionChip label="Plan" onPick={() => setValue('tempC', planTempC, { shouldValidate: true })}>
+              {show(unitSystem, 'temperature', planTempC)}
             </SuggestionChip>
           )}
         </div>
@@ -117,19 +116,18 @@ export function ActionForm({
         />
       )}
       {action === 'transfer' && (
-        <div className="grid grid-cols-[1fr_auto] gap-3">
-          <TextField
+        <div className="space-y-3">
+          <QuantityField
+            control={control}
+            name="volumeL"
             label="Volume moved"
-            inputMode="decimal"
+            quantity="volume"
+            system={unitSystem}
+            unit={volumeUnit}
+            optional
             className="text-2xl"
-            {...register('volume', { setValueAs: optionalNumber })}
-            error={errors.volume?.message}
           />
-          <SelectField label="Unit" {...register('volumeUnit')}>
-            <option value="bbl">bbl</option>
-            <option value="l">L</option>
-          </SelectField>
-          <div className="col-span-2">
+          <div>
             <SelectField
               label="Into bright tank"
               {...register('toVesselId', { setValueAs: optionalNumber })}

@@ -31,10 +31,10 @@ export function CarbonationPanel({
   const [saved, setSaved] = useState<string>();
   const log = useLogCellarEntry(batchId);
   const [co2Volumes, tempValue] = [optionalNumber(volumes.trim()), optionalNumber(beerTemp.trim())];
-  const tempUnit = unitSystem === 'us' ? 'f' : 'c';
+  // The API takes °C: the beer temperature is converted here, from the unit the field shows.
   const query =
     Number.isFinite(co2Volumes) && Number.isFinite(tempValue)
-      ? ({ vesselId: vessel.id, co2Volumes: co2Volumes!, temp: tempValue!, tempUnit } as const)
+      ? { vesselId: vessel.id, co2Volumes: co2Volumes!, tempC: Number(temp.toSi(tempValue!).toFixed(2)) }
       : null;
   const answer = useCarbonation(query);
   const { once, busy } = useSubmitOnce();
@@ -98,8 +98,7 @@ export function CarbonationPanel({
               kind: 'action',
               action: 'carbonation',
               co2Volumes: query.co2Volumes,
-              temp: query.temp,
-              tempUnit,
+              tempC: query.tempC,
               pressureKpa: answer.data.pressureKpa,
             },
             label,

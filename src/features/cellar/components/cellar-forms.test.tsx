@@ -85,7 +85,7 @@ describe('cellar forms take one tap at a time', () => {
   it('a double tap on a cellar action or a transfer writes one entry', async () => {
     render(withQueries(<ActionForm batchId={1} plan={plan} unitSystem="us" />));
     type('What was done', 'transfer');
-    type('Volume moved', '7');
+    type('Volume moved (bbl)', '7');
     await screen.findByRole('option', { name: 'BT-1' });
     type('Into bright tank', '7');
     doubleTap(screen.getByRole('form', { name: 'Log cellar work' }));
@@ -93,8 +93,8 @@ describe('cellar forms take one tap at a time', () => {
     expect(delivered('actions')[0]).toEqual({
       kind: 'action',
       action: 'transfer',
-      volume: 7,
-      volumeUnit: 'bbl',
+      // Typed as 7 bbl, sent in litres: 1 bbl = 31 US gal = 117.347 765 304 L (27 CFR 25.11, NIST Handbook 44).
+      volumeL: expect.closeTo(821.434357128, 6),
       toVesselId: 7,
     });
     await settle();
@@ -156,7 +156,8 @@ describe('a kept entry leaves its form empty', () => {
     expect(valueOf('Set temperature (°F)')).toBe('33.8');
     submit('Log cellar work');
     await waitFor(() => expect(delivered('actions')).toHaveLength(2));
-    expect(delivered('actions')[1]).toEqual({ kind: 'action', action: 'cold_crash', temp: 33.8, tempUnit: 'f' });
+    // The API takes °C: the plan's 1 °C goes back as it came.
+    expect(delivered('actions')[1]).toEqual({ kind: 'action', action: 'cold_crash', tempC: 1 });
   });
 
   it('what was typed for one kind is dropped when the person switches to another before keeping', async () => {
@@ -167,7 +168,8 @@ describe('a kept entry leaves its form empty', () => {
     type('Set temperature (°F)', '68');
     submit('Log cellar work');
     await waitFor(() => expect(delivered('actions')).toHaveLength(1));
-    expect(delivered('actions')[0]).toEqual({ kind: 'action', action: 'd_rest', temp: 68, tempUnit: 'f' });
+    // 68 °F = 20 °C (NIST SP 811 §B.9).
+    expect(delivered('actions')[0]).toEqual({ kind: 'action', action: 'd_rest', tempC: expect.closeTo(20, 9) });
   });
 
   it('asks what was done rather than assuming it', async () => {
@@ -220,10 +222,8 @@ describe('a kept entry leaves its form empty', () => {
     expect(delivered('readings')[0]).toEqual({
       kind: 'reading',
       method: 'hydrometer',
-      gravity: 1.014,
-      gravityUnit: 'sg',
-      temp: 62.6,
-      tempUnit: 'f',
+      sg: 1.014,
+      tempC: 17,
       note: 'Sample from the racking arm',
     });
     await screen.findByText(/Saved on this tablet: Reading 1.014/);
@@ -295,16 +295,17 @@ describe('reading form numbers', () => {
     fireEvent.change(screen.getByLabelText('Temperature (°F)'), { target: { value: '66,5' } });
     fireEvent.submit(screen.getByRole('form', { name: 'Log a reading' }));
     await waitFor(() => expect(delivered('readings')).toHaveLength(1));
-    expect(delivered('readings')[0]).toMatchObject({ gravity: 1.012, gravityUnit: 'sg', temp: 66.5 });
+    // 66.5 °F = 19.17 °C (NIST SP 811 §B.9): the API takes °C.
+    expect(delivered('readings')[0]).toMatchObject({ sg: 1.012, tempC: expect.closeTo(19.1667, 4) });
   });
 
-  it('gives the SG limit, not the °P one, for "1015" typed in SG', async () => {
+  it('gives the SG limit, not a °P or °Bx one, for "1015" typed in SG', async () => {
     render(withQueries(<ReadingForm batchId={1} readings={[]} unitSystem="us" />));
     fireEvent.click(screen.getByRole('button', { name: 'Hydrometer' }));
     fireEvent.change(screen.getByLabelText('Gravity (SG)'), { target: { value: '1015' } });
     fireEvent.submit(screen.getByRole('form', { name: 'Log a reading' }));
-    expect(await screen.findByText('A specific gravity is between 0.980 and 1.200: did you mean 1.015?')).toBeTruthy();
-    expect(screen.queryByText(/at most 40/)).toBeNull();
+    expect(await screen.findByText('Gravity must be at most 1.200 SG')).toBeTruthy();
+    expect(screen.queryByText(/must be at most [\d.]+ °(P|Bx)/)).toBeNull();
     await settle();
     expect(delivered('readings')).toEqual([]);
   });

@@ -1,11 +1,12 @@
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
-import { zodResolver } from '@hookform/resolvers/zod';
 import { Button, TextField, useToast } from '../../../components/ui';
 import { dRestTriggerSg } from '../../../../shared/brewing';
 import { cellarPlanSchema, type CellarPlanInput, type CellarPlanView } from '../../../../shared/schemas/cellar';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
-import { displayUnit } from '../../../lib/units';
+import { show } from '../../../lib/units';
+import { quantityResolver } from '../../../lib/quantity-resolver';
+import { QuantityField } from '../../../components/ui/quantity-field';
 import { applyServerErrors } from '../../../lib/forms';
 import { useSavePlan } from '../api/plan';
 import { FormBanner } from '../../../components/ui/form-banner';
@@ -22,8 +23,7 @@ export function PlanForm({ canEdit, ...props }: PlanProps & { canEdit: boolean }
 }
 
 function PlanText({ plan, unitSystem }: PlanProps) {
-  const temp = displayUnit('temperature', unitSystem);
-  const t = (c: number) => `${temp.fromSi(c).toFixed(1)} ${temp.unit}`;
+  const t = (c: number) => show(unitSystem, 'temperature', c);
   const items: [string, string][] = [
     ['Planned FG', plan.plannedFg.toFixed(3)],
     [
@@ -56,20 +56,17 @@ function PlanText({ plan, unitSystem }: PlanProps) {
 }
 
 function PlanEditor({ batchId, plan, unitSystem }: PlanProps) {
-  const temp = displayUnit('temperature', unitSystem);
-  const d = (c: number) => Number(temp.fromSi(c).toFixed(1));
   const save = useSavePlan(batchId);
   const toast = useToast();
   const [banner, setBanner] = useState<string>();
-  const { register, handleSubmit, setError, formState, watch } = useForm<CellarPlanInput>({
-    resolver: zodResolver(cellarPlanSchema),
+  const { control, register, handleSubmit, setError, formState, watch } = useForm<CellarPlanInput>({
+    resolver: quantityResolver(cellarPlanSchema, unitSystem),
     defaultValues: {
       plannedFg: Number(plan.plannedFg.toFixed(3)),
-      tempUnit: unitSystem === 'us' ? 'f' : 'c',
-      primaryTemp: d(plan.primaryTempC),
+      primaryTempC: plan.primaryTempC,
       dRestPoints: plan.dRestPoints,
-      dRestTemp: d(plan.dRestTempC),
-      crashTemp: d(plan.crashTempC),
+      dRestTempC: plan.dRestTempC,
+      crashTempC: plan.crashTempC,
       co2Volumes: plan.co2Volumes,
       readingIntervalHours: plan.readingIntervalHours,
     },
@@ -77,8 +74,9 @@ function PlanEditor({ batchId, plan, unitSystem }: PlanProps) {
   const e = formState.errors;
   const num = { setValueAs: optionalNumber } as const;
   const [fg, points] = watch(['plannedFg', 'dRestPoints']);
+  const { shape } = cellarPlanSchema;
   const trigger =
-    Number.isFinite(fg) && Number.isFinite(points) && points >= 0 && points <= 20 && fg >= 0.98 && fg <= 1.2
+    shape.plannedFg.safeParse(fg).success && shape.dRestPoints.safeParse(points).success
       ? dRestTriggerSg(fg, points)
       : null;
   const onSubmit = handleSubmit(async (values) => {
@@ -112,24 +110,15 @@ function PlanEditor({ batchId, plan, unitSystem }: PlanProps) {
           {...register('dRestPoints', num)}
           error={e.dRestPoints?.message}
         />
-        <TextField
-          label={`Primary (${temp.unit})`}
-          inputMode="decimal"
-          {...register('primaryTemp', num)}
-          error={e.primaryTemp?.message}
+        <QuantityField
+          control={control}
+          name="primaryTempC"
+          label="Primary"
+          quantity="temperature"
+          system={unitSystem}
         />
-        <TextField
-          label={`D-rest (${temp.unit})`}
-          inputMode="decimal"
-          {...register('dRestTemp', num)}
-          error={e.dRestTemp?.message}
-        />
-        <TextField
-          label={`Crash (${temp.unit})`}
-          inputMode="decimal"
-          {...register('crashTemp', num)}
-          error={e.crashTemp?.message}
-        />
+        <QuantityField control={control} name="dRestTempC" label="D-rest" quantity="temperature" system={unitSystem} />
+        <QuantityField control={control} name="crashTempC" label="Crash" quantity="temperature" system={unitSystem} />
         <TextField
           label="Target CO₂ (volumes)"
           inputMode="decimal"

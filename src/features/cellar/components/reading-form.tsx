@@ -1,34 +1,31 @@
 import { useState } from 'react';
 import { useForm, type Resolver } from 'react-hook-form';
-import { zodResolver } from '@hookform/resolvers/zod';
 import { Button, SelectField, SuggestionChip, TextField, cx } from '../../../components/ui';
 import {
   READING_METHOD_LABELS,
   READING_METHODS,
   readingEntrySchema,
-  type GravityUnit,
   type ReadingEntryInput,
   type ReadingMethod,
   type ReadingView,
-  type TempUnit,
 } from '../../../../shared/schemas/cellar';
+import { showQuantity, unitBySymbol } from '../../../../shared/quantities';
+import { QuantityField } from '../../../components/ui/quantity-field';
+import { quantityResolver } from '../../../lib/quantity-resolver';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
-import { displayUnit } from '../../../lib/units';
+import { show } from '../../../lib/units';
 import { useLogCellarEntry } from '../api/log-cellar-entry';
 import { useSubmitOnce } from '../../../lib/use-submit-once';
 import { optionalNumber } from './form-values';
 
-const UNIT_LABEL = { sg: 'SG', plato: '°P', brix: '°Bx' } as const;
-
-/** What the form holds while a person types: nothing measured until they type or tap it. */
+/** What the form holds while a person types (in SI, as the API takes it): nothing measured until typed or tapped. */
 interface ReadingDraft {
   kind: 'reading';
   method?: ReadingMethod;
-  gravity?: number;
-  gravityUnit: GravityUnit;
+  sg?: number;
+  brix?: number;
   originalBrix?: number;
-  temp?: number;
-  tempUnit: TempUnit;
+  tempC?: number;
   ph?: number;
   note?: string;
 }
@@ -58,26 +55,34 @@ export function ReadingForm({
   const last = readings[readings.length - 1];
   const usual = usualMethod(readings);
   const knockoutBrix = readings.find((r) => r.enteredUnit === 'brix')?.enteredValue;
-  const temp = displayUnit('temperature', unitSystem);
-  const lastTemp =
-    last?.tempC === null || last?.tempC === undefined ? undefined : temp.fromSi(last.tempC).toFixed(1);
-  const { register, handleSubmit, watch, setValue, reset, formState } = useForm<
+  const lastTempC = last?.tempC ?? undefined;
+  // A hydrometer is read in SG or °P; the form holds SG either way.
+  const [scale, setScale] = useState<'SG' | '°P'>('SG');
+  const gravityUnit = unitBySymbol('gravity', unitSystem, scale);
+  const { control, register, handleSubmit, watch, setValue, reset, formState } = useForm<
     ReadingDraft,
     unknown,
     ReadingEntryInput
   >({
     // The draft may lack the method and gravity; the shared schema says what is missing.
-    resolver: zodResolver(readingEntrySchema) as unknown as Resolver<ReadingDraft, unknown, ReadingEntryInput>,
-    defaultValues: { kind: 'reading', gravityUnit: 'sg', tempUnit: unitSystem === 'us' ? 'f' : 'c' },
+    resolver: quantityResolver(readingEntrySchema, unitSystem) as unknown as Resolver<
+      ReadingDraft,
+      unknown,
+      ReadingEntryInput
+    >,
+    defaultValues: { kind: 'reading' },
   });
   const method = watch('method');
-  const gravityUnit = watch('gravityUnit');
   const errors = formState.errors;
   const { once, busy } = useSubmitOnce();
 
   const onSubmit = once(
     handleSubmit(async (values) => {
-      const label = `Reading ${values.gravity} ${UNIT_LABEL[values.gravityUnit]}${values.temp !== undefined ? ` · ${values.temp} ${temp.unit}` : ''}`;
+      const gravity =
+        values.brix !== undefined
+          ? `${values.brix} °Bx`
+          : showQuantity('gravity', unitSystem, values.sg!, { unit: gravityUnit });
+      const label = `Reading ${gravity}${values.tempC !== undefined ? ` · ${show(unitSystem, 'temperature', values.tempC)}` : ''}`;
       await log(values, label);
       setSaved(label);
       reset();
@@ -85,8 +90,12 @@ export function ReadingForm({
   );
   const choose = (m: ReadingMethod) => {
     setValue('method', m, { shouldValidate: formState.isSubmitted });
-    setValue('gravityUnit', m === 'refractometer' ? 'brix' : gravityUnit === 'brix' ? 'sg' : gravityUnit);
-    if (m !== 'refractometer') setValue('originalBrix', undefined);
+    // A refractometer reads °Brix, the others SG: what was typed for the other kind of instrument is dropped.
+    if (m === 'refractometer') setValue('sg', undefined);
+    else {
+      setValue('brix', undefined);
+      setValue('originalBrix', undefined);
+    }
   };
 
   return (
@@ -120,36 +129,51 @@ export function ReadingForm({
           </p>
         )}
       </fieldset>
-      <div className="grid grid-cols-[1fr_auto] items-end gap-3">
-        <TextField
-          label={`Gravity (${UNIT_LABEL[gravityUnit]})`}
-          inputMode="decimal"
-          autoComplete="off"
+      {method === 'refractometer' ? (
+        <QuantityField
+          control={control}
+          name="brix"
+          label="Gravity"
+          quantity="brix"
+          system={unitSystem}
+          optional
           className="min-h-[72px] text-reading tabular-nums"
-          placeholder={gravityUnit === 'sg' ? (last ? last.sg.toFixed(3) : '1.050') : '12.0'}
-          {...register('gravity', { setValueAs: optionalNumber })}
-          error={errors.gravity?.message}
+          placeholder="12.0"
         />
-        {method !== 'refractometer' && (
+      ) : (
+        <div className="grid grid-cols-[1fr_auto] items-end gap-3">
+          <QuantityField
+            control={control}
+            name="sg"
+            label="Gravity"
+            quantity="gravity"
+            system={unitSystem}
+            unit={gravityUnit}
+            optional
+            className="min-h-[72px] text-reading tabular-nums"
+            placeholder={scale === 'SG' ? (last ? last.sg.toFixed(3) : '1.050') : '12.0'}
+          />
           <SelectField
             label="Unit"
             className="min-h-[72px] text-lg"
-            {...register('gravityUnit')}
-            error={errors.gravityUnit?.message}
+            value={scale}
+            onChange={(e) => setScale(e.target.value === '°P' ? '°P' : 'SG')}
           >
-            <option value="sg">SG</option>
-            <option value="plato">°P</option>
+            <option value="SG">SG</option>
+            <option value="°P">°P</option>
           </SelectField>
-        )}
-      </div>
+        </div>
+      )}
       {method === 'refractometer' && (
         <div className="space-y-2">
-          <TextField
-            label="Reading at knockout (°Bx)"
+          <QuantityField
+            control={control}
+            name="originalBrix"
+            label="Reading at knockout"
             hint="Leave empty for unfermented wort; with it, the reading is corrected for alcohol."
-            inputMode="decimal"
-            {...register('originalBrix', { setValueAs: optionalNumber })}
-            error={errors.originalBrix?.message}
+            quantity="brix"
+            system={unitSystem}
+            optional
           />
           {knockoutBrix !== undefined && (
             <SuggestionChip label="First reading" onPick={() => setValue('originalBrix', knockoutBrix)}>
@@ -160,16 +184,18 @@ export function ReadingForm({
       )}
       <div className="grid grid-cols-2 gap-3">
         <div className="space-y-2">
-          <TextField
-            label={`Temperature (${temp.unit})`}
-            inputMode="decimal"
+          <QuantityField
+            control={control}
+            name="tempC"
+            label="Temperature"
+            quantity="temperature"
+            system={unitSystem}
+            optional
             className="min-h-[56px] text-2xl tabular-nums"
-            {...register('temp', { setValueAs: optionalNumber })}
-            error={errors.temp?.message}
           />
-          {lastTemp !== undefined && (
-            <SuggestionChip label="Last" onPick={() => setValue('temp', Number(lastTemp))}>
-              {lastTemp} {temp.unit}
+          {lastTempC !== undefined && (
+            <SuggestionChip label="Last" onPick={() => setValue('tempC', lastTempC)}>
+              {show(unitSystem, 'temperature', lastTempC)}
             </SuggestionChip>
           )}
         </div>
@@ -186,9 +212,6 @@ export function ReadingForm({
         {...register('note', { setValueAs: (v: string) => (v ? v : undefined) })}
         error={errors.note?.message}
       />
-      {errors.gravityUnit && method === 'refractometer' && (
-        <p className="text-sm text-ember-700">{errors.gravityUnit.message}</p>
-      )}
       <Button type="submit" size="xl" className="w-full" busy={busy}>
         Save reading
       </Button>

@@ -1,6 +1,5 @@
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
-import { zodResolver } from '@hookform/resolvers/zod';
 import {
   Button,
   Caution,
@@ -17,35 +16,36 @@ import {
   Th,
   useToast,
 } from '../../../components/ui';
-import { kpaToPsi, lToUsBbl } from '../../../../shared/brewing';
+import { QUANTITIES, unitBySymbol } from '../../../../shared/quantities';
+import { QuantityField } from '../../../components/ui/quantity-field';
+import { quantityResolver } from '../../../lib/quantity-resolver';
 import { vesselInputSchema, type VesselInput, type VesselView } from '../../../../shared/schemas/cellar';
 import { VESSEL_STATUS_LABELS, VESSEL_TYPE_LABELS } from '../labels';
 import { useCurrentUser } from '../../../app/current-user';
 import { applyServerErrors } from '../../../lib/forms';
-import { showVolume } from '../../../lib/units';
+import { show, showVolume } from '../../../lib/units';
 import { useSaveVessel, useVessels } from '../api/vessels';
 import { useDeleteVessel, useMarkClean } from '../api/vessel-state';
 import { FormBanner } from '../../../components/ui/form-banner';
 import { useSubmitOnce } from '../../../lib/use-submit-once';
-import { optionalNumber } from './form-values';
 
 function VesselForm({ vessel, onDone }: { vessel?: VesselView; onDone: () => void }) {
-  const me = useCurrentUser();
-  const us = me.brewery.unitSystem === 'us';
+  const system = useCurrentUser().brewery.unitSystem;
   const save = useSaveVessel();
   const toast = useToast();
   const [banner, setBanner] = useState<string>();
-  const { register, handleSubmit, setError, formState } = useForm<VesselInput>({
-    resolver: zodResolver(vesselInputSchema),
+  // A pilot fermenter is sized in gallons (or litres), a production tank in barrels (or hectolitres).
+  const volumeUnits = QUANTITIES.volume.units[system];
+  const [capacityUnit, setCapacityUnit] = useState(
+    () => volumeUnits[vessel && vessel.capacityL >= 200 ? 1 : 0] ?? volumeUnits[0],
+  );
+  const { control, register, handleSubmit, setError, formState } = useForm<VesselInput>({
+    resolver: quantityResolver(vesselInputSchema, system),
     defaultValues: {
       name: vessel?.name ?? '',
       type: vessel?.type ?? 'fermenter',
-      capacity: vessel ? Number((us ? lToUsBbl(vessel.capacityL) : vessel.capacityL).toFixed(2)) : undefined,
-      capacityUnit: us ? 'bbl' : 'l',
-      ratedPressure: vessel
-        ? Number((us ? kpaToPsi(vessel.ratedPressureKpa) : vessel.ratedPressureKpa).toFixed(1))
-        : undefined,
-      pressureUnit: us ? 'psi' : 'kpa',
+      capacityL: vessel?.capacityL,
+      ratedPressureKpa: vessel?.ratedPressureKpa,
     },
   });
   const e = formState.errors;
@@ -68,28 +68,34 @@ function VesselForm({ vessel, onDone }: { vessel?: VesselView; onDone: () => voi
         <option value="bright_tank">Bright tank</option>
       </SelectField>
       <div className="grid grid-cols-[1fr_6rem] gap-3">
-        <TextField
+        <QuantityField
+          control={control}
+          name="capacityL"
           label="Capacity"
-          inputMode="decimal"
-          {...register('capacity', { setValueAs: optionalNumber })}
-          error={e.capacity?.message}
+          quantity="volume"
+          system={system}
+          unit={capacityUnit}
         />
-        <SelectField label="Unit" {...register('capacityUnit')}>
-          <option value="bbl">bbl</option>
-          <option value="l">L</option>
-        </SelectField>
-        <TextField
-          label="Rated working pressure (gauge)"
-          hint="From the vessel's nameplate."
-          inputMode="decimal"
-          {...register('ratedPressure', { setValueAs: optionalNumber })}
-          error={e.ratedPressure?.message}
-        />
-        <SelectField label="Unit" {...register('pressureUnit')}>
-          <option value="psi">psi</option>
-          <option value="kpa">kPa</option>
+        <SelectField
+          label="Unit"
+          value={capacityUnit.unit}
+          onChange={(event) => setCapacityUnit(unitBySymbol('volume', system, event.target.value))}
+        >
+          {volumeUnits.map((u) => (
+            <option key={u.unit} value={u.unit}>
+              {u.unit}
+            </option>
+          ))}
         </SelectField>
       </div>
+      <QuantityField
+        control={control}
+        name="ratedPressureKpa"
+        label="Rated working pressure (gauge)"
+        hint="From the vessel's nameplate; 0 for a vessel that holds no pressure."
+        quantity="pressure"
+        system={system}
+      />
       <div className="flex gap-2">
         <Button type="submit" busy={save.isPending}>
           {vessel ? 'Save vessel' : 'Add vessel'}
@@ -163,7 +169,6 @@ export function VesselsPage() {
   const toast = useToast();
   const [editing, setEditing] = useState<VesselView | 'new' | null>(null);
   const isHead = me.role === 'head_brewer';
-  const us = me.brewery.unitSystem === 'us';
   if (isPending) return <Loading label="Loading vessels" />;
   if (error) return <ErrorState error={error} onRetry={() => void refetch()} />;
   const act = (p: Promise<unknown>, done: string) =>
@@ -205,9 +210,7 @@ export function VesselsPage() {
                 <Td className="font-semibold">{v.name}</Td>
                 <Td>{VESSEL_TYPE_LABELS[v.type]}</Td>
                 <Td>{showVolume(me.brewery.unitSystem, v.capacityL)}</Td>
-                <Td>
-                  {us ? `${kpaToPsi(v.ratedPressureKpa).toFixed(0)} psi` : `${v.ratedPressureKpa.toFixed(0)} kPa`}
-                </Td>
+                <Td>{show(me.brewery.unitSystem, 'pressure', v.ratedPressureKpa, 0)}</Td>
                 <Td>{VESSEL_STATUS_LABELS[v.status]}</Td>
                 <Td className="space-x-2 whitespace-nowrap text-right">
                   {v.status === 'needs_cleaning' && (
