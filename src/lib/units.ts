@@ -3,7 +3,7 @@
  * come from the quantities table (shared/quantities); this file only formats the brewery's own kinds of amount.
  */
 import { lbToKg, roundForMeasuring, type MeasuredAmount } from '../../shared/brewing';
-import { displayUnit, showQuantity, type QuantityId } from '../../shared/quantities';
+import { displayUnit, showQuantity, wordAmounts, type AmountsMessage, type QuantityId } from '../../shared/quantities';
 import type { UnitSystem } from '../../shared/schemas/auth';
 
 // A batch or tank volume in words is shared with the server's messages (fermenter size).
@@ -12,6 +12,11 @@ export { showVolume, displayUnit } from '../../shared/quantities';
 /** A number with its unit in the brewery's system, e.g. "152.6 °F" or "37.9 L". */
 export function show(system: UnitSystem, quantity: QuantityId, si: number, decimals?: number): string {
   return showQuantity(quantity, system, si, { decimals });
+}
+
+/** A warning or refusal from shared/brewing in the brewery's units: its amounts when it carries them, else its text. */
+export function sayInUnits(said: { message: string; worded?: AmountsMessage }, system: UnitSystem): string {
+  return said.worded ? wordAmounts(said.worded, system) : said.message;
 }
 
 /** The number a field shows for an SI value, in the brewery's first unit and its decimals (no unit). */

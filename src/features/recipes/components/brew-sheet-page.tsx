@@ -13,7 +13,7 @@ import { SALT_LABELS } from '../../../../shared/schemas/recipes';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
 import { Button, Caution, ErrorState, LinkButton, Loading } from '../../../components/ui';
 import { useCurrentUser } from '../../../app/current-user';
-import { show, showGrain, showMeasured, showSmallWeight, showVolume } from '../../../lib/units';
+import { sayInUnits, show, showGrain, showMeasured, showSmallWeight, showVolume } from '../../../lib/units';
 import { useScale } from '../api/scale-version';
 import type { ScaleResult } from '../../../../shared/contract/recipes';
 import { useScaleTarget } from './scale-page';
@@ -74,7 +74,7 @@ function headPressure(system: UnitSystem, tempC: number, volumes: number): strin
   try {
     return formatGaugePressure(headPressureKpa(tempC, volumes), system);
   } catch (error) {
-    if (error instanceof BrewingInputError) return error.message;
+    if (error instanceof BrewingInputError) return sayInUnits(error, system);
     throw error;
   }
 }

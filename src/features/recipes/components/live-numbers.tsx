@@ -19,7 +19,7 @@ import {
   type RecipeVersionContent,
 } from '../../../../shared/schemas/recipes';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
-import { show, showVolume } from '../../../lib/units';
+import { sayInUnits, show, showVolume } from '../../../lib/units';
 import { cx } from '../../../components/ui';
 
 export interface LiveNumbers {
@@ -183,7 +183,7 @@ export function LiveNumbersPanel({ live, system }: { live: LiveNumbers; system: 
         <ul aria-label="Warnings" className="space-y-1">
           {live.warnings.map((w, i) => (
             <li key={i} className="rounded-lg border-l-4 border-brass-500 bg-brass-100 px-3 py-2 text-sm text-ink-900">
-              {w.message}
+              {sayInUnits(w, system)}
             </li>
           ))}
         </ul>

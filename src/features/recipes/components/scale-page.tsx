@@ -14,7 +14,7 @@ import {
 } from '../../../components/ui';
 import { useCurrentUser } from '../../../app/current-user';
 import { ApiError } from '../../../lib/api-client';
-import { displayUnit, showVolume } from '../../../lib/units';
+import { displayUnit, sayInUnits, showVolume } from '../../../lib/units';
 import { batchVolumeField, issueMessage } from '../../../../shared/quantities/field';
 import { useEquipment } from '../../library/api/equipment';
 import { useSaveScaled } from '../api/save-recipe';
@@ -194,7 +194,7 @@ export function ScalePage() {
               key={i}
               className="rounded-lg border-l-4 border-ember-600 bg-ember-100 px-3 py-2 font-medium text-ember-700"
             >
-              {w.message}
+              {sayInUnits(w, system)}
             </li>
           ))}
         </ul>
