@@ -20,7 +20,7 @@ import { applyServerErrors } from '../../../lib/forms';
 import { useInviteTeammate, useTeam, useUpdateMember, type Team } from '../api/team';
 import { FormBanner } from '../../../components/ui/form-banner';
 import { ConfirmButton } from '../../../components/confirm-button';
-import { useCurrentUser } from '../../../app/current-user';
+import { useCurrentUser } from '../../../lib/current-user';
 
 function InviteForm() {
   const invite = useInviteTeammate();
