@@ -16,8 +16,8 @@ source .data-test/env.sh
 set +e
 
 status=0
-echo "== Type check (tsc --noEmit)"
-npx tsc --noEmit || status=1
+echo "== Type check (tsc -b: shared, server, client and browser-test projects)"
+npx tsc -b || status=1
 
 echo "== Client build (for the browser tests)"
 # NODE_ENV=test is exported for the tests; the client is always built for production.

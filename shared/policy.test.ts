@@ -14,6 +14,7 @@ describe('access policy', () => {
   it('answers can() from the table for every role and for nobody signed in', () => {
     for (const action of ACTIONS) {
       const rule = PINNED_POLICY[action];
+      if (rule === undefined) throw new Error(`${action} is missing from tests/policy-pinned.ts`);
       expect([action, can(null, action)]).toEqual([action, rule === 'public']);
       for (const role of ROLES)
         expect([action, role, can(role, action)]).toEqual([

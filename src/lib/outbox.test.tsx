@@ -1,5 +1,5 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { backoffMs, createOutbox, sendItem, type OutboxItem, type OutboxStore, type SendResult } from './outbox';
+import { backoffMs, createOutbox, sendItem, type OutboxItem, type OutboxStore, type SendResult } from './outbox-queue';
 
 /** The outbox's store kept in memory, standing in for IndexedDB (which jsdom lacks). */
 function memoryStore(): OutboxStore & { items: OutboxItem[] } {
@@ -124,7 +124,7 @@ describe('sending one item', () => {
       idempotencyKey: 'k',
       capturedAt: new Date().toISOString(),
     } as OutboxItem;
-    expect(await sendItem(item)).toEqual({
+    expect(await sendItem(item, 'dev-test')).toEqual({
       kind: 'rejected',
       message: 'Some fields need attention: Temperature (°C) must be at most 110',
     });

@@ -9,7 +9,7 @@ import { createApp } from '../../server/app';
 import { SESSION_COOKIE } from '../../server/middlewares/session';
 import { routeTable, type RouteEntry } from '../../server/routes/define';
 import { ROLES, type Role } from '../../shared/schemas/roles';
-import { GOOD_PASSWORD, createTestBrewery, type TestBrewery } from './helpers';
+import { GOOD_PASSWORD, cookiePair, createTestBrewery, type TestBrewery } from './helpers';
 import { pinnedAllows } from '../policy-pinned';
 
 type Caller = Role | 'signed-out';
@@ -143,8 +143,9 @@ async function signInCookie(caller: Role): Promise<string> {
     .set('x-kettlewright', '1')
     .send({ email: t.users[caller].email, password: GOOD_PASSWORD });
   if (res.status !== 200) throw new Error(`sign-in as ${caller} answered ${res.status}`);
-  const line = (res.headers['set-cookie'] as unknown as string[]).find((c) => c.startsWith(`${SESSION_COOKIE}=`))!;
-  return line.split(';')[0];
+  const line = (res.headers['set-cookie'] as unknown as string[]).find((c) => c.startsWith(`${SESSION_COOKIE}=`));
+  if (!line) throw new Error(`sign-in as ${caller} set no session cookie`);
+  return cookiePair(line);
 }
 
 /** A live session for the caller: routes such as sign-out end it, so it is renewed when needed. */
