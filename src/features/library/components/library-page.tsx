@@ -27,8 +27,9 @@ import { useCurrentUser, useCan } from '../../../lib/current-user';
 import { applyServerErrors } from '../../../lib/forms';
 import { show, showVolume } from '../../../lib/units';
 import { UnitField, asNumber } from '../../../components/ui/unit-field';
-import { useEquipment, useRemoveEquipment, useSaveEquipment, type EquipmentRow } from '../api/equipment';
-import { useIngredients, useRemoveIngredient, useSaveIngredient, type IngredientRow } from '../api/ingredients';
+import { useEquipment, useRemoveEquipment, useSaveEquipment } from '../api/equipment';
+import { useIngredients, useRemoveIngredient, useSaveIngredient } from '../api/ingredients';
+import type { EquipmentRow, IngredientRow } from '../../../../shared/contract/recipes';
 import { FormBanner } from '../../../components/ui/form-banner';
 import { ConfirmButton } from '../../../components/confirm-button';
 

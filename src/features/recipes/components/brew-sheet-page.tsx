@@ -14,7 +14,8 @@ import type { UnitSystem } from '../../../../shared/schemas/auth';
 import { Button, Caution, ErrorState, LinkButton, Loading } from '../../../components/ui';
 import { useCurrentUser } from '../../../lib/current-user';
 import { show, showGrain, showMeasured, showSmallWeight, showVolume } from '../../../lib/units';
-import { useScale, type ScaleResult } from '../api/scale-version';
+import { useScale } from '../api/scale-version';
+import type { ScaleResult } from '../../../../shared/contract/recipes';
 import { useScaleTarget } from './scale-page';
 import { showAdjunct } from './scale-view';
 

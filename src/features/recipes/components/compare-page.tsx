@@ -5,7 +5,7 @@ import { useCurrentUser } from '../../../lib/current-user';
 import { show, showGrain, showSmallWeight, showVolume } from '../../../lib/units';
 import { useComparison } from '../api/compare-versions';
 import type { Difference } from '../../../../shared/schemas/recipes';
-import type { VersionDetail } from '../api/get-version';
+import type { VersionDetail } from '../../../../shared/contract/recipes';
 
 /** Plain words for the paths in a version's document. */
 const SECTION_NAMES: Record<string, string> = {

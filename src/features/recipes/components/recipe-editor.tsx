@@ -37,8 +37,7 @@ import {
 } from '../../../../shared/schemas/recipes';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
 import { Button, Card, SelectField, TextAreaField, TextField, cx } from '../../../components/ui';
-import type { EquipmentRow } from '../../library/api/equipment';
-import type { IngredientRow } from '../../library/api/ingredients';
+import type { EquipmentRow, IngredientRow } from '../../../../shared/contract/recipes';
 import { LiveNumbersPanel, NumbersBar, useLiveNumbers } from './live-numbers';
 import { showAdjunct } from './scale-view';
 import { UnitField, asNumber } from '../../../components/ui/unit-field';

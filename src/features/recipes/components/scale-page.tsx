@@ -17,7 +17,8 @@ import { ApiError } from '../../../lib/api-client';
 import { UNITS, showVolume } from '../../../lib/units';
 import { useEquipment } from '../../library/api/equipment';
 import { useSaveScaled } from '../api/save-recipe';
-import { scaleSearch, useScale, type ScaleResult, type ScaleTarget } from '../api/scale-version';
+import { scaleSearch, useScale, type ScaleTarget } from '../api/scale-version';
+import type { ScaleResult } from '../../../../shared/contract/recipes';
 import { ScaleTable } from './scale-view';
 
 /** The scale target from the address, so a scale can be linked, reloaded and printed. */

@@ -4,7 +4,7 @@ import type { UnitSystem } from '../../../../shared/schemas/auth';
 import { SALT_LABELS } from '../../../../shared/schemas/recipes';
 import { Table, Td, Th, cx } from '../../../components/ui';
 import { show, showGrain, showMeasured, showSmallWeight } from '../../../lib/units';
-import type { ScaleResult } from '../api/scale-version';
+import type { ScaleResult } from '../../../../shared/contract/recipes';
 
 /** An adjunct or spice amount, rounded for measuring in the brewery's units. */
 export function showAdjunct(a: ComputedAdjunct, system: UnitSystem): string {
