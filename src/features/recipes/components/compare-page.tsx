@@ -51,7 +51,7 @@ function label(path: string, side: VersionDetail): string {
 function fmt(path: string, v: Difference['a'], system: UnitSystem): string {
   if (v === null) return '—';
   if (typeof v !== 'number') return String(v);
-  if (path.endsWith('TempC')) return show(system, 'tempC', v);
+  if (path.endsWith('TempC')) return show(system, 'temperature', v);
   if (path.startsWith('computed.')) return String(v);
   if (path.endsWith('weightKg')) return showGrain(system, v);
   if (path.endsWith('weightG')) return showSmallWeight(system, v);
