@@ -1,114 +1,63 @@
-import { z } from 'zod';
-import {
-  compareQuerySchema,
-  createRecipeSchema,
-  idParam,
-  saveScaledSchema,
-  saveVersionSchema,
-  scaleQuerySchema,
-  updateRecipeSchema,
-} from '../../shared/schemas/recipes';
-import { defineRouter, actor } from './define';
+import { recipeRoutes } from '../../shared/contract/recipes';
+import { defineRouter } from './define';
 import * as recipes from '../services/recipes';
 import { scaleVersion } from '../services/recipe-plans';
 import { notFound } from '../errors';
 
-const recipeParams = z.strictObject({ recipeId: idParam });
-const versionParams = z.strictObject({ recipeId: idParam, versionId: idParam });
-const ids = (req: { params: Record<string, unknown> }) => ({
-  recipeId: Number(req.params.recipeId),
-  versionId: Number(req.params.versionId),
-});
-
-export const recipesRouter = defineRouter('/api/recipes', [
-  {
-    method: 'get',
-    path: '/',
+export const recipesRouter = defineRouter('/api/recipes', recipeRoutes, {
+  list: {
     access: 'recipe.read',
-    handler: async (req, res) => {
-      res.json(await recipes.listRecipes(actor(req).breweryId));
+    handler: async ({ user, res }) => {
+      res.json(await recipes.listRecipes(user.breweryId));
     },
   },
-  {
-    method: 'post',
-    path: '/',
+  create: {
     access: 'recipe.edit',
-    body: createRecipeSchema,
-    handler: async (req, res) => {
-      res.status(201).json(await recipes.createRecipe(actor(req), req.body));
+    handler: async ({ user, body, res }) => {
+      res.status(201).json(await recipes.createRecipe(user, body));
     },
   },
-  {
-    method: 'get',
-    path: '/:recipeId',
+  get: {
     access: 'recipe.read',
-    params: recipeParams,
-    handler: async (req, res) => {
-      res.json(await recipes.getRecipe(actor(req).breweryId, ids(req).recipeId));
+    handler: async ({ user, params, res }) => {
+      res.json(await recipes.getRecipe(user.breweryId, params.recipeId));
     },
   },
-  {
-    method: 'patch',
-    path: '/:recipeId',
+  update: {
     access: 'recipe.edit',
-    params: recipeParams,
-    body: updateRecipeSchema,
-    handler: async (req, res) => {
-      res.json(await recipes.updateRecipe(actor(req).breweryId, ids(req).recipeId, req.body));
+    handler: async ({ user, params, body, res }) => {
+      res.json(await recipes.updateRecipe(user.breweryId, params.recipeId, body));
     },
   },
-  {
-    method: 'post',
-    path: '/:recipeId/versions',
+  addVersion: {
     access: 'recipe.edit',
-    params: recipeParams,
-    body: saveVersionSchema,
-    handler: async (req, res) => {
-      res.status(201).json(await recipes.addVersion(actor(req), ids(req).recipeId, req.body));
+    handler: async ({ user, params, body, res }) => {
+      res.status(201).json(await recipes.addVersion(user, params.recipeId, body));
     },
   },
-  {
-    method: 'get',
-    path: '/:recipeId/compare',
+  compare: {
     access: 'recipe.read',
-    params: recipeParams,
-    query: compareQuerySchema,
-    handler: async (req, res) => {
-      const { a, b } = req.query as unknown as z.infer<typeof compareQuerySchema>;
-      res.json(await recipes.compareVersions(actor(req).breweryId, ids(req).recipeId, a, b));
+    handler: async ({ user, params, query, res }) => {
+      res.json(await recipes.compareVersions(user.breweryId, params.recipeId, query.a, query.b));
     },
   },
-  {
-    method: 'get',
-    path: '/:recipeId/versions/:versionId',
+  getVersion: {
     access: 'recipe.read',
-    params: versionParams,
-    handler: async (req, res) => {
-      const { recipeId, versionId } = ids(req);
-      res.json(await recipes.getVersion(actor(req).breweryId, recipeId, versionId));
+    handler: async ({ user, params, res }) => {
+      res.json(await recipes.getVersion(user.breweryId, params.recipeId, params.versionId));
     },
   },
-  {
-    method: 'patch',
-    path: '/:recipeId/versions/:versionId',
+  updateVersion: {
     access: 'recipe.edit',
-    params: versionParams,
-    body: saveVersionSchema,
-    handler: async (req, res) => {
-      const { recipeId, versionId } = ids(req);
-      res.json(await recipes.updateVersion(actor(req), recipeId, versionId, req.body));
+    handler: async ({ user, params, body, res }) => {
+      res.json(await recipes.updateVersion(user, params.recipeId, params.versionId, body));
     },
   },
-  {
-    method: 'get',
-    path: '/:recipeId/versions/:versionId/scale',
+  scale: {
     access: 'recipe.read',
-    params: versionParams,
-    query: scaleQuerySchema,
-    handler: async (req, res) => {
-      const { recipeId, versionId } = ids(req);
-      const s = await scaleVersion(actor(req).breweryId, versionId, req.query as z.infer<typeof scaleQuerySchema>);
-      if (s.recipe.id !== recipeId) throw notFound('This recipe version');
+    handler: async ({ user, params, query, res }) => {
+      const s = await scaleVersion(user.breweryId, params.versionId, query);
+      if (s.recipe.id !== params.recipeId) throw notFound('This recipe version');
       res.json({
         recipe: { id: s.recipe.id, name: s.recipe.name, style: s.recipe.style },
         version: {
@@ -123,15 +72,10 @@ export const recipesRouter = defineRouter('/api/recipes', [
       });
     },
   },
-  {
-    method: 'post',
-    path: '/:recipeId/versions/:versionId/scaled',
+  saveScaled: {
     access: 'recipe.edit',
-    params: versionParams,
-    body: saveScaledSchema,
-    handler: async (req, res) => {
-      const { recipeId, versionId } = ids(req);
-      res.status(201).json(await recipes.saveScaledVersion(actor(req), recipeId, versionId, req.body));
+    handler: async ({ user, params, body, res }) => {
+      res.status(201).json(await recipes.saveScaledVersion(user, params.recipeId, params.versionId, body));
     },
   },
-]);
+});

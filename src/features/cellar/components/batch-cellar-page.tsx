@@ -126,13 +126,13 @@ export function BatchCellarPage() {
             ...data.readings.map((r) => ({
               at: r.takenAt,
               key: `r${r.id}`,
-              text: `${r.sg.toFixed(3)} (${r.plato.toFixed(1)} °P)${r.tempC !== null ? ` · ${show(system, 'tempC', r.tempC)}` : ''}${r.ph !== null ? ` · pH ${r.ph}` : ''} · ${READING_METHOD_LABELS[r.method]}${r.corrected ? ' · corrected' : ''}`,
+              text: `${r.sg.toFixed(3)} (${r.plato.toFixed(1)} °P)${r.tempC !== null ? ` · ${show(system, 'temperature', r.tempC)}` : ''}${r.ph !== null ? ` · pH ${r.ph}` : ''} · ${READING_METHOD_LABELS[r.method]}${r.corrected ? ' · corrected' : ''}`,
               who: r.authorName,
             })),
             ...data.actions.map((a) => ({
               at: a.at,
               key: `a${a.logEntryId}`,
-              text: `${CELLAR_ACTION_LABELS[a.action]}${a.tempC !== null ? ` · ${show(system, 'tempC', a.tempC)}` : ''}${a.volumeL !== null ? ` · ${show(system, 'volumeL', a.volumeL)}` : ''}${a.detail ? ` · ${a.detail}` : ''}${a.co2Volumes !== null ? ` · ${a.co2Volumes} vol` : ''}${a.note ? ` · “${a.note}”` : ''}`,
+              text: `${CELLAR_ACTION_LABELS[a.action]}${a.tempC !== null ? ` · ${show(system, 'temperature', a.tempC)}` : ''}${a.volumeL !== null ? ` · ${show(system, 'volume', a.volumeL)}` : ''}${a.detail ? ` · ${a.detail}` : ''}${a.co2Volumes !== null ? ` · ${a.co2Volumes} vol` : ''}${a.note ? ` · “${a.note}”` : ''}`,
               who: a.authorName,
             })),
           ]
