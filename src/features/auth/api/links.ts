@@ -1,7 +1,7 @@
 import { queryOptions, useMutation, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import type { ResetRequestInput, ResetPasswordInput, ChangePasswordInput } from '../../../../shared/schemas/auth';
-import { authKeys } from './me';
+import { authKeys } from '../../../lib/current-user';
 
 export const inviteQuery = (token: string) =>
   queryOptions({
