@@ -8,11 +8,12 @@ import { createHash } from 'node:crypto';
 import { QueryTypes, Transaction, UniqueConstraintError } from 'sequelize';
 import { sequelize } from '../config/database';
 import { Batch, BatchLogEntry, IdempotencyKey } from '../models';
-import { badRequest, conflict, notFound, unprocessable } from '../errors';
+import { badRequest, notFound, signedOff, unprocessable } from '../errors';
 import { fieldMessages } from '../middlewares/validate';
 import { LRUCache } from 'lru-cache';
 import {
   BREW_DAY_KINDS,
+  CLOSED_BY_SIGN_OFF,
   writeMetaSchema,
   type ChainCheck,
   type LogEntry,
@@ -296,7 +297,7 @@ async function append(
     batchId,
     meta.idempotencyKey,
     correctsEntryId,
-    BREW_DAY_KINDS.includes(kind),
+    CLOSED_BY_SIGN_OFF.includes(kind),
     transaction,
   );
   if (!state) throw notFound('This batch');
@@ -310,7 +311,7 @@ async function append(
   }
 
   const fields = entryFields(actor, batchId, input, meta, Number(state.lastSequence ?? 0) + 1, new Date());
-  if (Number(state.signed)) throw conflict('The brew day is signed off: add a correction instead.');
+  if (Number(state.signed)) throw signedOff('The brew day is signed off: add a correction instead.');
   if (correctsEntryId !== null) {
     if (state.targetKind === null) throw unprocessable('The entry to correct is not in this batch’s log.');
     if (state.targetKind === 'sign_off') throw unprocessable('A signature cannot be corrected.');

@@ -4,11 +4,11 @@
  */
 import { Op, Transaction, UniqueConstraintError } from 'sequelize';
 import { Batch, BatchLogEntry, CellarPlan, GravityReading, IN_FORCE, Vessel } from '../models';
-import { conflict, notFound, unprocessable } from '../errors';
+import { conflict, notFound, unprocessable, wrongStage } from '../errors';
 import { appendLogEntry, type LogActor } from './batch-log';
 import { assignVessel, changeBatchStatus, findBatch } from './batches';
 import { batchReadings } from './readings';
-import { packagingSummary } from './packaging';
+import { CELLAR_WORK_STATUSES, packagingSummary } from './packaging';
 import { batchActuals } from '../../shared/batches/brew-day';
 import {
   carbonationSetting,
@@ -23,7 +23,7 @@ import {
 } from '../../shared/brewing';
 import { formatGaugePressure, type CarbonationUnits } from '../../shared/brewing';
 import type { WriteMeta } from '../../shared/schemas/batch-log';
-import type { FrozenPlan } from '../../shared/schemas/batches';
+import { BATCH_STATUS_LABELS, type FrozenPlan } from '../../shared/schemas/batches';
 import {
   type ActionEntryInput,
   type ActionView,
@@ -280,9 +280,11 @@ export async function recordAction(
     {
       onInsert: async (_e, t) => {
         const batch = await findBatch(actor.breweryId, batchId, t);
-        if (!['fermenting', 'conditioning'].includes(batch.status)) {
-          throw conflict(
-            `Batch ${batch.number} is ${batch.status}: cellar work is logged while it ferments or conditions.`,
+        if (!CELLAR_WORK_STATUSES.includes(batch.status)) {
+          throw wrongStage(
+            batch.status,
+            CELLAR_WORK_STATUSES,
+            `Batch ${batch.number} is ${BATCH_STATUS_LABELS[batch.status].toLowerCase()}: cellar work is logged while it ferments or conditions.`,
           );
         }
         if (input.action === 'transfer') {

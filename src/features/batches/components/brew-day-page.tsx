@@ -6,7 +6,7 @@ import { Button, Card, ErrorState, LinkButton, Loading, TextAreaField, cx } from
 import { useCurrentUser } from '../../../app/current-user';
 import { outbox, useOutbox, type OutboxItem } from '../../../lib/outbox';
 import { useBatch } from '../api/get-batch';
-import { batchGroup, logEntry } from '../api/log-entry';
+import { batchGroup, batchLogUrl, logEntry } from '../api/log-entry';
 import { ActualsCard } from './actuals-card';
 import { BoilTimer } from './boil-timer';
 import { LogList } from './log-list';
@@ -263,7 +263,7 @@ export function BrewDayPage() {
         </div>
 
         <div className="space-y-4">
-          <OutboxPanel group={batchGroup(id)} timeZone={timeZone} />
+          <OutboxPanel group={batchGroup(id)} timeZone={timeZone} noteUrl={batchLogUrl(id)} />
           <BoilTimer
             boilStartedAt={done.get('boil-start')?.at ?? null}
             boilEndedAt={boilEnd(steps, done)}

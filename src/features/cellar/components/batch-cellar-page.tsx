@@ -87,7 +87,7 @@ export function BatchCellarPage() {
           )}
         </div>
       </div>
-      <OutboxPanel group={cellarGroup(batchId)} timeZone={tz} />
+      <OutboxPanel group={cellarGroup(batchId)} timeZone={tz} noteUrl={`/api/batches/${batchId}/log`} />
       <div className="grid gap-6 lg:grid-cols-[3fr_2fr]">
         <Section title="Fermentation curve">
           {data.readings.length ? (
