@@ -28,6 +28,8 @@ export default defineConfig({
   },
   build: { outDir: 'dist', sourcemap: false },
   test: {
+    // Projects run in groups, lowest first: unit and component together (no database), then the API tests, then
+    // the browser tests. Global setups all start with the run, so scripts/test.sh also runs each group on its own.
     projects: [
       {
         extends: true,
@@ -35,6 +37,7 @@ export default defineConfig({
           name: 'unit',
           include: ['shared/**/*.test.ts', 'server/**/*.test.ts'],
           environment: 'node',
+          sequence: { groupOrder: 0 },
         },
       },
       {
@@ -47,6 +50,7 @@ export default defineConfig({
           fileParallelism: false,
           testTimeout: 30_000,
           hookTimeout: 60_000,
+          sequence: { groupOrder: 1 },
         },
       },
       {
@@ -56,6 +60,7 @@ export default defineConfig({
           include: ['src/**/*.test.tsx', 'tests/component/**/*.test.tsx'],
           environment: 'jsdom',
           setupFiles: ['tests/component/setup.ts'],
+          sequence: { groupOrder: 0 },
         },
       },
       {
@@ -68,6 +73,7 @@ export default defineConfig({
           fileParallelism: false,
           testTimeout: 120_000,
           hookTimeout: 180_000,
+          sequence: { groupOrder: 2 },
         },
       },
     ],

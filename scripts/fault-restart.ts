@@ -8,7 +8,7 @@ import { stopMariaDb } from './lib/mariadb-instance';
 import { apiEnv, numberArg, prepareInstance, signIn, startApi, type ApiProcess } from './fault-harness';
 import { FAULT_DATA } from './fault-crash';
 import { connectionParts } from './backup';
-import { createOutbox, sendItem, type OutboxItem, type OutboxStore } from '../src/lib/outbox';
+import { createOutbox, sendItem, type OutboxItem, type OutboxStore } from '../src/lib/outbox-queue';
 
 const API_PORT = Number(process.env.KW_FAULT_API_PORT ?? 3190);
 
@@ -51,20 +51,16 @@ export async function runRestartFault(options: {
   const base = api.url;
   const cookie = await signIn(base, emails.assistant_brewer!, password);
 
-  // The outbox's sendItem runs as in the browser; Node has no cookie jar or localStorage, so lend it both.
+  // The outbox's sendItem runs as in the browser; Node has no cookie jar, so lend it the session cookie.
   const realFetch = globalThis.fetch;
   globalThis.fetch = (input, init) =>
     realFetch(input, { ...init, headers: { ...(init?.headers as Record<string, string>), cookie } });
-  const memory = new Map<string, string>();
-  (globalThis as { localStorage?: unknown }).localStorage = {
-    getItem: (k: string) => memory.get(k) ?? null,
-    setItem: (k: string, v: string) => void memory.set(k, v),
-  };
+  const device = `dev-${crypto.randomUUID()}`;
 
   const report: RestartReport = { enqueued: 0, restarts: 0, retriesSeen: 0, arrived: 0, duplicates: 0, outOfOrder: 0 };
   let sent = 0;
   const box = createOutbox(memoryStore(), async (item) => {
-    const result = await sendItem(item);
+    const result = await sendItem(item, device);
     if (result.kind === 'retry') report.retriesSeen += 1;
     if (result.kind === 'rejected') throw new Error(`The server rejected entry ${item.label}: ${result.message}`);
     return result;

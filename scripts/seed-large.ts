@@ -134,12 +134,16 @@ export async function seedLarge(
   });
   const counts = { batches: 0, readings: 0, brewDayEntries: 0, allLogEntries: 0, packagingRuns: 0 };
   try {
-    const [{ nextBatch }] = await conn.query<{ nextBatch: number }[]>(
+    // An aggregate always answers one row.
+    const [batchMax] = await conn.query<{ nextBatch: number }[]>(
       'SELECT COALESCE(MAX(id), 0) + 1 AS nextBatch FROM batches',
     );
-    const [{ nextEntry }] = await conn.query<{ nextEntry: number }[]>(
+    const [entryMax] = await conn.query<{ nextEntry: number }[]>(
       'SELECT COALESCE(MAX(id), 0) + 1 AS nextEntry FROM batch_log_entries',
     );
+    if (!batchMax || !entryMax) throw new Error('MAX(id) answered no row');
+    const { nextBatch } = batchMax;
+    const { nextEntry } = entryMax;
     let batchId = nextBatch;
     let entryId = nextEntry;
     const assistant = users.assistant_brewer!;

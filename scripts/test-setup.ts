@@ -19,6 +19,8 @@ async function main() {
     // Replaced per test run by the mail catcher each suite starts; a valid placeholder keeps config strict.
     SMTP_URL: 'smtp://127.0.0.1:2526',
     PUBLIC_URL: 'http://127.0.0.1:3100',
+    // bcrypt's least work factor: tests hash hundreds of passwords (production keeps 12 or more, see env.ts).
+    BCRYPT_COST: '4',
   };
   for (const [k, v] of Object.entries(vars)) console.log(`export ${k}='${v}'`);
 }

@@ -1,7 +1,10 @@
 import { z } from 'zod';
 
+/** The least bcrypt work factor production accepts (OWASP Password Storage Cheat Sheet: 10 or more; we keep 12). */
+export const PRODUCTION_MIN_BCRYPT_COST = 12;
+
 // Configuration is read once at start-up; a missing or malformed variable stops the process.
-const schema = z
+export const envSchema = z
   .object({
     NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
     PORT: z.coerce.number().int().min(1).max(65535).default(3000),
@@ -12,6 +15,8 @@ const schema = z
     MAIL_FROM: z.string().default('Kettlewright <no-reply@kettlewright.local>'),
     PUBLIC_URL: z.url('PUBLIC_URL must be a URL such as https://brew.example.com'),
     LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+    /** bcrypt's work factor for new password hashes. The test run sets 4 (scripts/test-setup.ts) to stay quick. */
+    BCRYPT_COST: z.coerce.number().int().min(4).max(31).default(PRODUCTION_MIN_BCRYPT_COST),
     /** Folder where the development mail catcher keeps received messages. */
     MAIL_DIR: z.string().optional(),
     // File storage (photos, lab sheets) through the S3 API. Development and tests point these at the
@@ -41,12 +46,16 @@ const schema = z
   .refine((e) => Boolean(e.S3_ACCESS_KEY_ID) === Boolean(e.S3_SECRET_ACCESS_KEY), {
     path: ['S3_SECRET_ACCESS_KEY'],
     message: 'Set both S3_ACCESS_KEY_ID and S3_SECRET_ACCESS_KEY, or neither',
+  })
+  .refine((e) => e.NODE_ENV !== 'production' || e.BCRYPT_COST >= PRODUCTION_MIN_BCRYPT_COST, {
+    path: ['BCRYPT_COST'],
+    message: `BCRYPT_COST must be at least ${PRODUCTION_MIN_BCRYPT_COST} in production`,
   });
 
-export type Env = z.infer<typeof schema>;
+export type Env = z.infer<typeof envSchema>;
 
 function load(): Env {
-  const parsed = schema.safeParse(process.env);
+  const parsed = envSchema.safeParse(process.env);
   if (!parsed.success) {
     const lines = parsed.error.issues.map((i) => `  ${i.path.join('.')}: ${i.message}`);
     console.error(`Kettlewright cannot start: the configuration is incomplete.\n${lines.join('\n')}`);

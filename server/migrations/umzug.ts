@@ -20,6 +20,29 @@ export const APPEND_ONLY_TABLES = [
   'packaging_runs',
 ];
 
+/** This folder's migrations against `sequelize`'s database, recorded in its schema_migrations table. */
+export function migrator(sequelize: Sequelize): Umzug<QueryInterface> {
+  return new Umzug({
+    migrations: {
+      glob: ['[0-9][0-9][0-9][0-9]-*.ts', { cwd: here }],
+      // Loaded through this module's own import(), so the files load wherever it runs (tsx, and Vitest's
+      // transform for the schema tests), not only where Node itself can read TypeScript.
+      resolve: ({ name, path: file, context }) => {
+        if (!file) throw new Error(`Migration ${name} has no file`);
+        const load = () => import(file) as Promise<{ up: Migration; down: Migration }>;
+        return {
+          name,
+          up: async () => (await load()).up({ name, path: file, context }),
+          down: async () => (await load()).down({ name, path: file, context }),
+        };
+      },
+    },
+    context: sequelize.getQueryInterface(),
+    storage: new SequelizeStorage({ sequelize, tableName: 'schema_migrations' }),
+    logger: undefined,
+  });
+}
+
 /**
  * Runs pending migrations with the owner account, then grants the application account
  * what it needs: read/write on ordinary tables, INSERT + SELECT only on append-only tables.
@@ -27,13 +50,7 @@ export const APPEND_ONLY_TABLES = [
 export async function migrate(ownerUrl: string, appUser: string): Promise<string[]> {
   const sequelize = new Sequelize(ownerUrl.replace(/^mysql:/, 'mariadb:'), { dialect: 'mariadb', logging: false });
   try {
-    const umzug = new Umzug({
-      migrations: { glob: ['[0-9][0-9][0-9][0-9]-*.ts', { cwd: here }] },
-      context: sequelize.getQueryInterface(),
-      storage: new SequelizeStorage({ sequelize, tableName: 'schema_migrations' }),
-      logger: undefined,
-    });
-    const applied = await umzug.up();
+    const applied = await migrator(sequelize).up();
     await grantApplicationAccount(sequelize, appUser);
     return applied.map((m) => m.name);
   } finally {

@@ -1,18 +1,16 @@
-import { z } from 'zod';
-import type { Request, Response } from 'express';
-import { defineRouter, actor } from './define';
-import { BREWING_ROLES } from '../../shared/schemas/roles';
-import { idParam } from '../../shared/schemas/taproom';
+import type { Response } from 'express';
+import { defineRouter } from './define';
+import { attachmentRoutes, batchAttachmentRoutes } from '../../shared/contract/attachments';
 import * as attachments from '../services/attachments';
 import { recordAudit } from '../services/audit';
 
-const batchParams = z.strictObject({ batchId: idParam });
-const attachmentParams = z.strictObject({ attachmentId: idParam });
-/** Multipart text fields arrive as strings. */
-const uploadFields = z.strictObject({ tastingNoteId: idParam.optional() });
-
-async function send(req: Request, res: Response, variant: 'file' | 'thumbnail') {
-  const file = await attachments.downloadAttachment(actor(req), Number(req.params.attachmentId), variant);
+async function send(
+  user: Express.User,
+  attachmentId: number,
+  res: Response<Uint8Array>,
+  variant: 'file' | 'thumbnail',
+) {
+  const file = await attachments.downloadAttachment(user, attachmentId, variant);
   res.set({
     'Content-Type': file.contentType,
     'Content-Disposition': file.disposition,
@@ -21,57 +19,38 @@ async function send(req: Request, res: Response, variant: 'file' | 'thumbnail') 
   res.send(file.body);
 }
 
-export const batchAttachmentsRouter = defineRouter('/api/batches', [
-  {
-    method: 'get',
-    path: '/:batchId/attachments',
-    access: BREWING_ROLES,
-    params: batchParams,
-    handler: async (req, res) => {
-      res.json(await attachments.listAttachments(actor(req), Number(req.params.batchId)));
+export const batchAttachmentsRouter = defineRouter('/api/batches', batchAttachmentRoutes, {
+  list: {
+    access: 'file.read',
+    handler: async ({ user, params, res }) => {
+      res.json(await attachments.listAttachments(user, params.batchId));
     },
   },
-  {
-    method: 'post',
-    path: '/:batchId/attachments',
-    access: BREWING_ROLES,
-    params: batchParams,
+  upload: {
+    access: 'file.upload',
     before: [attachments.receiveFile],
-    body: uploadFields,
-    handler: async (req, res) => {
-      const body = req.body as z.infer<typeof uploadFields>;
-      res
-        .status(201)
-        .json(await attachments.uploadAttachment(actor(req), Number(req.params.batchId), req.file, body.tastingNoteId));
+    handler: async ({ user, params, body, req, res }) => {
+      res.status(201).json(await attachments.uploadAttachment(user, params.batchId, req.file, body.tastingNoteId));
     },
   },
-]);
+});
 
 /** Files are served to the brewery's own people only; the taproom sees photos of announced beers. */
-export const attachmentsRouter = defineRouter('/api/attachments', [
-  {
-    method: 'get',
-    path: '/:attachmentId/file',
-    access: 'signed-in',
-    params: attachmentParams,
-    handler: (req, res) => send(req, res, 'file'),
+export const attachmentsRouter = defineRouter('/api/attachments', attachmentRoutes, {
+  file: {
+    access: 'file.readShown',
+    handler: ({ user, params, res }) => send(user, params.attachmentId, res, 'file'),
   },
-  {
-    method: 'get',
-    path: '/:attachmentId/thumbnail',
-    access: 'signed-in',
-    params: attachmentParams,
-    handler: (req, res) => send(req, res, 'thumbnail'),
+  thumbnail: {
+    access: 'file.readShown',
+    handler: ({ user, params, res }) => send(user, params.attachmentId, res, 'thumbnail'),
   },
-  {
-    method: 'delete',
-    path: '/:attachmentId',
-    access: ['head_brewer'],
-    params: attachmentParams,
-    handler: async (req, res) => {
-      await attachments.removeAttachment(actor(req), Number(req.params.attachmentId));
-      await recordAudit(req, 'attachment.remove', { attachmentId: Number(req.params.attachmentId) });
+  remove: {
+    access: 'file.remove',
+    handler: async ({ user, params, req, res }) => {
+      await attachments.removeAttachment(user, params.attachmentId);
+      await recordAudit(req, 'attachment.remove', { attachmentId: params.attachmentId });
       res.status(204).end();
     },
   },
-]);
+});

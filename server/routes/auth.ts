@@ -1,22 +1,11 @@
 import passport from 'passport';
 import type { Request, Response, NextFunction } from 'express';
-import { z } from 'zod';
-import {
-  acceptInviteSchema,
-  changePasswordSchema,
-  resetPasswordSchema,
-  resetRequestSchema,
-  signInSchema,
-  signUpSchema,
-  tokenParam,
-} from '../../shared/schemas/auth';
-import { defineRouter, actor } from './define';
+import { authRoutes } from '../../shared/contract/auth';
+import { defineRouter } from './define';
 import * as auth from '../services/auth';
 import { recordAudit } from '../services/audit';
 import { unauthenticated, wrongPassword } from '../errors';
 import { signInLimiter } from '../middlewares/rate-limit';
-
-const tokenParams = z.strictObject({ token: tokenParam });
 
 /** Starts a fresh session for the person (passport regenerates the session id). */
 function logIn(req: Request, user: Express.User): Promise<void> {
@@ -38,17 +27,14 @@ function authenticateLocal(req: Request, res: Response): Promise<Express.User | 
   });
 }
 
-export const authRouter = defineRouter('/api/auth', [
-  {
-    method: 'post',
-    path: '/sign-in',
-    access: 'public',
+export const authRouter = defineRouter('/api/auth', authRoutes, {
+  signIn: {
+    access: 'account.signIn',
     before: [signInLimiter],
-    body: signInSchema,
-    handler: async (req, res) => {
+    handler: async ({ body, req, res }) => {
       const user = await authenticateLocal(req, res);
       if (!user) {
-        await recordAudit(req, 'sign-in.failure', { email: req.body.email }, { userId: null, breweryId: null });
+        await recordAudit(req, 'sign-in.failure', { email: body.email }, { userId: null, breweryId: null });
         throw wrongPassword(401, 'E-mail or password is not right');
       }
       await logIn(req, user);
@@ -56,13 +42,10 @@ export const authRouter = defineRouter('/api/auth', [
       res.json(auth.me(user));
     },
   },
-  {
-    method: 'post',
-    path: '/sign-up',
-    access: 'public',
-    body: signUpSchema,
-    handler: async (req, res) => {
-      const user = await auth.signUp(req.body);
+  signUp: {
+    access: 'account.signUp',
+    handler: async ({ body, req, res }) => {
+      const user = await auth.signUp(body);
       const signedIn = await auth.sessionUser(user.id);
       if (!signedIn) throw unauthenticated();
       await logIn(req, signedIn);
@@ -70,50 +53,40 @@ export const authRouter = defineRouter('/api/auth', [
       res.status(201).json(auth.me(signedIn));
     },
   },
-  {
-    method: 'post',
-    path: '/sign-out',
-    access: 'public',
-    handler: async (req, res) => {
+  signOut: {
+    access: 'account.signOut',
+    handler: async ({ req, res }) => {
       if (req.user) await recordAudit(req, 'sign-out');
       await new Promise<void>((resolve) => req.logout(() => resolve()));
       await new Promise<void>((resolve) => req.session.destroy(() => resolve()));
       res.status(204).end();
     },
   },
-  {
-    method: 'get',
-    path: '/me',
-    access: 'signed-in',
-    handler: async (req, res) => {
-      res.json(auth.me(actor(req)));
+  me: {
+    access: 'account.read',
+    handler: async ({ user, res }) => {
+      res.json(auth.me(user));
     },
   },
-  {
-    method: 'post',
-    path: '/password',
-    access: 'signed-in',
-    body: changePasswordSchema,
+  changePassword: {
+    access: 'account.changePassword',
     // A stolen session must not be a way to guess the password without limit.
     before: [signInLimiter],
-    handler: async (req, res) => {
-      await auth.changePassword(actor(req).id, req.body, req.sessionID);
+    handler: async ({ user, body, req, res }) => {
+      await auth.changePassword(user.id, body, req.sessionID);
       await recordAudit(req, 'password.change');
       res.status(204).end();
     },
   },
-  {
-    method: 'post',
-    path: '/reset-request',
-    access: 'public',
+  requestReset: {
+    access: 'account.resetPassword',
     before: [signInLimiter],
-    body: resetRequestSchema,
-    handler: async (req, res) => {
-      const user = await auth.requestPasswordReset(req.body.email, req.log);
+    handler: async ({ body, req, res }) => {
+      const user = await auth.requestPasswordReset(body.email, req.log);
       await recordAudit(
         req,
         'password.reset-request',
-        { email: req.body.email },
+        { email: body.email },
         {
           userId: user?.id ?? null,
           breweryId: user?.breweryId ?? null,
@@ -122,45 +95,31 @@ export const authRouter = defineRouter('/api/auth', [
       res.status(202).json({ message: 'If this e-mail has an account, a reset link is on its way.' });
     },
   },
-  {
-    method: 'get',
-    path: '/reset/:token',
-    access: 'public',
-    params: tokenParams,
-    handler: async (req, res) => {
-      await auth.checkResetLink(req.params.token as string);
+  checkReset: {
+    access: 'account.resetPassword',
+    handler: async ({ params, res }) => {
+      await auth.checkResetLink(params.token);
       res.status(204).end();
     },
   },
-  {
-    method: 'post',
-    path: '/reset/:token',
-    access: 'public',
-    params: tokenParams,
-    body: resetPasswordSchema,
-    handler: async (req, res) => {
-      const user = await auth.resetPassword(req.params.token as string, req.body.password);
+  resetPassword: {
+    access: 'account.resetPassword',
+    handler: async ({ params, body, req, res }) => {
+      const user = await auth.resetPassword(params.token, body.password);
       await recordAudit(req, 'password.reset', null, { userId: user.id, breweryId: user.breweryId });
       res.status(204).end();
     },
   },
-  {
-    method: 'get',
-    path: '/invites/:token',
-    access: 'public',
-    params: tokenParams,
-    handler: async (req, res) => {
-      res.json(await auth.describeInvite(req.params.token as string));
+  describeInvite: {
+    access: 'account.acceptInvite',
+    handler: async ({ params, res }) => {
+      res.json(await auth.describeInvite(params.token));
     },
   },
-  {
-    method: 'post',
-    path: '/invites/:token',
-    access: 'public',
-    params: tokenParams,
-    body: acceptInviteSchema,
-    handler: async (req, res) => {
-      const user = await auth.acceptInvite(req.params.token as string, req.body);
+  acceptInvite: {
+    access: 'account.acceptInvite',
+    handler: async ({ params, body, req, res }) => {
+      const user = await auth.acceptInvite(params.token, body);
       const signedIn = await auth.sessionUser(user.id);
       if (!signedIn) throw unauthenticated();
       await logIn(req, signedIn);
@@ -168,4 +127,4 @@ export const authRouter = defineRouter('/api/auth', [
       res.status(201).json(auth.me(signedIn));
     },
   },
-]);
+});

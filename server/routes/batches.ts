@@ -1,145 +1,93 @@
-import { z } from 'zod';
-import { defineRouter, actor } from './define';
-import { BREWING_ROLES } from '../../shared/schemas/roles';
-import {
-  batchIdParams,
-  batchListQuery,
-  changeStatusSchema,
-  createBatchSchema,
-  planPreviewQuery,
-  type PlanPreviewQuery,
-} from '../../shared/schemas/batches';
-import { logEntryInputSchema, signOffSchema } from '../../shared/schemas/batch-log';
+import type { Response } from 'express';
+import { defineRouter, type HandlerContext } from './define';
+import { batchRoutes } from '../../shared/contract/batches';
 import * as batches from '../services/batches';
-import { batchLogJson, toLogEntry, verifyChain, writeMetaFromHeaders } from '../services/batch-log';
+import { batchLogJson, refuseEntryChange, toLogEntry, verifyChain, writeMetaFromHeaders } from '../services/batch-log';
 import { appendBatchLogEntry } from '../services/readings';
 import { signOffBrewDay } from '../services/signatures';
-import type { Request } from 'express';
-import { BatchLogEntry } from '../models';
-import { methodNotAllowed, notFound } from '../errors';
 import { signInLimiter } from '../middlewares/rate-limit';
 
-const id = batchIdParams.shape.id;
-const entryParams = z.strictObject({ id, entryId: id });
+type EntryChange = HandlerContext<typeof batchRoutes.patchEntry>;
 /** Entries are append-only: a change or delete answers 405 (after the usual 404 for another brewery's batch). */
-const refuseChange = async (req: Request) => {
-  const entry = await BatchLogEntry.findOne({
-    where: { id: Number(req.params.entryId), batchId: Number(req.params.id), breweryId: actor(req).breweryId },
-  });
-  if (!entry) throw notFound('This log entry');
-  throw methodNotAllowed(
-    'Log entries are never changed or deleted. Add a correction that points at the entry instead.',
-  );
-};
+const refuseChange = ({ user, params }: Pick<EntryChange, 'user' | 'params'>) =>
+  refuseEntryChange(user.breweryId, params.id, params.entryId);
 
 /** Batches and their logs: the brewing side only (the taproom manager reads released beers elsewhere). */
-export const batchesRouter = defineRouter('/api/batches', [
-  {
-    method: 'get',
-    path: '/',
-    access: BREWING_ROLES,
-    query: batchListQuery,
-    handler: async (req, res) => {
-      res.json(await batches.listBatches(actor(req).breweryId, req.query as unknown as z.infer<typeof batchListQuery>));
+export const batchesRouter = defineRouter('/api/batches', batchRoutes, {
+  list: {
+    access: 'batch.read',
+    handler: async ({ user, query, res }) => {
+      res.json(await batches.listBatches(user.breweryId, query));
     },
   },
-  {
-    method: 'post',
-    path: '/',
-    access: ['head_brewer'],
-    body: createBatchSchema,
-    handler: async (req, res) => {
-      const batch = await batches.planBatch(actor(req), req.body);
+  plan: {
+    access: 'batch.plan',
+    handler: async ({ user, body, res }) => {
+      const batch = await batches.planBatch(user, body);
       res.status(201).json(await batches.batchDetail(batch.breweryId, batch.id));
     },
   },
-  {
-    method: 'get',
-    path: '/plan-preview',
-    access: ['head_brewer'],
-    query: planPreviewQuery,
-    handler: async (req, res) => {
-      res.json(await batches.previewPlan(actor(req).breweryId, req.query as unknown as PlanPreviewQuery));
+  planPreview: {
+    access: 'batch.plan',
+    handler: async ({ user, query, res }) => {
+      res.json(await batches.previewPlan(user.breweryId, query));
     },
   },
-  {
-    method: 'get',
-    path: '/:id',
-    access: BREWING_ROLES,
-    params: batchIdParams,
-    handler: async (req, res) => {
-      res.json(await batches.batchDetail(actor(req).breweryId, Number(req.params.id)));
+  get: {
+    access: 'batch.read',
+    handler: async ({ user, params, res }) => {
+      res.json(await batches.batchDetail(user.breweryId, params.id));
     },
   },
-  {
-    method: 'post',
-    path: '/:id/status',
-    access: BREWING_ROLES,
-    params: batchIdParams,
-    body: changeStatusSchema,
-    handler: async (req, res) => {
-      await batches.requestStatusChange(actor(req), Number(req.params.id), req.body);
-      res.json(await batches.batchDetail(actor(req).breweryId, Number(req.params.id)));
+  changeStatus: {
+    access: 'batch.changeStatus',
+    handler: async ({ user, params, body, res }) => {
+      await batches.requestStatusChange(user, params.id, body);
+      res.json(await batches.batchDetail(user.breweryId, params.id));
     },
   },
-  {
-    method: 'put',
-    path: '/:id/vessel',
-    access: BREWING_ROLES,
-    params: batchIdParams,
-    body: z.strictObject({ vesselId: id }),
-    handler: async (req, res) => {
-      const vessel = await batches.moveToVessel(actor(req), Number(req.params.id), req.body.vesselId);
+  moveToVessel: {
+    access: 'batch.moveToVessel',
+    handler: async ({ user, params, body, res }) => {
+      const vessel = await batches.moveToVessel(user, params.id, body.vesselId);
       res.json({ id: vessel.id, name: vessel.name, currentBatchId: vessel.currentBatchId });
     },
   },
-  {
-    method: 'get',
-    path: '/:id/log',
-    access: BREWING_ROLES,
-    params: batchIdParams,
-    handler: async (req, res) => {
-      const { body, head } = await batchLogJson(actor(req).breweryId, Number(req.params.id));
+  log: {
+    access: 'batch.read',
+    handler: async ({ user, params, res }) => {
+      const { body, head } = await batchLogJson(user.breweryId, params.id);
       // The head names the whole log (entries are append-only), so it tags the answer without hashing 60 KB of JSON.
-      if (head) res.set('ETag', `W/"${req.params.id}-${head.sequence}-${head.hash.slice(0, 16)}"`);
-      res.type('json').send(body);
+      if (head) res.set('ETag', `W/"${params.id}-${head.sequence}-${head.hash.slice(0, 16)}"`);
+      // The body is the LogEntry[] already serialised (and cached as bytes).
+      const raw: Response = res;
+      raw.type('json').send(body);
     },
   },
-  {
-    method: 'post',
-    path: '/:id/log',
-    access: BREWING_ROLES,
-    params: batchIdParams,
-    body: logEntryInputSchema,
-    handler: async (req, res) => {
+  appendLog: {
+    access: 'batch.logEntry',
+    handler: async ({ user, params, body, req, res }) => {
       const meta = writeMetaFromHeaders((name) => req.get(name));
-      const entry = await appendBatchLogEntry(actor(req), Number(req.params.id), req.body, meta);
+      const entry = await appendBatchLogEntry(user, params.id, body, meta);
       res.status(201).json(toLogEntry(entry));
     },
   },
-  { method: 'patch', path: '/:id/log/:entryId', access: BREWING_ROLES, params: entryParams, handler: refuseChange },
-  { method: 'put', path: '/:id/log/:entryId', access: BREWING_ROLES, params: entryParams, handler: refuseChange },
-  { method: 'delete', path: '/:id/log/:entryId', access: BREWING_ROLES, params: entryParams, handler: refuseChange },
-  {
-    method: 'get',
-    path: '/:id/log/verify',
-    access: BREWING_ROLES,
-    params: batchIdParams,
-    handler: async (req, res) => {
-      await batches.findBatch(actor(req).breweryId, Number(req.params.id));
-      res.json(await verifyChain(Number(req.params.id)));
+  patchEntry: { access: 'batch.logEntry', handler: refuseChange },
+  putEntry: { access: 'batch.logEntry', handler: refuseChange },
+  deleteEntry: { access: 'batch.logEntry', handler: refuseChange },
+  verifyLog: {
+    access: 'batch.read',
+    handler: async ({ user, params, res }) => {
+      await batches.findBatch(user.breweryId, params.id);
+      res.json(await verifyChain(params.id));
     },
   },
-  {
-    method: 'post',
-    path: '/:id/sign-off',
-    access: ['head_brewer'],
+  signOff: {
+    access: 'batch.signOff',
     before: [signInLimiter],
-    params: batchIdParams,
-    body: signOffSchema,
-    handler: async (req, res) => {
+    handler: async ({ user, params, body, req, res }) => {
       const meta = writeMetaFromHeaders((name) => req.get(name));
-      res.status(201).json(await signOffBrewDay(actor(req), Number(req.params.id), req.body.password, meta));
+      res.status(201).json(await signOffBrewDay(user, params.id, body.password, meta));
     },
   },
-]);
+});

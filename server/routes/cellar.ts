@@ -1,186 +1,114 @@
-import { z } from 'zod';
-import { idParam } from '../../shared/schemas/auth';
-import { BREWING_ROLES } from '../../shared/schemas/roles';
-import {
-  actionEntrySchema,
-  carbonationQuerySchema,
-  cellarPlanSchema,
-  packagingEntrySchema,
-  probeImportSchema,
-  readingEntrySchema,
-  vesselInputSchema,
-} from '../../shared/schemas/cellar';
-import { defineRouter, actor } from './define';
+import type { Request } from 'express';
+import { cellarRoutes, vesselRoutes } from '../../shared/contract/cellar';
+import { defineRouter } from './define';
 import * as cellar from '../services/cellar';
 import { importProbeCsv, recordReading } from '../services/readings';
 import { recordPackaging } from '../services/packaging';
 import { listAlerts, markAlertRead } from '../services/alerts';
 import { writeMetaFromHeaders } from '../services/batch-log';
 
-const vesselParams = z.strictObject({ vesselId: idParam });
-const batchParams = z.strictObject({ batchId: idParam });
-const alertParams = z.strictObject({ alertId: idParam });
-const vesselId = (req: { params: Record<string, unknown> }) => Number(req.params.vesselId);
-const batchId = (req: { params: Record<string, unknown> }) => Number(req.params.batchId);
-const meta = (req: { get: (name: string) => string | undefined }) => writeMetaFromHeaders((name) => req.get(name));
+const meta = (req: Request) => writeMetaFromHeaders((name) => req.get(name));
 
-export const vesselsRouter = defineRouter('/api/vessels', [
-  {
-    method: 'get',
-    path: '/',
-    access: BREWING_ROLES,
-    handler: async (req, res) => {
-      res.json(await cellar.listVessels(actor(req).breweryId));
+export const vesselsRouter = defineRouter('/api/vessels', vesselRoutes, {
+  list: {
+    access: 'vessel.read',
+    handler: async ({ user, res }) => {
+      res.json(await cellar.listVessels(user.breweryId));
     },
   },
-  {
-    method: 'post',
-    path: '/',
-    access: ['head_brewer'],
-    body: vesselInputSchema,
-    handler: async (req, res) => {
-      res.status(201).json(await cellar.createVessel(actor(req).breweryId, req.body));
+  create: {
+    access: 'vessel.edit',
+    handler: async ({ user, body, res }) => {
+      res.status(201).json(await cellar.createVessel(user.breweryId, body));
     },
   },
-  {
-    method: 'put',
-    path: '/:vesselId',
-    access: ['head_brewer'],
-    params: vesselParams,
-    body: vesselInputSchema,
-    handler: async (req, res) => {
-      res.json(await cellar.updateVessel(actor(req).breweryId, vesselId(req), req.body));
+  update: {
+    access: 'vessel.edit',
+    handler: async ({ user, params, body, res }) => {
+      res.json(await cellar.updateVessel(user.breweryId, params.vesselId, body));
     },
   },
-  {
-    method: 'post',
-    path: '/:vesselId/clean',
-    access: BREWING_ROLES,
-    params: vesselParams,
-    handler: async (req, res) => {
-      res.json(await cellar.markVesselClean(actor(req).breweryId, vesselId(req)));
+  markClean: {
+    access: 'vessel.clean',
+    handler: async ({ user, params, res }) => {
+      res.json(await cellar.markVesselClean(user.breweryId, params.vesselId));
     },
   },
-  {
-    method: 'delete',
-    path: '/:vesselId',
-    access: ['head_brewer'],
-    params: vesselParams,
-    handler: async (req, res) => {
-      await cellar.deleteVessel(actor(req).breweryId, vesselId(req));
+  remove: {
+    access: 'vessel.edit',
+    handler: async ({ user, params, res }) => {
+      await cellar.deleteVessel(user.breweryId, params.vesselId);
       res.status(204).end();
     },
   },
-]);
+});
 
-export const cellarRouter = defineRouter('/api/cellar', [
-  {
-    method: 'get',
-    path: '/board',
-    access: BREWING_ROLES,
-    handler: async (req, res) => {
-      res.json(await cellar.vesselBoard(actor(req).breweryId));
+export const cellarRouter = defineRouter('/api/cellar', cellarRoutes, {
+  board: {
+    access: 'cellar.read',
+    handler: async ({ user, res }) => {
+      res.json(await cellar.vesselBoard(user.breweryId));
     },
   },
-  {
-    method: 'get',
-    path: '/carbonation',
-    access: BREWING_ROLES,
-    query: carbonationQuerySchema,
-    handler: async (req, res) => {
-      res.json(
-        await cellar.carbonationFor(
-          actor(req).breweryId,
-          req.query as unknown as z.infer<typeof carbonationQuerySchema>,
-        ),
-      );
+  carbonation: {
+    access: 'cellar.read',
+    handler: async ({ user, query, res }) => {
+      res.json(await cellar.carbonationFor(user.breweryId, query));
     },
   },
-  {
-    method: 'get',
-    path: '/batches/:batchId',
-    access: BREWING_ROLES,
-    params: batchParams,
-    handler: async (req, res) => {
-      res.json(await cellar.batchCellar(actor(req).breweryId, batchId(req)));
+  batch: {
+    access: 'cellar.read',
+    handler: async ({ user, params, res }) => {
+      res.json(await cellar.batchCellar(user.breweryId, params.batchId));
     },
   },
-  {
-    method: 'put',
-    path: '/batches/:batchId/plan',
-    access: ['head_brewer'],
-    params: batchParams,
-    body: cellarPlanSchema,
-    handler: async (req, res) => {
-      res.json(await cellar.saveCellarPlan(actor(req).breweryId, batchId(req), req.body));
+  savePlan: {
+    access: 'cellar.plan',
+    handler: async ({ user, params, body, res }) => {
+      res.json(await cellar.saveCellarPlan(user.breweryId, params.batchId, body));
     },
   },
-  {
-    method: 'post',
-    path: '/batches/:batchId/readings',
-    access: BREWING_ROLES,
-    params: batchParams,
-    body: readingEntrySchema,
-    handler: async (req, res) => {
-      res.status(201).json(await recordReading(actor(req), batchId(req), req.body, meta(req)));
+  recordReading: {
+    access: 'cellar.logReading',
+    handler: async ({ user, params, body, req, res }) => {
+      res.status(201).json(await recordReading(user, params.batchId, body, meta(req)));
     },
   },
-  {
-    method: 'post',
-    path: '/batches/:batchId/readings/preview',
-    access: BREWING_ROLES,
-    params: batchParams,
-    body: probeImportSchema,
-    handler: async (req, res) => {
-      res.json(await importProbeCsv(actor(req), batchId(req), req.body, null));
+  previewImport: {
+    access: 'cellar.logReading',
+    handler: async ({ user, params, body, res }) => {
+      res.json(await importProbeCsv(user, params.batchId, body, null));
     },
   },
-  {
-    method: 'post',
-    path: '/batches/:batchId/readings/import',
-    access: BREWING_ROLES,
-    params: batchParams,
-    body: probeImportSchema,
-    handler: async (req, res) => {
-      res.status(201).json(await importProbeCsv(actor(req), batchId(req), req.body, meta(req)));
+  importReadings: {
+    access: 'cellar.logReading',
+    handler: async ({ user, params, body, req, res }) => {
+      res.status(201).json(await importProbeCsv(user, params.batchId, body, meta(req)));
     },
   },
-  {
-    method: 'post',
-    path: '/batches/:batchId/actions',
-    access: BREWING_ROLES,
-    params: batchParams,
-    body: actionEntrySchema,
-    handler: async (req, res) => {
-      res.status(201).json(await cellar.recordAction(actor(req), batchId(req), req.body, meta(req)));
+  recordAction: {
+    access: 'cellar.logAction',
+    handler: async ({ user, params, body, req, res }) => {
+      res.status(201).json(await cellar.recordAction(user, params.batchId, body, meta(req)));
     },
   },
-  {
-    method: 'post',
-    path: '/batches/:batchId/packaging',
-    access: BREWING_ROLES,
-    params: batchParams,
-    body: packagingEntrySchema,
-    handler: async (req, res) => {
-      res.status(201).json(await recordPackaging(actor(req), batchId(req), req.body, meta(req)));
+  recordPackaging: {
+    access: 'cellar.logPackaging',
+    handler: async ({ user, params, body, req, res }) => {
+      res.status(201).json(await recordPackaging(user, params.batchId, body, meta(req)));
     },
   },
-  {
-    method: 'get',
-    path: '/alerts',
-    access: ['head_brewer'],
-    handler: async (req, res) => {
-      res.json(await listAlerts(actor(req).breweryId));
+  alerts: {
+    access: 'cellar.alerts',
+    handler: async ({ user, res }) => {
+      res.json(await listAlerts(user.breweryId));
     },
   },
-  {
-    method: 'post',
-    path: '/alerts/:alertId/read',
-    access: ['head_brewer'],
-    params: alertParams,
-    handler: async (req, res) => {
-      await markAlertRead(actor(req).breweryId, Number(req.params.alertId));
+  markAlertRead: {
+    access: 'cellar.alerts',
+    handler: async ({ user, params, res }) => {
+      await markAlertRead(user.breweryId, params.alertId);
       res.status(204).end();
     },
   },
-]);
+});

@@ -1,49 +1,33 @@
-import { z } from 'zod';
-import { equipmentSchema, idParam } from '../../shared/schemas/recipes';
-import { BREWING_ROLES } from '../../shared/schemas/roles';
-import { defineRouter, actor } from './define';
+import { equipmentRoutes } from '../../shared/contract/recipes';
+import { defineRouter } from './define';
 import * as equipment from '../services/equipment';
 import { recordAudit } from '../services/audit';
 
-const params = z.strictObject({ equipmentId: idParam });
-
-export const equipmentRouter = defineRouter('/api/equipment', [
-  {
-    method: 'get',
-    path: '/',
-    access: BREWING_ROLES,
-    handler: async (req, res) => {
-      res.json(await equipment.listEquipment(actor(req).breweryId));
+export const equipmentRouter = defineRouter('/api/equipment', equipmentRoutes, {
+  list: {
+    access: 'equipment.read',
+    handler: async ({ user, res }) => {
+      res.json(await equipment.listEquipment(user.breweryId));
     },
   },
-  {
-    method: 'post',
-    path: '/',
-    access: ['head_brewer'],
-    body: equipmentSchema,
-    handler: async (req, res) => {
-      res.status(201).json(await equipment.createEquipment(actor(req).breweryId, req.body));
+  create: {
+    access: 'equipment.edit',
+    handler: async ({ user, body, res }) => {
+      res.status(201).json(await equipment.createEquipment(user.breweryId, body));
     },
   },
-  {
-    method: 'put',
-    path: '/:equipmentId',
-    access: ['head_brewer'],
-    params,
-    body: equipmentSchema,
-    handler: async (req, res) => {
-      res.json(await equipment.updateEquipment(actor(req).breweryId, Number(req.params.equipmentId), req.body));
+  update: {
+    access: 'equipment.edit',
+    handler: async ({ user, params, body, res }) => {
+      res.json(await equipment.updateEquipment(user.breweryId, params.equipmentId, body));
     },
   },
-  {
-    method: 'delete',
-    path: '/:equipmentId',
-    access: ['head_brewer'],
-    params,
-    handler: async (req, res) => {
-      await equipment.deleteEquipment(actor(req).breweryId, Number(req.params.equipmentId));
-      await recordAudit(req, 'equipment.remove', { equipmentId: Number(req.params.equipmentId) });
+  remove: {
+    access: 'equipment.edit',
+    handler: async ({ user, params, req, res }) => {
+      await equipment.deleteEquipment(user.breweryId, params.equipmentId);
+      await recordAudit(req, 'equipment.remove', { equipmentId: params.equipmentId });
       res.status(204).end();
     },
   },
-]);
+});

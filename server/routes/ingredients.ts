@@ -1,51 +1,33 @@
-import { z } from 'zod';
-import { idParam, ingredientQuerySchema, ingredientSchema } from '../../shared/schemas/recipes';
-import { BREWING_ROLES } from '../../shared/schemas/roles';
-import { defineRouter, actor } from './define';
+import { ingredientRoutes } from '../../shared/contract/recipes';
+import { defineRouter } from './define';
 import * as ingredients from '../services/ingredients';
 import { recordAudit } from '../services/audit';
 
-const params = z.strictObject({ ingredientId: idParam });
-
-export const ingredientsRouter = defineRouter('/api/ingredients', [
-  {
-    method: 'get',
-    path: '/',
-    access: BREWING_ROLES,
-    query: ingredientQuerySchema,
-    handler: async (req, res) => {
-      const { kind } = req.query as z.infer<typeof ingredientQuerySchema>;
-      res.json(await ingredients.listIngredients(actor(req).breweryId, kind));
+export const ingredientsRouter = defineRouter('/api/ingredients', ingredientRoutes, {
+  list: {
+    access: 'ingredient.read',
+    handler: async ({ user, query, res }) => {
+      res.json(await ingredients.listIngredients(user.breweryId, query.kind));
     },
   },
-  {
-    method: 'post',
-    path: '/',
-    access: ['head_brewer'],
-    body: ingredientSchema,
-    handler: async (req, res) => {
-      res.status(201).json(await ingredients.createIngredient(actor(req).breweryId, req.body));
+  create: {
+    access: 'ingredient.edit',
+    handler: async ({ user, body, res }) => {
+      res.status(201).json(await ingredients.createIngredient(user.breweryId, body));
     },
   },
-  {
-    method: 'put',
-    path: '/:ingredientId',
-    access: ['head_brewer'],
-    params,
-    body: ingredientSchema,
-    handler: async (req, res) => {
-      res.json(await ingredients.updateIngredient(actor(req).breweryId, Number(req.params.ingredientId), req.body));
+  update: {
+    access: 'ingredient.edit',
+    handler: async ({ user, params, body, res }) => {
+      res.json(await ingredients.updateIngredient(user.breweryId, params.ingredientId, body));
     },
   },
-  {
-    method: 'delete',
-    path: '/:ingredientId',
-    access: ['head_brewer'],
-    params,
-    handler: async (req, res) => {
-      await ingredients.deleteIngredient(actor(req).breweryId, Number(req.params.ingredientId));
-      await recordAudit(req, 'ingredient.remove', { ingredientId: Number(req.params.ingredientId) });
+  remove: {
+    access: 'ingredient.edit',
+    handler: async ({ user, params, req, res }) => {
+      await ingredients.deleteIngredient(user.breweryId, params.ingredientId);
+      await recordAudit(req, 'ingredient.remove', { ingredientId: params.ingredientId });
       res.status(204).end();
     },
   },
-]);
+});

@@ -1,115 +1,63 @@
-import { z } from 'zod';
-import {
-  compareQuerySchema,
-  createRecipeSchema,
-  idParam,
-  saveScaledSchema,
-  saveVersionSchema,
-  scaleQuerySchema,
-  updateRecipeSchema,
-} from '../../shared/schemas/recipes';
-import { BREWING_ROLES } from '../../shared/schemas/roles';
-import { defineRouter, actor } from './define';
+import { recipeRoutes } from '../../shared/contract/recipes';
+import { defineRouter } from './define';
 import * as recipes from '../services/recipes';
 import { scaleVersion } from '../services/recipe-plans';
 import { notFound } from '../errors';
 
-const recipeParams = z.strictObject({ recipeId: idParam });
-const versionParams = z.strictObject({ recipeId: idParam, versionId: idParam });
-const ids = (req: { params: Record<string, unknown> }) => ({
-  recipeId: Number(req.params.recipeId),
-  versionId: Number(req.params.versionId),
-});
-
-export const recipesRouter = defineRouter('/api/recipes', [
-  {
-    method: 'get',
-    path: '/',
-    access: BREWING_ROLES,
-    handler: async (req, res) => {
-      res.json(await recipes.listRecipes(actor(req).breweryId));
+export const recipesRouter = defineRouter('/api/recipes', recipeRoutes, {
+  list: {
+    access: 'recipe.read',
+    handler: async ({ user, res }) => {
+      res.json(await recipes.listRecipes(user.breweryId));
     },
   },
-  {
-    method: 'post',
-    path: '/',
-    access: ['head_brewer'],
-    body: createRecipeSchema,
-    handler: async (req, res) => {
-      res.status(201).json(await recipes.createRecipe(actor(req), req.body));
+  create: {
+    access: 'recipe.edit',
+    handler: async ({ user, body, res }) => {
+      res.status(201).json(await recipes.createRecipe(user, body));
     },
   },
-  {
-    method: 'get',
-    path: '/:recipeId',
-    access: BREWING_ROLES,
-    params: recipeParams,
-    handler: async (req, res) => {
-      res.json(await recipes.getRecipe(actor(req).breweryId, ids(req).recipeId));
+  get: {
+    access: 'recipe.read',
+    handler: async ({ user, params, res }) => {
+      res.json(await recipes.getRecipe(user.breweryId, params.recipeId));
     },
   },
-  {
-    method: 'patch',
-    path: '/:recipeId',
-    access: ['head_brewer'],
-    params: recipeParams,
-    body: updateRecipeSchema,
-    handler: async (req, res) => {
-      res.json(await recipes.updateRecipe(actor(req).breweryId, ids(req).recipeId, req.body));
+  update: {
+    access: 'recipe.edit',
+    handler: async ({ user, params, body, res }) => {
+      res.json(await recipes.updateRecipe(user.breweryId, params.recipeId, body));
     },
   },
-  {
-    method: 'post',
-    path: '/:recipeId/versions',
-    access: ['head_brewer'],
-    params: recipeParams,
-    body: saveVersionSchema,
-    handler: async (req, res) => {
-      res.status(201).json(await recipes.addVersion(actor(req), ids(req).recipeId, req.body));
+  addVersion: {
+    access: 'recipe.edit',
+    handler: async ({ user, params, body, res }) => {
+      res.status(201).json(await recipes.addVersion(user, params.recipeId, body));
     },
   },
-  {
-    method: 'get',
-    path: '/:recipeId/compare',
-    access: BREWING_ROLES,
-    params: recipeParams,
-    query: compareQuerySchema,
-    handler: async (req, res) => {
-      const { a, b } = req.query as unknown as z.infer<typeof compareQuerySchema>;
-      res.json(await recipes.compareVersions(actor(req).breweryId, ids(req).recipeId, a, b));
+  compare: {
+    access: 'recipe.read',
+    handler: async ({ user, params, query, res }) => {
+      res.json(await recipes.compareVersions(user.breweryId, params.recipeId, query.a, query.b));
     },
   },
-  {
-    method: 'get',
-    path: '/:recipeId/versions/:versionId',
-    access: BREWING_ROLES,
-    params: versionParams,
-    handler: async (req, res) => {
-      const { recipeId, versionId } = ids(req);
-      res.json(await recipes.getVersion(actor(req).breweryId, recipeId, versionId));
+  getVersion: {
+    access: 'recipe.read',
+    handler: async ({ user, params, res }) => {
+      res.json(await recipes.getVersion(user.breweryId, params.recipeId, params.versionId));
     },
   },
-  {
-    method: 'patch',
-    path: '/:recipeId/versions/:versionId',
-    access: ['head_brewer'],
-    params: versionParams,
-    body: saveVersionSchema,
-    handler: async (req, res) => {
-      const { recipeId, versionId } = ids(req);
-      res.json(await recipes.updateVersion(actor(req), recipeId, versionId, req.body));
+  updateVersion: {
+    access: 'recipe.edit',
+    handler: async ({ user, params, body, res }) => {
+      res.json(await recipes.updateVersion(user, params.recipeId, params.versionId, body));
     },
   },
-  {
-    method: 'get',
-    path: '/:recipeId/versions/:versionId/scale',
-    access: BREWING_ROLES,
-    params: versionParams,
-    query: scaleQuerySchema,
-    handler: async (req, res) => {
-      const { recipeId, versionId } = ids(req);
-      const s = await scaleVersion(actor(req).breweryId, versionId, req.query as z.infer<typeof scaleQuerySchema>);
-      if (s.recipe.id !== recipeId) throw notFound('This recipe version');
+  scale: {
+    access: 'recipe.read',
+    handler: async ({ user, params, query, res }) => {
+      const s = await scaleVersion(user.breweryId, params.versionId, query);
+      if (s.recipe.id !== params.recipeId) throw notFound('This recipe version');
       res.json({
         recipe: { id: s.recipe.id, name: s.recipe.name, style: s.recipe.style },
         version: {
@@ -124,15 +72,10 @@ export const recipesRouter = defineRouter('/api/recipes', [
       });
     },
   },
-  {
-    method: 'post',
-    path: '/:recipeId/versions/:versionId/scaled',
-    access: ['head_brewer'],
-    params: versionParams,
-    body: saveScaledSchema,
-    handler: async (req, res) => {
-      const { recipeId, versionId } = ids(req);
-      res.status(201).json(await recipes.saveScaledVersion(actor(req), recipeId, versionId, req.body));
+  saveScaled: {
+    access: 'recipe.edit',
+    handler: async ({ user, params, body, res }) => {
+      res.status(201).json(await recipes.saveScaledVersion(user, params.recipeId, params.versionId, body));
     },
   },
-]);
+});

@@ -1,44 +1,30 @@
-import type { z } from 'zod';
-import { defineRouter, actor } from './define';
-import { historyQuery, productionQuery } from '../../shared/schemas/reports';
-import { BREWING_ROLES } from '../../shared/schemas/roles';
+import { defineRouter } from './define';
+import { reportRoutes } from '../../shared/contract/reports';
 import { lToHl, lToUsBbl } from '../../shared/brewing';
 import * as reports from '../services/reports';
 
 // The head brewer files the production figures; the assistant may read a recipe's batch history.
-export const reportsRouter = defineRouter('/api/reports', [
-  {
-    method: 'get',
-    path: '/production',
-    access: ['head_brewer'],
-    query: productionQuery,
-    handler: async (req, res) => {
-      const { month } = req.query as unknown as z.infer<typeof productionQuery>;
-      res.json(await reports.productionReport(actor(req).brewery, month));
+export const reportsRouter = defineRouter('/api/reports', reportRoutes, {
+  production: {
+    access: 'report.production.read',
+    handler: async ({ user, query, res }) => {
+      res.json(await reports.productionReport(user.brewery, query.month));
     },
   },
-  {
-    method: 'get',
-    path: '/production/csv',
-    access: ['head_brewer'],
-    query: productionQuery,
-    handler: async (req, res) => {
-      const { month } = req.query as unknown as z.infer<typeof productionQuery>;
-      const report = await reports.productionReport(actor(req).brewery, month);
+  productionCsv: {
+    access: 'report.production.read',
+    handler: async ({ user, query, res }) => {
+      const report = await reports.productionReport(user.brewery, query.month);
       res
         .type('text/csv; charset=utf-8')
-        .attachment(`production-${month}.csv`)
+        .attachment(`production-${query.month}.csv`)
         .send(reports.productionCsv(report, { bbl: lToUsBbl, hl: lToHl }));
     },
   },
-  {
-    method: 'get',
-    path: '/history',
-    access: BREWING_ROLES,
-    query: historyQuery,
-    handler: async (req, res) => {
-      const { recipeId, limit } = req.query as unknown as z.infer<typeof historyQuery>;
-      res.json(await reports.batchHistory(actor(req).breweryId, recipeId, limit));
+  history: {
+    access: 'report.history.read',
+    handler: async ({ user, query, res }) => {
+      res.json(await reports.batchHistory(user.breweryId, query.recipeId, query.limit));
     },
   },
-]);
+});

@@ -1,97 +1,67 @@
-import { z } from 'zod';
-import { defineRouter, actor } from './define';
-import { BREWING_ROLES } from '../../shared/schemas/roles';
-import { idParam, publishReleaseSchema, releaseSheetSchema, taproomListQuery } from '../../shared/schemas/taproom';
+import { defineRouter } from './define';
+import { releaseRoutes, taproomRoutes } from '../../shared/contract/taproom';
 import * as taproom from '../services/taproom';
 import * as release from '../services/release';
 import { recordAudit } from '../services/audit';
 
-const batchParams = z.strictObject({ batchId: idParam });
-const beerParams = z.strictObject({ beerId: idParam });
-
 /** What every role reads, the taproom manager included: announced and released beers only. */
-export const taproomRouter = defineRouter('/api/taproom', [
-  {
-    method: 'get',
-    path: '/beers',
-    access: 'signed-in',
-    query: taproomListQuery,
-    handler: async (req, res) => {
-      res.json(await taproom.listBeers(actor(req), req.query as z.infer<typeof taproomListQuery>));
+export const taproomRouter = defineRouter('/api/taproom', taproomRoutes, {
+  beers: {
+    access: 'taproom.read',
+    handler: async ({ user, query, res }) => {
+      res.json(await taproom.listBeers(user, query));
     },
   },
-  {
-    method: 'get',
-    path: '/beers/:beerId',
-    access: 'signed-in',
-    params: beerParams,
-    handler: async (req, res) => {
-      res.json(await taproom.beer(actor(req), Number(req.params.beerId)));
+  beer: {
+    access: 'taproom.read',
+    handler: async ({ user, params, res }) => {
+      res.json(await taproom.beer(user, params.beerId));
     },
   },
-  {
-    method: 'get',
-    path: '/releases',
-    access: BREWING_ROLES,
-    handler: async (req, res) => {
-      res.json(await release.releaseCandidates(actor(req)));
+  releases: {
+    access: 'release.read',
+    handler: async ({ user, res }) => {
+      res.json(await release.releaseCandidates(user));
     },
   },
-]);
+});
 
 /** The head brewer's release of one batch, and taking it off tap when it runs out. */
-export const releaseRouter = defineRouter('/api/batches', [
-  {
-    method: 'get',
-    path: '/:batchId/release',
-    access: BREWING_ROLES,
-    params: batchParams,
-    handler: async (req, res) => {
-      res.json(await release.releaseDetail(actor(req), Number(req.params.batchId)));
+export const releaseRouter = defineRouter('/api/batches', releaseRoutes, {
+  get: {
+    access: 'release.read',
+    handler: async ({ user, params, res }) => {
+      res.json(await release.releaseDetail(user, params.batchId));
     },
   },
-  {
-    method: 'put',
-    path: '/:batchId/release',
-    access: ['head_brewer'],
-    params: batchParams,
-    body: releaseSheetSchema,
-    handler: async (req, res) => {
-      res.json(await release.saveReleaseSheet(actor(req), Number(req.params.batchId), req.body));
+  saveSheet: {
+    access: 'release.manage',
+    handler: async ({ user, params, body, res }) => {
+      res.json(await release.saveReleaseSheet(user, params.batchId, body));
     },
   },
-  {
-    method: 'post',
-    path: '/:batchId/release/publish',
-    access: ['head_brewer'],
-    params: batchParams,
-    body: publishReleaseSchema,
-    handler: async (req, res) => {
-      const detail = await release.publishRelease(actor(req), Number(req.params.batchId), req.body);
+  publish: {
+    access: 'release.manage',
+    handler: async ({ user, params, body, req, res }) => {
+      const detail = await release.publishRelease(user, params.batchId, body);
       await recordAudit(req, 'batch.release', { batchId: detail.batch.id, abvPct: detail.numbers.abvPct });
       res.json(detail);
     },
   },
-  {
-    method: 'post',
-    path: '/:batchId/release/off-tap',
-    access: ['head_brewer'],
-    params: batchParams,
-    handler: async (req, res) => {
-      const detail = await release.takeOffTap(actor(req), Number(req.params.batchId));
+  offTap: {
+    access: 'release.manage',
+    handler: async ({ user, params, req, res }) => {
+      const detail = await release.takeOffTap(user, params.batchId);
       await recordAudit(req, 'batch.off_tap', { batchId: detail.batch.id });
       res.json(detail);
     },
   },
-  {
-    method: 'post',
-    path: '/:batchId/release/back-on-tap',
-    access: ['head_brewer'],
-    params: batchParams,
-    handler: async (req, res) => {
-      const detail = await release.putBackOnTap(actor(req), Number(req.params.batchId));
+  backOnTap: {
+    access: 'release.manage',
+    handler: async ({ user, params, req, res }) => {
+      const detail = await release.putBackOnTap(user, params.batchId);
       await recordAudit(req, 'batch.back_on_tap', { batchId: detail.batch.id });
       res.json(detail);
     },
   },
-]);
+});

@@ -1,57 +1,27 @@
-import { z } from 'zod';
-import { defineRouter, actor } from './define';
-import type { Request } from 'express';
-import { BREWING_ROLES } from '../../shared/schemas/roles';
-import { idParam } from '../../shared/schemas/taproom';
-import { tastingNoteInputSchema } from '../../shared/schemas/tasting';
+import { defineRouter, type HandlerContext } from './define';
+import { tastingRoutes } from '../../shared/contract/tasting';
 import * as tasting from '../services/tasting';
 
-const batchParams = z.strictObject({ batchId: idParam });
-const noteParams = z.strictObject({ batchId: idParam, noteId: idParam });
+type NoteChange = HandlerContext<typeof tastingRoutes.patchNote>;
 /** Notes are append-only: a change or delete answers 405, after the usual 404 for another brewery's note. */
-const appendOnly = (req: Request) =>
-  tasting.refuseNoteChange(actor(req), Number(req.params.batchId), Number(req.params.noteId));
+const appendOnly = ({ user, params }: Pick<NoteChange, 'user' | 'params'>) =>
+  tasting.refuseNoteChange(user, params.batchId, params.noteId);
 
-export const tastingRouter = defineRouter('/api/batches', [
-  {
-    method: 'get',
-    path: '/:batchId/tasting-notes',
-    access: BREWING_ROLES,
-    params: batchParams,
-    handler: async (req, res) => {
-      res.json(await tasting.listTastingNotes(actor(req), Number(req.params.batchId)));
+export const tastingRouter = defineRouter('/api/batches', tastingRoutes, {
+  list: {
+    access: 'tasting.read',
+    handler: async ({ user, params, res }) => {
+      res.json(await tasting.listTastingNotes(user, params.batchId));
     },
   },
-  {
-    method: 'post',
-    path: '/:batchId/tasting-notes',
-    access: BREWING_ROLES,
-    params: batchParams,
-    body: tastingNoteInputSchema,
-    handler: async (req, res) => {
-      const { note, created } = await tasting.addTastingNote(actor(req), Number(req.params.batchId), req.body);
+  add: {
+    access: 'tasting.write',
+    handler: async ({ user, params, body, res }) => {
+      const { note, created } = await tasting.addTastingNote(user, params.batchId, body);
       res.status(created ? 201 : 200).json(note);
     },
   },
-  {
-    method: 'patch',
-    path: '/:batchId/tasting-notes/:noteId',
-    access: BREWING_ROLES,
-    params: noteParams,
-    handler: appendOnly,
-  },
-  {
-    method: 'put',
-    path: '/:batchId/tasting-notes/:noteId',
-    access: BREWING_ROLES,
-    params: noteParams,
-    handler: appendOnly,
-  },
-  {
-    method: 'delete',
-    path: '/:batchId/tasting-notes/:noteId',
-    access: BREWING_ROLES,
-    params: noteParams,
-    handler: appendOnly,
-  },
-]);
+  patchNote: { access: 'tasting.write', handler: appendOnly },
+  putNote: { access: 'tasting.write', handler: appendOnly },
+  deleteNote: { access: 'tasting.write', handler: appendOnly },
+});

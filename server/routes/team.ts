@@ -1,64 +1,47 @@
-import { z } from 'zod';
-import { idParam, inviteSchema, updateMemberSchema, brewerySettingsSchema } from '../../shared/schemas/auth';
-import { defineRouter, actor } from './define';
+import { breweryRoutes, teamRoutes } from '../../shared/contract/auth';
+import { defineRouter } from './define';
 import * as auth from '../services/auth';
 import { recordAudit, withAudit } from '../services/audit';
 
-const userParams = z.strictObject({ userId: idParam });
-
-export const teamRouter = defineRouter('/api/team', [
-  {
-    method: 'get',
-    path: '/',
-    access: ['head_brewer'],
-    handler: async (req, res) => {
-      res.json(await auth.teamMembers(actor(req).breweryId));
+export const teamRouter = defineRouter('/api/team', teamRoutes, {
+  list: {
+    access: 'team.manage',
+    handler: async ({ user, res }) => {
+      res.json(await auth.teamMembers(user.breweryId));
     },
   },
-  {
-    method: 'post',
-    path: '/invites',
-    access: ['head_brewer'],
-    body: inviteSchema,
-    handler: async (req, res) => {
-      const invite = await auth.inviteTeammate(actor(req), req.body);
-      await recordAudit(req, 'invite.send', { email: req.body.email, role: req.body.role });
+  invite: {
+    access: 'team.manage',
+    handler: async ({ user, body, req, res }) => {
+      const invite = await auth.inviteTeammate(user, body);
+      await recordAudit(req, 'invite.send', { email: body.email, role: body.role });
       res.status(201).json(invite);
     },
   },
-  {
-    method: 'patch',
-    path: '/:userId',
-    access: ['head_brewer'],
-    params: userParams,
-    body: updateMemberSchema,
-    handler: async (req, res) => {
-      const user = await auth.updateMember(actor(req), Number(req.params.userId), req.body);
-      await recordAudit(req, req.body.role ? 'role.change' : 'access.change', { userId: user.id, ...req.body });
-      res.json({ id: user.id, role: user.role, disabled: Boolean(user.disabledAt) });
+  updateMember: {
+    access: 'team.manage',
+    handler: async ({ user, params, body, req, res }) => {
+      const member = await auth.updateMember(user, params.userId, body);
+      await recordAudit(req, body.role ? 'role.change' : 'access.change', { userId: member.id, ...body });
+      res.json({ id: member.id, role: member.role, disabled: Boolean(member.disabledAt) });
     },
   },
-]);
+});
 
-export const breweryRouter = defineRouter('/api/brewery', [
-  {
-    method: 'get',
-    path: '/',
-    access: 'signed-in',
-    handler: async (req, res) => {
-      res.json(actor(req).brewery);
+export const breweryRouter = defineRouter('/api/brewery', breweryRoutes, {
+  get: {
+    access: 'brewery.read',
+    handler: async ({ user, res }) => {
+      res.json(user.brewery);
     },
   },
-  {
-    method: 'patch',
-    path: '/',
-    access: ['head_brewer'],
-    body: brewerySettingsSchema,
-    handler: async (req, res) => {
-      const brewery = await withAudit(req, 'brewery.settings', req.body, (t) =>
-        auth.updateBrewery(actor(req).breweryId, req.body, t),
+  update: {
+    access: 'brewery.edit',
+    handler: async ({ user, body, req, res }) => {
+      const brewery = await withAudit(req, 'brewery.settings', body, (t) =>
+        auth.updateBrewery(user.breweryId, body, t),
       );
       res.json({ id: brewery.id, name: brewery.name, unitSystem: brewery.unitSystem, timeZone: brewery.timeZone });
     },
   },
-]);
+});

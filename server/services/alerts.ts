@@ -7,6 +7,7 @@ import { Op, QueryTypes, UniqueConstraintError } from 'sequelize';
 import { sequelize } from '../config/database';
 import { Alert, Batch, BatchLogEntry, GravityReading, IN_FORCE, readingInForce, User } from '../models';
 import { notFound } from '../errors';
+import { rolesFor } from '../../shared/policy';
 import { sendMail, publicLink } from './mail';
 import { logger } from '../logger';
 import { cellarPlanFor, cellarPlansFor } from './cellar';
@@ -39,12 +40,12 @@ async function raise(batch: Batch, kind: AlertKind, message: string, occasion = 
   return true;
 }
 
-/** E-mails every head brewer of the brewery, then marks the alert sent. */
+/** E-mails everyone of the brewery whose role reads cellar alerts, then marks the alert sent. */
 async function emailAlert(alert: Alert, batch: Batch): Promise<void> {
-  const headBrewers = await User.findAll({
-    where: { breweryId: batch.breweryId, role: 'head_brewer', disabledAt: null },
+  const readers = await User.findAll({
+    where: { breweryId: batch.breweryId, role: { [Op.in]: rolesFor('cellar.alerts') }, disabledAt: null },
   });
-  for (const person of headBrewers) {
+  for (const person of readers) {
     await sendMail({
       to: person.email,
       subject: `Batch ${batch.number} ${batch.beerName}: ${alert.message}`,

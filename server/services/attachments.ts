@@ -11,6 +11,7 @@ import { badRequest, conflict, HttpError, notFound, tooLarge } from '../errors';
 import { deleteObject, getObject, putObject } from './storage';
 import { UPLOAD_MAX_BYTES, type AttachmentView } from '../../shared/schemas/taproom';
 import { findBatch } from './batches';
+import { can } from '../../shared/policy';
 import { logger } from '../logger';
 
 const THUMBNAIL_PX = 480;
@@ -139,12 +140,12 @@ export async function listAttachments(actor: Express.User, batchId: number): Pro
 
 /**
  * Finds an attachment the person may fetch: their brewery's only (another brewery's answers 404).
- * The taproom sees a photo only once the head brewer has put it on an announced or released beer.
+ * Whoever may not read the batch's files (the taproom) sees a photo only once it is on an announced or released beer.
  */
 async function readableAttachment(actor: Express.User, id: number): Promise<Attachment> {
   const attachment = await Attachment.findOne({ where: { id, breweryId: actor.breweryId } });
   if (!attachment) throw notFound('This file');
-  if (actor.role === 'taproom_manager') {
+  if (!can(actor.role, 'file.read')) {
     const shown = await Release.count({
       where: { breweryId: actor.breweryId, photoAttachmentId: attachment.id, state: { [Op.ne]: 'draft' } },
     });

@@ -17,6 +17,7 @@ import type {
   UpdateMemberInput,
 } from '../../shared/schemas/auth';
 import { ROLE_LABELS } from '../../shared/schemas/roles';
+import type { Team } from '../../shared/contract/auth';
 
 const INVITE_HOURS = 72;
 const RESET_HOURS = 2;
@@ -269,7 +270,7 @@ export async function resetPassword(token: string, password: string): Promise<Us
   return user;
 }
 
-export async function teamMembers(breweryId: number) {
+export async function teamMembers(breweryId: number): Promise<Team> {
   const [users, invites] = await Promise.all([
     User.findAll({ where: { breweryId }, order: [['displayName', 'ASC']] }),
     Invite.findAll({
@@ -285,7 +286,10 @@ export async function teamMembers(breweryId: number) {
       role: u.role,
       disabled: Boolean(u.disabledAt),
     })),
-    pendingInvites: invites.map((i) => ({ id: i.id, email: i.email, role: i.role, expiresAt: i.expiresAt })),
+    // Only reset links have no role; these are invites.
+    pendingInvites: invites.flatMap((i) =>
+      i.role ? [{ id: i.id, email: i.email, role: i.role, expiresAt: i.expiresAt.toISOString() }] : [],
+    ),
   };
 }
 

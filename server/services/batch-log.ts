@@ -8,7 +8,7 @@ import { createHash } from 'node:crypto';
 import { QueryTypes, Transaction, UniqueConstraintError } from 'sequelize';
 import { sequelize } from '../config/database';
 import { Batch, BatchLogEntry, IdempotencyKey } from '../models';
-import { badRequest, notFound, signedOff, unprocessable } from '../errors';
+import { badRequest, methodNotAllowed, notFound, signedOff, unprocessable } from '../errors';
 import { fieldMessages } from '../middlewares/validate';
 import { LRUCache } from 'lru-cache';
 import {
@@ -558,4 +558,13 @@ export async function batchLogJson(
   const head = { sequence: Number(last.sequence), hash: last.hash };
   logCache.set(batchId, { ...head, body });
   return { body, head };
+}
+
+/** Entries are append-only: a change or delete is refused (405), after the usual 404 for another brewery's entry. */
+export async function refuseEntryChange(breweryId: number, batchId: number, entryId: number): Promise<never> {
+  const entry = await BatchLogEntry.findOne({ where: { id: entryId, batchId, breweryId } });
+  if (!entry) throw notFound('This log entry');
+  throw methodNotAllowed(
+    'Log entries are never changed or deleted. Add a correction that points at the entry instead.',
+  );
 }

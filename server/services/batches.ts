@@ -10,10 +10,10 @@ import { signaturesOf } from './signatures';
 import { batchActuals, effectiveMeasurements } from '../../shared/batches/brew-day';
 import { fermenterFill, tooSmall, tooSmallMessage } from '../../shared/batches/fermenter';
 import type { Measurements } from '../../shared/schemas/batch-log';
+import { can } from '../../shared/policy';
 import {
   BATCH_STATUS_LABELS,
   canMoveTo,
-  mayDump,
   type BatchDetail,
   type BatchList,
   type BatchListQuery,
@@ -378,13 +378,13 @@ export async function changeBatchStatus(
   return transaction ? run(transaction) : sequelize.transaction(run);
 }
 
-/** A status change asked for through the API: dumping is the head brewer's alone (403 for anyone else). */
+/** A status change asked for through the API: dumping needs the 'batch.dump' permission (403 otherwise). */
 export async function requestStatusChange(
   actor: Actor & Pick<Express.User, 'role'>,
   batchId: number,
   input: ChangeStatusInput,
 ): Promise<Batch> {
-  if (input.status === 'dumped' && !mayDump(actor.role)) {
+  if (input.status === 'dumped' && !can(actor.role, 'batch.dump')) {
     await findBatch(actor.breweryId, batchId);
     throw forbidden('Only the head brewer can dump a batch. Ask them, and note what you saw in the log.');
   }

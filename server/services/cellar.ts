@@ -256,21 +256,21 @@ export async function recordAction(
   input: ActionEntryInput,
   meta: WriteMeta,
 ): Promise<ActionView> {
-  const tempC = input.temp === undefined ? undefined : toC(input.temp, input.tempUnit);
+  const tempC = 'temp' in input ? toC(input.temp, input.tempUnit) : undefined;
   const volumeL =
-    input.volume === undefined ? undefined : input.volumeUnit === 'bbl' ? usBblToL(input.volume) : input.volume;
-  let pressureKpa = input.pressureKpa;
+    input.action !== 'transfer' ? undefined : input.volumeUnit === 'bbl' ? usBblToL(input.volume) : input.volume;
+  let pressureKpa: number | undefined;
   if (input.action === 'carbonation') {
     const vessel = await vesselOf(actor.breweryId, batchId);
     if (!vessel) throw conflict('This batch is in no vessel: a head pressure is set on the vessel that holds it.');
     const units = screenUnits(input.tempUnit);
-    const setting = carbonationSetting(tempC!, input.co2Volumes!, vessel.ratedPressureKpa, units);
-    if (pressureKpa !== undefined && pressureKpa > vessel.ratedPressureKpa) {
+    const setting = carbonationSetting(tempC!, input.co2Volumes, vessel.ratedPressureKpa, units);
+    if (input.pressureKpa !== undefined && input.pressureKpa > vessel.ratedPressureKpa) {
       throw unprocessable(
-        `${formatGaugePressure(pressureKpa, units)} is above ${vessel.name}'s rated working pressure of ${formatGaugePressure(vessel.ratedPressureKpa, units)}.`,
+        `${formatGaugePressure(input.pressureKpa, units)} is above ${vessel.name}'s rated working pressure of ${formatGaugePressure(vessel.ratedPressureKpa, units)}.`,
       );
     }
-    pressureKpa ??= setting.pressureKpa;
+    pressureKpa = input.pressureKpa ?? setting.pressureKpa;
   }
   const entry = await appendLogEntry(
     actor,
@@ -288,7 +288,7 @@ export async function recordAction(
           );
         }
         if (input.action === 'transfer') {
-          const tank = await findVessel(actor.breweryId, input.toVesselId!, t);
+          const tank = await findVessel(actor.breweryId, input.toVesselId, t);
           if (tank.type !== 'bright_tank')
             throw unprocessable(`${tank.name} is a fermenter: transfer into a bright tank.`);
           if (tank.currentBatchId === null && tank.status !== 'clean')

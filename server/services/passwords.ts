@@ -3,9 +3,8 @@ import bcrypt from 'bcryptjs';
 import { ZxcvbnFactory } from '@zxcvbn-ts/core';
 import * as common from '@zxcvbn-ts/language-common';
 import * as english from '@zxcvbn-ts/language-en';
+import { env } from '../config/env';
 import { badRequest } from '../errors';
-
-const BCRYPT_COST = 12;
 
 const estimator = new ZxcvbnFactory({
   dictionary: { ...common.dictionary, ...english.dictionary },
@@ -30,7 +29,7 @@ export function assertStrongPassword(password: string, context: string[] = [], f
 
 // bcrypt reads only the first 72 bytes; a SHA-256 digest first lets every character of a long passphrase count.
 const digest = (password: string) => createHash('sha256').update(password, 'utf8').digest('base64');
-export const hashPassword = (password: string) => bcrypt.hash(digest(password), BCRYPT_COST);
+export const hashPassword = (password: string) => bcrypt.hash(digest(password), env.BCRYPT_COST);
 export const checkPassword = (password: string, hash: string) => bcrypt.compare(digest(password), hash);
 
 let standIn: Promise<string> | undefined;

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { batchVolumeQueryField } from '../quantities/field';
 import type { ComputedRecipe, EquipmentProfile, RecipeInput } from '../brewing';
 import type { ChainCheck, LogEntry, Signature } from './batch-log';
 import type { RecipeVersionContent } from './recipes';
@@ -37,10 +38,6 @@ export const STATUS_TRANSITIONS: Record<BatchStatus, readonly BatchStatus[]> = {
 
 export const canMoveTo = (from: BatchStatus, to: BatchStatus) => STATUS_TRANSITIONS[from].includes(to);
 
-/** Dumping is final and writes off the beer: only the head brewer, who is responsible for the batch, may do it. */
-const DUMP_ROLES: readonly string[] = ['head_brewer'];
-export const mayDump = (role: string) => DUMP_ROLES.includes(role);
-
 const id = z.coerce
   .number({ error: 'Must be a number' })
   .int('Must be a whole number')
@@ -52,11 +49,7 @@ export const batchIdParams = z.strictObject({ id });
 export const createBatchSchema = z.strictObject({
   recipeVersionId: id,
   equipmentProfileId: id.optional(),
-  batchVolumeL: z.coerce
-    .number({ error: 'Batch volume: enter a number' })
-    .min(1, 'Batch volume must be at least 1 L')
-    .max(20000, 'Batch volume must be at most 20000 L')
-    .optional(),
+  batchVolumeL: batchVolumeQueryField().optional(),
   brewDate: z.iso.date('Brew date: choose a date'),
   fermenterId: id.optional(),
 });

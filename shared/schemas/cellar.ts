@@ -18,7 +18,8 @@ export const TEMP_UNITS = ['c', 'f'] as const;
 export type TempUnit = (typeof TEMP_UNITS)[number];
 const tempUnit = z.enum(TEMP_UNITS, { error: 'Choose °C or °F' });
 /** Temperatures a cellar sees, in either unit (−10 °C … 45 °C ≈ 14 °F … 113 °F). */
-const temp = num('Temperature', -10, 113);
+const TEMP_LIMITS = [-10, 113] as const;
+const temp = num('Temperature', ...TEMP_LIMITS);
 
 // ------------------------------------------------------------------- vessels
 
@@ -122,6 +123,12 @@ export const readingEntrySchema = z
         message: 'A refractometer reads °Brix; a hydrometer or probe reads SG or °P',
       });
     }
+    if (r.method !== 'refractometer') {
+      for (const field of ['originalBrix', 'wortCorrection'] as const) {
+        if (r[field] !== undefined)
+          ctx.addIssue({ code: 'custom', path: [field], message: 'Only a refractometer reading takes this' });
+      }
+    }
     const gravityIssue = gravityOutOfRange(r.gravity, r.gravityUnit);
     if (gravityIssue) ctx.addIssue({ code: 'custom', path: ['gravity'], message: gravityIssue });
   });
@@ -158,39 +165,72 @@ export const CELLAR_ACTION_LABELS: Record<CellarAction, string> = {
   carbonation: 'Carbonation set',
 };
 
-export const actionEntrySchema = z
-  .strictObject({
+/** A number the kind needs: "Enter …" when left empty, "… enter a number" when it is not one. */
+const needed = (label: string, missing: string, min: number, max: number) =>
+  z
+    .number({ error: (issue) => (issue.input === undefined ? missing : `${label}: enter a number`) })
+    .min(min, `${label} must be at least ${min}`)
+    .max(max, `${label} must be at most ${max}`);
+/** What went in: hop variety and weight, fining agent and dose. */
+const detail = z
+  .string({ error: 'Say what went in and how much' })
+  .trim()
+  .min(1, 'Say what went in and how much')
+  .max(200, 'Use at most 200 characters');
+const setTemp = { temp: needed('Temperature', 'Enter the set temperature', ...TEMP_LIMITS), tempUnit };
+
+/**
+ * The fields each cellar action takes, and only those: an entry is signed with exactly what belongs to
+ * its kind, so a value typed for another kind (a dry hop's hops on a cold crash) can never ride along.
+ */
+const ACTION_FIELDS = {
+  d_rest: { kind: z.literal('action'), action: z.literal('d_rest'), ...setTemp, note },
+  cold_crash: { kind: z.literal('action'), action: z.literal('cold_crash'), ...setTemp, note },
+  dry_hop: { kind: z.literal('action'), action: z.literal('dry_hop'), detail, note },
+  fining: { kind: z.literal('action'), action: z.literal('fining'), detail, note },
+  transfer: {
     kind: z.literal('action'),
-    action: z.enum(CELLAR_ACTIONS, { error: 'Choose what was done' }),
-    /** Set-point for D-rest, cold crash and carbonation. */
-    temp: temp.optional(),
+    action: z.literal('transfer'),
+    /** The volume moved, in `volumeUnit`, and the bright tank it went to. */
+    volume: needed('Volume', 'Enter the volume moved', 0.1, 100_000),
+    volumeUnit: z.enum(['l', 'bbl'], { error: 'Choose L or bbl' }),
+    toVesselId: z.number({ error: 'Choose the bright tank' }).int().positive('Choose the bright tank'),
+    note,
+  },
+  carbonation: {
+    kind: z.literal('action'),
+    action: z.literal('carbonation'),
+    /** Target CO2 volumes at the beer's temperature, and the head pressure set, kPa gauge. */
+    co2Volumes: needed('CO2 volumes', 'Enter the target CO2 volumes', 0.5, 5),
+    temp: needed('Temperature', 'Enter the beer temperature', ...TEMP_LIMITS),
     tempUnit,
-    /** What went in: hop variety and weight, fining agent and dose. */
-    detail: z.string().trim().max(200, 'Use at most 200 characters').optional(),
-    /** Transfer: the volume moved, in `volumeUnit`, and the bright tank it went to. */
-    volume: num('Volume', 0.1, 100_000).optional(),
-    volumeUnit: z.enum(['l', 'bbl']).optional(),
-    toVesselId: z.number().int().positive().optional(),
-    /** Carbonation: target CO2 volumes and the head pressure set, kPa gauge. */
-    co2Volumes: num('CO2 volumes', 0.5, 5).optional(),
     pressureKpa: num('Head pressure', 0, 1000).optional(),
     note,
-  })
-  .superRefine((a, ctx) => {
-    const need = (field: keyof typeof a, message: string) => {
-      if (a[field] === undefined) ctx.addIssue({ code: 'custom', path: [field], message });
-    };
-    if (a.action === 'transfer') {
-      need('volume', 'Enter the volume moved');
-      need('toVesselId', 'Choose the bright tank');
-    }
-    if (a.action === 'dry_hop' || a.action === 'fining') need('detail', 'Say what went in and how much');
-    if (a.action === 'carbonation') {
-      need('co2Volumes', 'Enter the target CO2 volumes');
-      need('temp', 'Enter the beer temperature');
-    }
-    if (a.action === 'd_rest' || a.action === 'cold_crash') need('temp', 'Enter the set temperature');
-  });
+  },
+} as const;
+const chooseAction = { error: 'Choose what was done' };
+
+/** The API's check: a field another kind takes is refused (400), never stored. */
+export const actionEntrySchema = z.discriminatedUnion(
+  'action',
+  [
+    z.strictObject(ACTION_FIELDS.d_rest),
+    z.strictObject(ACTION_FIELDS.cold_crash),
+    z.strictObject(ACTION_FIELDS.dry_hop),
+    z.strictObject(ACTION_FIELDS.fining),
+    z.strictObject(ACTION_FIELDS.transfer),
+    z.strictObject(ACTION_FIELDS.carbonation),
+  ],
+  chooseAction,
+);
+/**
+ * The fields of a form's draft that its chosen kind takes: what a person typed for another kind before
+ * switching (the hops of a dry hop, then "Cold crash") is dropped rather than sent and refused.
+ */
+export function onlyActionFields<T extends { action?: unknown }>(draft: T): Partial<T> {
+  const fields = ACTION_FIELDS[draft.action as CellarAction] as Record<string, unknown> | undefined;
+  return fields ? (Object.fromEntries(Object.entries(draft).filter(([key]) => key in fields)) as Partial<T>) : draft;
+}
 export type ActionEntryInput = z.infer<typeof actionEntrySchema>;
 
 // ----------------------------------------------------------------- packaging

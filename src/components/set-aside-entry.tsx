@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import type { NoteEntryInput } from '../../shared/schemas/batch-log';
-import { outbox, type OutboxItem } from '../lib/outbox';
+import { outbox } from '../lib/outbox';
+import type { OutboxItem } from '../lib/outbox-queue';
 import { showTime } from '../lib/time';
 import { Button, TextAreaField } from './ui';
 

@@ -1,6 +1,9 @@
-import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { afterEach, describe, expect, it, vi } from 'vitest';
 import { errorBody, type ApiErrorCode } from '../../shared/schemas/errors';
-import { backoffMs, createOutbox, sendItem, type OutboxItem, type OutboxStore } from './outbox';
+import { backoffMs, createOutbox, sendItem, type OutboxItem, type OutboxStore } from './outbox-queue';
+
+/** The real sender, as the page wires it (src/lib/outbox.ts) with this device's id. */
+const send = (item: OutboxItem) => sendItem(item, 'tablet-test-01');
 
 /** The outbox's store kept in memory, standing in for IndexedDB (which jsdom lacks). */
 function memoryStore(): OutboxStore & { items: OutboxItem[] } {
@@ -56,14 +59,13 @@ const write = (label: string, group = 'batch:1') => ({
 });
 const ILYA = { id: 7, displayName: 'Ilya Brandt' };
 
-beforeEach(() => localStorage.clear());
 afterEach(() => vi.unstubAllGlobals());
 
 describe('outbox', () => {
   it('keeps order within a batch: a failed send holds back the items after it, and they go in order once it passes', async () => {
     const received = stubNetwork({ one: ['offline'] });
     const store = memoryStore();
-    const box = createOutbox(store);
+    const box = createOutbox(store, send);
     box.setUser(ILYA);
     await box.enqueue(write('one'));
     await box.enqueue(write('two'));
@@ -80,7 +82,7 @@ describe('outbox', () => {
   it('an item that keeps failing on one batch never blocks another batch', async () => {
     const received = stubNetwork({ 'A reading': ['not_yet', 'unavailable', 'proxy-502', 'too_many_attempts'] });
     const store = memoryStore();
-    const box = createOutbox(store);
+    const box = createOutbox(store, send);
     box.setUser(ILYA);
     await box.enqueue(write('A reading', 'cellar:1'));
     await box.enqueue(write('A later reading', 'cellar:1'));
@@ -100,7 +102,7 @@ describe('outbox', () => {
   it('sets aside what is refused for good, with the reason: it is not retried and the next entries go', async () => {
     const received = stubNetwork({ 'Mash in': ['signed_off'], Vorlauf: ['signed_off'] });
     const store = memoryStore();
-    const box = createOutbox(store);
+    const box = createOutbox(store, send);
     box.setUser(ILYA);
     await box.enqueue(write('Mash in'));
     await box.enqueue(write('Vorlauf'));
@@ -113,7 +115,7 @@ describe('outbox', () => {
       ['Vorlauf', 'rejected', 'signed_off', 'The brew day is signed off: add a correction instead.'],
     ]);
     // They survive a reload: a new page's outbox over the same store still shows them.
-    const reloaded = createOutbox(store);
+    const reloaded = createOutbox(store, send);
     await reloaded.load();
     expect(reloaded.getSnapshot().items.map((i) => i.label)).toEqual(['Mash in', 'Vorlauf']);
   });
@@ -121,7 +123,7 @@ describe('outbox', () => {
   it('sends a set-aside entry again as a note in its place, with a new key; or discards it', async () => {
     const received = stubNetwork({ 'Mash in': ['batch_closed'], Vorlauf: ['batch_closed'] });
     const store = memoryStore();
-    const box = createOutbox(store);
+    const box = createOutbox(store, send);
     box.setUser(ILYA);
     const refused = await box.enqueue(write('Mash in'));
     await box.enqueue(write('Vorlauf'));
@@ -139,7 +141,7 @@ describe('outbox', () => {
   it('only the author may send a set-aside entry again', async () => {
     stubNetwork({ 'Mash in': ['signed_off'] });
     const store = memoryStore();
-    const box = createOutbox(store);
+    const box = createOutbox(store, send);
     box.setUser(ILYA);
     const refused = await box.enqueue(write('Mash in'));
     await box.flush();
@@ -151,7 +153,7 @@ describe('outbox', () => {
   it('a 401 keeps every item and sends them with their original keys after signing in again', async () => {
     const received = stubNetwork({ 'mash in': ['unauthenticated'] });
     const store = memoryStore();
-    const box = createOutbox(store);
+    const box = createOutbox(store, send);
     box.setUser(ILYA);
     const item = await box.enqueue(write('mash in'));
     await box.flush();
@@ -176,7 +178,7 @@ describe('outbox', () => {
       attempts: 0,
     });
     store.items = [item('by seven', 7), item('by eight', 8)];
-    const box = createOutbox(store);
+    const box = createOutbox(store, send);
     box.setUser({ id: 8, displayName: 'Maren Holt' });
     await box.flush();
     expect(received.map((r) => r.label)).toEqual(['by eight']);
@@ -208,7 +210,7 @@ describe('sending one item', () => {
       idempotencyKey: 'k',
       capturedAt: new Date().toISOString(),
     } as OutboxItem;
-    expect(await sendItem(item)).toEqual({
+    expect(await sendItem(item, 'tablet-test-01')).toEqual({
       kind: 'rejected',
       code: 'invalid',
       message: 'Some fields need attention: Temperature (°C) must be at most 110',

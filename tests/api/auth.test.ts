@@ -9,7 +9,17 @@ import { env } from '../../server/config/env';
 import { UNDELIVERABLE_DOMAIN } from '../../server/dev/mail-catcher';
 import { hashToken } from '../../server/services/tokens';
 import { AuditEvent, Invite, Session, User } from '../../server/models';
-import { GOOD_PASSWORD, agent, createTestBrewery, mailCatcher, testApp, type TestBrewery } from './helpers';
+import {
+  GOOD_PASSWORD,
+  agent,
+  captured,
+  cookiePair,
+  createTestBrewery,
+  mailCatcher,
+  testApp,
+  theOne,
+  type TestBrewery,
+} from './helpers';
 
 const NEW_PASSWORD = 'harbour-lantern-quince-81';
 
@@ -19,12 +29,9 @@ function sessionSetCookie(res: Response): string | undefined {
   return lines.find((line) => line.startsWith(`${SESSION_COOKIE}=`));
 }
 
-/** `name=value` of a Set-Cookie line, ready for a Cookie header. */
-const cookieOf = (setCookie: string) => setCookie.split(';')[0];
-
 /** The session id inside a signed cookie (`s:<sid>.<signature>`). */
 function sidOf(setCookie: string): string {
-  const value = decodeURIComponent(cookieOf(setCookie).slice(SESSION_COOKIE.length + 1));
+  const value = decodeURIComponent(cookiePair(setCookie).slice(SESSION_COOKIE.length + 1));
   return value.slice(2, value.lastIndexOf('.'));
 }
 
@@ -70,7 +77,7 @@ describe('sign-in and sign-out', () => {
     expect(setCookie).toMatch(/;\s*SameSite=Lax/i);
     expect(setCookie).toMatch(/;\s*Path=\//i);
 
-    const me = await request(testApp()).get('/api/auth/me').set('Cookie', cookieOf(setCookie!));
+    const me = await request(testApp()).get('/api/auth/me').set('Cookie', cookiePair(setCookie!));
     expect(me.status).toBe(200);
     expect(me.body.email).toBe(user.email);
   });
@@ -84,7 +91,7 @@ describe('sign-in and sign-out', () => {
   it('sign-out ends the session on the server: the same cookie replayed afterwards gets 401 and its row is gone', async () => {
     const user = await newUser(t);
     const setCookie = sessionSetCookie(await signIn(testApp(), user.email, GOOD_PASSWORD))!;
-    const cookie = cookieOf(setCookie);
+    const cookie = cookiePair(setCookie);
     expect(await Session.findByPk(sidOf(setCookie))).not.toBeNull();
 
     const out = await request(testApp()).post('/api/auth/sign-out').set('x-kettlewright', '1').set('Cookie', cookie);
@@ -132,7 +139,7 @@ describe('sign-in and sign-out', () => {
     // session the planted cookie named, which proves the server had adopted it (otherwise this test would prove nothing).
     expect((await request(testApp()).get('/api/auth/me').set('Cookie', planted)).status).toBe(401);
     expect(await Session.findByPk(plantedSid)).toBeNull();
-    expect((await request(testApp()).get('/api/auth/me').set('Cookie', cookieOf(after))).status).toBe(200);
+    expect((await request(testApp()).get('/api/auth/me').set('Cookie', cookiePair(after))).status).toBe(200);
   });
 
   it('a wrong password and an unknown e-mail answer the same 401', async () => {
@@ -159,7 +166,7 @@ describe('sessions are stored in MariaDB', () => {
     expect(row!.expires!.getTime()).toBeGreaterThan(Date.now());
 
     const appB = createApp();
-    const me = await request(appB).get('/api/auth/me').set('Cookie', cookieOf(setCookie));
+    const me = await request(appB).get('/api/auth/me').set('Cookie', cookiePair(setCookie));
     expect(me.status).toBe(200);
     expect(me.body).toMatchObject({ id: user.id, email: user.email });
   });
@@ -180,10 +187,10 @@ describe('sessions are stored in MariaDB', () => {
     };
 
     const restore = await signedInHoursAgo(23);
-    expect((await request(testApp()).get('/api/auth/me').set('Cookie', cookieOf(setCookie))).status).toBe(200);
+    expect((await request(testApp()).get('/api/auth/me').set('Cookie', cookiePair(setCookie))).status).toBe(200);
     await restore();
     await signedInHoursAgo(25);
-    expect((await request(testApp()).get('/api/auth/me').set('Cookie', cookieOf(setCookie))).status).toBe(401);
+    expect((await request(testApp()).get('/api/auth/me').set('Cookie', cookiePair(setCookie))).status).toBe(401);
     expect(await Session.findByPk(sid)).toBeNull();
   });
 
@@ -192,7 +199,7 @@ describe('sessions are stored in MariaDB', () => {
     const setCookie = sessionSetCookie(await signIn(testApp(), user.email, GOOD_PASSWORD))!;
     const sid = sidOf(setCookie);
     // One request records when the session was last seen.
-    expect((await request(testApp()).get('/api/auth/me').set('Cookie', cookieOf(setCookie))).status).toBe(200);
+    expect((await request(testApp()).get('/api/auth/me').set('Cookie', cookiePair(setCookie))).status).toBe(200);
     const lastSeenHoursAgo = async (hours: number) => {
       const row = (await Session.findByPk(sid))!;
       const data = JSON.parse(row.data!);
@@ -203,9 +210,9 @@ describe('sessions are stored in MariaDB', () => {
       );
     };
     await lastSeenHoursAgo(7);
-    expect((await request(testApp()).get('/api/auth/me').set('Cookie', cookieOf(setCookie))).status).toBe(200);
+    expect((await request(testApp()).get('/api/auth/me').set('Cookie', cookiePair(setCookie))).status).toBe(200);
     await lastSeenHoursAgo(9);
-    expect((await request(testApp()).get('/api/auth/me').set('Cookie', cookieOf(setCookie))).status).toBe(401);
+    expect((await request(testApp()).get('/api/auth/me').set('Cookie', cookiePair(setCookie))).status).toBe(401);
     expect(await Session.findByPk(sid)).toBeNull();
   });
 });
@@ -216,10 +223,10 @@ describe('sign-in is audited', () => {
     const res = await signIn(testApp(), user.email, GOOD_PASSWORD);
     expect(res.status).toBe(200);
     const rows = await AuditEvent.findAll({ where: { action: 'sign-in.success', userId: user.id } });
-    expect(rows).toHaveLength(1);
-    expect(rows[0].breweryId).toBe(t.brewery.id);
-    expect(rows[0].ip).toMatch(/127\.0\.0\.1|::1/);
-    expect(rows[0].requestId).toBe(res.headers['x-request-id']);
+    const row = theOne(rows, 'sign-in audit row');
+    expect(row.breweryId).toBe(t.brewery.id);
+    expect(row.ip).toMatch(/127\.0\.0\.1|::1/);
+    expect(row.requestId).toBe(res.headers['x-request-id']);
   });
 
   it('failure records the e-mail tried and the ip, with no person', async () => {
@@ -230,10 +237,10 @@ describe('sign-in is audited', () => {
     const rows = await AuditEvent.findAll({
       where: { action: 'sign-in.failure', requestId: res.headers['x-request-id'] },
     });
-    expect(rows).toHaveLength(1);
-    expect(rows[0].userId).toBeNull();
-    expect(rows[0].ip).toMatch(/127\.0\.0\.1|::1/);
-    expect(rows[0].detail).toEqual({ email });
+    const row = theOne(rows, 'sign-in failure audit row');
+    expect(row.userId).toBeNull();
+    expect(row.ip).toMatch(/127\.0\.0\.1|::1/);
+    expect(row.detail).toEqual({ email });
   });
 });
 
@@ -286,9 +293,7 @@ describe('password reset by e-mail', () => {
         .messages()
         .filter((m) => m.to.includes(email)),
     ).toHaveLength(1);
-    const match = mail.text.match(/\/reset\/([A-Za-z0-9_-]+)/);
-    expect(match).not.toBeNull();
-    return match![1];
+    return captured(mail.text, /\/reset\/([A-Za-z0-9_-]+)/);
   }
 
   it('request → mail → new password: the old one fails, the new one works, other sessions end, the link works once', async () => {
@@ -339,9 +344,9 @@ describe('password reset by e-mail', () => {
 
     // The link is stored by the time the request answers; the mail follows in the background.
     const stored = await Invite.findAll({ where: { email: known.email, purpose: 'reset' } });
-    expect(stored).toHaveLength(1);
+    const invite = theOne(stored, 'stored reset link');
     expect(await Invite.count({ where: { email: stranger } })).toBe(0);
-    expect(hashToken(await resetToken(known.email))).toBe(stored[0].tokenHash);
+    expect(hashToken(await resetToken(known.email))).toBe(invite.tokenHash);
     // The stranger's request was answered first, so a mail for it would have been on its way before the known one's.
     expect(
       mailCatcher()

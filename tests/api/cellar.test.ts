@@ -333,6 +333,68 @@ describe('importing a long probe file', () => {
   });
 });
 
+describe('cellar actions carry only their own fields', () => {
+  const postAction = (batchId: number, body: object) =>
+    t.as.assistant_brewer.post(`/api/cellar/batches/${batchId}/actions`).set(writeHeaders()).send(body);
+
+  it('a dry hop with its hops and note, then a cold crash: the crash is stored with neither', async () => {
+    const batch = await knockedOutBatch();
+    await postReading(batch.id, reading(1.02));
+    const dryHop = await postAction(batch.id, {
+      kind: 'action',
+      action: 'dry_hop',
+      detail: 'Citra 4 kg',
+      note: 'Second charge, purged with CO2',
+    });
+    expect(dryHop.status).toBe(201);
+    const crash = await postAction(batch.id, { kind: 'action', action: 'cold_crash', temp: 1, tempUnit: 'c' });
+    expect(crash.status).toBe(201);
+    expect(crash.body).toMatchObject({ action: 'cold_crash', tempC: 1, detail: null, note: null });
+
+    const view = await cellarView(batch.id);
+    expect(view.actions.map((a) => [a.action, a.detail, a.note, a.tempC])).toEqual([
+      ['dry_hop', 'Citra 4 kg', 'Second charge, purged with CO2', null],
+      ['cold_crash', null, null, 1],
+    ]);
+    const stored = await BatchLogEntry.findOne({ where: { batchId: batch.id, stepKey: 'cold_crash' } });
+    expect(Object.keys(stored!.data as object)).not.toContain('detail');
+    expect(Object.keys(stored!.data as object)).not.toContain('note');
+  });
+
+  it('refuses with a 400 naming the field a field another kind takes, and stores nothing', async () => {
+    const batch = await knockedOutBatch();
+    await postReading(batch.id, reading(1.02));
+    const before = await BatchLogEntry.count({ where: { batchId: batch.id } });
+    const stray = await postAction(batch.id, {
+      kind: 'action',
+      action: 'cold_crash',
+      temp: 1,
+      tempUnit: 'c',
+      detail: 'Citra 4 kg',
+    });
+    expect(stray.status).toBe(400);
+    expect(stray.body.error.message).toBe('Some fields need attention');
+    expect(Object.values(stray.body.error.fields)).toEqual(['Unknown field: detail']);
+    // A dry hop takes no temperature, a transfer no CO2 volumes.
+    const hopTemp = await postAction(batch.id, {
+      kind: 'action',
+      action: 'dry_hop',
+      detail: 'Citra 4 kg',
+      temp: 18,
+      tempUnit: 'c',
+    });
+    expect(hopTemp.status).toBe(400);
+    expect(Object.values(hopTemp.body.error.fields)).toEqual(['Unknown fields: temp, tempUnit']);
+    // What a kind needs is still asked for by name.
+    const bare = await postAction(batch.id, { kind: 'action', action: 'dry_hop' });
+    expect(bare.status).toBe(400);
+    expect(bare.body.error.fields).toEqual({ detail: 'Say what went in and how much' });
+    const noKind = await postAction(batch.id, { kind: 'action', action: 'whirl' });
+    expect(noKind.body.error.fields).toEqual({ action: 'Choose what was done' });
+    expect(await BatchLogEntry.count({ where: { batchId: batch.id } })).toBe(before);
+  });
+});
+
 describe('vessels', () => {
   it('a vessel cannot hold two batches (409), by transfer or by assignment', async () => {
     const tank = await vessel({ type: 'bright_tank' });
@@ -344,7 +406,7 @@ describe('vessels', () => {
       t.as.assistant_brewer
         .post(`/api/cellar/batches/${batchId}/actions`)
         .set(writeHeaders())
-        .send({ kind: 'action', action: 'transfer', volume: 700, volumeUnit: 'l', toVesselId: tank.id, tempUnit: 'c' });
+        .send({ kind: 'action', action: 'transfer', volume: 700, volumeUnit: 'l', toVesselId: tank.id });
     expect((await transfer(a.id)).status).toBe(201);
     const second = await transfer(b.id);
     expect(second.status).toBe(409);
@@ -383,16 +445,14 @@ describe('vessels', () => {
 
   it('stores capacity and rated pressure in SI from bbl and psi, and refuses a duplicate name', async () => {
     const v = await vessel({ name: 'FV-psi', type: 'fermenter', capacity: 10, ratedPressure: 15 } as never);
-    const res = await t.as.head_brewer
-      .post('/api/vessels')
-      .send({
-        name: 'FV-bbl',
-        type: 'fermenter',
-        capacity: 10,
-        capacityUnit: 'bbl',
-        ratedPressure: 15,
-        pressureUnit: 'psi',
-      });
+    const res = await t.as.head_brewer.post('/api/vessels').send({
+      name: 'FV-bbl',
+      type: 'fermenter',
+      capacity: 10,
+      capacityUnit: 'bbl',
+      ratedPressure: 15,
+      pressureUnit: 'psi',
+    });
     expect(res.status).toBe(201);
     // 1 US beer barrel = 31 US gal (27 CFR 25.11) = 117.347765 L; 1 psi = 6.894757 kPa (NIST SP 811).
     expect(res.body.capacityL).toBeCloseTo(1173.47765, 4);
@@ -501,16 +561,14 @@ describe('another brewery', () => {
     ).toBe(404);
     expect(
       (
-        await o
-          .put(`/api/vessels/${tank.id}`)
-          .send({
-            name: 'Mine',
-            type: 'fermenter',
-            capacity: 1,
-            capacityUnit: 'l',
-            ratedPressure: 1,
-            pressureUnit: 'kpa',
-          })
+        await o.put(`/api/vessels/${tank.id}`).send({
+          name: 'Mine',
+          type: 'fermenter',
+          capacity: 1,
+          capacityUnit: 'l',
+          ratedPressure: 1,
+          pressureUnit: 'kpa',
+        })
       ).status,
     ).toBe(404);
     expect(

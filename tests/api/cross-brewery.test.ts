@@ -4,6 +4,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { routeTable, type RouteEntry } from '../../server/routes/define';
 import type { Role } from '../../shared/schemas/roles';
+import { rolesFor } from '../../shared/policy';
 import { createTestBrewery, type TestBrewery } from './helpers';
 import { writeHeaders } from './batch-fixtures';
 import {
@@ -27,8 +28,8 @@ let theirId: (param: string) => Promise<number>;
 
 /** Someone in our brewery the route lets in (the head brewer where allowed). */
 function callerFor(route: RouteEntry): Role {
-  if (route.access === 'public' || route.access === 'signed-in') return 'head_brewer';
-  return route.access.includes('head_brewer') ? 'head_brewer' : route.access[0]!;
+  const allowed = rolesFor(route.access);
+  return allowed.includes('head_brewer') ? 'head_brewer' : allowed[0]!;
 }
 
 async function call(route: RouteEntry, ids: (param: string) => Promise<number>) {

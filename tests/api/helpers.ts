@@ -33,6 +33,33 @@ export function agent(target: Express = testApp()) {
 
 export type Agent = ReturnType<typeof agent>;
 
+/** `name=value` of a Set-Cookie line, ready for a Cookie header. */
+export function cookiePair(setCookie: string): string {
+  const end = setCookie.indexOf(';');
+  return end === -1 ? setCookie : setCookie.slice(0, end);
+}
+
+/** A response header a check relies on, or a failure that names it. */
+export function headerOf(res: { headers: Record<string, string | undefined> }, name: string): string {
+  const value = res.headers[name];
+  if (value === undefined) throw new Error(`The response has no ${name} header`);
+  return value;
+}
+
+/** The one row a check expects, or a failure that says how many there were. */
+export function theOne<T>(rows: readonly T[], what: string): T {
+  const [row] = rows;
+  if (rows.length !== 1 || row === undefined) throw new Error(`Expected exactly one ${what}, found ${rows.length}`);
+  return row;
+}
+
+/** The first group `pattern` captures in `text`, or a failure that shows the text. */
+export function captured(text: string, pattern: RegExp): string {
+  const value = pattern.exec(text)?.[1];
+  if (value === undefined) throw new Error(`${pattern} found nothing in: ${text}`);
+  return value;
+}
+
 const tag = () => randomBytes(5).toString('hex');
 
 let cachedHash: string | undefined;

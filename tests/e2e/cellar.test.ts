@@ -13,16 +13,20 @@ async function fermentingBatch(page: Page): Promise<{ id: number; number: string
     name: string;
     type: string;
     status: string;
+    capacityL: number;
     currentBatchId: number | null;
   }[];
-  let fermenter = vessels.find((v) => v.type === 'fermenter' && v.status === 'clean' && v.currentBatchId === null);
+  // Room for the first recipe's batch with headspace: 20 bbl ≈ 2,347 L (1 US bbl = 117.348 L, 27 CFR 25.11).
+  let fermenter = vessels.find(
+    (v) => v.type === 'fermenter' && v.status === 'clean' && v.currentBatchId === null && v.capacityL >= 2347,
+  );
   if (!fermenter) {
     const made = await page.request.post('/api/vessels', {
       headers: write,
       data: {
         name: `FV-${Date.now() % 100000}`,
         type: 'fermenter',
-        capacity: 10,
+        capacity: 40,
         capacityUnit: 'bbl',
         ratedPressure: 15,
         pressureUnit: 'psi',
@@ -80,6 +84,7 @@ describe('cellar readings on the tablet (Chromium, 1024×768)', () => {
         ['1.021', '67.5'],
       ] as const
     ).entries()) {
+      await form.getByRole('button', { name: /^Hydrometer/ }).click();
       await form.getByLabel('Gravity (SG)').fill(gravity);
       await form.getByLabel('Temperature (°F)').fill(temp);
       await form.getByRole('button', { name: 'Save reading' }).click();
@@ -89,8 +94,10 @@ describe('cellar readings on the tablet (Chromium, 1024×768)', () => {
     const chart = page.getByRole('figure', { name: 'Fermentation chart' });
     await expect.poll(() => chart.textContent()).toMatch(/D-rest at 1\.0\d\d/);
     await expect.poll(() => page.getByLabel('Readings and cellar work').textContent()).toContain('1.021');
-    // The form keeps the last temperature for the next reading.
-    expect(await form.getByLabel('Temperature (°F)').inputValue()).toBe('67.5');
+    // The next reading starts empty: the last temperature and the usual method are offered, not filled in.
+    expect(await form.getByLabel('Temperature (°F)').inputValue()).toBe('');
+    expect(await form.getByRole('button', { name: 'Last: 67.5 °F' }).count()).toBe(1);
+    expect(await form.getByRole('button', { name: 'Hydrometer usual' }).getAttribute('aria-pressed')).toBe('false');
     await page.getByRole('heading', { name: 'Fermentation curve' }).scrollIntoViewIfNeeded();
     await screenshot(page, 'cellar-batch-reading-1024.png', { fullPage: false });
     await screenshot(page, 'cellar-batch-full-1024.png');
@@ -150,6 +157,42 @@ describe('cellar readings on the tablet (Chromium, 1024×768)', () => {
     await screenshot(page, 'cellar-curve-1024.png', { fullPage: false });
   });
 
+  it('a dry hop with a note, then a cold crash: the crash entry shows no note and no hops', async () => {
+    const headPage = await head.newPage();
+    await signIn(headPage, DEMO_PEOPLE[0]!.email);
+    const batch = await fermentingBatch(headPage);
+    const page = await assistant.newPage();
+    await signIn(page, DEMO_PEOPLE[1]!.email);
+    await page.goto(`/cellar/batches/${batch.id}`);
+    const reading = page.getByRole('form', { name: 'Log a reading' });
+    await reading.getByRole('button', { name: 'Hydrometer' }).tap();
+    await reading.getByLabel('Gravity (SG)').fill('1.020');
+    await reading.getByRole('button', { name: 'Save reading' }).tap();
+    const rows = page.getByTestId('cellar-row');
+    await expect.poll(() => rows.count(), { timeout: 15_000 }).toBe(1);
+
+    const work = page.getByRole('form', { name: 'Log cellar work' });
+    await work.getByLabel('What was done').selectOption('dry_hop');
+    await work.getByLabel('Hops and weight').fill('Citra 9 lb');
+    await work.getByLabel('Note (optional)').fill('Second charge, purged with CO2');
+    await work.getByRole('button', { name: 'Log: Dry hop' }).tap();
+    await expect.poll(() => rows.filter({ hasText: 'Dry hop' }).count(), { timeout: 15_000 }).toBe(1);
+    expect(await work.getByLabel('Note (optional)').inputValue()).toBe('');
+    expect(await work.getByLabel('What was done').inputValue()).toBe('');
+
+    await work.getByLabel('What was done').selectOption('cold_crash');
+    await work.getByRole('button', { name: /^Plan: / }).tap();
+    await screenshot(page, 'cellar-cold-crash-after-dry-hop-1024.png', { fullPage: false });
+    await work.getByRole('button', { name: 'Log: Cold crash' }).tap();
+    const crash = rows.filter({ hasText: 'Cold crash' });
+    await expect.poll(() => crash.count(), { timeout: 15_000 }).toBe(1);
+    expect(await rows.filter({ hasText: 'Dry hop' }).textContent()).toMatch(/Citra 9 lb · “Second charge, purged/);
+    const crashText = await crash.textContent();
+    expect(crashText).toMatch(/^Cold crash · \d+(\.\d)? °F/);
+    expect(crashText).not.toContain('Second charge');
+    expect(crashText).not.toContain('Citra');
+  });
+
   it('the head brewer adds a bright tank with its rated pressure', async () => {
     const page = await head.newPage();
     await page.goto('/cellar/vessels');
@@ -176,6 +219,7 @@ describe('cellar readings on the tablet (Chromium, 1024×768)', () => {
       await signIn(page, DEMO_PEOPLE[1]!.email);
       await page.goto(`/cellar/batches/${batch.id}`);
       const form = page.getByRole('form', { name: 'Log a reading' });
+      await form.getByRole('button', { name: 'Hydrometer' }).click();
       await form.getByLabel('Gravity (SG)').fill('1,050');
       await form.getByLabel('Temperature (°F)').fill('66');
       await form.getByRole('button', { name: 'Save reading' }).dblclick();

@@ -8,5 +8,6 @@ export { Dialog } from './dialog';
 export { ToastProvider, useToast } from './toast';
 export { cx } from './cx';
 export { FormBanner } from './form-banner';
-// PasswordHint, TimeZoneOptions and UnitField are imported by path: they pull in form and unit code
+export { SuggestionChip } from './suggestion-chip';
+// PasswordHint, TimeZoneOptions and QuantityField are imported by path: they pull in form and unit code
 // that the initial page (sign-in, app shell) must not load.

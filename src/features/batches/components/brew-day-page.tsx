@@ -4,7 +4,8 @@ import { brewDaySteps, boilAdditions, type BrewDayStep, type MeasureKey } from '
 import { BATCH_STATUS_LABELS } from '../../../../shared/schemas/batches';
 import { Button, Card, ErrorState, LinkButton, Loading, TextAreaField, cx } from '../../../components/ui';
 import { useCurrentUser } from '../../../app/current-user';
-import { outbox, useOutbox, type OutboxItem } from '../../../lib/outbox';
+import { outbox, useOutbox } from '../../../lib/outbox';
+import type { OutboxItem } from '../../../lib/outbox-queue';
 import { useBatch } from '../api/get-batch';
 import { batchGroup, batchLogUrl, logEntry } from '../api/log-entry';
 import { ActualsCard } from './actuals-card';

@@ -1,16 +1,18 @@
 import { useState } from 'react';
-import { BATCH_STATUS_LABELS, STATUS_TRANSITIONS, mayDump, type BatchStatus } from '../../../../shared/schemas/batches';
+import { BATCH_STATUS_LABELS, STATUS_TRANSITIONS, type BatchStatus } from '../../../../shared/schemas/batches';
+import { can } from '../../../../shared/policy';
+import type { Role } from '../../../../shared/schemas/roles';
 import { Button, Card, TextField } from '../../../components/ui';
 import { ApiError } from '../../../lib/api-client';
 import { useChangeStatus } from '../api/change-status';
 
 /** Moves the batch to its next status, or (head brewer only) dumps it with a reason. */
-export function StatusCard({ batchId, status, role }: { batchId: number; status: BatchStatus; role: string }) {
+export function StatusCard({ batchId, status, role }: { batchId: number; status: BatchStatus; role: Role }) {
   const change = useChangeStatus(batchId);
   const [reason, setReason] = useState('');
   const [dumping, setDumping] = useState(false);
   const next = STATUS_TRANSITIONS[status].filter((s) => s !== 'dumped');
-  const canDump = STATUS_TRANSITIONS[status].includes('dumped') && mayDump(role);
+  const canDump = STATUS_TRANSITIONS[status].includes('dumped') && can(role, 'batch.dump');
   if (!next.length && !canDump) return null;
   const error = change.error instanceof ApiError ? (change.error.fields.reason ?? change.error.message) : undefined;
   return (

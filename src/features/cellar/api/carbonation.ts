@@ -1,13 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import type { CarbonationQuery } from '../../../../shared/schemas/cellar';
+import type { CarbonationAnswer } from '../../../../shared/contract/cellar';
 import { cellarKeys } from './keys';
-
-export interface CarbonationAnswer {
-  pressureKpa: number;
-  pressurePsi: number;
-  ratedKpa: number;
-}
 
 export const carbonationQuery = (query: CarbonationQuery) =>
   queryOptions({

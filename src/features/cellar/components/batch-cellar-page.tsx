@@ -126,19 +126,19 @@ export function BatchCellarPage() {
             ...data.readings.map((r) => ({
               at: r.takenAt,
               key: `r${r.id}`,
-              text: `${r.sg.toFixed(3)} (${r.plato.toFixed(1)} °P)${r.tempC !== null ? ` · ${show(system, 'tempC', r.tempC)}` : ''}${r.ph !== null ? ` · pH ${r.ph}` : ''} · ${READING_METHOD_LABELS[r.method]}${r.corrected ? ' · corrected' : ''}`,
+              text: `${r.sg.toFixed(3)} (${r.plato.toFixed(1)} °P)${r.tempC !== null ? ` · ${show(system, 'temperature', r.tempC)}` : ''}${r.ph !== null ? ` · pH ${r.ph}` : ''} · ${READING_METHOD_LABELS[r.method]}${r.corrected ? ' · corrected' : ''}`,
               who: r.authorName,
             })),
             ...data.actions.map((a) => ({
               at: a.at,
               key: `a${a.logEntryId}`,
-              text: `${CELLAR_ACTION_LABELS[a.action]}${a.tempC !== null ? ` · ${show(system, 'tempC', a.tempC)}` : ''}${a.volumeL !== null ? ` · ${show(system, 'volumeL', a.volumeL)}` : ''}${a.detail ? ` · ${a.detail}` : ''}${a.co2Volumes !== null ? ` · ${a.co2Volumes} vol` : ''}`,
+              text: `${CELLAR_ACTION_LABELS[a.action]}${a.tempC !== null ? ` · ${show(system, 'temperature', a.tempC)}` : ''}${a.volumeL !== null ? ` · ${show(system, 'volume', a.volumeL)}` : ''}${a.detail ? ` · ${a.detail}` : ''}${a.co2Volumes !== null ? ` · ${a.co2Volumes} vol` : ''}${a.note ? ` · “${a.note}”` : ''}`,
               who: a.authorName,
             })),
           ]
             .sort((x, y) => y.at.localeCompare(x.at))
             .map((row) => (
-              <li key={row.key} className="flex flex-wrap justify-between gap-2 py-2">
+              <li key={row.key} data-testid="cellar-row" className="flex flex-wrap justify-between gap-2 py-2">
                 <span className="font-medium tabular-nums">{row.text}</span>
                 <span className="text-sm text-ink-500">
                   {dateTime.format(new Date(row.at))} · {row.who}

@@ -1,9 +1,9 @@
 import { useState } from 'react';
-import { Button, Caution, TextField } from '../../../components/ui';
+import { Button, Caution, SuggestionChip, TextField } from '../../../components/ui';
 import { formatGaugePressure } from '../../../../shared/brewing';
 import type { CellarPlanView, VesselView } from '../../../../shared/schemas/cellar';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
-import { UNITS } from '../../../lib/units';
+import { displayUnit } from '../../../lib/units';
 import { useCarbonation } from '../api/carbonation';
 import { useLogCellarEntry } from '../api/log-cellar-entry';
 import { useSubmitOnce } from '../../../lib/use-submit-once';
@@ -23,9 +23,11 @@ export function CarbonationPanel({
   plan: CellarPlanView;
   unitSystem: UnitSystem;
 }) {
-  const temp = UNITS[unitSystem].tempC;
-  const [volumes, setVolumes] = useState(String(plan.co2Volumes));
-  const [beerTemp, setBeerTemp] = useState(temp.toDisplay(plan.crashTempC).toFixed(1));
+  const temp = displayUnit('temperature', unitSystem);
+  // Empty until the person types or taps the plan's figure: a logged pressure is for the beer they measured.
+  const [volumes, setVolumes] = useState('');
+  const [beerTemp, setBeerTemp] = useState('');
+  const planTemp = temp.fromSi(plan.crashTempC).toFixed(1);
   const [saved, setSaved] = useState<string>();
   const log = useLogCellarEntry(batchId);
   const [co2Volumes, tempValue] = [optionalNumber(volumes.trim()), optionalNumber(beerTemp.trim())];
@@ -54,6 +56,16 @@ export function CarbonationPanel({
           value={beerTemp}
           onChange={(e) => setBeerTemp(e.target.value)}
         />
+        <div>
+          <SuggestionChip label="Plan" onPick={() => setVolumes(String(plan.co2Volumes))}>
+            {plan.co2Volumes} vol
+          </SuggestionChip>
+        </div>
+        <div>
+          <SuggestionChip label="Plan crash" onPick={() => setBeerTemp(planTemp)}>
+            {planTemp} {temp.unit}
+          </SuggestionChip>
+        </div>
       </div>
       {answer.data && (
         <p className="rounded-lg bg-cellar-100 p-4" data-testid="carbonation-answer">
@@ -88,12 +100,13 @@ export function CarbonationPanel({
               co2Volumes: query.co2Volumes,
               temp: query.temp,
               tempUnit,
-              volumeUnit: 'l',
               pressureKpa: answer.data.pressureKpa,
             },
             label,
           );
           setSaved(label);
+          setVolumes('');
+          setBeerTemp('');
         })}
       >
         Log this pressure as set

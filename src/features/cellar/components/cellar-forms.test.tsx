@@ -1,32 +1,13 @@
-// The cellar forms on the tablet: one write per tap, however fast the second tap comes.
-import { beforeEach, describe, expect, it, vi } from 'vitest';
+// The cellar forms on the tablet: one write per tap, and each entry carries only what was typed for it.
+// The forms run on their real hooks and the real outbox over a stubbed network (tests/component/network.tsx).
+import { beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { act, fireEvent, render, screen, waitFor } from '@testing-library/react';
-import type { CellarPlanView } from '../../../../shared/schemas/cellar';
-
-const log = vi.fn<(entry: unknown, label: string) => Promise<void>>();
-vi.mock('../api/log-cellar-entry', () => ({
-  useLogCellarEntry: () => log,
-  cellarGroup: (id: number) => `cellar:${id}`,
-}));
-vi.mock('../api/vessels', () => ({
-  useVessels: () => ({
-    data: [
-      {
-        id: 7,
-        name: 'BT-1',
-        type: 'bright_tank',
-        capacityL: 1000,
-        ratedPressureKpa: 207,
-        status: 'clean',
-        currentBatchId: null,
-      },
-    ],
-  }),
-}));
-
-const { ReadingForm } = await import('./reading-form');
-const { ActionForm } = await import('./action-form');
-const { PackagingForm } = await import('./packaging-form');
+import type { CellarPlanView, ReadingView } from '../../../../shared/schemas/cellar';
+import { installMemoryIndexedDb, stubNetwork, withQueries, type Sent } from '../../../../tests/component/network';
+import { outbox } from '../../../lib/outbox';
+import { ReadingForm } from './reading-form';
+import { ActionForm } from './action-form';
+import { PackagingForm } from './packaging-form';
 
 const plan: CellarPlanView = {
   saved: true,
@@ -38,13 +19,33 @@ const plan: CellarPlanView = {
   co2Volumes: 2.5,
   readingIntervalHours: 24,
 };
+const brightTank = {
+  id: 7,
+  name: 'BT-1',
+  type: 'bright_tank',
+  capacityL: 1000,
+  ratedPressureKpa: 207,
+  status: 'clean',
+  currentBatchId: null,
+};
 
-/** A log that stays pending until released: the first tap is still being handled when the second lands. */
-function slowLog() {
-  let release = () => undefined as void;
-  log.mockImplementation(() => new Promise<void>((resolve) => (release = resolve)));
-  return () => act(async () => release());
-}
+let sent: Sent[];
+/** The entries the outbox delivered to the server, in order. */
+const delivered = (kind: 'readings' | 'actions' | 'packaging') =>
+  sent.filter((r) => r.method === 'POST' && r.path === `/api/cellar/batches/1/${kind}`).map((r) => r.body);
+
+beforeAll(() => {
+  installMemoryIndexedDb();
+  outbox().setUser({ id: 1, displayName: 'Ilya Brandt' });
+});
+beforeEach(() => {
+  ({ sent } = stubNetwork({
+    'GET /api/vessels': { status: 200, body: [brightTank] },
+    'POST /api/cellar/batches/1/readings': { status: 201, body: {} },
+    'POST /api/cellar/batches/1/actions': { status: 201, body: {} },
+    'POST /api/cellar/batches/1/packaging': { status: 201, body: {} },
+  }));
+});
 
 /** Two taps before React has re-rendered: two submit events in the same task. */
 function doubleTap(form: HTMLElement) {
@@ -53,69 +54,183 @@ function doubleTap(form: HTMLElement) {
     fireEvent.submit(form);
   });
 }
+/** Lets the outbox finish sending, then counts again: a second write would have landed by now. */
+const settle = () => act(() => new Promise((r) => setTimeout(r, 50)));
+const type = (label: string, value: string) => fireEvent.change(screen.getByLabelText(label), { target: { value } });
+const valueOf = (label: string) => (screen.getByLabelText(label) as HTMLInputElement).value;
 
 describe('cellar forms take one tap at a time', () => {
-  beforeEach(() => {
-    log.mockReset();
-  });
-
   it('a double tap on Save reading writes one reading', async () => {
-    const release = slowLog();
-    render(<ReadingForm batchId={1} readings={[]} unitSystem="us" />);
-    fireEvent.change(screen.getByLabelText('Gravity (SG)'), { target: { value: '1.013' } });
+    render(withQueries(<ReadingForm batchId={1} readings={[]} unitSystem="us" />));
+    fireEvent.click(screen.getByRole('button', { name: 'Hydrometer' }));
+    type('Gravity (SG)', '1.013');
     doubleTap(screen.getByRole('form', { name: 'Log a reading' }));
-    await waitFor(() => expect(log).toHaveBeenCalledTimes(1));
-    await release();
-    await new Promise((r) => setTimeout(r, 20));
-    expect(log).toHaveBeenCalledTimes(1);
+    await waitFor(() => expect(delivered('readings')).toHaveLength(1));
+    await settle();
+    expect(delivered('readings')).toHaveLength(1);
   });
 
   it('a later tap, after the first write is done, is taken', async () => {
-    log.mockResolvedValue(undefined);
-    render(<ReadingForm batchId={1} readings={[]} unitSystem="us" />);
+    render(withQueries(<ReadingForm batchId={1} readings={[]} unitSystem="us" />));
     const form = screen.getByRole('form', { name: 'Log a reading' });
-    fireEvent.change(screen.getByLabelText('Gravity (SG)'), { target: { value: '1.013' } });
-    fireEvent.submit(form);
-    await waitFor(() => expect(log).toHaveBeenCalledTimes(1));
-    fireEvent.change(screen.getByLabelText('Gravity (SG)'), { target: { value: '1.012' } });
-    fireEvent.submit(form);
-    await waitFor(() => expect(log).toHaveBeenCalledTimes(2));
+    for (const gravity of ['1.013', '1.012']) {
+      fireEvent.click(screen.getByRole('button', { name: 'Hydrometer' }));
+      type('Gravity (SG)', gravity);
+      fireEvent.submit(form);
+      await screen.findByText(new RegExp(`Saved on this tablet: Reading ${gravity}`));
+    }
+    await waitFor(() => expect(delivered('readings')).toHaveLength(2));
   });
 
   it('a double tap on a cellar action or a transfer writes one entry', async () => {
-    const release = slowLog();
-    render(<ActionForm batchId={1} plan={plan} unitSystem="us" />);
-    fireEvent.change(screen.getByLabelText('What was done'), { target: { value: 'transfer' } });
-    fireEvent.change(screen.getByLabelText('Volume moved'), { target: { value: '7' } });
-    fireEvent.change(screen.getByLabelText('Into bright tank'), { target: { value: '7' } });
+    render(withQueries(<ActionForm batchId={1} plan={plan} unitSystem="us" />));
+    type('What was done', 'transfer');
+    type('Volume moved', '7');
+    await screen.findByRole('option', { name: 'BT-1' });
+    type('Into bright tank', '7');
     doubleTap(screen.getByRole('form', { name: 'Log cellar work' }));
-    await waitFor(() => expect(log).toHaveBeenCalledTimes(1));
-    expect(log.mock.calls[0]![0]).toMatchObject({ action: 'transfer', volume: 7, toVesselId: 7 });
-    await release();
-    expect(log).toHaveBeenCalledTimes(1);
+    await waitFor(() => expect(delivered('actions')).toHaveLength(1));
+    expect(delivered('actions')[0]).toEqual({
+      kind: 'action',
+      action: 'transfer',
+      volume: 7,
+      volumeUnit: 'bbl',
+      toVesselId: 7,
+    });
+    await settle();
+    expect(delivered('actions')).toHaveLength(1);
   });
 
   it('a double tap on Log packaging run writes one run', async () => {
-    const release = slowLog();
     render(
-      <PackagingForm
-        batchId={1}
-        packaging={{
-          runs: [],
-          knockoutL: 1173,
-          packagedL: 0,
-          complete: false,
-          notPackagedL: 1173,
-          lossL: null,
-          lossFraction: null,
-        }}
-        unitSystem="us"
-      />,
+      withQueries(
+        <PackagingForm
+          batchId={1}
+          packaging={{
+            runs: [],
+            knockoutL: 1173,
+            packagedL: 0,
+            complete: false,
+            notPackagedL: 1173,
+            lossL: null,
+            lossFraction: null,
+          }}
+          unitSystem="us"
+        />,
+      ),
     );
     doubleTap(screen.getByRole('form', { name: 'Log a packaging run' }));
-    await waitFor(() => expect(log).toHaveBeenCalledTimes(1));
-    await release();
-    expect(log).toHaveBeenCalledTimes(1);
+    await waitFor(() => expect(delivered('packaging')).toHaveLength(1));
+    await settle();
+    expect(delivered('packaging')).toHaveLength(1);
+  });
+});
+
+describe('a kept entry leaves its form empty', () => {
+  const submit = (name: string) => fireEvent.submit(screen.getByRole('form', { name }));
+
+  it('a dry hop with a note, then a cold crash: the crash carries neither the hops nor the note', async () => {
+    render(withQueries(<ActionForm batchId={1} plan={plan} unitSystem="us" />));
+    type('What was done', 'dry_hop');
+    type('Hops and weight', 'Citra 9 lb');
+    type('Note (optional)', 'Second charge');
+    submit('Log cellar work');
+    await waitFor(() => expect(delivered('actions')).toHaveLength(1));
+    expect(delivered('actions')[0]).toEqual({
+      kind: 'action',
+      action: 'dry_hop',
+      detail: 'Citra 9 lb',
+      note: 'Second charge',
+    });
+    await screen.findByText('Saved on this tablet: Dry hop.');
+    expect(valueOf('What was done')).toBe('');
+    expect(valueOf('Note (optional)')).toBe('');
+    expect(screen.queryByLabelText('Hops and weight')).toBeNull();
+
+    type('What was done', 'dry_hop');
+    expect(valueOf('Hops and weight')).toBe('');
+    type('What was done', 'cold_crash');
+    // The plan's crash temperature is offered, not filled in: 1 °C = 33.8 °F (NIST SP 811, °F = 1.8 × °C + 32).
+    expect(valueOf('Set temperature (°F)')).toBe('');
+    fireEvent.click(screen.getByRole('button', { name: 'Plan: 33.8 °F' }));
+    expect(valueOf('Set temperature (°F)')).toBe('33.8');
+    submit('Log cellar work');
+    await waitFor(() => expect(delivered('actions')).toHaveLength(2));
+    expect(delivered('actions')[1]).toEqual({ kind: 'action', action: 'cold_crash', temp: 33.8, tempUnit: 'f' });
+  });
+
+  it('what was typed for one kind is dropped when the person switches to another before keeping', async () => {
+    render(withQueries(<ActionForm batchId={1} plan={plan} unitSystem="us" />));
+    type('What was done', 'fining');
+    type('Fining agent and dose', 'Gelatin 60 g');
+    type('What was done', 'd_rest');
+    type('Set temperature (°F)', '68');
+    submit('Log cellar work');
+    await waitFor(() => expect(delivered('actions')).toHaveLength(1));
+    expect(delivered('actions')[0]).toEqual({ kind: 'action', action: 'd_rest', temp: 68, tempUnit: 'f' });
+  });
+
+  it('asks what was done rather than assuming it', async () => {
+    render(withQueries(<ActionForm batchId={1} plan={plan} unitSystem="us" />));
+    type('Note (optional)', 'Looked at it');
+    submit('Log cellar work');
+    expect(await screen.findByText('Choose what was done')).toBeTruthy();
+    await settle();
+    expect(delivered('actions')).toEqual([]);
+  });
+
+  const reading = (over: Partial<ReadingView>): ReadingView => ({
+    id: 1,
+    logEntryId: 1,
+    corrected: false,
+    takenAt: '2026-12-01T10:00:00Z',
+    sg: 1.03,
+    plato: 7.6,
+    enteredValue: 1.03,
+    enteredUnit: 'sg',
+    tempC: 18,
+    ph: null,
+    method: 'hydrometer',
+    authorName: 'A',
+    ...over,
+  });
+
+  it('a hand reading after a probe import: the method is chosen, the last temperature only offered', async () => {
+    const readings = [
+      reading({ id: 1 }),
+      reading({ id: 2, method: 'probe', tempC: 17, enteredUnit: 'plato', enteredValue: 6 }),
+    ];
+    render(withQueries(<ReadingForm batchId={1} readings={readings} unitSystem="us" />));
+    const methods = ['Hydrometer', 'Refractometer', 'Logging probe'];
+    for (const m of methods) expect(screen.getByRole('button', { name: new RegExp(m) }).ariaPressed).toBe('false');
+    expect(screen.getByRole('button', { name: /Hydrometer/ }).textContent).toBe('Hydrometer usual');
+    expect(valueOf('Temperature (°F)')).toBe('');
+    type('Gravity (SG)', '1.014');
+    submit('Log a reading');
+    expect(await screen.findByText('Choose how it was measured')).toBeTruthy();
+    await settle();
+    expect(delivered('readings')).toEqual([]);
+
+    fireEvent.click(screen.getByRole('button', { name: /Hydrometer/ }));
+    // 17 °C = 62.6 °F (NIST SP 811, °F = 1.8 × °C + 32): the probe's, the last reading taken.
+    fireEvent.click(screen.getByRole('button', { name: 'Last: 62.6 °F' }));
+    type('Note (optional)', 'Sample from the racking arm');
+    submit('Log a reading');
+    await waitFor(() => expect(delivered('readings')).toHaveLength(1));
+    expect(delivered('readings')[0]).toEqual({
+      kind: 'reading',
+      method: 'hydrometer',
+      gravity: 1.014,
+      gravityUnit: 'sg',
+      temp: 62.6,
+      tempUnit: 'f',
+      note: 'Sample from the racking arm',
+    });
+    await screen.findByText(/Saved on this tablet: Reading 1.014/);
+    expect(valueOf('Gravity (SG)')).toBe('');
+    expect(valueOf('Temperature (°F)')).toBe('');
+    expect(valueOf('Note (optional)')).toBe('');
+    for (const m of methods) expect(screen.getByRole('button', { name: new RegExp(m) }).ariaPressed).toBe('false');
   });
 });
 
@@ -173,26 +288,24 @@ describe('packaging summary', () => {
 });
 
 describe('reading form numbers', () => {
-  beforeEach(() => {
-    log.mockReset();
-    log.mockResolvedValue(undefined);
-  });
-
   it('reads a decimal comma as a decimal point, as the brew-day screen does', async () => {
-    render(<ReadingForm batchId={1} readings={[]} unitSystem="us" />);
+    render(withQueries(<ReadingForm batchId={1} readings={[]} unitSystem="us" />));
+    fireEvent.click(screen.getByRole('button', { name: 'Hydrometer' }));
     fireEvent.change(screen.getByLabelText('Gravity (SG)'), { target: { value: '1,012' } });
     fireEvent.change(screen.getByLabelText('Temperature (°F)'), { target: { value: '66,5' } });
     fireEvent.submit(screen.getByRole('form', { name: 'Log a reading' }));
-    await waitFor(() => expect(log).toHaveBeenCalledTimes(1));
-    expect(log.mock.calls[0]![0]).toMatchObject({ gravity: 1.012, gravityUnit: 'sg', temp: 66.5 });
+    await waitFor(() => expect(delivered('readings')).toHaveLength(1));
+    expect(delivered('readings')[0]).toMatchObject({ gravity: 1.012, gravityUnit: 'sg', temp: 66.5 });
   });
 
   it('gives the SG limit, not the °P one, for "1015" typed in SG', async () => {
-    render(<ReadingForm batchId={1} readings={[]} unitSystem="us" />);
+    render(withQueries(<ReadingForm batchId={1} readings={[]} unitSystem="us" />));
+    fireEvent.click(screen.getByRole('button', { name: 'Hydrometer' }));
     fireEvent.change(screen.getByLabelText('Gravity (SG)'), { target: { value: '1015' } });
     fireEvent.submit(screen.getByRole('form', { name: 'Log a reading' }));
     expect(await screen.findByText('A specific gravity is between 0.980 and 1.200: did you mean 1.015?')).toBeTruthy();
     expect(screen.queryByText(/at most 40/)).toBeNull();
-    expect(log).not.toHaveBeenCalled();
+    await settle();
+    expect(delivered('readings')).toEqual([]);
   });
 });

@@ -61,7 +61,7 @@ function VesselTile({ v, now, asked }: { v: BoardVessel; now: number; asked: boo
             <div>
               <div className="text-xs font-semibold uppercase text-mist-200">Temp</div>
               <div className="text-4xl font-semibold tabular-nums">
-                {b.latestTempC === null ? '—' : show(system, 'tempC', b.latestTempC, 0)}
+                {b.latestTempC === null ? '—' : show(system, 'temperature', b.latestTempC, 0)}
               </div>
             </div>
           </div>

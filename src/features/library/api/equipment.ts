@@ -1,9 +1,7 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import type { EquipmentProfile } from '../../../../shared/brewing';
 import type { EquipmentInput } from '../../../../shared/schemas/recipes';
-
-export type EquipmentRow = EquipmentProfile & { id: number };
+import type { EquipmentRow } from '../../../../shared/contract/recipes';
 
 export const equipmentKeys = { all: ['equipment'] as const };
 

@@ -1,18 +1,7 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import type { IngredientInput, IngredientKind } from '../../../../shared/schemas/recipes';
-
-export interface IngredientRow {
-  id: number;
-  kind: IngredientKind;
-  name: string;
-  ppg: number | null;
-  colourLovibond: number | null;
-  alphaAcidPct: number | null;
-  attenuationPct: number | null;
-  notes: string;
-  typical: boolean;
-}
+import type { IngredientInput } from '../../../../shared/schemas/recipes';
+import type { IngredientRow } from '../../../../shared/contract/recipes';
 
 export const ingredientKeys = { all: ['ingredients'] as const };
 

@@ -1,15 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import type { Difference } from '../../../../shared/schemas/recipes';
-import type { VersionDetail } from './get-version';
+import type { Comparison } from '../../../../shared/contract/recipes';
 import { recipeKeys } from './keys';
-
-export interface Comparison {
-  recipe: VersionDetail['recipe'];
-  a: VersionDetail;
-  b: VersionDetail;
-  differences: Difference[];
-}
 
 export const compareQuery = (recipeId: number, a: number, b: number) =>
   queryOptions({

@@ -1,16 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import type { RecipeStatus, VersionSummary } from '../../../../shared/schemas/recipes';
+import type { RecipeDetail } from '../../../../shared/contract/recipes';
 import { recipeKeys } from './keys';
-
-export interface RecipeDetail {
-  id: number;
-  name: string;
-  style: string;
-  description: string;
-  status: RecipeStatus;
-  versions: VersionSummary[];
-}
 
 export const recipeQuery = (recipeId: number) =>
   queryOptions({

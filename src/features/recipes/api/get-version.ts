@@ -1,14 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import type { ComputedRecipe } from '../../../../shared/brewing';
-import type { RecipeStatus, RecipeVersionContent, VersionSummary } from '../../../../shared/schemas/recipes';
+import type { VersionDetail } from '../../../../shared/contract/recipes';
 import { recipeKeys } from './keys';
-
-export interface VersionDetail {
-  recipe: { id: number; name: string; style: string; description: string; status: RecipeStatus };
-  version: VersionSummary & { content: RecipeVersionContent };
-  computed: ComputedRecipe;
-}
 
 export const versionQuery = (recipeId: number, versionId: number) =>
   queryOptions({

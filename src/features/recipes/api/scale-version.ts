@@ -1,20 +1,11 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import type { EquipmentProfile, ScaledRecipe } from '../../../../shared/brewing';
-import type { RecipeVersionContent } from '../../../../shared/schemas/recipes';
+import type { ScaleResult } from '../../../../shared/contract/recipes';
 import { recipeKeys } from './keys';
 
 export interface ScaleTarget {
   equipmentProfileId?: number;
   batchVolumeL?: number;
-}
-
-export interface ScaleResult {
-  recipe: { id: number; name: string; style: string };
-  version: { id: number; number: number; frozen: boolean; content: RecipeVersionContent };
-  source: { equipmentProfileId: number; equipment: EquipmentProfile };
-  target: { equipmentProfileId: number; equipment: EquipmentProfile };
-  scaled: ScaledRecipe;
 }
 
 export function scaleSearch(target: ScaleTarget): string {

@@ -5,7 +5,7 @@ import { useCurrentUser } from '../../../app/current-user';
 import { show, showGrain, showSmallWeight, showVolume } from '../../../lib/units';
 import { useComparison } from '../api/compare-versions';
 import type { Difference } from '../../../../shared/schemas/recipes';
-import type { VersionDetail } from '../api/get-version';
+import type { VersionDetail } from '../../../../shared/contract/recipes';
 
 /** Plain words for the paths in a version's document. */
 const SECTION_NAMES: Record<string, string> = {
@@ -51,7 +51,7 @@ function label(path: string, side: VersionDetail): string {
 function fmt(path: string, v: Difference['a'], system: UnitSystem): string {
   if (v === null) return '—';
   if (typeof v !== 'number') return String(v);
-  if (path.endsWith('TempC')) return show(system, 'tempC', v);
+  if (path.endsWith('TempC')) return show(system, 'temperature', v);
   if (path.startsWith('computed.')) return String(v);
   if (path.endsWith('weightKg')) return showGrain(system, v);
   if (path.endsWith('weightG')) return showSmallWeight(system, v);

@@ -9,7 +9,6 @@ import {
   type UseFormSetValue,
   type FieldErrors,
 } from 'react-hook-form';
-import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
 import {
   TYPICAL_SUGAR_PCT,
@@ -37,12 +36,12 @@ import {
 } from '../../../../shared/schemas/recipes';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
 import { Button, Card, SelectField, TextAreaField, TextField, cx } from '../../../components/ui';
-import type { EquipmentRow } from '../../library/api/equipment';
-import type { IngredientRow } from '../../library/api/ingredients';
+import type { EquipmentRow, IngredientRow } from '../../../../shared/contract/recipes';
 import { LiveNumbersPanel, NumbersBar, useLiveNumbers } from './live-numbers';
 import { showAdjunct } from './scale-view';
-import { UnitField, asNumber } from '../../../components/ui/unit-field';
-import { UNITS, show, showVolume } from '../../../lib/units';
+import { quantityResolver } from '../../../lib/quantity-resolver';
+import { QuantityField, asNumber } from '../../../components/ui/quantity-field';
+import { displayUnit, show, showVolume } from '../../../lib/units';
 import { FormBanner } from '../../../components/ui/form-banner';
 
 type FormIn = z.input<typeof createRecipeSchema>;
@@ -267,11 +266,11 @@ function GrainBill({
             {mode === 'weight'
               ? w(
                   'w-32',
-                  <UnitField
+                  <QuantityField
                     control={control}
                     name={`${p}.weightKg` as never}
                     label="Weight"
-                    quantity="weightKg"
+                    quantity="grainWeight"
                     system={system}
                     disabled={disabled}
                   />,
@@ -391,11 +390,11 @@ function Hops({
             {use === 'whirlpool' &&
               w(
                 'w-32',
-                <UnitField
+                <QuantityField
                   control={control}
                   name={`${p}.whirlpoolTempC`}
                   label="Stand temp"
-                  quantity="tempC"
+                  quantity="temperature"
                   system={system}
                   optional
                   disabled={disabled}
@@ -424,11 +423,11 @@ function Hops({
             {values[i]?.ibuSharePct === undefined
               ? w(
                   'w-32',
-                  <UnitField
+                  <QuantityField
                     control={control}
                     name={`${p}.weightG`}
                     label="Weight"
-                    quantity="weightG"
+                    quantity="hopWeight"
                     system={system}
                     disabled={disabled}
                   />,
@@ -446,7 +445,7 @@ function Hops({
                 )}
             {values[i]?.ibuSharePct !== undefined && solvedWeights?.[i] !== undefined && (
               <p className="min-h-touch pb-2 font-semibold tabular-nums" aria-label={`Hop ${i + 1} solved weight`}>
-                = {show(system, 'weightG', solvedWeights[i]!)}
+                = {show(system, 'hopWeight', solvedWeights[i]!)}
               </p>
             )}
             <div className="min-h-touch pb-2 text-sm text-ink-500" aria-label={`Hop ${i + 1} IBU`}>
@@ -477,22 +476,22 @@ function Mash({ control, register, errors, system, disabled }: Shared) {
       <div className="flex flex-wrap gap-3">
         {w(
           'w-40',
-          <UnitField
+          <QuantityField
             control={control}
             name="content.mash.grainTempC"
             label="Grain temp"
-            quantity="tempC"
+            quantity="temperature"
             system={system}
             disabled={disabled}
           />,
         )}
         {w(
           'w-56',
-          <UnitField
+          <QuantityField
             control={control}
             name="content.mash.thicknessLPerKg"
             label="Mash thickness"
-            quantity="lPerKg"
+            quantity="waterToGrain"
             system={system}
             optional
             disabled={disabled}
@@ -520,11 +519,11 @@ function Mash({ control, register, errors, system, disabled }: Shared) {
             )}
             {w(
               'w-32',
-              <UnitField
+              <QuantityField
                 control={control}
                 name={`${p}.tempC`}
                 label="Rest"
-                quantity="tempC"
+                quantity="temperature"
                 system={system}
                 disabled={disabled}
               />,
@@ -555,11 +554,11 @@ function Mash({ control, register, errors, system, disabled }: Shared) {
               values[i]?.method === 'infusion' &&
               w(
                 'w-40',
-                <UnitField
+                <QuantityField
                   control={control}
                   name={`${p}.infusionWaterTempC`}
                   label="Water"
-                  quantity="tempC"
+                  quantity="temperature"
                   system={system}
                   optional
                   disabled={disabled}
@@ -744,7 +743,7 @@ function PreparationSteps({ control, index, disabled }: { control: Ctl; index: n
 function batchVolumeHint(system: UnitSystem, litres: number | undefined): string | undefined {
   if (typeof litres !== 'number' || !Number.isFinite(litres) || litres <= 0) return undefined;
   const shown = showVolume(system, litres);
-  return shown.endsWith(` ${UNITS[system].volumeL.unit}`) ? undefined : `= ${shown}`;
+  return shown.endsWith(` ${displayUnit('volume', system).unit}`) ? undefined : `= ${shown}`;
 }
 
 /** Four significant figures: enough for a dose restated in another unit, short enough to read. */
@@ -987,7 +986,7 @@ export function RecipeEditor({
   onSave,
 }: RecipeEditorProps) {
   const form = useForm<FormIn, unknown, CreateRecipeInput>({
-    resolver: zodResolver(createRecipeSchema),
+    resolver: quantityResolver(createRecipeSchema, system),
     defaultValues: initial,
     mode: 'onChange',
   });
@@ -1083,11 +1082,11 @@ export function RecipeEditor({
                 </option>
               ))}
             </SelectField>
-            <UnitField
+            <QuantityField
               control={control}
               name="content.targets.batchVolumeL"
               label="Batch into fermenter"
-              quantity="volumeL"
+              quantity="volume"
               system={system}
               disabled={disabled}
               hint={batchVolumeHint(system, batchVolumeL)}
@@ -1189,11 +1188,11 @@ export function RecipeEditor({
                 </option>
               ))}
             </SelectField>
-            <UnitField
+            <QuantityField
               control={control}
               name="content.yeast.pitchTempC"
               label="Pitch at"
-              quantity="tempC"
+              quantity="temperature"
               system={system}
               disabled={disabled}
             />
@@ -1233,11 +1232,11 @@ export function RecipeEditor({
         </Section>
         <Section title="Fermentation">
           <div className="grid grid-cols-2 gap-3 sm:grid-cols-3">
-            <UnitField
+            <QuantityField
               control={control}
               name="content.fermentation.primaryTempC"
               label="Primary"
-              quantity="tempC"
+              quantity="temperature"
               system={system}
               disabled={disabled}
             />
@@ -1249,20 +1248,20 @@ export function RecipeEditor({
               error={errorAt(formState.errors, 'content.fermentation.dRestPointsAboveFg')}
               disabled={disabled}
             />
-            <UnitField
+            <QuantityField
               control={control}
               name="content.fermentation.dRestTempC"
               label="D-rest at"
-              quantity="tempC"
+              quantity="temperature"
               system={system}
               optional
               disabled={disabled}
             />
-            <UnitField
+            <QuantityField
               control={control}
               name="content.fermentation.crashTempC"
               label="Crash to"
-              quantity="tempC"
+              quantity="temperature"
               system={system}
               disabled={disabled}
             />

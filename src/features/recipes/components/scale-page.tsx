@@ -14,10 +14,12 @@ import {
 } from '../../../components/ui';
 import { useCurrentUser } from '../../../app/current-user';
 import { ApiError } from '../../../lib/api-client';
-import { UNITS, showVolume } from '../../../lib/units';
+import { displayUnit, showVolume } from '../../../lib/units';
+import { batchVolumeField, issueMessage } from '../../../../shared/quantities/field';
 import { useEquipment } from '../../library/api/equipment';
 import { useSaveScaled } from '../api/save-recipe';
-import { scaleSearch, useScale, type ScaleResult, type ScaleTarget } from '../api/scale-version';
+import { scaleSearch, useScale, type ScaleTarget } from '../api/scale-version';
+import type { ScaleResult } from '../../../../shared/contract/recipes';
 import { ScaleTable } from './scale-view';
 
 /** The scale target from the address, so a scale can be linked, reloaded and printed. */
@@ -75,7 +77,7 @@ export function ScalePage() {
   const [saving, setSaving] = useState(false);
   const [note, setNote] = useState('');
   const [saveError, setSaveError] = useState<string>();
-  const vol = UNITS[system].volumeL;
+  const vol = displayUnit('volume', system);
 
   if (scale.isPending || equipment.isPending) return <Loading label="Scaling" />;
   if (scale.isError) return <ErrorState error={scale.error} onRetry={() => scale.refetch()} />;
@@ -94,8 +96,10 @@ export function ScalePage() {
   const applyVolume = () => {
     const n = Number(volumeText.replace(',', '.'));
     if (!volumeText.trim() || !Number.isFinite(n) || n <= 0) return setVolumeError('Type a batch volume, e.g. 155');
+    const checked = batchVolumeField().safeParse(vol.toSi(n));
+    if (!checked.success) return setVolumeError(issueMessage(checked.error.issues[0]!, system));
     setVolumeError(undefined);
-    setTarget({ equipmentProfileId: data.target.equipmentProfileId, batchVolumeL: vol.fromDisplay(n) });
+    setTarget({ equipmentProfileId: data.target.equipmentProfileId, batchVolumeL: checked.data });
   };
 
   const save = async () => {
@@ -163,7 +167,7 @@ export function ScalePage() {
             label={`Or a batch volume (${vol.unit})`}
             inputMode="decimal"
             value={volumeText}
-            placeholder={vol.toDisplay(data.target.equipment.batchVolumeL).toFixed(0)}
+            placeholder={vol.fromSi(data.target.equipment.batchVolumeL).toFixed(0)}
             onChange={(e) => setVolumeText(e.target.value)}
             onKeyDown={(e) => e.key === 'Enter' && applyVolume()}
             hint={`Now ${showVolume(system, data.target.equipment.batchVolumeL)}`}

@@ -1,12 +1,8 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import type { TaproomBeer, TaproomListQuery } from '../../../../shared/schemas/taproom';
+import type { TaproomListQuery } from '../../../../shared/schemas/taproom';
+import type { BeerList } from '../../../../shared/contract/taproom';
 import { taproomKeys } from './keys';
-
-export interface BeerList {
-  beers: TaproomBeer[];
-  styles: string[];
-}
 
 function search(query: TaproomListQuery): string {
   const params = new URLSearchParams(Object.entries(query).filter(([, v]) => v) as [string, string][]);

@@ -1,15 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import type { ReleaseState } from '../../../../shared/schemas/taproom';
+import type { ReleaseCandidate } from '../../../../shared/contract/taproom';
 import { taproomKeys } from './keys';
-
-export interface ReleaseCandidate {
-  batchId: number;
-  number: string;
-  beerName: string;
-  status: string;
-  state: ReleaseState | null;
-}
 
 export const releasesQuery = () =>
   queryOptions({

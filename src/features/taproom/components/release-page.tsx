@@ -132,7 +132,7 @@ function SheetForm({ batchId, detail }: { batchId: number; detail: ReleaseDetail
             >
               {SERVING_TEMPS_C.map((c) => (
                 <option key={c} value={c}>
-                  {show(me.brewery.unitSystem, 'tempC', c, 0)}
+                  {show(me.brewery.unitSystem, 'temperature', c, 0)}
                 </option>
               ))}
             </SelectField>

@@ -1,12 +1,7 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import type { InviteInput, UpdateMemberInput } from '../../../../shared/schemas/auth';
-import type { Role } from '../../../../shared/schemas/roles';
-
-export interface Team {
-  members: { id: number; email: string; displayName: string; role: Role; disabled: boolean }[];
-  pendingInvites: { id: number; email: string; role: Role; expiresAt: string }[];
-}
+import type { Team } from '../../../../shared/contract/auth';
 
 export const teamKeys = { all: ['team'] as const };
 

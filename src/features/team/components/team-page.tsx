@@ -17,7 +17,8 @@ import {
   useToast,
 } from '../../../components/ui';
 import { applyServerErrors } from '../../../lib/forms';
-import { useInviteTeammate, useTeam, useUpdateMember, type Team } from '../api/team';
+import { useInviteTeammate, useTeam, useUpdateMember } from '../api/team';
+import type { Team } from '../../../../shared/contract/auth';
 import { FormBanner } from '../../../components/ui/form-banner';
 import { ConfirmButton } from '../../../components/confirm-button';
 import { useCurrentUser } from '../../../app/current-user';
