@@ -88,6 +88,7 @@ describe('entries refused for good are set aside (Chromium, 1024×768)', () => {
     await page.goto(`/cellar/batches/${other}`);
     const form = page.getByRole('form', { name: 'Log a reading' });
     await eventually(() => form.count()).toBe(1);
+    await form.getByRole('button', { name: /^Hydrometer/ }).click();
     await form.getByLabel('Gravity (SG)').fill('1.052');
     await form.getByLabel('Temperature (°F)').fill('66');
     await form.getByRole('button', { name: 'Save reading' }).click();
