@@ -1,6 +1,6 @@
 import { useParams } from 'react-router-dom';
 import { Button, ErrorState, Loading } from '../../../components/ui';
-import { useCurrentUser } from '../../../app/current-user';
+import { useCurrentUser } from '../../../lib/current-user';
 import { useBatch } from '../api/get-batch';
 import { brewDaySteps } from '../../../../shared/batches/brew-day';
 import { BATCH_STATUS_LABELS } from '../../../../shared/schemas/batches';

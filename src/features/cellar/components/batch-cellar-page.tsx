@@ -3,7 +3,7 @@ import { useParams } from 'react-router-dom';
 import { apparentAttenuation, predictFermentation } from '../../../../shared/brewing';
 import { CELLAR_ACTION_LABELS, READING_METHOD_LABELS } from '../../../../shared/schemas/cellar';
 import { Card, ErrorState, LinkButton, Loading, PageHeader, Stat } from '../../../components/ui';
-import { useCurrentUser } from '../../../app/current-user';
+import { useCurrentUser, useCan } from '../../../lib/current-user';
 import { show } from '../../../lib/units';
 import { useBatchCellar } from '../api/batch-cellar';
 import { cellarGroup } from '../api/log-cellar-entry';
@@ -16,6 +16,8 @@ import { ProbeImport } from './probe-import';
 import { PlanForm } from './plan-form';
 import { PredictionNote } from './prediction-note';
 import { OutboxPanel } from '../../../components/outbox-panel';
+import { batchRoutes } from '../../../../shared/contract/batches';
+import { pathOf } from '../../../../shared/contract/route';
 
 function Section({ title, children }: { title: string; children: ReactNode }) {
   return (
@@ -30,6 +32,7 @@ function Section({ title, children }: { title: string; children: ReactNode }) {
 export function BatchCellarPage() {
   const batchId = Number(useParams().batchId);
   const me = useCurrentUser();
+  const mayPlan = useCan('cellar.plan');
   const { data, error, refetch, isPending } = useBatchCellar(batchId);
   const prediction = useMemo(
     () => (data ? predictFermentation(data.readings.map((r) => ({ atMs: Date.parse(r.takenAt), sg: r.sg }))) : null),
@@ -87,7 +90,11 @@ export function BatchCellarPage() {
           )}
         </div>
       </div>
-      <OutboxPanel group={cellarGroup(batchId)} timeZone={tz} />
+      <OutboxPanel
+        group={cellarGroup(batchId)}
+        timeZone={tz}
+        noteUrl={pathOf(batchRoutes.appendLog.path, { id: batchId })}
+      />
       <div className="grid gap-6 lg:grid-cols-[3fr_2fr]">
         <Section title="Fermentation curve">
           {data.readings.length ? (
@@ -174,7 +181,7 @@ export function BatchCellarPage() {
         )}
       </Section>
       <Section title="Cellar plan">
-        <PlanForm batchId={batchId} plan={data.plan} unitSystem={system} canEdit={me.role === 'head_brewer'} />
+        <PlanForm batchId={batchId} plan={data.plan} unitSystem={system} canEdit={mayPlan} />
       </Section>
     </div>
   );

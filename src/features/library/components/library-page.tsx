@@ -22,7 +22,7 @@ import {
   TextAreaField,
   useToast,
 } from '../../../components/ui';
-import { useCurrentUser } from '../../../app/current-user';
+import { useCurrentUser, useCan } from '../../../lib/current-user';
 import { applyServerErrors } from '../../../lib/forms';
 import { show, showVolume } from '../../../lib/units';
 import { quantityResolver } from '../../../lib/quantity-resolver';
@@ -252,10 +252,11 @@ function IngredientForm({ row, onDone }: { row?: IngredientRow; onDone: () => vo
 /** Equipment profiles and the ingredient library: read by the brewing team, edited by the head brewer. */
 export function LibraryPage() {
   const me = useCurrentUser();
+  const canEditEquipment = useCan('equipment.edit');
+  const canEditIngredients = useCan('ingredient.edit');
   const system = me.brewery.unitSystem;
   const equipment = useEquipment();
   const ingredients = useIngredients();
-  const canEdit = me.role === 'head_brewer';
   const [editingEquipment, setEditingEquipment] = useState<EquipmentRow | 'new' | null>(null);
   const [editingIngredient, setEditingIngredient] = useState<IngredientRow | 'new' | null>(null);
   return (
@@ -267,7 +268,7 @@ export function LibraryPage() {
       <Card className="mb-6 space-y-3">
         <div className="flex items-center justify-between">
           <h2 className="text-xl font-bold">Equipment profiles</h2>
-          {canEdit && (
+          {canEditEquipment && (
             <Button variant="secondary" onClick={() => setEditingEquipment('new')}>
               Add equipment
             </Button>
@@ -287,7 +288,7 @@ export function LibraryPage() {
                 <Th>Boil-off</Th>
                 <Th>Losses (tun / kettle / trub)</Th>
                 <Th>Mash tun / kettle</Th>
-                {canEdit && (
+                {canEditEquipment && (
                   <Th>
                     <span className="sr-only">Edit</span>
                   </Th>
@@ -311,7 +312,7 @@ export function LibraryPage() {
                   <Td className="whitespace-nowrap">
                     {showVolume(system, e.maxMashTunVolumeL)} / {showVolume(system, e.maxKettleVolumeL)}
                   </Td>
-                  {canEdit && (
+                  {canEditEquipment && (
                     <Td>
                       <Button variant="quiet" onClick={() => setEditingEquipment(e)}>
                         Edit
@@ -327,7 +328,7 @@ export function LibraryPage() {
       <Card className="space-y-3">
         <div className="flex items-center justify-between">
           <h2 className="text-xl font-bold">Ingredient library</h2>
-          {canEdit && (
+          {canEditIngredients && (
             <Button variant="secondary" onClick={() => setEditingIngredient('new')}>
               Add ingredient
             </Button>
@@ -349,7 +350,7 @@ export function LibraryPage() {
                 <Th>Name</Th>
                 <Th>Values</Th>
                 <Th>Notes</Th>
-                {canEdit && (
+                {canEditIngredients && (
                   <Th>
                     <span className="sr-only">Edit</span>
                   </Th>
@@ -379,7 +380,7 @@ export function LibraryPage() {
                       .join(', ')}
                   </Td>
                   <Td>{i.notes}</Td>
-                  {canEdit && (
+                  {canEditIngredients && (
                     <Td>
                       <Button variant="quiet" onClick={() => setEditingIngredient(i)}>
                         Edit

@@ -12,7 +12,7 @@ import {
 import { SALT_LABELS } from '../../../../shared/schemas/recipes';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
 import { Button, Caution, ErrorState, LinkButton, Loading } from '../../../components/ui';
-import { useCurrentUser } from '../../../app/current-user';
+import { useCurrentUser } from '../../../lib/current-user';
 import { sayInUnits, show, showGrain, showMeasured, showSmallWeight, showVolume } from '../../../lib/units';
 import { useScale } from '../api/scale-version';
 import type { ScaleResult } from '../../../../shared/contract/recipes';

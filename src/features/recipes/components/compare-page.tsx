@@ -1,7 +1,7 @@
 import { useParams, useSearchParams } from 'react-router-dom';
 import { Card, ErrorState, LinkButton, Loading, PageHeader, Table, Td, Th, cx } from '../../../components/ui';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
-import { useCurrentUser } from '../../../app/current-user';
+import { useCurrentUser } from '../../../lib/current-user';
 import { show, showGrain, showSmallWeight, showVolume } from '../../../lib/units';
 import { useComparison } from '../api/compare-versions';
 import type { Difference } from '../../../../shared/schemas/recipes';

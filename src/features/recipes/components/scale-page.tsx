@@ -12,13 +12,14 @@ import {
   TextField,
   useToast,
 } from '../../../components/ui';
-import { useCurrentUser } from '../../../app/current-user';
+import { useCurrentUser, useCan } from '../../../lib/current-user';
 import { ApiError } from '../../../lib/api-client';
 import { displayUnit, sayInUnits, showVolume } from '../../../lib/units';
 import { batchVolumeField, issueMessage } from '../../../../shared/quantities/field';
 import { useEquipment } from '../../library/api/equipment';
 import { useSaveScaled } from '../api/save-recipe';
-import { scaleSearch, useScale, type ScaleTarget } from '../api/scale-version';
+import { scaleSearch, useScale } from '../api/scale-version';
+import type { ScaleTarget } from '../../../../shared/schemas/recipes';
 import type { ScaleResult } from '../../../../shared/contract/recipes';
 import { ScaleTable } from './scale-view';
 
@@ -65,6 +66,8 @@ export function ScalePage() {
   const recipeId = Number(useParams().recipeId);
   const versionId = Number(useParams().versionId);
   const me = useCurrentUser();
+  const canEdit = useCan('recipe.edit');
+  const canPlan = useCan('batch.plan');
   const system = me.brewery.unitSystem;
   const navigate = useNavigate();
   const toast = useToast();
@@ -135,12 +138,12 @@ export function ScalePage() {
             <LinkButton variant="secondary" to={`/recipes/${recipeId}/versions/${versionId}/brew-sheet?${search}`}>
               Brew sheet
             </LinkButton>
-            {me.role === 'head_brewer' && (
+            {canEdit && (
               <Button variant="secondary" onClick={() => setSaving(true)}>
                 Save as new version
               </Button>
             )}
-            {me.role === 'head_brewer' && (
+            {canPlan && (
               <LinkButton variant="primary" to={`/batches/new?${planSearch.toString()}`}>
                 Plan a batch
               </LinkButton>
