@@ -1,6 +1,6 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { createTestBrewery, mailCatcher, type TestBrewery } from './helpers';
-import { plannedBatch, writeHeaders } from './batch-fixtures';
+import { cellarPlanBody, plannedBatch, writeHeaders } from './batch-fixtures';
 import { changeBatchStatus } from '../../server/services/batches';
 import { Alert, AuditEvent, Batch, BatchLogEntry, GravityReading, IdempotencyKey } from '../../server/models';
 import { sweepOverdueReadings } from '../../server/services/alerts';
@@ -592,16 +592,7 @@ describe('another brewery', () => {
 describe('alerts', () => {
   it('e-mails the head brewer once when a reading crosses the D-rest trigger', async () => {
     const batch = await knockedOutBatch();
-    const plan = await t.as.head_brewer.put(`/api/cellar/batches/${batch.id}/plan`).send({
-      plannedFg: 1.012,
-      tempUnit: 'c',
-      primaryTemp: 19,
-      dRestPoints: 3,
-      dRestTemp: 21,
-      crashTemp: 1,
-      co2Volumes: 2.5,
-      readingIntervalHours: 24,
-    });
+    const plan = await t.as.head_brewer.put(`/api/cellar/batches/${batch.id}/plan`).send(cellarPlanBody());
     expect(plan.status).toBe(200);
     const mailFor = () =>
       mailCatcher()
@@ -622,7 +613,26 @@ describe('alerts', () => {
       { kind: 'd_rest', readAt: null },
     ]);
     expect(mailFor()).toHaveLength(1);
-    expect((await t.as.assistant_brewer.get('/api/cellar/alerts')).status).toBe(403);
+    // The assistant brewer, who takes the readings, sees the same alert and may mark it seen.
+    const assistants = await t.as.assistant_brewer.get('/api/cellar/alerts');
+    expect(assistants.status).toBe(200);
+    const seen = assistants.body.find((a: { batchId: number }) => a.batchId === batch.id);
+    expect(seen).toMatchObject({ kind: 'd_rest', readAt: null });
+    expect((await t.as.assistant_brewer.post(`/api/cellar/alerts/${seen.id}/read`)).status).toBe(204);
+    expect((await t.as.taproom_manager.get('/api/cellar/alerts')).status).toBe(403);
+  });
+
+  it('fires at the trigger it shows: a planned FG typed in °P gives a trigger of 1.015, and 1.015 reaches it', async () => {
+    const batch = await knockedOutBatch();
+    const plan = await t.as.head_brewer.put(`/api/cellar/batches/${batch.id}/plan`).send(cellarPlanBody(1.01196)); // a planned FG of 3.07 °P
+    expect(plan.status).toBe(200);
+    const hour = 3_600_000;
+    await postReading(batch.id, reading(1.03), new Date(Date.now() - 2 * hour));
+    await postReading(batch.id, reading(1.015), new Date(Date.now() - hour));
+    const alerts = await t.as.assistant_brewer.get('/api/cellar/alerts');
+    const mine = alerts.body.filter((a: { batchId: number }) => a.batchId === batch.id);
+    expect(mine).toMatchObject([{ kind: 'd_rest' }]);
+    expect(mine[0].message).toContain('(1.015)');
   });
 
   it('raises a "no reading" alert once for a fermenting batch past its reading interval', async () => {
@@ -631,7 +641,12 @@ describe('alerts', () => {
     const mailFor = () =>
       mailCatcher()
         .messages()
-        .filter((m) => m.subject.includes(batch.number) && m.subject.includes('No gravity reading'));
+        .filter(
+          (m) =>
+            m.to.includes(t.users.head_brewer.email) &&
+            m.subject.includes(batch.number) &&
+            m.subject.includes('No gravity reading'),
+        );
     await sweepOverdueReadings(new Date(Date.now() + 20 * 3_600_000)); // 22 h since the reading: not yet
     expect(await Alert.count({ where: { batchId: batch.id, kind: 'overdue' } })).toBe(0);
     await sweepOverdueReadings(new Date(Date.now() + 30 * 3_600_000));

@@ -15,6 +15,7 @@ import { PackagingForm } from './packaging-form';
 import { ProbeImport } from './probe-import';
 import { PlanForm } from './plan-form';
 import { PredictionNote } from './prediction-note';
+import { AlertsPanel } from './alerts-panel';
 import { OutboxPanel } from '../../../components/outbox-panel';
 
 function Section({ title, children }: { title: string; children: ReactNode }) {
@@ -88,6 +89,7 @@ export function BatchCellarPage() {
           )}
         </div>
       </div>
+      <AlertsPanel batchId={batchId} />
       <OutboxPanel group={cellarGroup(batchId)} timeZone={tz} />
       <div className="grid gap-6 lg:grid-cols-[3fr_2fr]">
         <Section title="Fermentation curve">
