@@ -1,8 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import type { RecipeListRow } from '../../../../shared/schemas/recipes';
+import { call } from '../../../lib/api-client';
+import { recipeRoutes } from '../../../../shared/contract/recipes';
 import { recipeKeys } from './keys';
 
 export const recipeListQuery = () =>
-  queryOptions({ queryKey: recipeKeys.list(), queryFn: () => api.get<RecipeListRow[]>('/api/recipes') });
+  queryOptions({ queryKey: recipeKeys.list(), queryFn: () => call(recipeRoutes.list) });
 export const useRecipeList = () => useQuery(recipeListQuery());
