@@ -17,6 +17,8 @@ import { PlanForm } from './plan-form';
 import { PredictionNote } from './prediction-note';
 import { AlertsPanel } from './alerts-panel';
 import { OutboxPanel } from '../../../components/outbox-panel';
+import { batchRoutes } from '../../../../shared/contract/batches';
+import { pathOf } from '../../../../shared/contract/route';
 
 function Section({ title, children }: { title: string; children: ReactNode }) {
   return (
@@ -90,7 +92,11 @@ export function BatchCellarPage() {
         </div>
       </div>
       <AlertsPanel batchId={batchId} />
-      <OutboxPanel group={cellarGroup(batchId)} timeZone={tz} />
+      <OutboxPanel
+        group={cellarGroup(batchId)}
+        timeZone={tz}
+        noteUrl={pathOf(batchRoutes.appendLog.path, { id: batchId })}
+      />
       <div className="grid gap-6 lg:grid-cols-[3fr_2fr]">
         <Section title="Fermentation curve">
           {data.readings.length ? (
