@@ -6,7 +6,14 @@ import { Alert, AuditEvent, Batch, BatchLogEntry, GravityReading, IdempotencyKey
 import { sweepOverdueReadings } from '../../server/services/alerts';
 import { finalNumbers } from '../../server/services/release';
 import { queryCounter, sequelize } from '../../server/config/database';
-import { headPressureKpa, KEG_SIZES, platoToSg, refractometerBeerSg, sgToPlato } from '../../shared/brewing';
+import {
+  headPressureKpa,
+  KEG_SIZES,
+  platoToSg,
+  PLAUSIBLE_PACKAGING_LOSS,
+  refractometerBeerSg,
+  sgToPlato,
+} from '../../shared/brewing';
 import type { BatchCellarView, ProbeImportResult, ReadingView, VesselView } from '../../shared/schemas/cellar';
 
 let t: TestBrewery;
@@ -533,12 +540,49 @@ describe('packaging', () => {
     expect(last.body.lossFraction).toBeCloseTo((knockoutL - packaged) / knockoutL, 9);
     expect(last.body.notPackagedL).toBe(0);
     expect(last.body.runs).toHaveLength(2);
+    // No transfer logged: packaged from the fermenter, measured against knockout.
+    expect(last.body).toMatchObject({ source: 'fermenter', sourceL: knockoutL });
+    expect(last.body.lossImplausible).toBe(last.body.lossFraction > PLAUSIBLE_PACKAGING_LOSS.fermenter);
 
     const view = await cellarView(batch.id);
     expect(view.batch.status).toBe('packaged');
     expect(view.vessel).toBeNull();
     const after = (await t.as.assistant_brewer.get('/api/vessels')).body.find((v: VesselView) => v.id === tank.id);
     expect(after).toMatchObject({ currentBatchId: null, status: 'needs_cleaning' });
+  });
+});
+
+describe('packaging losses', () => {
+  it('measures losses against the volume transferred into the bright tank and flags a 50 % loss', async () => {
+    const batch = await knockedOutBatch();
+    await postReading(batch.id, reading(1.012));
+    const tank = await vessel({ type: 'bright_tank' });
+    const knockoutL = (await cellarView(batch.id)).packaging.knockoutL;
+    const intoTankL = 20; // well under knockout: what the bright tank holds is what losses count against
+    expect(knockoutL).toBeGreaterThan(intoTankL);
+    const transfer = await t.as.assistant_brewer
+      .post(`/api/cellar/batches/${batch.id}/actions`)
+      .set(writeHeaders())
+      .send({ kind: 'action', action: 'transfer', volume: intoTankL, volumeUnit: 'l', toVesselId: tank.id });
+    expect(transfer.status).toBe(201);
+    const run = (count: number, final = false) =>
+      t.as.assistant_brewer
+        .post(`/api/cellar/batches/${batch.id}/packaging`)
+        .set(writeHeaders())
+        .send({ kind: 'packaging', lines: [{ kind: 'can', sizeMl: 500, count }], final });
+    const part = await run(8);
+    expect(part.status).toBe(201);
+    // 20 L in the bright tank, 8 × 0.5 L in cans: 16 L still in the tank, no loss yet (arithmetic).
+    expect(part.body).toMatchObject({ source: 'bright_tank', sourceL: 20, complete: false, lossImplausible: false });
+    expect(part.body.notPackagedL).toBeCloseTo(16, 9);
+    const last = await run(12, true);
+    expect(last.status).toBe(201);
+    // (8 + 12) × 0.5 = 10 L packaged of 20 L: 10 L lost, 50 % (arithmetic), above the 10 % a bright tank
+    // usually loses (common practice, no source). Against knockout it would have read otherwise.
+    expect(last.body.packagedL).toBeCloseTo(10, 9);
+    expect(last.body.lossL).toBeCloseTo(10, 9);
+    expect(last.body.lossFraction).toBeCloseTo(0.5, 9);
+    expect(last.body.lossImplausible).toBe(true);
   });
 });
 
