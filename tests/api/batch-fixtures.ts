@@ -30,3 +30,14 @@ export function writeHeaders(overrides: { key?: string; capturedAt?: Date; devic
     'X-Device-Id': overrides.deviceId ?? 'tablet-test-01',
   };
 }
+
+/** A cellar plan as the head brewer sends it: ale at 19 °C, D-rest 3 points above the planned FG. */
+export const cellarPlanBody = (plannedFg = 1.012) => ({
+  plannedFg,
+  primaryTempC: 19,
+  dRestPoints: 3,
+  dRestTempC: 21,
+  crashTempC: 1,
+  co2Volumes: 2.5,
+  readingIntervalHours: 24,
+});
