@@ -550,7 +550,7 @@ describe('packaging losses', () => {
     const transfer = await t.as.assistant_brewer
       .post(`/api/cellar/batches/${batch.id}/actions`)
       .set(writeHeaders())
-      .send({ kind: 'action', action: 'transfer', volume: intoTankL, volumeUnit: 'l', toVesselId: tank.id });
+      .send({ kind: 'action', action: 'transfer', volumeL: intoTankL, toVesselId: tank.id });
     expect(transfer.status).toBe(201);
     const run = (count: number, final = false) =>
       t.as.assistant_brewer

@@ -12,7 +12,7 @@ beforeAll(async () => {
 });
 
 const batchFor = () => plannedBatch({ id: t.users.head_brewer.id, breweryId: t.brewery.id });
-const READING = { kind: 'reading', method: 'hydrometer', gravity: 1.05, gravityUnit: 'sg', temp: 19, tempUnit: 'c' };
+const READING = { kind: 'reading', method: 'hydrometer', sg: 1.05, tempC: 19 };
 const log = (batchId: number, body: object) =>
   t.as.assistant_brewer.post(`/api/batches/${batchId}/log`).set(writeHeaders()).send(body);
 const reading = (batchId: number) =>
@@ -57,7 +57,7 @@ describe('refusals of signed writes', () => {
     const action = await t.as.assistant_brewer
       .post(`/api/cellar/batches/${b.id}/actions`)
       .set(writeHeaders())
-      .send({ kind: 'action', action: 'cold_crash', temp: 1, tempUnit: 'c' });
+      .send({ kind: 'action', action: 'cold_crash', tempC: 1 });
     expect(action.body.error).toMatchObject({ code: 'batch_closed', retryable: false });
     const packaging = await t.as.assistant_brewer
       .post(`/api/cellar/batches/${b.id}/packaging`)
