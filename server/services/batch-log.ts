@@ -19,7 +19,6 @@ import {
   type SignatureMeaning,
   type WriteMeta,
 } from '../../shared/schemas/batch-log';
-import type { Role } from '../../shared/schemas/roles';
 
 export { batchActuals } from '../../shared/batches/brew-day';
 
@@ -271,7 +270,7 @@ function entryFields(
     correctsEntryId,
     reason,
     authorId: actor.id,
-    authorRole: actor.role as Role,
+    authorRole: actor.role,
     authorName: actor.displayName,
     meaning,
     capturedAt: meta.capturedAt,

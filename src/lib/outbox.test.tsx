@@ -21,7 +21,7 @@ function scriptedServer(answers: SendResult['kind'][]) {
     const kind = answers.shift() ?? 'sent';
     if (kind === 'retry' || kind === 'rejected')
       return { kind, message: kind === 'rejected' ? 'Temperature must be at most 110' : 'No connection' };
-    return { kind } as SendResult;
+    return { kind };
   };
   return { received, send };
 }

@@ -75,8 +75,8 @@ export function LogList({
                 <p className={cx('font-medium', corrected && 'text-ink-500 line-through')}>
                   {what(e)}
                   {m && <span className="ml-2 tabular-nums">{showMeasurements(system, m)}</span>}
-                  {e.kind === 'note' || !e.data.note ? null : (
-                    <span className="ml-2 text-ink-500">“{String(e.data.note)}”</span>
+                  {e.kind === 'note' || typeof e.data.note !== 'string' || !e.data.note ? null : (
+                    <span className="ml-2 text-ink-500">“{e.data.note}”</span>
                   )}
                 </p>
                 <p className="text-sm text-ink-500">

@@ -57,7 +57,7 @@ function doubleTap(form: HTMLElement) {
 /** Lets the outbox finish sending, then counts again: a second write would have landed by now. */
 const settle = () => act(() => new Promise((r) => setTimeout(r, 50)));
 const type = (label: string, value: string) => fireEvent.change(screen.getByLabelText(label), { target: { value } });
-const valueOf = (label: string) => (screen.getByLabelText(label) as HTMLInputElement).value;
+const valueOf = (label: string) => screen.getByLabelText<HTMLInputElement>(label).value;
 
 describe('cellar forms take one tap at a time', () => {
   it('a double tap on Save reading writes one reading', async () => {

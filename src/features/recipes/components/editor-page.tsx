@@ -155,7 +155,7 @@ export function NewRecipePage() {
         onSave={async (values) => {
           try {
             const created = await create.mutateAsync(values);
-            navigate(`/recipes/${created.id}/versions/${created.versionId}`);
+            void navigate(`/recipes/${created.id}/versions/${created.versionId}`);
           } catch (error) {
             return failure(error);
           }

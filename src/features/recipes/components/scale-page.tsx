@@ -113,7 +113,7 @@ export function ScalePage() {
       });
       setSaving(false);
       toast(`Saved as version ${saved.number}`);
-      navigate(`/recipes/${recipeId}/versions/${saved.id}/scale`);
+      void navigate(`/recipes/${recipeId}/versions/${saved.id}/scale`);
     } catch (error) {
       setSaveError(error instanceof ApiError ? (error.fields.changeNote ?? error.message) : 'Not saved. Try again.');
     }

@@ -5,7 +5,9 @@ import type { BeerList } from '../../../../shared/contract/taproom';
 import { taproomKeys } from './keys';
 
 function search(query: TaproomListQuery): string {
-  const params = new URLSearchParams(Object.entries(query).filter(([, v]) => v) as [string, string][]);
+  const params = new URLSearchParams(
+    Object.entries(query).filter((entry): entry is [string, string] => typeof entry[1] === 'string' && entry[1] !== ''),
+  );
   return params.size ? `?${params}` : '';
 }
 
