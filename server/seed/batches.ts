@@ -4,7 +4,7 @@ import { freezeRecipeVersion, planForBatch } from '../services/recipe-plans';
 import { createBatchFromPlan } from '../services/batches';
 import { appendLogEntry } from '../services/batch-log';
 import { brewDaySteps } from '../../shared/batches/brew-day';
-import type { DemoContext } from './demo';
+import type { DemoContext } from './context';
 
 const DAY_MS = 86_400_000;
 

@@ -4,7 +4,7 @@ import { Batch, BatchLogEntry, Vessel } from '../models';
 import { assignVessel } from '../services/batches';
 import { writeReading } from '../services/readings';
 import { cToF, psiToKpa, usBblToL } from '../../shared/brewing';
-import type { DemoContext } from './demo';
+import type { DemoContext } from './context';
 
 const VESSELS = [
   { name: 'FV-1', type: 'fermenter', bbl: 10, psi: 15 },

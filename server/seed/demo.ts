@@ -1,10 +1,10 @@
 // The demo brewery: an invented harbour-town brewpub. Every name and number here is made up.
 import { sequelize } from '../config/database';
-import { User, type Brewery } from '../models';
+import { User } from '../models';
 import { createBrewery } from '../services/auth';
 import { hashPassword } from '../services/passwords';
 import type { Role } from '../../shared/schemas/roles';
-import type { Transaction } from 'sequelize';
+import type { DemoContext } from './context';
 import { seedRecipes } from './recipes';
 import { seedBatches } from './batches';
 import { seedCellar } from './cellar';
@@ -17,12 +17,6 @@ export const DEMO_PEOPLE: { email: string; displayName: string; role: Role }[] =
   { email: 'ilya@tidewrack.example', displayName: 'Ilya Brandt', role: 'assistant_brewer' },
   { email: 'priya@tidewrack.example', displayName: 'Priya Okafor', role: 'taproom_manager' },
 ];
-
-export interface DemoContext {
-  brewery: Brewery;
-  users: Record<Role, User>;
-  transaction: Transaction;
-}
 
 /** Steps later areas add to fill the demo brewery (recipes, batches, cellar...). They run once, in order. */
 export const demoSteps: ((ctx: DemoContext) => Promise<void>)[] = [seedRecipes, seedBatches, seedCellar, seedTaproom];

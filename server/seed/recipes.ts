@@ -2,7 +2,7 @@
 import { computeRecipe } from '../../shared/brewing';
 import { equipmentAtVolume, toRecipeInput, type EquipmentInput } from '../../shared/schemas/recipes';
 import { EquipmentProfile, Recipe, RecipeVersion } from '../models';
-import type { DemoContext } from './demo';
+import type { DemoContext } from './context';
 import { DEMO_EQUIPMENT, DEMO_RECIPES } from './recipe-data';
 
 export async function seedRecipes({ brewery, users, transaction }: DemoContext): Promise<void> {

@@ -13,7 +13,7 @@ import { brewDaySteps } from '../../shared/batches/brew-day';
 import { abv, ABV_METHOD_SHOWN, KEG_SIZES, lineVolumeL, type PackageLine } from '../../shared/brewing';
 import type { TastingNoteContent } from '../../shared/schemas/tasting';
 import type { ReleaseSheet } from '../../shared/schemas/taproom';
-import type { DemoContext } from './demo';
+import type { DemoContext } from './context';
 
 const DAY_MS = 86_400_000;
 

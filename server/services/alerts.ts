@@ -10,7 +10,7 @@ import { notFound } from '../errors';
 import { rolesFor } from '../../shared/policy';
 import { sendMail, publicLink } from './mail';
 import { logger } from '../logger';
-import { cellarPlanFor, cellarPlansFor } from './cellar';
+import { cellarPlanFor, cellarPlansFor } from './cellar/plans';
 import { crossesDRestTrigger, dRestTriggerSg, gravityStalled, readingOverdue } from '../../shared/brewing';
 import type { AlertKind, AlertView } from '../../shared/schemas/cellar';
 

@@ -1,4 +1,4 @@
-// The starter ingredient library every brewery begins with. Data only, so migrations can read it too.
+// The starter ingredient library every brewery begins with.
 import type { IngredientInput } from '../../shared/schemas/recipes';
 
 type Starter = Omit<IngredientInput, 'notes'> & { notes?: string };

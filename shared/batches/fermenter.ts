@@ -1,5 +1,5 @@
 /** Whether a fermenter can take a batch, and how to say why not. Pure: planning, the API and the tablet share it. */
-import { showVolume } from '../brewing';
+import { showVolume } from '../quantities';
 import type { UnitSystem } from '../schemas/auth';
 
 /**

@@ -13,7 +13,7 @@ import {
 import { EXAMPLE_IPA, PILOT_SYSTEM } from './example-recipes';
 import { computeRecipe } from './recipe';
 import { expectInputError } from './test-helpers';
-import { kgToLb, lbToKg, mlToTsp, ozToG, tspToMl, usBblToL, usGalToL } from './units';
+import { kgToLb, lbToKg, mlToTsp, ozToG, tspToMl, usBblToL, usGalToL } from '../quantities/convert';
 
 describe('dose rules', () => {
   it('3–5 lb of fruit per US gal scaled to a 3.5 bbl batch → 325.5–542.5 lb (common practice, no source)', () => {

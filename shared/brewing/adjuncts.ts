@@ -15,7 +15,7 @@ import type {
   MeasuredAmount,
   MeasuringSystem,
 } from './types';
-import { G_PER_OZ, KG_PER_LB, L_PER_HL, L_PER_US_GAL, ML_PER_US_TSP, mlToTsp } from './units';
+import { G_PER_OZ, KG_PER_LB, L_PER_HL, L_PER_US_GAL, ML_PER_US_TSP, mlToTsp } from '../quantities/convert';
 
 interface BasisInfo {
   unit: AmountUnit;

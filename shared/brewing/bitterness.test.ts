@@ -11,7 +11,7 @@ import {
   whirlpoolTemperatureFactor,
 } from './bitterness';
 import { expectInputError } from './test-helpers';
-import { ozToG, usGalToL } from './units';
+import { ozToG, usGalToL } from '../quantities/convert';
 
 describe('Tinseth utilisation', () => {
   it("matches Tinseth's published utilisation table (table values from memory; formula is his)", () => {

@@ -10,7 +10,7 @@ import {
   residualCo2Volumes,
 } from './carbonation';
 import { expectInputError } from './test-helpers';
-import { cToF, fToC, gToOz, kpaToPsi, usGalToL } from './units';
+import { cToF, fToC, gToOz, kpaToPsi, usGalToL } from '../quantities/convert';
 
 describe('head pressure', () => {
   it('matches the brewing carbonation table (table values from memory, ±1 psi)', () => {

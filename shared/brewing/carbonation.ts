@@ -4,7 +4,7 @@
  */
 import { MOLAR_MASS } from './atomic-weights';
 import { BrewingInputError, requireInRange, requirePositive } from './errors';
-import { cToF, kpaToPsi, psiToKpa } from './units';
+import { cToF, kpaToPsi, psiToKpa } from '../quantities/convert';
 
 /** Temperatures the carbonation fits are used over, °C (about 28–86 °F). */
 const MIN_TEMP_C = -2;

@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { ebcToSrm, maltColourUnits, moreySrm, srmFromFermentables, srmToEbc, srmToHex, srmToRgb } from './colour';
 import { expectInputError } from './test-helpers';
-import { lbToKg, usGalToL } from './units';
+import { lbToKg, usGalToL } from '../quantities/convert';
 
 describe('colour', () => {
   it('MCU = Σ(lb × °L)/gal (hand-worked: 10 lb at 2 °L + 1 lb at 60 °L in 5 gal = 16)', () => {

@@ -1,6 +1,6 @@
 /** Beer colour: malt colour units, Morey's SRM, EBC and a display swatch. */
 import { BrewingInputError, requireFinite, requireNonNegative, requirePositive } from './errors';
-import { kgToLb, lToUsGal } from './units';
+import { EBC_PER_SRM, kgToLb, lToUsGal } from '../quantities/convert';
 
 /** A coloured ingredient. */
 export interface ColourSource {
@@ -30,14 +30,14 @@ export function srmFromFermentables(items: readonly ColourSource[], volumeL: num
   return moreySrm(maltColourUnits(items, volumeL));
 }
 
-/** EBC = SRM × 1.97: both scale absorbance at 430 nm (SRM = 12.7·A430, ASBC Beer-10; EBC = 25·A430, EBC Analytica), 25/12.7 ≈ 1.97. */
+/** EBC = SRM × {@link EBC_PER_SRM}. */
 export function srmToEbc(srm: number): number {
-  return requireNonNegative(srm, 'srm', 'SRM') * 1.97;
+  return requireNonNegative(srm, 'srm', 'SRM') * EBC_PER_SRM;
 }
 
-/** SRM = EBC / 1.97. */
+/** SRM = EBC / {@link EBC_PER_SRM}. */
 export function ebcToSrm(ebc: number): number {
-  return requireNonNegative(ebc, 'ebc', 'EBC') / 1.97;
+  return requireNonNegative(ebc, 'ebc', 'EBC') / EBC_PER_SRM;
 }
 
 /** sRGB colour, 0–255 per channel. */

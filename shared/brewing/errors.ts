@@ -3,6 +3,8 @@
  * offending field, and the UI can put the message beside that field. Functions
  * here throw rather than return NaN, Infinity or a silently clamped value.
  */
+import { QUANTITIES } from '../quantities';
+
 export class BrewingInputError extends Error {
   /** Dotted path of the offending input, e.g. `grainBill.items.2.weightKg`. */
   readonly field: string;
@@ -14,11 +16,11 @@ export class BrewingInputError extends Error {
   }
 }
 
-/** Lowest and highest specific gravity the formulas are trusted for. */
-export const MIN_SG = 0.98;
-export const MAX_SG = 1.2;
+/** Lowest and highest specific gravity the formulas are trusted for (the quantities table's gravity limits). */
+export const MIN_SG = QUANTITIES.gravity.min;
+export const MAX_SG = QUANTITIES.gravity.max;
 /** Highest alpha acid % accepted (no commercial hop is near it; a typo guard). */
-export const MAX_ALPHA_ACID_PCT = 30;
+export const MAX_ALPHA_ACID_PCT = QUANTITIES.alphaAcid.max;
 /** How far fermentable percentages may miss 100 % (rounding in hand-written recipes). */
 export const PERCENT_SUM_TOLERANCE = 0.5;
 

@@ -3,7 +3,7 @@
  * bench, and handy as seed data. Numbers are plausible, not measured.
  */
 import type { EquipmentProfile, RecipeInput, WaterProfile } from './types';
-import { usBblToL, usGalToL } from './units';
+import { usBblToL, usGalToL } from '../quantities/convert';
 
 /** A 10 US gal pilot system. */
 export const PILOT_SYSTEM: EquipmentProfile = {

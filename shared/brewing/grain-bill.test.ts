@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { BrewingInputError } from './errors';
 import { percentagesFromWeights, weightsForTargetOg } from './grain-bill';
 import { ogFromFermentables } from './gravity';
-import { kgToLb, usGalToL } from './units';
+import { kgToLb, usGalToL } from '../quantities/convert';
 
 const bill = [
   { percent: 85, potential: { ppg: 37 }, stage: 'mash' as const },

@@ -19,7 +19,7 @@ import {
   SUCROSE_PPG,
 } from './gravity';
 import { expectInputError } from './test-helpers';
-import { lbToKg, usGalToL } from './units';
+import { lbToKg, usGalToL } from '../quantities/convert';
 
 describe('SG ↔ °Plato', () => {
   it('matches the ASBC extract table (values from memory)', () => {

@@ -14,42 +14,22 @@ import {
   requirePositive,
 } from './errors';
 import type { FermentablePotential, FermentableStage } from './types';
-import { KG_PER_LB, L_PER_US_GAL } from './units';
-
-/** ASBC Methods of Analysis (Beer-2 / extract table fit): °P = −616.868 + 1111.14·SG − 630.272·SG² + 135.997·SG³. */
-function platoPolynomial(sg: number): number {
-  return -616.868 + sg * (1111.14 + sg * (-630.272 + sg * 135.997));
-}
-
-/** Derivative of the ASBC polynomial, d°P/dSG (positive over 0.98–1.20). */
-function platoSlope(sg: number): number {
-  return 1111.14 + sg * (-1260.544 + sg * 407.991);
-}
+import { KG_PER_LB, L_PER_US_GAL, platoFromSg, platoSlope, sgFromPlato } from '../quantities/convert';
 
 /** °Plato at the ends of the accepted gravity range. */
-export const MIN_PLATO = platoPolynomial(MIN_SG);
-export const MAX_PLATO = platoPolynomial(MAX_SG);
+export const MIN_PLATO = platoFromSg(MIN_SG);
+export const MAX_PLATO = platoFromSg(MAX_SG);
 
 /** Specific gravity → °Plato by the ASBC polynomial. */
 export function sgToPlato(sg: number, field = 'sg'): number {
   requireGravity(sg, field);
-  return platoPolynomial(sg);
+  return platoFromSg(sg);
 }
 
-/**
- * °Plato → specific gravity. We invert the same ASBC polynomial numerically
- * (Newton's method) so that SG → °P → SG round-trips exactly; the common
- * closed form SG = 1 + P/(258.6 − (P/258.2)·227.1) only seeds the iteration.
- */
+/** °Plato → specific gravity (the exact inverse of {@link sgToPlato}). */
 export function platoToSg(plato: number, field = 'plato'): number {
   requireInRange(plato, field, MIN_PLATO, MAX_PLATO, '°Plato');
-  let sg = 1 + plato / (258.6 - (plato / 258.2) * 227.1);
-  for (let i = 0; i < 8; i++) {
-    const step = (platoPolynomial(sg) - plato) / platoSlope(sg);
-    sg -= step;
-    if (Math.abs(step) < 1e-13) break;
-  }
-  return sg;
+  return sgFromPlato(plato);
 }
 
 /** Gravity points: (SG − 1) × 1000, e.g. 1.052 → 52. */
@@ -76,8 +56,8 @@ export const SUCROSE_PPG: number = (() => {
   const gramsPerL = (KG_PER_LB * 1000) / L_PER_US_GAL;
   let sg = 1.046;
   for (let i = 0; i < 50; i++) {
-    const gap = (platoPolynomial(sg) / 100) * sg * WATER_G_PER_L_20C - gramsPerL;
-    const slope = ((platoSlope(sg) * sg + platoPolynomial(sg)) / 100) * WATER_G_PER_L_20C;
+    const gap = (platoFromSg(sg) / 100) * sg * WATER_G_PER_L_20C - gramsPerL;
+    const slope = ((platoSlope(sg) * sg + platoFromSg(sg)) / 100) * WATER_G_PER_L_20C;
     sg -= gap / slope;
   }
   return (sg - 1) * 1000;
@@ -183,7 +163,7 @@ export function abvSimple(og: number, fg: number): number {
 /** Real extract, °P. Balling (via M. L. Hall, "Brew by the Numbers", Zymurgy 1995): RE = 0.1808·OE + 0.8192·AE, all °P. */
 export function realExtractPlato(og: number, fg: number): number {
   requireOgFg(og, fg);
-  return 0.1808 * platoPolynomial(og) + 0.8192 * platoPolynomial(fg);
+  return 0.1808 * platoFromSg(og) + 0.8192 * platoFromSg(fg);
 }
 
 /**
@@ -192,7 +172,7 @@ export function realExtractPlato(og: number, fg: number): number {
  */
 export function abvBalling(og: number, fg: number): number {
   const re = realExtractPlato(og, fg);
-  const oe = platoPolynomial(og);
+  const oe = platoFromSg(og);
   const abw = (oe - re) / (2.0665 - 0.010665 * oe);
   return (abw * fg) / 0.794;
 }
@@ -230,6 +210,6 @@ export function apparentAttenuation(og: number, fg: number): number {
 /** Real attenuation, fraction: (OE − RE)/OE with RE by Balling (see {@link realExtractPlato}). */
 export function realAttenuation(og: number, fg: number): number {
   requireFermentableOg(og, fg);
-  const oe = platoPolynomial(og);
+  const oe = platoFromSg(og);
   return (oe - realExtractPlato(og, fg)) / oe;
 }

@@ -6,7 +6,7 @@
  */
 export * from './types';
 export { BrewingInputError, MIN_SG, MAX_SG, MAX_ALPHA_ACID_PCT, PERCENT_SUM_TOLERANCE } from './errors';
-export * from './units';
+export * from '../quantities/convert';
 export {
   sgToPlato,
   platoToSg,

@@ -11,7 +11,7 @@ import {
   requirePositive,
 } from './errors';
 import type { BrewingWarning, EquipmentProfile, VolumePlan } from './types';
-import { galPerLbToLPerKg } from './units';
+import { galPerLbToLPerKg } from '../quantities/convert';
 
 /** Volume lost when wort cools from boiling (thermal contraction of water, ≈ 4 %; common practice). */
 export const COOLING_SHRINKAGE = 0.04;

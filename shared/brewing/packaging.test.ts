@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { KEG_SIZES, lineVolumeL, packagingTotals } from './packaging';
-import { usGalToL } from './units';
+import { usGalToL } from '../quantities/convert';
 import { expectInputError } from './test-helpers';
 
 describe('packaging', () => {

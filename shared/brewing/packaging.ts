@@ -3,7 +3,7 @@
  * lost between knockout and package. Volumes in litres.
  */
 import { BrewingInputError, requireNonNegative, requirePositive } from './errors';
-import { L_PER_US_BBL } from './units';
+import { L_PER_US_BBL } from '../quantities/convert';
 
 /** Keg sizes and their volume, L. US kegs are fractions of the 31-gal beer barrel (27 CFR 25.11). */
 export const KEG_SIZES = {

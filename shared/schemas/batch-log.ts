@@ -1,4 +1,6 @@
 import { z } from 'zod';
+import type { QuantityId } from '../quantities';
+import { quantityField } from '../quantities/field';
 
 /**
  * Batch log entries: the shapes a device may send. Who and when (author, role, received time) come from
@@ -30,32 +32,25 @@ export type LogEntryKind = (typeof LOG_ENTRY_KINDS)[number];
 /** Brew-day kinds: after the head brewer signs the brew day off, only corrections may follow them. */
 export const BREW_DAY_KINDS: readonly string[] = ['step', 'measurement', 'note'];
 
-const num = (label: string, min: number, max: number) =>
-  z
-    .number({ error: `${label}: enter a number` })
-    .min(min, `${label} must be at least ${min}`)
-    .max(max, `${label} must be at most ${max}`);
-
 /**
- * What a measurement may be, in SI: the API refuses anything outside, and the tablet checks the same limits
- * (restated in the units it shows) before an entry is kept.
+ * What each measurement is: the API refuses anything outside its quantity's limits, and the tablet checks the
+ * same limits (worded in the units it shows) before an entry is kept.
  */
-export const MEASUREMENT_LIMITS = {
-  tempC: { label: 'Temperature', min: -10, max: 110 },
-  volumeL: { label: 'Volume', min: 0, max: 200_000 },
-  gravitySg: { label: 'Gravity', min: 0.98, max: 1.2 },
-  ph: { label: 'pH', min: 2, max: 10 },
-} as const;
-const limited = (key: keyof typeof MEASUREMENT_LIMITS) =>
-  num(MEASUREMENT_LIMITS[key].label, MEASUREMENT_LIMITS[key].min, MEASUREMENT_LIMITS[key].max);
+export const MEASURES = {
+  tempC: { quantity: 'temperature', label: 'Temperature' },
+  volumeL: { quantity: 'volume', label: 'Volume' },
+  gravitySg: { quantity: 'gravity', label: 'Gravity' },
+  ph: { quantity: 'ph', label: 'pH' },
+} as const satisfies Record<string, { quantity: QuantityId; label: string }>;
+const measured = (key: keyof typeof MEASURES) => quantityField(MEASURES[key].quantity, { label: MEASURES[key].label });
 
 /** Measurements in SI (the screen converts from the brewery's units): °C, L, specific gravity, pH. */
 export const measurementsSchema = z
   .strictObject({
-    tempC: limited('tempC').optional(),
-    volumeL: limited('volumeL').optional(),
-    gravitySg: limited('gravitySg').optional(),
-    ph: limited('ph').optional(),
+    tempC: measured('tempC').optional(),
+    volumeL: measured('volumeL').optional(),
+    gravitySg: measured('gravitySg').optional(),
+    ph: measured('ph').optional(),
   })
   .refine((m) => Object.keys(m).length > 0, 'Enter at least one measurement');
 export type Measurements = z.infer<typeof measurementsSchema>;

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { batchVolumeQueryField } from '../quantities/field';
 import type { ComputedRecipe, EquipmentProfile, RecipeInput } from '../brewing';
 import type { ChainCheck, LogEntry, Signature } from './batch-log';
 import type { RecipeVersionContent } from './recipes';
@@ -48,11 +49,7 @@ export const batchIdParams = z.strictObject({ id });
 export const createBatchSchema = z.strictObject({
   recipeVersionId: id,
   equipmentProfileId: id.optional(),
-  batchVolumeL: z.coerce
-    .number({ error: 'Batch volume: enter a number' })
-    .min(1, 'Batch volume must be at least 1 L')
-    .max(20000, 'Batch volume must be at most 20000 L')
-    .optional(),
+  batchVolumeL: batchVolumeQueryField().optional(),
   brewDate: z.iso.date('Brew date: choose a date'),
   fermenterId: id.optional(),
 });

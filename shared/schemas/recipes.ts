@@ -5,14 +5,16 @@
  * scaleRecipe do every calculation) plus what the brew day needs beyond the maths.
  */
 import { z } from 'zod';
+import { batchVolumeField, batchVolumeQueryField, quantityField } from '../quantities/field';
 import { hopWeightsForIbuShares, type AdjunctAddition, type EquipmentProfile, type RecipeInput } from '../brewing';
 
-const num = (label: string, min: number, max: number) =>
+/** A dose in the unit its rule's basis names (kg/hL, tsp per 5 gal …): the basis carries the unit, not the table. */
+const dose = (label: string) =>
   z
     .number({ error: `${label}: enter a number` })
     .refine(Number.isFinite, `${label}: enter a number`)
-    .min(min, `${label} must be at least ${min}`)
-    .max(max, `${label} must be at most ${max}`);
+    .min(0, `${label} must be at least 0`)
+    .max(100_000, `${label} must be at most 100000`);
 
 const name = (label: string, max = 80) =>
   z.string().trim().min(1, `Enter ${label}`).max(max, `Use at most ${max} characters`);
@@ -28,14 +30,14 @@ export const idParam = z.coerce
 export const FERMENTABLE_STAGES = ['mash', 'kettle', 'fermenter'] as const;
 
 const potentialSchema = z.union([
-  z.strictObject({ ppg: num('Potential (ppg)', 1, 46.2) }),
-  z.strictObject({ extractPct: num('Extract (%)', 1, 100) }),
+  z.strictObject({ ppg: quantityField('potential', { label: 'Potential' }) }),
+  z.strictObject({ extractPct: quantityField('percent', { label: 'Extract', min: 1 }) }),
 ]);
 
 const fermentableBase = {
   name: name('a fermentable'),
   potential: potentialSchema,
-  colourLovibond: num('Colour (°L)', 0, 600),
+  colourLovibond: quantityField('maltColour'),
   stage: z.enum(FERMENTABLE_STAGES),
 };
 
@@ -43,15 +45,15 @@ export const grainBillSchema = z.discriminatedUnion('mode', [
   z.strictObject({
     mode: z.literal('weight'),
     items: z
-      .array(z.strictObject({ ...fermentableBase, weightKg: num('Weight (kg)', 0.001, 20000) }))
+      .array(z.strictObject({ ...fermentableBase, weightKg: quantityField('grainWeight', { min: 0.001 }) }))
       .min(1, 'Add at least one fermentable')
       .max(40),
   }),
   z.strictObject({
     mode: z.literal('percent'),
-    targetOg: num('Target OG', 1.001, 1.2),
+    targetOg: quantityField('gravity', { label: 'Target OG', min: 1.001 }),
     items: z
-      .array(z.strictObject({ ...fermentableBase, percent: num('Share (%)', 0.01, 100) }))
+      .array(z.strictObject({ ...fermentableBase, percent: quantityField('percent', { min: 0.01 }) }))
       .min(1, 'Add at least one fermentable')
       .max(40),
   }),
@@ -65,14 +67,14 @@ export const HOP_FORMS = ['pellet', 'whole', 'extract'] as const;
 export const hopSchema = z
   .strictObject({
     name: name('a hop variety'),
-    alphaAcidPct: num('Alpha acid (%)', 0.1, 30),
+    alphaAcidPct: quantityField('alphaAcid'),
     form: z.enum(HOP_FORMS),
     use: z.enum(HOP_USES),
-    minutes: num('Minutes', 0, 240),
-    whirlpoolTempC: num('Whirlpool temperature (°C)', 40, 100).optional(),
+    minutes: quantityField('minutes', { label: 'Minutes' }),
+    whirlpoolTempC: quantityField('temperature', { label: 'Whirlpool temperature', min: 40, max: 100 }).optional(),
     /** When set, the weight is solved for this share of the target IBU (see resolveHopShares). */
-    ibuSharePct: num('Share of the target IBU (%)', 0.1, 100).optional(),
-    weightG: num('Weight (g)', 0, 500000),
+    ibuSharePct: quantityField('percent', { label: 'Share of the target IBU', min: 0.1 }).optional(),
+    weightG: quantityField('hopWeight'),
   })
   .refine((h) => h.use !== 'whirlpool' || h.whirlpoolTempC !== undefined, {
     path: ['whirlpoolTempC'],
@@ -105,7 +107,7 @@ export const SALT_LABELS: Record<(typeof SALT_IDS)[number], string> = {
   chalk: 'Chalk (CaCO₃)',
 };
 
-const ppm = (label: string) => num(`${label} (ppm)`, 0, 2000);
+const ppm = (label: string) => quantityField('ionConcentration', { label });
 export const waterProfileSchema = z.strictObject({
   calciumPpm: ppm('Calcium'),
   magnesiumPpm: ppm('Magnesium'),
@@ -115,7 +117,7 @@ export const waterProfileSchema = z.strictObject({
   bicarbonatePpm: ppm('Bicarbonate'),
 });
 
-const saltAdditionSchema = z.strictObject({ salt: z.enum(SALT_IDS), grams: num('Salt (g)', 0, 100000) });
+const saltAdditionSchema = z.strictObject({ salt: z.enum(SALT_IDS), grams: quantityField('saltWeight') });
 
 export const waterPlanSchema = z.discriminatedUnion('mode', [
   z.strictObject({
@@ -137,16 +139,16 @@ export const waterPlanSchema = z.discriminatedUnion('mode', [
 export const MASH_METHODS = ['infusion', 'directHeat', 'recirculate'] as const;
 
 export const mashSchema = z.strictObject({
-  thicknessLPerKg: num('Mash thickness (L/kg)', 1.5, 6).optional(),
-  grainTempC: num('Grain temperature (°C)', -10, 45),
+  thicknessLPerKg: quantityField('waterToGrain', { label: 'Mash thickness', min: 1.5, max: 6 }).optional(),
+  grainTempC: quantityField('temperature', { label: 'Grain temperature', max: 45 }),
   steps: z
     .array(
       z.strictObject({
         name: name('a rest name', 60),
-        tempC: num('Rest temperature (°C)', 30, 80),
-        minutes: num('Rest time (min)', 0, 240),
+        tempC: quantityField('temperature', { label: 'Rest temperature', min: 30, max: 80 }),
+        minutes: quantityField('minutes', { label: 'Rest time' }),
         method: z.enum(MASH_METHODS),
-        infusionWaterTempC: num('Infusion water (°C)', 60, 100).optional(),
+        infusionWaterTempC: quantityField('temperature', { label: 'Infusion water', min: 60, max: 100 }).optional(),
       }),
     )
     .min(1, 'Add the mash-in rest')
@@ -180,8 +182,8 @@ export const ADJUNCT_STAGES = ['mash', 'boil', 'whirlpool', 'fermenter', 'packag
 const doseRuleSchema = z
   .strictObject({
     basis: z.enum(DOSE_BASES),
-    low: num('Low dose', 0, 100000),
-    high: num('High dose', 0, 100000),
+    low: dose('Low dose'),
+    high: dose('High dose'),
     fixedUnit: z.enum(['kg', 'mL', 'each']).optional(),
   })
   .refine((r) => r.high >= r.low, { path: ['high'], message: 'The high dose must not be below the low dose' });
@@ -190,11 +192,11 @@ const additionBase = {
   name: name('the addition'),
   category: z.enum(ADJUNCT_CATEGORIES),
   stage: z.enum(ADJUNCT_STAGES),
-  boilMinutes: num('Boil minute', 0, 240).optional(),
+  boilMinutes: quantityField('minutes', { label: 'Boil minute' }).optional(),
   rule: doseRuleSchema,
-  level: num('Dose', 0, 100000),
+  level: dose('Dose'),
   /** Fermentable sugar, % of weight; blank: typical for its kind (fruit 10, honey 82, sugar 100, others 0). */
-  sugarPct: num('Sugar (%)', 0, 100).optional(),
+  sugarPct: quantityField('percent', { label: 'Sugar' }).optional(),
   /** How it goes in, e.g. "in mesh bags, lifted out at knockout". */
   howAdded: z.string().trim().max(200, 'Use at most 200 characters'),
 };
@@ -235,11 +237,11 @@ export const yeastSchema = z
   .strictObject({
     name: name('the yeast'),
     strainType: z.enum(YEAST_TYPES),
-    attenuationPct: num('Expected attenuation (%)', 40, 100),
-    attenuationLowPct: num('Attenuation low (%)', 40, 100),
-    attenuationHighPct: num('Attenuation high (%)', 40, 100),
-    pitchTempC: num('Pitch temperature (°C)', 2, 35),
-    pitchRateMillionCellsPerMlPerPlato: num('Pitch rate', 0.1, 3).optional(),
+    attenuationPct: quantityField('percent', { label: 'Expected attenuation', min: 40 }),
+    attenuationLowPct: quantityField('percent', { label: 'Attenuation low', min: 40 }),
+    attenuationHighPct: quantityField('percent', { label: 'Attenuation high', min: 40 }),
+    pitchTempC: quantityField('temperature', { label: 'Pitch temperature', min: 2, max: 35 }),
+    pitchRateMillionCellsPerMlPerPlato: quantityField('pitchRate').optional(),
   })
   .refine((y) => y.attenuationHighPct >= y.attenuationLowPct, {
     path: ['attenuationHighPct'],
@@ -247,20 +249,20 @@ export const yeastSchema = z
   });
 
 export const fermentationSchema = z.strictObject({
-  primaryTempC: num('Primary temperature (°C)', 2, 35),
+  primaryTempC: quantityField('temperature', { label: 'Primary temperature', min: 2, max: 35 }),
   /** Raise for the diacetyl rest when gravity is this many points above the expected FG. */
-  dRestPointsAboveFg: num('D-rest trigger (points above FG)', 0, 20).optional(),
-  dRestTempC: num('D-rest temperature (°C)', 2, 30).optional(),
-  crashTempC: num('Crash temperature (°C)', -2, 15),
-  co2Volumes: num('Target CO₂ (volumes)', 1, 4.5),
+  dRestPointsAboveFg: quantityField('gravityPoints', { label: 'D-rest trigger', max: 20 }).optional(),
+  dRestTempC: quantityField('temperature', { label: 'D-rest temperature', min: 2, max: 30 }).optional(),
+  crashTempC: quantityField('temperature', { label: 'Crash temperature', min: -2, max: 15 }),
+  co2Volumes: quantityField('co2Volumes', { label: 'Target CO₂', min: 1, max: 4.5 }),
 });
 
 export const targetsSchema = z.strictObject({
-  og: num('Target OG', 1.001, 1.2),
-  fg: num('Target FG', 0.99, 1.1),
-  ibu: num('Target IBU', 0, 150),
-  srm: num('Target SRM', 0, 80),
-  batchVolumeL: num('Batch volume (L)', 1, 20000),
+  og: quantityField('gravity', { label: 'Target OG', min: 1.001 }),
+  fg: quantityField('gravity', { label: 'Target FG', min: 0.99, max: 1.1 }),
+  ibu: quantityField('bitterness', { label: 'Target IBU' }),
+  srm: quantityField('beerColour', { label: 'Target colour' }),
+  batchVolumeL: batchVolumeField(),
 });
 
 // ------------------------------------------------------------ version content
@@ -310,22 +312,14 @@ export type SaveVersionInput = z.infer<typeof saveVersionSchema>;
 /** The target of a scale: another equipment profile, a typed batch volume, both, or neither (the version as written). */
 export const scaleQuerySchema = z.strictObject({
   equipmentProfileId: idParam.optional(),
-  batchVolumeL: z.coerce
-    .number({ error: 'Batch volume: enter a number' })
-    .min(1, 'Batch volume must be at least 1 L')
-    .max(20000, 'Batch volume must be at most 20000 L')
-    .optional(),
+  batchVolumeL: batchVolumeQueryField().optional(),
 });
 export type ScaleTarget = z.infer<typeof scaleQuerySchema>;
 
 export const saveScaledSchema = z.strictObject({
   changeNote: versionBody.changeNote,
   equipmentProfileId: idParam.optional(),
-  batchVolumeL: z
-    .number()
-    .min(1, 'Batch volume must be at least 1 L')
-    .max(20000, 'Batch volume must be at most 20000 L')
-    .optional(),
+  batchVolumeL: batchVolumeField().optional(),
 });
 export type SaveScaledInput = z.infer<typeof saveScaledSchema>;
 
@@ -335,18 +329,18 @@ export const compareQuerySchema = z.strictObject({ a: idParam, b: idParam });
 
 export const equipmentSchema = z.strictObject({
   name: name('a name', 80),
-  batchVolumeL: num('Batch volume into the fermenter (L)', 1, 20000),
-  brewhouseEfficiency: num('Brewhouse efficiency', 0.3, 1),
-  boilOffLPerHour: num('Boil-off (L/h)', 0, 2000),
-  boilMinutes: num('Boil time (min)', 0, 240),
-  mashTunDeadSpaceL: num('Mash tun dead space (L)', 0, 2000),
-  kettleDeadSpaceL: num('Kettle dead space (L)', 0, 2000),
-  trubChillerLossL: num('Trub and chiller loss (L)', 0, 2000),
-  fermenterLossL: num('Fermenter loss (L)', 0, 2000),
-  grainAbsorptionLPerKg: num('Grain absorption (L/kg)', 0.3, 2),
-  maxMashTunVolumeL: num('Mash tun capacity (L)', 1, 40000),
-  maxKettleVolumeL: num('Kettle capacity (L)', 1, 40000),
-  mashThicknessLPerKg: num('Mash thickness (L/kg)', 1.5, 6),
+  batchVolumeL: batchVolumeField('Batch volume into the fermenter'),
+  brewhouseEfficiency: quantityField('fraction', { label: 'Brewhouse efficiency', min: 0.3 }),
+  boilOffLPerHour: quantityField('volumePerHour', { label: 'Boil-off' }),
+  boilMinutes: quantityField('minutes', { label: 'Boil time' }),
+  mashTunDeadSpaceL: quantityField('volume', { label: 'Mash tun dead space', max: 2000 }),
+  kettleDeadSpaceL: quantityField('volume', { label: 'Kettle dead space', max: 2000 }),
+  trubChillerLossL: quantityField('volume', { label: 'Trub and chiller loss', max: 2000 }),
+  fermenterLossL: quantityField('volume', { label: 'Fermenter loss', max: 2000 }),
+  grainAbsorptionLPerKg: quantityField('waterToGrain', { label: 'Grain absorption', min: 0.3, max: 2 }),
+  maxMashTunVolumeL: quantityField('volume', { label: 'Mash tun capacity', min: 1, max: 40_000 }),
+  maxKettleVolumeL: quantityField('volume', { label: 'Kettle capacity', min: 1, max: 40_000 }),
+  mashThicknessLPerKg: quantityField('waterToGrain', { label: 'Mash thickness', min: 1.5, max: 6 }),
 });
 export type EquipmentInput = z.infer<typeof equipmentSchema>;
 
@@ -355,16 +349,14 @@ export type EquipmentInput = z.infer<typeof equipmentSchema>;
 export const INGREDIENT_KINDS = ['fermentable', 'hop', 'yeast', 'adjunct', 'salt'] as const;
 export type IngredientKind = (typeof INGREDIENT_KINDS)[number];
 
-const optionalNum = (label: string, min: number, max: number) => num(label, min, max).optional();
-
 export const ingredientSchema = z.strictObject({
   kind: z.enum(INGREDIENT_KINDS),
   name: name('a name', 80),
   /** Typical values: a starting point, not a lot's analysis. */
-  ppg: optionalNum('Potential (ppg)', 1, 46.2),
-  colourLovibond: optionalNum('Colour (°L)', 0, 600),
-  alphaAcidPct: optionalNum('Alpha acid (%)', 0.1, 30),
-  attenuationPct: optionalNum('Attenuation (%)', 40, 100),
+  ppg: quantityField('potential').optional(),
+  colourLovibond: quantityField('maltColour').optional(),
+  alphaAcidPct: quantityField('alphaAcid').optional(),
+  attenuationPct: quantityField('percent', { label: 'Attenuation', min: 40 }).optional(),
   notes: z.string().trim().max(300, 'Use at most 300 characters'),
 });
 export type IngredientInput = z.infer<typeof ingredientSchema>;

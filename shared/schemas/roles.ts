@@ -7,6 +7,3 @@ export const ROLE_LABELS: Record<Role, string> = {
   assistant_brewer: 'Assistant brewer',
   taproom_manager: 'Taproom manager',
 };
-
-/** Roles that work on the brewing side (recipes, batch logs, cellar). */
-export const BREWING_ROLES: readonly Role[] = ['head_brewer', 'assistant_brewer'];

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { quantityField } from '../quantities/field';
 import type { AbvMethod } from '../brewing';
 import type { TastingSummary } from './tasting';
 
@@ -66,10 +67,7 @@ export const releaseSheetSchema = z.strictObject({
     .min(20, 'Write at least a sentence or two for guests (20 characters)')
     .max(2000, 'Use at most 2000 characters'),
   glass: z.enum(GLASS_IDS, { error: 'Choose a glass' }),
-  servingTempC: z
-    .number({ error: 'Serving temperature: enter a number' })
-    .min(0, 'Serving temperature must be at least 0 °C (32 °F)')
-    .max(20, 'Serving temperature must be at most 20 °C (68 °F)'),
+  servingTempC: quantityField('temperature', { label: 'Serving temperature', min: 0, max: 20 }),
   servingNotes: z.string().trim().max(500, 'Use at most 500 characters').default(''),
   allergens: z
     .array(z.enum(ALLERGEN_IDS, { error: 'Choose allergens from the list' }))
@@ -83,11 +81,7 @@ export const releaseSheetSchema = z.strictObject({
 export type ReleaseSheetInput = z.input<typeof releaseSheetSchema>;
 export type ReleaseSheet = z.infer<typeof releaseSheetSchema>;
 
-const gravity = (label: string) =>
-  z
-    .number({ error: `${label}: enter a number` })
-    .min(0.99, `${label} must be at least 0.990`)
-    .max(1.2, `${label} must be at most 1.200`);
+const gravity = (label: string) => quantityField('gravity', { label, min: 0.99 });
 
 /** Releasing confirms the measured numbers the head brewer saw: if the log has changed since, the server refuses. */
 export const publishReleaseSchema = z.strictObject({

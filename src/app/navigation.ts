@@ -1,42 +1,45 @@
-import { BREWING_ROLES, ROLES, type Role } from '../../shared/schemas/roles';
+import type { Action } from '../../shared/policy';
+
+/** Whoever may read the batches works the brewing side and starts on the menu; everyone else starts on the tap list. */
+export const BREWING_HOME: Action = 'batch.read';
 
 export interface NavItem {
   to: string;
   label: string;
-  roles: readonly Role[];
+  /** The action its page needs (the same as in router.tsx). */
+  action: Action;
+  /** Shown only to whoever may also do this: the Taproom item is left out where the taproom is Home. */
+  onlyWith?: Action;
 }
 
-export const ALL: readonly Role[] = ROLES;
-export const BREWING: readonly Role[] = BREWING_ROLES;
-export const HEAD: readonly Role[] = ['head_brewer'];
-
-/** What a page route carries in its `handle`: the roles that may open it (see router.tsx). */
+/** What a page route carries in its `handle`: the policy action a person needs to open it (see router.tsx). */
 export interface PageAccess {
-  roles: readonly Role[];
+  action: Action;
 }
 
-/** The roles the deepest matched page allows, or null when no page asks (every signed-in person may open it). */
-export function pageRoles(matches: readonly { handle: unknown }[]): readonly Role[] | null {
+/** The action the deepest matched page needs, or null when no page names one. */
+export function pageAction(matches: readonly { handle: unknown }[]): Action | null {
   for (let i = matches.length - 1; i >= 0; i--) {
     const handle = matches[i]!.handle as Partial<PageAccess> | undefined;
-    if (handle?.roles) return handle.roles;
+    if (handle?.action) return handle.action;
   }
   return null;
 }
 
-/** The menu, by role: a person sees only what their role may open. */
+/** The menu: a person sees only what the policy lets them open. */
 export const NAV_ITEMS: NavItem[] = [
-  { to: '/', label: 'Home', roles: ALL },
-  { to: '/recipes', label: 'Recipes', roles: BREWING },
-  { to: '/library', label: 'Brewhouse', roles: BREWING },
-  { to: '/batches', label: 'Batches', roles: BREWING },
-  { to: '/cellar', label: 'Cellar', roles: BREWING },
-  { to: '/reports/history', label: 'History', roles: BREWING },
-  { to: '/reports/production', label: 'Production', roles: HEAD },
-  { to: '/team', label: 'Team', roles: HEAD },
-  // The taproom manager's Home is the taproom itself.
-  { to: '/taproom', label: 'Taproom', roles: BREWING },
-  { to: '/settings', label: 'Settings', roles: ALL },
+  { to: '/', label: 'Home', action: 'account.read' },
+  { to: '/recipes', label: 'Recipes', action: 'recipe.read' },
+  { to: '/library', label: 'Brewhouse', action: 'equipment.read' },
+  { to: '/batches', label: 'Batches', action: 'batch.read' },
+  { to: '/cellar', label: 'Cellar', action: 'cellar.read' },
+  { to: '/reports/history', label: 'History', action: 'report.history.read' },
+  { to: '/reports/production', label: 'Production', action: 'report.production.read' },
+  { to: '/team', label: 'Team', action: 'team.manage' },
+  { to: '/taproom', label: 'Taproom', action: 'taproom.read', onlyWith: BREWING_HOME },
+  { to: '/settings', label: 'Settings', action: 'brewery.read' },
 ];
 
-export const navFor = (role: Role) => NAV_ITEMS.filter((item) => item.roles.includes(role));
+/** The menu items for a person, given what they may do (usePermissions() in src/lib/current-user). */
+export const navFor = (may: (action: Action) => boolean) =>
+  NAV_ITEMS.filter((item) => may(item.action) && (!item.onlyWith || may(item.onlyWith)));

@@ -2,10 +2,10 @@ import { createBrowserRouter } from 'react-router-dom';
 import { AppLayout } from './routes/app-layout';
 import { NotFoundPage } from './routes/not-found';
 import { RouteError } from './routes/route-error';
-import { ALL, BREWING, HEAD } from './navigation';
+import type { PageAccess } from './navigation';
 
 // Every page loads on demand, so the sign-in and taproom screens never download the recipe editor.
-// Every signed-in page names the roles that may open it (handle.roles, checked by AppLayout), as the API's routes do.
+// Every signed-in page names the policy action it needs (handle.action, checked by AppLayout), as the API's routes do.
 export const router = createBrowserRouter([
   {
     path: '/sign-in',
@@ -39,86 +39,86 @@ export const router = createBrowserRouter([
         children: [
           {
             index: true,
-            handle: { roles: ALL },
+            handle: { action: 'account.read' } satisfies PageAccess,
             lazy: () => import('../features/home/components/home-page').then((m) => ({ Component: m.HomePage })),
           },
           {
             path: 'team',
-            handle: { roles: HEAD },
+            handle: { action: 'team.manage' } satisfies PageAccess,
             lazy: () => import('../features/team/components/team-page').then((m) => ({ Component: m.TeamPage })),
           },
           {
             path: 'settings',
-            handle: { roles: ALL },
+            handle: { action: 'brewery.read' } satisfies PageAccess,
             lazy: () =>
               import('../features/settings/components/settings-page').then((m) => ({ Component: m.SettingsPage })),
           },
           {
             path: 'recipes',
-            handle: { roles: BREWING },
+            handle: { action: 'recipe.read' } satisfies PageAccess,
             lazy: () =>
               import('../features/recipes/components/recipe-list-page').then((m) => ({ Component: m.RecipeListPage })),
           },
           {
             path: 'recipes/new',
-            handle: { roles: HEAD },
+            handle: { action: 'recipe.edit' } satisfies PageAccess,
             lazy: () =>
               import('../features/recipes/components/editor-page').then((m) => ({ Component: m.NewRecipePage })),
           },
           {
             path: 'recipes/:recipeId',
-            handle: { roles: BREWING },
+            handle: { action: 'recipe.read' } satisfies PageAccess,
             lazy: () => import('../features/recipes/components/recipe-page').then((m) => ({ Component: m.RecipePage })),
           },
           {
             path: 'recipes/:recipeId/compare',
-            handle: { roles: BREWING },
+            handle: { action: 'recipe.read' } satisfies PageAccess,
             lazy: () =>
               import('../features/recipes/components/compare-page').then((m) => ({ Component: m.ComparePage })),
           },
           {
             path: 'recipes/:recipeId/versions/:versionId',
-            handle: { roles: BREWING },
+            handle: { action: 'recipe.read' } satisfies PageAccess,
             lazy: () => import('../features/recipes/components/editor-page').then((m) => ({ Component: m.EditorPage })),
           },
           {
             path: 'recipes/:recipeId/versions/:versionId/scale',
-            handle: { roles: BREWING },
+            handle: { action: 'recipe.read' } satisfies PageAccess,
             lazy: () => import('../features/recipes/components/scale-page').then((m) => ({ Component: m.ScalePage })),
           },
           {
             path: 'recipes/:recipeId/versions/:versionId/brew-sheet',
-            handle: { roles: BREWING },
+            handle: { action: 'recipe.read' } satisfies PageAccess,
             lazy: () =>
               import('../features/recipes/components/brew-sheet-page').then((m) => ({ Component: m.BrewSheetPage })),
           },
           {
             path: 'library',
-            handle: { roles: BREWING },
+            handle: { action: 'equipment.read' } satisfies PageAccess,
             lazy: () =>
               import('../features/library/components/library-page').then((m) => ({ Component: m.LibraryPage })),
           },
           {
             path: 'batches',
-            handle: { roles: BREWING },
+            handle: { action: 'batch.read' } satisfies PageAccess,
             lazy: () =>
               import('../features/batches/components/batch-list-page').then((m) => ({ Component: m.BatchListPage })),
           },
           {
             path: 'batches/new',
-            handle: { roles: HEAD },
+            handle: { action: 'batch.plan' } satisfies PageAccess,
             lazy: () =>
               import('../features/batches/components/new-batch-page').then((m) => ({ Component: m.NewBatchPage })),
           },
           {
             path: 'batches/:batchId',
-            handle: { roles: BREWING },
+            handle: { action: 'batch.read' } satisfies PageAccess,
             lazy: () =>
               import('../features/batches/components/brew-day-page').then((m) => ({ Component: m.BrewDayPage })),
           },
           {
             path: 'batches/:batchId/record',
-            handle: { roles: BREWING },
+            handle: { action: 'batch.read' } satisfies PageAccess,
             lazy: () =>
               import('../features/batches/components/batch-record-page').then((m) => ({
                 Component: m.BatchRecordPage,
@@ -126,19 +126,19 @@ export const router = createBrowserRouter([
           },
           {
             path: 'cellar',
-            handle: { roles: BREWING },
+            handle: { action: 'cellar.read' } satisfies PageAccess,
             lazy: () =>
               import('../features/cellar/components/vessel-board-page').then((m) => ({ Component: m.VesselBoardPage })),
           },
           {
             path: 'cellar/vessels',
-            handle: { roles: BREWING },
+            handle: { action: 'vessel.read' } satisfies PageAccess,
             lazy: () =>
               import('../features/cellar/components/vessels-page').then((m) => ({ Component: m.VesselsPage })),
           },
           {
             path: 'cellar/vessels/labels',
-            handle: { roles: BREWING },
+            handle: { action: 'vessel.read' } satisfies PageAccess,
             lazy: () =>
               import('../features/cellar/components/vessel-labels-page').then((m) => ({
                 Component: m.VesselLabelsPage,
@@ -146,25 +146,25 @@ export const router = createBrowserRouter([
           },
           {
             path: 'cellar/batches/:batchId',
-            handle: { roles: BREWING },
+            handle: { action: 'cellar.read' } satisfies PageAccess,
             lazy: () =>
               import('../features/cellar/components/batch-cellar-page').then((m) => ({ Component: m.BatchCellarPage })),
           },
           {
             path: 'taproom',
-            handle: { roles: ALL },
+            handle: { action: 'taproom.read' } satisfies PageAccess,
             lazy: () =>
               import('../features/taproom/components/taproom-home').then((m) => ({ Component: m.TaproomHome })),
           },
           {
             path: 'taproom/board',
-            handle: { roles: ALL },
+            handle: { action: 'taproom.read' } satisfies PageAccess,
             lazy: () =>
               import('../features/taproom/components/bar-board-page').then((m) => ({ Component: m.BarBoardPage })),
           },
           {
             path: 'taproom/beers/:beerId/briefing',
-            handle: { roles: ALL },
+            handle: { action: 'taproom.read' } satisfies PageAccess,
             lazy: () =>
               import('../features/taproom/components/briefing-sheet-page').then((m) => ({
                 Component: m.BriefingSheetPage,
@@ -172,31 +172,31 @@ export const router = createBrowserRouter([
           },
           {
             path: 'releases',
-            handle: { roles: BREWING },
+            handle: { action: 'release.read' } satisfies PageAccess,
             lazy: () =>
               import('../features/taproom/components/releases-page').then((m) => ({ Component: m.ReleasesPage })),
           },
           {
             path: 'batches/:batchId/release',
-            handle: { roles: BREWING },
+            handle: { action: 'release.read' } satisfies PageAccess,
             lazy: () =>
               import('../features/taproom/components/release-page').then((m) => ({ Component: m.ReleasePage })),
           },
           {
             path: 'batches/:batchId/tasting',
-            handle: { roles: BREWING },
+            handle: { action: 'tasting.read' } satisfies PageAccess,
             lazy: () =>
               import('../features/tasting/components/tasting-page').then((m) => ({ Component: m.TastingPage })),
           },
           {
             path: 'reports/production',
-            handle: { roles: HEAD },
+            handle: { action: 'report.production.read' } satisfies PageAccess,
             lazy: () =>
               import('../features/reports/components/production-page').then((m) => ({ Component: m.ProductionPage })),
           },
           {
             path: 'reports/history',
-            handle: { roles: BREWING },
+            handle: { action: 'report.history.read' } satisfies PageAccess,
             lazy: () =>
               import('../features/reports/components/history-page').then((m) => ({ Component: m.HistoryPage })),
           },

@@ -1,73 +1,23 @@
 /**
- * Display helpers: SI values (as stored) shown in the brewery's unit system.
- * Conversions come from shared/brewing; this file only chooses units and formats.
+ * Display helpers: SI values (as stored) shown in the brewery's unit system. Units, decimals and conversions
+ * come from the quantities table (shared/quantities); this file only formats the brewery's own kinds of amount.
  */
-import {
-  cToF,
-  fToC,
-  kgToLb,
-  lbToKg,
-  lToUsGal,
-  usGalToL,
-  gToOz,
-  ozToG,
-  lPerKgToQtPerLb,
-  qtPerLbToLPerKg,
-  roundForMeasuring,
-  type MeasuredAmount,
-} from '../../shared/brewing';
+import { lbToKg, roundForMeasuring, type MeasuredAmount } from '../../shared/brewing';
+import { displayUnit, showQuantity, type QuantityId } from '../../shared/quantities';
 import type { UnitSystem } from '../../shared/schemas/auth';
 
 // A batch or tank volume in words is shared with the server's messages (fermenter size).
-export { showVolume } from '../../shared/brewing';
-
-/** What a stored SI number measures; `lPerKg` is water per grain (mash thickness, grain absorption). */
-export type Quantity = 'weightKg' | 'weightG' | 'tempC' | 'volumeL' | 'lPerKg';
-
-interface UnitInfo {
-  unit: string;
-  toDisplay: (si: number) => number;
-  fromDisplay: (shown: number) => number;
-  decimals: number;
-}
-
-const IDENTITY = (x: number) => x;
-
-export const UNITS: Record<UnitSystem, Record<Quantity, UnitInfo>> = {
-  us: {
-    weightKg: { unit: 'lb', toDisplay: kgToLb, fromDisplay: lbToKg, decimals: 2 },
-    weightG: { unit: 'oz', toDisplay: gToOz, fromDisplay: ozToG, decimals: 2 },
-    tempC: { unit: '°F', toDisplay: cToF, fromDisplay: fToC, decimals: 1 },
-    volumeL: { unit: 'gal', toDisplay: lToUsGal, fromDisplay: usGalToL, decimals: 1 },
-    lPerKg: { unit: 'qt/lb', toDisplay: lPerKgToQtPerLb, fromDisplay: qtPerLbToLPerKg, decimals: 2 },
-  },
-  metric: {
-    weightKg: { unit: 'kg', toDisplay: IDENTITY, fromDisplay: IDENTITY, decimals: 2 },
-    weightG: { unit: 'g', toDisplay: IDENTITY, fromDisplay: IDENTITY, decimals: 0 },
-    tempC: { unit: '°C', toDisplay: IDENTITY, fromDisplay: IDENTITY, decimals: 1 },
-    volumeL: { unit: 'L', toDisplay: IDENTITY, fromDisplay: IDENTITY, decimals: 1 },
-    lPerKg: { unit: 'L/kg', toDisplay: IDENTITY, fromDisplay: IDENTITY, decimals: 2 },
-  },
-};
-
-/**
- * A limit message from the shared schemas, written in SI ("Rest temperature (°C) must be at most 80"),
- * restated in the units a field shows ("Rest temperature must be at most 176.0 °F"). Other messages pass unchanged.
- */
-export function limitInUnits(message: string, system: UnitSystem, quantity: Quantity): string {
-  const u = UNITS[system][quantity];
-  const si = UNITS.metric[quantity].unit;
-  const escaped = si.replace(/[/]/g, '\\/');
-  const limit = new RegExp(`^(.+?) \\(${escaped}\\) must be at (most|least) (-?\\d+(?:\\.\\d+)?)$`).exec(message);
-  if (limit)
-    return `${limit[1]} must be at ${limit[2]} ${Number(u.toDisplay(Number(limit[3])).toFixed(u.decimals))} ${u.unit}`;
-  return message.replace(` (${si}): `, ': ');
-}
+export { showVolume, displayUnit } from '../../shared/quantities';
 
 /** A number with its unit in the brewery's system, e.g. "152.6 °F" or "37.9 L". */
-export function show(system: UnitSystem, quantity: Quantity, si: number, decimals?: number): string {
-  const u = UNITS[system][quantity];
-  return `${u.toDisplay(si).toFixed(decimals ?? u.decimals)} ${u.unit}`;
+export function show(system: UnitSystem, quantity: QuantityId, si: number, decimals?: number): string {
+  return showQuantity(quantity, system, si, { decimals });
+}
+
+/** The number a field shows for an SI value, in the brewery's first unit and its decimals (no unit). */
+export function shownNumber(system: UnitSystem, quantity: QuantityId, si: number): number {
+  const u = displayUnit(quantity, system);
+  return Number(u.fromSi(si).toFixed(u.decimals));
 }
 
 /** A rounded, measurable amount, e.g. "186 lb" or "62 tsp". */

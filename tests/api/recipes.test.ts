@@ -92,13 +92,11 @@ describe('recipes API', () => {
     expect(kept.body.version.content.hops[0].weightG).toBe(80);
     expect(kept.body.version.frozenAt).not.toBeNull();
 
-    const next = await t.as.head_brewer
-      .post(`/api/recipes/${recipeId}/versions`)
-      .send({
-        changeNote: 'Back to the pilot hop rate',
-        equipmentProfileId: equipmentIds.pilot,
-        content: SEASONAL_CONTENT,
-      });
+    const next = await t.as.head_brewer.post(`/api/recipes/${recipeId}/versions`).send({
+      changeNote: 'Back to the pilot hop rate',
+      equipmentProfileId: equipmentIds.pilot,
+      content: SEASONAL_CONTENT,
+    });
     expect(next.status).toBe(201);
     expect(next.body.number).toBe(2);
     const recipe = await t.as.assistant_brewer.get(`/api/recipes/${recipeId}`);
@@ -118,17 +116,15 @@ describe('recipes API', () => {
       ...SEASONAL_CONTENT,
       adjuncts: [{ ...SEASONAL_CONTENT.adjuncts[0]!, stage: 'fermenter', boilMinutes: 15 }],
     };
-    const res = await t.as.head_brewer
-      .post('/api/recipes')
-      .send({
-        name: 'Fermenter fruit',
-        style: '',
-        description: '',
-        status: 'draft',
-        changeNote: 'Fruit to the fermenter',
-        equipmentProfileId: equipmentIds.pilot,
-        content: moved,
-      });
+    const res = await t.as.head_brewer.post('/api/recipes').send({
+      name: 'Fermenter fruit',
+      style: '',
+      description: '',
+      status: 'draft',
+      changeNote: 'Fruit to the fermenter',
+      equipmentProfileId: equipmentIds.pilot,
+      content: moved,
+    });
     expect(res.status, JSON.stringify(res.body)).toBe(201);
     const detail = await t.as.head_brewer.get(`/api/recipes/${res.body.id}/versions/${res.body.versionId}`);
     expect(detail.body.version.content.adjuncts[0].stage).toBe('fermenter');
@@ -261,7 +257,7 @@ describe('recipes API', () => {
     expect(res.body.error.fields).toMatchObject({
       name: 'Enter the recipe name',
       status: expect.any(String),
-      'content.hops.0.alphaAcidPct': 'Alpha acid (%) must be at most 30',
+      'content.hops.0.alphaAcidPct': 'Alpha acid must be at most 30 %',
       'content.targets.og': 'Target OG: enter a number',
     });
     const whirlpool = await t.as.head_brewer.post('/api/recipes').send({

@@ -1,10 +1,10 @@
 import { Navigate, NavLink, Outlet, ScrollRestoration, useLocation, useMatches, useNavigate } from 'react-router-dom';
-import { useMe } from '../../features/auth/api/me';
+import { useMe } from '../../lib/current-user';
+import { can, rolesFor } from '../../../shared/policy';
 import { OutboxBanner, SignOutButton } from '../../features/batches/components/outbox-status';
 import { ROLE_LABELS } from '../../../shared/schemas/roles';
 import { ErrorState, Loading, cx } from '../../components/ui';
-import { CurrentUserContext } from '../current-user';
-import { navFor, pageRoles } from '../navigation';
+import { navFor, pageAction } from '../navigation';
 import { NotForYourRole } from './not-for-your-role';
 import { useRefreshOnDelivery } from '../../lib/outbox';
 
@@ -13,7 +13,7 @@ export function AppLayout() {
   const me = useMe();
   const location = useLocation();
   const navigate = useNavigate();
-  const allowed = pageRoles(useMatches());
+  const action = pageAction(useMatches());
   useRefreshOnDelivery();
 
   if (me.isPending) return <Loading label="Opening Kettlewright" />;
@@ -27,47 +27,45 @@ export function AppLayout() {
   const user = me.data;
 
   return (
-    <CurrentUserContext.Provider value={user}>
-      <div className="min-h-screen">
-        <header className="no-print sticky top-0 z-40 bg-cellar-800 text-white shadow">
-          {/* Who and where on top, the menu below: it wraps onto a second line on a narrow screen, so no item hides off the edge. */}
-          <div className="mx-auto flex max-w-7xl items-center justify-between gap-4 px-4 pt-2">
-            <NavLink to="/" className="flex min-h-touch items-center gap-2 font-bold">
-              <img src="/kettle.svg" alt="" className="h-8 w-8" />
-              <span className="text-lg">{user.brewery.name}</span>
-            </NavLink>
-            <div className="flex shrink-0 items-center gap-3">
-              <span className="hidden text-sm text-cellar-100 sm:inline">
-                {user.displayName} · {ROLE_LABELS[user.role]}
-              </span>
-              <SignOutButton onSignedOut={() => navigate('/sign-in', { replace: true })} />
-            </div>
+    <div className="min-h-screen">
+      <header className="no-print sticky top-0 z-40 bg-cellar-800 text-white shadow">
+        {/* Who and where on top, the menu below: it wraps onto a second line on a narrow screen, so no item hides off the edge. */}
+        <div className="mx-auto flex max-w-7xl items-center justify-between gap-4 px-4 pt-2">
+          <NavLink to="/" className="flex min-h-touch items-center gap-2 font-bold">
+            <img src="/kettle.svg" alt="" className="h-8 w-8" />
+            <span className="text-lg">{user.brewery.name}</span>
+          </NavLink>
+          <div className="flex shrink-0 items-center gap-3">
+            <span className="hidden text-sm text-cellar-100 sm:inline">
+              {user.displayName} · {ROLE_LABELS[user.role]}
+            </span>
+            <SignOutButton onSignedOut={() => navigate('/sign-in', { replace: true })} />
           </div>
-          <nav aria-label="Main" className="mx-auto flex max-w-7xl flex-wrap gap-1 px-3 pb-2 pt-1">
-            {navFor(user.role).map((item) => (
-              <NavLink
-                key={item.to}
-                to={item.to}
-                end={item.to === '/'}
-                className={({ isActive }) =>
-                  cx(
-                    'flex min-h-touch shrink-0 items-center rounded-lg px-3 font-semibold',
-                    isActive ? 'bg-brass-400 text-cellar-900' : 'text-cellar-100 hover:bg-cellar-700',
-                  )
-                }
-              >
-                {item.label}
-              </NavLink>
-            ))}
-          </nav>
-        </header>
-        <OutboxBanner />
-        <main className="mx-auto max-w-7xl px-4 py-6">
-          {allowed && !allowed.includes(user.role) ? <NotForYourRole roles={allowed} /> : <Outlet />}
-        </main>
-        {/* A new page opens at its top, not at the previous page's scroll position. */}
-        <ScrollRestoration />
-      </div>
-    </CurrentUserContext.Provider>
+        </div>
+        <nav aria-label="Main" className="mx-auto flex max-w-7xl flex-wrap gap-1 px-3 pb-2 pt-1">
+          {navFor((a) => can(user.role, a)).map((item) => (
+            <NavLink
+              key={item.to}
+              to={item.to}
+              end={item.to === '/'}
+              className={({ isActive }) =>
+                cx(
+                  'flex min-h-touch shrink-0 items-center rounded-lg px-3 font-semibold',
+                  isActive ? 'bg-brass-400 text-cellar-900' : 'text-cellar-100 hover:bg-cellar-700',
+                )
+              }
+            >
+              {item.label}
+            </NavLink>
+          ))}
+        </nav>
+      </header>
+      <OutboxBanner />
+      <main className="mx-auto max-w-7xl px-4 py-6">
+        {action && !can(user.role, action) ? <NotForYourRole roles={rolesFor(action)} /> : <Outlet />}
+      </main>
+      {/* A new page opens at its top, not at the previous page's scroll position. */}
+      <ScrollRestoration />
+    </div>
   );
 }

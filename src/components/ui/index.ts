@@ -9,5 +9,5 @@ export { ToastProvider, useToast } from './toast';
 export { cx } from './cx';
 export { FormBanner } from './form-banner';
 export { SuggestionChip } from './suggestion-chip';
-// PasswordHint, TimeZoneOptions and UnitField are imported by path: they pull in form and unit code
+// PasswordHint, TimeZoneOptions and QuantityField are imported by path: they pull in form and unit code
 // that the initial page (sign-in, app shell) must not load.

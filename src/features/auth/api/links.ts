@@ -1,7 +1,7 @@
 import { queryOptions, useMutation, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import type { ResetRequestInput, ResetPasswordInput, ChangePasswordInput } from '../../../../shared/schemas/auth';
-import { authKeys } from './me';
+import { authKeys } from '../../../lib/current-user';
 
 export const inviteQuery = (token: string) =>
   queryOptions({
@@ -15,11 +15,17 @@ export const useRequestReset = () =>
     mutationFn: (input: ResetRequestInput) => api.post<{ message: string }>('/api/auth/reset-request', input),
   });
 
-/** Whether a reset link can still be used (404 with the reason when it cannot). */
+/**
+ * Whether a reset link can still be used: the server answers 204 when it can, 404 with the reason when it cannot.
+ * A query must hold a value, so an open link is `true` rather than the empty answer.
+ */
 export const useResetLink = (token: string) =>
   useQuery({
     queryKey: [...authKeys.all, 'reset', token] as const,
-    queryFn: () => api.get<void>(`/api/auth/reset/${token}`),
+    queryFn: async () => {
+      await api.get<void>(`/api/auth/reset/${token}`);
+      return true;
+    },
     retry: false,
   });
 

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import type { Me, SignInInput, SignUpInput, AcceptInviteInput } from '../../../../shared/schemas/auth';
-import { authKeys } from './me';
+import { authKeys } from '../../../lib/current-user';
 
 /** After any change of who is signed in, drop every cached answer and keep only the new person. */
 function useSessionMutation<TInput>(fn: (input: TInput) => Promise<Me>) {

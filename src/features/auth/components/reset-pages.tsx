@@ -8,7 +8,8 @@ import {
   type ResetPasswordInput,
   type ResetRequestInput,
 } from '../../../../shared/schemas/auth';
-import { Button, ErrorState, Loading, TextField } from '../../../components/ui';
+import { Button, Loading, TextField } from '../../../components/ui';
+import { ApiError } from '../../../lib/api-client';
 import { applyServerErrors } from '../../../lib/forms';
 import { useRequestReset, useResetLink, useResetPassword } from '../api/links';
 import { AuthFrame } from './auth-frame';
@@ -56,6 +57,17 @@ export function ForgotPasswordPage() {
   );
 }
 
+/**
+ * Why a reset link cannot be used: the server's reason when it gave one. Nothing else is quoted, since an error
+ * from elsewhere could repeat the address, and the link's secret is in it.
+ */
+function linkProblem(error: unknown): string {
+  if (error instanceof ApiError && error.status === 400)
+    return 'This reset link is not complete: open it from the e-mail again, or ask for a new one.';
+  if (error instanceof ApiError) return error.message;
+  return 'This link could not be checked. Check the network, then open the link from the e-mail again.';
+}
+
 export function ResetPasswordPage() {
   const { token = '' } = useParams();
   const link = useResetLink(token);
@@ -84,7 +96,12 @@ export function ResetPasswordPage() {
         <Loading label="Checking the link" />
       ) : link.isError ? (
         <div className="space-y-4">
-          <ErrorState error={link.error} />
+          <p
+            role="alert"
+            className="rounded-xl border-2 border-ember-600 bg-ember-100 p-5 font-semibold text-ember-700"
+          >
+            {linkProblem(link.error)}
+          </p>
           <Link className="underline" to="/forgot-password">
             Ask for a new link
           </Link>

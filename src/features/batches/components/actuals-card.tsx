@@ -7,11 +7,11 @@ import { showSg } from './format';
 /** Planned beside actual: mash temperature, pre-boil gravity and volume, OG, knockout volume, efficiency. */
 export function ActualsCard({ actuals, system }: { actuals: BatchActuals; system: UnitSystem }) {
   const rows: [string, PlannedActual, (n: number) => string][] = [
-    ['Mash temperature', actuals.mashTempC, (n) => show(system, 'tempC', n)],
+    ['Mash temperature', actuals.mashTempC, (n) => show(system, 'temperature', n)],
     ['Pre-boil gravity', actuals.preBoilGravity, showSg],
-    ['Pre-boil volume', actuals.preBoilVolumeL, (n) => show(system, 'volumeL', n)],
+    ['Pre-boil volume', actuals.preBoilVolumeL, (n) => show(system, 'volume', n)],
     ['OG', actuals.og, showSg],
-    ['Knockout volume', actuals.knockoutVolumeL, (n) => show(system, 'volumeL', n)],
+    ['Knockout volume', actuals.knockoutVolumeL, (n) => show(system, 'volume', n)],
     ['Brewhouse efficiency', actuals.brewhouseEfficiency, (n) => `${(n * 100).toFixed(1)} %`],
   ];
   return (

@@ -1,6 +1,6 @@
 import { useParams } from 'react-router-dom';
 import { Button, ErrorState, Loading } from '../../../components/ui';
-import { useCurrentUser } from '../../../app/current-user';
+import { useCurrentUser } from '../../../lib/current-user';
 import { useBatch } from '../api/get-batch';
 import { brewDaySteps } from '../../../../shared/batches/brew-day';
 import { BATCH_STATUS_LABELS } from '../../../../shared/schemas/batches';
@@ -32,7 +32,7 @@ export function BatchRecordPage() {
           </p>
           <p className="tabular-nums">
             Planned OG {showSg(computed.og)} · FG {showSg(computed.fg)} · {computed.ibu.toFixed(0)} IBU · into fermenter{' '}
-            {show(system, 'volumeL', computed.volumes.intoFermenterL)}
+            {show(system, 'volume', computed.volumes.intoFermenterL)}
           </p>
           <p className="text-sm text-ink-500">Times in {me.brewery.timeZone}.</p>
         </div>

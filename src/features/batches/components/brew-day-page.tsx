@@ -3,7 +3,7 @@ import { useParams } from 'react-router-dom';
 import { brewDaySteps, boilAdditions, type BrewDayStep, type MeasureKey } from '../../../../shared/batches/brew-day';
 import { BATCH_STATUS_LABELS } from '../../../../shared/schemas/batches';
 import { Button, Card, ErrorState, LinkButton, Loading, TextAreaField, cx } from '../../../components/ui';
-import { useCurrentUser } from '../../../app/current-user';
+import { useCurrentUser, useCan } from '../../../lib/current-user';
 import { outbox, useOutbox } from '../../../lib/outbox';
 import type { OutboxItem } from '../../../lib/outbox-queue';
 import { useBatch } from '../api/get-batch';
@@ -59,6 +59,7 @@ function boilEnd(steps: BrewDayStep[], done: Map<string, Done>): string | null {
 export function BrewDayPage() {
   const id = Number(useParams().batchId);
   const me = useCurrentUser();
+  const maySignOff = useCan('batch.signOff');
   const system = me.brewery.unitSystem;
   const timeZone = me.brewery.timeZone;
   const batch = useBatch(id);
@@ -313,9 +314,9 @@ export function BrewDayPage() {
             </Card>
           )}
           <ActualsCard actuals={b.actuals} system={system} />
-          <StatusCard batchId={id} status={b.status} role={me.role} />
+          <StatusCard batchId={id} status={b.status} />
           {b.signatures.length > 0 && <Signatures signatures={b.signatures} timeZone={timeZone} />}
-          {me.role === 'head_brewer' && !signed && <SignOffPanel batchId={id} pendingCount={waitingCount} />}
+          {maySignOff && !signed && <SignOffPanel batchId={id} pendingCount={waitingCount} />}
         </div>
       </div>
 

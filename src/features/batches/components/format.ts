@@ -17,8 +17,8 @@ export function showMeasurements(
   m: { tempC?: number; volumeL?: number; gravitySg?: number; ph?: number },
 ): string {
   return [
-    m.tempC !== undefined && show(system, 'tempC', m.tempC),
-    m.volumeL !== undefined && show(system, 'volumeL', m.volumeL),
+    m.tempC !== undefined && show(system, 'temperature', m.tempC),
+    m.volumeL !== undefined && show(system, 'volume', m.volumeL),
     m.gravitySg !== undefined && `${showSg(m.gravitySg)} SG`,
     m.ph !== undefined && `pH ${m.ph.toFixed(2)}`,
   ]

@@ -1,8 +1,8 @@
-import { platoToSg, sgToPlato } from '../../../../shared/brewing';
-import { MEASUREMENT_LIMITS, type Measurements } from '../../../../shared/schemas/batch-log';
+import { MEASURES, measurementsSchema, type Measurements } from '../../../../shared/schemas/batch-log';
+import { QUANTITIES, displayUnit, limitMessage, unitBySymbol, type DisplayUnit } from '../../../../shared/quantities';
+import { issueRefusal } from '../../../../shared/quantities/field';
 import { farFromExpected, type MeasureKey } from '../../../../shared/batches/brew-day';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
-import { UNITS } from '../../../lib/units';
 import { cx } from '../../../components/ui';
 
 /** How gravity is typed; °Brix only where the field knows how the refractometer converts (a refractometer reading). */
@@ -12,37 +12,27 @@ export type BrixToSg = (brix: number) => number;
 /** What the person typed, per measurement, in the units shown. */
 export type Typed = Partial<Record<MeasureKey, string>>;
 
-/** The unit a field is typed in; pH has none. */
-function unitOf(key: MeasureKey, system: UnitSystem, gravity: GravityUnit): string | null {
-  if (key === 'tempC') return UNITS[system].tempC.unit;
-  if (key === 'volumeL') return UNITS[system].volumeL.unit;
-  if (key === 'gravitySg') return { sg: 'SG', plato: '°P', brix: '°Bx' }[gravity];
-  return null;
+/** The unit a field is typed in (a °Bx reading is checked as the SG it converts to). */
+function unitOf(key: MeasureKey, system: UnitSystem, gravity: GravityUnit): DisplayUnit {
+  if (key === 'gravitySg') return unitBySymbol('gravity', system, gravity === 'plato' ? '°P' : 'SG');
+  return displayUnit(MEASURES[key].quantity, system);
 }
-const NAMES: Record<MeasureKey, string> = { tempC: 'Temperature', volumeL: 'Volume', gravitySg: 'Gravity', ph: 'pH' };
+/** The symbol shown beside a field: °Bx for a refractometer reading; none for pH. */
+const symbolOf = (key: MeasureKey, system: UnitSystem, gravity: GravityUnit): string =>
+  key === 'gravitySg' && gravity === 'brix' ? '°Bx' : unitOf(key, system, gravity).unit;
 
+/** An expected value in the field's unit; beside a °Bx field, the SG it is compared as, with its unit. */
 export function expectedText(key: MeasureKey, si: number, system: UnitSystem, gravity: GravityUnit): string {
-  if (key === 'tempC') return UNITS[system].tempC.toDisplay(si).toFixed(1);
-  if (key === 'volumeL') return UNITS[system].volumeL.toDisplay(si).toFixed(1);
-  if (key === 'gravitySg') return gravity === 'sg' ? si.toFixed(3) : sgToPlato(si).toFixed(1);
-  return si.toFixed(2);
-}
-
-/** A limit of the shared schema (SI) as the field shows it, e.g. 110 °C as "230 °F" for a US brewery. */
-function limitText(key: MeasureKey, si: number, system: UnitSystem, gravity: GravityUnit): string {
-  if (key === 'gravitySg')
-    return gravity === 'plato' ? `${Number(sgToPlato(si).toFixed(1))} °P` : `${si.toFixed(3)} SG`;
-  if (key === 'ph') return String(si);
-  const u = UNITS[system][key];
-  return `${Number(u.toDisplay(si).toFixed(1))} ${u.unit}`;
+  const u = unitOf(key, system, gravity);
+  const text = u.fromSi(si).toFixed(u.decimals);
+  return key === 'gravitySg' && gravity === 'brix' ? `${text} ${u.unit}` : text;
 }
 
 /** The shared schema's limit a measurement (SI) breaks, said in the units the field shows; null when within. */
 function limitProblem(key: MeasureKey, si: number, system: UnitSystem, gravity: GravityUnit): string | null {
-  const { min, max } = MEASUREMENT_LIMITS[key];
-  if (si > max) return `${NAMES[key]} must be at most ${limitText(key, max, system, gravity)}`;
-  if (si < min) return `${NAMES[key]} must be at least ${limitText(key, min, system, gravity)}`;
-  return null;
+  const result = measurementsSchema.shape[key].safeParse(si);
+  const refusal = result.success ? null : issueRefusal(result.error.issues[0]!);
+  return refusal && limitMessage(refusal, system, unitOf(key, system, gravity));
 }
 
 /**
@@ -74,22 +64,24 @@ function convert(
   for (const [key, text] of Object.entries(typed) as [MeasureKey, string | undefined][]) {
     if (!text?.trim()) continue;
     const n = Number(text.replace(',', '.'));
-    if (!Number.isFinite(n)) return { error: `${NAMES[key]}: enter a number`, field: key };
-    if (key === 'tempC') out.tempC = Number(UNITS[system].tempC.fromDisplay(n).toFixed(2));
-    else if (key === 'volumeL') out.volumeL = Number(UNITS[system].volumeL.fromDisplay(n).toFixed(2));
-    else if (key === 'gravitySg') {
-      if (gravity !== 'sg' && (n < 0 || n > 40))
-        return { error: `Gravity: ${gravity === 'plato' ? '°P' : '°Bx'} is between 0 and 40`, field: key };
-      if (gravity === 'brix' && !brixToSg) return { error: 'Gravity: enter SG or °P', field: key };
+    if (!Number.isFinite(n)) return { error: `${MEASURES[key].label}: enter a number`, field: key };
+    if (key === 'gravitySg' && gravity === 'brix') {
+      if (!brixToSg) return { error: 'Gravity: enter SG or °P', field: key };
+      const brix = QUANTITIES.brix;
+      if (n < brix.min || n > brix.max)
+        return { error: `Gravity: a refractometer reads ${brix.min} to ${brix.max} °Bx`, field: key };
       try {
-        out.gravitySg = Number((gravity === 'sg' ? n : gravity === 'plato' ? platoToSg(n) : brixToSg!(n)).toFixed(4));
+        out.gravitySg = Number(brixToSg(n).toFixed(4));
       } catch (error) {
         return {
           error: `Gravity: ${error instanceof Error ? error.message : 'not a reading this converts'}`,
           field: key,
         };
       }
-    } else out.ph = n;
+    } else {
+      const digits = key === 'gravitySg' ? 4 : 2;
+      out[key] = Number(unitOf(key, system, gravity).toSi(n).toFixed(digits));
+    }
   }
   return Object.keys(out).length ? { measurements: out } : {};
 }
@@ -105,7 +97,7 @@ export function refusalOf(
 ): { message: string; field?: MeasureKey } {
   const m = ((item.body ?? {}) as { measurements?: Measurements }).measurements ?? {};
   for (const [key, si] of Object.entries(m) as [MeasureKey, number][]) {
-    if (!(key in NAMES) || typeof si !== 'number') continue;
+    if (!(key in MEASURES) || typeof si !== 'number') continue;
     const problem = limitProblem(key, si, system, gravity);
     if (problem) return { message: problem, field: key };
   }
@@ -141,7 +133,7 @@ export function MeasurementFields({
       {asks.map((key) => {
         const id = `measure-${key}`;
         const want = expected[key];
-        const unit = unitOf(key, system, gravity);
+        const unit = symbolOf(key, system, gravity);
         // A value far from the plan is allowed (the brewer measured it), but worth a second look before it is kept.
         const typedSi =
           want === undefined ? undefined : convert({ [key]: typed[key] }, system, gravity).measurements?.[key];
@@ -152,7 +144,7 @@ export function MeasurementFields({
             {/* As tall as the SG/°P switch, so a field beside the gravity field starts at the same height. */}
             <div className="flex min-h-[48px] items-end justify-between gap-2">
               <label htmlFor={id} className="text-base font-semibold text-ink-700">
-                {unit ? `${NAMES[key]} (${unit})` : NAMES[key]}
+                {unit ? `${MEASURES[key].label} (${unit})` : MEASURES[key].label}
               </label>
               {key === 'gravitySg' && (
                 <div
@@ -200,8 +192,8 @@ export function MeasurementFields({
             )}
             {far && (
               <p id={`${id}-far`} className="mt-1 rounded bg-brass-100 px-2 py-1 text-base font-semibold text-ink-900">
-                Far from the expected {expectedText(key, want, system, gravity)}
-                {unit ? ` ${unit}` : ''}: check it before marking done.
+                Far from the expected {expectedText(key, want!, system, gravity)}
+                {unit && !(key === 'gravitySg' && gravity === 'brix') ? ` ${unit}` : ''}: check it before marking done.
               </p>
             )}
           </div>

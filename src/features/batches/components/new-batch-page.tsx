@@ -6,7 +6,7 @@ import { useNavigate, useSearchParams } from 'react-router-dom';
 import { createBatchSchema, type CreateBatchInput } from '../../../../shared/schemas/batches';
 import { Button, Card, PageHeader, SelectField, TextField } from '../../../components/ui';
 import { applyServerErrors } from '../../../lib/forms';
-import { useCurrentUser } from '../../../app/current-user';
+import { useCurrentUser } from '../../../lib/current-user';
 import { showVolume } from '../../../lib/units';
 import { usePlanBatch } from '../api/plan-batch';
 import { usePlanPreview } from '../api/plan-preview';

@@ -4,7 +4,7 @@ import { Button, Dialog } from '../../../components/ui';
 import { outbox, useOutbox } from '../../../lib/outbox';
 import { forgetOfflineAnswers } from '../../../lib/service-worker';
 import { useSignOut } from '../../auth/api/session';
-import { useCurrentUser } from '../../../app/current-user';
+import { useCurrentUser } from '../../../lib/current-user';
 
 /** Shown when the session ended with writes waiting: they are kept, and sent with their original keys after signing in. */
 export function OutboxBanner() {

@@ -1,18 +1,18 @@
 import { useState } from 'react';
 import { BATCH_STATUS_LABELS, STATUS_TRANSITIONS, type BatchStatus } from '../../../../shared/schemas/batches';
-import { can } from '../../../../shared/policy';
-import type { Role } from '../../../../shared/schemas/roles';
 import { Button, Card, TextField } from '../../../components/ui';
 import { ApiError } from '../../../lib/api-client';
 import { useChangeStatus } from '../api/change-status';
+import { useCan } from '../../../lib/current-user';
 
-/** Moves the batch to its next status, or (head brewer only) dumps it with a reason. */
-export function StatusCard({ batchId, status, role }: { batchId: number; status: BatchStatus; role: Role }) {
+/** Moves the batch to its next status, or (for whoever may dump it) dumps it with a reason. */
+export function StatusCard({ batchId, status }: { batchId: number; status: BatchStatus }) {
   const change = useChangeStatus(batchId);
+  const mayDump = useCan('batch.dump');
   const [reason, setReason] = useState('');
   const [dumping, setDumping] = useState(false);
   const next = STATUS_TRANSITIONS[status].filter((s) => s !== 'dumped');
-  const canDump = STATUS_TRANSITIONS[status].includes('dumped') && can(role, 'batch.dump');
+  const canDump = STATUS_TRANSITIONS[status].includes('dumped') && mayDump;
   if (!next.length && !canDump) return null;
   const error = change.error instanceof ApiError ? (change.error.fields.reason ?? change.error.message) : undefined;
   return (

@@ -36,8 +36,9 @@ export function StepDetails({ step, system }: { step: BrewDayStep; system: UnitS
         <ul className="mt-3 space-y-1 text-xl" data-testid="step-plan">
           {step.infusion && (
             <li>
-              Add <span className="font-bold tabular-nums">{show(system, 'volumeL', step.infusion.volumeL)}</span> of
-              water at <span className="font-bold tabular-nums">{show(system, 'tempC', step.infusion.tempC)}</span>
+              Add <span className="font-bold tabular-nums">{show(system, 'volume', step.infusion.volumeL)}</span> of
+              water at{' '}
+              <span className="font-bold tabular-nums">{show(system, 'temperature', step.infusion.tempC)}</span>
             </li>
           )}
           {step.holdMinutes !== undefined && (
@@ -46,7 +47,7 @@ export function StepDetails({ step, system }: { step: BrewDayStep; system: UnitS
               {step.expected.tempC !== undefined && (
                 <>
                   {' '}
-                  at <span className="font-bold tabular-nums">{show(system, 'tempC', step.expected.tempC)}</span>
+                  at <span className="font-bold tabular-nums">{show(system, 'temperature', step.expected.tempC)}</span>
                 </>
               )}
             </li>

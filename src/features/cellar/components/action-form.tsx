@@ -14,7 +14,7 @@ import {
   type VesselView,
 } from '../../../../shared/schemas/cellar';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
-import { UNITS } from '../../../lib/units';
+import { displayUnit } from '../../../lib/units';
 import { useLogCellarEntry } from '../api/log-cellar-entry';
 import { useVessels } from '../api/vessels';
 import { useSubmitOnce } from '../../../lib/use-submit-once';
@@ -51,7 +51,7 @@ export function ActionForm({
   const log = useLogCellarEntry(batchId);
   const vessels = useVessels();
   const [saved, setSaved] = useState<string>();
-  const temp = UNITS[unitSystem].tempC;
+  const temp = displayUnit('temperature', unitSystem);
   const { register, handleSubmit, watch, setValue, reset, formState } = useForm<ActionDraft, unknown, ActionEntryInput>(
     {
       resolver: (draft, context, options) => entryResolver(onlyActionFields(draft) as ActionDraft, context, options),
@@ -102,9 +102,9 @@ export function ActionForm({
           {planTempC !== undefined && (
             <SuggestionChip
               label="Plan"
-              onPick={() => setValue('temp', Number(temp.toDisplay(planTempC).toFixed(1)), { shouldValidate: true })}
+              onPick={() => setValue('temp', Number(temp.fromSi(planTempC).toFixed(1)), { shouldValidate: true })}
             >
-              {temp.toDisplay(planTempC).toFixed(1)} {temp.unit}
+              {temp.fromSi(planTempC).toFixed(1)} {temp.unit}
             </SuggestionChip>
           )}
         </div>

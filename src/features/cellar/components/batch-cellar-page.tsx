@@ -3,7 +3,7 @@ import { useParams } from 'react-router-dom';
 import { apparentAttenuation, predictFermentation } from '../../../../shared/brewing';
 import { CELLAR_ACTION_LABELS, READING_METHOD_LABELS } from '../../../../shared/schemas/cellar';
 import { Card, ErrorState, LinkButton, Loading, PageHeader, Stat } from '../../../components/ui';
-import { useCurrentUser } from '../../../app/current-user';
+import { useCurrentUser, useCan } from '../../../lib/current-user';
 import { show } from '../../../lib/units';
 import { useBatchCellar } from '../api/batch-cellar';
 import { cellarGroup } from '../api/log-cellar-entry';
@@ -30,6 +30,7 @@ function Section({ title, children }: { title: string; children: ReactNode }) {
 export function BatchCellarPage() {
   const batchId = Number(useParams().batchId);
   const me = useCurrentUser();
+  const mayPlan = useCan('cellar.plan');
   const { data, error, refetch, isPending } = useBatchCellar(batchId);
   const prediction = useMemo(
     () => (data ? predictFermentation(data.readings.map((r) => ({ atMs: Date.parse(r.takenAt), sg: r.sg }))) : null),
@@ -126,13 +127,13 @@ export function BatchCellarPage() {
             ...data.readings.map((r) => ({
               at: r.takenAt,
               key: `r${r.id}`,
-              text: `${r.sg.toFixed(3)} (${r.plato.toFixed(1)} °P)${r.tempC !== null ? ` · ${show(system, 'tempC', r.tempC)}` : ''}${r.ph !== null ? ` · pH ${r.ph}` : ''} · ${READING_METHOD_LABELS[r.method]}${r.corrected ? ' · corrected' : ''}`,
+              text: `${r.sg.toFixed(3)} (${r.plato.toFixed(1)} °P)${r.tempC !== null ? ` · ${show(system, 'temperature', r.tempC)}` : ''}${r.ph !== null ? ` · pH ${r.ph}` : ''} · ${READING_METHOD_LABELS[r.method]}${r.corrected ? ' · corrected' : ''}`,
               who: r.authorName,
             })),
             ...data.actions.map((a) => ({
               at: a.at,
               key: `a${a.logEntryId}`,
-              text: `${CELLAR_ACTION_LABELS[a.action]}${a.tempC !== null ? ` · ${show(system, 'tempC', a.tempC)}` : ''}${a.volumeL !== null ? ` · ${show(system, 'volumeL', a.volumeL)}` : ''}${a.detail ? ` · ${a.detail}` : ''}${a.co2Volumes !== null ? ` · ${a.co2Volumes} vol` : ''}${a.note ? ` · “${a.note}”` : ''}`,
+              text: `${CELLAR_ACTION_LABELS[a.action]}${a.tempC !== null ? ` · ${show(system, 'temperature', a.tempC)}` : ''}${a.volumeL !== null ? ` · ${show(system, 'volume', a.volumeL)}` : ''}${a.detail ? ` · ${a.detail}` : ''}${a.co2Volumes !== null ? ` · ${a.co2Volumes} vol` : ''}${a.note ? ` · “${a.note}”` : ''}`,
               who: a.authorName,
             })),
           ]
@@ -174,7 +175,7 @@ export function BatchCellarPage() {
         )}
       </Section>
       <Section title="Cellar plan">
-        <PlanForm batchId={batchId} plan={data.plan} unitSystem={system} canEdit={me.role === 'head_brewer'} />
+        <PlanForm batchId={batchId} plan={data.plan} unitSystem={system} canEdit={mayPlan} />
       </Section>
     </div>
   );

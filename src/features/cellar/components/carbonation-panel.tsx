@@ -3,7 +3,7 @@ import { Button, Caution, SuggestionChip, TextField } from '../../../components/
 import { formatGaugePressure } from '../../../../shared/brewing';
 import type { CellarPlanView, VesselView } from '../../../../shared/schemas/cellar';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
-import { UNITS } from '../../../lib/units';
+import { displayUnit } from '../../../lib/units';
 import { useCarbonation } from '../api/carbonation';
 import { useLogCellarEntry } from '../api/log-cellar-entry';
 import { useSubmitOnce } from '../../../lib/use-submit-once';
@@ -23,11 +23,11 @@ export function CarbonationPanel({
   plan: CellarPlanView;
   unitSystem: UnitSystem;
 }) {
-  const temp = UNITS[unitSystem].tempC;
+  const temp = displayUnit('temperature', unitSystem);
   // Empty until the person types or taps the plan's figure: a logged pressure is for the beer they measured.
   const [volumes, setVolumes] = useState('');
   const [beerTemp, setBeerTemp] = useState('');
-  const planTemp = temp.toDisplay(plan.crashTempC).toFixed(1);
+  const planTemp = temp.fromSi(plan.crashTempC).toFixed(1);
   const [saved, setSaved] = useState<string>();
   const log = useLogCellarEntry(batchId);
   const [co2Volumes, tempValue] = [optionalNumber(volumes.trim()), optionalNumber(beerTemp.trim())];

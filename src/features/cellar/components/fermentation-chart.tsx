@@ -16,7 +16,7 @@ import {
   type ReadingView,
 } from '../../../../shared/schemas/cellar';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
-import { UNITS } from '../../../lib/units';
+import { displayUnit } from '../../../lib/units';
 import { niceAxis } from '../../../lib/chart-ticks';
 
 interface Props {
@@ -34,12 +34,12 @@ const PREDICTION = '#b8860f';
 
 /** Gravity and temperature against time, with the planned FG, the D-rest trigger and logged actions marked. */
 export function FermentationChart({ readings, actions, plan, prediction, unitSystem, timeZone }: Props) {
-  const temp = UNITS[unitSystem].tempC;
+  const temp = displayUnit('temperature', unitSystem);
   const trigger = dRestTriggerSg(plan.plannedFg, plan.dRestPoints);
   const points = readings.map((r) => ({
     t: Date.parse(r.takenAt),
     sg: r.sg,
-    temp: r.tempC === null ? null : Number(temp.toDisplay(r.tempC).toFixed(1)),
+    temp: r.tempC === null ? null : Number(temp.fromSi(r.tempC).toFixed(1)),
   }));
   const first = points[0]?.t ?? Date.now();
   const last = points[points.length - 1]?.t ?? first;

@@ -5,7 +5,7 @@ import { Button, TextField, useToast } from '../../../components/ui';
 import { dRestTriggerSg } from '../../../../shared/brewing';
 import { cellarPlanSchema, type CellarPlanInput, type CellarPlanView } from '../../../../shared/schemas/cellar';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
-import { UNITS } from '../../../lib/units';
+import { displayUnit } from '../../../lib/units';
 import { applyServerErrors } from '../../../lib/forms';
 import { useSavePlan } from '../api/plan';
 import { FormBanner } from '../../../components/ui/form-banner';
@@ -22,8 +22,8 @@ export function PlanForm({ canEdit, ...props }: PlanProps & { canEdit: boolean }
 }
 
 function PlanText({ plan, unitSystem }: PlanProps) {
-  const temp = UNITS[unitSystem].tempC;
-  const t = (c: number) => `${temp.toDisplay(c).toFixed(1)} ${temp.unit}`;
+  const temp = displayUnit('temperature', unitSystem);
+  const t = (c: number) => `${temp.fromSi(c).toFixed(1)} ${temp.unit}`;
   const items: [string, string][] = [
     ['Planned FG', plan.plannedFg.toFixed(3)],
     [
@@ -56,8 +56,8 @@ function PlanText({ plan, unitSystem }: PlanProps) {
 }
 
 function PlanEditor({ batchId, plan, unitSystem }: PlanProps) {
-  const temp = UNITS[unitSystem].tempC;
-  const d = (c: number) => Number(temp.toDisplay(c).toFixed(1));
+  const temp = displayUnit('temperature', unitSystem);
+  const d = (c: number) => Number(temp.fromSi(c).toFixed(1));
   const save = useSavePlan(batchId);
   const toast = useToast();
   const [banner, setBanner] = useState<string>();

@@ -13,7 +13,7 @@ import {
   type TempUnit,
 } from '../../../../shared/schemas/cellar';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
-import { UNITS } from '../../../lib/units';
+import { displayUnit } from '../../../lib/units';
 import { useLogCellarEntry } from '../api/log-cellar-entry';
 import { useSubmitOnce } from '../../../lib/use-submit-once';
 import { optionalNumber } from './form-values';
@@ -58,9 +58,9 @@ export function ReadingForm({
   const last = readings[readings.length - 1];
   const usual = usualMethod(readings);
   const knockoutBrix = readings.find((r) => r.enteredUnit === 'brix')?.enteredValue;
-  const temp = UNITS[unitSystem].tempC;
+  const temp = displayUnit('temperature', unitSystem);
   const lastTemp =
-    last?.tempC === null || last?.tempC === undefined ? undefined : temp.toDisplay(last.tempC).toFixed(1);
+    last?.tempC === null || last?.tempC === undefined ? undefined : temp.fromSi(last.tempC).toFixed(1);
   const { register, handleSubmit, watch, setValue, reset, formState } = useForm<
     ReadingDraft,
     unknown,

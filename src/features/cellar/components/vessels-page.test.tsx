@@ -21,9 +21,13 @@ vi.mock('../api/vessel-state', () => ({
   useMarkClean: () => ({ mutateAsync: markClean }),
   useDeleteVessel: () => ({}),
 }));
-vi.mock('../../../app/current-user', () => ({
-  useCurrentUser: () => ({ role: 'assistant_brewer', brewery: { unitSystem: 'us', timeZone: 'America/Chicago' } }),
-}));
+vi.mock('../../../lib/current-user', async () => {
+  const { can } = await import('../../../../shared/policy');
+  return {
+    useCurrentUser: () => ({ role: 'assistant_brewer', brewery: { unitSystem: 'us', timeZone: 'America/Chicago' } }),
+    useCan: (action: Parameters<typeof can>[1]) => can('assistant_brewer', action),
+  };
+});
 vi.mock('react-router-dom', () => ({ Link: (p: { children: unknown }) => p.children }));
 
 const { VesselsPage } = await import('./vessels-page');

@@ -20,7 +20,7 @@ import {
 import { kpaToPsi, lToUsBbl } from '../../../../shared/brewing';
 import { vesselInputSchema, type VesselInput, type VesselView } from '../../../../shared/schemas/cellar';
 import { VESSEL_STATUS_LABELS, VESSEL_TYPE_LABELS } from '../labels';
-import { useCurrentUser } from '../../../app/current-user';
+import { useCurrentUser, useCan } from '../../../lib/current-user';
 import { applyServerErrors } from '../../../lib/forms';
 import { showVolume } from '../../../lib/units';
 import { useSaveVessel, useVessels } from '../api/vessels';
@@ -157,12 +157,12 @@ function CleanVessel({ vessel, onDone }: { vessel: VesselView; onDone: () => voi
 /** Fermenters and bright tanks: add, edit, mark clean, remove. */
 export function VesselsPage() {
   const me = useCurrentUser();
+  const mayEdit = useCan('vessel.edit');
   const { data, error, isPending, refetch } = useVessels();
   const [cleaning, setCleaning] = useState<VesselView | null>(null);
   const remove = useDeleteVessel();
   const toast = useToast();
   const [editing, setEditing] = useState<VesselView | 'new' | null>(null);
-  const isHead = me.role === 'head_brewer';
   const us = me.brewery.unitSystem === 'us';
   if (isPending) return <Loading label="Loading vessels" />;
   if (error) return <ErrorState error={error} onRetry={() => void refetch()} />;
@@ -179,7 +179,7 @@ export function VesselsPage() {
         actions={
           <div className="flex gap-2">
             <LinkButton to="/cellar/vessels/labels">Print labels</LinkButton>
-            {isHead && <Button onClick={() => setEditing('new')}>Add a vessel</Button>}
+            {mayEdit && <Button onClick={() => setEditing('new')}>Add a vessel</Button>}
           </div>
         }
       />
@@ -215,12 +215,12 @@ export function VesselsPage() {
                       Mark clean
                     </Button>
                   )}
-                  {isHead && (
+                  {mayEdit && (
                     <Button variant="quiet" onClick={() => setEditing(v)}>
                       Edit
                     </Button>
                   )}
-                  {isHead && v.currentBatchId === null && (
+                  {mayEdit && v.currentBatchId === null && (
                     <Button
                       variant="quiet"
                       onClick={() =>

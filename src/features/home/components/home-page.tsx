@@ -1,8 +1,8 @@
 import { lazy, Suspense } from 'react';
 import { Link } from 'react-router-dom';
 import { Card, Loading, PageHeader } from '../../../components/ui';
-import { useCurrentUser } from '../../../app/current-user';
-import { navFor } from '../../../app/navigation';
+import { useCurrentUser, usePermissions } from '../../../lib/current-user';
+import { BREWING_HOME, navFor } from '../../../app/navigation';
 
 function greeting(hour: number): string {
   if (hour < 12) return 'Good morning';
@@ -17,7 +17,8 @@ const TaproomHome = lazy(() =>
 
 export function HomePage() {
   const me = useCurrentUser();
-  if (me.role === 'taproom_manager') {
+  const may = usePermissions();
+  if (!may(BREWING_HOME)) {
     return (
       <Suspense fallback={<Loading label="Opening the taproom" />}>
         <TaproomHome />
@@ -29,7 +30,7 @@ export function HomePage() {
       new Date(),
     ),
   );
-  const places = navFor(me.role).filter((item) => item.to !== '/');
+  const places = navFor(may).filter((item) => item.to !== '/');
   return (
     <>
       <PageHeader title={`${greeting(hour)}, ${me.displayName.split(' ')[0]}`} subtitle={me.brewery.name} />

@@ -1,6 +1,5 @@
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
-import { zodResolver } from '@hookform/resolvers/zod';
 import {
   equipmentSchema,
   ingredientSchema,
@@ -23,10 +22,11 @@ import {
   TextAreaField,
   useToast,
 } from '../../../components/ui';
-import { useCurrentUser } from '../../../app/current-user';
+import { useCurrentUser, useCan } from '../../../lib/current-user';
 import { applyServerErrors } from '../../../lib/forms';
 import { show, showVolume } from '../../../lib/units';
-import { UnitField, asNumber } from '../../../components/ui/unit-field';
+import { quantityResolver } from '../../../lib/quantity-resolver';
+import { QuantityField, asNumber } from '../../../components/ui/quantity-field';
 import { useEquipment, useRemoveEquipment, useSaveEquipment } from '../api/equipment';
 import { useIngredients, useRemoveIngredient, useSaveIngredient } from '../api/ingredients';
 import type { EquipmentRow, IngredientRow } from '../../../../shared/contract/recipes';
@@ -57,12 +57,12 @@ function EquipmentForm({ row, onDone }: { row?: EquipmentRow; onDone: () => void
     mashThicknessLPerKg: 3,
   };
   const { control, register, handleSubmit, setError, formState } = useForm<EquipmentInput>({
-    resolver: zodResolver(equipmentSchema),
+    resolver: quantityResolver(equipmentSchema, system),
     defaultValues: initial,
   });
   const err = (k: keyof EquipmentInput) => formState.errors[k]?.message;
   const volume = (name: keyof EquipmentInput, label: string) => (
-    <UnitField control={control} name={name} label={label} quantity="volumeL" system={system} />
+    <QuantityField control={control} name={name} label={label} quantity="volume" system={system} />
   );
   return (
     <form
@@ -82,14 +82,20 @@ function EquipmentForm({ row, onDone }: { row?: EquipmentRow; onDone: () => void
       <TextField label="Name" {...register('name')} error={err('name')} />
       <div className="grid grid-cols-2 gap-3">
         {volume('batchVolumeL', 'Batch into fermenter')}
-        <TextField
-          label="Brewhouse efficiency (0–1)"
-          type="number"
-          step="0.01"
-          {...register('brewhouseEfficiency', asNumber())}
-          error={err('brewhouseEfficiency')}
+        <QuantityField
+          control={control}
+          name="brewhouseEfficiency"
+          label="Brewhouse efficiency"
+          quantity="fraction"
+          system={system}
         />
-        {volume('boilOffLPerHour', 'Boil-off per hour')}
+        <QuantityField
+          control={control}
+          name="boilOffLPerHour"
+          label="Boil-off"
+          quantity="volumePerHour"
+          system={system}
+        />
         <TextField
           label="Boil time (min)"
           type="number"
@@ -100,18 +106,18 @@ function EquipmentForm({ row, onDone }: { row?: EquipmentRow; onDone: () => void
         {volume('kettleDeadSpaceL', 'Kettle dead space')}
         {volume('trubChillerLossL', 'Trub and chiller loss')}
         {volume('fermenterLossL', 'Fermenter loss')}
-        <UnitField
+        <QuantityField
           control={control}
           name="grainAbsorptionLPerKg"
           label="Grain absorption"
-          quantity="lPerKg"
+          quantity="waterToGrain"
           system={system}
         />
-        <UnitField
+        <QuantityField
           control={control}
           name="mashThicknessLPerKg"
           label="Mash thickness"
-          quantity="lPerKg"
+          quantity="waterToGrain"
           system={system}
         />
         {volume('maxMashTunVolumeL', 'Mash tun capacity')}
@@ -141,6 +147,7 @@ function EquipmentForm({ row, onDone }: { row?: EquipmentRow; onDone: () => void
 const blankIngredient: IngredientInput = { kind: 'fermentable', name: '', notes: '' };
 
 function IngredientForm({ row, onDone }: { row?: IngredientRow; onDone: () => void }) {
+  const system = useCurrentUser().brewery.unitSystem;
   const save = useSaveIngredient();
   const remove = useRemoveIngredient();
   const [banner, setBanner] = useState<string>();
@@ -156,7 +163,7 @@ function IngredientForm({ row, onDone }: { row?: IngredientRow; onDone: () => vo
       }
     : blankIngredient;
   const { register, handleSubmit, setError, formState, watch } = useForm<IngredientInput>({
-    resolver: zodResolver(ingredientSchema),
+    resolver: quantityResolver(ingredientSchema, system),
     defaultValues: initial,
   });
   const kind = watch('kind');
@@ -245,10 +252,11 @@ function IngredientForm({ row, onDone }: { row?: IngredientRow; onDone: () => vo
 /** Equipment profiles and the ingredient library: read by the brewing team, edited by the head brewer. */
 export function LibraryPage() {
   const me = useCurrentUser();
+  const canEditEquipment = useCan('equipment.edit');
+  const canEditIngredients = useCan('ingredient.edit');
   const system = me.brewery.unitSystem;
   const equipment = useEquipment();
   const ingredients = useIngredients();
-  const canEdit = me.role === 'head_brewer';
   const [editingEquipment, setEditingEquipment] = useState<EquipmentRow | 'new' | null>(null);
   const [editingIngredient, setEditingIngredient] = useState<IngredientRow | 'new' | null>(null);
   return (
@@ -260,7 +268,7 @@ export function LibraryPage() {
       <Card className="mb-6 space-y-3">
         <div className="flex items-center justify-between">
           <h2 className="text-xl font-bold">Equipment profiles</h2>
-          {canEdit && (
+          {canEditEquipment && (
             <Button variant="secondary" onClick={() => setEditingEquipment('new')}>
               Add equipment
             </Button>
@@ -280,7 +288,7 @@ export function LibraryPage() {
                 <Th>Boil-off</Th>
                 <Th>Losses (tun / kettle / trub)</Th>
                 <Th>Mash tun / kettle</Th>
-                {canEdit && (
+                {canEditEquipment && (
                   <Th>
                     <span className="sr-only">Edit</span>
                   </Th>
@@ -293,18 +301,18 @@ export function LibraryPage() {
                   <Td className="font-semibold">{e.name}</Td>
                   <Td className="whitespace-nowrap">{showVolume(system, e.batchVolumeL)}</Td>
                   <Td className="whitespace-nowrap">{(e.brewhouseEfficiency * 100).toFixed(0)} %</Td>
-                  <Td className="whitespace-nowrap">{show(system, 'volumeL', e.boilOffLPerHour)}/h</Td>
+                  <Td className="whitespace-nowrap">{show(system, 'volumePerHour', e.boilOffLPerHour)}</Td>
                   <Td>
                     {[e.mashTunDeadSpaceL, e.kettleDeadSpaceL, e.trubChillerLossL].map((l, i) => (
                       <span key={i} className="mr-2 inline-block whitespace-nowrap">
-                        {show(system, 'volumeL', l)}
+                        {show(system, 'volume', l)}
                       </span>
                     ))}
                   </Td>
                   <Td className="whitespace-nowrap">
                     {showVolume(system, e.maxMashTunVolumeL)} / {showVolume(system, e.maxKettleVolumeL)}
                   </Td>
-                  {canEdit && (
+                  {canEditEquipment && (
                     <Td>
                       <Button variant="quiet" onClick={() => setEditingEquipment(e)}>
                         Edit
@@ -320,7 +328,7 @@ export function LibraryPage() {
       <Card className="space-y-3">
         <div className="flex items-center justify-between">
           <h2 className="text-xl font-bold">Ingredient library</h2>
-          {canEdit && (
+          {canEditIngredients && (
             <Button variant="secondary" onClick={() => setEditingIngredient('new')}>
               Add ingredient
             </Button>
@@ -342,7 +350,7 @@ export function LibraryPage() {
                 <Th>Name</Th>
                 <Th>Values</Th>
                 <Th>Notes</Th>
-                {canEdit && (
+                {canEditIngredients && (
                   <Th>
                     <span className="sr-only">Edit</span>
                   </Th>
@@ -372,7 +380,7 @@ export function LibraryPage() {
                       .join(', ')}
                   </Td>
                   <Td>{i.notes}</Td>
-                  {canEdit && (
+                  {canEditIngredients && (
                     <Td>
                       <Button variant="quiet" onClick={() => setEditingIngredient(i)}>
                         Edit

@@ -12,7 +12,7 @@ import {
 import { SALT_LABELS } from '../../../../shared/schemas/recipes';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
 import { Button, Caution, ErrorState, LinkButton, Loading } from '../../../components/ui';
-import { useCurrentUser } from '../../../app/current-user';
+import { useCurrentUser } from '../../../lib/current-user';
 import { show, showGrain, showMeasured, showSmallWeight, showVolume } from '../../../lib/units';
 import { useScale } from '../api/scale-version';
 import type { ScaleResult } from '../../../../shared/contract/recipes';
@@ -84,8 +84,8 @@ function Sheet({ data, system }: { data: ScaleResult; system: UnitSystem }) {
   const recipe = data.scaled.recipe;
   const content = data.version.content;
   const eq = data.target.equipment;
-  const t = (celsius: number) => show(system, 'tempC', celsius, 0);
-  const v = (litres: number) => show(system, 'volumeL', litres);
+  const t = (celsius: number) => show(system, 'temperature', celsius, 0);
+  const v = (litres: number) => show(system, 'volume', litres);
   const rules = [...content.adjuncts, ...content.spices];
   const boilAdds = [
     ...c.hops.map((h, i) => ({
@@ -218,7 +218,7 @@ function Sheet({ data, system }: { data: ScaleResult; system: UnitSystem }) {
       <Part n={3} title="Mash">
         <p className="mb-1">
           Grain at {t(content.mash.grainTempC)}. Strike with <strong>{v(c.volumes.strikeL)}</strong> at{' '}
-          <strong>{t(c.strikeTempC)}</strong> ({show(system, 'lPerKg', c.thicknessLPerKg)}). Mash volume about{' '}
+          <strong>{t(c.strikeTempC)}</strong> ({show(system, 'waterToGrain', c.thicknessLPerKg)}). Mash volume about{' '}
           {v(c.volumes.mashVolumeL)}.
         </p>
         <Grid

@@ -1,7 +1,7 @@
 import { useParams, useSearchParams } from 'react-router-dom';
 import { Card, ErrorState, LinkButton, Loading, PageHeader, Table, Td, Th, cx } from '../../../components/ui';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
-import { useCurrentUser } from '../../../app/current-user';
+import { useCurrentUser } from '../../../lib/current-user';
 import { show, showGrain, showSmallWeight, showVolume } from '../../../lib/units';
 import { useComparison } from '../api/compare-versions';
 import type { Difference } from '../../../../shared/schemas/recipes';
@@ -51,7 +51,7 @@ function label(path: string, side: VersionDetail): string {
 function fmt(path: string, v: Difference['a'], system: UnitSystem): string {
   if (v === null) return '—';
   if (typeof v !== 'number') return String(v);
-  if (path.endsWith('TempC')) return show(system, 'tempC', v);
+  if (path.endsWith('TempC')) return show(system, 'temperature', v);
   if (path.startsWith('computed.')) return String(v);
   if (path.endsWith('weightKg')) return showGrain(system, v);
   if (path.endsWith('weightG')) return showSmallWeight(system, v);

@@ -1,7 +1,7 @@
 import { useNavigate, useParams } from 'react-router-dom';
 import type { CreateRecipeInput } from '../../../../shared/schemas/recipes';
 import { Caution, EmptyState, ErrorState, LinkButton, Loading, PageHeader } from '../../../components/ui';
-import { useCurrentUser } from '../../../app/current-user';
+import { useCurrentUser, useCan } from '../../../lib/current-user';
 import { ApiError } from '../../../lib/api-client';
 import { useToast } from '../../../components/ui';
 import { useEquipment } from '../../library/api/equipment';
@@ -22,6 +22,7 @@ export function EditorPage() {
   const recipeId = Number(useParams().recipeId);
   const versionId = Number(useParams().versionId);
   const me = useCurrentUser();
+  const canEdit = useCan('recipe.edit');
   const navigate = useNavigate();
   const toast = useToast();
   const version = useVersion(recipeId, versionId);
@@ -38,7 +39,6 @@ export function EditorPage() {
   const { recipe: r, version: v } = version.data;
   const next = recipe.data.versions[0]!.number + 1;
   const frozen = Boolean(v.frozenAt);
-  const canEdit = me.role === 'head_brewer';
 
   const onSave = async (values: CreateRecipeInput, asNew: boolean) => {
     const { name, style, description, status, changeNote, equipmentProfileId, content } = values;
@@ -114,6 +114,7 @@ export function EditorPage() {
 
 export function NewRecipePage() {
   const me = useCurrentUser();
+  const canEdit = useCan('recipe.edit');
   const navigate = useNavigate();
   const equipment = useEquipment();
   const library = useIngredients();
@@ -150,7 +151,7 @@ export function NewRecipePage() {
         equipment={equipment.data}
         library={library.data ?? []}
         system={me.brewery.unitSystem}
-        canEdit={me.role === 'head_brewer'}
+        canEdit={canEdit}
         saveLabel="Create recipe"
         onSave={async (values) => {
           try {

@@ -143,16 +143,16 @@ export function LiveNumbersPanel({ live, system }: { live: LiveNumbers; system: 
         <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-1 rounded-lg border border-mist-200 bg-white p-3 text-sm">
           <dt className="text-ink-500">Strike water</dt>
           <dd className="text-right font-semibold tabular-nums">
-            {show(system, 'volumeL', c.volumes.strikeL)} at {show(system, 'tempC', c.strikeTempC)}
+            {show(system, 'volume', c.volumes.strikeL)} at {show(system, 'temperature', c.strikeTempC)}
           </dd>
           <dt className="text-ink-500">Sparge water</dt>
-          <dd className="text-right tabular-nums">{show(system, 'volumeL', c.volumes.spargeL)}</dd>
+          <dd className="text-right tabular-nums">{show(system, 'volume', c.volumes.spargeL)}</dd>
           <dt className="text-ink-500">Pre-boil</dt>
           <dd className="text-right tabular-nums">
-            {show(system, 'volumeL', c.volumes.preBoilL)} at {c.preBoilGravity.toFixed(3)}
+            {show(system, 'volume', c.volumes.preBoilL)} at {c.preBoilGravity.toFixed(3)}
           </dd>
           <dt className="text-ink-500">Mash volume</dt>
-          <dd className="text-right tabular-nums">{show(system, 'volumeL', c.volumes.mashVolumeL)}</dd>
+          <dd className="text-right tabular-nums">{show(system, 'volume', c.volumes.mashVolumeL)}</dd>
           <dt className="text-ink-500">Into fermenter</dt>
           <dd className="text-right tabular-nums">{showVolume(system, c.volumes.intoFermenterL)}</dd>
           {c.water && (

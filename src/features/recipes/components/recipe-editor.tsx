@@ -1,4 +1,4 @@
-import { useRef, useState, type ChangeEvent, type ReactNode } from 'react';
+import { useRef, useState, type ReactNode } from 'react';
 import {
   useController,
   useFieldArray,
@@ -9,7 +9,6 @@ import {
   type UseFormSetValue,
   type FieldErrors,
 } from 'react-hook-form';
-import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
 import {
   TYPICAL_SUGAR_PCT,
@@ -17,6 +16,7 @@ import {
   doseBasisLabel,
   doseUnitLabel,
   percentagesFromWeights,
+  type DoseRule,
 } from '../../../../shared/brewing';
 import {
   ADJUNCT_CATEGORIES,
@@ -39,8 +39,9 @@ import { Button, Card, SelectField, TextAreaField, TextField, cx } from '../../.
 import type { EquipmentRow, IngredientRow } from '../../../../shared/contract/recipes';
 import { LiveNumbersPanel, NumbersBar, useLiveNumbers } from './live-numbers';
 import { showAdjunct } from './scale-view';
-import { UnitField, asNumber } from '../../../components/ui/unit-field';
-import { UNITS, show, showVolume } from '../../../lib/units';
+import { quantityResolver } from '../../../lib/quantity-resolver';
+import { QuantityField, asNumber } from '../../../components/ui/quantity-field';
+import { displayUnit, show, showVolume } from '../../../lib/units';
 import { FormBanner } from '../../../components/ui/form-banner';
 
 type FormIn = z.input<typeof createRecipeSchema>;
@@ -208,7 +209,7 @@ function GrainBill({
                 label="Name"
                 list="kw-library-fermentable"
                 {...register(`${p}.name`, {
-                  onChange: (e: ChangeEvent<HTMLInputElement | HTMLSelectElement>) => {
+                  onChange: (e) => {
                     const hit = fromLibrary('fermentable', e.target.value);
                     if (hit?.ppg != null) setValue(`${p}.potential`, { ppg: hit.ppg }, { shouldValidate: true });
                     if (hit?.colourLovibond != null)
@@ -265,11 +266,11 @@ function GrainBill({
             {mode === 'weight'
               ? w(
                   'w-32',
-                  <UnitField
+                  <QuantityField
                     control={control}
                     name={`${p}.weightKg` as never}
                     label="Weight"
-                    quantity="weightKg"
+                    quantity="grainWeight"
                     system={system}
                     disabled={disabled}
                   />,
@@ -333,7 +334,7 @@ function Hops({
                 label="Variety"
                 list="kw-library-hop"
                 {...register(`${p}.name`, {
-                  onChange: (e: ChangeEvent<HTMLInputElement | HTMLSelectElement>) => {
+                  onChange: (e) => {
                     const hit = fromLibrary('hop', e.target.value);
                     if (hit?.alphaAcidPct != null)
                       setValue(`${p}.alphaAcidPct`, hit.alphaAcidPct, { shouldValidate: true });
@@ -389,11 +390,11 @@ function Hops({
             {use === 'whirlpool' &&
               w(
                 'w-32',
-                <UnitField
+                <QuantityField
                   control={control}
                   name={`${p}.whirlpoolTempC`}
                   label="Stand temp"
-                  quantity="tempC"
+                  quantity="temperature"
                   system={system}
                   optional
                   disabled={disabled}
@@ -408,7 +409,7 @@ function Hops({
                 onChange={(e) => {
                   const share =
                     e.target.value === 'share' && targetIbu && ibus?.[i] !== undefined
-                      ? Number(((ibus[i] / targetIbu) * 100).toFixed(1))
+                      ? Number(((ibus[i]! / targetIbu) * 100).toFixed(1))
                       : undefined;
                   setValue(`${p}.ibuSharePct`, e.target.value === 'share' ? share || 10 : undefined, {
                     shouldValidate: true,
@@ -422,11 +423,11 @@ function Hops({
             {values[i]?.ibuSharePct === undefined
               ? w(
                   'w-32',
-                  <UnitField
+                  <QuantityField
                     control={control}
                     name={`${p}.weightG`}
                     label="Weight"
-                    quantity="weightG"
+                    quantity="hopWeight"
                     system={system}
                     disabled={disabled}
                   />,
@@ -444,11 +445,11 @@ function Hops({
                 )}
             {values[i]?.ibuSharePct !== undefined && solvedWeights?.[i] !== undefined && (
               <p className="min-h-touch pb-2 font-semibold tabular-nums" aria-label={`Hop ${i + 1} solved weight`}>
-                = {show(system, 'weightG', solvedWeights[i])}
+                = {show(system, 'hopWeight', solvedWeights[i]!)}
               </p>
             )}
             <div className="min-h-touch pb-2 text-sm text-ink-500" aria-label={`Hop ${i + 1} IBU`}>
-              {ibus?.[i] !== undefined ? `${ibus[i].toFixed(1)} IBU` : ''}
+              {ibus?.[i] !== undefined ? `${ibus[i]!.toFixed(1)} IBU` : ''}
             </div>
           </Row>
         );
@@ -475,22 +476,22 @@ function Mash({ control, register, errors, system, disabled }: Shared) {
       <div className="flex flex-wrap gap-3">
         {w(
           'w-40',
-          <UnitField
+          <QuantityField
             control={control}
             name="content.mash.grainTempC"
             label="Grain temp"
-            quantity="tempC"
+            quantity="temperature"
             system={system}
             disabled={disabled}
           />,
         )}
         {w(
           'w-56',
-          <UnitField
+          <QuantityField
             control={control}
             name="content.mash.thicknessLPerKg"
             label="Mash thickness"
-            quantity="lPerKg"
+            quantity="waterToGrain"
             system={system}
             optional
             disabled={disabled}
@@ -518,11 +519,11 @@ function Mash({ control, register, errors, system, disabled }: Shared) {
             )}
             {w(
               'w-32',
-              <UnitField
+              <QuantityField
                 control={control}
                 name={`${p}.tempC`}
                 label="Rest"
-                quantity="tempC"
+                quantity="temperature"
                 system={system}
                 disabled={disabled}
               />,
@@ -553,11 +554,11 @@ function Mash({ control, register, errors, system, disabled }: Shared) {
               values[i]?.method === 'infusion' &&
               w(
                 'w-40',
-                <UnitField
+                <QuantityField
                   control={control}
                   name={`${p}.infusionWaterTempC`}
                   label="Water"
-                  quantity="tempC"
+                  quantity="temperature"
                   system={system}
                   optional
                   disabled={disabled}
@@ -742,7 +743,7 @@ function PreparationSteps({ control, index, disabled }: { control: Ctl; index: n
 function batchVolumeHint(system: UnitSystem, litres: number | undefined): string | undefined {
   if (typeof litres !== 'number' || !Number.isFinite(litres) || litres <= 0) return undefined;
   const shown = showVolume(system, litres);
-  return shown.endsWith(` ${UNITS[system].volumeL.unit}`) ? undefined : `= ${shown}`;
+  return shown.endsWith(` ${displayUnit('volume', system).unit}`) ? undefined : `= ${shown}`;
 }
 
 /** Four significant figures: enough for a dose restated in another unit, short enough to read. */
@@ -767,7 +768,7 @@ function Additions({
       {list.fields.map((f, i) => {
         const p = `content.${kind}.${i}` as 'content.spices.0';
         const v = values[i];
-        const unit = v?.rule ? doseUnitLabel(v.rule) : '';
+        const unit = v?.rule ? doseUnitLabel(v.rule as DoseRule) : '';
         return (
           <Row
             key={f.id}
@@ -801,7 +802,7 @@ function Additions({
                 label="Goes in"
                 {...register(`${p}.stage`, {
                   // Only the boil counts minutes left: a minute kept from the boil would put fruit in the fermenter "at 15 min left".
-                  onChange: (e: ChangeEvent<HTMLInputElement | HTMLSelectElement>) =>
+                  onChange: (e) =>
                     e.target.value !== 'boil' && setValue(`${p}.boilMinutes`, undefined, { shouldValidate: true }),
                 })}
                 disabled={disabled}
@@ -839,13 +840,11 @@ function Additions({
                   label="Dosed"
                   {...register(`${p}.rule.basis`, {
                     // Restate low, high and dose in the new unit so the same amount goes in; a weight cannot become a volume, so those stay as typed.
-                    onChange: (e: ChangeEvent<HTMLInputElement | HTMLSelectElement>) => {
+                    onChange: (e) => {
                       const before = v?.rule;
                       if (!before || v.level === undefined || !volumeL) return;
                       try {
-                        const basis = DOSE_BASES.find((b) => b === e.target.value);
-                        if (!basis) return;
-                        const next = convertDoseRule(before, v.level, basis, volumeL);
+                        const next = convertDoseRule(before as DoseRule, v.level as number, e.target.value, volumeL);
                         if (!next) return;
                         setValue(
                           `${p}.rule`,
@@ -987,7 +986,7 @@ export function RecipeEditor({
   onSave,
 }: RecipeEditorProps) {
   const form = useForm<FormIn, unknown, CreateRecipeInput>({
-    resolver: zodResolver(createRecipeSchema),
+    resolver: quantityResolver(createRecipeSchema, system),
     defaultValues: initial,
     mode: 'onChange',
   });
@@ -1003,7 +1002,7 @@ export function RecipeEditor({
   const shared: Shared = { control, register, errors: formState.errors, system, disabled, fromLibrary, setValue };
   const c = live.computed;
   const adjunctCount = values.content?.adjuncts?.length ?? 0;
-  const batchVolumeL = values.content?.targets?.batchVolumeL;
+  const batchVolumeL = values.content?.targets?.batchVolumeL as number | undefined;
   const spiceCount = values.content?.spices?.length ?? 0;
   // What each addition's sugar does to the OG, or why it is not counted; blank when it has none.
   const sugarNote = (i: number) => {
@@ -1069,7 +1068,7 @@ export function RecipeEditor({
               label="Written for"
               {...register('equipmentProfileId', {
                 setValueAs: Number,
-                onChange: (e: ChangeEvent<HTMLInputElement | HTMLSelectElement>) => {
+                onChange: (e) => {
                   const chosen = equipment.find((x) => x.id === Number(e.target.value));
                   if (chosen) setValue('content.targets.batchVolumeL', chosen.batchVolumeL, { shouldValidate: true });
                 },
@@ -1083,11 +1082,11 @@ export function RecipeEditor({
                 </option>
               ))}
             </SelectField>
-            <UnitField
+            <QuantityField
               control={control}
               name="content.targets.batchVolumeL"
               label="Batch into fermenter"
-              quantity="volumeL"
+              quantity="volume"
               system={system}
               disabled={disabled}
               hint={batchVolumeHint(system, batchVolumeL)}
@@ -1147,7 +1146,7 @@ export function RecipeEditor({
           {...shared}
           ibus={c?.hops.map((h) => h.ibu)}
           solvedWeights={c?.hops.map((h) => h.weightG)}
-          targetIbu={values.content?.targets?.ibu}
+          targetIbu={values.content?.targets?.ibu as number | undefined}
         />
         <Mash {...shared} />
         <Water {...shared} setWater={(water) => setValue('content.water', water, { shouldValidate: true })} />
@@ -1172,7 +1171,7 @@ export function RecipeEditor({
                 label="Yeast"
                 list="kw-library-yeast"
                 {...register('content.yeast.name', {
-                  onChange: (e: ChangeEvent<HTMLInputElement | HTMLSelectElement>) => {
+                  onChange: (e) => {
                     const hit = fromLibrary('yeast', e.target.value);
                     if (hit?.attenuationPct != null)
                       setValue('content.yeast.attenuationPct', hit.attenuationPct, { shouldValidate: true });
@@ -1189,11 +1188,11 @@ export function RecipeEditor({
                 </option>
               ))}
             </SelectField>
-            <UnitField
+            <QuantityField
               control={control}
               name="content.yeast.pitchTempC"
               label="Pitch at"
-              quantity="tempC"
+              quantity="temperature"
               system={system}
               disabled={disabled}
             />
@@ -1233,11 +1232,11 @@ export function RecipeEditor({
         </Section>
         <Section title="Fermentation">
           <div className="grid grid-cols-2 gap-3 sm:grid-cols-3">
-            <UnitField
+            <QuantityField
               control={control}
               name="content.fermentation.primaryTempC"
               label="Primary"
-              quantity="tempC"
+              quantity="temperature"
               system={system}
               disabled={disabled}
             />
@@ -1249,20 +1248,20 @@ export function RecipeEditor({
               error={errorAt(formState.errors, 'content.fermentation.dRestPointsAboveFg')}
               disabled={disabled}
             />
-            <UnitField
+            <QuantityField
               control={control}
               name="content.fermentation.dRestTempC"
               label="D-rest at"
-              quantity="tempC"
+              quantity="temperature"
               system={system}
               optional
               disabled={disabled}
             />
-            <UnitField
+            <QuantityField
               control={control}
               name="content.fermentation.crashTempC"
               label="Crash to"
-              quantity="tempC"
+              quantity="temperature"
               system={system}
               disabled={disabled}
             />

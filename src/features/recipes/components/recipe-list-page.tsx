@@ -22,7 +22,7 @@ import {
   TextField,
   Th,
 } from '../../../components/ui';
-import { useCurrentUser } from '../../../app/current-user';
+import { useCan } from '../../../lib/current-user';
 import { useRecipeList } from '../api/list-recipes';
 import type { RecipeListRow } from '../../../../shared/schemas/recipes';
 
@@ -85,7 +85,7 @@ const columns = [
 ];
 
 export function RecipeListPage() {
-  const me = useCurrentUser();
+  const canEdit = useCan('recipe.edit');
   const recipes = useRecipeList();
   const [sorting, setSorting] = useState<SortingState>([{ id: 'name', desc: false }]);
   const [search, setSearch] = useState('');
@@ -108,7 +108,7 @@ export function RecipeListPage() {
         title="Recipes"
         subtitle="Every beer, its latest version and how it was last brewed."
         actions={
-          me.role === 'head_brewer' && (
+          canEdit && (
             <LinkButton variant="primary" to="/recipes/new">
               New recipe
             </LinkButton>

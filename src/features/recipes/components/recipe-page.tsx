@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { Link, useNavigate, useParams } from 'react-router-dom';
 import { srmToHex } from '../../../../shared/brewing';
 import { Button, Card, ErrorState, LinkButton, Loading, PageHeader, Table, Td, Th } from '../../../components/ui';
-import { useCurrentUser } from '../../../app/current-user';
+import { useCurrentUser, useCan } from '../../../lib/current-user';
 import { showVolume } from '../../../lib/units';
 import { useEquipment } from '../../library/api/equipment';
 import { useRecipe } from '../api/get-recipe';
@@ -11,6 +11,7 @@ import { useRecipe } from '../api/get-recipe';
 export function RecipePage() {
   const recipeId = Number(useParams().recipeId);
   const me = useCurrentUser();
+  const canEdit = useCan('recipe.edit');
   const navigate = useNavigate();
   const recipe = useRecipe(recipeId);
   const equipment = useEquipment();
@@ -33,11 +34,8 @@ export function RecipePage() {
         subtitle={`${r.style} · ${r.status} · ${r.description}`}
         actions={
           <>
-            <LinkButton
-              variant={me.role === 'head_brewer' ? 'primary' : 'secondary'}
-              to={`/recipes/${r.id}/versions/${latest.id}`}
-            >
-              {me.role === 'head_brewer' ? `Edit version ${latest.number}` : `Open version ${latest.number}`}
+            <LinkButton variant={canEdit ? 'primary' : 'secondary'} to={`/recipes/${r.id}/versions/${latest.id}`}>
+              {canEdit ? `Edit version ${latest.number}` : `Open version ${latest.number}`}
             </LinkButton>
             <LinkButton variant="secondary" to={`/recipes/${r.id}/versions/${latest.id}/scale`}>
               Scale

@@ -12,9 +12,10 @@ import {
   TextField,
   useToast,
 } from '../../../components/ui';
-import { useCurrentUser } from '../../../app/current-user';
+import { useCurrentUser, useCan } from '../../../lib/current-user';
 import { ApiError } from '../../../lib/api-client';
-import { UNITS, showVolume } from '../../../lib/units';
+import { displayUnit, showVolume } from '../../../lib/units';
+import { batchVolumeField, issueMessage } from '../../../../shared/quantities/field';
 import { useEquipment } from '../../library/api/equipment';
 import { useSaveScaled } from '../api/save-recipe';
 import { scaleSearch, useScale, type ScaleTarget } from '../api/scale-version';
@@ -64,6 +65,8 @@ export function ScalePage() {
   const recipeId = Number(useParams().recipeId);
   const versionId = Number(useParams().versionId);
   const me = useCurrentUser();
+  const canEdit = useCan('recipe.edit');
+  const canPlan = useCan('batch.plan');
   const system = me.brewery.unitSystem;
   const navigate = useNavigate();
   const toast = useToast();
@@ -76,7 +79,7 @@ export function ScalePage() {
   const [saving, setSaving] = useState(false);
   const [note, setNote] = useState('');
   const [saveError, setSaveError] = useState<string>();
-  const vol = UNITS[system].volumeL;
+  const vol = displayUnit('volume', system);
 
   if (scale.isPending || equipment.isPending) return <Loading label="Scaling" />;
   if (scale.isError) return <ErrorState error={scale.error} onRetry={() => scale.refetch()} />;
@@ -95,8 +98,10 @@ export function ScalePage() {
   const applyVolume = () => {
     const n = Number(volumeText.replace(',', '.'));
     if (!volumeText.trim() || !Number.isFinite(n) || n <= 0) return setVolumeError('Type a batch volume, e.g. 155');
+    const checked = batchVolumeField().safeParse(vol.toSi(n));
+    if (!checked.success) return setVolumeError(issueMessage(checked.error.issues[0]!, system));
     setVolumeError(undefined);
-    setTarget({ equipmentProfileId: data.target.equipmentProfileId, batchVolumeL: vol.fromDisplay(n) });
+    setTarget({ equipmentProfileId: data.target.equipmentProfileId, batchVolumeL: checked.data });
   };
 
   const save = async () => {
@@ -132,12 +137,12 @@ export function ScalePage() {
             <LinkButton variant="secondary" to={`/recipes/${recipeId}/versions/${versionId}/brew-sheet?${search}`}>
               Brew sheet
             </LinkButton>
-            {me.role === 'head_brewer' && (
+            {canEdit && (
               <Button variant="secondary" onClick={() => setSaving(true)}>
                 Save as new version
               </Button>
             )}
-            {me.role === 'head_brewer' && (
+            {canPlan && (
               <LinkButton variant="primary" to={`/batches/new?${planSearch.toString()}`}>
                 Plan a batch
               </LinkButton>
@@ -164,7 +169,7 @@ export function ScalePage() {
             label={`Or a batch volume (${vol.unit})`}
             inputMode="decimal"
             value={volumeText}
-            placeholder={vol.toDisplay(data.target.equipment.batchVolumeL).toFixed(0)}
+            placeholder={vol.fromSi(data.target.equipment.batchVolumeL).toFixed(0)}
             onChange={(e) => setVolumeText(e.target.value)}
             onKeyDown={(e) => e.key === 'Enter' && applyVolume()}
             hint={`Now ${showVolume(system, data.target.equipment.batchVolumeL)}`}

@@ -18,9 +18,9 @@ function amount(change: ScaleChange, value: number, system: UnitSystem): string 
     case 'g':
       return showSmallWeight(system, value);
     case 'L':
-      return show(system, 'volumeL', value);
+      return show(system, 'volume', value);
     case '°C':
-      return show(system, 'tempC', value);
+      return show(system, 'temperature', value);
     default:
       return `${value.toFixed(1)} ${change.unit}`;
   }
@@ -108,8 +108,8 @@ export function ScaleTable({ data, system }: { data: ScaleResult; system: UnitSy
             {[...byPrefix('mash salt: '), ...byPrefix('sparge salt: ')].map((c, i) => {
               const v = scaled.after.volumes;
               const water = c.item.startsWith('mash')
-                ? `${show(system, 'volumeL', v.strikeL + v.infusionL)} of mash water`
-                : `${show(system, 'volumeL', v.spargeL)} of sparge water`;
+                ? `${show(system, 'volume', v.strikeL + v.infusionL)} of mash water`
+                : `${show(system, 'volume', v.spargeL)} of sparge water`;
               return row(
                 `s${i}`,
                 saltName(c.item),
@@ -151,7 +151,7 @@ export function ScaleTable({ data, system }: { data: ScaleResult; system: UnitSy
                 amount(c, c.to, system),
                 // The shared reason is in L/kg; restate the mash thickness in the brewery's units, as the editor takes it.
                 c.item === 'strike temperature'
-                  ? `mash thickness ${show(system, 'lPerKg', scaled.after.thicknessLPerKg)} (was ${show(system, 'lPerKg', scaled.before.thicknessLPerKg)})`
+                  ? `mash thickness ${show(system, 'waterToGrain', scaled.after.thicknessLPerKg)} (was ${show(system, 'waterToGrain', scaled.before.thicknessLPerKg)})`
                   : undefined,
               ),
             )}

@@ -16,7 +16,7 @@ import {
   Th,
 } from '../../../components/ui';
 import { productionCsvUrl, useProductionReport } from '../api/production';
-import { useCurrentUser } from '../../../app/current-user';
+import { useCurrentUser } from '../../../lib/current-user';
 
 const FIGURES = [
   ['brewedL', 'Brewed (knockout)'],

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import type { BrewerySettingsInput } from '../../../../shared/schemas/auth';
-import { authKeys } from '../../auth/api/me';
+import { authKeys } from '../../../lib/current-user';
 
 export function useUpdateBrewery() {
   const client = useQueryClient();

@@ -15,13 +15,13 @@ import { useChangePassword } from '../../auth/api/links';
 import { FormBanner } from '../../../components/ui/form-banner';
 import { PasswordHint } from '../../../components/ui/password-hint';
 import { TimeZoneOptions } from '../../../components/ui/time-zone-options';
-import { useCurrentUser } from '../../../app/current-user';
+import { useCurrentUser, useCan } from '../../../lib/current-user';
 
 function BreweryForm({ me }: { me: Me }) {
   const update = useUpdateBrewery();
   const toast = useToast();
   const [banner, setBanner] = useState<string>();
-  const canEdit = me.role === 'head_brewer';
+  const canEdit = useCan('brewery.edit');
   const { register, handleSubmit, setError, formState } = useForm<BrewerySettingsInput>({
     resolver: zodResolver(brewerySettingsSchema),
     defaultValues: { name: me.brewery.name, unitSystem: me.brewery.unitSystem, timeZone: me.brewery.timeZone },

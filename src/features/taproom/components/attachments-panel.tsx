@@ -3,7 +3,7 @@ import { Card, ErrorState, Loading } from '../../../components/ui';
 import { ApiError } from '../../../lib/api-client';
 import { UPLOAD_ACCEPT, UPLOAD_MAX_BYTES } from '../../../../shared/schemas/taproom';
 import { useAttachments, useRemoveAttachment, useUploadAttachment } from '../api/attachments';
-import { useCurrentUser } from '../../../app/current-user';
+import { useCan } from '../../../lib/current-user';
 import { ConfirmButton } from '../../../components/confirm-button';
 
 const sizeText = (bytes: number) =>
@@ -14,7 +14,7 @@ export function AttachmentsPanel({ batchId }: { batchId: number }) {
   const files = useAttachments(batchId);
   const upload = useUploadAttachment(batchId);
   const remove = useRemoveAttachment(batchId);
-  const canRemove = useCurrentUser().role === 'head_brewer';
+  const canRemove = useCan('file.remove');
   const input = useRef<HTMLInputElement>(null);
   const [problem, setProblem] = useState<string | null>(null);
 

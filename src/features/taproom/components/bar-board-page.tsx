@@ -2,7 +2,7 @@ import { Fragment, useEffect, useRef } from 'react';
 import { useLocation, useNavigate } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
 import { Button, ErrorState, Loading } from '../../../components/ui';
-import { useCurrentUser } from '../../../app/current-user';
+import { useCurrentUser } from '../../../lib/current-user';
 import { beersQuery } from '../api/list-beers';
 import { ColourSwatch, abvText, servingParts } from './beer-facts';
 import { FullScreenView } from './full-screen-view';

@@ -51,7 +51,7 @@ export function ColourSwatch({
 /** The glass and the serving temperature, each a short phrase that reads badly split over two lines. */
 export const servingParts = (beer: Pick<TaproomBeer, 'glass' | 'servingTempC'>, units: UnitSystem): string[] => [
   GLASSES[beer.glass],
-  show(units, 'tempC', beer.servingTempC, 0),
+  show(units, 'temperature', beer.servingTempC, 0),
 ];
 
 export const servingLine = (beer: Pick<TaproomBeer, 'glass' | 'servingTempC'>, units: UnitSystem): string =>

@@ -1,6 +1,6 @@
 import { useParams } from 'react-router-dom';
 import { Button, Caution, ErrorState, LinkButton, Loading, PageHeader, cx } from '../../../components/ui';
-import { useCurrentUser } from '../../../app/current-user';
+import { useCurrentUser } from '../../../lib/current-user';
 import { srmToEbc } from '../../../../shared/brewing';
 import { useBeer } from '../api/get-beer';
 import {

@@ -16,7 +16,7 @@ import {
   TextField,
   useToast,
 } from '../../../components/ui';
-import { useCurrentUser } from '../../../app/current-user';
+import { useCurrentUser, useCan } from '../../../lib/current-user';
 import { showTime } from '../../../lib/time';
 import { FormBanner } from '../../../components/ui/form-banner';
 import { ConfirmButton } from '../../../components/confirm-button';
@@ -70,7 +70,7 @@ function defaults(detail: ReleaseDetail): ReleaseSheetInput {
 
 function SheetForm({ batchId, detail }: { batchId: number; detail: ReleaseDetail }) {
   const me = useCurrentUser();
-  const mayRelease = me.role === 'head_brewer';
+  const mayRelease = useCan('release.manage');
   const toast = useToast();
   const save = useSaveReleaseSheet(batchId);
   const photos = useAttachments(batchId).data?.filter((a) => a.kind === 'photo') ?? [];
@@ -132,7 +132,7 @@ function SheetForm({ batchId, detail }: { batchId: number; detail: ReleaseDetail
             >
               {SERVING_TEMPS_C.map((c) => (
                 <option key={c} value={c}>
-                  {show(me.brewery.unitSystem, 'tempC', c, 0)}
+                  {show(me.brewery.unitSystem, 'temperature', c, 0)}
                 </option>
               ))}
             </SelectField>
@@ -266,7 +266,7 @@ function ReleaseNumbers({
   detail: ReleaseDetail;
   sheetSaved: boolean;
 }) {
-  const mayRelease = useCurrentUser().role === 'head_brewer';
+  const mayRelease = useCan('release.manage');
   const publish = usePublishRelease(batchId);
   const toast = useToast();
   const [confirming, setConfirming] = useState(false);

@@ -1,7 +1,7 @@
 import { EmptyState, ErrorState, LinkButton, Loading, PageHeader, Table, Td, Th } from '../../../components/ui';
 import { BATCH_STATUS_LABELS, type BatchStatus } from '../../../../shared/schemas/batches';
 import { useReleases } from '../api/list-releases';
-import { useCurrentUser } from '../../../app/current-user';
+import { useCan } from '../../../lib/current-user';
 import { wasReleased } from '../../../../shared/schemas/taproom';
 
 const STATE_TEXT = {
@@ -13,7 +13,7 @@ const STATE_TEXT = {
 
 /** The head brewer's list of batches with beer to release, and where each release stands. */
 export function ReleasesPage() {
-  const me = useCurrentUser();
+  const mayRelease = useCan('release.manage');
   const releases = useReleases();
   return (
     <>
@@ -52,7 +52,7 @@ export function ReleasesPage() {
                     <LinkButton variant="quiet" to={`/batches/${r.batchId}/tasting`}>
                       Tasting notes
                     </LinkButton>
-                    {me.role === 'head_brewer' && (
+                    {mayRelease && (
                       <LinkButton
                         variant="primary"
                         to={`/batches/${r.batchId}/release`}

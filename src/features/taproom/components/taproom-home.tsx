@@ -1,7 +1,7 @@
 import { Link, useSearchParams } from 'react-router-dom';
 import { useDeferredValue } from 'react';
 import { Card, EmptyState, ErrorState, Loading, PageHeader, SelectField, TextField } from '../../../components/ui';
-import { useCurrentUser } from '../../../app/current-user';
+import { useCurrentUser, useCan } from '../../../lib/current-user';
 import { STRENGTHS, type Strength, type TaproomBeer, type TaproomListQuery } from '../../../../shared/schemas/taproom';
 import { useBeers } from '../api/list-beers';
 import { ColourSwatch, abvText, allergensLine, packagesLine, servingLine, tastingLine } from './beer-facts';
@@ -102,6 +102,7 @@ function Shelf({ title, beers, empty }: { title: string; beers: TaproomBeer[]; e
 /** The taproom manager's home: what is pouring, what is coming, and how to talk about it. */
 export function TaproomHome() {
   const me = useCurrentUser();
+  const mayReadReleases = useCan('release.read');
   const [params, setParams] = useSearchParams();
   const q = params.get('q') ?? '';
   const style = params.get('style') ?? '';
@@ -132,7 +133,7 @@ export function TaproomHome() {
         subtitle={`${me.brewery.name} — beers on tap and coming soon`}
         actions={
           <>
-            {me.role !== 'taproom_manager' && (
+            {mayReadReleases && (
               <Link to="/releases" className={linkButton}>
                 Tasting and release
               </Link>

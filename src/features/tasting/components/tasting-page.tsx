@@ -16,7 +16,7 @@ import {
   cx,
   useToast,
 } from '../../../components/ui';
-import { useCurrentUser } from '../../../app/current-user';
+import { useCurrentUser } from '../../../lib/current-user';
 import { applyServerErrors } from '../../../lib/forms';
 import { ROLE_LABELS } from '../../../../shared/schemas/roles';
 import {

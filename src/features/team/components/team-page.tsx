@@ -21,7 +21,7 @@ import { useInviteTeammate, useTeam, useUpdateMember } from '../api/team';
 import type { Team } from '../../../../shared/contract/auth';
 import { FormBanner } from '../../../components/ui/form-banner';
 import { ConfirmButton } from '../../../components/confirm-button';
-import { useCurrentUser } from '../../../app/current-user';
+import { useCurrentUser } from '../../../lib/current-user';
 
 function InviteForm() {
   const invite = useInviteTeammate();

@@ -1,49 +1,57 @@
 import { useState, type ReactNode } from 'react';
 import { useController, type Control, type FieldValues, type Path } from 'react-hook-form';
 import { TextField } from './field';
-import { UNITS, limitInUnits, type Quantity } from '../../lib/units';
-import type { UnitSystem } from '../../../shared/schemas/auth';
+import { displayUnit, type DisplayUnit, type QuantityId, type UnitSystem } from '../../../shared/quantities';
 
 interface Props<T extends FieldValues> {
   control: Control<T>;
   name: Path<T>;
   label: string;
-  quantity: Quantity;
+  quantity: QuantityId;
   system: UnitSystem;
+  /** Another of the quantity's units the person chose (bbl beside gal, °P beside SG); default the brewery's first. */
+  unit?: DisplayUnit;
   optional?: boolean;
   disabled?: boolean;
   hint?: ReactNode;
+  className?: string;
 }
 
 /**
- * A number stored in SI, typed and shown in the brewery's units (lb, oz, °F, gal, qt/lb or kg, g, °C, L, L/kg);
- * its limit messages are restated in those units too.
+ * A number the form holds in SI, typed and shown in the brewery's unit (°F, gal, lb, oz, psi or °C, L, kg, g, kPa).
+ * With `quantityResolver`, a refused limit reads in the unit the field shows ("must be at most 212 °F").
  */
-export function UnitField<T extends FieldValues>({
+export function QuantityField<T extends FieldValues>({
   control,
   name,
   label,
   quantity,
   system,
+  unit,
   optional,
   disabled,
   hint,
+  className,
 }: Props<T>) {
   const { field, fieldState } = useController({ control, name });
-  const u = UNITS[system][quantity];
+  const u = unit ?? displayUnit(quantity, system);
   // While the person types, keep their text (e.g. "12.") rather than re-formatting it under the cursor.
   const [text, setText] = useState<string | null>(null);
   const value = field.value as unknown;
   const shown =
     text ??
-    (typeof value === 'number' && Number.isFinite(value) ? String(Number(u.toDisplay(value).toFixed(u.decimals))) : '');
+    (typeof value === 'number' && Number.isFinite(value) ? String(Number(u.fromSi(value).toFixed(u.decimals))) : '');
+  const error = fieldState.error;
+  const inUnit = error?.types?.[u.unit];
   return (
     <TextField
-      label={`${label} (${u.unit})`}
+      label={u.unit ? `${label} (${u.unit})` : label}
       inputMode="decimal"
+      autoComplete="off"
       value={shown}
       disabled={disabled}
       hint={hint}
+      className={className}
       name={field.name}
       ref={field.ref}
       onChange={(e) => {
@@ -51,14 +59,14 @@ export function UnitField<T extends FieldValues>({
         setText(raw);
         const n = Number(raw.replace(',', '.'));
         field.onChange(
-          raw.trim() === '' ? (optional ? undefined : Number.NaN) : Number.isFinite(n) ? u.fromDisplay(n) : Number.NaN,
+          raw.trim() === '' ? (optional ? undefined : Number.NaN) : Number.isFinite(n) ? u.toSi(n) : Number.NaN,
         );
       }}
       onBlur={() => {
         setText(null);
         field.onBlur();
       }}
-      error={fieldState.error?.message && limitInUnits(fieldState.error.message, system, quantity)}
+      error={typeof inUnit === 'string' ? inUnit : error?.message}
     />
   );
 }

@@ -1,6 +1,7 @@
 /**
- * Unit constants and conversions. Everything inside shared/brewing is SI
- * (kg, g, L, °C, kPa); these convert at the edges for US-unit brewers.
+ * Unit constants and conversions, the one home of every factor the product uses. Everything stored and
+ * sent is SI (kg, g, L, °C, kPa gauge); these convert at the edges for US-unit brewers. The quantities
+ * table (./index.ts) binds them to each quantity's display units.
  */
 
 /** NIST Handbook 44 Appendix C and NIST SP 811 Appendix B.8: 1 lb (avoirdupois) = 0.453 592 37 kg exactly. */
@@ -69,14 +70,37 @@ export const lPerKgToQtPerLb = (r: number): number => r / L_PER_KG_PER_QT_PER_LB
 /** Absorption in US gal/lb → L/kg. */
 export const galPerLbToLPerKg = (r: number): number => (r * L_PER_US_GAL) / KG_PER_LB;
 
-/**
- * A batch or tank volume as a brewer says it: gallons below 2 bbl, barrels above (US); litres below
- * 200 L, hectolitres above (metric). For screens and for the API's messages alike.
- */
-export function showVolume(system: 'us' | 'metric', litres: number): string {
-  if (system === 'us') {
-    const bbl = lToUsBbl(litres);
-    return bbl >= 2 ? `${bbl.toFixed(1)} bbl` : `${lToUsGal(litres).toFixed(1)} gal`;
-  }
-  return litres >= 200 ? `${(litres / 100).toFixed(1)} hL` : `${litres.toFixed(1)} L`;
+/** NIST Handbook 44 Appendix C: 1 US fluid ounce = 1/128 US gallon = 29.573 529 562 5 mL. */
+export const ML_PER_US_FL_OZ = (L_PER_US_GAL * 1000) / 128;
+/** US fluid ounces → millilitres. */
+export const flOzToMl = (floz: number): number => floz * ML_PER_US_FL_OZ;
+/** Millilitres → US fluid ounces. */
+export const mlToFlOz = (ml: number): number => ml / ML_PER_US_FL_OZ;
+
+/** ASBC Methods of Analysis (Beer-2 / extract table fit): °P = −616.868 + 1111.14·SG − 630.272·SG² + 135.997·SG³. */
+export function platoFromSg(sg: number): number {
+  return -616.868 + sg * (1111.14 + sg * (-630.272 + sg * 135.997));
 }
+
+/** Derivative of the ASBC polynomial, d°P/dSG (positive over 0.98–1.20). */
+export function platoSlope(sg: number): number {
+  return 1111.14 + sg * (-1260.544 + sg * 407.991);
+}
+
+/**
+ * °Plato → specific gravity. We invert the same ASBC polynomial numerically (Newton's method) so that
+ * SG → °P → SG round-trips exactly; the common closed form SG = 1 + P/(258.6 − (P/258.2)·227.1) only seeds
+ * the iteration. Range checks belong to the caller (shared/brewing/gravity.ts, the quantities table).
+ */
+export function sgFromPlato(plato: number): number {
+  let sg = 1 + plato / (258.6 - (plato / 258.2) * 227.1);
+  for (let i = 0; i < 8; i++) {
+    const step = (platoFromSg(sg) - plato) / platoSlope(sg);
+    sg -= step;
+    if (Math.abs(step) < 1e-13) break;
+  }
+  return sg;
+}
+
+/** EBC per SRM: both scale absorbance at 430 nm (SRM = 12.7·A430, ASBC Beer-10; EBC = 25·A430, EBC Analytica), 25/12.7 ≈ 1.97. */
+export const EBC_PER_SRM = 1.97;

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import * as u from './units';
+import * as u from './convert';
 
 describe('unit constants', () => {
   it('match NIST definitions', () => {

@@ -1,34 +1,28 @@
 /**
- * The batch log: signed, append-only entries chained by SHA-256 per batch. Every write goes through
- * appendLogEntry (or, for a probe file's many readings, appendLogEntries), which does idempotency, the hash chain,
- * authorship, lateness and the audit row in one transaction
- * (the table's insert trigger writes the idempotency record and the audit row with the entry, see migration 0901).
+ * Appending to the batch log: every write goes through appendLogEntry (or, for a probe file's many readings,
+ * appendLogEntries), which does idempotency, the hash chain, authorship, lateness and the audit row in one
+ * transaction (the table's insert trigger writes the idempotency record and the audit row with the entry,
+ * see migration 0901).
  */
-import { createHash } from 'node:crypto';
 import { QueryTypes, Transaction, UniqueConstraintError } from 'sequelize';
-import { sequelize } from '../config/database';
-import { Batch, BatchLogEntry, IdempotencyKey } from '../models';
-import { badRequest, conflict, methodNotAllowed, notFound, unprocessable } from '../errors';
-import { fieldMessages } from '../middlewares/validate';
-import { LRUCache } from 'lru-cache';
+import { sequelize } from '../../config/database';
+import { Batch, BatchLogEntry, IdempotencyKey } from '../../models';
+import { badRequest, conflict, notFound, unprocessable } from '../../errors';
+import { fieldMessages } from '../../middlewares/validate';
+import { canonicalJson, entryHash, GENESIS_HASH, LOG_HEAD_JOIN, sha256 } from './chain';
+import { checkCorrectionTarget } from './corrections';
 import {
   BREW_DAY_KINDS,
   writeMetaSchema,
-  type ChainCheck,
-  type LogEntry,
   type SignatureMeaning,
   type WriteMeta,
-} from '../../shared/schemas/batch-log';
-
-export { batchActuals } from '../../shared/batches/brew-day';
+} from '../../../shared/schemas/batch-log';
+import type { Role } from '../../../shared/schemas/roles';
 
 /** An entry later than this after its capture on the device is flagged as late. */
-export const LATE_AFTER_MS = 15 * 60 * 1000;
+const LATE_AFTER_MS = 15 * 60 * 1000;
 /** A device clock this far ahead of the server's is refused: a capture cannot be in the future. */
 const CLOCK_SKEW_MS = 5 * 60 * 1000;
-/** The previous hash of a batch's first entry. */
-export const GENESIS_HASH = '0'.repeat(64);
-
 /** Who is writing: the signed-in person (from the session, never from the body). */
 export type LogActor = Pick<Express.User, 'id' | 'breweryId' | 'role' | 'displayName'>;
 
@@ -51,66 +45,6 @@ export interface AppendOptions {
   /** Runs inside the same transaction after the entry is written (e.g. a cellar reading's own row). */
   onInsert?: (entry: BatchLogEntry, transaction: Transaction) => Promise<void>;
 }
-
-/** JSON with object keys sorted at every level: the same content always gives the same bytes. */
-export function canonicalJson(value: unknown): string {
-  if (value === null || typeof value !== 'object') return JSON.stringify(value ?? null);
-  if (value instanceof Date) return JSON.stringify(value.toISOString());
-  if (Array.isArray(value)) return `[${value.map(canonicalJson).join(',')}]`;
-  const entries = Object.entries(value as Record<string, unknown>)
-    .filter(([, v]) => v !== undefined)
-    .sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0));
-  return `{${entries.map(([k, v]) => `${JSON.stringify(k)}:${canonicalJson(v)}`).join(',')}}`;
-}
-
-export const sha256 = (text: string) => createHash('sha256').update(text, 'utf8').digest('hex');
-
-type Hashable = Pick<
-  BatchLogEntry,
-  | 'breweryId'
-  | 'batchId'
-  | 'sequence'
-  | 'kind'
-  | 'stepKey'
-  | 'data'
-  | 'correctsEntryId'
-  | 'reason'
-  | 'authorId'
-  | 'authorRole'
-  | 'authorName'
-  | 'meaning'
-  | 'capturedAt'
-  | 'receivedAt'
-  | 'deviceId'
-  | 'late'
-  | 'idempotencyKey'
->;
-
-/** Everything an entry records, in one canonical form (ids as numbers, times as ISO UTC). */
-export function entryContent(e: Hashable): Record<string, unknown> {
-  return {
-    breweryId: Number(e.breweryId),
-    batchId: Number(e.batchId),
-    sequence: Number(e.sequence),
-    kind: e.kind,
-    stepKey: e.stepKey ?? null,
-    data: e.data,
-    correctsEntryId: e.correctsEntryId === null || e.correctsEntryId === undefined ? null : Number(e.correctsEntryId),
-    reason: e.reason ?? null,
-    authorId: Number(e.authorId),
-    authorRole: e.authorRole,
-    authorName: e.authorName,
-    meaning: e.meaning,
-    capturedAt: new Date(e.capturedAt).toISOString(),
-    receivedAt: new Date(e.receivedAt).toISOString(),
-    deviceId: e.deviceId,
-    late: Boolean(e.late),
-    idempotencyKey: e.idempotencyKey,
-  };
-}
-
-/** SHA-256 over the previous entry's hash and this entry's canonical content. */
-export const entryHash = (prevHash: string, e: Hashable) => sha256(`${prevHash}\n${canonicalJson(entryContent(e))}`);
 
 /** Reads the signed-write headers the client outbox sends; a missing or malformed one answers 400. */
 export function writeMetaFromHeaders(get: (name: string) => string | undefined): WriteMeta {
@@ -162,10 +96,6 @@ async function findReplay(
 export async function brewDaySigned(batchId: number, transaction?: Transaction): Promise<boolean> {
   return (await BatchLogEntry.count({ where: { batchId, kind: 'sign_off' }, transaction })) > 0;
 }
-
-/** The newest entry of the batch (`h`), joined to the batch `b`: the log's head that the next entry chains to. */
-const LOG_HEAD_JOIN = `LEFT JOIN batch_log_entries h
-       ON h.batch_id = b.id AND h.sequence = (SELECT MAX(x.sequence) FROM batch_log_entries x WHERE x.batch_id = b.id)`;
 
 interface AppendState {
   status: string;
@@ -270,7 +200,7 @@ function entryFields(
     correctsEntryId,
     reason,
     authorId: actor.id,
-    authorRole: actor.role,
+    authorRole: actor.role as Role,
     authorName: actor.displayName,
     meaning,
     capturedAt: meta.capturedAt,
@@ -310,10 +240,7 @@ async function append(
 
   const fields = entryFields(actor, batchId, input, meta, Number(state.lastSequence ?? 0) + 1, new Date());
   if (Number(state.signed)) throw conflict('The brew day is signed off: add a correction instead.');
-  if (correctsEntryId !== null) {
-    if (state.targetKind === null) throw unprocessable('The entry to correct is not in this batch’s log.');
-    if (state.targetKind === 'sign_off') throw unprocessable('A signature cannot be corrected.');
-  }
+  if (correctsEntryId !== null) checkCorrectionTarget(state.targetKind);
 
   const prevHash = state.lastHash ?? GENESIS_HASH;
   const row = { ...fields, requestHash: hashOfRequest, prevHash, hash: entryHash(prevHash, fields) };
@@ -421,148 +348,4 @@ export async function appendLogEntries(
     },
   );
   return rows.map((row, i) => BatchLogEntry.build({ id: Number(ids[i]!.id), ...row }, { isNewRecord: false }));
-}
-
-/** Recomputes a batch's chain and names the first entry whose hash does not match. */
-export async function verifyChain(batchId: number): Promise<ChainCheck> {
-  const entries = await BatchLogEntry.findAll({ where: { batchId }, order: [['sequence', 'ASC']] });
-  let prevHash = GENESIS_HASH;
-  for (const [i, e] of entries.entries()) {
-    const problem =
-      Number(e.sequence) !== i + 1
-        ? 'an entry is missing before this one'
-        : e.prevHash !== prevHash
-          ? 'it does not point at the entry before it'
-          : e.hash !== entryHash(prevHash, e)
-            ? 'its content no longer matches its hash'
-            : null;
-    if (problem)
-      return { ok: false, checked: i + 1, firstBad: { entryId: Number(e.id), sequence: Number(e.sequence), problem } };
-    prevHash = e.hash;
-  }
-  return { ok: true, checked: entries.length, firstBad: null };
-}
-
-/** The columns an entry is answered with. */
-type AnsweredFields = Pick<
-  BatchLogEntry,
-  | 'id'
-  | 'batchId'
-  | 'sequence'
-  | 'kind'
-  | 'stepKey'
-  | 'data'
-  | 'correctsEntryId'
-  | 'reason'
-  | 'authorId'
-  | 'authorRole'
-  | 'authorName'
-  | 'meaning'
-  | 'capturedAt'
-  | 'receivedAt'
-  | 'deviceId'
-  | 'late'
-  | 'hash'
->;
-
-/** An entry as the API answers it. */
-export function toLogEntry(e: AnsweredFields, correctedByIds: number[] = []): LogEntry {
-  return {
-    id: Number(e.id),
-    batchId: e.batchId,
-    sequence: e.sequence,
-    kind: e.kind,
-    stepKey: e.stepKey,
-    data: e.data,
-    correctsEntryId: e.correctsEntryId === null ? null : Number(e.correctsEntryId),
-    reason: e.reason,
-    authorId: e.authorId,
-    authorRole: e.authorRole,
-    authorName: e.authorName,
-    meaning: e.meaning,
-    capturedAt: new Date(e.capturedAt).toISOString(),
-    receivedAt: new Date(e.receivedAt).toISOString(),
-    deviceId: e.deviceId,
-    late: Boolean(e.late),
-    hash: e.hash,
-    correctedByIds,
-  };
-}
-
-/** Entries in order as the API answers them, each with the corrections that point at it. */
-function toLogEntries(rows: AnsweredFields[]): LogEntry[] {
-  const correctedBy = new Map<number, number[]>();
-  for (const r of rows) {
-    if (r.correctsEntryId !== null) {
-      const target = Number(r.correctsEntryId);
-      correctedBy.set(target, [...(correctedBy.get(target) ?? []), Number(r.id)]);
-    }
-  }
-  return rows.map((r) => toLogEntry(r, correctedBy.get(Number(r.id))));
-}
-
-/** A batch's entries in order, each with the corrections that point at it. */
-export async function logEntries(
-  batchId: number,
-  transaction?: Transaction,
-): Promise<{ rows: BatchLogEntry[]; entries: LogEntry[] }> {
-  const rows = await BatchLogEntry.findAll({ where: { batchId }, order: [['sequence', 'ASC']], transaction });
-  return { rows, entries: toLogEntries(rows) };
-}
-
-/**
- * Logs as UTF-8 JSON by batch id, each with the head (last sequence and hash) it was read at. Entries are
- * never changed or deleted (the application account may only INSERT and SELECT them) and every append
- * moves the head, so a log whose head matches the batch's current head is exactly the log: never stale.
- * At most 8 MB in all (about 120 logs of 130 entries), none over 2 MB. Kept as bytes, so an answer
- * is written out as it is, without encoding (and allocating) it again for every request.
- */
-const logCache = new LRUCache<number, { sequence: number; hash: string; body: Buffer }>({
-  maxSize: 8 * 1024 * 1024,
-  maxEntrySize: 2 * 1024 * 1024,
-  sizeCalculation: (log) => log.body.length,
-});
-
-/**
- * A batch's log as the API's JSON (an array of LogEntry, UTF-8) and the head it was read at (null while empty).
- * One statement finds the batch within the brewery (404 otherwise) and its head; a second reads the
- * entries only when the cache has no log at that head.
- */
-export async function batchLogJson(
-  breweryId: number,
-  batchId: number,
-): Promise<{ body: Buffer; head: { sequence: number; hash: string } | null }> {
-  const [found] = await sequelize.query<{ sequence: number | null; hash: string | null }>(
-    `SELECT h.sequence, h.hash FROM batches b ${LOG_HEAD_JOIN} WHERE b.id = :batchId AND b.brewery_id = :breweryId`,
-    { type: QueryTypes.SELECT, replacements: { batchId, breweryId } },
-  );
-  if (!found) throw notFound('This batch');
-  if (found.sequence === null || found.hash === null) return { body: Buffer.from('[]'), head: null };
-  const cached = logCache.get(batchId);
-  if (cached && cached.sequence === Number(found.sequence) && cached.hash === found.hash) {
-    return { body: cached.body, head: { sequence: cached.sequence, hash: cached.hash } };
-  }
-  const rows = await sequelize.query<AnsweredFields>(
-    `SELECT id, batch_id AS batchId, sequence, kind, step_key AS stepKey, data, corrects_entry_id AS correctsEntryId, reason,
-            author_id AS authorId, author_role AS authorRole, author_name AS authorName, meaning,
-            captured_at AS capturedAt, received_at AS receivedAt, device_id AS deviceId, late, hash
-       FROM batch_log_entries WHERE batch_id = :batchId ORDER BY sequence`,
-    { type: QueryTypes.SELECT, replacements: { batchId } },
-  );
-  for (const r of rows) if (typeof r.data === 'string') r.data = JSON.parse(r.data) as Record<string, unknown>;
-  const body = Buffer.from(JSON.stringify(toLogEntries(rows)));
-  // Cached under the head of what was read: an entry appended since the first statement is in it.
-  const last = rows.at(-1)!;
-  const head = { sequence: Number(last.sequence), hash: last.hash };
-  logCache.set(batchId, { ...head, body });
-  return { body, head };
-}
-
-/** Entries are append-only: a change or delete is refused (405), after the usual 404 for another brewery's entry. */
-export async function refuseEntryChange(breweryId: number, batchId: number, entryId: number): Promise<never> {
-  const entry = await BatchLogEntry.findOne({ where: { id: entryId, batchId, breweryId } });
-  if (!entry) throw notFound('This log entry');
-  throw methodNotAllowed(
-    'Log entries are never changed or deleted. Add a correction that points at the entry instead.',
-  );
 }
