@@ -1,6 +1,6 @@
 import { queryOptions, useMutation, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import type { ResetRequestInput, ResetPasswordInput, ChangePasswordInput } from '../../../../shared/schemas/auth';
+import type { ResetRequestInput, ResetPasswordInput } from '../../../../shared/schemas/auth';
 import { authKeys } from '../../../lib/current-user';
 
 export const inviteQuery = (token: string) =>
@@ -31,6 +31,3 @@ export const useResetLink = (token: string) =>
 
 export const useResetPassword = (token: string) =>
   useMutation({ mutationFn: (input: ResetPasswordInput) => api.post<void>(`/api/auth/reset/${token}`, input) });
-
-export const useChangePassword = () =>
-  useMutation({ mutationFn: (input: ChangePasswordInput) => api.post<void>('/api/auth/password', input) });

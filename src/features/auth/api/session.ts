@@ -19,14 +19,3 @@ export const useSignIn = () => useSessionMutation((input: SignInInput) => api.po
 export const useSignUp = () => useSessionMutation((input: SignUpInput) => api.post<Me>('/api/auth/sign-up', input));
 export const useAcceptInvite = (token: string) =>
   useSessionMutation((input: AcceptInviteInput) => api.post<Me>(`/api/auth/invites/${token}`, input));
-
-export function useSignOut() {
-  const client = useQueryClient();
-  return useMutation({
-    mutationFn: () => api.post<void>('/api/auth/sign-out'),
-    onSuccess: () => {
-      client.clear();
-      client.setQueryData(authKeys.me(), null);
-    },
-  });
-}

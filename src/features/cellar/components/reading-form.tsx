@@ -59,8 +59,7 @@ export function ReadingForm({
   const usual = usualMethod(readings);
   const knockoutBrix = readings.find((r) => r.enteredUnit === 'brix')?.enteredValue;
   const temp = displayUnit('temperature', unitSystem);
-  const lastTemp =
-    last?.tempC === null || last?.tempC === undefined ? undefined : temp.fromSi(last.tempC).toFixed(1);
+  const lastTemp = last?.tempC === null || last?.tempC === undefined ? undefined : temp.fromSi(last.tempC).toFixed(1);
   const { register, handleSubmit, watch, setValue, reset, formState } = useForm<
     ReadingDraft,
     unknown,

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import type { Comparison } from '../../../../shared/contract/recipes';
-import { recipeKeys } from './keys';
+import { recipeKeys } from '../../../lib/recipe-keys';
 
 export const compareQuery = (recipeId: number, a: number, b: number) =>
   queryOptions({

@@ -1,7 +1,7 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import type { ScaleResult } from '../../../../shared/contract/recipes';
-import { recipeKeys } from './keys';
+import { recipeKeys } from '../../../lib/recipe-keys';
 
 export interface ScaleTarget {
   equipmentProfileId?: number;

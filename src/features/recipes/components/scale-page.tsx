@@ -16,7 +16,7 @@ import { useCurrentUser, useCan } from '../../../lib/current-user';
 import { ApiError } from '../../../lib/api-client';
 import { displayUnit, showVolume } from '../../../lib/units';
 import { batchVolumeField, issueMessage } from '../../../../shared/quantities/field';
-import { useEquipment } from '../../library/api/equipment';
+import { useEquipment } from '../../../lib/equipment';
 import { useSaveScaled } from '../api/save-recipe';
 import { scaleSearch, useScale, type ScaleTarget } from '../api/scale-version';
 import type { ScaleResult } from '../../../../shared/contract/recipes';

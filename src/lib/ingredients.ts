@@ -1,7 +1,7 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import type { IngredientInput } from '../../../../shared/schemas/recipes';
-import type { IngredientRow } from '../../../../shared/contract/recipes';
+import { api } from './api-client';
+import type { IngredientInput } from '../../shared/schemas/recipes';
+import type { IngredientRow } from '../../shared/contract/recipes';
 
 export const ingredientKeys = { all: ['ingredients'] as const };
 
