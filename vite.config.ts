@@ -61,6 +61,8 @@ export default defineConfig({
           environment: 'jsdom',
           setupFiles: ['tests/component/setup.ts'],
           sequence: { groupOrder: 0 },
+          // The recipe editor's tests render the whole editor in jsdom: seconds each on a busy two-core machine.
+          testTimeout: 30_000,
         },
       },
       {

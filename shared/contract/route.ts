@@ -33,3 +33,19 @@ type Parsed<S> = S extends z.ZodType ? z.output<S> : Record<string, never>;
 export type ParamsOut<C extends RouteContract> = Parsed<C['params']>;
 export type QueryOut<C extends RouteContract> = Parsed<C['query']>;
 export type BodyOut<C extends RouteContract> = Parsed<C['body']>;
+
+/** `'/a/:x/b/:y'` → `{ x: string | number; y: string | number }`; a path without parameters gives `{}`. */
+export type PathParams<P extends string> = P extends `${string}:${infer Name}/${infer Rest}`
+  ? { [K in Name]: string | number } & PathParams<`/${Rest}`>
+  : P extends `${string}:${infer Name}`
+    ? { [K in Name]: string | number }
+    : Record<never, never>;
+
+/** The path with its `:name` segments filled in. */
+export function pathOf(path: string, params: Record<string, string | number> = {}): string {
+  return path.replace(/:(\w+)/g, (_, name: string) => {
+    const value = params[name];
+    if (value === undefined) throw new Error(`Missing path parameter ${name} for ${path}`);
+    return encodeURIComponent(String(value));
+  });
+}

@@ -40,6 +40,6 @@ export const NAV_ITEMS: NavItem[] = [
   { to: '/settings', label: 'Settings', action: 'brewery.read' },
 ];
 
-/** The menu items for a person, given what they may do (usePermissions() in src/lib/current-user). */
+/** The menu items for a person, given what the policy lets them do (`usePermissions()`, or `can` with their role). */
 export const navFor = (may: (action: Action) => boolean) =>
   NAV_ITEMS.filter((item) => may(item.action) && (!item.onlyWith || may(item.onlyWith)));

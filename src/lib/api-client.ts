@@ -1,3 +1,6 @@
+import type { z } from 'zod';
+import { pathOf, type PathParams, type ResponseOf, type RouteContract } from '../../shared/contract/route';
+
 /** An answer from the API that was not a success, with the server's message and field messages. */
 export class ApiError extends Error {
   constructor(
@@ -11,10 +14,8 @@ export class ApiError extends Error {
   }
 }
 
-type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
-
 async function request<T>(
-  method: Method,
+  method: RouteContract['method'],
   path: string,
   body?: unknown,
   headers: Record<string, string> = {},
@@ -22,7 +23,7 @@ async function request<T>(
   let response: Response;
   try {
     response = await fetch(path, {
-      method,
+      method: method.toUpperCase(),
       credentials: 'same-origin',
       headers: {
         Accept: 'application/json',
@@ -52,13 +53,35 @@ async function request<T>(
   return data as T;
 }
 
-export const api = {
-  get: <T>(path: string) => request<T>('GET', path),
-  post: <T>(path: string, body?: unknown, headers?: Record<string, string>) =>
-    request<T>('POST', path, body ?? {}, headers),
-  put: <T>(path: string, body?: unknown) => request<T>('PUT', path, body ?? {}),
-  patch: <T>(path: string, body?: unknown) => request<T>('PATCH', path, body ?? {}),
-  delete: <T>(path: string) => request<T>('DELETE', path),
-  /** Sends a multipart form (files) with the same headers and error handling as every other call. */
-  upload: <T>(path: string, form: FormData) => request<T>('POST', path, form),
-};
+type Fields<S> = S extends z.ZodType ? z.input<S> & Partial<z.output<S>> : never;
+/** `{ part: T }`, or `{ part?: T }` when every field of T may be left out. */
+type Part<Name extends string, T> = [T] extends [never]
+  ? { [K in Name]?: undefined }
+  : Record<never, never> extends T
+    ? { [K in Name]?: T }
+    : { [K in Name]: T };
+
+/** What a call sends: the path's parameters, the query and the body its contract names, and extra headers. */
+export type CallInput<C extends RouteContract> = Part<
+  'params',
+  keyof PathParams<C['path']> extends never ? never : PathParams<C['path']>
+> &
+  Part<'query', Fields<C['query']>> &
+  Part<'body', C['multipart'] extends true ? FormData : Fields<C['body']>> & { headers?: Record<string, string> };
+
+function search(query: object | undefined): string {
+  const pairs = Object.entries(query ?? {})
+    .filter(([, v]) => v !== undefined && v !== '')
+    .map(([k, v]) => [k, String(v)]);
+  return pairs.length ? `?${new URLSearchParams(pairs)}` : '';
+}
+
+/** Calls a route of shared/contract: the path, query and body are typed by its schemas, the answer by its response. */
+export function call<C extends RouteContract>(
+  route: C,
+  ...[input]: Record<never, never> extends CallInput<C> ? [input?: CallInput<C>] : [input: CallInput<C>]
+): Promise<ResponseOf<C>> {
+  const url = pathOf(route.path, input?.params) + search(input?.query);
+  const body = route.method === 'get' || route.method === 'delete' ? undefined : (input?.body ?? {});
+  return request<ResponseOf<C>>(route.method, url, body, input?.headers);
+}

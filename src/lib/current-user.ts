@@ -1,5 +1,6 @@
 import { queryOptions, useQuery, useSuspenseQuery } from '@tanstack/react-query';
-import { api, ApiError } from './api-client';
+import { call, ApiError } from './api-client';
+import { authRoutes } from '../../shared/contract/auth';
 import { forgetOfflineAnswers } from './service-worker';
 import type { Me } from '../../shared/schemas/auth';
 import { can, type Action } from '../../shared/policy';
@@ -15,7 +16,7 @@ export const meQuery = () =>
     queryKey: authKeys.me(),
     queryFn: async (): Promise<Me | null> => {
       try {
-        return await api.get<Me>('/api/auth/me');
+        return await call(authRoutes.me);
       } catch (error) {
         if (error instanceof ApiError && error.status === 401) {
           // Signed out by expiry or by a head brewer: nothing of that person's stays on a shared tablet.

@@ -1,12 +1,12 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { api } from './api-client';
+import { call } from './api-client';
 import type { EquipmentInput } from '../../shared/schemas/recipes';
-import type { EquipmentRow } from '../../shared/contract/recipes';
+import { equipmentRoutes } from '../../shared/contract/recipes';
 
 export const equipmentKeys = { all: ['equipment'] as const };
 
 export const equipmentQuery = () =>
-  queryOptions({ queryKey: equipmentKeys.all, queryFn: () => api.get<EquipmentRow[]>('/api/equipment') });
+  queryOptions({ queryKey: equipmentKeys.all, queryFn: () => call(equipmentRoutes.list) });
 export const useEquipment = () => useQuery(equipmentQuery());
 
 export function useSaveEquipment() {
@@ -14,8 +14,8 @@ export function useSaveEquipment() {
   return useMutation({
     mutationFn: ({ id, input }: { id?: number; input: EquipmentInput }) =>
       id === undefined
-        ? api.post<EquipmentRow>('/api/equipment', input)
-        : api.put<EquipmentRow>(`/api/equipment/${id}`, input),
+        ? call(equipmentRoutes.create, { body: input })
+        : call(equipmentRoutes.update, { params: { equipmentId: id }, body: input }),
     onSuccess: () => client.invalidateQueries({ queryKey: equipmentKeys.all }),
   });
 }
@@ -24,7 +24,7 @@ export function useSaveEquipment() {
 export function useRemoveEquipment() {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: (id: number) => api.delete(`/api/equipment/${id}`),
+    mutationFn: (id: number) => call(equipmentRoutes.remove, { params: { equipmentId: id } }),
     onSuccess: () => client.invalidateQueries({ queryKey: equipmentKeys.all }),
   });
 }

@@ -1,12 +1,12 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { api } from './api-client';
+import { call } from './api-client';
 import type { IngredientInput } from '../../shared/schemas/recipes';
-import type { IngredientRow } from '../../shared/contract/recipes';
+import { ingredientRoutes } from '../../shared/contract/recipes';
 
 export const ingredientKeys = { all: ['ingredients'] as const };
 
 export const ingredientsQuery = () =>
-  queryOptions({ queryKey: ingredientKeys.all, queryFn: () => api.get<IngredientRow[]>('/api/ingredients') });
+  queryOptions({ queryKey: ingredientKeys.all, queryFn: () => call(ingredientRoutes.list) });
 export const useIngredients = () => useQuery(ingredientsQuery());
 
 export function useSaveIngredient() {
@@ -14,8 +14,8 @@ export function useSaveIngredient() {
   return useMutation({
     mutationFn: ({ id, input }: { id?: number; input: IngredientInput }) =>
       id === undefined
-        ? api.post<IngredientRow>('/api/ingredients', input)
-        : api.put<IngredientRow>(`/api/ingredients/${id}`, input),
+        ? call(ingredientRoutes.create, { body: input })
+        : call(ingredientRoutes.update, { params: { ingredientId: id }, body: input }),
     onSuccess: () => client.invalidateQueries({ queryKey: ingredientKeys.all }),
   });
 }
@@ -23,7 +23,7 @@ export function useSaveIngredient() {
 export function useRemoveIngredient() {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: (id: number) => api.delete(`/api/ingredients/${id}`),
+    mutationFn: (id: number) => call(ingredientRoutes.remove, { params: { ingredientId: id } }),
     onSuccess: () => client.invalidateQueries({ queryKey: ingredientKeys.all }),
   });
 }

@@ -1,8 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from './api-client';
-import type { RecipeListRow } from '../../shared/schemas/recipes';
+import { call } from './api-client';
+import { recipeRoutes } from '../../shared/contract/recipes';
 import { recipeKeys } from './recipe-keys';
 
 export const recipeListQuery = () =>
-  queryOptions({ queryKey: recipeKeys.list(), queryFn: () => api.get<RecipeListRow[]>('/api/recipes') });
+  queryOptions({ queryKey: recipeKeys.list(), queryFn: () => call(recipeRoutes.list) });
 export const useRecipeList = () => useQuery(recipeListQuery());

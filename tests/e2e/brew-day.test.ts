@@ -150,6 +150,9 @@ describe('brew day offline (Chromium, 1024×768)', () => {
 
     await page.getByRole('button', { name: /^\d+\.\s*Start knockout/ }).click();
     await eventually(() => page.getByTestId('current-step').textContent()).toBe('Start knockout');
+    // What was typed for the strike water stays with that step: knockout starts empty, without its refusal.
+    expect(await temperature.inputValue()).toBe('');
+    expect(await page.getByRole('alert').filter({ hasText: 'Temperature must be at most' }).count()).toBe(0);
     await temperature.fill('66');
     await page.getByRole('button', { name: 'Done', exact: true }).dblclick();
     await eventually(async () => (await logged()).length).toBe(before.length + 1);

@@ -1,18 +1,19 @@
 import { queryOptions, useMutation, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { call } from '../../../lib/api-client';
+import { authRoutes } from '../../../../shared/contract/auth';
 import type { ResetRequestInput, ResetPasswordInput } from '../../../../shared/schemas/auth';
 import { authKeys } from '../../../lib/current-user';
 
 export const inviteQuery = (token: string) =>
   queryOptions({
     queryKey: [...authKeys.all, 'invite', token] as const,
-    queryFn: () => api.get<{ email: string; breweryName: string; role: string }>(`/api/auth/invites/${token}`),
+    queryFn: () => call(authRoutes.describeInvite, { params: { token } }),
   });
 export const useInvite = (token: string) => useQuery(inviteQuery(token));
 
 export const useRequestReset = () =>
   useMutation({
-    mutationFn: (input: ResetRequestInput) => api.post<{ message: string }>('/api/auth/reset-request', input),
+    mutationFn: (input: ResetRequestInput) => call(authRoutes.requestReset, { body: input }),
   });
 
 /**
@@ -23,11 +24,13 @@ export const useResetLink = (token: string) =>
   useQuery({
     queryKey: [...authKeys.all, 'reset', token] as const,
     queryFn: async () => {
-      await api.get<void>(`/api/auth/reset/${token}`);
+      await call(authRoutes.checkReset, { params: { token } });
       return true;
     },
     retry: false,
   });
 
 export const useResetPassword = (token: string) =>
-  useMutation({ mutationFn: (input: ResetPasswordInput) => api.post<void>(`/api/auth/reset/${token}`, input) });
+  useMutation({
+    mutationFn: (input: ResetPasswordInput) => call(authRoutes.resetPassword, { params: { token }, body: input }),
+  });

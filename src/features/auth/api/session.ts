@@ -1,5 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { call } from '../../../lib/api-client';
+import { authRoutes } from '../../../../shared/contract/auth';
 import type { Me, SignInInput, SignUpInput, AcceptInviteInput } from '../../../../shared/schemas/auth';
 import { authKeys } from '../../../lib/current-user';
 
@@ -15,7 +16,7 @@ function useSessionMutation<TInput>(fn: (input: TInput) => Promise<Me>) {
   });
 }
 
-export const useSignIn = () => useSessionMutation((input: SignInInput) => api.post<Me>('/api/auth/sign-in', input));
-export const useSignUp = () => useSessionMutation((input: SignUpInput) => api.post<Me>('/api/auth/sign-up', input));
+export const useSignIn = () => useSessionMutation((input: SignInInput) => call(authRoutes.signIn, { body: input }));
+export const useSignUp = () => useSessionMutation((input: SignUpInput) => call(authRoutes.signUp, { body: input }));
 export const useAcceptInvite = (token: string) =>
-  useSessionMutation((input: AcceptInviteInput) => api.post<Me>(`/api/auth/invites/${token}`, input));
+  useSessionMutation((input: AcceptInviteInput) => call(authRoutes.acceptInvite, { params: { token }, body: input }));

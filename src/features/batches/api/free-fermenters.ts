@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import type { VesselView } from '../../../../shared/schemas/cellar';
+import { call } from '../../../lib/api-client';
+import { vesselRoutes } from '../../../../shared/contract/cellar';
 import { batchKeys } from './keys';
 
 /** Fermenters that hold no batch, largest first: where a planned batch can go (some may still need cleaning). */
@@ -8,7 +8,7 @@ export const freeFermentersQuery = () =>
   queryOptions({
     queryKey: [...batchKeys.all, 'free-fermenters'] as const,
     queryFn: async () =>
-      (await api.get<VesselView[]>('/api/vessels'))
+      (await call(vesselRoutes.list))
         .filter((v) => v.type === 'fermenter' && v.currentBatchId === null)
         .sort((a, b) => b.capacityL - a.capacityL || a.name.localeCompare(b.name)),
   });

@@ -1,6 +1,6 @@
 import { useEffect, useMemo, useRef, useState } from 'react';
 import { useParams } from 'react-router-dom';
-import { brewDaySteps, boilAdditions, type BrewDayStep, type MeasureKey } from '../../../../shared/batches/brew-day';
+import { brewDaySteps, boilAdditions, type BrewDayStep } from '../../../../shared/batches/brew-day';
 import { BATCH_STATUS_LABELS } from '../../../../shared/schemas/batches';
 import { Button, Card, ErrorState, LinkButton, Loading, TextAreaField, cx } from '../../../components/ui';
 import { useCurrentUser, useCan } from '../../../lib/current-user';
@@ -12,6 +12,7 @@ import { ActualsCard } from './actuals-card';
 import { BoilTimer } from './boil-timer';
 import { LogList } from './log-list';
 import { MeasurementFields, refusalOf, toMeasurements, type GravityUnit, type Typed } from './measurement-fields';
+import { draftFor, EMPTY_DRAFT, type StepDraft } from './step-draft';
 import { OutboxPanel } from '../../../components/outbox-panel';
 import { SignOffPanel, Signatures } from './sign-off-panel';
 import { StatusCard } from './status-card';
@@ -66,10 +67,8 @@ export function BrewDayPage() {
   const { items } = useOutbox(batchGroup(id));
   const online = useOnline();
   const [selected, setSelected] = useState<string | null>(null);
-  const [typed, setTyped] = useState<Typed>({});
+  const [draft, setDraft] = useState<StepDraft>(EMPTY_DRAFT);
   const [gravity, setGravity] = useState<GravityUnit>('sg');
-  const [error, setError] = useState<string | null>(null);
-  const [invalid, setInvalid] = useState<MeasureKey | undefined>(undefined);
   /** What was typed for each entry this screen sent, so a refusal brings the values back (by idempotency key). */
   const sent = useRef(new Map<string, { stepKey: string; typed: Typed; gravity: GravityUnit }>());
   /** The refused entry whose values are back on screen: dismissed once the step is sent again. */
@@ -92,10 +91,13 @@ export function BrewDayPage() {
       const { message, field } = refusalOf(item, system, mine.gravity);
       refused.current = item.idempotencyKey;
       setSelected(mine.stepKey);
-      setTyped(mine.typed);
       setGravity(mine.gravity);
-      setInvalid(field);
-      setError(`Not saved: ${message}. Your values are kept: correct them and tap Done again.`);
+      setDraft({
+        stepKey: mine.stepKey,
+        typed: mine.typed,
+        invalid: field,
+        error: `Not saved: ${message}. Your values are kept: correct them and tap Done again.`,
+      });
     }
   }, [items, system]);
   if (batch.isPending) return <Loading label="Opening the batch" />;
@@ -103,20 +105,19 @@ export function BrewDayPage() {
   const b = batch.data;
   const done = doneSteps(b.entries, items);
   const current: BrewDayStep | undefined = steps.find((s) => s.key === selected) ?? steps.find((s) => !done.has(s.key));
+  const shown = draftFor(draft, current?.key);
   const waitingCount = items.filter((i) => i.state === 'waiting').length;
   const signed = b.brewDaySigned;
 
   /** Logs the step once per press: a second tap while it is kept, or just after, is ignored (see useTapGuard). */
   const markDone = (step: BrewDayStep) => guard.run(step.key, selected === step.key, () => logStep(step));
   const logStep = async (step: BrewDayStep): Promise<boolean> => {
+    const { typed } = draftFor(draft, step.key);
     const { measurements, error: bad, field } = toMeasurements(typed, system, gravity);
     if (bad) {
-      setInvalid(field);
-      setError(bad);
+      setDraft({ stepKey: step.key, typed, error: bad, invalid: field });
       return false;
     }
-    setError(null);
-    setInvalid(undefined);
     const item = await logEntry(
       id,
       {
@@ -133,7 +134,7 @@ export function BrewDayPage() {
       void outbox().dismiss(refused.current);
       refused.current = null;
     }
-    setTyped({});
+    setDraft(EMPTY_DRAFT);
     setSelected(null);
     return true;
   };
@@ -190,18 +191,18 @@ export function BrewDayPage() {
                   <MeasurementFields
                     asks={current.asks}
                     expected={current.expected}
-                    typed={typed}
-                    onChange={setTyped}
+                    typed={shown.typed}
+                    onChange={(typed) => setDraft({ stepKey: current.key, typed, error: null })}
                     system={system}
                     gravity={gravity}
                     onGravityUnit={setGravity}
-                    invalid={invalid}
+                    invalid={shown.invalid}
                   />
                 </div>
               )}
-              {error && (
+              {shown.error && (
                 <p role="alert" className="mt-3 text-lg font-semibold text-ember-700">
-                  {error}
+                  {shown.error}
                 </p>
               )}
               <Button
@@ -229,13 +230,7 @@ export function BrewDayPage() {
                   <li key={s.key}>
                     <button
                       type="button"
-                      onClick={() => {
-                        if (s.key !== current?.key) {
-                          setError(null);
-                          setInvalid(undefined);
-                        }
-                        setSelected(s.key);
-                      }}
+                      onClick={() => setSelected(s.key)}
                       aria-current={current?.key === s.key ? 'step' : undefined}
                       className={cx(
                         'flex min-h-[56px] w-full items-center justify-between gap-2 rounded-lg border-2 px-3 text-left',

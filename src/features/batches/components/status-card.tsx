@@ -35,7 +35,15 @@ export function StatusCard({ batchId, status }: { batchId: number; status: Batch
           className="mt-3 space-y-2"
           onSubmit={(e) => {
             e.preventDefault();
-            change.mutate({ status: 'dumped', reason }, { onSuccess: () => setDumping(false) });
+            change.mutate(
+              { status: 'dumped', reason },
+              {
+                onSuccess: () => {
+                  setDumping(false);
+                  setReason('');
+                },
+              },
+            );
           }}
         >
           <TextField

@@ -1,12 +1,12 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import type { AlertView } from '../../../../shared/schemas/cellar';
+import { call } from '../../../lib/api-client';
+import { cellarRoutes } from '../../../../shared/contract/cellar';
 import { cellarKeys } from './keys';
 
 export const alertsQuery = () =>
   queryOptions({
     queryKey: cellarKeys.alerts(),
-    queryFn: () => api.get<AlertView[]>('/api/cellar/alerts'),
+    queryFn: () => call(cellarRoutes.alerts),
     refetchInterval: 60_000,
   });
 export const useAlerts = (enabled: boolean) => useQuery({ ...alertsQuery(), enabled });
@@ -14,7 +14,7 @@ export const useAlerts = (enabled: boolean) => useQuery({ ...alertsQuery(), enab
 export function useMarkAlertRead() {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: (id: number) => api.post(`/api/cellar/alerts/${id}/read`),
+    mutationFn: (id: number) => call(cellarRoutes.markAlertRead, { params: { alertId: id } }),
     onSuccess: () => client.invalidateQueries({ queryKey: cellarKeys.alerts() }),
   });
 }

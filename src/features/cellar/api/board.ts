@@ -1,12 +1,12 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import type { BoardVessel } from '../../../../shared/schemas/cellar';
+import { call } from '../../../lib/api-client';
+import { cellarRoutes } from '../../../../shared/contract/cellar';
 import { cellarKeys } from './keys';
 
 export const boardQuery = () =>
   queryOptions({
     queryKey: cellarKeys.board(),
-    queryFn: () => api.get<BoardVessel[]>('/api/cellar/board'),
+    queryFn: () => call(cellarRoutes.board),
     // A wall screen: keep it current without anyone touching it.
     refetchInterval: 60_000,
   });

@@ -1,16 +1,13 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { call } from '../../../lib/api-client';
 import type { CarbonationQuery } from '../../../../shared/schemas/cellar';
-import type { CarbonationAnswer } from '../../../../shared/contract/cellar';
+import { cellarRoutes } from '../../../../shared/contract/cellar';
 import { cellarKeys } from './keys';
 
 export const carbonationQuery = (query: CarbonationQuery) =>
   queryOptions({
     queryKey: cellarKeys.carbonation(query),
-    queryFn: () =>
-      api.get<CarbonationAnswer>(
-        `/api/cellar/carbonation?${new URLSearchParams(Object.entries(query).map(([k, v]) => [k, String(v)]))}`,
-      ),
+    queryFn: () => call(cellarRoutes.carbonation, { query }),
     retry: false,
   });
 

@@ -1,7 +1,13 @@
 import { outbox } from '../../../lib/outbox';
 import type { ActionEntryInput, PackagingEntryInput, ReadingEntryInput } from '../../../../shared/schemas/cellar';
+import { cellarRoutes } from '../../../../shared/contract/cellar';
+import { pathOf } from '../../../../shared/contract/route';
 
-const PATHS = { reading: 'readings', action: 'actions', packaging: 'packaging' } as const;
+const ROUTES = {
+  reading: cellarRoutes.recordReading,
+  action: cellarRoutes.recordAction,
+  packaging: cellarRoutes.recordPackaging,
+} as const;
 type CellarEntry = ReadingEntryInput | ActionEntryInput | PackagingEntryInput;
 
 /** The outbox group of a batch's cellar writes. */
@@ -14,7 +20,7 @@ export const cellarGroup = (batchId: number) => `cellar:${batchId}`;
 export function useLogCellarEntry(batchId: number) {
   return (entry: CellarEntry, label: string) =>
     outbox().enqueue({
-      url: `/api/cellar/batches/${batchId}/${PATHS[entry.kind]}`,
+      url: pathOf(ROUTES[entry.kind].path, { batchId }),
       body: entry,
       label,
       group: cellarGroup(batchId),

@@ -1,12 +1,13 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import type { CellarPlanInput, CellarPlanView } from '../../../../shared/schemas/cellar';
+import { call } from '../../../lib/api-client';
+import { cellarRoutes } from '../../../../shared/contract/cellar';
+import type { CellarPlanInput } from '../../../../shared/schemas/cellar';
 import { cellarKeys } from './keys';
 
 export function useSavePlan(batchId: number) {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: (input: CellarPlanInput) => api.put<CellarPlanView>(`/api/cellar/batches/${batchId}/plan`, input),
+    mutationFn: (input: CellarPlanInput) => call(cellarRoutes.savePlan, { params: { batchId }, body: input }),
     onSuccess: () => client.invalidateQueries({ queryKey: cellarKeys.all }),
   });
 }

@@ -1,12 +1,13 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { call } from '../../../lib/api-client';
+import { vesselRoutes } from '../../../../shared/contract/cellar';
 import { cellarKeys } from './keys';
 
 /** Marks an emptied vessel clean. */
 export function useMarkClean() {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: (id: number) => api.post(`/api/vessels/${id}/clean`),
+    mutationFn: (id: number) => call(vesselRoutes.markClean, { params: { vesselId: id } }),
     onSuccess: () => client.invalidateQueries({ queryKey: cellarKeys.all }),
   });
 }
@@ -15,7 +16,7 @@ export function useMarkClean() {
 export function useDeleteVessel() {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: (id: number) => api.delete(`/api/vessels/${id}`),
+    mutationFn: (id: number) => call(vesselRoutes.remove, { params: { vesselId: id } }),
     onSuccess: () => client.invalidateQueries({ queryKey: cellarKeys.all }),
   });
 }

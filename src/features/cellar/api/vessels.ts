@@ -1,10 +1,11 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import type { VesselInput, VesselView } from '../../../../shared/schemas/cellar';
+import { call } from '../../../lib/api-client';
+import { vesselRoutes } from '../../../../shared/contract/cellar';
+import type { VesselInput } from '../../../../shared/schemas/cellar';
 import { cellarKeys } from './keys';
 
 export const vesselsQuery = () =>
-  queryOptions({ queryKey: cellarKeys.vessels(), queryFn: () => api.get<VesselView[]>('/api/vessels') });
+  queryOptions({ queryKey: cellarKeys.vessels(), queryFn: () => call(vesselRoutes.list) });
 export const useVessels = () => useQuery(vesselsQuery());
 
 /** Creates a vessel, or saves an existing one when `id` is given. */
@@ -12,7 +13,9 @@ export function useSaveVessel() {
   const client = useQueryClient();
   return useMutation({
     mutationFn: ({ id, input }: { id?: number; input: VesselInput }) =>
-      id ? api.put<VesselView>(`/api/vessels/${id}`, input) : api.post<VesselView>('/api/vessels', input),
+      id
+        ? call(vesselRoutes.update, { params: { vesselId: id }, body: input })
+        : call(vesselRoutes.create, { body: input }),
     onSuccess: () => client.invalidateQueries({ queryKey: cellarKeys.all }),
   });
 }

@@ -1,11 +1,11 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import type { RecipeDetail } from '../../../../shared/contract/recipes';
+import { call } from '../../../lib/api-client';
+import { recipeRoutes } from '../../../../shared/contract/recipes';
 import { recipeKeys } from '../../../lib/recipe-keys';
 
 export const recipeQuery = (recipeId: number) =>
   queryOptions({
     queryKey: recipeKeys.detail(recipeId),
-    queryFn: () => api.get<RecipeDetail>(`/api/recipes/${recipeId}`),
+    queryFn: () => call(recipeRoutes.get, { params: { recipeId } }),
   });
 export const useRecipe = (recipeId: number) => useQuery(recipeQuery(recipeId));

@@ -1,5 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { call } from '../../../lib/api-client';
+import { recipeRoutes } from '../../../../shared/contract/recipes';
 import type {
   CreateRecipeInput,
   SaveScaledInput,
@@ -15,13 +16,11 @@ function useRecipeMutation<I, O>(fn: (input: I) => Promise<O>) {
 }
 
 export const useCreateRecipe = () =>
-  useRecipeMutation((input: CreateRecipeInput) =>
-    api.post<{ id: number; versionId: number; versionNumber: number }>('/api/recipes', input),
-  );
+  useRecipeMutation((input: CreateRecipeInput) => call(recipeRoutes.create, { body: input }));
 
 export const useUpdateRecipe = () =>
   useRecipeMutation(({ recipeId, ...input }: UpdateRecipeInput & { recipeId: number }) =>
-    api.patch(`/api/recipes/${recipeId}`, input),
+    call(recipeRoutes.update, { params: { recipeId }, body: input }),
   );
 
 /** In place (unfrozen versions) or as the next version. */
@@ -39,11 +38,11 @@ export const useSaveVersion = () =>
       input: SaveVersionInput;
     }) =>
       asNew
-        ? api.post<{ id: number; number: number }>(`/api/recipes/${recipeId}/versions`, input)
-        : api.patch<{ id: number; number: number }>(`/api/recipes/${recipeId}/versions/${versionId}`, input),
+        ? call(recipeRoutes.addVersion, { params: { recipeId }, body: input })
+        : call(recipeRoutes.updateVersion, { params: { recipeId, versionId }, body: input }),
   );
 
 export const useSaveScaled = () =>
   useRecipeMutation(({ recipeId, versionId, input }: { recipeId: number; versionId: number; input: SaveScaledInput }) =>
-    api.post<{ id: number; number: number }>(`/api/recipes/${recipeId}/versions/${versionId}/scaled`, input),
+    call(recipeRoutes.saveScaled, { params: { recipeId, versionId }, body: input }),
   );

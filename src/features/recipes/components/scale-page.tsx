@@ -18,7 +18,8 @@ import { displayUnit, showVolume } from '../../../lib/units';
 import { batchVolumeField, issueMessage } from '../../../../shared/quantities/field';
 import { useEquipment } from '../../../lib/equipment';
 import { useSaveScaled } from '../api/save-recipe';
-import { scaleSearch, useScale, type ScaleTarget } from '../api/scale-version';
+import { scaleSearch, useScale } from '../api/scale-version';
+import type { ScaleTarget } from '../../../../shared/schemas/recipes';
 import type { ScaleResult } from '../../../../shared/contract/recipes';
 import { ScaleTable } from './scale-view';
 

@@ -1,6 +1,7 @@
 import { useMutation } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { call } from '../../../lib/api-client';
+import { authRoutes } from '../../../../shared/contract/auth';
 import type { ChangePasswordInput } from '../../../../shared/schemas/auth';
 
 export const useChangePassword = () =>
-  useMutation({ mutationFn: (input: ChangePasswordInput) => api.post<void>('/api/auth/password', input) });
+  useMutation({ mutationFn: (input: ChangePasswordInput) => call(authRoutes.changePassword, { body: input }) });

@@ -1,12 +1,12 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import type { AttachmentView } from '../../../../shared/schemas/taproom';
+import { call } from '../../../lib/api-client';
+import { attachmentRoutes, batchAttachmentRoutes } from '../../../../shared/contract/attachments';
 import { taproomKeys } from './keys';
 
 export const attachmentsQuery = (batchId: number) =>
   queryOptions({
     queryKey: taproomKeys.attachments(batchId),
-    queryFn: () => api.get<AttachmentView[]>(`/api/batches/${batchId}/attachments`),
+    queryFn: () => call(batchAttachmentRoutes.list, { params: { batchId } }),
   });
 export const useAttachments = (batchId: number) => useQuery(attachmentsQuery(batchId));
 
@@ -16,7 +16,7 @@ export function useUploadAttachment(batchId: number) {
     mutationFn: (file: File) => {
       const form = new FormData();
       form.append('file', file);
-      return api.upload<AttachmentView>(`/api/batches/${batchId}/attachments`, form);
+      return call(batchAttachmentRoutes.upload, { params: { batchId }, body: form });
     },
     onSuccess: () => client.invalidateQueries({ queryKey: taproomKeys.attachments(batchId) }),
   });
@@ -26,7 +26,7 @@ export function useUploadAttachment(batchId: number) {
 export function useRemoveAttachment(batchId: number) {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: (id: number) => api.delete(`/api/attachments/${id}`),
+    mutationFn: (id: number) => call(attachmentRoutes.remove, { params: { attachmentId: id } }),
     onSuccess: () => client.invalidateQueries({ queryKey: taproomKeys.attachments(batchId) }),
   });
 }

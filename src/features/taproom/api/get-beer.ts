@@ -1,8 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import type { TaproomBeer } from '../../../../shared/schemas/taproom';
+import { call } from '../../../lib/api-client';
+import { taproomRoutes } from '../../../../shared/contract/taproom';
 import { taproomKeys } from './keys';
 
 export const beerQuery = (id: number) =>
-  queryOptions({ queryKey: taproomKeys.beer(id), queryFn: () => api.get<TaproomBeer>(`/api/taproom/beers/${id}`) });
+  queryOptions({ queryKey: taproomKeys.beer(id), queryFn: () => call(taproomRoutes.beer, { params: { beerId: id } }) });
 export const useBeer = (id: number) => useQuery(beerQuery(id));

@@ -1,11 +1,11 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import type { ReleaseCandidate } from '../../../../shared/contract/taproom';
+import { call } from '../../../lib/api-client';
+import { taproomRoutes } from '../../../../shared/contract/taproom';
 import { taproomKeys } from './keys';
 
 export const releasesQuery = () =>
   queryOptions({
     queryKey: taproomKeys.releases(),
-    queryFn: () => api.get<ReleaseCandidate[]>('/api/taproom/releases'),
+    queryFn: () => call(taproomRoutes.releases),
   });
 export const useReleases = () => useQuery(releasesQuery());

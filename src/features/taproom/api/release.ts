@@ -1,12 +1,13 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import type { PublishReleaseInput, ReleaseDetail, ReleaseSheet } from '../../../../shared/schemas/taproom';
+import { call } from '../../../lib/api-client';
+import { releaseRoutes } from '../../../../shared/contract/taproom';
+import type { PublishReleaseInput, ReleaseSheet } from '../../../../shared/schemas/taproom';
 import { taproomKeys } from './keys';
 
 export const releaseQuery = (batchId: number) =>
   queryOptions({
     queryKey: taproomKeys.release(batchId),
-    queryFn: () => api.get<ReleaseDetail>(`/api/batches/${batchId}/release`),
+    queryFn: () => call(releaseRoutes.get, { params: { batchId } }),
   });
 export const useRelease = (batchId: number) => useQuery(releaseQuery(batchId));
 
@@ -23,7 +24,7 @@ function useInvalidateAfterRelease() {
 export function useSaveReleaseSheet(batchId: number) {
   const invalidate = useInvalidateAfterRelease();
   return useMutation({
-    mutationFn: (sheet: ReleaseSheet) => api.put<ReleaseDetail>(`/api/batches/${batchId}/release`, sheet),
+    mutationFn: (sheet: ReleaseSheet) => call(releaseRoutes.saveSheet, { params: { batchId }, body: sheet }),
     onSuccess: invalidate,
   });
 }
@@ -31,8 +32,7 @@ export function useSaveReleaseSheet(batchId: number) {
 export function usePublishRelease(batchId: number) {
   const invalidate = useInvalidateAfterRelease();
   return useMutation({
-    mutationFn: (input: PublishReleaseInput) =>
-      api.post<ReleaseDetail>(`/api/batches/${batchId}/release/publish`, input),
+    mutationFn: (input: PublishReleaseInput) => call(releaseRoutes.publish, { params: { batchId }, body: input }),
     onSuccess: invalidate,
   });
 }
@@ -42,7 +42,7 @@ export function useSetOnTap(batchId: number) {
   const invalidate = useInvalidateAfterRelease();
   return useMutation({
     mutationFn: (onTap: boolean) =>
-      api.post<ReleaseDetail>(`/api/batches/${batchId}/release/${onTap ? 'back-on-tap' : 'off-tap'}`),
+      call(onTap ? releaseRoutes.backOnTap : releaseRoutes.offTap, { params: { batchId } }),
     onSuccess: invalidate,
   });
 }

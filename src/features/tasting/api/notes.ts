@@ -1,6 +1,7 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import type { TastingNote, TastingNoteInput } from '../../../../shared/schemas/tasting';
+import { call } from '../../../lib/api-client';
+import { tastingRoutes } from '../../../../shared/contract/tasting';
+import type { TastingNoteInput } from '../../../../shared/schemas/tasting';
 
 export const tastingKeys = {
   all: ['tasting'] as const,
@@ -10,14 +11,14 @@ export const tastingKeys = {
 export const tastingNotesQuery = (batchId: number) =>
   queryOptions({
     queryKey: tastingKeys.batch(batchId),
-    queryFn: () => api.get<TastingNote[]>(`/api/batches/${batchId}/tasting-notes`),
+    queryFn: () => call(tastingRoutes.list, { params: { batchId } }),
   });
 export const useTastingNotes = (batchId: number) => useQuery(tastingNotesQuery(batchId));
 
 export function useAddTastingNote(batchId: number) {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: (input: TastingNoteInput) => api.post<TastingNote>(`/api/batches/${batchId}/tasting-notes`, input),
+    mutationFn: (input: TastingNoteInput) => call(tastingRoutes.add, { params: { batchId }, body: input }),
     // The taproom's tasting summary changes too.
     onSuccess: () =>
       Promise.all([
