@@ -1,5 +1,6 @@
 import type { Application, RequestHandler } from 'express';
 import { rateLimit } from 'express-rate-limit';
+import { errorBody } from '../../shared/schemas/errors';
 
 /**
  * Five failed password checks per client in 15 minutes; the sixth answers 429.
@@ -17,9 +18,7 @@ function createSignInLimiter(): RequestHandler {
     standardHeaders: 'draft-8',
     legacyHeaders: false,
     handler: (_req, res) => {
-      res.status(429).json({
-        error: { code: 'too_many_attempts', message: 'Too many failed attempts. Wait 15 minutes and try again.' },
-      });
+      res.status(429).json(errorBody('too_many_attempts', 'Too many failed attempts. Wait 15 minutes and try again.'));
     },
   });
 }

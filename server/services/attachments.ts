@@ -27,7 +27,7 @@ const ACCEPTED: Record<string, { kind: AttachmentKind; extension: string }> = {
 };
 
 const unsupported = () =>
-  new HttpError(415, 'unsupported_type', 'Attach a photo (JPEG, PNG or WebP) or a PDF. This file is none of those.');
+  new HttpError('unsupported_type', 'Attach a photo (JPEG, PNG or WebP) or a PDF. This file is none of those.');
 
 const parser = multer({
   storage: multer.memoryStorage(),

@@ -189,7 +189,6 @@ async function openLink(token: string, purpose: 'invite' | 'reset'): Promise<Inv
 /** A link that was used, has expired or never existed: the person can only ask for a new one. */
 const linkGone = (purpose: 'invite' | 'reset') =>
   new HttpError(
-    404,
     'not_found',
     purpose === 'invite'
       ? 'This invitation has been used or has expired. Ask your head brewer for a new one.'

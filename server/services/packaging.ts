@@ -5,13 +5,17 @@
  */
 import type { Transaction } from 'sequelize';
 import { Batch, BatchLogEntry, PackagingRun } from '../models';
-import { conflict } from '../errors';
+import { wrongStage } from '../errors';
+import { BATCH_STATUS_LABELS, type BatchStatus } from '../../shared/schemas/batches';
 import { appendLogEntry, type LogActor } from './batch-log';
 import { changeBatchStatus, findBatch, releaseVessel } from './batches';
 import { batchActuals } from '../../shared/batches/brew-day';
 import { lineVolumeL, packagingTotals, type PackageLine } from '../../shared/brewing';
 import type { WriteMeta } from '../../shared/schemas/batch-log';
 import type { PackagingEntryInput, PackagingRunView, PackagingSummaryView } from '../../shared/schemas/cellar';
+
+/** Batches that take cellar work (actions and packaging): fermenting or conditioning. */
+export const CELLAR_WORK_STATUSES: readonly BatchStatus[] = ['fermenting', 'conditioning'];
 
 /** Statuses after which no beer of the batch is left in a tank: what was not packaged is a loss. */
 const PACKAGING_DONE = ['packaged', 'released', 'dumped'];
@@ -86,8 +90,14 @@ export async function recordPackaging(
   await appendLogEntry(actor, batchId, { ...input }, meta, {
     onInsert: async (entry, t) => {
       const batch = await findBatch(actor.breweryId, batchId, t);
-      if (!['fermenting', 'conditioning'].includes(batch.status))
-        throw conflict(`Batch ${batch.number} is ${batch.status}: it cannot be packaged now.`);
+      if (!CELLAR_WORK_STATUSES.includes(batch.status)) {
+        const status = BATCH_STATUS_LABELS[batch.status].toLowerCase();
+        throw wrongStage(
+          batch.status,
+          CELLAR_WORK_STATUSES,
+          `Batch ${batch.number} is ${status}: it cannot be packaged now.`,
+        );
+      }
       const earlier = await PackagingRun.findAll({ where: { batchId }, transaction: t });
       // Refuses more in packages, all runs together, than went into the fermenter.
       packagingTotals([...earlier.flatMap((r) => r.lines), ...lines], await knockoutLitres(batch, t));

@@ -7,7 +7,8 @@ import { createHash } from 'node:crypto';
 import { Op, QueryTypes, Transaction } from 'sequelize';
 import { sequelize } from '../config/database';
 import { Batch, BatchLogEntry, GravityReading, IN_FORCE } from '../models';
-import { badRequest, conflict } from '../errors';
+import { badRequest, notFound, wrongStage } from '../errors';
+import { BATCH_STATUS_LABELS, type BatchStatus } from '../../shared/schemas/batches';
 import { appendLogEntries, appendLogEntry, type LogActor } from './batch-log';
 import type { LogEntryInput, Measurements } from '../../shared/schemas/batch-log';
 import { changeBatchStatus, findBatch } from './batches';
@@ -18,7 +19,7 @@ import type { WriteMeta } from '../../shared/schemas/batch-log';
 import type { ProbeImportInput, ProbeImportResult, ReadingEntryInput, ReadingView } from '../../shared/schemas/cellar';
 
 /** Batches that take cellar readings: knocked out and not yet packaged. */
-const READING_STATUSES = ['brewing', 'fermenting', 'conditioning'];
+const READING_STATUSES: readonly BatchStatus[] = ['brewing', 'fermenting', 'conditioning'];
 
 export function toReadingView(r: GravityReading): ReadingView {
   return {
@@ -52,9 +53,12 @@ export function readingInSi(input: ReadingEntryInput): { sg: number; tempC: numb
 /** The first reading of a knocked-out batch starts its fermentation. */
 async function readyForReadings(actor: LogActor, batchId: number, transaction: Transaction): Promise<void> {
   const batch = await Batch.findOne({ where: { id: batchId, breweryId: actor.breweryId }, transaction });
-  if (!batch || !READING_STATUSES.includes(batch.status)) {
-    throw conflict(
-      `Batch ${batch?.number ?? ''} is ${batch?.status ?? 'not found'}: readings are taken from knockout until packaging.`,
+  if (!batch) throw notFound('This batch');
+  if (!READING_STATUSES.includes(batch.status)) {
+    throw wrongStage(
+      batch.status,
+      READING_STATUSES,
+      `Batch ${batch.number} is ${BATCH_STATUS_LABELS[batch.status].toLowerCase()}: readings are taken from knockout until packaging.`,
     );
   }
   if (batch.status === 'brewing') await changeBatchStatus(actor, batchId, { status: 'fermenting' }, transaction);

@@ -5,7 +5,7 @@
 import { Transaction } from 'sequelize';
 import { sequelize } from '../config/database';
 import { Batch, BatchLogEntry, Brewery, User } from '../models';
-import { conflict, notFound, wrongPassword } from '../errors';
+import { conflict, notFound, signedOff, wrongPassword } from '../errors';
 import { checkPassword } from './passwords';
 import { appendLogEntry, brewDaySigned, canonicalJson, entryContent, sha256, type LogActor } from './batch-log';
 import { BREW_DAY_KINDS, type Signature, type WriteMeta } from '../../shared/schemas/batch-log';
@@ -61,7 +61,7 @@ export async function signOffBrewDay(
       transaction,
     });
     if (!batch) throw notFound('This batch');
-    if (await brewDaySigned(batchId, transaction)) throw conflict('This brew day is already signed off.');
+    if (await brewDaySigned(batchId, transaction)) throw signedOff('This brew day is already signed off.');
     const before = await BatchLogEntry.findAll({ where: { batchId }, order: [['sequence', 'ASC']], transaction });
     if (!before.some((e) => BREW_DAY_KINDS.includes(e.kind))) throw conflict('There is nothing logged to sign yet.');
     const entry = await appendLogEntry(

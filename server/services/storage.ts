@@ -28,7 +28,7 @@ const client = new S3Client({
 });
 
 const unavailable = () =>
-  new HttpError(503, 'storage_unavailable', 'File storage is not answering. Nothing was saved; try again in a moment.');
+  new HttpError('storage_unavailable', 'File storage is not answering. Nothing was saved; try again in a moment.');
 
 /** Stores bytes under a key; the key is ours (see attachments), never the client's file name. */
 export async function putObject(key: string, body: Buffer, contentType: string): Promise<void> {

@@ -31,6 +31,12 @@ export const LOG_ENTRY_KINDS = [
 export type LogEntryKind = (typeof LOG_ENTRY_KINDS)[number];
 /** Brew-day kinds: after the head brewer signs the brew day off, only corrections may follow them. */
 export const BREW_DAY_KINDS: readonly string[] = ['step', 'measurement', 'note'];
+/**
+ * The brew-day kinds a sign-off closes: after it, steps and measurements are added only as corrections. A note may
+ * still follow (e.g. an entry the server refused after the sign-off, sent again as a note): it comes after the
+ * signature in the chain, so it never changes what was signed.
+ */
+export const CLOSED_BY_SIGN_OFF: readonly string[] = ['step', 'measurement'];
 
 /**
  * What each measurement is: the API refuses anything outside its quantity's limits, and the tablet checks the
@@ -89,6 +95,7 @@ export const noteEntrySchema = z.strictObject({
   deviation: z.boolean().default(false),
   meaning,
 });
+export type NoteEntryInput = z.infer<typeof noteEntrySchema>;
 
 /** A correction never changes the entry it corrects: it is a new entry that points at it, with a reason. */
 export const correctionEntrySchema = z.strictObject({

@@ -1,12 +1,16 @@
-import { useOutbox, outbox } from '../lib/outbox';
+import { useOutbox } from '../lib/outbox';
 import { showTime } from '../lib/time';
-import { Button, Card } from './ui';
+import { Card } from './ui';
+import { SetAsideEntry } from './set-aside-entry';
 
-/** What this device still has to send for a batch, and anything the server refused (with its message). */
-export function OutboxPanel({ group, timeZone }: { group: string; timeZone: string }) {
+/**
+ * What this device still has to send for a batch (with the last failure while it retries), and what the server
+ * refused for good, set aside with its reason.
+ */
+export function OutboxPanel({ group, timeZone, noteUrl }: { group: string; timeZone: string; noteUrl: string }) {
   const { items, user } = useOutbox(group);
   const waiting = items.filter((i) => i.state === 'waiting');
-  const rejected = items.filter((i) => i.state === 'rejected');
+  const setAside = items.filter((i) => i.state === 'rejected');
   if (!items.length) return null;
   return (
     <Card className="border-2 border-brass-500 p-4" aria-label="Waiting to send">
@@ -24,6 +28,9 @@ export function OutboxPanel({ group, timeZone }: { group: string; timeZone: stri
                   {i.userId !== user?.id && (
                     <span className="block text-sm text-ink-500">Sent when {i.authorName} signs in</span>
                   )}
+                  {i.attempts > 0 && i.message && (
+                    <span className="block text-sm text-ink-500">Not sent yet: {i.message}. Trying again.</span>
+                  )}
                 </span>
                 <span className="tabular-nums text-ink-500">{showTime(i.capturedAt, timeZone)}</span>
               </li>
@@ -31,15 +38,24 @@ export function OutboxPanel({ group, timeZone }: { group: string; timeZone: stri
           </ul>
         </>
       )}
-      {rejected.map((i) => (
-        <div key={i.idempotencyKey} role="alert" className="mt-3 rounded-lg bg-ember-100 p-3 text-ember-700">
-          <p className="font-semibold">Not saved: {i.label}</p>
-          <p>{i.message}</p>
-          <Button variant="secondary" className="mt-2" onClick={() => void outbox().dismiss(i.idempotencyKey)}>
-            I have noted it
-          </Button>
-        </div>
-      ))}
+      {setAside.length > 0 && (
+        <>
+          <h2 className="mt-2 text-lg font-bold" data-testid="set-aside-count">
+            {setAside.length} set aside: the server refused {setAside.length === 1 ? 'it' : 'them'}
+          </h2>
+          <ul>
+            {setAside.map((i) => (
+              <SetAsideEntry
+                key={i.idempotencyKey}
+                item={i}
+                mine={i.userId === user?.id}
+                noteUrl={noteUrl}
+                timeZone={timeZone}
+              />
+            ))}
+          </ul>
+        </>
+      )}
     </Card>
   );
 }

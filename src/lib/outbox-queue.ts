@@ -1,13 +1,18 @@
 /**
  * The device's outbox for signed writes (log entries, readings…): every write is kept in a store (IndexedDB on the
  * page, see src/lib/outbox.ts) with its idempotency key and captured time, survives reloads, and is sent in order
- * when the network allows. Nothing here needs a browser, so the restart fault script drives the same queue in Node.
+ * per group (one batch's brew day, its cellar work) when the network allows. Nothing here needs a browser, so the
+ * restart fault script drives the same queue in Node. It decides by the answer's error code (shared/schemas/errors.ts):
  *
- * - A network failure, 5xx, 409 or 429 keeps the item and retries with backoff.
+ * - A network failure, or a code a retry can pass (a server failure, a 429, a reading before its knockout),
+ *   keeps the item and retries with backoff. Later items of the same group wait behind it; other groups go on.
  * - A 401 (session ended) pauses the whole outbox until the person signs in again; the items are then
  *   sent with their original keys, so nothing is written twice.
- * - Any other 4xx marks the item rejected with the server's message; it stays visible until the person dismisses it.
+ * - A refusal for good (the brew day is signed off, the batch is packaged, a field is wrong) sets the item aside
+ *   with the server's reason: it no longer holds anything back, and stays on the device until the person sends it
+ *   again as a note or discards it.
  */
+import { API_ERRORS, errorCodeOf, type ApiErrorCode } from '../../shared/schemas/errors';
 
 export interface OutboxItem {
   /** The idempotency key, also the item's id. */
@@ -18,16 +23,22 @@ export interface OutboxItem {
   capturedAt: string;
   /** What it is, in words, for the waiting list ("Mash in · 152.0 °F"). */
   label: string;
-  /** Groups items for a screen, e.g. `batch:12`. */
+  /** Groups items for a screen, e.g. `batch:12`; items of one group are sent in order. */
   group: string;
   /** Who did it: only their own session sends it, so a shared tablet never signs one person's work as another's. */
   userId: number;
   authorName: string;
+  /** `rejected`: refused for good and set aside (no longer sent, kept until the person acts on it). */
   state: 'waiting' | 'rejected';
   attempts: number;
-  /** The server's message for a rejected item, or the last failure while waiting. */
+  /** The server's reason for a set-aside item, or the last failure while waiting. */
   message?: string;
+  /** The refusal's code, for a set-aside item. */
+  code?: ApiErrorCode;
 }
+
+/** What a screen hands the outbox to keep and send. */
+export type OutboxWrite = Pick<OutboxItem, 'url' | 'body' | 'label' | 'group'>;
 
 export interface OutboxStore {
   get(): Promise<OutboxItem[] | undefined>;
@@ -42,7 +53,7 @@ export type SendResult =
   | { kind: 'sent' }
   | { kind: 'retry'; message: string }
   | { kind: 'signed-out' }
-  | { kind: 'rejected'; message: string };
+  | { kind: 'rejected'; code: ApiErrorCode; message: string };
 
 /** Sends one item the way the server expects signed writes, and sorts the answer into what to do next. */
 export async function sendItem(item: OutboxItem, deviceId: string): Promise<SendResult> {
@@ -72,9 +83,10 @@ export async function sendItem(item: OutboxItem, deviceId: string): Promise<Send
   const fields = Object.values(data?.error?.fields ?? {});
   const general = data?.error?.message ?? `The server answered ${response.status}`;
   const message = fields.length ? `${general}: ${fields.join('; ')}` : general;
-  if (response.status === 401) return { kind: 'signed-out' };
-  if (response.status >= 500 || response.status === 409 || response.status === 429) return { kind: 'retry', message };
-  return { kind: 'rejected', message };
+  const code = errorCodeOf(response.status, data);
+  if (code === 'unauthenticated') return { kind: 'signed-out' };
+  if (API_ERRORS[code].retryable) return { kind: 'retry', message };
+  return { kind: 'rejected', code, message };
 }
 
 export interface OutboxSnapshot {
@@ -105,33 +117,54 @@ export function createOutbox(store: OutboxStore, send: (item: OutboxItem) => Pro
 
   async function drain(): Promise<void> {
     await reload();
+    /** Groups whose first item failed this run: the items after it wait for it, other groups go on. */
+    const held = new Set<string>();
+    let retryInMs: number | undefined;
     for (;;) {
       const user = snapshot.user;
       if (snapshot.needsSignIn || !user) return;
-      const item = snapshot.items.find((i) => i.state === 'waiting' && i.userId === user.id);
-      if (!item) return;
+      const item = snapshot.items.find((i) => i.state === 'waiting' && i.userId === user.id && !held.has(i.group));
+      if (!item) break;
       const result = await send(item);
       const same = (i: OutboxItem) => i.idempotencyKey === item.idempotencyKey;
       if (result.kind === 'sent') {
         await change((items) => items.filter((i) => !same(i)));
         sentListeners.forEach((l) => l(item));
       } else if (result.kind === 'rejected') {
-        await change((items) => items.map((i) => (same(i) ? { ...i, state: 'rejected', message: result.message } : i)));
+        const { code, message } = result;
+        await change((items) => items.map((i) => (same(i) ? { ...i, state: 'rejected', code, message } : i)));
       } else if (result.kind === 'signed-out') {
         publish({ needsSignIn: true });
         return;
       } else {
-        // Keep the order: nothing after this item goes before it does.
         const attempts = item.attempts + 1;
         await change((items) => items.map((i) => (same(i) ? { ...i, attempts, message: result.message } : i)));
-        clearTimeout(timer);
-        timer = setTimeout(() => void flush(), backoffMs(attempts));
-        return;
+        held.add(item.group);
+        retryInMs = Math.min(retryInMs ?? Infinity, backoffMs(attempts));
       }
+    }
+    if (retryInMs !== undefined) {
+      clearTimeout(timer);
+      timer = setTimeout(() => void flush(), retryInMs);
     }
   }
 
-  /** Sends what is waiting, in order; a second call while sending waits for the same run. */
+  /** A new waiting item, signed by the person on this page. */
+  function newItem(write: OutboxWrite & { capturedAt?: string }): OutboxItem {
+    const user = snapshot.user;
+    if (!user) throw new Error('The outbox has no signed-in person: call setUser() first');
+    return {
+      ...write,
+      userId: user.id,
+      authorName: user.displayName,
+      idempotencyKey: crypto.randomUUID(),
+      capturedAt: write.capturedAt ?? new Date().toISOString(),
+      state: 'waiting',
+      attempts: 0,
+    };
+  }
+
+  /** Sends what is waiting, in order per group; a second call while sending waits for the same run. */
   function flush(): Promise<void> {
     running ??= drain().finally(() => {
       running = null;
@@ -157,30 +190,30 @@ export function createOutbox(store: OutboxStore, send: (item: OutboxItem) => Pro
     load: reload,
     flush,
     /** Keeps a write on the device and tries to send it straight away. */
-    async enqueue(
-      write: Pick<OutboxItem, 'url' | 'body' | 'label' | 'group'> & { capturedAt?: string },
-    ): Promise<OutboxItem> {
-      const user = snapshot.user;
-      if (!user) throw new Error('The outbox has no signed-in person: call setUser() first');
-      const item: OutboxItem = {
-        ...write,
-        userId: user.id,
-        authorName: user.displayName,
-        idempotencyKey: crypto.randomUUID(),
-        capturedAt: write.capturedAt ?? new Date().toISOString(),
-        state: 'waiting',
-        attempts: 0,
-      };
+    async enqueue(write: OutboxWrite & { capturedAt?: string }): Promise<OutboxItem> {
+      const item = newItem(write);
       await change((items) => [...items, item]);
       void flush();
       return item;
+    },
+    /**
+     * Sends a set-aside item's content again as another write (e.g. a note on the batch with the reason), in its
+     * place in one step: it is never lost, nor kept twice. Only the person who typed it may.
+     */
+    async resendAs(idempotencyKey: string, write: OutboxWrite): Promise<OutboxItem> {
+      const next = newItem(write);
+      const original = snapshot.items.find((i) => i.idempotencyKey === idempotencyKey && i.state === 'rejected');
+      if (!original || original.userId !== next.userId) throw new Error('Only its author can send a set-aside entry');
+      await change((items) => [...items.filter((i) => i.idempotencyKey !== idempotencyKey), next]);
+      void flush();
+      return next;
     },
     /** Who is signed in on this page (after sign-in, or signing in again): their waiting items go, with their original keys. */
     setUser(user: { id: number; displayName: string }) {
       publish({ user, needsSignIn: false });
       void flush();
     },
-    /** Removes a rejected item the person has read (and re-entered if needed). */
+    /** Removes a set-aside item the person has read (and re-entered, or chose to discard). */
     dismiss: (idempotencyKey: string) =>
       change((items) => items.filter((i) => i.idempotencyKey !== idempotencyKey || i.state !== 'rejected')),
     /** Drops the signed-in person's items (sign-out after they confirmed); other people's stay. */

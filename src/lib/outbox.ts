@@ -34,7 +34,7 @@ export function outbox(): Outbox {
   return shared;
 }
 
-/** Items waiting or rejected (optionally for one group) and whether the person must sign in again. */
+/** Items waiting or set aside (optionally for one group) and whether the person must sign in again. */
 export function useOutbox(group?: string): OutboxSnapshot {
   const box = outbox();
   const snap = useSyncExternalStore(box.subscribe, box.getSnapshot);

@@ -9,6 +9,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { sequelize } from '../../server/config/database';
 import { routeTable, type RouteEntry } from '../../server/routes/define';
 import { ROLES } from '../../shared/schemas/roles';
+import { API_ERRORS, isApiErrorCode, type ApiErrorCode } from '../../shared/schemas/errors';
 import { agent, createTestBrewery, type Agent, type TestBrewery } from './helpers';
 import { ID_MAKERS, VALID_BODIES, VALID_QUERIES, fillPath, idSource, pathParams, routeKey } from './route-samples';
 
@@ -293,6 +294,11 @@ describe('bad input never answers 5xx and a refusal writes nothing', () => {
           if (res.status >= 400) {
             tally.refused += 1;
             expect(res.body?.error?.message, `a refusal says why: ${context}`).toEqual(expect.any(String));
+            const code = res.body?.error?.code as ApiErrorCode;
+            expect(isApiErrorCode(code), `a refusal carries a code of the contract: ${context}`).toBe(true);
+            expect(res.body.error.retryable, `and says whether a retry can pass: ${context}`).toBe(
+              API_ERRORS[code].retryable,
+            );
             const after = await dbState();
             const { audit_events: auditBefore, ...countsBefore } = before.counts;
             const { audit_events: auditAfter, ...countsAfter } = after.counts;

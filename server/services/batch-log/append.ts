@@ -7,12 +7,13 @@
 import { QueryTypes, Transaction, UniqueConstraintError } from 'sequelize';
 import { sequelize } from '../../config/database';
 import { Batch, BatchLogEntry, IdempotencyKey } from '../../models';
-import { badRequest, conflict, notFound, unprocessable } from '../../errors';
+import { badRequest, notFound, signedOff, unprocessable } from '../../errors';
 import { fieldMessages } from '../../middlewares/validate';
 import { canonicalJson, entryHash, GENESIS_HASH, LOG_HEAD_JOIN, sha256 } from './chain';
 import { checkCorrectionTarget } from './corrections';
 import {
   BREW_DAY_KINDS,
+  CLOSED_BY_SIGN_OFF,
   writeMetaSchema,
   type SignatureMeaning,
   type WriteMeta,
@@ -224,7 +225,7 @@ async function append(
     batchId,
     meta.idempotencyKey,
     correctsEntryId,
-    BREW_DAY_KINDS.includes(kind),
+    CLOSED_BY_SIGN_OFF.includes(kind),
     transaction,
   );
   if (!state) throw notFound('This batch');
@@ -238,7 +239,7 @@ async function append(
   }
 
   const fields = entryFields(actor, batchId, input, meta, Number(state.lastSequence ?? 0) + 1, new Date());
-  if (Number(state.signed)) throw conflict('The brew day is signed off: add a correction instead.');
+  if (Number(state.signed)) throw signedOff('The brew day is signed off: add a correction instead.');
   if (correctsEntryId !== null) checkCorrectionTarget(state.targetKind);
 
   const prevHash = state.lastHash ?? GENESIS_HASH;

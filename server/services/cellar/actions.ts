@@ -2,9 +2,11 @@
  * Logged cellar actions (signed batch log entries) and the carbonation setting capped by the vessel's rating.
  */
 import { BatchLogEntry } from '../../models';
-import { conflict, unprocessable } from '../../errors';
+import { conflict, unprocessable, wrongStage } from '../../errors';
 import { appendLogEntry, type LogActor } from '../batch-log';
 import { assignVessel, changeBatchStatus, findBatch } from '../batches';
+import { CELLAR_WORK_STATUSES } from '../packaging';
+import { BATCH_STATUS_LABELS } from '../../../shared/schemas/batches';
 import { findVessel, vesselOf } from './vessels';
 import { screenUnits, toC } from './units';
 import { carbonationSetting, formatGaugePressure, kpaToPsi, usBblToL } from '../../../shared/brewing';
@@ -78,9 +80,11 @@ export async function recordAction(
     {
       onInsert: async (_e, t) => {
         const batch = await findBatch(actor.breweryId, batchId, t);
-        if (!['fermenting', 'conditioning'].includes(batch.status)) {
-          throw conflict(
-            `Batch ${batch.number} is ${batch.status}: cellar work is logged while it ferments or conditions.`,
+        if (!CELLAR_WORK_STATUSES.includes(batch.status)) {
+          throw wrongStage(
+            batch.status,
+            CELLAR_WORK_STATUSES,
+            `Batch ${batch.number} is ${BATCH_STATUS_LABELS[batch.status].toLowerCase()}: cellar work is logged while it ferments or conditions.`,
           );
         }
         if (input.action === 'transfer') {

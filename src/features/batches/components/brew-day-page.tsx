@@ -7,7 +7,7 @@ import { useCurrentUser, useCan } from '../../../lib/current-user';
 import { outbox, useOutbox } from '../../../lib/outbox';
 import type { OutboxItem } from '../../../lib/outbox-queue';
 import { useBatch } from '../api/get-batch';
-import { batchGroup, logEntry } from '../api/log-entry';
+import { batchGroup, batchLogUrl, logEntry } from '../api/log-entry';
 import { ActualsCard } from './actuals-card';
 import { BoilTimer } from './boil-timer';
 import { LogList } from './log-list';
@@ -260,7 +260,7 @@ export function BrewDayPage() {
         </div>
 
         <div className="space-y-4">
-          <OutboxPanel group={batchGroup(id)} timeZone={timeZone} />
+          <OutboxPanel group={batchGroup(id)} timeZone={timeZone} noteUrl={batchLogUrl(id)} />
           <BoilTimer
             boilStartedAt={done.get('boil-start')?.at ?? null}
             boilEndedAt={boilEnd(steps, done)}

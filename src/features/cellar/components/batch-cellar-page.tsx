@@ -16,6 +16,8 @@ import { ProbeImport } from './probe-import';
 import { PlanForm } from './plan-form';
 import { PredictionNote } from './prediction-note';
 import { OutboxPanel } from '../../../components/outbox-panel';
+import { batchRoutes } from '../../../../shared/contract/batches';
+import { pathOf } from '../../../../shared/contract/route';
 
 function Section({ title, children }: { title: string; children: ReactNode }) {
   return (
@@ -88,7 +90,11 @@ export function BatchCellarPage() {
           )}
         </div>
       </div>
-      <OutboxPanel group={cellarGroup(batchId)} timeZone={tz} />
+      <OutboxPanel
+        group={cellarGroup(batchId)}
+        timeZone={tz}
+        noteUrl={pathOf(batchRoutes.appendLog.path, { id: batchId })}
+      />
       <div className="grid gap-6 lg:grid-cols-[3fr_2fr]">
         <Section title="Fermentation curve">
           {data.readings.length ? (

@@ -119,10 +119,21 @@ describe('cellar forms take one tap at a time', () => {
         />,
       ),
     );
+    type('Count', '5');
     doubleTap(screen.getByRole('form', { name: 'Log a packaging run' }));
     await waitFor(() => expect(delivered('packaging')).toHaveLength(1));
+    expect(delivered('packaging')[0]).toEqual({
+      kind: 'packaging',
+      lines: [{ kind: 'keg', size: 'half_bbl', count: 5 }],
+      final: false,
+    });
     await settle();
     expect(delivered('packaging')).toHaveLength(1);
+    // The next run starts with no count: nothing of this run is carried into it.
+    await screen.findByText(/Saved on this tablet: Packaging/);
+    expect(valueOf('Count')).toBe('');
+    fireEvent.submit(screen.getByRole('form', { name: 'Log a packaging run' }));
+    expect(await screen.findByText('Count: enter a whole number')).toBeTruthy();
   });
 });
 

@@ -16,6 +16,12 @@ import { useSubmitOnce } from '../../../lib/use-submit-once';
 
 const CONTAINER_SIZES_ML = [355, 473, 500, 330, 750];
 
+/**
+ * A new line's count, left for the person to type (the schema asks for it): a run is signed with what was
+ * packaged, never with a number the form put there.
+ */
+const UNCOUNTED = { count: undefined } as unknown as { count: number };
+
 /** Packaging volumes in one unit side by side: bbl (US) or L (metric). */
 const volume = (system: UnitSystem, litres: number) =>
   system === 'us' ? `${lToUsBbl(litres).toFixed(2)} bbl` : `${litres.toFixed(0)} L`;
@@ -45,7 +51,7 @@ export function PackagingForm({
     resolver: zodResolver(packagingEntrySchema),
     defaultValues: {
       kind: 'packaging',
-      lines: [{ kind: 'keg', size: unitSystem === 'us' ? 'half_bbl' : 'keg_50l', count: 1 }],
+      lines: [{ kind: 'keg', size: unitSystem === 'us' ? 'half_bbl' : 'keg_50l', ...UNCOUNTED }],
       final: false,
     },
   });
@@ -147,7 +153,7 @@ export function PackagingForm({
           </div>
         ))}
         {formState.errors.lines?.message && <p className="text-sm text-ember-700">{formState.errors.lines.message}</p>}
-        <Button variant="secondary" onClick={() => lines.append({ kind: 'can', sizeMl: 355, count: 24 })}>
+        <Button variant="secondary" onClick={() => lines.append({ kind: 'can', sizeMl: 355, ...UNCOUNTED })}>
           Add a line
         </Button>
         <label className="flex min-h-touch items-center gap-3 text-base">
