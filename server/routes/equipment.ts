@@ -1,7 +1,7 @@
 import { equipmentRoutes } from '../../shared/contract/recipes';
 import { defineRouter } from './define';
 import * as equipment from '../services/equipment';
-import { recordAudit } from '../services/audit';
+import { withAudit } from '../services/audit';
 
 export const equipmentRouter = defineRouter('/api/equipment', equipmentRoutes, {
   list: {
@@ -25,8 +25,9 @@ export const equipmentRouter = defineRouter('/api/equipment', equipmentRoutes, {
   remove: {
     access: 'equipment.edit',
     handler: async ({ user, params, req, res }) => {
-      await equipment.deleteEquipment(user.breweryId, params.equipmentId);
-      await recordAudit(req, 'equipment.remove', { equipmentId: params.equipmentId });
+      await withAudit(req, 'equipment.remove', { equipmentId: params.equipmentId }, (t) =>
+        equipment.deleteEquipment(user.breweryId, params.equipmentId, t),
+      );
       res.status(204).end();
     },
   },

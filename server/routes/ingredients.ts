@@ -1,7 +1,7 @@
 import { ingredientRoutes } from '../../shared/contract/recipes';
 import { defineRouter } from './define';
 import * as ingredients from '../services/ingredients';
-import { recordAudit } from '../services/audit';
+import { withAudit } from '../services/audit';
 
 export const ingredientsRouter = defineRouter('/api/ingredients', ingredientRoutes, {
   list: {
@@ -25,8 +25,9 @@ export const ingredientsRouter = defineRouter('/api/ingredients', ingredientRout
   remove: {
     access: 'ingredient.edit',
     handler: async ({ user, params, req, res }) => {
-      await ingredients.deleteIngredient(user.breweryId, params.ingredientId);
-      await recordAudit(req, 'ingredient.remove', { ingredientId: params.ingredientId });
+      await withAudit(req, 'ingredient.remove', { ingredientId: params.ingredientId }, (t) =>
+        ingredients.deleteIngredient(user.breweryId, params.ingredientId, t),
+      );
       res.status(204).end();
     },
   },

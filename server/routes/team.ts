@@ -21,8 +21,12 @@ export const teamRouter = defineRouter('/api/team', teamRoutes, {
   updateMember: {
     access: 'team.manage',
     handler: async ({ user, params, body, req, res }) => {
-      const member = await auth.updateMember(user, params.userId, body);
-      await recordAudit(req, body.role ? 'role.change' : 'access.change', { userId: member.id, ...body });
+      const member = await withAudit(
+        req,
+        body.role ? 'role.change' : 'access.change',
+        { userId: params.userId, ...body },
+        (t) => auth.updateMember(user, params.userId, body, t),
+      );
       res.json({ id: member.id, role: member.role, disabled: Boolean(member.disabledAt) });
     },
   },

@@ -113,8 +113,8 @@ export async function signUp(input: SignUpInput): Promise<User> {
 }
 
 /** Ends every session of a person except, optionally, the one making the request. */
-export async function endSessions(userId: number, exceptSid?: string): Promise<void> {
-  await Session.destroy({ where: { userId, ...(exceptSid ? { sid: { [Op.ne]: exceptSid } } : {}) } });
+export async function endSessions(userId: number, exceptSid?: string, transaction?: Transaction): Promise<void> {
+  await Session.destroy({ where: { userId, ...(exceptSid ? { sid: { [Op.ne]: exceptSid } } : {}) }, transaction });
 }
 
 export async function changePassword(userId: number, input: ChangePasswordInput, currentSid: string): Promise<void> {
@@ -293,14 +293,19 @@ export async function teamMembers(breweryId: number): Promise<Team> {
   };
 }
 
-export async function updateMember(head: Express.User, userId: number, input: UpdateMemberInput): Promise<User> {
-  const user = await User.findOne({ where: { id: userId, breweryId: head.breweryId } });
+export async function updateMember(
+  head: Express.User,
+  userId: number,
+  input: UpdateMemberInput,
+  transaction?: Transaction,
+): Promise<User> {
+  const user = await User.findOne({ where: { id: userId, breweryId: head.breweryId }, transaction });
   if (!user) throw notFound('Teammate');
   if (user.id === head.id) throw conflict('You cannot change your own role or access; ask another head brewer');
   if (input.role) user.role = input.role;
   if (input.disabled !== undefined) user.disabledAt = input.disabled ? new Date() : null;
-  await user.save();
-  if (input.disabled || input.role) await endSessions(user.id);
+  await user.save({ transaction });
+  if (input.disabled || input.role) await endSessions(user.id, undefined, transaction);
   return user;
 }
 

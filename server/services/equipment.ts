@@ -1,4 +1,5 @@
 /** Equipment profiles: a brewery's brewhouses, as shared/brewing sees them. */
+import type { Transaction } from 'sequelize';
 import { validateEquipment } from '../../shared/brewing';
 import type { EquipmentInput } from '../../shared/schemas/recipes';
 import { EquipmentProfile, RecipeVersion } from '../models';
@@ -28,13 +29,13 @@ export async function updateEquipment(breweryId: number, id: number, input: Equi
 }
 
 /** Removes a profile no recipe version was written for; one that was stays, as part of those versions' record (409). */
-export async function deleteEquipment(breweryId: number, id: number): Promise<void> {
-  const row = await findEquipment(breweryId, id);
-  const versions = await RecipeVersion.count({ where: { equipmentProfileId: id } });
+export async function deleteEquipment(breweryId: number, id: number, transaction?: Transaction): Promise<void> {
+  const row = await findEquipment(breweryId, id, transaction);
+  const versions = await RecipeVersion.count({ where: { equipmentProfileId: id }, transaction });
   if (versions > 0) {
     throw conflict(
       `${row.name} is what ${versions === 1 ? 'a recipe version was' : `${versions} recipe versions were`} written for, so it stays. Rename it if it is no longer in use.`,
     );
   }
-  await row.destroy();
+  await row.destroy({ transaction });
 }

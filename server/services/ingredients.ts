@@ -72,6 +72,6 @@ export async function updateIngredient(breweryId: number, id: number, input: Ing
 }
 
 /** Removes an entry from the library; recipes keep their own copy of what they use. */
-export async function deleteIngredient(breweryId: number, id: number): Promise<void> {
-  if ((await Ingredient.destroy({ where: { id, breweryId } })) === 0) throw notFound('This ingredient');
+export async function deleteIngredient(breweryId: number, id: number, transaction?: Transaction): Promise<void> {
+  if ((await Ingredient.destroy({ where: { id, breweryId }, transaction })) === 0) throw notFound('This ingredient');
 }

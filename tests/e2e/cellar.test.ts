@@ -152,7 +152,7 @@ describe('cellar readings on the tablet (Chromium, 1024×768)', () => {
     await page.goto('/cellar');
 
     // The demo batch a week into fermentation: a curve with its prediction.
-    await page.getByRole('article', { name: 'FV-1' }).click();
+    await page.getByRole('article', { name: 'FV-1', exact: true }).click();
     await page.getByRole('heading', { name: 'Fermentation curve' }).scrollIntoViewIfNeeded();
     await screenshot(page, 'cellar-curve-1024.png', { fullPage: false });
   });
@@ -238,7 +238,7 @@ describe('cellar readings on the tablet (Chromium, 1024×768)', () => {
         .poll(() => page.getByTestId('plan-read-only').textContent())
         .toMatch(/^Read only: a head brewer changes the plan/);
       await page.goto('/cellar');
-      await page.getByRole('article', { name: 'FV-1' }).click();
+      await page.getByRole('article', { name: 'FV-1', exact: true }).click();
       await page.getByRole('heading', { name: 'Fermentation curve' }).scrollIntoViewIfNeeded();
       await screenshot(page, 'cellar-batch-portrait-768.png', { fullPage: false });
       await screenshot(page, 'cellar-batch-full-portrait-768.png');

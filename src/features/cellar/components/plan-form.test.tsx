@@ -1,10 +1,9 @@
 // The cellar plan: the head brewer edits it; anyone else reads it as text, told so first.
-import { describe, expect, it, vi } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { render, screen } from '@testing-library/react';
 import type { CellarPlanView } from '../../../../shared/schemas/cellar';
-
-vi.mock('../api/plan', () => ({ useSavePlan: () => ({ mutateAsync: vi.fn(), isPending: false }) }));
-const { PlanForm } = await import('./plan-form');
+import { withQueries } from '../../../../tests/component/network';
+import { PlanForm } from './plan-form';
 
 const plan: CellarPlanView = {
   saved: true,
@@ -19,7 +18,7 @@ const plan: CellarPlanView = {
 
 describe('cellar plan', () => {
   it('shows the assistant the plan as text, with the read-only note first and no fields', () => {
-    const { container } = render(<PlanForm batchId={1} plan={plan} unitSystem="us" canEdit={false} />);
+    const { container } = render(withQueries(<PlanForm batchId={1} plan={plan} unitSystem="us" canEdit={false} />));
     expect(container.querySelectorAll('input')).toHaveLength(0);
     expect(screen.queryByRole('button')).toBeNull();
     expect(container.firstElementChild!.firstElementChild!.textContent).toMatch(
@@ -32,7 +31,7 @@ describe('cellar plan', () => {
   });
 
   it('gives the head brewer fields and a save button', () => {
-    render(<PlanForm batchId={1} plan={plan} unitSystem="us" canEdit />);
+    render(withQueries(<PlanForm batchId={1} plan={plan} unitSystem="us" canEdit />));
     expect(screen.getByLabelText<HTMLInputElement>('Planned FG').disabled).toBe(false);
     expect(screen.getByRole('button', { name: 'Save cellar plan' })).toBeTruthy();
   });
