@@ -1,10 +1,10 @@
 // The demo brewery's taproom: two beers on tap, one coming soon, one packaged and waiting for the head
 // brewer's release. Each batch carries a full record (brew-day log with its OG, cellar readings, packaging,
 // tasting notes) so the released numbers come from the logs. Every name, number and word is invented.
-import type { Transaction } from 'sequelize';
-import { Batch, PackagingRun, Recipe, RecipeVersion, Release } from '../models';
+import { Op, type Transaction } from 'sequelize';
+import { Batch, PackagingRun, Recipe, RecipeVersion, Release, Vessel } from '../models';
 import { freezeRecipeVersion, planForBatch } from '../services/recipe-plans';
-import { createBatchFromPlan } from '../services/batches';
+import { assignVessel, createBatchFromPlan } from '../services/batches';
 import { appendLogEntry, type LogActor } from '../services/batch-log';
 import { addTastingNote } from '../services/tasting';
 import { writeReading } from '../services/readings';
@@ -125,6 +125,17 @@ const BEERS: DemoBeer[] = [
   { recipeIndex: 3, brewedDaysAgo: 24, ogOffset: -0.002, fgOffset: 0.001, stage: 'packaged', notes: [] },
 ];
 
+/** The smallest clean bright tank the beer fits in (the cellar seed made them). */
+async function brightTankFor(breweryId: number, litres: number, t: Transaction): Promise<Vessel> {
+  const tank = await Vessel.findOne({
+    where: { breweryId, type: 'bright_tank', currentBatchId: null, capacityL: { [Op.gte]: litres } },
+    order: [['capacityL', 'ASC']],
+    transaction: t,
+  });
+  if (!tank) throw new Error('The demo cellar has no bright tank for the conditioning beer');
+  return tank;
+}
+
 async function brew(ctx: DemoContext, beer: DemoBeer, recipe: Recipe, t: Transaction): Promise<Batch> {
   const { brewery, users } = ctx;
   const assistant: LogActor = {
@@ -161,9 +172,13 @@ async function brew(ctx: DemoContext, beer: DemoBeer, recipe: Recipe, t: Transac
   });
 
   let minute = 0;
+  // Each beer at its own recipe's temperatures: pitched cool, fermented at primary, raised for the D-rest near
+  // terminal gravity, then crashed cold.
+  const { yeast, fermentation } = version.content;
   for (const step of brewDaySteps(plan)) {
     minute += step.boilMinute !== undefined ? 5 : 18;
-    const measurements = step.key === 'knockout-end' ? { gravitySg: og, volumeL: knockoutL, tempC: 18.5 } : undefined;
+    const measurements =
+      step.key === 'knockout-end' ? { gravitySg: og, volumeL: knockoutL, tempC: yeast.pitchTempC } : undefined;
     await appendLogEntry(
       assistant,
       batch.id,
@@ -175,19 +190,28 @@ async function brew(ctx: DemoContext, beer: DemoBeer, recipe: Recipe, t: Transac
   await batch.update({ status: 'fermenting' }, { transaction: t });
 
   // Daily-ish readings falling to the final gravity, recorded as the cellar records them (a log entry and its reading row).
-  const readings = [og - (og - fg) * 0.45, og - (og - fg) * 0.85, fg + 0.001, fg];
-  for (const [i, raw] of readings.entries()) {
+  const primaryC = fermentation.primaryTempC;
+  const readings: [number, number][] = [
+    [og - (og - fg) * 0.45, primaryC],
+    [og - (og - fg) * 0.85, primaryC],
+    [fg + 0.001, fermentation.dRestTempC ?? primaryC],
+    [fg, fermentation.crashTempC],
+  ];
+  for (const [i, [raw, tempC]] of readings.entries()) {
     const sg = Math.round(raw * 1000) / 1000;
     await writeReading(
       assistant,
       batch.id,
-      { kind: 'reading', method: 'hydrometer', gravity: sg, gravityUnit: 'sg', temp: 19, tempUnit: 'c' },
+      { kind: 'reading', method: 'hydrometer', gravity: sg, gravityUnit: 'sg', temp: tempC, tempUnit: 'c' },
       meta(at(60 * 24 * (2 + i * 2))),
       t,
     );
   }
   await batch.update({ status: 'conditioning' }, { transaction: t });
-  if (beer.stage === 'conditioning') return batch;
+  if (beer.stage === 'conditioning') {
+    await assignVessel(brewery.id, batch.id, (await brightTankFor(brewery.id, knockoutL, t)).id, t);
+    return batch;
+  }
 
   const lines: PackageLine[] = [
     { kind: 'keg', size: 'sixth_bbl', count: Math.floor((knockoutL * 0.5) / KEG_SIZES.sixth_bbl) },

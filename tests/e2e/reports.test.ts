@@ -22,7 +22,7 @@ afterAll(async () => {
 });
 
 describe('reports (Chromium, 1024×768)', () => {
-  it('shows the head brewer last month’s production per beer in barrels and hectolitres, with CSV and print', async () => {
+  it('shows the US head brewer last month’s production per beer in barrels only, with CSV and print', async () => {
     const page = await brewer.newPage();
     await signIn(page, maren.email);
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Production' }).click();
@@ -31,7 +31,10 @@ describe('reports (Chromium, 1024×768)', () => {
     // The demo brewery brewed within the last weeks: last month (the default) has figures and a total.
     const total = page.getByRole('row').filter({ hasText: 'Total' });
     await expect.poll(() => total.count(), { timeout: 15_000 }).toBe(1);
-    expect(await total.textContent()).toMatch(/\d+\.\d\d\s*\d+\.\d\d hL/);
+    expect(await total.textContent()).toMatch(/^Total(\d+\.\d\d){4}$/);
+    // A US brewery never meets a litre: the figures are in barrels and no hectolitre is shown beside them.
+    expect(await page.getByRole('columnheader', { name: 'Brewed (knockout) (bbl)' }).count()).toBe(1);
+    expect(await page.locator('main').textContent()).not.toMatch(/\bhL\b|hectolitre/i);
     const csv = page.getByRole('link', { name: 'Download CSV' });
     expect(await csv.getAttribute('href')).toMatch(/^\/api\/reports\/production\/csv\?month=\d{4}-\d{2}$/);
     const response = await page.request.get((await csv.getAttribute('href'))!);

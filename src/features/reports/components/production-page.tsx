@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { lToHl, lToUsBbl } from '../../../../shared/brewing';
+import { QUANTITIES, type DisplayUnit, type UnitSystem } from '../../../../shared/quantities';
 import { packageName } from '../../../../shared/schemas/cellar';
 import type { BeerFigures } from '../../../../shared/schemas/reports';
 import {
@@ -25,8 +25,10 @@ const FIGURES = [
   ['inTankL', 'In tanks at month end'],
 ] as const;
 
-const bbl = (l: number) => lToUsBbl(l).toFixed(2);
-const hl = (l: number) => lToHl(l).toFixed(2);
+/** Production is counted in the brewery's larger volume unit: US barrels or hectolitres, never both. */
+const reportUnit = (system: UnitSystem): DisplayUnit =>
+  QUANTITIES.volume.units[system][1] ?? QUANTITIES.volume.units[system][0];
+const figure = (u: DisplayUnit, l: number) => u.fromSi(l).toFixed(2);
 
 function lastMonth(): string {
   const d = new Date();
@@ -35,25 +37,35 @@ function lastMonth(): string {
   return d.toISOString().slice(0, 7);
 }
 
-function FiguresRow({ name, b, strong }: { name: string; b: Omit<BeerFigures, 'beerName'>; strong?: boolean }) {
+function FiguresRow({
+  name,
+  b,
+  unit,
+  strong,
+}: {
+  name: string;
+  b: Omit<BeerFigures, 'beerName'>;
+  unit: DisplayUnit;
+  strong?: boolean;
+}) {
   return (
     <tr className={strong ? 'font-bold' : undefined}>
       <Td>{name}</Td>
       {FIGURES.map(([key]) => (
         <Td key={key} className="text-right">
-          {bbl(b[key])}
-          <span className="block text-sm font-normal text-ink-500">{hl(b[key])} hL</span>
+          {figure(unit, b[key])}
         </Td>
       ))}
     </tr>
   );
 }
 
-/** The month's production per beer and in total, in US barrels and hectolitres; CSV and a print-ready page. */
+/** The month's production per beer and in total, in the brewery's barrels or hectolitres; CSV and a print-ready page. */
 export function ProductionPage() {
   const [month, setMonth] = useState(lastMonth);
   const report = useProductionReport(month);
   const me = useCurrentUser();
+  const unit = reportUnit(me.brewery.unitSystem);
   return (
     <div className="space-y-5">
       <PageHeader
@@ -92,8 +104,8 @@ export function ProductionPage() {
       ) : (
         <>
           <p className="text-sm text-ink-500">
-            {month}, in the brewery's time zone ({report.data.timeZone}). US barrels of 31 gallons; hectolitres below
-            each figure.
+            {month}, in the brewery's time zone ({report.data.timeZone}).{' '}
+            {unit.unit === 'bbl' ? 'US barrels of 31 gallons.' : 'Hectolitres of 100 litres.'}
           </p>
           <Table>
             <thead>
@@ -101,16 +113,16 @@ export function ProductionPage() {
                 <Th>Beer</Th>
                 {FIGURES.map(([key, label]) => (
                   <Th key={key} className="text-right">
-                    {label} (bbl)
+                    {label} ({unit.unit})
                   </Th>
                 ))}
               </tr>
             </thead>
             <tbody>
               {report.data.beers.map((b) => (
-                <FiguresRow key={b.beerName} name={b.beerName} b={b} />
+                <FiguresRow key={b.beerName} name={b.beerName} b={b} unit={unit} />
               ))}
-              <FiguresRow name="Total" b={report.data.totals} strong />
+              <FiguresRow name="Total" b={report.data.totals} unit={unit} strong />
             </tbody>
           </Table>
           <h2 className="pt-2 text-xl font-bold text-ink-900">Packaged by package</h2>
@@ -123,8 +135,7 @@ export function ProductionPage() {
                   <Th>Beer</Th>
                   <Th>Package</Th>
                   <Th className="text-right">Count</Th>
-                  <Th className="text-right">bbl</Th>
-                  <Th className="text-right">hL</Th>
+                  <Th className="text-right">{unit.unit}</Th>
                 </tr>
               </thead>
               <tbody>
@@ -133,8 +144,7 @@ export function ProductionPage() {
                     <Td>{p.beerName}</Td>
                     <Td>{packageName(p.kind, p.size)}</Td>
                     <Td className="text-right">{p.count}</Td>
-                    <Td className="text-right">{bbl(p.volumeL)}</Td>
-                    <Td className="text-right">{hl(p.volumeL)}</Td>
+                    <Td className="text-right">{figure(unit, p.volumeL)}</Td>
                   </tr>
                 ))}
               </tbody>
