@@ -313,7 +313,7 @@ describe('packaging summary', () => {
     render(withQueries(<PackagingForm batchId={1} packaging={nothingPackaged} unitSystem="us" />));
     fireEvent.change(screen.getAllByLabelText('Size')[0]!, { target: { value: 'sixth_bbl' } });
     fireEvent.click(screen.getByRole('button', { name: 'Add a line' }));
-    const sizes = screen.getAllByLabelText('Size') as HTMLSelectElement[];
+    const sizes = screen.getAllByLabelText<HTMLSelectElement>('Size');
     expect(sizes.map((s) => s.value)).toEqual(['sixth_bbl', 'sixth_bbl']);
     expect((screen.getAllByLabelText('Count')[1] as HTMLInputElement).value).toBe('');
   });
