@@ -17,7 +17,7 @@ import { QUANTITIES } from '../../../../shared/quantities';
 import { QuantityField } from '../../../components/ui/quantity-field';
 import { quantityResolver } from '../../../lib/quantity-resolver';
 import { useLogCellarEntry } from '../api/log-cellar-entry';
-import { useVessels } from '../api/vessels';
+import { useVessels } from '../../../lib/vessels';
 import { useSubmitOnce } from '../../../lib/use-submit-once';
 import { optionalNumber } from './form-values';
 
