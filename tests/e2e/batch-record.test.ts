@@ -1,25 +1,12 @@
 // The batch record on a 1024×768 tablet for a US brewery (the demo brewery works in US units): every cellar
 // action and packaging run shown in full, in °F, gal/bbl and psi, never in litres, °C or kPa.
-import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { BrowserContext, Page } from 'playwright-core';
-import { openBrowser, screenshot, signIn } from './browser';
+import { openBrowser, screenshot, signedPost, signIn } from './browser';
 import { DEMO_PEOPLE } from '../../server/seed/demo';
 
-/** A signed write straight to the API from a signed-in page, with the headers the outbox sends. */
-async function post(page: Page, url: string, data: unknown): Promise<unknown> {
-  const res = await page.request.post(url, {
-    data,
-    headers: {
-      'x-kettlewright': '1',
-      'Idempotency-Key': randomUUID(),
-      'X-Captured-At': new Date().toISOString(),
-      'X-Device-Id': 'e2e-cellar-tablet',
-    },
-  });
-  expect(res.status(), `${url}: ${await res.text()}`).toBeLessThan(300);
-  return res.json();
-}
+const post = (page: Page, url: string, data: unknown): Promise<unknown> =>
+  signedPost(page, url, data, 'e2e-cellar-tablet');
 
 type Vessel = { id: number; name: string; type: string; status: string; currentBatchId: number | null };
 
