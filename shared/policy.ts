@@ -58,8 +58,9 @@ export const POLICY = {
   'cellar.logReading': brewing,
   'cellar.logAction': brewing,
   'cellar.logPackaging': brewing,
-  // Cellar alerts: read in the app and e-mailed to these roles.
-  'cellar.alerts': head,
+  // Cellar alerts: read in the app and e-mailed to these roles. The assistant brewer takes most readings and
+  // does the cellar work the alerts call for (start the D-rest, check a stalled tank), so both brewers see them.
+  'cellar.alerts': brewing,
 
   'report.production.read': head,
   'report.history.read': brewing,

@@ -47,7 +47,7 @@ export const PINNED_POLICY: Record<string, PinnedRule> = {
   'cellar.logReading': ['head_brewer', 'assistant_brewer'],
   'cellar.logAction': ['head_brewer', 'assistant_brewer'],
   'cellar.logPackaging': ['head_brewer', 'assistant_brewer'],
-  'cellar.alerts': ['head_brewer'],
+  'cellar.alerts': ['head_brewer', 'assistant_brewer'],
 
   'report.production.read': ['head_brewer'],
   'report.history.read': ['head_brewer', 'assistant_brewer'],

@@ -1,7 +1,8 @@
 /**
- * Cellar alerts for the head brewer: the D-rest trigger crossed, gravity not moving across three
- * readings, no reading for the plan's interval. The first two are raised once per batch, "no reading" once per
- * lapse (a unique index on batch, kind and occasion), shown in the app and e-mailed to every head brewer.
+ * Cellar alerts for the brewers: the D-rest trigger crossed, gravity not falling over a day (shared/brewing's
+ * stall rule), no reading for the plan's interval. The first two are raised once per batch, "no reading" once per
+ * lapse (a unique index on batch, kind and occasion), shown in the app and e-mailed to every role the access
+ * policy lets read cellar alerts.
  */
 import { Op, QueryTypes, UniqueConstraintError } from 'sequelize';
 import { sequelize } from '../config/database';
@@ -11,7 +12,14 @@ import { rolesFor } from '../../shared/policy';
 import { sendMail, publicLink } from './mail';
 import { logger } from '../logger';
 import { cellarPlanFor, cellarPlansFor } from './cellar/plans';
-import { crossesDRestTrigger, dRestTriggerSg, gravityStalled, readingOverdue } from '../../shared/brewing';
+import {
+  crossesDRestTrigger,
+  dRestTriggerSg,
+  gravityStalled,
+  readingOverdue,
+  STALL_MAX_FALL_POINTS,
+  STALL_WINDOW_HOURS,
+} from '../../shared/brewing';
 import type { AlertKind, AlertView } from '../../shared/schemas/cellar';
 
 const sg3 = (sg: number) => sg.toFixed(3);
@@ -81,16 +89,12 @@ export async function evaluateReadingAlerts(breweryId: number, batchId: number):
       `Gravity ${sg3(readings[crossing]!.sg)} reached the D-rest trigger (${sg3(trigger)}): start the D-rest`,
     );
   }
-  if (
-    gravityStalled(
-      readings.slice(-3).map((r) => r.sg),
-      trigger,
-    )
-  ) {
+  const points = readings.map((r) => ({ atMs: r.takenAt.getTime(), sg: r.sg }));
+  if (gravityStalled(points, trigger)) {
     await raise(
       batch,
       'stalled',
-      `Gravity has not moved across three readings (${sg3(readings[readings.length - 1]!.sg)}), above the D-rest trigger`,
+      `Gravity has fallen no more than ${STALL_MAX_FALL_POINTS} point in ${STALL_WINDOW_HOURS} hours (${sg3(readings[readings.length - 1]!.sg)}), above the D-rest trigger`,
     );
   }
 }

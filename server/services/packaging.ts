@@ -1,6 +1,7 @@
 /**
  * Packaging runs: each is a signed batch log entry with its `packaging_runs` row in the same
- * transaction. Volumes and losses come from shared/brewing against the batch's knockout volume;
+ * transaction. Volumes and losses come from shared/brewing against what went into the tank packaged from
+ * (the bright tank's transfer volume, else knockout);
  * the final run empties the vessel and moves the batch to packaged.
  */
 import type { Transaction } from 'sequelize';
@@ -10,7 +11,13 @@ import { BATCH_STATUS_LABELS, type BatchStatus } from '../../shared/schemas/batc
 import { appendLogEntry, type LogActor } from './batch-log';
 import { changeBatchStatus, findBatch, releaseVessel } from './batches';
 import { batchActuals } from '../../shared/batches/brew-day';
-import { lineVolumeL, packagingTotals, type PackageLine } from '../../shared/brewing';
+import {
+  lineVolumeL,
+  packagingLoss,
+  packagingTotals,
+  type PackageLine,
+  type PackagingSource,
+} from '../../shared/brewing';
 import type { WriteMeta } from '../../shared/schemas/batch-log';
 import type { PackagingEntryInput, PackagingRunView, PackagingSummaryView } from '../../shared/schemas/cellar';
 
@@ -62,21 +69,44 @@ export async function packagingSummary(batch: Batch, transaction?: Transaction):
     transaction,
   });
   const knockoutL = await knockoutLitres(batch, transaction);
-  const totals = packagingTotals(
-    runs.flatMap((r) => r.lines),
-    knockoutL,
-  );
+  const { source, sourceL } = await packagedFrom(batch.id, knockoutL, transaction);
+  const packagedL = runs.reduce((sum, r) => sum + r.packagedL, 0);
   // Before the last run the difference is beer still in the tank, not a loss.
   const complete = PACKAGING_DONE.includes(batch.status);
+  const loss = packagingLoss(packagedL, sourceL, source);
   return {
     runs: runs.map((r) => toRunView(r, authors.find((a) => Number(a.id) === Number(r.logEntryId))?.authorName ?? '')),
     knockoutL,
-    packagedL: totals.packagedL,
+    source,
+    sourceL,
+    packagedL,
     complete,
-    notPackagedL: complete ? 0 : totals.lossL,
-    lossL: complete ? totals.lossL : null,
-    lossFraction: complete ? totals.lossFraction : null,
+    notPackagedL: complete ? 0 : loss.lossL,
+    lossL: complete ? loss.lossL : null,
+    lossFraction: complete ? loss.lossFraction : null,
+    lossImplausible: complete && loss.implausible,
   };
+}
+
+/**
+ * The tank the beer is packaged from and what went into it: the volume of the last transfer into a bright
+ * tank, or the knockout volume when it is packaged straight from the fermenter.
+ */
+async function packagedFrom(
+  batchId: number,
+  knockoutL: number,
+  transaction?: Transaction,
+): Promise<{ source: PackagingSource; sourceL: number }> {
+  const transfer = await BatchLogEntry.findOne({
+    where: { batchId, kind: 'action', stepKey: 'transfer' },
+    order: [['sequence', 'DESC']],
+    attributes: ['data'],
+    transaction,
+  });
+  const volumeL = transfer?.data.volumeL;
+  return typeof volumeL === 'number' && volumeL > 0
+    ? { source: 'bright_tank', sourceL: volumeL }
+    : { source: 'fermenter', sourceL: knockoutL };
 }
 
 /** Records a packaging run; refuses (422) more beer in packages than was knocked out. */

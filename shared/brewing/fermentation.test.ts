@@ -100,23 +100,91 @@ describe('refractometer', () => {
 
 describe('alert rules', () => {
   it('the D-rest trigger is planned FG plus the trigger points (2–4 points is common practice, no source)', () => {
-    expect(dRestTriggerSg(1.012, 3)).toBeCloseTo(1.015, 10);
+    expect(dRestTriggerSg(1.012, 3)).toBe(1.015);
     expectInputError(() => dRestTriggerSg(1.012, -1), 'dRestPoints');
   });
 
-  it('fires on the first reading at or below the trigger only', () => {
+  it('rounds the trigger once, to the point, so the trigger shown is the trigger used', () => {
+    // A planned FG typed as 3.07 °P is SG 1.01196…: the trigger is shown as 1.015 and must be 1.015.
+    const trigger = dRestTriggerSg(1.01196, 3);
+    expect(trigger).toBe(1.015);
+    expect(trigger.toFixed(3)).toBe('1.015');
+    expect(crossesDRestTrigger(1.016, 1.015, trigger)).toBe(true);
+    expect(dRestTriggerSg(1.0124, 3)).toBe(1.015);
+    expect(dRestTriggerSg(1.0126, 3)).toBe(1.016);
+  });
+
+  it('fires on the first reading at or below the trigger only, comparing readings as shown', () => {
     expect(crossesDRestTrigger(1.02, 1.015, 1.015)).toBe(true);
     expect(crossesDRestTrigger(null, 1.014, 1.015)).toBe(true);
     expect(crossesDRestTrigger(1.016, 1.0155, 1.015)).toBe(false);
     expect(crossesDRestTrigger(1.014, 1.013, 1.015)).toBe(false);
+    // 1.01504 is shown as 1.015: it has reached a trigger shown as 1.015
+    expect(crossesDRestTrigger(1.016, 1.01504, 1.015)).toBe(true);
   });
 
-  it('a stall is three readings within a point, above the trigger', () => {
-    expect(gravityStalled([1.03, 1.0302, 1.0298], 1.015)).toBe(true);
-    expect(gravityStalled([1.03, 1.028, 1.026], 1.015)).toBe(false);
-    expect(gravityStalled([1.0302, 1.03], 1.015)).toBe(false);
-    // at the end of fermentation, gravity standing still is what should happen
-    expect(gravityStalled([1.012, 1.012, 1.012], 1.015)).toBe(false);
+  describe('a stall: no fall of more than 1 point over at least 24 hours (common practice, no source)', () => {
+    const hour = 3_600_000;
+    const series = (everyHours: number, hours: number, sgAt: (h: number) => number) =>
+      Array.from({ length: Math.floor(hours / everyHours) + 1 }, (_, i) => ({
+        atMs: start + i * everyHours * hour,
+        sg: sgAt(i * everyHours),
+      }));
+
+    it('dense probe data of an active fermentation never stalls, even where three readings in a row agree', () => {
+      // Every 30 minutes for three days, falling 6 points a day, with the probe's ±0.2 point jitter.
+      const probe = series(0.5, 72, (h) => 1.05 - (6 * h) / 24 / 1000 + (h % 2 === 0 ? 0.0002 : -0.0002));
+      const lastThree = probe.slice(-3).map((p) => p.sg);
+      expect(Math.max(...lastThree) - Math.min(...lastThree)).toBeLessThan(0.001); // the old rule's stall
+      for (let i = 1; i <= probe.length; i += 1) expect(gravityStalled(probe.slice(0, i), 1.015)).toBe(false);
+    });
+
+    it('a genuine stall: daily readings or probe data flat for a day, above the trigger', () => {
+      expect(
+        gravityStalled(
+          series(24, 48, (h) => 1.04 - (5 * h) / 24 / 1000),
+          1.015,
+        ),
+      ).toBe(false);
+      expect(
+        gravityStalled(
+          series(24, 72, (h) => (h < 24 ? 1.04 : 1.03)),
+          1.015,
+        ),
+      ).toBe(true);
+      const stuckProbe = series(0.5, 48, (h) => (h < 20 ? 1.05 - h / 1000 : 1.03 - 0.0001 * ((h * 2) % 3)));
+      expect(gravityStalled(stuckProbe, 1.015)).toBe(true);
+      // a fall of exactly one point in a day is no fall worth the name; two points is
+      expect(
+        gravityStalled(
+          series(24, 24, (h) => 1.03 - h / 24 / 1000),
+          1.015,
+        ),
+      ).toBe(true);
+      expect(
+        gravityStalled(
+          series(24, 24, (h) => 1.03 - (2 * h) / 24 / 1000),
+          1.015,
+        ),
+      ).toBe(false);
+    });
+
+    it('judges nothing before a full day of readings, nor a beer at or below the trigger', () => {
+      expect(
+        gravityStalled(
+          series(0.5, 23.5, () => 1.03),
+          1.015,
+        ),
+      ).toBe(false);
+      expect(gravityStalled([], 1.015)).toBe(false);
+      // at the end of fermentation, gravity standing still is what should happen
+      expect(
+        gravityStalled(
+          series(24, 72, () => 1.012),
+          1.015,
+        ),
+      ).toBe(false);
+    });
   });
 
   it('a reading is overdue after the set interval', () => {

@@ -111,11 +111,17 @@ export function predictFermentation(points: readonly GravityPoint[]): Fermentati
   };
 }
 
-/** The gravity at which the D-rest starts: planned FG plus the trigger in gravity points. */
+/** Gravity to the thousandth (one gravity point), as the trade reads and writes a specific gravity. */
+export const roundSg = (sg: number): number => Math.round(sg * 1000) / 1000;
+
+/**
+ * The gravity at which the D-rest starts: planned FG plus the trigger in gravity points, rounded once to
+ * the point here, so the trigger every screen shows is the very number the alert compares readings with.
+ */
 export function dRestTriggerSg(plannedFg: number, triggerPoints: number): number {
   requireGravity(plannedFg, 'plannedFg', 'Planned FG');
   requireInRange(triggerPoints, 'dRestPoints', 0, 20, 'D-rest trigger (gravity points)');
-  return plannedFg + triggerPoints / 1000;
+  return roundSg(plannedFg + triggerPoints / 1000);
 }
 
 /** Wort correction factor most brewers use for a sucrose-scale refractometer (common practice, no source). */
@@ -179,24 +185,36 @@ export function refractometerSg(brix: number, originalBrix?: number, wortCorrect
 
 // ----------------------------------------------------------------- alert rules
 
-/** True when this reading is the first at or below the D-rest trigger. */
+/**
+ * True when this reading is the first at or below the D-rest trigger. Readings are compared as they are
+ * shown, to the point: a reading shown as 1.015 has reached a trigger shown as 1.015.
+ */
 export function crossesDRestTrigger(previousSg: number | null, currentSg: number, triggerSg: number): boolean {
-  return currentSg <= triggerSg && (previousSg === null || previousSg > triggerSg);
+  const reached = (sg: number) => roundSg(sg) <= roundSg(triggerSg);
+  return reached(currentSg) && (previousSg === null || !reached(previousSg));
 }
 
-/** Movement under which three readings count as "not moving": one gravity point (common practice, no source). */
-export const STALL_TOLERANCE_SG = 0.001;
+/**
+ * A stall is measured in time, not in readings, so a probe logging every half hour and a hydrometer read
+ * once a day judge alike: gravity that has fallen no more than {@link STALL_MAX_FALL_POINTS} over at least
+ * {@link STALL_WINDOW_HOURS}. An active ale or lager fermentation drops several points a day, so one point
+ * in a full day means the yeast has stopped (common practice, no source).
+ */
+export const STALL_MAX_FALL_POINTS = 1;
+export const STALL_WINDOW_HOURS = 24;
 
 /**
- * True when the last three readings (oldest first) lie within one gravity
- * point of each other while the beer is still above the D-rest trigger:
- * a fermentation that has stopped early.
+ * True when the beer, still above the D-rest trigger, has fallen no more than STALL_MAX_FALL_POINTS
+ * between the last reading and the latest reading taken at least STALL_WINDOW_HOURS before it
+ * (readings oldest first). Fewer hours of readings than the window judge nothing yet.
  */
-export function gravityStalled(lastThreeSg: readonly number[], triggerSg: number): boolean {
-  if (lastThreeSg.length < 3) return false;
-  const recent = lastThreeSg.slice(-3);
-  const spread = Math.max(...recent) - Math.min(...recent);
-  return spread < STALL_TOLERANCE_SG && recent[recent.length - 1]! > triggerSg;
+export function gravityStalled(readings: readonly GravityPoint[], triggerSg: number): boolean {
+  const last = readings[readings.length - 1];
+  if (!last || roundSg(last.sg) <= roundSg(triggerSg)) return false;
+  const windowStart = last.atMs - STALL_WINDOW_HOURS * 3_600_000;
+  const reference = readings.findLast((r) => r.atMs <= windowStart);
+  if (!reference) return false;
+  return roundSg(reference.sg) - roundSg(last.sg) <= STALL_MAX_FALL_POINTS / 1000 + 1e-9;
 }
 
 /** True when more than `maxGapHours` have passed since the last reading (or since filling, when none yet). */

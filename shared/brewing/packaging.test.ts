@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { KEG_SIZES, lineVolumeL, packagingTotals } from './packaging';
+import { KEG_SIZES, lineVolumeL, packagingLoss, packagingTotals } from './packaging';
 import { usGalToL } from '../quantities/convert';
 import { expectInputError } from './test-helpers';
 
@@ -33,5 +33,20 @@ describe('packaging', () => {
   it('refuses more in packages than was knocked out, and bad counts', () => {
     expectInputError(() => packagingTotals([{ kind: 'keg', size: 'keg_50l', count: 3 }], 100), 'lines');
     expectInputError(() => lineVolumeL({ kind: 'can', sizeMl: 355, count: 1.5 }), 'line.count');
+  });
+});
+
+describe('packaging loss against the tank packaged from', () => {
+  it('counts the loss against what went in and flags it above 10 % from a bright tank, 20 % from a fermenter (common practice, no source)', () => {
+    // 1,000 L in, 950 L packaged: 50 L, 5 % (arithmetic)
+    expect(packagingLoss(950, 1000, 'bright_tank')).toEqual({ lossL: 50, lossFraction: 0.05, implausible: false });
+    expect(packagingLoss(480, 1000, 'bright_tank')).toMatchObject({
+      lossL: 520,
+      lossFraction: 0.52,
+      implausible: true,
+    });
+    expect(packagingLoss(850, 1000, 'bright_tank').implausible).toBe(true);
+    expect(packagingLoss(850, 1000, 'fermenter').implausible).toBe(false);
+    expect(packagingLoss(1010, 1000, 'fermenter')).toMatchObject({ lossL: 0, lossFraction: 0 });
   });
 });

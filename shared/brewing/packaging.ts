@@ -59,3 +59,31 @@ export function packagingTotals(lines: readonly PackageLine[], knockoutL: number
   const lossL = Math.max(0, knockoutL - packagedL);
   return { packagedL, lossL, lossFraction: lossL / knockoutL };
 }
+
+/** Where the packaged beer came from: the bright tank it was transferred into, or straight from the fermenter. */
+export type PackagingSource = 'bright_tank' | 'fermenter';
+
+/**
+ * The loss above which a packaging loss is flagged as implausible, as a fraction of what went into the
+ * tank packaged from. From a bright tank only the tank bottom, the lines and the filler's purge are lost,
+ * a few percent; from a fermenter the yeast cake and trub stay behind as well (common practice, no source).
+ */
+export const PLAUSIBLE_PACKAGING_LOSS: Record<PackagingSource, number> = { bright_tank: 0.1, fermenter: 0.2 };
+
+export interface PackagingLoss {
+  /** What went into the tank packaged from, less what is in packages, L (0 when packages hold more). */
+  lossL: number;
+  /** Loss as a fraction of what went into that tank. */
+  lossFraction: number;
+  /** True above {@link PLAUSIBLE_PACKAGING_LOSS} for the source: worth checking the counts and volumes. */
+  implausible: boolean;
+}
+
+/** The loss of a finished packaging against the volume that went into the tank it was packaged from. */
+export function packagingLoss(packagedL: number, sourceL: number, source: PackagingSource): PackagingLoss {
+  requirePositive(sourceL, 'sourceL', 'Volume in the tank');
+  requireNonNegative(packagedL, 'packagedL', 'Packaged volume');
+  const lossL = Math.max(0, sourceL - packagedL);
+  const lossFraction = lossL / sourceL;
+  return { lossL, lossFraction, implausible: lossFraction > PLAUSIBLE_PACKAGING_LOSS[source] };
+}

@@ -38,6 +38,14 @@ export const STATUS_TRANSITIONS: Record<BatchStatus, readonly BatchStatus[]> = {
 
 export const canMoveTo = (from: BatchStatus, to: BatchStatus) => STATUS_TRANSITIONS[from].includes(to);
 
+/**
+ * The page a batch's printed label opens for its stage: the brew day until knockout (which starts
+ * fermenting), then the cellar page, which also holds its packaging.
+ */
+export function batchStagePath(batchId: number, status: BatchStatus): string {
+  return status === 'planned' || status === 'brewing' ? `/batches/${batchId}` : `/cellar/batches/${batchId}`;
+}
+
 const id = z.coerce
   .number({ error: 'Must be a number' })
   .int('Must be a whole number')

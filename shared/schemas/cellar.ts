@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { KEG_SIZE_IDS } from '../brewing/packaging';
+import { KEG_SIZE_IDS, type PackagingSource } from '../brewing/packaging';
 import { timeZone } from './auth';
 
 /**
@@ -388,19 +388,25 @@ export interface BatchCellarView {
 }
 
 /**
- * Packaged so far against knockout. Until the batch is fully packaged the rest is still in the tank
- * (`notPackagedL`), not lost: `lossL` and `lossFraction` are null until then.
+ * Packaged so far against what went into the tank packaged from: the volume transferred into the bright
+ * tank, or knockout when packaged from the fermenter. Until the batch is fully packaged the rest is still in
+ * the tank (`notPackagedL`), not lost: `lossL` and `lossFraction` are null until then.
  */
 export interface PackagingSummaryView {
   runs: PackagingRunView[];
   knockoutL: number;
+  /** Where the beer is packaged from, and how much went into that tank, L. */
+  source: PackagingSource;
+  sourceL: number;
   packagedL: number;
   /** True once the last run is logged (or the batch has left the cellar). */
   complete: boolean;
-  /** Knockout less packaged while the batch is still being packaged; 0 once complete. */
+  /** What went into the tank less packaged while the batch is still being packaged; 0 once complete. */
   notPackagedL: number;
   lossL: number | null;
   lossFraction: number | null;
+  /** True once complete with a loss above shared/brewing's PLAUSIBLE_PACKAGING_LOSS for the source. */
+  lossImplausible: boolean;
 }
 
 // -------------------------------------------------------------------- alerts

@@ -117,6 +117,14 @@ export const router = createBrowserRouter([
               import('../features/batches/components/brew-day-page').then((m) => ({ Component: m.BrewDayPage })),
           },
           {
+            path: 'batches/:batchId/label',
+            handle: { action: 'batch.read' } satisfies PageAccess,
+            lazy: () =>
+              import('../features/batches/components/batch-label-page').then((m) => ({
+                Component: m.BatchLabelPage,
+              })),
+          },
+          {
             path: 'batches/:batchId/record',
             handle: { action: 'batch.read' } satisfies PageAccess,
             lazy: () =>

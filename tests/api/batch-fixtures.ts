@@ -30,3 +30,15 @@ export function writeHeaders(overrides: { key?: string; capturedAt?: Date; devic
     'X-Device-Id': overrides.deviceId ?? 'tablet-test-01',
   };
 }
+
+/** A cellar plan as the head brewer sends it: ale at 19 °C, D-rest 3 points above the planned FG. */
+export const cellarPlanBody = (plannedFg = 1.012) => ({
+  plannedFg,
+  tempUnit: 'c',
+  primaryTemp: 19,
+  dRestPoints: 3,
+  dRestTemp: 21,
+  crashTemp: 1,
+  co2Volumes: 2.5,
+  readingIntervalHours: 24,
+});

@@ -1,12 +1,19 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { createTestBrewery, mailCatcher, type TestBrewery } from './helpers';
-import { plannedBatch, writeHeaders } from './batch-fixtures';
+import { cellarPlanBody, plannedBatch, writeHeaders } from './batch-fixtures';
 import { changeBatchStatus } from '../../server/services/batches';
 import { Alert, AuditEvent, Batch, BatchLogEntry, GravityReading, IdempotencyKey } from '../../server/models';
 import { sweepOverdueReadings } from '../../server/services/alerts';
 import { finalNumbers } from '../../server/services/release';
 import { queryCounter, sequelize } from '../../server/config/database';
-import { headPressureKpa, KEG_SIZES, platoToSg, refractometerBeerSg, sgToPlato } from '../../shared/brewing';
+import {
+  headPressureKpa,
+  KEG_SIZES,
+  platoToSg,
+  PLAUSIBLE_PACKAGING_LOSS,
+  refractometerBeerSg,
+  sgToPlato,
+} from '../../shared/brewing';
 import type { BatchCellarView, ProbeImportResult, ReadingView, VesselView } from '../../shared/schemas/cellar';
 
 let t: TestBrewery;
@@ -533,12 +540,49 @@ describe('packaging', () => {
     expect(last.body.lossFraction).toBeCloseTo((knockoutL - packaged) / knockoutL, 9);
     expect(last.body.notPackagedL).toBe(0);
     expect(last.body.runs).toHaveLength(2);
+    // No transfer logged: packaged from the fermenter, measured against knockout.
+    expect(last.body).toMatchObject({ source: 'fermenter', sourceL: knockoutL });
+    expect(last.body.lossImplausible).toBe(last.body.lossFraction > PLAUSIBLE_PACKAGING_LOSS.fermenter);
 
     const view = await cellarView(batch.id);
     expect(view.batch.status).toBe('packaged');
     expect(view.vessel).toBeNull();
     const after = (await t.as.assistant_brewer.get('/api/vessels')).body.find((v: VesselView) => v.id === tank.id);
     expect(after).toMatchObject({ currentBatchId: null, status: 'needs_cleaning' });
+  });
+});
+
+describe('packaging losses', () => {
+  it('measures losses against the volume transferred into the bright tank and flags a 50 % loss', async () => {
+    const batch = await knockedOutBatch();
+    await postReading(batch.id, reading(1.012));
+    const tank = await vessel({ type: 'bright_tank' });
+    const knockoutL = (await cellarView(batch.id)).packaging.knockoutL;
+    const intoTankL = 20; // well under knockout: what the bright tank holds is what losses count against
+    expect(knockoutL).toBeGreaterThan(intoTankL);
+    const transfer = await t.as.assistant_brewer
+      .post(`/api/cellar/batches/${batch.id}/actions`)
+      .set(writeHeaders())
+      .send({ kind: 'action', action: 'transfer', volume: intoTankL, volumeUnit: 'l', toVesselId: tank.id });
+    expect(transfer.status).toBe(201);
+    const run = (count: number, final = false) =>
+      t.as.assistant_brewer
+        .post(`/api/cellar/batches/${batch.id}/packaging`)
+        .set(writeHeaders())
+        .send({ kind: 'packaging', lines: [{ kind: 'can', sizeMl: 500, count }], final });
+    const part = await run(8);
+    expect(part.status).toBe(201);
+    // 20 L in the bright tank, 8 × 0.5 L in cans: 16 L still in the tank, no loss yet (arithmetic).
+    expect(part.body).toMatchObject({ source: 'bright_tank', sourceL: 20, complete: false, lossImplausible: false });
+    expect(part.body.notPackagedL).toBeCloseTo(16, 9);
+    const last = await run(12, true);
+    expect(last.status).toBe(201);
+    // (8 + 12) × 0.5 = 10 L packaged of 20 L: 10 L lost, 50 % (arithmetic), above the 10 % a bright tank
+    // usually loses (common practice, no source). Against knockout it would have read otherwise.
+    expect(last.body.packagedL).toBeCloseTo(10, 9);
+    expect(last.body.lossL).toBeCloseTo(10, 9);
+    expect(last.body.lossFraction).toBeCloseTo(0.5, 9);
+    expect(last.body.lossImplausible).toBe(true);
   });
 });
 
@@ -592,16 +636,7 @@ describe('another brewery', () => {
 describe('alerts', () => {
   it('e-mails the head brewer once when a reading crosses the D-rest trigger', async () => {
     const batch = await knockedOutBatch();
-    const plan = await t.as.head_brewer.put(`/api/cellar/batches/${batch.id}/plan`).send({
-      plannedFg: 1.012,
-      tempUnit: 'c',
-      primaryTemp: 19,
-      dRestPoints: 3,
-      dRestTemp: 21,
-      crashTemp: 1,
-      co2Volumes: 2.5,
-      readingIntervalHours: 24,
-    });
+    const plan = await t.as.head_brewer.put(`/api/cellar/batches/${batch.id}/plan`).send(cellarPlanBody());
     expect(plan.status).toBe(200);
     const mailFor = () =>
       mailCatcher()
@@ -622,7 +657,26 @@ describe('alerts', () => {
       { kind: 'd_rest', readAt: null },
     ]);
     expect(mailFor()).toHaveLength(1);
-    expect((await t.as.assistant_brewer.get('/api/cellar/alerts')).status).toBe(403);
+    // The assistant brewer, who takes the readings, sees the same alert and may mark it seen.
+    const assistants = await t.as.assistant_brewer.get('/api/cellar/alerts');
+    expect(assistants.status).toBe(200);
+    const seen = assistants.body.find((a: { batchId: number }) => a.batchId === batch.id);
+    expect(seen).toMatchObject({ kind: 'd_rest', readAt: null });
+    expect((await t.as.assistant_brewer.post(`/api/cellar/alerts/${seen.id}/read`)).status).toBe(204);
+    expect((await t.as.taproom_manager.get('/api/cellar/alerts')).status).toBe(403);
+  });
+
+  it('fires at the trigger it shows: a planned FG typed in °P gives a trigger of 1.015, and 1.015 reaches it', async () => {
+    const batch = await knockedOutBatch();
+    const plan = await t.as.head_brewer.put(`/api/cellar/batches/${batch.id}/plan`).send(cellarPlanBody(1.01196)); // a planned FG of 3.07 °P
+    expect(plan.status).toBe(200);
+    const hour = 3_600_000;
+    await postReading(batch.id, reading(1.03), new Date(Date.now() - 2 * hour));
+    await postReading(batch.id, reading(1.015), new Date(Date.now() - hour));
+    const alerts = await t.as.assistant_brewer.get('/api/cellar/alerts');
+    const mine = alerts.body.filter((a: { batchId: number }) => a.batchId === batch.id);
+    expect(mine).toMatchObject([{ kind: 'd_rest' }]);
+    expect(mine[0].message).toContain('(1.015)');
   });
 
   it('raises a "no reading" alert once for a fermenting batch past its reading interval', async () => {
@@ -631,7 +685,12 @@ describe('alerts', () => {
     const mailFor = () =>
       mailCatcher()
         .messages()
-        .filter((m) => m.subject.includes(batch.number) && m.subject.includes('No gravity reading'));
+        .filter(
+          (m) =>
+            m.to.includes(t.users.head_brewer.email) &&
+            m.subject.includes(batch.number) &&
+            m.subject.includes('No gravity reading'),
+        );
     await sweepOverdueReadings(new Date(Date.now() + 20 * 3_600_000)); // 22 h since the reading: not yet
     expect(await Alert.count({ where: { batchId: batch.id, kind: 'overdue' } })).toBe(0);
     await sweepOverdueReadings(new Date(Date.now() + 30 * 3_600_000));

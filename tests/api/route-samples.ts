@@ -6,7 +6,7 @@ import { randomUUID } from 'node:crypto';
 import { Alert, Attachment, Release, User } from '../../server/models';
 import { DEMO_EQUIPMENT, SEASONAL_CONTENT } from '../../server/seed/recipe-data';
 import { GOOD_PASSWORD, type TestBrewery } from './helpers';
-import { plannedBatch, writeHeaders } from './batch-fixtures';
+import { cellarPlanBody, plannedBatch, writeHeaders } from './batch-fixtures';
 import { addTastingNote } from '../../server/services/tasting';
 import { SHEET, TASTING_CONTENT } from './taproom-fixtures';
 
@@ -191,16 +191,7 @@ export const VALID_BODIES: Record<string, (ids: Record<string, number>) => unkno
   }),
   'PUT /api/batches/:id/vessel': () => ({ vesselId: 1 }),
   'POST /api/batches/:id/sign-off': () => ({ password: GOOD_PASSWORD }),
-  'PUT /api/cellar/batches/:batchId/plan': () => ({
-    plannedFg: 1.012,
-    tempUnit: 'c',
-    primaryTemp: 19,
-    dRestPoints: 3,
-    dRestTemp: 21,
-    crashTemp: 1,
-    co2Volumes: 2.5,
-    readingIntervalHours: 24,
-  }),
+  'PUT /api/cellar/batches/:batchId/plan': () => cellarPlanBody(),
   'POST /api/cellar/batches/:batchId/readings': () => ({
     kind: 'reading',
     method: 'hydrometer',

@@ -41,7 +41,7 @@ export function BatchRecordPage() {
         </Button>
       </header>
       <section className="flex gap-6" aria-label="QR labels">
-        <QrCode path={`/batches/${b.id}`} label={`Batch ${b.number}`} />
+        <QrCode path={`/batches/${b.id}/label`} label={`Batch ${b.number}`} />
         {b.vessel && <QrCode path={`/cellar?vessel=${b.vessel.id}`} label={b.vessel.name} />}
       </section>
       <section>

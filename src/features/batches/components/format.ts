@@ -1,7 +1,8 @@
 import { roundForMeasuring } from '../../../../shared/brewing';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
 import type { Addition } from '../../../../shared/batches/brew-day';
-import { show, showMeasured, showSmallWeight } from '../../../lib/units';
+import { showMeasured, showSmallWeight } from '../../../lib/units';
+import { measurementWords } from '../../../../shared/batches/entry-words';
 
 export function showAddition(system: UnitSystem, a: Addition): string {
   if (a.amount.unit === 'g') return showSmallWeight(system, a.amount.value);
@@ -11,19 +12,12 @@ export function showAddition(system: UnitSystem, a: Addition): string {
 
 export const showSg = (sg: number) => sg.toFixed(3);
 
-/** Measurements as a short line, in the brewery's units. */
+/** Measurements as a short line, in the brewery's units (worded as the batch record words them). */
 export function showMeasurements(
   system: UnitSystem,
   m: { tempC?: number; volumeL?: number; gravitySg?: number; ph?: number },
 ): string {
-  return [
-    m.tempC !== undefined && show(system, 'temperature', m.tempC),
-    m.volumeL !== undefined && show(system, 'volume', m.volumeL),
-    m.gravitySg !== undefined && `${showSg(m.gravitySg)} SG`,
-    m.ph !== undefined && `pH ${m.ph.toFixed(2)}`,
-  ]
-    .filter(Boolean)
-    .join(' · ');
+  return measurementWords(system, m).join(' · ');
 }
 
 /** Today's date (YYYY-MM-DD) in the brewery's time zone: after 8 pm in Halifax the UTC date is already tomorrow. */

@@ -1,4 +1,6 @@
 import { useState } from 'react';
+import { useQuery } from '@tanstack/react-query';
+import { vesselsQuery } from '../../cellar/api/vessels';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
 import type { LogEntry, Measurements } from '../../../../shared/schemas/batch-log';
 import { ROLE_LABELS, type Role } from '../../../../shared/schemas/roles';
@@ -6,18 +8,10 @@ import { Button, Dialog, TextAreaField, cx } from '../../../components/ui';
 import { logEntry } from '../api/log-entry';
 import { MeasurementFields, toMeasurements, type BrixToSg, type GravityUnit, type Typed } from './measurement-fields';
 import { refractometerSg } from '../../../../shared/brewing';
-import { dateIn, showMeasurements, todayIn } from './format';
+import { dateIn, todayIn } from './format';
+import { entryWords, inRecordOrder, type RecordOrder } from '../../../../shared/batches/entry-words';
 import { showTime } from '../../../lib/time';
 import type { MeasureKey } from '../../../../shared/batches/brew-day';
-
-function what(e: LogEntry): string {
-  const d = e.data as { label?: string; text?: string };
-  if (e.kind === 'reading') return 'Gravity reading';
-  if (e.kind === 'note') return `${(e.data as { deviation?: boolean }).deviation ? 'Deviation' : 'Note'}: ${d.text}`;
-  if (e.kind === 'correction') return `Correction: ${e.reason}`;
-  if (e.kind === 'sign_off') return 'Brew day signed off';
-  return d.label ?? e.kind;
-}
 
 /** What an entry measured: its measurements, or a cellar reading's gravity, temperature and pH. */
 function measuredIn(e: LogEntry): Measurements | undefined {
@@ -39,7 +33,11 @@ export function entryTime(iso: string, timeZone: string, now: Date = new Date())
   return showTime(iso, timeZone, dateIn(iso, timeZone) !== todayIn(timeZone, now));
 }
 
-/** The log as recorded: a corrected entry is struck through beside its correction, with both authors and times. */
+/**
+ * The log as recorded, each entry worded in full in the brewery's units (shared/batches/entry-words), by the
+ * time it was observed or, on request, in the order it arrived; a correction sits beside the entry it
+ * corrects, which is struck through, with both authors, both times and the device each came from.
+ */
 export function LogList({
   batchId,
   entries,
@@ -55,11 +53,34 @@ export function LogList({
   stepAsks?: ReadonlyMap<string, MeasureKey[]>;
 }) {
   const [correcting, setCorrecting] = useState<LogEntry | null>(null);
+  // The bright tank a transfer went into is stored by id: its name comes from the vessel list.
+  const vessels = useQuery({
+    ...vesselsQuery(),
+    enabled: entries.some((e) => e.kind === 'action' && 'toVesselId' in e.data),
+  });
+  const vesselName = (id: number) => vessels.data?.find((v) => v.id === id)?.name;
+  const [order, setOrder] = useState<RecordOrder>('observed');
   return (
     <>
+      <div className="no-print mb-2 flex items-center gap-2" role="group" aria-label="Order of entries">
+        <Button
+          variant={order === 'observed' ? 'primary' : 'secondary'}
+          aria-pressed={order === 'observed'}
+          onClick={() => setOrder('observed')}
+        >
+          By time observed
+        </Button>
+        <Button
+          variant={order === 'arrival' ? 'primary' : 'secondary'}
+          aria-pressed={order === 'arrival'}
+          onClick={() => setOrder('arrival')}
+        >
+          By arrival
+        </Button>
+      </div>
       <ol className="divide-y divide-mist-200" aria-label="Log">
-        {entries.map((e) => {
-          const m = measuredIn(e);
+        {inRecordOrder(entries, order).map((e) => {
+          const words = entryWords(e, { system, vesselName });
           const corrected = e.correctedByIds.length > 0;
           return (
             <li
@@ -73,15 +94,13 @@ export function LogList({
               </span>
               <div className="flex-1">
                 <p className={cx('font-medium', corrected && 'text-ink-500 line-through')}>
-                  {what(e)}
-                  {m && <span className="ml-2 tabular-nums">{showMeasurements(system, m)}</span>}
-                  {e.kind === 'note' || !e.data.note ? null : (
-                    <span className="ml-2 text-ink-500">“{String(e.data.note)}”</span>
-                  )}
+                  {words.title}
+                  {words.details.length > 0 && <span className="tabular-nums"> · {words.details.join(' · ')}</span>}
                 </p>
                 <p className="text-sm text-ink-500">
-                  {e.authorName} · {ROLE_LABELS[e.authorRole as Role] ?? e.authorRole} · received{' '}
-                  {entryTime(e.receivedAt, timeZone)}
+                  {e.authorName} · {ROLE_LABELS[e.authorRole as Role] ?? e.authorRole} · observed{' '}
+                  {entryTime(e.capturedAt, timeZone)} · received {entryTime(e.receivedAt, timeZone)} · device{' '}
+                  {e.deviceId}
                   {e.late && (
                     <span className="ml-2 rounded bg-brass-100 px-1 font-semibold text-ink-900">Late entry</span>
                   )}

@@ -1,12 +1,17 @@
 import { Link } from 'react-router-dom';
 import { Button } from '../../../components/ui';
+import { useCan } from '../../../lib/current-user';
 import { useAlerts, useMarkAlertRead } from '../api/alerts';
 
-/** Unread cellar alerts for the head brewer (the same ones are e-mailed). */
-export function AlertsPanel() {
-  const { data } = useAlerts(true);
+/**
+ * Unread cellar alerts for the brewers (the same ones are e-mailed): every batch's on the vessel board,
+ * one batch's on its cellar page (`batchId`). Shown only to roles the access policy lets read them.
+ */
+export function AlertsPanel({ batchId }: { batchId?: number }) {
+  const mayRead = useCan('cellar.alerts');
+  const { data } = useAlerts(mayRead);
   const markRead = useMarkAlertRead();
-  const unread = (data ?? []).filter((a) => a.readAt === null);
+  const unread = (data ?? []).filter((a) => a.readAt === null && (batchId === undefined || a.batchId === batchId));
   if (!unread.length) return null;
   return (
     <section aria-label="Cellar alerts" className="space-y-2">

@@ -1,11 +1,11 @@
 import { useMemo, type ReactNode } from 'react';
 import { useParams } from 'react-router-dom';
 import { apparentAttenuation, predictFermentation } from '../../../../shared/brewing';
-import { CELLAR_ACTION_LABELS, READING_METHOD_LABELS } from '../../../../shared/schemas/cellar';
+import { entryWords } from '../../../../shared/batches/entry-words';
 import { Card, ErrorState, LinkButton, Loading, PageHeader, Stat } from '../../../components/ui';
 import { useCurrentUser, useCan } from '../../../lib/current-user';
-import { show } from '../../../lib/units';
 import { useBatchCellar } from '../api/batch-cellar';
+import { useVessels } from '../api/vessels';
 import { cellarGroup } from '../api/log-cellar-entry';
 import { FermentationChart } from './fermentation-chart';
 import { ReadingForm } from './reading-form';
@@ -15,6 +15,7 @@ import { PackagingForm } from './packaging-form';
 import { ProbeImport } from './probe-import';
 import { PlanForm } from './plan-form';
 import { PredictionNote } from './prediction-note';
+import { AlertsPanel } from './alerts-panel';
 import { OutboxPanel } from '../../../components/outbox-panel';
 import { batchRoutes } from '../../../../shared/contract/batches';
 import { pathOf } from '../../../../shared/contract/route';
@@ -34,6 +35,7 @@ export function BatchCellarPage() {
   const me = useCurrentUser();
   const mayPlan = useCan('cellar.plan');
   const { data, error, refetch, isPending } = useBatchCellar(batchId);
+  const vessels = useVessels();
   const prediction = useMemo(
     () => (data ? predictFermentation(data.readings.map((r) => ({ atMs: Date.parse(r.takenAt), sg: r.sg }))) : null),
     [data],
@@ -56,6 +58,7 @@ export function BatchCellarPage() {
   });
   const date = new Intl.DateTimeFormat('en-US', { timeZone: tz, weekday: 'short', month: 'short', day: 'numeric' });
   const active = ['brewing', 'fermenting', 'conditioning'].includes(data.batch.status);
+  const wording = { system, vesselName: (id: number) => vessels.data?.find((v) => v.id === id)?.name };
 
   return (
     <div className="space-y-6">
@@ -90,6 +93,7 @@ export function BatchCellarPage() {
           )}
         </div>
       </div>
+      <AlertsPanel batchId={batchId} />
       <OutboxPanel
         group={cellarGroup(batchId)}
         timeZone={tz}
@@ -133,20 +137,24 @@ export function BatchCellarPage() {
             ...data.readings.map((r) => ({
               at: r.takenAt,
               key: `r${r.id}`,
-              text: `${r.sg.toFixed(3)} (${r.plato.toFixed(1)} °P)${r.tempC !== null ? ` · ${show(system, 'temperature', r.tempC)}` : ''}${r.ph !== null ? ` · pH ${r.ph}` : ''} · ${READING_METHOD_LABELS[r.method]}${r.corrected ? ' · corrected' : ''}`,
+              words: entryWords({ kind: 'reading', data: { ...r }, reason: null }, wording),
+              corrected: r.corrected,
               who: r.authorName,
             })),
             ...data.actions.map((a) => ({
               at: a.at,
               key: `a${a.logEntryId}`,
-              text: `${CELLAR_ACTION_LABELS[a.action]}${a.tempC !== null ? ` · ${show(system, 'temperature', a.tempC)}` : ''}${a.volumeL !== null ? ` · ${show(system, 'volume', a.volumeL)}` : ''}${a.detail ? ` · ${a.detail}` : ''}${a.co2Volumes !== null ? ` · ${a.co2Volumes} vol` : ''}${a.note ? ` · “${a.note}”` : ''}`,
+              words: entryWords({ kind: 'action', data: { ...a }, reason: null }, wording),
+              corrected: false,
               who: a.authorName,
             })),
           ]
             .sort((x, y) => y.at.localeCompare(x.at))
             .map((row) => (
               <li key={row.key} data-testid="cellar-row" className="flex flex-wrap justify-between gap-2 py-2">
-                <span className="font-medium tabular-nums">{row.text}</span>
+                <span className="font-medium tabular-nums">
+                  {[row.words.title, ...row.words.details, ...(row.corrected ? ['corrected'] : [])].join(' · ')}
+                </span>
                 <span className="text-sm text-ink-500">
                   {dateTime.format(new Date(row.at))} · {row.who}
                 </span>

@@ -2,7 +2,7 @@
 // The forms run on their real hooks and the real outbox over a stubbed network (tests/component/network.tsx).
 import { beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { act, fireEvent, render, screen, waitFor } from '@testing-library/react';
-import type { CellarPlanView, ReadingView } from '../../../../shared/schemas/cellar';
+import type { CellarPlanView, PackagingSummaryView, ReadingView } from '../../../../shared/schemas/cellar';
 import { installMemoryIndexedDb, stubNetwork, withQueries, type Sent } from '../../../../tests/component/network';
 import { outbox } from '../../../lib/outbox';
 import { ReadingForm } from './reading-form';
@@ -27,6 +27,20 @@ const brightTank = {
   ratedPressureKpa: 207,
   status: 'clean',
   currentBatchId: null,
+};
+
+/** A batch of 1,173 L (10 bbl) in the fermenter, nothing packaged yet. */
+const nothingPackaged: PackagingSummaryView = {
+  runs: [],
+  knockoutL: 1173,
+  source: 'fermenter',
+  sourceL: 1173,
+  packagedL: 0,
+  complete: false,
+  notPackagedL: 1173,
+  lossL: null,
+  lossFraction: null,
+  lossImplausible: false,
 };
 
 let sent: Sent[];
@@ -102,23 +116,7 @@ describe('cellar forms take one tap at a time', () => {
   });
 
   it('a double tap on Log packaging run writes one run', async () => {
-    render(
-      withQueries(
-        <PackagingForm
-          batchId={1}
-          packaging={{
-            runs: [],
-            knockoutL: 1173,
-            packagedL: 0,
-            complete: false,
-            notPackagedL: 1173,
-            lossL: null,
-            lossFraction: null,
-          }}
-          unitSystem="us"
-        />,
-      ),
-    );
+    render(withQueries(<PackagingForm batchId={1} packaging={nothingPackaged} unitSystem="us" />));
     type('Count', '5');
     doubleTap(screen.getByRole('form', { name: 'Log a packaging run' }));
     await waitFor(() => expect(delivered('packaging')).toHaveLength(1));
@@ -255,24 +253,22 @@ describe('packaging summary', () => {
     packagedL: 293.2,
     authorName: 'A',
   };
+  const showSummary = (summary: Partial<PackagingSummaryView>) =>
+    render(<PackagingForm batchId={1} packaging={{ ...nothingPackaged, runs: [run], ...summary }} unitSystem="us" />);
 
   it('after a part run shows what is packaged so far and what is still in the tank, not losses', () => {
     // 1,189.5 L = 10.14 bbl knocked out, 293.2 L = 2.50 bbl packaged: 7.64 bbl still in the tank (1 US bbl = 117.348 L, 27 CFR 25.11).
-    render(
-      <PackagingForm
-        batchId={1}
-        packaging={{
-          runs: [run],
-          knockoutL: 1189.5,
-          packagedL: 293.2,
-          complete: false,
-          notPackagedL: 896.3,
-          lossL: null,
-          lossFraction: null,
-        }}
-        unitSystem="us"
-      />,
-    );
+    showSummary({
+      knockoutL: 1189.5,
+      source: 'fermenter',
+      sourceL: 1189.5,
+      packagedL: 293.2,
+      complete: false,
+      notPackagedL: 896.3,
+      lossL: null,
+      lossFraction: null,
+      lossImplausible: false,
+    });
     const dl = screen.getByLabelText('Packaged volume');
     expect(dl.textContent).toContain('Packaged so far2.50 bbl');
     expect(dl.textContent).toContain('Still in the tank7.64 bbl');
@@ -280,23 +276,48 @@ describe('packaging summary', () => {
   });
 
   it('once the batch is packaged shows the losses', () => {
-    render(
-      <PackagingForm
-        batchId={1}
-        packaging={{
-          runs: [run],
-          knockoutL: 1189.5,
-          packagedL: 1100,
-          complete: true,
-          notPackagedL: 0,
-          lossL: 89.5,
-          lossFraction: 89.5 / 1189.5,
-        }}
-        unitSystem="us"
-      />,
-    );
+    showSummary({
+      knockoutL: 1189.5,
+      source: 'fermenter',
+      sourceL: 1189.5,
+      packagedL: 1100,
+      complete: true,
+      notPackagedL: 0,
+      lossL: 89.5,
+      lossFraction: 89.5 / 1189.5,
+      lossImplausible: false,
+    });
     // 89.5 L = 0.76 bbl (27 CFR 25.11), 89.5 / 1,189.5 = 7.5 % (arithmetic).
     expect(screen.getByLabelText('Packaged volume').textContent).toContain('Losses0.76 bbl (7.5 %)');
+  });
+
+  it('measures against the bright tank and warns of an implausible loss', () => {
+    // 2,000 L into the bright tank, 960 L packaged: 1,040 L = 8.86 bbl lost, 52.0 % (27 CFR 25.11; arithmetic),
+    // above the 10 % a bright tank usually loses (common practice, no source).
+    showSummary({
+      knockoutL: 2100,
+      source: 'bright_tank',
+      sourceL: 2000,
+      packagedL: 960,
+      complete: true,
+      notPackagedL: 0,
+      lossL: 1040,
+      lossFraction: 0.52,
+      lossImplausible: true,
+    });
+    const dl = screen.getByLabelText('Packaged volume');
+    expect(dl.textContent).toContain('Into the bright tank17.04 bbl');
+    expect(dl.textContent).toContain('Losses8.86 bbl (52.0 %)');
+    expect(screen.getByRole('alert').textContent).toMatch(/52\.0 % is more than the 10\.0 %/);
+  });
+
+  it('a new line repeats the package of the line above', () => {
+    render(withQueries(<PackagingForm batchId={1} packaging={nothingPackaged} unitSystem="us" />));
+    fireEvent.change(screen.getAllByLabelText('Size')[0]!, { target: { value: 'sixth_bbl' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Add a line' }));
+    const sizes = screen.getAllByLabelText('Size') as HTMLSelectElement[];
+    expect(sizes.map((s) => s.value)).toEqual(['sixth_bbl', 'sixth_bbl']);
+    expect((screen.getAllByLabelText('Count')[1] as HTMLInputElement).value).toBe('');
   });
 });
 

@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { useFieldArray, useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Button, SelectField, TextField } from '../../../components/ui';
-import { KEG_SIZE_IDS, lToUsBbl } from '../../../../shared/brewing';
+import { KEG_SIZE_IDS } from '../../../../shared/brewing';
 import {
   KEG_SIZE_LABELS,
   packageName,
@@ -13,6 +13,7 @@ import {
 import type { UnitSystem } from '../../../../shared/schemas/auth';
 import { useLogCellarEntry } from '../api/log-cellar-entry';
 import { useSubmitOnce } from '../../../lib/use-submit-once';
+import { PackagingSummary } from './packaging-summary';
 
 const CONTAINER_SIZES_ML = [355, 473, 500, 330, 750];
 
@@ -21,19 +22,6 @@ const CONTAINER_SIZES_ML = [355, 473, 500, 330, 750];
  * packaged, never with a number the form put there.
  */
 const UNCOUNTED = { count: undefined } as unknown as { count: number };
-
-/** Packaging volumes in one unit side by side: bbl (US) or L (metric). */
-const volume = (system: UnitSystem, litres: number) =>
-  system === 'us' ? `${lToUsBbl(litres).toFixed(2)} bbl` : `${litres.toFixed(0)} L`;
-
-function SummaryItem({ term, value }: { term: string; value: string }) {
-  return (
-    <div className="rounded-lg bg-mist-100 p-3">
-      <dt className="text-xs font-semibold uppercase text-ink-500">{term}</dt>
-      <dd className="text-xl font-semibold tabular-nums">{value}</dd>
-    </div>
-  );
-}
 
 /** Packaging runs, what is packaged so far and what is still in the tank; losses once the batch is packaged. */
 export function PackagingForm({
@@ -70,32 +58,7 @@ export function PackagingForm({
 
   return (
     <div className="space-y-4">
-      <dl className="grid grid-cols-3 gap-3 text-center" aria-label="Packaged volume">
-        <SummaryItem term="Knockout" value={volume(unitSystem, packaging.knockoutL)} />
-        <SummaryItem
-          term={packaging.complete ? 'Packaged' : 'Packaged so far'}
-          value={volume(unitSystem, packaging.packagedL)}
-        />
-        {packaging.complete ? (
-          <SummaryItem
-            term="Losses"
-            value={
-              packaging.lossL === null || packaging.lossFraction === null
-                ? '—'
-                : `${volume(unitSystem, packaging.lossL)} (${(packaging.lossFraction * 100).toFixed(1)} %)`
-            }
-          />
-        ) : (
-          // Not a loss yet: until the last run, what is not in packages is still in the tank.
-          <SummaryItem
-            term="Still in the tank"
-            value={packaging.runs.length ? volume(unitSystem, packaging.notPackagedL) : '—'}
-          />
-        )}
-      </dl>
-      {!packaging.complete && packaging.runs.length > 0 && (
-        <p className="text-sm text-ink-500">Losses are counted once the last run is logged.</p>
-      )}
+      <PackagingSummary packaging={packaging} unitSystem={unitSystem} />
       <form onSubmit={onSubmit} noValidate aria-label="Log a packaging run" className="space-y-3">
         {lines.fields.map((field, i) => (
           <div key={field.id} className="grid grid-cols-[8rem_1fr_7rem_auto] items-end gap-2">
@@ -152,7 +115,14 @@ export function PackagingForm({
           </div>
         ))}
         {formState.errors.lines?.message && <p className="text-sm text-ember-700">{formState.errors.lines.message}</p>}
-        <Button variant="secondary" onClick={() => lines.append({ kind: 'can', sizeMl: 355, ...UNCOUNTED })}>
+        <Button
+          variant="secondary"
+          // A new line repeats the package of the line above: a run is mostly more of the same.
+          onClick={() => {
+            const { count: _count, ...previous } = getValues(`lines.${lines.fields.length - 1}`);
+            lines.append({ ...previous, ...UNCOUNTED });
+          }}
+        >
           Add a line
         </Button>
         <label className="flex min-h-touch items-center gap-3 text-base">

@@ -3,7 +3,7 @@ import { Link, Navigate, useSearchParams } from 'react-router-dom';
 import { EmptyState, ErrorState, LinkButton, Loading, cx } from '../../../components/ui';
 import type { BoardVessel } from '../../../../shared/schemas/cellar';
 import { VESSEL_STATUS_LABELS, VESSEL_TYPE_LABELS } from '../labels';
-import { useCurrentUser, useCan } from '../../../lib/current-user';
+import { useCurrentUser } from '../../../lib/current-user';
 import { show, showVolume } from '../../../lib/units';
 import { useBoard } from '../api/board';
 import { AlertsPanel } from './alerts-panel';
@@ -112,7 +112,6 @@ function VesselTile({ v, now, asked }: { v: BoardVessel; now: number; asked: boo
  * `?vessel=ID` (a tank's label) opens the batch in that vessel, or shows the vessel when it is empty.
  */
 export function VesselBoardPage() {
-  const mayReadAlerts = useCan('cellar.alerts');
   const { data, error, refetch, isPending, dataUpdatedAt } = useBoard();
   const asked = Number(useSearchParams()[0].get('vessel'));
   useEffect(() => {
@@ -128,7 +127,7 @@ export function VesselBoardPage() {
         <h1 className="text-3xl font-bold">Vessel board</h1>
         <LinkButton to="/cellar/vessels">Manage vessels</LinkButton>
       </div>
-      {mayReadAlerts && <AlertsPanel />}
+      <AlertsPanel />
       {data.length === 0 ? (
         <EmptyState title="No vessels yet">Add your fermenters and bright tanks under Manage vessels.</EmptyState>
       ) : (

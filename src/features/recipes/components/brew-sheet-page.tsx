@@ -4,8 +4,7 @@ import {
   BrewingInputError,
   formatGaugePressure,
   headPressureKpa,
-  sgFromPoints,
-  gravityPoints,
+  dRestTriggerSg,
   doseUnitLabel,
   roundForMeasuring,
 } from '../../../../shared/brewing';
@@ -108,8 +107,7 @@ function Sheet({ data, system }: { data: ScaleResult; system: UnitSystem }) {
   const later = boilAdds.filter((a) => a.use === 'dryHop' || a.use === 'fermenter' || a.use === 'packaging');
   const mashAdds = boilAdds.filter((a) => a.use === 'mash');
   const f = content.fermentation;
-  const dRestAt =
-    f.dRestPointsAboveFg !== undefined ? sgFromPoints(gravityPoints(c.fg) + f.dRestPointsAboveFg) : undefined;
+  const dRestAt = f.dRestPointsAboveFg !== undefined ? dRestTriggerSg(c.fg, f.dRestPointsAboveFg) : undefined;
   const salts = (list: { salt: string; grams: number }[]) =>
     list.length
       ? list.map((s) => `${SALT_LABELS[s.salt as keyof typeof SALT_LABELS]}: ${s.grams.toFixed(1)} g`).join('; ')
