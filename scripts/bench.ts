@@ -44,7 +44,9 @@ async function serveCeiling(port: number, url: string) {
   });
   const app = express();
   app.get('/ceiling/:id', async (req, res) => {
-    const rows = await pool.query('SELECT id, name FROM breweries WHERE id = ?', [Number(req.params.id)]);
+    const rows = await pool.query<{ id: number; name: string }[]>('SELECT id, name FROM breweries WHERE id = ?', [
+      Number(req.params.id),
+    ]);
     res.json(rows[0] ?? null);
   });
   app.listen(port, '127.0.0.1', () => console.log('READY {}'));
@@ -172,7 +174,7 @@ async function main() {
   let api: Awaited<ReturnType<typeof startApi>> | undefined;
   try {
     await new Promise<void>((resolve) =>
-      createInterface({ input: ceiling.stdout! }).on('line', (l) => l.startsWith('READY') && resolve()),
+      createInterface({ input: ceiling.stdout }).on('line', (l) => l.startsWith('READY') && resolve()),
     );
     api = await startApi(env);
     await measureAll(api.url, seed, LARGE_PEOPLE.head_brewer.email, LARGE_PASSWORD);

@@ -3,6 +3,5 @@ import { stopMariaDb } from './lib/mariadb-instance';
 import { APP_DATA, TEST_DATA } from './lib/paths';
 
 const target = process.argv[2] === 'test' ? TEST_DATA : APP_DATA;
-stopMariaDb(target.dataDir).then((stopped) => {
-  console.log(stopped ? `Stopped MariaDB (${target.dataDir}).` : 'MariaDB was not running.');
-});
+const stopped = await stopMariaDb(target.dataDir);
+console.log(stopped ? `Stopped MariaDB (${target.dataDir}).` : 'MariaDB was not running.');

@@ -59,9 +59,9 @@ export async function startApi(
     stdio: ['ignore', 'pipe', 'pipe'],
   });
   let stderr = '';
-  child.stderr!.on('data', (d: Buffer) => (stderr += d.toString()));
+  child.stderr.on('data', (d: Buffer) => (stderr += d.toString()));
   const ready = await new Promise<Record<string, unknown>>((resolve, reject) => {
-    const lines = createInterface({ input: child.stdout! });
+    const lines = createInterface({ input: child.stdout });
     lines.on('line', (line) => {
       if (line.startsWith('READY ')) resolve(JSON.parse(line.slice(6)) as Record<string, unknown>);
     });

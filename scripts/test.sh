@@ -16,6 +16,12 @@ source .data-test/env.sh
 set +e
 
 status=0
+echo "== Formatting (prettier --check)"
+npx prettier --check . --log-level warn || status=1
+
+echo "== Lint (eslint: type-aware rules, hooks, import boundaries, no cycles)"
+npx eslint . || status=1
+
 echo "== Type check (tsc -b: shared, server, client and browser-test projects)"
 npx tsc -b || status=1
 

@@ -64,7 +64,16 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   const status = err instanceof HttpError ? err.status : API_ERRORS[code].status;
   if (status >= 500) req.log?.error({ err }, 'request failed');
   res.locals.errorCode = code; // read by the sign-in limiter
-  res.status(status).json(errorBody(code, message, fields, req.id ? String(req.id) : undefined));
+  res
+    .status(status)
+    .json(
+      errorBody(
+        code,
+        message,
+        fields,
+        typeof req.id === 'string' || typeof req.id === 'number' ? String(req.id) : undefined,
+      ),
+    );
 };
 
 export const notFoundHandler: RequestHandler = (_req, _res, next) => next(notFound('This address'));

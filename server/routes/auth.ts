@@ -7,11 +7,14 @@ import { recordAudit } from '../services/audit';
 import { unauthenticated, wrongPassword } from '../errors';
 import { signInLimiter } from '../middlewares/rate-limit';
 
+/** Passport hands errors over untyped; a rejection always carries an Error. */
+const asError = (err: unknown) => (err instanceof Error ? err : new Error(String(err)));
+
 /** Starts a fresh session for the person (passport regenerates the session id). */
 function logIn(req: Request, user: Express.User): Promise<void> {
   return new Promise((resolve, reject) => {
     req.login(user, (err) => {
-      if (err) return reject(err);
+      if (err) return reject(asError(err));
       req.session.signedInAt = req.session.lastSeenAt = Date.now();
       resolve();
     });
@@ -20,10 +23,12 @@ function logIn(req: Request, user: Express.User): Promise<void> {
 
 function authenticateLocal(req: Request, res: Response): Promise<Express.User | false> {
   return new Promise((resolve, reject) => {
-    passport.authenticate('local', (err: unknown, user: Express.User | false) => {
-      if (err) return reject(err);
+    // passport types what authenticate() returns as any; it is Express middleware.
+    const handler = passport.authenticate('local', (err: unknown, user: Express.User | false) => {
+      if (err) return reject(asError(err));
       resolve(user);
-    })(req, res, ((e: unknown) => e && reject(e)) as NextFunction);
+    }) as (req: Request, res: Response, next: NextFunction) => void;
+    handler(req, res, (e?: unknown) => e && reject(asError(e)));
   });
 }
 

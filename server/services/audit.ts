@@ -21,7 +21,7 @@ export async function recordAudit(
       breweryId: who ? who.breweryId : (req.user?.breweryId ?? null),
       ip: req.ip ?? null,
       userAgent: req.get('user-agent')?.slice(0, 255) ?? null,
-      requestId: req.id ? String(req.id) : null,
+      requestId: typeof req.id === 'string' || typeof req.id === 'number' ? String(req.id) : null,
     },
     { transaction },
   );

@@ -23,10 +23,10 @@ export function parseProbeTime(text: string, timeZone: string): number | null {
   }
   const m = LOCAL_TIME.exec(value);
   if (!m) return null;
-  const [, y, mo, d, h, mi, s] = m.map((part) => Number(part ?? 0)) as number[];
-  const wall = Date.UTC(y!, mo! - 1, d!, h!, mi!, s!);
+  const [, y = 0, mo = 0, d = 0, h = 0, mi = 0, s = 0] = m.map((part) => Number(part ?? 0));
+  const wall = Date.UTC(y, mo - 1, d, h, mi, s);
   const check = new Date(wall);
-  if (check.getUTCMonth() !== mo! - 1 || check.getUTCDate() !== d! || h! > 23) return null;
+  if (check.getUTCMonth() !== mo - 1 || check.getUTCDate() !== d || h > 23) return null;
   return fromZonedTime(check.toISOString().slice(0, 19), timeZone).getTime();
 }
 

@@ -180,7 +180,15 @@ export async function productionReport(
 
 /** The EXPLAIN plan of the report's statement (for the benchmark's output). */
 export async function explainProductionReport(breweryId: number, month: string): Promise<string[]> {
-  const rows = await sequelize.query<Record<string, unknown>>(`EXPLAIN ${PRODUCTION_SQL}`, {
+  const rows = await sequelize.query<{
+    id: number;
+    select_type: string;
+    table: string | null;
+    type: string | null;
+    key: string | null;
+    rows: number | null;
+    Extra: string | null;
+  }>(`EXPLAIN ${PRODUCTION_SQL}`, {
     replacements: { breweryId, ...monthBounds(month, 'UTC') },
     type: QueryTypes.SELECT,
   });

@@ -8,7 +8,6 @@ import { TastingNote } from '../models';
 import { methodNotAllowed, notFound, unprocessable } from '../errors';
 import { canonicalJson, GENESIS_HASH, sha256 } from './batch-log';
 import { findBatch } from './batches';
-import type { Role } from '../../shared/schemas/roles';
 import type {
   OffFlavour,
   TastingNote as TastingNoteView,
@@ -174,7 +173,7 @@ async function append(actor: NoteAuthor, batchId: number, input: TastingNoteInpu
     correctsNoteId: input.correctsNoteId ?? null,
     reason: input.reason ?? null,
     authorId: actor.id,
-    authorRole: actor.role as Role,
+    authorRole: actor.role,
     authorName: actor.displayName,
     signedAt: new Date(),
     idempotencyKey: input.idempotencyKey,

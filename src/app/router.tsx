@@ -40,7 +40,7 @@ export const router = createBrowserRouter([
           {
             index: true,
             handle: { action: 'account.read' } satisfies PageAccess,
-            lazy: () => import('../features/home/components/home-page').then((m) => ({ Component: m.HomePage })),
+            lazy: () => import('./routes/home-page').then((m) => ({ Component: m.HomePage })),
           },
           {
             path: 'team',

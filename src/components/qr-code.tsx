@@ -7,7 +7,9 @@ export function QrCode({ path, label, size = 160 }: { path: string; label: strin
   const url = `${window.location.origin}${path}`;
   useEffect(() => {
     let live = true;
-    QRCode.toDataURL(url, { margin: 1, width: size, errorCorrectionLevel: 'M' }).then((data) => live && setSrc(data));
+    void QRCode.toDataURL(url, { margin: 1, width: size, errorCorrectionLevel: 'M' }).then(
+      (data) => live && setSrc(data),
+    );
     return () => {
       live = false;
     };

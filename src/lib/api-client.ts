@@ -39,7 +39,7 @@ async function request<T>(
     throw new ApiError(0, 'offline', 'No connection to Kettlewright. Check the network and try again.');
   }
   if (response.status === 204) return undefined as T;
-  const data = await response.json().catch(() => null);
+  const data: unknown = await response.json().catch(() => null);
   if (!response.ok) {
     const error = (data as { error?: { code?: string; message?: string; fields?: Record<string, string> } } | null)
       ?.error;

@@ -173,7 +173,7 @@ export function createOutbox(store: OutboxStore, send: (item: OutboxItem) => Pro
   }
 
   return {
-    subscribe(listener: () => void) {
+    subscribe: (listener: () => void) => {
       listeners.add(listener);
       return () => {
         listeners.delete(listener);
@@ -181,7 +181,7 @@ export function createOutbox(store: OutboxStore, send: (item: OutboxItem) => Pro
     },
     getSnapshot: () => snapshot,
     /** Called after each item the server accepted (e.g. to refresh what the screen shows). */
-    onSent(listener: (item: OutboxItem) => void) {
+    onSent: (listener: (item: OutboxItem) => void) => {
       sentListeners.add(listener);
       return () => {
         sentListeners.delete(listener);

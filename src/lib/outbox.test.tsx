@@ -35,7 +35,7 @@ const STATUS: Partial<Record<ApiErrorCode, number>> = {
 function stubNetwork(script: Record<string, Answer[]> = {}) {
   const received: { url: string; label: string; key: string; body: unknown }[] = [];
   vi.stubGlobal('fetch', async (url: string, init: RequestInit) => {
-    const body = JSON.parse(String(init.body)) as { label?: string; text?: string };
+    const body = JSON.parse(typeof init.body === 'string' ? init.body : '{}') as { label?: string; text?: string };
     const label = body.label ?? body.text ?? '';
     const answer = script[label]?.shift() ?? 'ok';
     if (answer === 'offline') throw new TypeError('Failed to fetch');

@@ -260,7 +260,7 @@ describe('bad input never answers 5xx and a refusal writes nothing', () => {
       const paramArb = fc.record(
         Object.fromEntries(
           params.map((p) => [p, own[p] !== undefined ? fc.oneof(fc.constant(String(own[p])), junkParam) : junkParam]),
-        ) as Record<string, fc.Arbitrary<string>>,
+        ),
       );
       const callerArb = fc.constantFrom<Caller>(...ROLES, 'signed-out');
 

@@ -451,7 +451,7 @@ describe('vessels', () => {
   });
 
   it('stores capacity and rated pressure in SI from bbl and psi, and refuses a duplicate name', async () => {
-    const v = await vessel({ name: 'FV-psi', type: 'fermenter', capacity: 10, ratedPressure: 15 } as never);
+    const v = await vessel({ name: 'FV-psi', type: 'fermenter', capacity: 10, ratedPressure: 15 });
     const res = await t.as.head_brewer.post('/api/vessels').send({
       name: 'FV-bbl',
       type: 'fermenter',

@@ -36,9 +36,8 @@ async function call(route: RouteEntry, ids: (param: string) => Promise<number>) 
   const values: Record<string, number> = {};
   for (const p of pathParams(route.path)) values[p] = await ids(paramKind(route.path, p));
   const query = VALID_QUERIES[routeKey(route)];
-  const req = ours.as[callerFor(route)]
-    [route.method](`${fillPath(route.path, values)}${query ? `?${query}` : ''}`)
-    .set(writeHeaders());
+  const caller = ours.as[callerFor(route)];
+  const req = caller[route.method](`${fillPath(route.path, values)}${query ? `?${query}` : ''}`).set(writeHeaders());
   const sample = VALID_BODIES[routeKey(route)];
   return route.hasBody ? req.send(sample ? (sample(values) as object) : {}) : req;
 }

@@ -81,17 +81,15 @@ describe('recipe saving under any schema-valid input', () => {
     await fc.assert(
       fc.asyncProperty(content, async (c) => {
         expect(recipeContentSchema.safeParse(c).success).toBe(true);
-        const res = await t.as.head_brewer
-          .post('/api/recipes')
-          .send({
-            name: `Fuzz ${n++}`,
-            style: '',
-            description: '',
-            status: 'draft',
-            changeNote: 'x',
-            equipmentProfileId: equipmentId,
-            content: c,
-          });
+        const res = await t.as.head_brewer.post('/api/recipes').send({
+          name: `Fuzz ${n++}`,
+          style: '',
+          description: '',
+          status: 'draft',
+          changeNote: 'x',
+          equipmentProfileId: equipmentId,
+          content: c,
+        });
         expect([201, 422], JSON.stringify(res.body)).toContain(res.status);
         seen.add(res.status);
         if (res.status === 422) expect(Object.keys(res.body.error.fields ?? {})).toHaveLength(1);

@@ -121,15 +121,13 @@ describe('a signed tasting note', () => {
       .send(note({ correctsNoteId: first.id, reason: 'I disagree' }));
     expect(byOther.status).toBe(422);
 
-    const fix = await t.as.assistant_brewer
-      .post(`/api/batches/${batch.id}/tasting-notes`)
-      .send(
-        note({
-          content: content({ score: 4.5 }),
-          correctsNoteId: first.id,
-          reason: 'Diacetyl was gone after the sample warmed',
-        }),
-      );
+    const fix = await t.as.assistant_brewer.post(`/api/batches/${batch.id}/tasting-notes`).send(
+      note({
+        content: content({ score: 4.5 }),
+        correctsNoteId: first.id,
+        reason: 'Diacetyl was gone after the sample warmed',
+      }),
+    );
     expect(fix.status).toBe(201);
     expect(fix.body).toMatchObject({ correctsNoteId: first.id, reason: 'Diacetyl was gone after the sample warmed' });
 

@@ -16,11 +16,11 @@ function outboxCapturedTimes(page: Page): Promise<string[]> {
     () =>
       new Promise<string[]>((resolve, reject) => {
         const open = indexedDB.open('keyval-store');
-        open.onerror = () => reject(open.error);
+        open.onerror = () => reject(open.error ?? new Error('IndexedDB did not open'));
         open.onsuccess = () => {
           const get = open.result.transaction('keyval', 'readonly').objectStore('keyval').get('kettlewright-outbox');
           get.onsuccess = () => resolve(((get.result ?? []) as { capturedAt: string }[]).map((i) => i.capturedAt));
-          get.onerror = () => reject(get.error);
+          get.onerror = () => reject(get.error ?? new Error('IndexedDB did not answer'));
         };
       }),
   );

@@ -18,7 +18,6 @@ import {
   type SignatureMeaning,
   type WriteMeta,
 } from '../../../shared/schemas/batch-log';
-import type { Role } from '../../../shared/schemas/roles';
 
 /** An entry later than this after its capture on the device is flagged as late. */
 const LATE_AFTER_MS = 15 * 60 * 1000;
@@ -201,7 +200,7 @@ function entryFields(
     correctsEntryId,
     reason,
     authorId: actor.id,
-    authorRole: actor.role as Role,
+    authorRole: actor.role,
     authorName: actor.displayName,
     meaning,
     capturedAt: meta.capturedAt,

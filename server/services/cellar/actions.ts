@@ -15,9 +15,9 @@ import type { ActionEntryInput, ActionView, CarbonationQuery, CellarAction } fro
 import type { CarbonationAnswer } from '../../../shared/contract/cellar';
 
 export function toActionView(e: BatchLogEntry): ActionView {
-  const d = e.data as Record<string, unknown>;
-  const n = (key: string) => (typeof d[key] === 'number' ? (d[key] as number) : null);
-  const s = (key: string) => (typeof d[key] === 'string' ? (d[key] as string) : null);
+  const d = e.data;
+  const n = (key: string) => (typeof d[key] === 'number' ? d[key] : null);
+  const s = (key: string) => (typeof d[key] === 'string' ? d[key] : null);
   return {
     logEntryId: Number(e.id),
     action: d.action as CellarAction,

@@ -78,5 +78,5 @@ export const asNumber = (optional = false) => ({
       ? optional
         ? undefined
         : Number.NaN
-      : Number(String(v).replace(',', '.')),
+      : Number(typeof v === 'string' ? v.replace(',', '.') : v),
 });

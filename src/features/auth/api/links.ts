@@ -1,7 +1,7 @@
 import { queryOptions, useMutation, useQuery } from '@tanstack/react-query';
 import { call } from '../../../lib/api-client';
 import { authRoutes } from '../../../../shared/contract/auth';
-import type { ResetRequestInput, ResetPasswordInput, ChangePasswordInput } from '../../../../shared/schemas/auth';
+import type { ResetRequestInput, ResetPasswordInput } from '../../../../shared/schemas/auth';
 import { authKeys } from '../../../lib/current-user';
 
 export const inviteQuery = (token: string) =>
@@ -34,6 +34,3 @@ export const useResetPassword = (token: string) =>
   useMutation({
     mutationFn: (input: ResetPasswordInput) => call(authRoutes.resetPassword, { params: { token }, body: input }),
   });
-
-export const useChangePassword = () =>
-  useMutation({ mutationFn: (input: ChangePasswordInput) => call(authRoutes.changePassword, { body: input }) });

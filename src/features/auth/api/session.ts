@@ -20,14 +20,3 @@ export const useSignIn = () => useSessionMutation((input: SignInInput) => call(a
 export const useSignUp = () => useSessionMutation((input: SignUpInput) => call(authRoutes.signUp, { body: input }));
 export const useAcceptInvite = (token: string) =>
   useSessionMutation((input: AcceptInviteInput) => call(authRoutes.acceptInvite, { params: { token }, body: input }));
-
-export function useSignOut() {
-  const client = useQueryClient();
-  return useMutation({
-    mutationFn: () => call(authRoutes.signOut),
-    onSuccess: () => {
-      client.clear();
-      client.setQueryData(authKeys.me(), null);
-    },
-  });
-}

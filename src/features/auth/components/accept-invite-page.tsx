@@ -26,7 +26,7 @@ export function AcceptInvitePage() {
     setBanner(undefined);
     try {
       await accept.mutateAsync(values);
-      navigate('/', { replace: true });
+      void navigate('/', { replace: true });
     } catch (error) {
       setBanner(applyServerErrors(error, setError));
     }

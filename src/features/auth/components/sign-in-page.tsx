@@ -21,7 +21,7 @@ export function SignInPage() {
     setBanner(undefined);
     try {
       await signIn.mutateAsync(values);
-      navigate(from, { replace: true });
+      void navigate(from, { replace: true });
     } catch (error) {
       setBanner(applyServerErrors(error, setError));
     }

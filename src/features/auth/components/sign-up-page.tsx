@@ -25,7 +25,7 @@ export function SignUpPage() {
     setBanner(undefined);
     try {
       await signUp.mutateAsync(values);
-      navigate('/', { replace: true });
+      void navigate('/', { replace: true });
     } catch (error) {
       setBanner(applyServerErrors(error, setError));
     }

@@ -28,7 +28,9 @@ describe('boil timer', () => {
     expect(screen.queryByText(/No more additions|Every boil addition is logged/)).toBeNull();
     expect(screen.getByTestId('boil-add-now').textContent).toContain('60 min addition');
     expect(screen.getByText('Magnum')).toBeTruthy();
-    act(() => vi.advanceTimersByTime(5 * 60_000));
+    act(() => {
+      vi.advanceTimersByTime(5 * 60_000);
+    });
     expect(screen.getByTestId('boil-add-now').textContent).toContain('due 05:01 ago');
     rerender(<BoilTimer {...props} loggedMinutes={new Set([60])} />);
     // 15 min remaining is 45 min after the start: 45:00 − 5:01 = 39:59.
@@ -39,7 +41,9 @@ describe('boil timer', () => {
 
   it('stops at flame-out and shows how long the boil was', () => {
     render(<BoilTimer {...props} boilEndedAt={new Date(START + 62 * 60_000).toISOString()} />);
-    act(() => vi.advanceTimersByTime(30 * 60_000));
+    act(() => {
+      vi.advanceTimersByTime(30 * 60_000);
+    });
     expect(screen.getByTestId('boil-ended').textContent).toBe('Boil ended 11:02 AST after 62:00');
     expect(screen.queryByTestId('boil-countdown')).toBeNull();
   });

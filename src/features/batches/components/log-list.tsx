@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
-import { vesselsQuery } from '../../cellar/api/vessels';
+import { vesselsQuery } from '../../../lib/vessels';
 import type { UnitSystem } from '../../../../shared/schemas/auth';
 import type { LogEntry, Measurements } from '../../../../shared/schemas/batch-log';
 import { ROLE_LABELS, type Role } from '../../../../shared/schemas/roles';

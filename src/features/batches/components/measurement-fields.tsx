@@ -192,7 +192,7 @@ export function MeasurementFields({
             )}
             {far && (
               <p id={`${id}-far`} className="mt-1 rounded bg-brass-100 px-2 py-1 text-base font-semibold text-ink-900">
-                Far from the expected {expectedText(key, want!, system, gravity)}
+                Far from the expected {expectedText(key, want, system, gravity)}
                 {unit && !(key === 'gravitySg' && gravity === 'brix') ? ` ${unit}` : ''}: check it before marking done.
               </p>
             )}

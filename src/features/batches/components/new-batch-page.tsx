@@ -56,7 +56,7 @@ export function NewBatchPage() {
           className="space-y-4"
           onSubmit={form.handleSubmit((input) =>
             plan.mutate(input, {
-              onSuccess: (batch) => navigate(`/batches/${batch.id}`),
+              onSuccess: (batch) => void navigate(`/batches/${batch.id}`),
               onError: (error) => setBanner(applyServerErrors(error, form.setError)),
             }),
           )}

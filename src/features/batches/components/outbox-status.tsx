@@ -3,7 +3,7 @@ import { useLocation, useNavigate } from 'react-router-dom';
 import { Button, Dialog } from '../../../components/ui';
 import { outbox, useOutbox } from '../../../lib/outbox';
 import { forgetOfflineAnswers } from '../../../lib/service-worker';
-import { useSignOut } from '../../auth/api/session';
+import { useSignOut } from '../../../lib/sign-out';
 import { useCurrentUser } from '../../../lib/current-user';
 
 /** Shown when the session ended with writes waiting: they are kept, and sent with their original keys after signing in. */

@@ -1,7 +1,7 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { call } from '../../../lib/api-client';
 import { cellarRoutes } from '../../../../shared/contract/cellar';
-import { cellarKeys } from './keys';
+import { cellarKeys } from '../../../lib/cellar-keys';
 
 export const alertsQuery = () =>
   queryOptions({

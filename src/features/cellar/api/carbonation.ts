@@ -2,7 +2,7 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import { call } from '../../../lib/api-client';
 import type { CarbonationQuery } from '../../../../shared/schemas/cellar';
 import { cellarRoutes } from '../../../../shared/contract/cellar';
-import { cellarKeys } from './keys';
+import { cellarKeys } from '../../../lib/cellar-keys';
 
 export const carbonationQuery = (query: CarbonationQuery) =>
   queryOptions({

@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { call } from '../../../lib/api-client';
 import { cellarRoutes } from '../../../../shared/contract/cellar';
 import type { CellarPlanInput } from '../../../../shared/schemas/cellar';
-import { cellarKeys } from './keys';
+import { cellarKeys } from '../../../lib/cellar-keys';
 
 export function useSavePlan(batchId: number) {
   const client = useQueryClient();

@@ -3,7 +3,7 @@ import { call } from '../../../lib/api-client';
 import { cellarRoutes } from '../../../../shared/contract/cellar';
 import { deviceId } from '../../../lib/outbox';
 import type { ProbeImportInput } from '../../../../shared/schemas/cellar';
-import { cellarKeys } from './keys';
+import { cellarKeys } from '../../../lib/cellar-keys';
 
 /** Checks every row of a probe file against the batch; writes nothing. */
 export function usePreviewImport(batchId: number) {

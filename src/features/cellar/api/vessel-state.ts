@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { call } from '../../../lib/api-client';
 import { vesselRoutes } from '../../../../shared/contract/cellar';
-import { cellarKeys } from './keys';
+import { cellarKeys } from '../../../lib/cellar-keys';
 
 /** Marks an emptied vessel clean. */
 export function useMarkClean() {

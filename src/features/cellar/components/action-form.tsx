@@ -16,7 +16,7 @@ import {
 import type { UnitSystem } from '../../../../shared/schemas/auth';
 import { displayUnit } from '../../../lib/units';
 import { useLogCellarEntry } from '../api/log-cellar-entry';
-import { useVessels } from '../api/vessels';
+import { useVessels } from '../../../lib/vessels';
 import { useSubmitOnce } from '../../../lib/use-submit-once';
 import { optionalNumber } from './form-values';
 

@@ -5,7 +5,7 @@ import { entryWords } from '../../../../shared/batches/entry-words';
 import { Card, ErrorState, LinkButton, Loading, PageHeader, Stat } from '../../../components/ui';
 import { useCurrentUser, useCan } from '../../../lib/current-user';
 import { useBatchCellar } from '../api/batch-cellar';
-import { useVessels } from '../api/vessels';
+import { useVessels } from '../../../lib/vessels';
 import { cellarGroup } from '../api/log-cellar-entry';
 import { FermentationChart } from './fermentation-chart';
 import { ReadingForm } from './reading-form';

@@ -71,7 +71,7 @@ function doubleTap(form: HTMLElement) {
 /** Lets the outbox finish sending, then counts again: a second write would have landed by now. */
 const settle = () => act(() => new Promise((r) => setTimeout(r, 50)));
 const type = (label: string, value: string) => fireEvent.change(screen.getByLabelText(label), { target: { value } });
-const valueOf = (label: string) => (screen.getByLabelText(label) as HTMLInputElement).value;
+const valueOf = (label: string) => screen.getByLabelText<HTMLInputElement>(label).value;
 
 describe('cellar forms take one tap at a time', () => {
   it('a double tap on Save reading writes one reading', async () => {
@@ -315,7 +315,7 @@ describe('packaging summary', () => {
     render(withQueries(<PackagingForm batchId={1} packaging={nothingPackaged} unitSystem="us" />));
     fireEvent.change(screen.getAllByLabelText('Size')[0]!, { target: { value: 'sixth_bbl' } });
     fireEvent.click(screen.getByRole('button', { name: 'Add a line' }));
-    const sizes = screen.getAllByLabelText('Size') as HTMLSelectElement[];
+    const sizes = screen.getAllByLabelText<HTMLSelectElement>('Size');
     expect(sizes.map((s) => s.value)).toEqual(['sixth_bbl', 'sixth_bbl']);
     expect((screen.getAllByLabelText('Count')[1] as HTMLInputElement).value).toBe('');
   });

@@ -107,7 +107,7 @@ export function FermentationChart({ readings, actions, plan, prediction, unitSys
             <Tooltip
               labelFormatter={(t) => timeFormat.format(Number(t))}
               formatter={(value, name) =>
-                name === 'Temperature' ? [`${value} ${temp.unit}`, name] : [Number(value).toFixed(3), name]
+                name === 'Temperature' ? [`${String(value)} ${temp.unit}`, name] : [Number(value).toFixed(3), name]
               }
             />
             <ReferenceLine

@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useState, type ChangeEvent } from 'react';
 import { useFieldArray, useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Button, SelectField, TextField } from '../../../components/ui';
@@ -66,13 +66,14 @@ export function PackagingForm({
               label="Package"
               {...register(`lines.${i}.kind`, {
                 // Keg lines carry a keg size, can and bottle lines a size in mL: swap the whole line.
-                onChange: (e) => {
+                onChange: (e: ChangeEvent<HTMLSelectElement>) => {
                   const count = getValues(`lines.${i}.count`);
+                  const kind = e.target.value;
                   lines.update(
                     i,
-                    e.target.value === 'keg'
+                    kind === 'keg'
                       ? { kind: 'keg', size: 'half_bbl', count }
-                      : { kind: e.target.value, sizeMl: 355, count },
+                      : { kind: kind === 'bottle' ? 'bottle' : 'can', sizeMl: 355, count },
                   );
                 },
               })}

@@ -32,7 +32,7 @@ describe('cellar plan', () => {
 
   it('gives the head brewer fields and a save button', () => {
     render(withQueries(<PlanForm batchId={1} plan={plan} unitSystem="us" canEdit />));
-    expect((screen.getByLabelText('Planned FG') as HTMLInputElement).disabled).toBe(false);
+    expect(screen.getByLabelText<HTMLInputElement>('Planned FG').disabled).toBe(false);
     expect(screen.getByRole('button', { name: 'Save cellar plan' })).toBeTruthy();
   });
 });

@@ -1,7 +1,7 @@
 import { Button, EmptyState, ErrorState, LinkButton, Loading, PageHeader } from '../../../components/ui';
 import { QrCode } from '../../../components/qr-code';
 import { VESSEL_TYPE_LABELS } from '../labels';
-import { useVessels } from '../api/vessels';
+import { useVessels } from '../../../lib/vessels';
 
 /**
  * A sheet of labels, one per vessel, to print and fix to the tanks: scanning one on the tablet opens

@@ -23,7 +23,7 @@ import { VESSEL_STATUS_LABELS, VESSEL_TYPE_LABELS } from '../labels';
 import { useCurrentUser, useCan } from '../../../lib/current-user';
 import { applyServerErrors } from '../../../lib/forms';
 import { showVolume } from '../../../lib/units';
-import { useSaveVessel, useVessels } from '../api/vessels';
+import { useSaveVessel, useVessels } from '../../../lib/vessels';
 import { useDeleteVessel, useMarkClean } from '../api/vessel-state';
 import { FormBanner } from '../../../components/ui/form-banner';
 import { useSubmitOnce } from '../../../lib/use-submit-once';

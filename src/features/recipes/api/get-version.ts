@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { call } from '../../../lib/api-client';
 import { recipeRoutes } from '../../../../shared/contract/recipes';
-import { recipeKeys } from './keys';
+import { recipeKeys } from '../../../lib/recipe-keys';
 
 export const versionQuery = (recipeId: number, versionId: number) =>
   queryOptions({

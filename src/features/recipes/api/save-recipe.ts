@@ -7,7 +7,7 @@ import type {
   SaveVersionInput,
   UpdateRecipeInput,
 } from '../../../../shared/schemas/recipes';
-import { recipeKeys } from './keys';
+import { recipeKeys } from '../../../lib/recipe-keys';
 
 /** Every recipe write invalidates the whole recipes prefix: list figures, details and versions all move together. */
 function useRecipeMutation<I, O>(fn: (input: I) => Promise<O>) {

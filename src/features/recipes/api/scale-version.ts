@@ -2,7 +2,7 @@ import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query'
 import { call } from '../../../lib/api-client';
 import { recipeRoutes } from '../../../../shared/contract/recipes';
 import type { ScaleTarget } from '../../../../shared/schemas/recipes';
-import { recipeKeys } from './keys';
+import { recipeKeys } from '../../../lib/recipe-keys';
 
 /** The target as sent: a volume to the millilitre, so a volume converted from gallons keys one answer. */
 const sent = ({ equipmentProfileId, batchVolumeL }: ScaleTarget): ScaleTarget => ({

@@ -4,8 +4,8 @@ import { Caution, EmptyState, ErrorState, LinkButton, Loading, PageHeader } from
 import { useCurrentUser, useCan } from '../../../lib/current-user';
 import { ApiError } from '../../../lib/api-client';
 import { useToast } from '../../../components/ui';
-import { useEquipment } from '../../library/api/equipment';
-import { useIngredients } from '../../library/api/ingredients';
+import { useEquipment } from '../../../lib/equipment';
+import { useIngredients } from '../../../lib/ingredients';
 import { useVersion } from '../api/get-version';
 import { useRecipe } from '../api/get-recipe';
 import { useCreateRecipe, useSaveVersion, useUpdateRecipe } from '../api/save-recipe';
@@ -53,7 +53,7 @@ export function EditorPage() {
         input: { changeNote, equipmentProfileId, content },
       });
       toast(`Saved version ${saved.number}`);
-      if (saved.id !== versionId) navigate(`/recipes/${recipeId}/versions/${saved.id}`);
+      if (saved.id !== versionId) void navigate(`/recipes/${recipeId}/versions/${saved.id}`);
     } catch (error) {
       return failure(error);
     }
@@ -156,7 +156,7 @@ export function NewRecipePage() {
         onSave={async (values) => {
           try {
             const created = await create.mutateAsync(values);
-            navigate(`/recipes/${created.id}/versions/${created.versionId}`);
+            void navigate(`/recipes/${created.id}/versions/${created.versionId}`);
           } catch (error) {
             return failure(error);
           }

@@ -73,7 +73,7 @@ describe('recipe editor', () => {
     renderEditor();
     const hop = within(screen.getByRole('group', { name: 'Hop 2' }));
     fireEvent.change(hop.getByLabelText('Variety'), { target: { value: 'Harbour wild hop' } });
-    expect((hop.getByLabelText('Alpha (%)') as HTMLInputElement).value).toBe('8');
+    expect(hop.getByLabelText<HTMLInputElement>('Alpha (%)').value).toBe('8');
   });
 
   it('solves a hop written as a share of the target IBU', () => {
@@ -117,9 +117,9 @@ describe('recipe editor', () => {
     const adjunct = within(screen.getByRole('group', { name: 'Adjunct 1' }));
     fireEvent.change(adjunct.getByLabelText('Dosed'), { target: { value: 'kgPerHl' } });
     // 1 lb per US gal = 0.45359237 kg / 3.785411784 L = 11.98 kg per hL (NIST Handbook 44 Appendix C).
-    expect((adjunct.getByLabelText('Low (kg per hL)') as HTMLInputElement).value).toBe('4.793');
-    expect((adjunct.getByLabelText('High (kg per hL)') as HTMLInputElement).value).toBe('11.98');
-    expect((adjunct.getByLabelText('Dose (kg per hL)') as HTMLInputElement).value).toBe('7.19');
+    expect(adjunct.getByLabelText<HTMLInputElement>('Low (kg per hL)').value).toBe('4.793');
+    expect(adjunct.getByLabelText<HTMLInputElement>('High (kg per hL)').value).toBe('11.98');
+    expect(adjunct.getByLabelText<HTMLInputElement>('Dose (kg per hL)').value).toBe('7.19');
     expect(screen.queryByText(/outside its/)).toBeNull();
   });
 
@@ -156,11 +156,11 @@ describe('recipe editor', () => {
   it("clears an adjunct's boil minute when it moves to the fermenter", () => {
     renderEditor();
     const adjunct = within(screen.getByRole('group', { name: 'Adjunct 1' }));
-    expect((adjunct.getByLabelText('Minutes left') as HTMLInputElement).value).toBe('15');
+    expect(adjunct.getByLabelText<HTMLInputElement>('Minutes left').value).toBe('15');
     fireEvent.change(adjunct.getByLabelText('Goes in'), { target: { value: 'fermenter' } });
     expect(adjunct.queryByLabelText('Minutes left')).toBeNull();
     fireEvent.change(adjunct.getByLabelText('Goes in'), { target: { value: 'boil' } });
-    expect((adjunct.getByLabelText('Minutes left') as HTMLInputElement).value).toBe('');
+    expect(adjunct.getByLabelText<HTMLInputElement>('Minutes left').value).toBe('');
   });
 
   it('shows a brewhouse-sized batch in barrels beside the gallons typed', () => {

@@ -1,4 +1,4 @@
-import { useRef, useState, type ReactNode } from 'react';
+import { useRef, useState, type ChangeEvent, type ReactNode } from 'react';
 import {
   useController,
   useFieldArray,
@@ -16,7 +16,6 @@ import {
   doseBasisLabel,
   doseUnitLabel,
   percentagesFromWeights,
-  type DoseRule,
 } from '../../../../shared/brewing';
 import {
   ADJUNCT_CATEGORIES,
@@ -209,7 +208,7 @@ function GrainBill({
                 label="Name"
                 list="kw-library-fermentable"
                 {...register(`${p}.name`, {
-                  onChange: (e) => {
+                  onChange: (e: ChangeEvent<HTMLInputElement | HTMLSelectElement>) => {
                     const hit = fromLibrary('fermentable', e.target.value);
                     if (hit?.ppg != null) setValue(`${p}.potential`, { ppg: hit.ppg }, { shouldValidate: true });
                     if (hit?.colourLovibond != null)
@@ -334,7 +333,7 @@ function Hops({
                 label="Variety"
                 list="kw-library-hop"
                 {...register(`${p}.name`, {
-                  onChange: (e) => {
+                  onChange: (e: ChangeEvent<HTMLInputElement | HTMLSelectElement>) => {
                     const hit = fromLibrary('hop', e.target.value);
                     if (hit?.alphaAcidPct != null)
                       setValue(`${p}.alphaAcidPct`, hit.alphaAcidPct, { shouldValidate: true });
@@ -409,7 +408,7 @@ function Hops({
                 onChange={(e) => {
                   const share =
                     e.target.value === 'share' && targetIbu && ibus?.[i] !== undefined
-                      ? Number(((ibus[i]! / targetIbu) * 100).toFixed(1))
+                      ? Number(((ibus[i] / targetIbu) * 100).toFixed(1))
                       : undefined;
                   setValue(`${p}.ibuSharePct`, e.target.value === 'share' ? share || 10 : undefined, {
                     shouldValidate: true,
@@ -445,11 +444,11 @@ function Hops({
                 )}
             {values[i]?.ibuSharePct !== undefined && solvedWeights?.[i] !== undefined && (
               <p className="min-h-touch pb-2 font-semibold tabular-nums" aria-label={`Hop ${i + 1} solved weight`}>
-                = {show(system, 'hopWeight', solvedWeights[i]!)}
+                = {show(system, 'hopWeight', solvedWeights[i])}
               </p>
             )}
             <div className="min-h-touch pb-2 text-sm text-ink-500" aria-label={`Hop ${i + 1} IBU`}>
-              {ibus?.[i] !== undefined ? `${ibus[i]!.toFixed(1)} IBU` : ''}
+              {ibus?.[i] !== undefined ? `${ibus[i].toFixed(1)} IBU` : ''}
             </div>
           </Row>
         );
@@ -768,7 +767,7 @@ function Additions({
       {list.fields.map((f, i) => {
         const p = `content.${kind}.${i}` as 'content.spices.0';
         const v = values[i];
-        const unit = v?.rule ? doseUnitLabel(v.rule as DoseRule) : '';
+        const unit = v?.rule ? doseUnitLabel(v.rule) : '';
         return (
           <Row
             key={f.id}
@@ -802,7 +801,7 @@ function Additions({
                 label="Goes in"
                 {...register(`${p}.stage`, {
                   // Only the boil counts minutes left: a minute kept from the boil would put fruit in the fermenter "at 15 min left".
-                  onChange: (e) =>
+                  onChange: (e: ChangeEvent<HTMLInputElement | HTMLSelectElement>) =>
                     e.target.value !== 'boil' && setValue(`${p}.boilMinutes`, undefined, { shouldValidate: true }),
                 })}
                 disabled={disabled}
@@ -840,11 +839,13 @@ function Additions({
                   label="Dosed"
                   {...register(`${p}.rule.basis`, {
                     // Restate low, high and dose in the new unit so the same amount goes in; a weight cannot become a volume, so those stay as typed.
-                    onChange: (e) => {
+                    onChange: (e: ChangeEvent<HTMLInputElement | HTMLSelectElement>) => {
                       const before = v?.rule;
                       if (!before || v.level === undefined || !volumeL) return;
                       try {
-                        const next = convertDoseRule(before as DoseRule, v.level as number, e.target.value, volumeL);
+                        const basis = DOSE_BASES.find((b) => b === e.target.value);
+                        if (!basis) return;
+                        const next = convertDoseRule(before, v.level, basis, volumeL);
                         if (!next) return;
                         setValue(
                           `${p}.rule`,
@@ -1002,7 +1003,7 @@ export function RecipeEditor({
   const shared: Shared = { control, register, errors: formState.errors, system, disabled, fromLibrary, setValue };
   const c = live.computed;
   const adjunctCount = values.content?.adjuncts?.length ?? 0;
-  const batchVolumeL = values.content?.targets?.batchVolumeL as number | undefined;
+  const batchVolumeL = values.content?.targets?.batchVolumeL;
   const spiceCount = values.content?.spices?.length ?? 0;
   // What each addition's sugar does to the OG, or why it is not counted; blank when it has none.
   const sugarNote = (i: number) => {
@@ -1068,7 +1069,7 @@ export function RecipeEditor({
               label="Written for"
               {...register('equipmentProfileId', {
                 setValueAs: Number,
-                onChange: (e) => {
+                onChange: (e: ChangeEvent<HTMLInputElement | HTMLSelectElement>) => {
                   const chosen = equipment.find((x) => x.id === Number(e.target.value));
                   if (chosen) setValue('content.targets.batchVolumeL', chosen.batchVolumeL, { shouldValidate: true });
                 },
@@ -1146,7 +1147,7 @@ export function RecipeEditor({
           {...shared}
           ibus={c?.hops.map((h) => h.ibu)}
           solvedWeights={c?.hops.map((h) => h.weightG)}
-          targetIbu={values.content?.targets?.ibu as number | undefined}
+          targetIbu={values.content?.targets?.ibu}
         />
         <Mash {...shared} />
         <Water {...shared} setWater={(water) => setValue('content.water', water, { shouldValidate: true })} />
@@ -1171,7 +1172,7 @@ export function RecipeEditor({
                 label="Yeast"
                 list="kw-library-yeast"
                 {...register('content.yeast.name', {
-                  onChange: (e) => {
+                  onChange: (e: ChangeEvent<HTMLInputElement | HTMLSelectElement>) => {
                     const hit = fromLibrary('yeast', e.target.value);
                     if (hit?.attenuationPct != null)
                       setValue('content.yeast.attenuationPct', hit.attenuationPct, { shouldValidate: true });

@@ -23,7 +23,7 @@ import {
   Th,
 } from '../../../components/ui';
 import { useCan } from '../../../lib/current-user';
-import { useRecipeList } from '../api/list-recipes';
+import { useRecipeList } from '../../../lib/recipe-list';
 import type { RecipeListRow } from '../../../../shared/schemas/recipes';
 
 const col = createColumnHelper<RecipeListRow>();

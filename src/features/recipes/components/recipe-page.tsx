@@ -4,7 +4,7 @@ import { srmToHex } from '../../../../shared/brewing';
 import { Button, Card, ErrorState, LinkButton, Loading, PageHeader, Table, Td, Th } from '../../../components/ui';
 import { useCurrentUser, useCan } from '../../../lib/current-user';
 import { showVolume } from '../../../lib/units';
-import { useEquipment } from '../../library/api/equipment';
+import { useEquipment } from '../../../lib/equipment';
 import { useRecipe } from '../api/get-recipe';
 
 /** A recipe's history: every version with author, date and change note; pick two to compare. */

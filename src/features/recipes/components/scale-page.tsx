@@ -16,7 +16,7 @@ import { useCurrentUser, useCan } from '../../../lib/current-user';
 import { ApiError } from '../../../lib/api-client';
 import { displayUnit, showVolume } from '../../../lib/units';
 import { batchVolumeField, issueMessage } from '../../../../shared/quantities/field';
-import { useEquipment } from '../../library/api/equipment';
+import { useEquipment } from '../../../lib/equipment';
 import { useSaveScaled } from '../api/save-recipe';
 import { scaleSearch, useScale } from '../api/scale-version';
 import type { ScaleTarget } from '../../../../shared/schemas/recipes';
@@ -119,7 +119,7 @@ export function ScalePage() {
       });
       setSaving(false);
       toast(`Saved as version ${saved.number}`);
-      navigate(`/recipes/${recipeId}/versions/${saved.id}/scale`);
+      void navigate(`/recipes/${recipeId}/versions/${saved.id}/scale`);
     } catch (error) {
       setSaveError(error instanceof ApiError ? (error.fields.changeNote ?? error.message) : 'Not saved. Try again.');
     }

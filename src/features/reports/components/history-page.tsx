@@ -12,7 +12,7 @@ import {
   YAxis,
 } from 'recharts';
 import { EmptyState, ErrorState, Loading, PageHeader, SelectField, Table, Td, Th } from '../../../components/ui';
-import { useRecipeList } from '../../recipes/api/list-recipes';
+import { useRecipeList } from '../../../lib/recipe-list';
 import { useBatchHistory } from '../api/history';
 import { niceAxis } from '../../../lib/chart-ticks';
 

@@ -11,7 +11,7 @@ import {
 import { Button, Card, PageHeader, SelectField, TextField, useToast } from '../../../components/ui';
 import { applyServerErrors } from '../../../lib/forms';
 import { useUpdateBrewery } from '../api/brewery';
-import { useChangePassword } from '../../auth/api/links';
+import { useChangePassword } from '../api/change-password';
 import { FormBanner } from '../../../components/ui/form-banner';
 import { PasswordHint } from '../../../components/ui/password-hint';
 import { TimeZoneOptions } from '../../../components/ui/time-zone-options';

@@ -1,8 +1,8 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { call } from '../../../lib/api-client';
-import { vesselRoutes } from '../../../../shared/contract/cellar';
-import type { VesselInput } from '../../../../shared/schemas/cellar';
-import { cellarKeys } from './keys';
+import { call } from './api-client';
+import { vesselRoutes } from '../../shared/contract/cellar';
+import type { VesselInput } from '../../shared/schemas/cellar';
+import { cellarKeys } from './cellar-keys';
 
 export const vesselsQuery = () =>
   queryOptions({ queryKey: cellarKeys.vessels(), queryFn: () => call(vesselRoutes.list) });

@@ -1,7 +1,7 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { call } from '../../../lib/api-client';
-import type { EquipmentInput } from '../../../../shared/schemas/recipes';
-import { equipmentRoutes } from '../../../../shared/contract/recipes';
+import { call } from './api-client';
+import type { EquipmentInput } from '../../shared/schemas/recipes';
+import { equipmentRoutes } from '../../shared/contract/recipes';
 
 export const equipmentKeys = { all: ['equipment'] as const };
 

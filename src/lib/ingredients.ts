@@ -1,7 +1,7 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { call } from '../../../lib/api-client';
-import type { IngredientInput } from '../../../../shared/schemas/recipes';
-import { ingredientRoutes } from '../../../../shared/contract/recipes';
+import { call } from './api-client';
+import type { IngredientInput } from '../../shared/schemas/recipes';
+import { ingredientRoutes } from '../../shared/contract/recipes';
 
 export const ingredientKeys = { all: ['ingredients'] as const };
 

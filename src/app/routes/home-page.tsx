@@ -1,8 +1,8 @@
 import { lazy, Suspense } from 'react';
 import { Link } from 'react-router-dom';
-import { Card, Loading, PageHeader } from '../../../components/ui';
-import { useCurrentUser, usePermissions } from '../../../lib/current-user';
-import { BREWING_HOME, navFor } from '../../../app/navigation';
+import { Card, Loading, PageHeader } from '../../components/ui';
+import { useCurrentUser, usePermissions } from '../../lib/current-user';
+import { BREWING_HOME, navFor } from '../navigation';
 
 function greeting(hour: number): string {
   if (hour < 12) return 'Good morning';
@@ -12,7 +12,7 @@ function greeting(hour: number): string {
 
 // The taproom manager's home is the tap list, loaded in its own chunk.
 const TaproomHome = lazy(() =>
-  import('../../taproom/components/taproom-home').then((m) => ({ default: m.TaproomHome })),
+  import('../../features/taproom/components/taproom-home').then((m) => ({ default: m.TaproomHome })),
 );
 
 export function HomePage() {

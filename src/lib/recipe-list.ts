@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { call } from '../../../lib/api-client';
-import { recipeRoutes } from '../../../../shared/contract/recipes';
-import { recipeKeys } from './keys';
+import { call } from './api-client';
+import { recipeRoutes } from '../../shared/contract/recipes';
+import { recipeKeys } from './recipe-keys';
 
 export const recipeListQuery = () =>
   queryOptions({ queryKey: recipeKeys.list(), queryFn: () => call(recipeRoutes.list) });
