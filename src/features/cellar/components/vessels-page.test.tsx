@@ -13,7 +13,7 @@ const tank: VesselView = {
   status: 'needs_cleaning',
   currentBatchId: null,
 };
-vi.mock('../api/vessels', () => ({
+vi.mock('../../../lib/vessels', () => ({
   useVessels: () => ({ data: [tank], isPending: false, error: null }),
   useSaveVessel: () => ({}),
 }));
