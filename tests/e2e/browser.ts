@@ -1,6 +1,8 @@
 import { mkdtempSync, mkdirSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
+import { randomUUID } from 'node:crypto';
+import { expect } from 'vitest';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
 import { DEMO_PASSWORD } from '../../server/seed/demo';
 
@@ -43,4 +45,24 @@ export function screenshot(
   options: { fullPage: boolean } = { fullPage: true },
 ): Promise<Buffer> {
   return page.screenshot({ path: path.join(SCREENSHOT_DIR, name), ...options });
+}
+
+/** A signed write straight to the API from a signed-in page, with the headers the outbox sends. */
+export async function signedPost(
+  page: Page,
+  url: string,
+  data: unknown,
+  deviceId = 'e2e-office-desk',
+): Promise<{ id?: number; entryId?: number }> {
+  const res = await page.request.post(url, {
+    data,
+    headers: {
+      'x-kettlewright': '1',
+      'Idempotency-Key': randomUUID(),
+      'X-Captured-At': new Date().toISOString(),
+      'X-Device-Id': deviceId,
+    },
+  });
+  expect(res.status(), `${url}: ${await res.text()}`).toBeLessThan(300);
+  return (await res.json()) as { id?: number };
 }

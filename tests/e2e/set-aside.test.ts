@@ -1,29 +1,15 @@
 // Entries the server refuses for good leave the tablet's queue: two brew-day steps typed offline while the head
 // brewer signs the day off elsewhere are set aside with the reason, a later reading on another batch still goes,
 // one set-aside step is sent again as a note on the batch and the other is discarded after a confirmation.
-import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { BrowserContext, Page } from 'playwright-core';
-import { openBrowser, screenshot, signIn } from './browser';
+import { openBrowser, screenshot, signedPost, signIn } from './browser';
 import { DEMO_PASSWORD, DEMO_PEOPLE } from '../../server/seed/demo';
 
 const eventually = <T>(fn: () => T | Promise<T>) => expect.poll(fn, { timeout: 30_000 });
 const [maren, ilya] = DEMO_PEOPLE as [(typeof DEMO_PEOPLE)[0], (typeof DEMO_PEOPLE)[0]];
 
-/** A signed write straight to the API from a signed-in page, with the headers the outbox sends. */
-async function post(page: Page, url: string, data: unknown): Promise<{ id?: number; entryId?: number }> {
-  const res = await page.request.post(url, {
-    data,
-    headers: {
-      'x-kettlewright': '1',
-      'Idempotency-Key': randomUUID(),
-      'X-Captured-At': new Date().toISOString(),
-      'X-Device-Id': 'e2e-office-desk',
-    },
-  });
-  expect(res.status(), `${url}: ${await res.text()}`).toBe(201);
-  return (await res.json()) as { id?: number };
-}
+const post = (page: Page, url: string, data: unknown) => signedPost(page, url, data);
 
 async function logOf(page: Page, batchId: number) {
   return (await (await page.request.get(`/api/batches/${batchId}/log`)).json()) as {

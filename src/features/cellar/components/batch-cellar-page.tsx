@@ -12,6 +12,7 @@ import { ReadingForm } from './reading-form';
 import { ActionForm } from './action-form';
 import { CarbonationPanel } from './carbonation-panel';
 import { PackagingForm } from './packaging-form';
+import { PackagingSummary } from './packaging-summary';
 import { ProbeImport } from './probe-import';
 import { PlanForm } from './plan-form';
 import { PredictionNote } from './prediction-note';
@@ -185,7 +186,7 @@ export function BatchCellarPage() {
         {active ? (
           <PackagingForm batchId={batchId} packaging={data.packaging} unitSystem={system} />
         ) : (
-          <p className="text-ink-500">Packaged: {data.packaging.runs.length} runs.</p>
+          <PackagingSummary packaging={data.packaging} unitSystem={system} />
         )}
       </Section>
       <Section title="Cellar plan">

@@ -219,6 +219,8 @@ describe('a kept entry leaves its form empty', () => {
     type('Gravity (SG)', '1.014');
     submit('Log a reading');
     expect(await screen.findByText('Choose how it was measured')).toBeTruthy();
+    // The method buttons have no field of their own: the first takes focus, so a phone scrolls the message into view.
+    expect(document.activeElement).toBe(screen.getByRole('button', { name: /Hydrometer/ }));
     await settle();
     expect(delivered('readings')).toEqual([]);
 

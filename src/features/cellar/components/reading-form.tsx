@@ -1,5 +1,5 @@
-import { useState } from 'react';
-import { useForm, type Resolver } from 'react-hook-form';
+import { useRef, useState } from 'react';
+import { useForm, type FieldErrors, type Resolver } from 'react-hook-form';
 import { Button, SelectField, SuggestionChip, TextField, cx } from '../../../components/ui';
 import {
   READING_METHOD_LABELS,
@@ -86,8 +86,13 @@ export function ReadingForm({
       await log(values, label);
       setSaved(label);
       reset();
-    }),
+    }, focusMissingMethod),
   );
+  const methods = useRef<HTMLDivElement>(null);
+  /** A method left unchosen has no field to focus: bring its buttons and their message into view on a phone. */
+  function focusMissingMethod(invalid: FieldErrors<ReadingDraft>) {
+    if (invalid.method) methods.current?.querySelector('button')?.focus();
+  }
   const choose = (m: ReadingMethod) => {
     setValue('method', m, { shouldValidate: formState.isSubmitted });
     // A refractometer reads °Brix, the others SG: what was typed for the other kind of instrument is dropped.
@@ -102,7 +107,7 @@ export function ReadingForm({
     <form onSubmit={onSubmit} noValidate aria-label="Log a reading" className="space-y-4">
       <fieldset>
         <legend className="mb-1 text-sm font-semibold text-ink-700">Measured with</legend>
-        <div className="grid grid-cols-3 gap-2">
+        <div ref={methods} className="grid grid-cols-3 gap-2">
           {READING_METHODS.map((m) => (
             <button
               key={m}
