@@ -18,7 +18,7 @@ export const reportsRouter = defineRouter('/api/reports', reportRoutes, {
       res
         .type('text/csv; charset=utf-8')
         .attachment(`production-${query.month}.csv`)
-        .send(reports.productionCsv(report, { bbl: lToUsBbl, hl: lToHl }));
+        .send(reports.productionCsv(report, { bbl: lToUsBbl, hl: lToHl }, user.brewery.unitSystem));
     },
   },
   history: {

@@ -3,6 +3,7 @@
  * the batch moves to released. ABV comes from the measured OG (brew-day log) and FG (latest gravity reading in force).
  * When the beer runs out the head brewer takes it off tap: the release stays, with its sheet and numbers.
  */
+import type { UnitSystem } from '../../shared/quantities';
 import { Op, type Transaction } from 'sequelize';
 import { sequelize } from '../config/database';
 import { Attachment, Batch, GravityReading, IN_FORCE, PackagingRun, Release, User } from '../models';
@@ -53,10 +54,15 @@ export async function finalNumbers(batch: Batch, transaction?: Transaction): Pro
   };
 }
 
-const lineLabel = (line: PackageLine) => packageName(line.kind, line.kind === 'keg' ? line.size : line.sizeMl);
+const lineLabel = (system: UnitSystem, line: PackageLine) =>
+  packageName(system, line.kind, line.kind === 'keg' ? line.size : line.sizeMl);
 
-/** What the batch was packaged into, by size, summed over its packaging runs. */
-export async function packageSizes(breweryId: number, batchIds: number[]): Promise<Map<number, PackageSize[]>> {
+/** What the batch was packaged into, by size in the brewery's units, summed over its packaging runs. */
+export async function packageSizes(
+  brewery: { id: number; unitSystem: UnitSystem },
+  batchIds: number[],
+): Promise<Map<number, PackageSize[]>> {
+  const breweryId = brewery.id;
   const runs = batchIds.length
     ? await PackagingRun.findAll({
         where: { breweryId, batchId: { [Op.in]: batchIds } },
@@ -67,7 +73,7 @@ export async function packageSizes(breweryId: number, batchIds: number[]): Promi
   for (const run of runs) {
     const sizes = out.get(run.batchId)!;
     for (const line of run.lines) {
-      const label = lineLabel(line);
+      const label = lineLabel(brewery.unitSystem, line);
       const existing = sizes.find((s) => s.label === label);
       if (existing) existing.count += line.count;
       else sizes.push({ label, count: line.count });
@@ -122,7 +128,7 @@ export async function releaseDetail(actor: Express.User, batchId: number): Promi
     state: release?.state ?? null,
     sheet: release ? sheetOf(release) : null,
     numbers: release && wasReleased(release.state) ? frozenNumbers(release, batch) : await finalNumbers(batch),
-    packageSizes: (await packageSizes(actor.breweryId, [batch.id])).get(batch.id)!,
+    packageSizes: (await packageSizes(actor.brewery, [batch.id])).get(batch.id)!,
     releasedAt: release?.releasedAt?.toISOString() ?? null,
     releasedBy: nameOf(release?.releasedById),
     offTapAt: release?.offTapAt?.toISOString() ?? null,

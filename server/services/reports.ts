@@ -3,6 +3,7 @@
  * knockout volumes and OG from the brew-day log (after corrections), packaging runs, gravity readings.
  * Each report is one statement that reads indexes and a handful of rows, whatever the brewery's size.
  */
+import type { UnitSystem } from '../../shared/quantities';
 import { QueryTypes } from 'sequelize';
 import { fromZonedTime } from 'date-fns-tz';
 import { sequelize } from '../config/database';
@@ -283,6 +284,7 @@ export async function batchHistory(breweryId: number, recipeId: number, limit: n
 export function productionCsv(
   report: ProductionReport,
   convert: { bbl: (l: number) => number; hl: (l: number) => number },
+  system: UnitSystem,
 ): string {
   const cell = (v: string | number) => {
     const s = typeof v === 'number' ? String(Math.round(v * 100) / 100) : v;
@@ -313,7 +315,7 @@ export function productionCsv(
     ...report.packages.map((p) =>
       [
         cell(p.beerName),
-        cell(packageName(p.kind, p.size)),
+        cell(packageName(system, p.kind, p.size)),
         cell(p.count),
         cell(p.volumeL),
         cell(convert.bbl(p.volumeL)),

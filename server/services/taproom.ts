@@ -14,12 +14,13 @@ const SHOWN = { [Op.in]: ['coming_soon', 'on_tap'] };
 /** A briefing sheet still opens once the beer is off tap, as a record of what was poured. */
 const READABLE = { [Op.in]: ['coming_soon', 'on_tap', 'off_tap'] };
 
-async function toBeers(breweryId: number, releases: Release[]): Promise<TaproomBeer[]> {
+async function toBeers(brewery: Express.User['brewery'], releases: Release[]): Promise<TaproomBeer[]> {
+  const breweryId = brewery.id;
   const batchIds = releases.map((r) => r.batchId);
   const [batches, summaries, sizes] = await Promise.all([
     Batch.findAll({ where: { breweryId, id: { [Op.in]: batchIds } }, attributes: ['id', 'number', 'plan'] }),
     tastingSummaries(breweryId, batchIds),
-    packageSizes(breweryId, batchIds),
+    packageSizes(brewery, batchIds),
   ]);
   const byId = new Map(batches.map((b) => [b.id, b]));
   return releases.map((r) => {
@@ -86,7 +87,7 @@ export async function listBeers(
       ['id', 'DESC'],
     ],
   });
-  const beers = await toBeers(actor.breweryId, matching);
+  const beers = await toBeers(actor.brewery, matching);
   return {
     beers: query.strength ? beers.filter((b) => strengthOf(b.abvPct) === query.strength) : beers,
     styles: shownStyles.map((r) => r.style).sort((a, b) => a.localeCompare(b)),
@@ -97,5 +98,5 @@ export async function listBeers(
 export async function beer(actor: Express.User, releaseId: number): Promise<TaproomBeer> {
   const release = await Release.findOne({ where: { id: releaseId, breweryId: actor.breweryId, state: READABLE } });
   if (!release) throw notFound('This beer');
-  return (await toBeers(actor.breweryId, [release]))[0]!;
+  return (await toBeers(actor.brewery, [release]))[0]!;
 }

@@ -3,7 +3,7 @@
  * entry's stored SI data into what a brewer reads. Every screen that lists entries uses it.
  */
 import { QUANTITIES, showQuantity, showVolume, type UnitSystem } from '../quantities';
-import { KEG_SIZE_LABELS, CELLAR_ACTION_LABELS, READING_METHOD_LABELS } from '../schemas/cellar';
+import { packageName, CELLAR_ACTION_LABELS, READING_METHOD_LABELS } from '../schemas/cellar';
 import type { CellarAction, ReadingMethod } from '../schemas/cellar';
 import { lineVolumeL, type PackageLine } from '../brewing/packaging';
 
@@ -49,9 +49,7 @@ export function measurementWords(
 
 /** A package as a brewer names it in the brewery's units: "½ bbl keg", "16 fl oz can". */
 export function packageWords(system: UnitSystem, line: PackageLine): string {
-  if (line.kind === 'keg') return `${KEG_SIZE_LABELS[line.size]} keg`;
-  const unit = showQuantity('smallVolume', system, line.sizeMl).replace(/\.0 /, ' ');
-  return `${unit} ${line.kind}`;
+  return packageName(system, line.kind, line.kind === 'keg' ? line.size : line.sizeMl);
 }
 
 function actionWords(d: Record<string, unknown>, ctx: WordingContext): EntryWords {

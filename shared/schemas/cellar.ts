@@ -3,6 +3,7 @@ import { KEG_SIZE_IDS, type PackagingSource } from '../brewing/packaging';
 import { CARBONATION_TEMP_C } from '../brewing/carbonation';
 import { timeZone } from './auth';
 import { quantityField, quantityQueryField } from '../quantities/field';
+import { displayUnit, type UnitSystem } from '../quantities';
 
 /**
  * The cellar: vessels, gravity readings, logged cellar actions, packaging, the cellar plan and
@@ -218,10 +219,25 @@ export const KEG_SIZE_LABELS: Record<(typeof KEG_SIZE_IDS)[number], string> = {
   keg_50l: '50 L',
 };
 
-/** What a person calls a package: "½ bbl keg", "473 mL can". `size` is a keg size id or a container size in mL. */
-export function packageName(kind: (typeof PACKAGE_KINDS)[number], size: string | number): string {
+/** The keg sizes each brewery is offered: barrel fractions in a US brewery; those and litre kegs in a metric one. */
+export const KEG_SIZES_OFFERED: Record<UnitSystem, readonly (typeof KEG_SIZE_IDS)[number][]> = {
+  us: ['half_bbl', 'quarter_bbl', 'sixth_bbl'],
+  metric: KEG_SIZE_IDS,
+};
+
+/** A container size in the brewery's units, without a trailing ".0": "16 fl oz", "12.7 fl oz", "473 mL". */
+export function containerSize(system: UnitSystem, sizeMl: number): string {
+  const unit = displayUnit('smallVolume', system);
+  return `${Number(unit.fromSi(sizeMl).toFixed(unit.decimals))} ${unit.unit}`;
+}
+
+/**
+ * What a person calls a package in the brewery's units: "½ bbl keg", "16 fl oz can" (US), "473 mL can" (metric).
+ * `size` is a keg size id or a container size in mL.
+ */
+export function packageName(system: UnitSystem, kind: (typeof PACKAGE_KINDS)[number], size: string | number): string {
   if (kind === 'keg') return `${KEG_SIZE_LABELS[size as (typeof KEG_SIZE_IDS)[number]] ?? size} keg`;
-  return `${size} mL ${kind}`;
+  return `${containerSize(system, Number(size))} ${kind}`;
 }
 
 const count = z

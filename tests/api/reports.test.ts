@@ -149,7 +149,7 @@ describe('monthly production', () => {
     expect(Number(total[2])).toBe(Math.round(lToUsBbl(113) * 100) / 100);
     expect(Number(total[3])).toBe(Math.round(lToHl(113) * 100) / 100);
     // Packages by the names a person uses, not their stored ids.
-    expect(text).toContain('"Report Amber","473 mL can",24,');
+    expect(text).toContain('"Report Amber","16 fl oz can",24,');
     expect(text).toContain('"Report Amber","20 L keg",1,20,');
   });
 

@@ -66,7 +66,7 @@ describe('releasing a batch', () => {
     expect(res.body.numbers.abvPct).not.toBeCloseTo(res.body.numbers.plannedAbvPct, 2);
     expect(res.body.packageSizes).toEqual([
       { label: '⅙ bbl keg', count: 2 },
-      { label: '473 mL can', count: 12 },
+      { label: '16 fl oz can', count: 12 },
     ]);
   });
 
@@ -145,7 +145,7 @@ describe("the taproom manager's home", () => {
       allergens: ['gluten'],
       packageSizes: [
         { label: '⅙ bbl keg', count: 2 },
-        { label: '473 mL can', count: 12 },
+        { label: '16 fl oz can', count: 12 },
       ],
       photo: { id: photoId },
     });

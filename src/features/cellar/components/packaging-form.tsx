@@ -2,9 +2,10 @@ import { useState, type ChangeEvent } from 'react';
 import { useFieldArray, useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Button, SelectField, TextField } from '../../../components/ui';
-import { KEG_SIZE_IDS } from '../../../../shared/brewing';
 import {
+  containerSize,
   KEG_SIZE_LABELS,
+  KEG_SIZES_OFFERED,
   packageName,
   packagingEntrySchema,
   type BatchCellarView,
@@ -49,7 +50,7 @@ export function PackagingForm({
   const { once, busy } = useSubmitOnce();
   const onSubmit = once(
     handleSubmit(async (values) => {
-      const label = `Packaging · ${values.lines.map((l) => `${l.count} × ${packageName(l.kind, l.kind === 'keg' ? l.size : l.sizeMl)}`).join(', ')}`;
+      const label = `Packaging · ${values.lines.map((l) => `${l.count} × ${packageName(unitSystem, l.kind, l.kind === 'keg' ? l.size : l.sizeMl)}`).join(', ')}`;
       await log(values, label);
       setSaved(label);
       reset();
@@ -84,7 +85,7 @@ export function PackagingForm({
             </SelectField>
             {kinds[i]?.kind === 'keg' ? (
               <SelectField label="Size" {...register(`lines.${i}.size` as const)}>
-                {KEG_SIZE_IDS.map((s) => (
+                {KEG_SIZES_OFFERED[unitSystem].map((s) => (
                   <option key={s} value={s}>
                     {KEG_SIZE_LABELS[s]}
                   </option>
@@ -94,7 +95,7 @@ export function PackagingForm({
               <SelectField label="Size" {...register(`lines.${i}.sizeMl` as const, { valueAsNumber: true })}>
                 {CONTAINER_SIZES_ML.map((ml) => (
                   <option key={ml} value={ml}>
-                    {ml} mL
+                    {containerSize(unitSystem, ml)}
                   </option>
                 ))}
               </SelectField>

@@ -142,7 +142,7 @@ export function ProductionPage() {
                 {report.data.packages.map((p) => (
                   <tr key={`${p.beerName}-${p.kind}-${p.size}`}>
                     <Td>{p.beerName}</Td>
-                    <Td>{packageName(p.kind, p.size)}</Td>
+                    <Td>{packageName(me.brewery.unitSystem, p.kind, p.size)}</Td>
                     <Td className="text-right">{p.count}</Td>
                     <Td className="text-right">{figure(unit, p.volumeL)}</Td>
                   </tr>
