@@ -4,6 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { BrowserContext, Page } from 'playwright-core';
 import { openBrowser, screenshot, signedPost, signIn } from './browser';
 import { DEMO_PEOPLE } from '../../server/seed/demo';
+import { fToC, KPA_PER_PSI, L_PER_US_BBL } from '../../shared/quantities';
 
 const post = (page: Page, url: string, data: unknown): Promise<unknown> =>
   signedPost(page, url, data, 'e2e-cellar-tablet');
@@ -28,10 +29,9 @@ describe('the batch record as a US brewery reads it (Chromium, 1024×768)', () =
       post(page, '/api/vessels', {
         name,
         type: kind,
-        capacity: 40,
-        capacityUnit: 'bbl',
-        ratedPressure: 15,
-        pressureUnit: 'psi',
+        // The API takes SI: 40 bbl and 15 psi (1 bbl = 31 US gal, 27 CFR 25.11; 1 psi = 6.894 757 kPa, NIST SP 811).
+        capacityL: 40 * L_PER_US_BBL,
+        ratedPressureKpa: 15 * KPA_PER_PSI,
       }) as Promise<Vessel>;
     const fermenter = await tank('fermenter', `FV-R${stamp}`);
     const bright = await tank('bright_tank', `BT-R${stamp}`);
@@ -45,26 +45,22 @@ describe('the batch record as a US brewery reads it (Chromium, 1024×768)', () =
     await post(page, `${cellar}/readings`, {
       kind: 'reading',
       method: 'hydrometer',
-      gravity: 1.016,
-      gravityUnit: 'sg',
-      tempUnit: 'f',
+      sg: 1.016,
     });
-    await post(page, `${cellar}/actions`, { kind: 'action', action: 'd_rest', temp: 72, tempUnit: 'f' });
-    await post(page, `${cellar}/actions`, { kind: 'action', action: 'cold_crash', temp: 33, tempUnit: 'f' });
+    await post(page, `${cellar}/actions`, { kind: 'action', action: 'd_rest', tempC: fToC(72) });
+    await post(page, `${cellar}/actions`, { kind: 'action', action: 'cold_crash', tempC: fToC(33) });
     await post(page, `${cellar}/actions`, { kind: 'action', action: 'fining', detail: 'Gelatin 3 oz' });
     await post(page, `${cellar}/actions`, {
       kind: 'action',
       action: 'transfer',
-      volume: 7,
-      volumeUnit: 'bbl',
+      volumeL: 7 * L_PER_US_BBL,
       toVesselId: bright.id,
     });
     await post(page, `${cellar}/actions`, {
       kind: 'action',
       action: 'carbonation',
       co2Volumes: 2.5,
-      temp: 34,
-      tempUnit: 'f',
+      tempC: fToC(34),
     });
     await post(page, `${cellar}/packaging`, {
       kind: 'packaging',

@@ -200,6 +200,7 @@ describe('cellar readings on the tablet (Chromium, 1024×768)', () => {
     const name = `BT-${Date.now() % 100000}`;
     await dialog.getByLabel('Name').fill(name);
     await dialog.getByLabel('Type').selectOption('bright_tank');
+    await dialog.getByLabel('Unit').selectOption('bbl');
     await dialog.getByLabel('Capacity').fill('7');
     await dialog.getByLabel('Rated working pressure (gauge)').fill('30');
     await screenshot(page, 'cellar-vessel-form-1024.png', { fullPage: false });
