@@ -8,9 +8,8 @@ import type { Transaction } from 'sequelize';
 import { Batch, BatchLogEntry, PackagingRun } from '../models';
 import { wrongStage } from '../errors';
 import { BATCH_STATUS_LABELS, type BatchStatus } from '../../shared/schemas/batches';
-import { appendLogEntry, type LogActor } from './batch-log';
+import { appendLogEntry, batchActualsOf, type LogActor } from './batch-log';
 import { changeBatchStatus, findBatch, releaseVessel } from './batches';
-import { batchActuals } from '../../shared/batches/brew-day';
 import {
   lineVolumeL,
   packagingLoss,
@@ -29,21 +28,7 @@ const PACKAGING_DONE = ['packaged', 'released', 'dumped'];
 
 /** Litres into the fermenter at knockout: measured on the brew day, else planned. */
 async function knockoutLitres(batch: Batch, transaction?: Transaction): Promise<number> {
-  const entries = await BatchLogEntry.findAll({
-    where: { batchId: batch.id },
-    attributes: ['id', 'kind', 'stepKey', 'data', 'correctsEntryId'],
-    transaction,
-  });
-  const actuals = batchActuals(
-    batch.plan,
-    entries.map((e) => ({
-      id: Number(e.id),
-      kind: e.kind,
-      stepKey: e.stepKey,
-      data: e.data,
-      correctsEntryId: e.correctsEntryId === null ? null : Number(e.correctsEntryId),
-    })),
-  );
+  const actuals = await batchActualsOf(batch, transaction);
   return actuals.knockoutVolumeL.actual ?? actuals.knockoutVolumeL.planned;
 }
 

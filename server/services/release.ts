@@ -9,8 +9,7 @@ import { sequelize } from '../config/database';
 import { Attachment, Batch, GravityReading, IN_FORCE, PackagingRun, Release, User } from '../models';
 import { conflict, unprocessable } from '../errors';
 import { changeBatchStatus, findBatch } from './batches';
-import { logEntries } from './batch-log';
-import { batchActuals } from '../../shared/batches/brew-day';
+import { batchActualsOf } from './batch-log';
 import { abv, ABV_METHOD_SHOWN, type PackageLine } from '../../shared/brewing';
 import { packageName } from '../../shared/schemas/cellar';
 import {
@@ -29,8 +28,8 @@ const GRAVITY_MATCH = 0.0005;
 
 /** Measured OG and FG and what follows from them; IBU and SRM from the batch's frozen plan. */
 export async function finalNumbers(batch: Batch, transaction?: Transaction): Promise<FinalNumbers> {
-  const [{ entries }, lastReading] = await Promise.all([
-    logEntries(batch.id, transaction),
+  const [actuals, lastReading] = await Promise.all([
+    batchActualsOf(batch, transaction),
     GravityReading.findOne({
       where: { batchId: batch.id, [Op.and]: [IN_FORCE] },
       order: [
@@ -40,7 +39,7 @@ export async function finalNumbers(batch: Batch, transaction?: Transaction): Pro
       transaction,
     }),
   ]);
-  const og = batchActuals(batch.plan, entries).og.actual;
+  const og = actuals.og.actual;
   const fg = lastReading?.sg ?? null;
   const computed = batch.plan.computed;
   return {

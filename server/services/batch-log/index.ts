@@ -4,5 +4,5 @@
  */
 export { appendLogEntries, appendLogEntry, brewDaySigned, writeMetaFromHeaders, type LogActor } from './append';
 export { canonicalJson, entryContent, entryHash, GENESIS_HASH, sha256, verifyChain } from './chain';
-export { batchLogJson, logEntries, toLogEntry } from './presentation';
+export { batchActualsOf, batchLogJson, logEntries, toLogEntry } from './presentation';
 export { refuseEntryChange } from './corrections';

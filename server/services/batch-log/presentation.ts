@@ -2,7 +2,8 @@
 import { QueryTypes, Transaction } from 'sequelize';
 import { LRUCache } from 'lru-cache';
 import { sequelize } from '../../config/database';
-import { BatchLogEntry } from '../../models';
+import { BatchLogEntry, type Batch } from '../../models';
+import { batchActuals } from '../../../shared/batches/brew-day';
 import { notFound } from '../../errors';
 import { LOG_HEAD_JOIN } from './chain';
 import type { LogEntry } from '../../../shared/schemas/batch-log';
@@ -72,6 +73,15 @@ export async function logEntries(
 ): Promise<{ rows: BatchLogEntry[]; entries: LogEntry[] }> {
   const rows = await BatchLogEntry.findAll({ where: { batchId }, order: [['sequence', 'ASC']], transaction });
   return { rows, entries: toLogEntries(rows) };
+}
+
+/** Planned against actual for a batch, read from its whole log with corrections applied (shared/batches/brew-day). */
+export async function batchActualsOf(
+  batch: Batch,
+  transaction?: Transaction,
+): Promise<ReturnType<typeof batchActuals>> {
+  const { entries } = await logEntries(batch.id, transaction);
+  return batchActuals(batch.plan, entries);
 }
 
 /**

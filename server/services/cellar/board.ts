@@ -1,32 +1,19 @@
 /** What the cellar screens show: one batch's cellar page and the vessel board. */
 import { Op, Transaction } from 'sequelize';
 import { Batch, BatchLogEntry, GravityReading, IN_FORCE, Vessel } from '../../models';
+import { batchActualsOf } from '../batch-log';
 import { findBatch } from '../batches';
 import { batchReadings } from '../readings';
 import { packagingSummary } from '../packaging';
 import { toVesselView, vesselOf } from './vessels';
 import { cellarPlanFor, cellarPlansFor } from './plans';
 import { toActionView } from './actions';
-import { batchActuals } from '../../../shared/batches/brew-day';
 import { dRestTriggerSg, predictFermentation, readingOverdue } from '../../../shared/brewing';
 import type { BatchCellarView, BoardVessel, CellarPlanView } from '../../../shared/schemas/cellar';
 
 /** Measured OG (knockout) when logged, else the plan's. */
 async function originalGravity(batch: Batch, transaction?: Transaction): Promise<{ sg: number; measured: boolean }> {
-  const entries = await BatchLogEntry.findAll({
-    where: { batchId: batch.id, kind: { [Op.in]: ['step', 'measurement', 'correction'] } },
-    transaction,
-  });
-  const actual = batchActuals(
-    batch.plan,
-    entries.map((e) => ({
-      id: Number(e.id),
-      kind: e.kind,
-      stepKey: e.stepKey,
-      data: e.data,
-      correctsEntryId: e.correctsEntryId === null ? null : Number(e.correctsEntryId),
-    })),
-  );
+  const actual = await batchActualsOf(batch, transaction);
   return actual.og.actual !== null
     ? { sg: actual.og.actual, measured: true }
     : { sg: batch.plannedOg, measured: false };
