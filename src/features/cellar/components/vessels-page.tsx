@@ -39,7 +39,7 @@ function VesselForm({ vessel, onDone }: { vessel?: VesselView; onDone: () => voi
   const [capacityUnit, setCapacityUnit] = useState(
     () => volumeUnits[vessel && vessel.capacityL >= 200 ? 1 : 0] ?? volumeUnits[0],
   );
-  const { control, register, handleSubmit, setError, formState } = useForm<VesselInput>({
+  const { control, register, handleSubmit, setError, formState, getValues, setValue } = useForm<VesselInput>({
     resolver: quantityResolver(vesselInputSchema, system),
     defaultValues: {
       name: vessel?.name ?? '',
@@ -79,7 +79,13 @@ function VesselForm({ vessel, onDone }: { vessel?: VesselView; onDone: () => voi
         <SelectField
           label="Unit"
           value={capacityUnit.unit}
-          onChange={(event) => setCapacityUnit(unitBySymbol('volume', system, event.target.value))}
+          onChange={(event) => {
+            // The number typed stays as typed and now means the chosen unit: "7" then "bbl" is 7 bbl, not 0.2 bbl.
+            const next = unitBySymbol('volume', system, event.target.value);
+            const litres = getValues('capacityL');
+            if (Number.isFinite(litres)) setValue('capacityL', next.toSi(capacityUnit.fromSi(litres)));
+            setCapacityUnit(next);
+          }}
         >
           {volumeUnits.map((u) => (
             <option key={u.unit} value={u.unit}>
